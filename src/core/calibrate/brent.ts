@@ -1,0 +1,79 @@
+/**
+ * Brent's method for a root of f in [a, b] where f(a) and f(b) differ in sign
+ * (Brent 1973, Algorithms for Minimization without Derivatives, ch. 4; the
+ * same steps as zeroin). Inverse quadratic interpolation or secant steps,
+ * falling back to bisection, so it never leaves the bracket and converges
+ * at least as fast as bisection.
+ */
+export interface RootOptions {
+  /** Absolute tolerance on x. */
+  readonly xTol: number;
+  readonly maxIterations?: number;
+}
+
+export function brentRoot(
+  f: (x: number) => number,
+  a: number,
+  b: number,
+  fa: number,
+  fb: number,
+  options: RootOptions,
+): number {
+  const maxIterations = options.maxIterations ?? 200;
+  if (fa === 0) return a;
+  if (fb === 0) return b;
+  let c = a;
+  let fc = fa;
+  let d = b - a;
+  let e = d;
+  for (let iter = 0; iter < maxIterations; iter++) {
+    if ((fb > 0 && fc > 0) || (fb < 0 && fc < 0)) {
+      c = a;
+      fc = fa;
+      d = b - a;
+      e = d;
+    }
+    if (Math.abs(fc) < Math.abs(fb)) {
+      a = b;
+      b = c;
+      c = a;
+      fa = fb;
+      fb = fc;
+      fc = fa;
+    }
+    const tol = 2 * Number.EPSILON * Math.abs(b) + 0.5 * options.xTol;
+    const m = 0.5 * (c - b);
+    if (Math.abs(m) <= tol || fb === 0) return b;
+    if (Math.abs(e) >= tol && Math.abs(fa) > Math.abs(fb)) {
+      let p: number;
+      let q: number;
+      const s = fb / fa;
+      if (a === c) {
+        p = 2 * m * s;
+        q = 1 - s;
+      } else {
+        const qa = fa / fc;
+        const r = fb / fc;
+        p = s * (2 * m * qa * (qa - r) - (b - a) * (r - 1));
+        q = (qa - 1) * (r - 1) * (s - 1);
+      }
+      if (p > 0) q = -q;
+      else p = -p;
+      if (2 * p < Math.min(3 * m * q - Math.abs(tol * q), Math.abs(e * q))) {
+        e = d;
+        d = p / q;
+      } else {
+        d = m;
+        e = m;
+      }
+    } else {
+      d = m;
+      e = m;
+    }
+    a = b;
+    fa = fb;
+    b += Math.abs(d) > tol ? d : m > 0 ? tol : -tol;
+    fb = f(b);
+  }
+  return b;
+}

@@ -1,0 +1,119 @@
+import { isInputError } from '../errors';
+import { computeLossesUnchecked } from '../loss/compute';
+import { describeRange, methodSpec, numericParam, validateMethod } from '../loss/methods';
+import type { LossMethod, NumericParam } from '../loss/types';
+import { totalDepthMm, validateStorm, type Storm } from '../storm';
+import { EXACT_CALIBRATORS } from './exact';
+import { solveMonotone } from './monotone';
+
+export type CalibrationFailure =
+  | 'invalid-input'
+  | 'unknown-parameter'
+  | 'invalid-target'
+  | 'negative-target'
+  | 'exceeds-rainfall'
+  | 'bound-reached';
+
+export type CalibrationResult =
+  | {
+      readonly ok: true;
+      /** The fitted parameter value. */
+      readonly value: number;
+      /** The method with the fitted value set. */
+      readonly method: LossMethod;
+      /** The excess the fitted method gives, mm (equals the target to solver tolerance). */
+      readonly excessMm: number;
+    }
+  | {
+      readonly ok: false;
+      readonly reason: CalibrationFailure;
+      /** One plain sentence for the user. */
+      readonly message: string;
+      /** For 'bound-reached': which end of the parameter range comes closest… */
+      readonly bound?: 'min' | 'max';
+      /** …its value… */
+      readonly boundValue?: number;
+      /** …and the excess it gives, mm. */
+      readonly boundExcessMm?: number;
+    };
+
+const fmt = (x: number): string => (Number.isInteger(x) ? String(x) : x.toPrecision(4).replace(/\.?0+$/, ''));
+const unitText = (param: NumericParam): string => (param.unit === '-' ? '' : ` ${param.unit}`);
+
+/**
+ * Finds the value of one parameter of a loss method (the others held fixed)
+ * that makes the storm's total rainfall excess equal `targetExcessMm`.
+ * φ-index and runoff coefficient are solved exactly; every other parameter by
+ * Brent's method inside its physical bounds, to 1e-9 relative. Never throws:
+ * bad input comes back as `ok: false` with a message.
+ */
+export function calibrate(
+  storm: Storm,
+  method: LossMethod,
+  parameter: string,
+  targetExcessMm: number,
+): CalibrationResult {
+  try {
+    validateStorm(storm);
+    validateMethod(method);
+  } catch (error) {
+    if (isInputError(error)) return { ok: false, reason: 'invalid-input', message: error.message };
+    throw error;
+  }
+  const spec = methodSpec(method.kind);
+  const param = numericParam(method.kind, parameter);
+  if (!param) {
+    const known = spec.params.map((p) => p.key).join(', ');
+    return {
+      ok: false,
+      reason: 'unknown-parameter',
+      message: `${spec.label} has no parameter "${parameter}" to fit; it has ${known}.`,
+    };
+  }
+  if (typeof targetExcessMm !== 'number' || !Number.isFinite(targetExcessMm)) {
+    return { ok: false, reason: 'invalid-target', message: 'The observed runoff must be a finite number of millimetres.' };
+  }
+  if (targetExcessMm < 0) {
+    return { ok: false, reason: 'negative-target', message: 'The observed runoff cannot be negative.' };
+  }
+  const rainMm = totalDepthMm(storm);
+  // Allow for rounding when the target was itself summed from the bars.
+  const slack = 1e-12 * Math.max(rainMm, 1);
+  if (targetExcessMm > rainMm + slack) {
+    return {
+      ok: false,
+      reason: 'exceeds-rainfall',
+      message: `The observed runoff (${fmt(targetExcessMm)} mm) is more than the storm's rainfall (${fmt(rainMm)} mm); no loss can produce it.`,
+    };
+  }
+  const target = Math.min(targetExcessMm, rainMm);
+  const withValue = (value: number): LossMethod => ({ ...method, [param.key]: value }) as LossMethod;
+  const excessWith = (value: number): number => computeLossesUnchecked(storm, withValue(value)).totalExcessMm;
+
+  const exact = EXACT_CALIBRATORS[`${method.kind}.${param.key}`];
+  if (exact) {
+    const value = exact(storm, method, target, rainMm);
+    const fitted = withValue(value);
+    return { ok: true, value, method: fitted, excessMm: computeLossesUnchecked(storm, fitted).totalExcessMm };
+  }
+
+  const lo = param.minExclusive ? param.min + Math.max(Math.abs(param.min) * 1e-9, 1e-9) : param.min;
+  let hi = Number.isFinite(param.max) ? param.max : (param.searchMax?.(storm, method as never) ?? lo + 1);
+  if (!(hi > lo)) hi = lo;
+  const solved = solveMonotone(excessWith, lo, hi, target);
+  if (!solved.ok) {
+    const bound = solved.side === 'min' ? 'lowest' : 'highest';
+    return {
+      ok: false,
+      reason: 'bound-reached',
+      bound: solved.side,
+      boundValue: solved.x,
+      boundExcessMm: solved.g,
+      message:
+        `No ${param.label.toLowerCase()} ${describeRange(param)}${unitText(param)} gives ${fmt(target)} mm of runoff: ` +
+        `the ${bound} value (${fmt(solved.x)}${unitText(param)}) gives ${fmt(solved.g)} mm.`,
+    };
+  }
+  const fitted = withValue(solved.x);
+  return { ok: true, value: solved.x, method: fitted, excessMm: computeLossesUnchecked(storm, fitted).totalExcessMm };
+}

@@ -1,0 +1,39 @@
+import type { ComputeFn, MethodSpec } from './types';
+import { peakRate } from './search-bounds';
+
+/**
+ * Constant loss rate (φ-index): each bar loses φ·Δt or its whole depth,
+ * whichever is less. Chow, Maidment & Mays (1988) Applied Hydrology, §5.2.
+ */
+export const computeConstant: ComputeFn<'constant'> = (durationsH, depthsMm, method, lossOut, excessOut) => {
+  const phi = method.rateMmH;
+  const n = depthsMm.length;
+  for (let k = 0; k < n; k++) {
+    const p = depthsMm[k] as number;
+    let loss = phi * (durationsH[k] as number);
+    if (loss > p) loss = p;
+    lossOut[k] = loss;
+    excessOut[k] = p - loss;
+  }
+};
+
+export const constantSpec: MethodSpec<'constant'> = {
+  kind: 'constant',
+  label: 'Constant loss rate (φ-index)',
+  summary: 'Every bar loses rain at one constant rate; rain above the rate becomes excess.',
+  source: 'Chow, Maidment & Mays (1988) Applied Hydrology, section 5.2 (φ-index).',
+  params: [
+    {
+      key: 'rateMmH',
+      label: 'Loss rate φ',
+      unit: 'mm/h',
+      min: 0,
+      max: Infinity,
+      step: 0.1,
+      searchMax: peakRate,
+      help: 'Constant loss rate; bars with a lower intensity lose all their rain.',
+    },
+  ],
+  defaults: { kind: 'constant', rateMmH: 5 },
+  compute: computeConstant,
+};

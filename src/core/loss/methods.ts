@@ -1,0 +1,76 @@
+import { InputError } from '../errors';
+import { constantSpec } from './constant';
+import { initialContinuingSpec } from './initial-continuing';
+import { proportionalSpec } from './proportional';
+import type { LossKind, LossMethod, MethodOf, MethodSpec, NumericParam } from './types';
+
+/**
+ * The one table of loss methods. The UI builds its method picker and
+ * parameter fields from it; calibration reads bounds from it. Adding a method
+ * touches this table and nothing else outside its own file.
+ */
+export const METHODS: { readonly [K in LossKind]: MethodSpec<K> } = {
+  constant: constantSpec,
+  'initial-continuing': initialContinuingSpec,
+  proportional: proportionalSpec,
+};
+
+/** Method kinds in the order a picker shows them. */
+export const METHOD_KINDS = Object.keys(METHODS) as LossKind[];
+
+export function isLossKind(kind: unknown): kind is LossKind {
+  return typeof kind === 'string' && Object.prototype.hasOwnProperty.call(METHODS, kind);
+}
+
+export function methodSpec<K extends LossKind>(kind: K): MethodSpec<K> {
+  const spec = METHODS[kind] as MethodSpec<K> | undefined;
+  if (!spec) throw new InputError('kind', `Unknown loss method "${String(kind)}".`);
+  return spec;
+}
+
+/** The numeric parameter `key` of a method kind, or undefined. */
+export function numericParam<K extends LossKind>(kind: K, key: string): NumericParam<K> | undefined {
+  return methodSpec(kind).params.find((p) => p.key === key);
+}
+
+/** Default parameters for a method kind (a fresh object). */
+export function defaultMethod<K extends LossKind>(kind: K): MethodOf<K> {
+  return { ...methodSpec(kind).defaults };
+}
+
+/** Describes the allowed range of a parameter in words, e.g. "between 0 and 1". */
+export function describeRange(param: NumericParam): string {
+  const low = param.minExclusive ? `greater than ${param.min}` : `at least ${param.min}`;
+  if (param.max === Infinity) return low;
+  return param.minExclusive ? `greater than ${param.min} and at most ${param.max}` : `between ${param.min} and ${param.max}`;
+}
+
+/**
+ * Throws an InputError naming the field when a parameter is missing, not a
+ * finite number, or outside its physical range.
+ */
+export function validateMethod(method: LossMethod): void {
+  if (!method || typeof method !== 'object') throw new InputError('method', 'No loss method was given.');
+  if (!isLossKind(method.kind)) throw new InputError('kind', `Unknown loss method "${String(method.kind)}".`);
+  const spec = methodSpec(method.kind) as MethodSpec;
+  const values = method as unknown as Record<string, unknown>;
+  for (const param of spec.params) {
+    const v = values[param.key];
+    const unit = param.unit === '-' ? '' : ` ${param.unit}`;
+    if (typeof v !== 'number' || !Number.isFinite(v)) {
+      throw new InputError(param.key, `${param.label} must be a finite number${unit ? ` in${unit}` : ''} (got ${String(v)}).`);
+    }
+    const tooLow = param.minExclusive ? v <= param.min : v < param.min;
+    if (tooLow || v > param.max) {
+      throw new InputError(param.key, `${param.label} must be ${describeRange(param)}${unit} (got ${v}).`);
+    }
+  }
+  for (const choice of spec.choices ?? []) {
+    const v = values[choice.key];
+    if (!choice.choices.some((c) => c.value === v)) {
+      const allowed = choice.choices.map((c) => JSON.stringify(c.value)).join(' or ');
+      throw new InputError(choice.key, `${choice.label} must be ${allowed} (got ${JSON.stringify(v)}).`);
+    }
+  }
+  spec.validateExtra?.(method as never);
+}

@@ -1,0 +1,96 @@
+import type { Storm } from '../storm';
+
+/** Constant loss rate, the φ-index: L_k = min(P_k, φ·Δt_k). */
+export interface ConstantLoss { readonly kind: 'constant'; readonly rateMmH: number }
+/** Initial loss (mm) satisfied first, then a continuing rate (mm/h). */
+export interface InitialContinuingLoss {
+  readonly kind: 'initial-continuing';
+  readonly initialMm: number;
+  readonly rateMmH: number;
+}
+/** Proportional loss: excess is a fixed fraction (runoff coefficient) of rain. */
+export interface ProportionalLoss { readonly kind: 'proportional'; readonly coefficient: number }
+
+/**
+ * Every loss method the core knows, as a discriminated union on `kind`.
+ * Adding a method: add its interface here, a file under `loss/`, and one
+ * entry in `loss/methods.ts`.
+ */
+export type LossMethod = ConstantLoss | InitialContinuingLoss | ProportionalLoss;
+export type LossKind = LossMethod['kind'];
+export type MethodOf<K extends LossKind> = Extract<LossMethod, { kind: K }>;
+
+/** Per-bar and total results of applying a loss method to a storm. */
+export interface LossResult {
+  /** Loss of each bar, mm. */
+  readonly lossMm: Float64Array;
+  /** Rainfall excess of each bar, mm. */
+  readonly excessMm: Float64Array;
+  readonly rainMm: number;
+  readonly totalLossMm: number;
+  readonly totalExcessMm: number;
+  /** Excess / rain (0 for a dry storm). */
+  readonly runoffFraction: number;
+  /** Highest bar excess intensity, mm/h. */
+  readonly peakExcessMmH: number;
+}
+
+/** A numeric parameter of a method, with its unit and physical bounds. */
+export interface NumericParam<K extends LossKind = LossKind> {
+  readonly key: Exclude<keyof MethodOf<K>, 'kind'> & string;
+  readonly label: string;
+  /** Internal (SI) unit, for display and conversion at the edges. */
+  readonly unit: ParamUnit;
+  readonly min: number;
+  readonly max: number;
+  /** True when `min` itself is not allowed (e.g. k > 0). */
+  readonly minExclusive?: boolean;
+  readonly step: number;
+  /**
+   * Finite upper end of the search interval for calibration when `max` is
+   * unbounded (e.g. the peak intensity for a rate: no excess above it).
+   */
+  readonly searchMax?: (storm: Storm, method: MethodOf<K>) => number;
+  readonly help: string;
+}
+
+/** A non-numeric setting of a method (a switch or a choice). */
+export interface ChoiceParam<K extends LossKind = LossKind> {
+  readonly key: Exclude<keyof MethodOf<K>, 'kind'> & string;
+  readonly label: string;
+  readonly choices: readonly { readonly value: boolean | number | string; readonly label: string }[];
+  readonly help: string;
+}
+
+/**
+ * Units of method parameters. 'mm/h' rates, 'mm' depths, '1/h' decay constants,
+ * '-' dimensionless ratios and indices.
+ */
+export type ParamUnit = 'mm/h' | 'mm' | '1/h' | '-';
+
+/**
+ * Writes loss and excess of every bar into the output arrays. Inputs are
+ * already validated (clean SI data); must keep 0 ≤ loss ≤ rain, loss + excess = rain.
+ */
+export type ComputeFn<K extends LossKind> = (
+  durationsH: ArrayLike<number>,
+  depthsMm: ArrayLike<number>,
+  method: MethodOf<K>,
+  lossOut: Float64Array,
+  excessOut: Float64Array,
+) => void;
+
+/** Everything the core and the UI need to know about one loss method. */
+export interface MethodSpec<K extends LossKind = LossKind> {
+  readonly kind: K;
+  readonly label: string;
+  readonly summary: string;
+  /** The published source of the equations. */
+  readonly source: string;
+  readonly params: readonly NumericParam<K>[];
+  readonly choices?: readonly ChoiceParam<K>[];
+  readonly defaults: MethodOf<K>;
+  readonly compute: ComputeFn<K>;
+  /** Cross-parameter checks beyond each parameter's own range (throws InputError). */
+  readonly validateExtra?: (method: MethodOf<K>) => void;
+}

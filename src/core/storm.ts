@@ -1,0 +1,90 @@
+import { InputError } from './errors';
+
+/**
+ * A storm: an ordered list of bars, each with a duration (h, > 0) and a
+ * rainfall depth (mm, ≥ 0). Intensity of a bar = depth / duration.
+ * `startIso` optionally places the storm on a clock (ISO 8601 date-time).
+ */
+export interface Storm {
+  readonly durationsH: ArrayLike<number>;
+  readonly depthsMm: ArrayLike<number>;
+  readonly startIso?: string;
+}
+
+/**
+ * Throws an InputError naming the first bad bar or field. Runs once per call at
+ * the core's edge, so the methods inside can assume clean data.
+ */
+export function validateStorm(storm: Storm): void {
+  const { durationsH, depthsMm } = storm;
+  if (!durationsH || typeof durationsH.length !== 'number') {
+    throw new InputError('durationsH', 'The storm has no list of bar durations (durationsH).');
+  }
+  if (!depthsMm || typeof depthsMm.length !== 'number') {
+    throw new InputError('depthsMm', 'The storm has no list of bar depths (depthsMm).');
+  }
+  const n = durationsH.length;
+  if (depthsMm.length !== n) {
+    throw new InputError(
+      'depthsMm',
+      `The storm has ${n} bar durations but ${depthsMm.length} bar depths; they must match one to one.`,
+    );
+  }
+  for (let k = 0; k < n; k++) {
+    const d = durationsH[k] as number;
+    // `!(d > 0)` also catches NaN; the second test catches +Infinity.
+    if (!(d > 0) || d === Infinity || typeof d !== 'number') {
+      throw new InputError(
+        'durationsH',
+        `Bar ${k + 1}: duration must be a finite number of hours greater than zero (got ${String(d)}).`,
+        k,
+      );
+    }
+    const p = depthsMm[k] as number;
+    if (!(p >= 0) || p === Infinity || typeof p !== 'number') {
+      throw new InputError(
+        'depthsMm',
+        `Bar ${k + 1}: rainfall depth must be a finite number of millimetres, zero or more (got ${String(p)}).`,
+        k,
+      );
+    }
+  }
+  if (storm.startIso !== undefined && Number.isNaN(Date.parse(storm.startIso))) {
+    throw new InputError('startIso', `The storm start "${storm.startIso}" is not an ISO 8601 date-time.`);
+  }
+}
+
+/** Total rainfall depth, mm. */
+export function totalDepthMm(storm: Storm): number {
+  const p = storm.depthsMm;
+  let sum = 0;
+  for (let k = 0; k < p.length; k++) sum += p[k] as number;
+  return sum;
+}
+
+/** Total storm duration, h. */
+export function totalDurationH(storm: Storm): number {
+  const d = storm.durationsH;
+  let sum = 0;
+  for (let k = 0; k < d.length; k++) sum += d[k] as number;
+  return sum;
+}
+
+/** Highest bar intensity, mm/h (0 for a dry or empty storm). */
+export function peakIntensityMmH(storm: Storm): number {
+  const { durationsH: d, depthsMm: p } = storm;
+  let peak = 0;
+  for (let k = 0; k < p.length; k++) {
+    const i = (p[k] as number) / (d[k] as number);
+    if (i > peak) peak = i;
+  }
+  return peak;
+}
+
+/** Bar start times from the storm start, h (length n + 1: the last is the end). */
+export function barEdgesH(storm: Storm): Float64Array {
+  const d = storm.durationsH;
+  const edges = new Float64Array(d.length + 1);
+  for (let k = 0; k < d.length; k++) edges[k + 1] = (edges[k] as number) + (d[k] as number);
+  return edges;
+}

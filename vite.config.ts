@@ -1,0 +1,16 @@
+/// <reference types="vitest/config" />
+import { defineConfig } from 'vite';
+import react from '@vitejs/plugin-react';
+
+// One config for the app build, the dev server and Vitest.
+export default defineConfig({
+  plugins: [react()],
+  base: './',
+  build: { outDir: 'dist', sourcemap: true },
+  test: {
+    include: ['test/**/*.test.{ts,tsx}'],
+    environment: 'node',
+    setupFiles: ['test/setup.ts'],
+    benchmark: { include: ['test/bench/**/*.bench.ts'] },
+  },
+});
