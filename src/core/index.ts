@@ -38,3 +38,6 @@ export { exactPhi } from './calibrate/phi';
 export { brentRoot } from './calibrate/brent';
 export { solveMonotone, PARAMETER_REL_TOL } from './calibrate/monotone';
 export * from './units';
+export * from './baseflow';
+export * from './design';
+export * from './events';

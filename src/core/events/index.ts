@@ -1,0 +1,2 @@
+// Filled in by the events work; re-exported from src/core/index.ts.
+export {};
