@@ -11,6 +11,5 @@ export default defineConfig({
     include: ['test/**/*.test.{ts,tsx}'],
     environment: 'node',
     setupFiles: ['test/setup.ts'],
-    benchmark: { include: ['test/bench/**/*.bench.ts'] },
   },
 });
