@@ -1,0 +1,116 @@
+// Exact φ-index calibration: hand cases, the edge cases the contract fixes, and
+// agreement with a brute-force bisection on random storms of unequal bars.
+import fc from 'fast-check';
+import { describe, expect, it } from 'vitest';
+import { calibrate, computeLosses, exactPhi, peakIntensityMmH, totalDepthMm, type Storm } from '../../../src/core';
+import { stormArb } from '../../helpers/arbitraries';
+import { expectClose } from '../../helpers/tolerance';
+
+/** The answer the slow way: bisect R(φ) − target on [0, i_max] to the last bit. */
+function bruteForcePhi(storm: Storm, target: number): number {
+  const runoff = (phi: number): number => computeLosses(storm, { kind: 'constant', rateMmH: phi }).totalExcessMm;
+  let lo = 0;
+  let hi = peakIntensityMmH(storm);
+  for (let i = 0; i < 200 && hi - lo > 0; i++) {
+    const mid = 0.5 * (lo + hi);
+    if (mid === lo || mid === hi) break;
+    if (runoff(mid) > target) lo = mid;
+    else hi = mid;
+  }
+  return hi;
+}
+
+const storm = { durationsH: [0.5, 0.5, 1, 0.25], depthsMm: [2, 10, 6, 5] };
+
+describe('exact φ-index calibration', () => {
+  it('solves a hand-worked case with unequal bars', () => {
+    // Target 10 mm. Guess bars 2, 3, 4 above φ: 21 − φ·1.75 = 10 → φ = 6.2857;
+    // bar 3 (6 mm/h) is then below φ, so drop it: 15 − 0.75φ = 10 → φ = 6.667,
+    // above bar 3's 6 mm/h and below bar 4's 20 mm/h: consistent.
+    const r = calibrate(storm, { kind: 'constant', rateMmH: 1 }, 'rateMmH', 10);
+    expect(r.ok).toBe(true);
+    if (r.ok) {
+      expectClose(r.value, 20 / 3, 1e-14);
+      expect(r.method).toEqual({ kind: 'constant', rateMmH: r.value });
+    }
+  });
+
+  it('Chow, Maidment & Mays (1988) Example 5.2.1 (values from memory): 2.55 in of direct runoff gives φ = 2.04 in/h', () => {
+    // From memory, not checked against the printed page (see simple-methods.test.ts).
+    const shoal = { durationsH: Array(7).fill(0.5), depthsMm: [0.15, 0.26, 1.33, 2.2, 2.08, 0.2, 0.09] };
+    const r = calibrate(shoal, { kind: 'constant', rateMmH: 0 }, 'rateMmH', 2.55);
+    expect(r.ok && r.value).toBeCloseTo(2.04, 10);
+  });
+
+  it('target 0 returns the peak intensity and target = rainfall returns 0', () => {
+    const zero = calibrate(storm, { kind: 'constant', rateMmH: 1 }, 'rateMmH', 0);
+    expect(zero.ok && zero.value).toBe(20);
+    const all = calibrate(storm, { kind: 'constant', rateMmH: 1 }, 'rateMmH', 23);
+    expect(all.ok && all.value).toBe(0);
+  });
+
+  it('says no, with a reason, to a negative target or one above the rainfall', () => {
+    const neg = calibrate(storm, { kind: 'constant', rateMmH: 1 }, 'rateMmH', -1);
+    expect(neg).toMatchObject({ ok: false, reason: 'negative-target' });
+    const over = calibrate(storm, { kind: 'constant', rateMmH: 1 }, 'rateMmH', 23.5);
+    expect(over).toMatchObject({ ok: false, reason: 'exceeds-rainfall' });
+    if (!over.ok) expect(over.message).toMatch(/more than the storm's rainfall \(23 mm\)/);
+    const nan = calibrate(storm, { kind: 'constant', rateMmH: 1 }, 'rateMmH', Number.NaN);
+    expect(nan).toMatchObject({ ok: false, reason: 'invalid-target' });
+  });
+
+  it('handles ties: bars of equal intensity are decided together', () => {
+    const flat = { durationsH: [1, 1, 1, 1], depthsMm: [5, 5, 5, 5] };
+    const r = calibrate(flat, { kind: 'constant', rateMmH: 0 }, 'rateMmH', 8);
+    expect(r.ok && r.value).toBe(3); // 4·(5 − φ) = 8
+    expect(exactPhi(flat.durationsH, flat.depthsMm, 0)).toBe(5);
+  });
+
+  it('a dry storm: the only reachable target is 0, met by φ = 0', () => {
+    const dry = { durationsH: [1, 1], depthsMm: [0, 0] };
+    expect(calibrate(dry, { kind: 'constant', rateMmH: 2 }, 'rateMmH', 0)).toMatchObject({ ok: true, value: 0 });
+  });
+
+  it('agrees with brute-force bisection and reproduces the target (random storms, unequal bars)', () => {
+    fc.assert(
+      fc.property(stormArb(80), fc.double({ min: 0, max: 1, noNaN: true }), (s, share) => {
+        const rain = totalDepthMm(s);
+        const target = share * rain;
+        const r = calibrate(s, { kind: 'constant', rateMmH: 0 }, 'rateMmH', target);
+        expect(r.ok).toBe(true);
+        if (!r.ok) return;
+        const brute = bruteForcePhi(s, target);
+        // Relative to φ, with a floor of 1e-12 of the peak intensity for φ near 0.
+        expect(Math.abs(r.value - brute)).toBeLessThanOrEqual(1e-9 * brute + 1e-12 * peakIntensityMmH(s));
+        const back = computeLosses(s, r.method).totalExcessMm;
+        expect(Math.abs(back - target)).toBeLessThanOrEqual(1e-9 * Math.max(rain, 1e-9));
+      }),
+      { numRuns: 500 },
+    );
+  });
+
+  it('returns the smallest φ: any smaller rate gives more runoff', () => {
+    fc.assert(
+      fc.property(stormArb(40), fc.double({ min: 0, max: 0.999, noNaN: true }), (s, share) => {
+        const target = share * totalDepthMm(s);
+        const r = calibrate(s, { kind: 'constant', rateMmH: 0 }, 'rateMmH', target);
+        if (!r.ok || r.value === 0) return;
+        const below = computeLosses(s, { kind: 'constant', rateMmH: r.value * (1 - 1e-6) }).totalExcessMm;
+        expect(below).toBeGreaterThan(target);
+      }),
+      { numRuns: 300 },
+    );
+  });
+
+  it('is linear-time friendly: sorted and reverse-sorted storms of 20,000 bars give the bisection answer', () => {
+    const n = 20000;
+    const up = { durationsH: Array.from({ length: n }, (_, k) => 0.1 + (k % 7) * 0.05), depthsMm: Array.from({ length: n }, (_, k) => k / 100) };
+    const down = { durationsH: [...up.durationsH].reverse(), depthsMm: [...up.depthsMm].reverse() };
+    for (const s of [up, down]) {
+      const target = 0.4 * totalDepthMm(s);
+      const r = calibrate(s, { kind: 'constant', rateMmH: 0 }, 'rateMmH', target);
+      expect(r.ok).toBe(true);
+      if (r.ok) expectClose(computeLosses(s, r.method).totalExcessMm, target, 1e-9);
+    }
+  });
+});
