@@ -1,2 +1,17 @@
-// Filled in by the design work; re-exported from src/core/index.ts.
-export {};
+// Design storms: IDF relations, the alternating block method, uniform storms
+// and scaling a storm to a chosen depth. Re-exported from src/core/index.ts.
+export {
+  validateIdf,
+  idfIntensityMmH,
+  idfDepthMm,
+  idfRangeH,
+  idfCovers,
+  idfIntensityEvaluator,
+  IDF_KINDS,
+  type Idf,
+  type IdfKind,
+  type IdfDurationUnit,
+  type IdfShiftedPower,
+  type IdfPowerSum,
+  type IdfTable,
+} from './idf';
