@@ -1,4 +1,3 @@
-// Design storms: IDF relations, the alternating block method, uniform storms
 // and scaling a storm to a chosen depth. Re-exported from src/core/index.ts.
 export {
   validateIdf,
@@ -15,3 +14,6 @@ export {
   type IdfPowerSum,
   type IdfTable,
 } from './idf';
+export { alternatingPositions } from './alternation';
+export { alternatingBlockStorm, type AlternatingBlockOptions } from './alternating-block';
+export { stepCount, MAX_DESIGN_BARS } from './steps';

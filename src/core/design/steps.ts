@@ -1,0 +1,43 @@
+import { InputError } from '../errors';
+import { fmt } from './format';
+
+/**
+ * Most bars a design storm may have. Our own guard, so that a mistyped step
+ * (seconds entered as hours) is refused rather than allocating millions of
+ * bars; a 72-hour storm in 1-minute steps is 4320.
+ */
+export const MAX_DESIGN_BARS = 100_000;
+
+// Step and duration are usually typed in minutes and converted to hours
+// (10 min = 0.1666… h), so "a whole number of steps" is judged to rounding.
+const WHOLE_REL_TOL = 1e-9;
+
+/**
+ * Checks a design storm's total duration and step (h) and returns the number
+ * of equal bars. Throws InputError naming `durationH` or `stepH`.
+ */
+export function stepCount(durationH: number, stepH: number): number {
+  if (typeof durationH !== 'number' || !Number.isFinite(durationH) || !(durationH > 0)) {
+    throw new InputError('durationH', `The storm duration must be a finite number of hours greater than 0 (got ${String(durationH)}).`);
+  }
+  if (typeof stepH !== 'number' || !Number.isFinite(stepH) || !(stepH > 0)) {
+    throw new InputError('stepH', `The time step must be a finite number of hours greater than 0 (got ${String(stepH)}).`);
+  }
+  if (stepH > durationH * (1 + WHOLE_REL_TOL)) {
+    throw new InputError('stepH', `The time step (${fmt(stepH)} h) is longer than the storm (${fmt(durationH)} h).`);
+  }
+  const n = Math.round(durationH / stepH);
+  if (Math.abs(n * stepH - durationH) > WHOLE_REL_TOL * durationH) {
+    throw new InputError(
+      'stepH',
+      `The storm duration (${fmt(durationH)} h) is not a whole number of time steps of ${fmt(stepH)} h; choose a step that divides it.`,
+    );
+  }
+  if (n > MAX_DESIGN_BARS) {
+    throw new InputError(
+      'stepH',
+      `A step of ${fmt(stepH)} h makes ${n} bars for a ${fmt(durationH)} h storm; at most ${MAX_DESIGN_BARS} are allowed. Check the step's unit.`,
+    );
+  }
+  return n;
+}
