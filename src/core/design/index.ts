@@ -1,3 +1,4 @@
+// Design storms: IDF relations, the alternating block method, uniform storms
 // and scaling a storm to a chosen depth. Re-exported from src/core/index.ts.
 export {
   validateIdf,
@@ -16,4 +17,6 @@ export {
 } from './idf';
 export { alternatingPositions } from './alternation';
 export { alternatingBlockStorm, type AlternatingBlockOptions } from './alternating-block';
+export { uniformStorm, type UniformStormOptions } from './uniform';
+export { scaleStormToDepth } from './scale';
 export { stepCount, MAX_DESIGN_BARS } from './steps';
