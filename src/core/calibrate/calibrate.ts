@@ -1,5 +1,5 @@
 import { isInputError } from '../errors';
-import { computeLossesUnchecked } from '../loss/compute';
+import { totalExcessMm } from '../loss/compute';
 import { describeRange, methodSpec, numericParam, validateMethod } from '../loss/methods';
 import type { LossMethod, NumericParam } from '../loss/types';
 import { totalDepthMm, validateStorm, type Storm } from '../storm';
@@ -39,6 +39,8 @@ export type CalibrationResult =
 
 const fmt = (x: number): string => (Number.isInteger(x) ? String(x) : x.toPrecision(4).replace(/\.?0+$/, ''));
 const unitText = (param: NumericParam): string => (param.unit === '-' ? '' : ` ${param.unit}`);
+// Only the first letter: symbols in labels (K, CN, Δθ) keep their case.
+const lowerFirst = (label: string): string => label.charAt(0).toLowerCase() + label.slice(1);
 
 /**
  * Finds the value of one parameter of a loss method (the others held fixed)
@@ -88,16 +90,18 @@ export function calibrate(
   }
   const target = Math.min(targetExcessMm, rainMm);
   const withValue = (value: number): LossMethod => ({ ...method, [param.key]: value }) as LossMethod;
-  const excessWith = (value: number): number => computeLossesUnchecked(storm, withValue(value)).totalExcessMm;
+  const excessWith = (value: number): number => totalExcessMm(storm, withValue(value));
 
   const exact = EXACT_CALIBRATORS[`${method.kind}.${param.key}`];
   if (exact) {
     const value = exact(storm, method, target, rainMm);
     const fitted = withValue(value);
-    return { ok: true, value, method: fitted, excessMm: computeLossesUnchecked(storm, fitted).totalExcessMm };
+    return { ok: true, value, method: fitted, excessMm: totalExcessMm(storm, fitted) };
   }
 
-  const lo = param.minExclusive ? param.min + Math.max(Math.abs(param.min) * 1e-9, 1e-9) : param.min;
+  const ownLo = param.minExclusive ? param.min + Math.max(Math.abs(param.min) * 1e-9, 1e-9) : param.min;
+  // Some lower ends depend on the other parameters (Horton: f₀ ≥ f_c).
+  const lo = param.searchMin ? Math.max(ownLo, param.searchMin(storm, method as never)) : ownLo;
   let hi = Number.isFinite(param.max) ? param.max : (param.searchMax?.(storm, method as never) ?? lo + 1);
   if (!(hi > lo)) hi = lo;
   const solved = solveMonotone(excessWith, lo, hi, target);
@@ -110,10 +114,10 @@ export function calibrate(
       boundValue: solved.x,
       boundExcessMm: solved.g,
       message:
-        `No ${param.label.toLowerCase()} ${describeRange(param)}${unitText(param)} gives ${fmt(target)} mm of runoff: ` +
+        `No ${lowerFirst(param.label)} ${describeRange(param)}${unitText(param)} gives ${fmt(target)} mm of runoff: ` +
         `the ${bound} value (${fmt(solved.x)}${unitText(param)}) gives ${fmt(solved.g)} mm.`,
     };
   }
   const fitted = withValue(solved.x);
-  return { ok: true, value: solved.x, method: fitted, excessMm: computeLossesUnchecked(storm, fitted).totalExcessMm };
+  return { ok: true, value: solved.x, method: fitted, excessMm: totalExcessMm(storm, fitted) };
 }

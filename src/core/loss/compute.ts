@@ -43,8 +43,9 @@ function summarise(storm: Storm, lossMm: Float64Array, excessMm: Float64Array): 
     loss += lossMm[k] as number;
     const e = excessMm[k] as number;
     excess += e;
-    const ie = e / (durationsH[k] as number);
-    if (ie > peak) peak = ie;
+    // Compare by multiplication; divide only when the peak moves (rarely).
+    const dt = durationsH[k] as number;
+    if (e > peak * dt) peak = e / dt;
   }
   return {
     lossMm,
@@ -57,7 +58,19 @@ function summarise(storm: Storm, lossMm: Float64Array, excessMm: Float64Array): 
   };
 }
 
-/** Total excess only, mm: the quantity calibration matches. */
-export function totalExcessMm(storm: Storm, method: LossMethod, buffers?: LossBuffers): number {
-  return computeLossesUnchecked(storm, method, buffers).totalExcessMm;
+let scratch: LossBuffers = { lossMm: new Float64Array(0), excessMm: new Float64Array(0) };
+
+/**
+ * Shared work buffers of at least n bars, for callers that need only totals
+ * (calibration evaluates the method many times). The contents are
+ * overwritten by the next caller: never hand them out.
+ */
+export function scratchBuffers(n: number): LossBuffers {
+  if (scratch.lossMm.length < n) scratch = { lossMm: new Float64Array(n), excessMm: new Float64Array(n) };
+  return scratch;
+}
+
+/** Total excess only, mm (validated input): the quantity calibration matches. */
+export function totalExcessMm(storm: Storm, method: LossMethod): number {
+  return computeLossesUnchecked(storm, method, scratchBuffers(storm.depthsMm.length)).totalExcessMm;
 }

@@ -19,22 +19,29 @@ export const computeInitialContinuing: ComputeFn<'initial-continuing'> = (
   const cl = method.rateMmH;
   let remaining = method.initialMm;
   const n = depthsMm.length;
-  for (let k = 0; k < n; k++) {
+  let k = 0;
+  // Phase 1: bars that (partly) fill the initial loss.
+  for (; k < n && remaining > 0; k++) {
     const p = depthsMm[k] as number;
-    const dt = durationsH[k] as number;
-    let excess: number;
+    let excess = 0;
     if (remaining >= p) {
       remaining -= p;
-      excess = 0;
-    } else if (remaining > 0) {
+    } else {
       // IL runs out part-way through the bar: rain after that meets the continuing rate.
+      const dt = durationsH[k] as number;
       const tr = (remaining / p) * dt;
       excess = p - remaining - cl * (dt - tr);
+      if (excess < 0) excess = 0;
       remaining = 0;
-    } else {
-      excess = p - cl * dt;
     }
-    if (excess < 0) excess = 0;
+    excessOut[k] = excess;
+    lossOut[k] = p - excess;
+  }
+  // Phase 2: the continuing rate alone, branch-free as in the constant method.
+  for (; k < n; k++) {
+    const p = depthsMm[k] as number;
+    const x = p - cl * (durationsH[k] as number);
+    const excess = 0.5 * (x + Math.abs(x));
     excessOut[k] = excess;
     lossOut[k] = p - excess;
   }
