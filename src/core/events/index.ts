@@ -1,2 +1,8 @@
-// Filled in by the events work; re-exported from src/core/index.ts.
-export {};
+// Several events for one catchment: fit each, summarise the fitted values,
+// pick a design value and see each event's runoff with it.
+// Re-exported from src/core/index.ts.
+export { validateEventList, type CatchmentEvent } from './event';
+export { fitEvents, type EventFit } from './fit';
+export { summariseFits, type FitSummary } from './summary';
+export { pickDesignValue, type DesignPick } from './design-value';
+export { applyDesignValue, type EventRunoff } from './apply';

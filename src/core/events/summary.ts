@@ -1,0 +1,32 @@
+import type { EventFit } from './fit';
+
+/** The spread of fitted values over the events that have one. */
+export interface FitSummary {
+  /** Events with a fitted value. */
+  readonly count: number;
+  /** Events without one (their rows say why). */
+  readonly withoutAnswer: number;
+  /** The statistics below are NaN when `count` is 0. */
+  readonly mean: number;
+  /** Middle value; for an even count the mean of the two middle values. */
+  readonly median: number;
+  readonly min: number;
+  readonly max: number;
+}
+
+/** Count, mean, median, min and max of the fitted values, ignoring events without an answer. */
+export function summariseFits(fits: readonly EventFit[]): FitSummary {
+  const values: number[] = [];
+  for (const fit of fits) if (fit.result.ok) values.push(fit.result.value);
+  const count = values.length;
+  const withoutAnswer = fits.length - count;
+  if (count === 0) {
+    return { count, withoutAnswer, mean: Number.NaN, median: Number.NaN, min: Number.NaN, max: Number.NaN };
+  }
+  values.sort((x, y) => x - y);
+  let sum = 0;
+  for (const v of values) sum += v;
+  const mid = count >> 1;
+  const median = count % 2 === 1 ? (values[mid] as number) : ((values[mid - 1] as number) + (values[mid] as number)) / 2;
+  return { count, withoutAnswer, mean: sum / count, median, min: values[0] as number, max: values[count - 1] as number };
+}
