@@ -1,0 +1,222 @@
+import {
+  InputError,
+  defaultMethod,
+  isLossKind,
+  methodSpec,
+  validateMethod,
+  validateStorm,
+  type LossKind,
+  type LossMethod,
+  type Storm,
+  type UnitSystem,
+} from '../core';
+import type { Scenario } from '../scenario/types';
+
+/**
+ * Pure edits of the scenario document. Each returns a new Scenario sharing
+ * every part it did not change (so memoised selectors keyed on `storm` or
+ * `method` stay valid), or the same object when nothing changes. Bad input
+ * throws the core's InputError naming the field (and bar), before anything
+ * is changed: the store never holds a document the core would refuse.
+ */
+
+export type ScenarioStorm = Scenario['storm'];
+export type Observed = NonNullable<Scenario['observed']>;
+
+/** One bar, for inserting. */
+export interface Bar {
+  readonly durationH: number;
+  readonly depthMm: number;
+}
+
+export function withName(s: Scenario, name: string): Scenario {
+  if (typeof name !== 'string') throw new InputError('name', 'The scenario name must be text.');
+  return name === s.name ? s : { ...s, name };
+}
+
+export function withUnits(s: Scenario, units: UnitSystem): Scenario {
+  if (units !== 'si' && units !== 'us') {
+    throw new InputError('units', `Units must be "si" or "us" (got ${JSON.stringify(units)}).`);
+  }
+  return units === s.units ? s : { ...s, units };
+}
+
+export function withAreaM2(s: Scenario, areaM2: number): Scenario {
+  if (typeof areaM2 !== 'number' || !Number.isFinite(areaM2) || areaM2 < 0) {
+    throw new InputError('areaM2', `The catchment area must be a finite number of m², zero or more (got ${String(areaM2)}).`);
+  }
+  return areaM2 === s.catchment.areaM2 ? s : { ...s, catchment: { ...s.catchment, areaM2 } };
+}
+
+/** Copies any storm (typed arrays included) into the document's plain form, after validating it. */
+export function toScenarioStorm(storm: Storm): ScenarioStorm {
+  validateStorm(storm);
+  const durationsH = Array.from(storm.durationsH);
+  const depthsMm = Array.from(storm.depthsMm);
+  return storm.startIso === undefined ? { durationsH, depthsMm } : { durationsH, depthsMm, startIso: storm.startIso };
+}
+
+export function withStorm(s: Scenario, storm: Storm): Scenario {
+  return { ...s, storm: toScenarioStorm(storm) };
+}
+
+function checkIndex(s: Scenario, k: number, field: string, allowEnd = false): void {
+  const n = s.storm.depthsMm.length;
+  const last = allowEnd ? n : n - 1;
+  if (!Number.isInteger(k) || k < 0 || k > last) {
+    const range = last < 0 ? 'the storm has no bars' : `bars are 1 to ${last + 1}`;
+    throw new InputError(field, `There is no bar ${String(k + 1)} (${range}).`, Number.isInteger(k) ? k : undefined);
+  }
+}
+
+function checkDepth(k: number, depthMm: number): void {
+  if (typeof depthMm !== 'number' || !Number.isFinite(depthMm) || depthMm < 0) {
+    throw new InputError(
+      'depthsMm',
+      `Bar ${k + 1}: rainfall depth must be a finite number of millimetres, zero or more (got ${String(depthMm)}).`,
+      k,
+    );
+  }
+}
+
+function checkDuration(k: number, durationH: number): void {
+  if (typeof durationH !== 'number' || !Number.isFinite(durationH) || !(durationH > 0)) {
+    throw new InputError(
+      'durationsH',
+      `Bar ${k + 1}: duration must be a finite number of hours greater than zero (got ${String(durationH)}).`,
+      k,
+    );
+  }
+}
+
+export function withBarDepth(s: Scenario, k: number, depthMm: number): Scenario {
+  checkIndex(s, k, 'depthsMm');
+  checkDepth(k, depthMm);
+  if (s.storm.depthsMm[k] === depthMm) return s;
+  const depthsMm = s.storm.depthsMm.slice();
+  depthsMm[k] = depthMm;
+  return { ...s, storm: { ...s.storm, depthsMm } };
+}
+
+export function withBarDuration(s: Scenario, k: number, durationH: number): Scenario {
+  checkIndex(s, k, 'durationsH');
+  checkDuration(k, durationH);
+  if (s.storm.durationsH[k] === durationH) return s;
+  const durationsH = s.storm.durationsH.slice();
+  durationsH[k] = durationH;
+  return { ...s, storm: { ...s.storm, durationsH } };
+}
+
+/**
+ * Inserts a bar before index k (k = number of bars appends). Without a bar,
+ * the new one is dry and as long as its neighbour (or 1 h in an empty storm).
+ */
+export function withBarInserted(s: Scenario, k: number, bar?: Bar): Scenario {
+  checkIndex(s, k, 'depthsMm', true);
+  const { durationsH: d, depthsMm: p } = s.storm;
+  const durationH = bar?.durationH ?? d[k] ?? d[k - 1] ?? 1;
+  const depthMm = bar?.depthMm ?? 0;
+  checkDuration(k, durationH);
+  checkDepth(k, depthMm);
+  const durationsH = d.slice();
+  const depthsMm = p.slice();
+  durationsH.splice(k, 0, durationH);
+  depthsMm.splice(k, 0, depthMm);
+  return { ...s, storm: { ...s.storm, durationsH, depthsMm } };
+}
+
+export function withBarDeleted(s: Scenario, k: number): Scenario {
+  checkIndex(s, k, 'depthsMm');
+  const durationsH = s.storm.durationsH.slice();
+  const depthsMm = s.storm.depthsMm.slice();
+  durationsH.splice(k, 1);
+  depthsMm.splice(k, 1);
+  return { ...s, storm: { ...s.storm, durationsH, depthsMm } };
+}
+
+/** Sets or clears (undefined) the storm's clock start. */
+export function withStartIso(s: Scenario, startIso: string | undefined): Scenario {
+  if (startIso === s.storm.startIso) return s;
+  const { startIso: _old, ...rest } = s.storm;
+  if (startIso === undefined) return { ...s, storm: rest };
+  if (typeof startIso !== 'string' || Number.isNaN(Date.parse(startIso))) {
+    throw new InputError('startIso', `The storm start "${String(startIso)}" is not an ISO 8601 date-time.`);
+  }
+  return { ...s, storm: { ...rest, startIso } };
+}
+
+/**
+ * Switches the loss method, keeping the storm. The method being left is
+ * remembered in methodMemory (as `leaving`, which the caller passes when the
+ * effective method differs from the stored one, e.g. while matched), and the
+ * new method comes back with its last parameters, or its defaults.
+ * The parameter to fit follows when the old one does not exist in the new method.
+ */
+export function withMethodKind(s: Scenario, kind: LossKind, leaving: LossMethod = s.method): Scenario {
+  if (!isLossKind(kind)) throw new InputError('kind', `Unknown loss method "${String(kind)}".`);
+  if (kind === s.method.kind) return s;
+  const methodMemory = { ...s.methodMemory, [s.method.kind]: leaving };
+  const remembered = s.methodMemory[kind];
+  const method = remembered && remembered.kind === kind ? remembered : defaultMethod(kind);
+  const params = methodSpec(kind).params;
+  let observed = s.observed;
+  if (observed && !params.some((p) => p.key === observed?.parameter)) {
+    const first = params[0];
+    observed = first ? { ...observed, parameter: first.key } : { ...observed, locked: false };
+  }
+  return { ...s, method, methodMemory, observed };
+}
+
+/** Sets one parameter (numeric or choice) of the active method, checked by the core. */
+export function withParam(s: Scenario, key: string, value: number | boolean | string): Scenario {
+  const current = (s.method as unknown as Record<string, unknown>)[key];
+  if (current === value) return s;
+  const spec = methodSpec(s.method.kind);
+  const known = spec.params.some((p) => p.key === key) || (spec.choices ?? []).some((c) => c.key === key);
+  if (!known) throw new InputError(key, `${spec.label} has no parameter "${key}".`);
+  const method = { ...s.method, [key]: value } as LossMethod;
+  validateMethod(method);
+  return { ...s, method };
+}
+
+/** Replaces the active method's parameters with its defaults. */
+export function withMethodDefaults(s: Scenario): Scenario {
+  return { ...s, method: defaultMethod(s.method.kind) };
+}
+
+/** Sets a whole method (e.g. the fitted one from calibrate), checked by the core. */
+export function withMethod(s: Scenario, method: LossMethod): Scenario {
+  validateMethod(method);
+  return { ...s, method };
+}
+
+/** Changes part of the observed runoff (creating it when absent). */
+export function withObserved(s: Scenario, patch: Partial<Observed> | null): Scenario {
+  if (patch === null) return s.observed === null ? s : { ...s, observed: null };
+  const base: Observed = s.observed ?? {
+    as: 'depth',
+    value: 0,
+    parameter: methodSpec(s.method.kind).params[0]?.key ?? '',
+    locked: false,
+  };
+  const next: Observed = { ...base, ...patch };
+  if (next.as !== 'depth' && next.as !== 'volume') {
+    throw new InputError('observed.as', `Observed runoff is given as "depth" or "volume" (got ${JSON.stringify(next.as)}).`);
+  }
+  if (typeof next.value !== 'number' || !Number.isFinite(next.value) || next.value < 0) {
+    throw new InputError(
+      'observed.value',
+      `The observed runoff must be a finite number, zero or more (got ${String(next.value)}).`,
+    );
+  }
+  if (!methodSpec(s.method.kind).params.some((p) => p.key === next.parameter)) {
+    throw new InputError('observed.parameter', `${methodSpec(s.method.kind).label} has no parameter "${next.parameter}" to fit.`);
+  }
+  const same =
+    s.observed !== null &&
+    s.observed.as === next.as &&
+    s.observed.value === next.value &&
+    s.observed.parameter === next.parameter &&
+    s.observed.locked === next.locked;
+  return same ? s : { ...s, observed: next };
+}

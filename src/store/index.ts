@@ -1,0 +1,23 @@
+export { createWorkbenchStore } from './scenario-store';
+export type {
+  CreateStoreOptions,
+  EditOptions,
+  StorageNotice,
+  WorkbenchActions,
+  WorkbenchState,
+  WorkbenchStore,
+} from './scenario-store';
+export { createDerived, type Derived, type Results, type Target } from './derive';
+export type { Bar, Observed } from './edits';
+export { readScenario, readScenarioJson, type ReadResult } from './read-scenario';
+export {
+  loadScenario,
+  persistStore,
+  STORAGE_KEY,
+  SET_ASIDE_PREFIX,
+  type Loaded,
+  type Persistence,
+  type StorageLike,
+} from './persistence';
+export { StoreProvider, useActions, useDerived, useScenario, useWorkbench, useWorkbenchStore } from './react';
+export { HISTORY_LIMIT, COALESCE_WINDOW_MS } from './history';

@@ -1,0 +1,232 @@
+import { createStore, type StoreApi } from 'zustand/vanilla';
+import { InputError, methodSpec, type CalibrationResult, type LossKind, type LossMethod, type Storm, type UnitSystem } from '../core';
+import type { Scenario } from '../scenario/types';
+import { createDerived, type Derived } from './derive';
+import {
+  withAreaM2,
+  withBarDeleted,
+  withBarDepth,
+  withBarDuration,
+  withBarInserted,
+  withMethod,
+  withMethodDefaults,
+  withMethodKind,
+  withName,
+  withObserved,
+  withParam,
+  withStartIso,
+  withStorm,
+  withUnits,
+  type Bar,
+  type Observed,
+} from './edits';
+import { createHistory, record, redo, redoLabel, replacePresent, undo, undoLabel, type History } from './history';
+
+/** Problems with the browser's saved copy, shown on screen until dismissed. */
+export type StorageNotice =
+  | { readonly kind: 'set-aside'; readonly message: string; readonly key: string }
+  | { readonly kind: 'save-failed'; readonly message: string }
+  | { readonly kind: 'unavailable'; readonly message: string };
+
+export interface EditOptions {
+  /** Successive edits with the same key in quick succession are one undo step. */
+  readonly coalesceKey?: string;
+}
+
+export interface WorkbenchActions {
+  /** Applies any pure edit of the scenario as one undoable step (throws InputError, changing nothing, on bad input). */
+  edit(label: string, recipe: (s: Scenario) => Scenario, options?: EditOptions): void;
+
+  setName(name: string): void;
+  setUnits(units: UnitSystem): void;
+  setAreaM2(areaM2: number, options?: EditOptions): void;
+
+  /** Replaces the whole storm (paste, draw, storm tools) as one undoable edit named `label`. */
+  setStorm(storm: Storm, label: string): void;
+  setBarDepth(k: number, depthMm: number, options?: EditOptions): void;
+  setBarDuration(k: number, durationH: number, options?: EditOptions): void;
+  /** Inserts a bar before index k (k = bar count appends); default a dry bar as long as its neighbour. */
+  insertBar(k: number, bar?: Bar): void;
+  deleteBar(k: number): void;
+  setStartIso(startIso: string | undefined): void;
+
+  /** Switches method, keeping the storm and remembering each method's last parameters. */
+  setMethodKind(kind: LossKind): void;
+  setParam(key: string, value: number | boolean | string, options?: EditOptions): void;
+  resetMethodDefaults(): void;
+
+  setObserved(patch: Partial<Observed> | null, options?: EditOptions): void;
+  /** Turns "keep matched" on or off; turning it off keeps the fitted value. */
+  setKeepMatched(on: boolean): void;
+  /** Sets the chosen parameter to the core's exact fit of the observed runoff; returns the core's answer. */
+  fitObserved(): CalibrationResult | null;
+
+  /** Replaces the whole scenario (open a file, a link, the demo) as one undoable edit. */
+  replaceScenario(scenario: Scenario, label: string): void;
+
+  /**
+   * A gesture (a drag) is one undo step: edits between begin and end replace
+   * the document without recording; end records one step from the state at
+   * begin; cancel puts that state back.
+   */
+  beginGesture(label: string): void;
+  endGesture(): void;
+  cancelGesture(): void;
+
+  undo(): void;
+  redo(): void;
+
+  setNotice(notice: StorageNotice | null): void;
+}
+
+export interface WorkbenchState {
+  readonly history: History<Scenario>;
+  /** The document on screen (history.present, kept here for narrow selectors). */
+  readonly scenario: Scenario;
+  readonly gesture: { readonly base: Scenario; readonly label: string } | null;
+  readonly undoLabel: string | null;
+  readonly redoLabel: string | null;
+  readonly notice: StorageNotice | null;
+  readonly actions: WorkbenchActions;
+}
+
+export type WorkbenchStore = StoreApi<WorkbenchState> & { readonly derived: Derived };
+
+export interface CreateStoreOptions {
+  readonly notice?: StorageNotice | null;
+  /** Clock for coalescing edits (tests pass their own). */
+  readonly now?: () => number;
+}
+
+/** The vanilla store: no React here (see ./react.ts for the binding). */
+export function createWorkbenchStore(initial: Scenario, options: CreateStoreOptions = {}): WorkbenchStore {
+  const now = options.now ?? (() => Date.now());
+  const derived = createDerived();
+
+  const api = createStore<WorkbenchState>()((set, get) => {
+    const commit = (history: History<Scenario>, gesture: WorkbenchState['gesture'] = get().gesture): void => {
+      set({
+        history,
+        scenario: history.present,
+        gesture,
+        undoLabel: undoLabel(history),
+        redoLabel: redoLabel(history),
+      });
+    };
+
+    const edit = (label: string, recipe: (s: Scenario) => Scenario, opts: EditOptions = {}): void => {
+      const { history, gesture } = get();
+      const next = recipe(history.present);
+      if (next === history.present) return;
+      if (gesture) commit(replacePresent(history, next));
+      else {
+        const recordOptions = opts.coalesceKey === undefined ? { nowMs: now() } : { nowMs: now(), coalesceKey: opts.coalesceKey };
+        commit(record(history, next, label, recordOptions));
+      }
+    };
+
+    const paramLabel = (s: Scenario, key: string): string => {
+      const spec = methodSpec(s.method.kind);
+      return spec.params.find((p) => p.key === key)?.label ?? spec.choices?.find((c) => c.key === key)?.label ?? key;
+    };
+
+    const actions: WorkbenchActions = {
+      edit,
+      setName: (name) => edit('Rename scenario', (s) => withName(s, name), { coalesceKey: 'name' }),
+      setUnits: (units) => edit(units === 'us' ? 'Show US customary units' : 'Show SI units', (s) => withUnits(s, units)),
+      setAreaM2: (areaM2, opts) => edit('Set catchment area', (s) => withAreaM2(s, areaM2), opts),
+
+      setStorm: (storm, label) => edit(label, (s) => withStorm(s, storm)),
+      setBarDepth: (k, depthMm, opts) => edit(`Set bar ${k + 1} depth`, (s) => withBarDepth(s, k, depthMm), opts),
+      setBarDuration: (k, durationH, opts) =>
+        edit(`Set bar ${k + 1} duration`, (s) => withBarDuration(s, k, durationH), opts),
+      insertBar: (k, bar) => edit(`Insert bar ${k + 1}`, (s) => withBarInserted(s, k, bar)),
+      deleteBar: (k) => edit(`Delete bar ${k + 1}`, (s) => withBarDeleted(s, k)),
+      setStartIso: (startIso) =>
+        edit(startIso === undefined ? 'Clear storm start time' : 'Set storm start time', (s) => withStartIso(s, startIso)),
+
+      setMethodKind: (kind) =>
+        edit(`Use ${methodSpec(kind).label}`, (s) => withMethodKind(s, kind, derived.effectiveMethod(s))),
+      setParam: (key, value, opts) =>
+        edit(
+          `Set ${paramLabel(get().scenario, key).toLowerCase()}`,
+          (s) => {
+            if (s.observed?.locked && s.observed.parameter === key && derived.isMatched(s)) {
+              throw new InputError(
+                key,
+                `${paramLabel(s, key)} is kept matched to the observed runoff; turn off "Keep matched" to set it by hand.`,
+              );
+            }
+            return withParam(s, key, value);
+          },
+          opts,
+        ),
+      resetMethodDefaults: () => edit('Use default parameters', withMethodDefaults),
+
+      setObserved: (patch, opts) => edit('Set observed runoff', (s) => withObserved(s, patch), opts),
+      setKeepMatched: (on) =>
+        edit(on ? 'Keep matched to observed runoff' : 'Stop keeping matched', (s) => {
+          if (!s.observed) throw new InputError('observed', 'Enter an observed runoff before keeping the method matched to it.');
+          if (on) return withObserved(s, { locked: true });
+          // Keep what the screen showed: the fitted value becomes the stored one.
+          const shown = derived.effectiveMethod(s);
+          return withObserved(shown === s.method ? s : withMethod(s, shown), { locked: false });
+        }),
+      fitObserved: () => {
+        const s = get().scenario;
+        const result = derived.fit(s);
+        if (result?.ok) {
+          const fitted: LossMethod = result.method;
+          edit(`Fit ${paramLabel(s, s.observed?.parameter ?? '').toLowerCase()} to observed runoff`, (doc) =>
+            withMethod(doc, fitted),
+          );
+        }
+        return result;
+      },
+
+      replaceScenario: (scenario, label) => edit(label, () => scenario),
+
+      beginGesture: (label) => {
+        if (get().gesture) return;
+        set({ gesture: { base: get().history.present, label } });
+      },
+      endGesture: () => {
+        const { gesture, history } = get();
+        if (!gesture) return;
+        const moved = history.present !== gesture.base;
+        // Record from the state at the start: one step for the whole gesture.
+        const base = { ...history, present: gesture.base };
+        commit(moved ? record(base, history.present, gesture.label, { nowMs: now() }) : history, null);
+      },
+      cancelGesture: () => {
+        const { gesture, history } = get();
+        if (!gesture) return;
+        commit(replacePresent(history, gesture.base), null);
+      },
+
+      undo: () => {
+        if (get().gesture) actions.endGesture();
+        commit(undo(get().history));
+      },
+      redo: () => {
+        if (get().gesture) actions.endGesture();
+        commit(redo(get().history));
+      },
+
+      setNotice: (notice) => set({ notice }),
+    };
+
+    const history = createHistory(initial);
+    return {
+      history,
+      scenario: initial,
+      gesture: null,
+      undoLabel: null,
+      redoLabel: null,
+      notice: options.notice ?? null,
+      actions,
+    };
+  });
+
+  return Object.assign(api, { derived });
+}
