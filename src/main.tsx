@@ -1,11 +1,36 @@
 import { StrictMode } from 'react';
 import { createRoot } from 'react-dom/client';
+import { DEMO_SCENARIO } from './scenario/demo';
+import { createWorkbenchStore, loadScenario, persistStore, type StorageLike } from './store';
 import { App } from './ui/App';
+import './styles/app.css';
+
+/** The browser's storage, or null where it is switched off (reading `localStorage` can itself throw). */
+function browserStorage(): StorageLike | null {
+  try {
+    const storage = window.localStorage;
+    return storage ?? null;
+  } catch {
+    return null;
+  }
+}
+
+const storage = browserStorage();
+const loaded = loadScenario(storage, DEMO_SCENARIO, new Date().toISOString());
+const store = createWorkbenchStore(loaded.scenario, { notice: loaded.notice });
+if (storage && loaded.canSave) {
+  const persistence = persistStore(store, storage);
+  // Save a change made just before the page closes or reloads.
+  window.addEventListener('pagehide', () => persistence.flush());
+  document.addEventListener('visibilitychange', () => {
+    if (document.visibilityState === 'hidden') persistence.flush();
+  });
+}
 
 const root = document.getElementById('root');
 if (!root) throw new Error('index.html has no #root element');
 createRoot(root).render(
   <StrictMode>
-    <App />
+    <App store={store} />
   </StrictMode>,
 );

@@ -1,23 +1,48 @@
-import { computeLosses } from '../core';
-import { DEMO_SCENARIO } from '../scenario/demo';
+import type { ReactNode } from 'react';
+import { StoreProvider, useActions, type WorkbenchStore } from '../store';
+import { Hyetograph } from './chart/Hyetograph';
+import { useUndoShortcuts } from './keyboard/useUndoShortcuts';
+import { Caution } from './layout/Caution';
+import { Header } from './layout/Header';
+import { StorageNoticeBar } from './layout/StorageNotice';
+import { MatchingPanel } from './matching/MatchingPanel';
+import { MethodPanel } from './method/MethodPanel';
+import { RainfallToolbar } from './rainfall/RainfallToolbar';
+import { ResultsPanel } from './results/ResultsPanel';
 
-/** Minimal page: the demo scenario's totals from the core (the workbench replaces this). */
-export function App() {
-  const s = DEMO_SCENARIO;
-  const r = computeLosses(s.storm, s.method);
+export interface AppProps {
+  readonly store: WorkbenchStore;
+  /** Rainfall-input tools (paste, draw, bar table, storm tools) shown in the Rainfall region. */
+  readonly rainfallTools?: ReactNode;
+}
+
+function Workbench({ rainfallTools }: { rainfallTools?: ReactNode }) {
+  useUndoShortcuts(useActions());
   return (
-    <main>
-      <h1>Raincut</h1>
-      <p>{s.name}</p>
-      <dl>
-        <dt>Rainfall</dt>
-        <dd aria-label="Rainfall depth">{r.rainMm.toFixed(1)} mm</dd>
-        <dt>Loss</dt>
-        <dd aria-label="Loss depth">{r.totalLossMm.toFixed(1)} mm</dd>
-        <dt>Rainfall excess</dt>
-        <dd aria-label="Excess depth">{r.totalExcessMm.toFixed(1)} mm</dd>
-      </dl>
-      <p role="note">Screening estimates only. Follow local drainage criteria; designs need licensed professional review.</p>
-    </main>
+    <div className="app">
+      <Header />
+      <StorageNoticeBar />
+      <Caution />
+      <main className="bench">
+        <div className="bench__main">
+          <RainfallToolbar tools={rainfallTools} />
+          <Hyetograph />
+          <ResultsPanel />
+        </div>
+        <div className="bench__side">
+          <MethodPanel />
+          <MatchingPanel />
+        </div>
+      </main>
+    </div>
+  );
+}
+
+/** The workbench screen, on the given store. */
+export function App({ store, rainfallTools }: AppProps) {
+  return (
+    <StoreProvider store={store}>
+      <Workbench rainfallTools={rainfallTools} />
+    </StoreProvider>
   );
 }

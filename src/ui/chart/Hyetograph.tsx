@@ -1,0 +1,122 @@
+import { useMemo } from 'react';
+import { computeLosses, methodSpec, totalDepthMm, type LossMethod } from '../../core';
+import type { Scenario } from '../../scenario/types';
+import { useDerived, useScenario } from '../../store';
+import { formatValue } from '../format';
+import { displayUnit, toDisplay, unitText } from '../units';
+import { Axes } from './Axes';
+import { chartFrame } from './frame';
+import { LINE_PARAM, LOSS_PARTS } from './line-params';
+import { LossLayer } from './LossLayer';
+import { LossLine } from './LossLine';
+import { RainLayer } from './RainLayer';
+import { useElementWidth } from './useElementWidth';
+
+export const CHART_HEIGHT = 320;
+
+/** The part of the loss drawn in its own shade (initial loss), computed by the core. */
+function lossPart(storm: Scenario['storm'], method: LossMethod): Float64Array | null {
+  const part = LOSS_PARTS[method.kind];
+  if (!part) return null;
+  try {
+    return computeLosses(storm, part.variant(method)).lossMm;
+  } catch {
+    return null;
+  }
+}
+
+/**
+ * The hyetograph: each bar split into the part lost and the part that runs
+ * off, axes with units (clock times when the storm has a start), and for
+ * rate methods the loss-rate line to drag.
+ */
+export function Hyetograph() {
+  const [boxRef, width] = useElementWidth<HTMLDivElement>(880);
+  const storm = useScenario((s) => s.storm);
+  const units = useScenario((s) => s.units);
+  const results = useDerived((d, s) => d.results(s));
+  const matched = useDerived((d, s) => d.isMatched(s));
+  const fittedKey = useScenario((s) => s.observed?.parameter ?? null);
+  const method = results.method;
+
+  const frame = useMemo(() => chartFrame(storm, width, CHART_HEIGHT, units), [storm, width, units]);
+  const part = useMemo(() => lossPart(storm, method), [storm, method]);
+
+  const spec = methodSpec(method.kind);
+  const lineKey = LINE_PARAM[method.kind];
+  const lineParam = lineKey ? spec.params.find((p) => p.key === lineKey) : undefined;
+  const lineValue = lineKey ? (method as unknown as Record<string, number>)[lineKey] : undefined;
+  const partLabel = LOSS_PARTS[method.kind]?.label ?? null;
+  const n = storm.depthsMm.length;
+
+  const depthUnit = unitText(displayUnit('depth', units));
+  const summary = results.ok
+    ? `${n} bars, ${formatValue(toDisplay('depth', results.result.rainMm, units))} ${depthUnit} of rain: ` +
+      `${formatValue(toDisplay('depth', results.result.totalLossMm, units))} ${depthUnit} lost, ` +
+      `${formatValue(toDisplay('depth', results.result.totalExcessMm, units))} ${depthUnit} excess.`
+    : `${n} bars, ${formatValue(toDisplay('depth', totalDepthMm(storm), units))} ${depthUnit} of rain.`;
+
+  return (
+    <figure className="chart" aria-labelledby="chart-title">
+      <figcaption className="chart__head">
+        <h2 id="chart-title">Hyetograph</h2>
+        <ul className="legend" aria-label="Legend">
+          <li>
+            <span className="swatch swatch--excess" aria-hidden="true" /> Rainfall excess
+          </li>
+          <li>
+            <span className="swatch swatch--loss" aria-hidden="true" /> Loss
+          </li>
+          {partLabel ? (
+            <li>
+              <span className="swatch swatch--part" aria-hidden="true" /> {partLabel}
+            </li>
+          ) : null}
+          {lineParam ? (
+            <li>
+              <span className="swatch swatch--line" aria-hidden="true" /> {lineParam.label} (drag or use arrow keys)
+            </li>
+          ) : null}
+        </ul>
+      </figcaption>
+      <div className="chart__box" ref={boxRef}>
+        <svg className="chart__svg" width={width} height={CHART_HEIGHT} role="group" aria-labelledby="chart-title">
+          <defs>
+            <pattern id="part-hatch" width="6" height="6" patternUnits="userSpaceOnUse" patternTransform="rotate(45)">
+              <rect className="hatch__bg" width="6" height="6" />
+              <line className="hatch__line" x1="0" y1="0" x2="0" y2="6" />
+            </pattern>
+          </defs>
+          <Axes frame={frame} />
+          <g role="img" aria-label={`Bars: ${summary}`}>
+            <RainLayer frame={frame} storm={storm} />
+            {results.ok ? (
+              <LossLayer frame={frame} storm={storm} lossMm={results.result.lossMm} partMm={part} />
+            ) : null}
+          </g>
+          {n === 0 ? (
+            <text className="chart__empty" x={(frame.plot.left + frame.plot.right) / 2} y={(frame.plot.top + frame.plot.bottom) / 2} textAnchor="middle">
+              No rainfall bars yet
+            </text>
+          ) : null}
+          {lineKey && lineParam && typeof lineValue === 'number' ? (
+            <LossLine
+              frame={frame}
+              paramKey={lineKey}
+              label={lineParam.label}
+              valueMmH={lineValue}
+              minMmH={lineParam.min}
+              system={units}
+              locked={matched && fittedKey === lineKey}
+            />
+          ) : null}
+        </svg>
+      </div>
+      {!results.ok ? (
+        <p className="chart__error" role="alert">
+          Losses cannot be worked out: {results.message}
+        </p>
+      ) : null}
+    </figure>
+  );
+}

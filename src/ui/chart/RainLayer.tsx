@@ -1,0 +1,17 @@
+import { memo, useMemo } from 'react';
+import type { Scenario } from '../../scenario/types';
+import { barsPath } from './bar-path';
+import { barTopsPx, type ChartFrame } from './frame';
+
+/**
+ * Every bar at its full rainfall intensity, in the excess colour; the loss
+ * layer is drawn over it. Depends on the storm and the frame only: memoised
+ * apart from the moving line, so a drag never rebuilds it.
+ */
+export const RainLayer = memo(function RainLayer({ frame, storm }: { frame: ChartFrame; storm: Scenario['storm'] }) {
+  const d = useMemo(
+    () => barsPath(frame.edgesPx, barTopsPx(frame, storm.depthsMm, storm.durationsH), frame.plot.bottom),
+    [frame, storm],
+  );
+  return <path className="layer layer--excess" d={d} data-layer="rain" />;
+});

@@ -1,0 +1,113 @@
+import { scaleLinear, scaleUtc, type ScaleLinear } from 'd3-scale';
+import { barEdgesH, peakIntensityMmH, totalDurationH, type Storm, type UnitSystem } from '../../core';
+import { formatValue } from '../format';
+import { displayUnit, fromDisplay, toDisplay, unitText } from '../units';
+import { formatWallDate, formatWallTime, wallClockMs } from './clock';
+
+/** Space around the plot for the axes, px. */
+export const MARGIN = { top: 18, right: 20, bottom: 46, left: 62 } as const;
+
+export interface Tick {
+  readonly px: number;
+  readonly label: string;
+}
+
+/**
+ * Everything about the chart that depends only on the storm, the size and the
+ * unit system: scales, ticks and bar edges. It does not change while the
+ * loss line is dragged, so the rainfall layer drawn from it stays put.
+ */
+export interface ChartFrame {
+  readonly width: number;
+  readonly height: number;
+  readonly plot: { readonly left: number; readonly right: number; readonly top: number; readonly bottom: number };
+  /** Hours from the storm start → px. */
+  readonly x: ScaleLinear<number, number>;
+  /** Rate, mm/h (internal unit) → px. */
+  readonly y: ScaleLinear<number, number>;
+  /** Top of the rate axis, mm/h and in display units. */
+  readonly topMmH: number;
+  readonly topDisplay: number;
+  readonly xTicks: readonly Tick[];
+  readonly yTicks: readonly Tick[];
+  readonly xTitle: string;
+  readonly yTitle: string;
+  /** Bar edges in px (n + 1). */
+  readonly edgesPx: Float64Array;
+}
+
+/** Rate axes start at a round value even for a dry or empty storm. */
+const EMPTY_TOP = { si: 10, us: 0.5 } as const;
+
+export function chartFrame(storm: Storm, width: number, height: number, system: UnitSystem): ChartFrame {
+  const plot = {
+    left: MARGIN.left,
+    right: Math.max(MARGIN.left + 40, width - MARGIN.right),
+    top: MARGIN.top,
+    bottom: Math.max(MARGIN.top + 40, height - MARGIN.bottom),
+  };
+  const rateUnit = displayUnit('rate', system);
+  const peakDisplay = toDisplay('rate', peakIntensityMmH(storm), system);
+  // Round the top in the units on screen, so ticks are round numbers there.
+  const yDisplay = scaleLinear()
+    .domain([0, peakDisplay > 0 ? peakDisplay * 1.12 : EMPTY_TOP[system]])
+    .range([plot.bottom, plot.top])
+    .nice(6);
+  const topDisplay = yDisplay.domain()[1] as number;
+  const topMmH = fromDisplay('rate', topDisplay, system);
+  const y = scaleLinear().domain([0, topMmH]).range([plot.bottom, plot.top]);
+  const yTicks = yDisplay.ticks(6).map((v) => ({ px: yDisplay(v), label: formatValue(v) }));
+
+  const durationH = totalDurationH(storm);
+  const x = scaleLinear()
+    .domain([0, durationH > 0 ? durationH : 1])
+    .range([plot.left, plot.right]);
+  const tickCount = Math.max(2, Math.floor((plot.right - plot.left) / 90));
+  const startMs = storm.startIso === undefined ? null : wallClockMs(storm.startIso);
+  let xTicks: Tick[];
+  let xTitle: string;
+  if (startMs !== null) {
+    const endMs = startMs + (x.domain()[1] as number) * 3.6e6;
+    const clock = scaleUtc().domain([startMs, endMs]).range([plot.left, plot.right]);
+    const multiDay = formatWallDate(startMs) !== formatWallDate(endMs);
+    xTicks = clock.ticks(tickCount).map((t) => ({
+      px: clock(t),
+      label: multiDay && formatWallTime(t.getTime()) === '00:00' ? formatWallDate(t.getTime()) : formatWallTime(t.getTime()),
+    }));
+    xTitle = `Clock time, storm from ${formatWallDate(startMs)} ${formatWallTime(startMs)}`;
+  } else {
+    xTicks = x.ticks(tickCount).map((h) => ({ px: x(h), label: formatValue(h) }));
+    xTitle = 'Time from storm start (h)';
+  }
+
+  const edgesH = barEdgesH(storm);
+  const edgesPx = new Float64Array(edgesH.length);
+  for (let k = 0; k < edgesH.length; k++) edgesPx[k] = x(edgesH[k] as number);
+
+  return {
+    width,
+    height,
+    plot,
+    x,
+    y,
+    topMmH,
+    topDisplay,
+    xTicks,
+    yTicks,
+    xTitle,
+    yTitle: `Rainfall intensity (${unitText(rateUnit)})`,
+    edgesPx,
+  };
+}
+
+/**
+ * Pixel tops of bars whose height is a depth per bar spread over its
+ * duration: the bar's intensity, drawn (a hyetograph's defining picture).
+ */
+export function barTopsPx(frame: ChartFrame, depthsMm: ArrayLike<number>, durationsH: ArrayLike<number>): Float64Array {
+  const n = depthsMm.length;
+  const tops = new Float64Array(n);
+  const { y } = frame;
+  for (let k = 0; k < n; k++) tops[k] = y((depthsMm[k] as number) / (durationsH[k] as number));
+  return tops;
+}

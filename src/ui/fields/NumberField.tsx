@@ -1,0 +1,128 @@
+import { useState, type ReactNode } from 'react';
+import { isInputError } from '../../core';
+import { formatForField } from '../format';
+import { parseNumber } from '../parse-number';
+
+export interface NumberFieldProps {
+  readonly id: string;
+  /** Visible label; also the field's accessible name. */
+  readonly label: string;
+  /** Unit shown after the field (part of the label, so it is read out too). */
+  readonly unit?: string;
+  /** The stored value, SI (null: nothing stored yet). */
+  readonly value: number | null;
+  readonly toDisplay?: (si: number) => number;
+  readonly fromDisplay?: (display: number) => number;
+  /** Checks a candidate SI value; returns the message to show, or null when it may be stored. */
+  readonly check?: (si: number) => string | null;
+  /** Stores a value; an InputError thrown here is shown as the field's message. */
+  readonly onCommit: (si: number) => void;
+  readonly readOnly?: boolean;
+  /** A message from elsewhere about this field (e.g. no calibration answer), shown in the same place. */
+  readonly note?: ReactNode;
+  readonly hint?: ReactNode;
+  /** Shown right after the input (e.g. a unit picker). */
+  readonly after?: ReactNode;
+}
+
+interface Draft {
+  readonly text: string;
+  /** The SI value this text stored, or null when the text is not valid and nothing was stored. */
+  readonly stored: number | null;
+  readonly message: string | null;
+}
+
+const same = (x: number) => x;
+
+/**
+ * A number field that checks as you type and never throws away what was
+ * typed: invalid text stays in the field with the reason beside it, and the
+ * store keeps its last good value. When the stored value changes from
+ * elsewhere (undo, a drag, a unit switch), the field shows the new value.
+ */
+export function NumberField({
+  id,
+  label,
+  unit,
+  value,
+  toDisplay = same,
+  fromDisplay = same,
+  check,
+  onCommit,
+  readOnly = false,
+  note,
+  hint,
+  after,
+}: NumberFieldProps) {
+  const [draft, setDraft] = useState<Draft | null>(null);
+  // The typed text stands while it is invalid, or while it is what the store holds.
+  const live = draft !== null && (draft.stored === null || draft.stored === value) ? draft : null;
+  const text = live ? live.text : value === null ? '' : formatForField(toDisplay(value));
+  const message = live?.message ?? null;
+  const msgId = `${id}-msg`;
+  const hintId = `${id}-hint`;
+
+  const onChange = (typed: string): void => {
+    const parsed = parseNumber(typed);
+    if (!parsed.ok) {
+      setDraft({ text: typed, stored: null, message: parsed.message });
+      return;
+    }
+    const si = fromDisplay(parsed.value);
+    const problem = check?.(si) ?? null;
+    if (problem) {
+      setDraft({ text: typed, stored: null, message: problem });
+      return;
+    }
+    try {
+      onCommit(si);
+      setDraft({ text: typed, stored: si, message: null });
+    } catch (error) {
+      if (!isInputError(error)) throw error;
+      setDraft({ text: typed, stored: null, message: error.message });
+    }
+  };
+
+  const describedBy = [hint ? hintId : null, msgId].filter(Boolean).join(' ');
+  return (
+    <div className={`field${message ? ' field--bad' : ''}`}>
+      <label htmlFor={id}>
+        {label}
+        {unit ? <span className="field__unit"> ({unit})</span> : null}
+      </label>
+      <div className="field__row">
+      <input
+        id={id}
+        type="text"
+        inputMode="decimal"
+        autoComplete="off"
+        spellCheck={false}
+        value={text}
+        readOnly={readOnly}
+        aria-invalid={message ? true : undefined}
+        aria-describedby={describedBy}
+        onChange={(e) => onChange(e.currentTarget.value)}
+        onBlur={() => {
+          // A good value is shown tidied once the field is left; a bad one stays as typed.
+          if (draft && draft.message === null) setDraft(null);
+        }}
+        onKeyDown={(e) => {
+          if (e.key === 'Escape' && draft) {
+            e.preventDefault();
+            setDraft(null);
+          }
+        }}
+      />
+      {after}
+      </div>
+      {hint ? (
+        <p className="field__hint" id={hintId}>
+          {hint}
+        </p>
+      ) : null}
+      <p className="field__msg" id={msgId} aria-live="polite">
+        {message ?? note ?? null}
+      </p>
+    </div>
+  );
+}

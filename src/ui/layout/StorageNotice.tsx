@@ -1,0 +1,24 @@
+import { useActions, useWorkbench } from '../../store';
+
+/** Reports problems with the browser's saved copy (damaged, not saved, not available) until dismissed. */
+export function StorageNoticeBar() {
+  const notice = useWorkbench((s) => s.notice);
+  const actions = useActions();
+  if (!notice) return null;
+  const title =
+    notice.kind === 'set-aside'
+      ? 'Saved scenario set aside'
+      : notice.kind === 'save-failed'
+        ? 'Not saved'
+        : 'Saving is off';
+  return (
+    <div className="notice" role="alert">
+      <p>
+        <strong>{title}.</strong> {notice.message}
+      </p>
+      <button type="button" onClick={() => actions.setNotice(null)}>
+        Dismiss
+      </button>
+    </div>
+  );
+}

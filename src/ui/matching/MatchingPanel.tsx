@@ -1,0 +1,173 @@
+import { useState } from 'react';
+import {
+  UNIT_LABELS,
+  VOLUME_UNITS,
+  convertVolume,
+  depthFromVolumeMm,
+  methodSpec,
+  runoffVolumeM3,
+  type UnitSystem, type VolumeUnit } from '../../core';
+import type { Scenario } from '../../scenario/types';
+import { useActions, useDerived, useScenario } from '../../store';
+import { NumberField } from '../fields/NumberField';
+import { formatValue } from '../format';
+import { VOLUME_CHOICES, displayUnit, fromDisplay, paramToDisplay, paramUnitText, toDisplay, unitText } from '../units';
+
+/**
+ * The observed value when the user switches between depth and volume: the
+ * same runoff over the catchment (the core converts), or 0 when there is no
+ * area to convert with (undo brings the old value back).
+ */
+function convertObserved(observed: Scenario['observed'], as: 'depth' | 'volume', areaM2: number): number {
+  if (!observed) return 0;
+  if (observed.as === as) return observed.value;
+  if (!(areaM2 > 0)) return 0;
+  return as === 'volume' ? runoffVolumeM3(observed.value, areaM2) : depthFromVolumeMm(observed.value, areaM2);
+}
+
+const DEFAULT_VOLUME_UNIT: Record<UnitSystem, VolumeUnit> = { si: 'm3', us: 'acre-ft' };
+
+/**
+ * Matching an observed runoff: the observed depth or volume, the parameter to
+ * fit, "Fit" (the core's exact calibration) and "Keep matched". When the core
+ * finds no answer its message stands next to the observed runoff.
+ */
+export function MatchingPanel() {
+  const observed = useScenario((s) => s.observed);
+  const units = useScenario((s) => s.units);
+  const kind = useScenario((s) => s.method.kind);
+  const areaM2 = useScenario((s) => s.catchment.areaM2);
+  const target = useDerived((d, s) => d.target(s));
+  const fit = useDerived((d, s) => d.fit(s));
+  const matched = useDerived((d, s) => d.isMatched(s));
+  const actions = useActions();
+  const [volumeUnitBySystem, setVolumeUnitBySystem] = useState(DEFAULT_VOLUME_UNIT);
+  const volumeUnit = volumeUnitBySystem[units];
+
+  const spec = methodSpec(kind);
+  const as = observed?.as ?? 'depth';
+  const parameter = observed?.parameter ?? spec.params[0]?.key ?? '';
+  const param = spec.params.find((p) => p.key === parameter);
+  const depthUnit = unitText(displayUnit('depth', units));
+
+  const problem = target && !target.ok ? target.message : fit && !fit.ok ? fit.message : null;
+  const answer =
+    fit?.ok && param
+      ? `${param.label} ${formatValue(paramToDisplay(param.unit, fit.value, units))}${
+          paramUnitText(param.unit, units) ? ` ${paramUnitText(param.unit, units)}` : ''
+        } gives the observed ${formatValue(toDisplay('depth', fit.excessMm, units))} ${depthUnit} of runoff.`
+      : null;
+
+  return (
+    <section className="panel matching" aria-labelledby="matching-title">
+      <h2 id="matching-title">Matching</h2>
+      <p className="panel__intro">Set a parameter so the rainfall excess equals an observed runoff.</p>
+      <fieldset className="segmented">
+        <legend>Observed runoff given as</legend>
+        {(['depth', 'volume'] as const).map((option) => (
+          <label key={option} className="segmented__option">
+            <input
+              type="radio"
+              name="observed-as"
+              value={option}
+              checked={as === option}
+              onChange={() => actions.setObserved({ as: option, value: convertObserved(observed, option, areaM2) })}
+            />
+            <span>{option === 'depth' ? 'Depth' : 'Volume'}</span>
+          </label>
+        ))}
+      </fieldset>
+      {as === 'depth' ? (
+        <NumberField
+          key="depth"
+          id="observed-value"
+          label="Observed runoff"
+          unit={depthUnit}
+          value={observed?.value ?? null}
+          toDisplay={(mm) => toDisplay('depth', mm, units)}
+          fromDisplay={(v) => fromDisplay('depth', v, units)}
+          onCommit={(mm) => actions.setObserved({ as: 'depth', value: mm, parameter }, { coalesceKey: 'observed' })}
+          note={problem}
+        />
+      ) : (
+        <NumberField
+          key="volume"
+          id="observed-value"
+          label="Observed runoff"
+          value={observed?.value ?? null}
+          toDisplay={(m3) => convertVolume(m3, 'm3', volumeUnit)}
+          fromDisplay={(v) => convertVolume(v, volumeUnit, 'm3')}
+          onCommit={(m3) => actions.setObserved({ as: 'volume', value: m3, parameter }, { coalesceKey: 'observed' })}
+          note={problem}
+          hint={
+            target?.ok
+              ? `${formatValue(toDisplay('depth', target.mm, units))} ${depthUnit} over the catchment area (set under Results).`
+              : 'Spread over the catchment area (set under Results).'
+          }
+          after={
+            <select
+              aria-label="Volume unit"
+              value={volumeUnit}
+              onChange={(e) => {
+                const next = e.currentTarget.value;
+                if (Object.prototype.hasOwnProperty.call(VOLUME_UNITS, next)) {
+                  setVolumeUnitBySystem((u) => ({ ...u, [units]: next as VolumeUnit }));
+                }
+              }}
+            >
+              {VOLUME_CHOICES.map((u) => (
+                <option key={u} value={u}>
+                  {UNIT_LABELS[u] ?? u}
+                </option>
+              ))}
+            </select>
+          }
+        />
+      )}
+      <div className="field">
+        <label htmlFor="fit-parameter">Parameter to fit</label>
+        <select
+          id="fit-parameter"
+          value={parameter}
+          onChange={(e) => actions.setObserved({ parameter: e.currentTarget.value })}
+        >
+          {spec.params.map((p) => (
+            <option key={p.key} value={p.key}>
+              {p.label}
+            </option>
+          ))}
+        </select>
+      </div>
+      <div className="matching__actions">
+        <button
+          type="button"
+          className="button--primary"
+          onClick={() => actions.fitObserved()}
+          disabled={!fit?.ok || matched}
+          aria-describedby="fit-answer"
+        >
+          Fit
+        </button>
+        <label className="switch" htmlFor="keep-matched">
+          <input
+            id="keep-matched"
+            type="checkbox"
+            role="switch"
+            checked={observed?.locked ?? false}
+            disabled={observed === null}
+            aria-describedby="keep-matched-hint"
+            onChange={(e) => actions.setKeepMatched(e.currentTarget.checked)}
+          />
+          <span>Keep matched</span>
+        </label>
+      </div>
+      <p className="field__hint" id="keep-matched-hint">
+        While on, the fitted value follows the observed runoff as the bars change.
+        {areaM2 > 0 || as === 'depth' ? null : ' An observed volume needs the catchment area.'}
+      </p>
+      <p className="matching__answer" id="fit-answer" aria-live="polite">
+        {answer ? (matched ? `Matched: ${answer}` : `Answer: ${answer}`) : null}
+      </p>
+    </section>
+  );
+}

@@ -1,0 +1,157 @@
+import {
+  METHOD_KINDS,
+  METHODS,
+  isInputError,
+  isLossKind,
+  methodSpec,
+  validateMethod,
+  type ChoiceParam,
+  type LossMethod,
+  type MethodSpec,
+  type NumericParam,
+} from '../../core';
+import { useActions, useDerived, useScenario } from '../../store';
+import { NumberField } from '../fields/NumberField';
+import { paramFromDisplay, paramToDisplay, paramUnitText } from '../units';
+
+const valueOf = (method: LossMethod, key: string): unknown => (method as unknown as Record<string, unknown>)[key];
+
+/** The core's own message for a candidate parameter value, or null when the core accepts it. */
+function coreProblem(method: LossMethod, key: string, value: number | boolean | string): string | null {
+  try {
+    validateMethod({ ...method, [key]: value } as LossMethod);
+    return null;
+  } catch (error) {
+    if (isInputError(error)) return error.message;
+    throw error;
+  }
+}
+
+function ParamField({ param, method, stored }: { param: NumericParam; method: LossMethod; stored: LossMethod }) {
+  const units = useScenario((s) => s.units);
+  const observed = useScenario((s) => s.observed);
+  const matched = useDerived((d, s) => d.isMatched(s));
+  const actions = useActions();
+  const locked = matched && observed?.parameter === param.key;
+  const value = valueOf(method, param.key);
+  return (
+    <NumberField
+      id={`param-${param.key}`}
+      label={param.label}
+      unit={paramUnitText(param.unit, units)}
+      value={typeof value === 'number' ? value : null}
+      toDisplay={(si) => paramToDisplay(param.unit, si, units)}
+      fromDisplay={(v) => paramFromDisplay(param.unit, v, units)}
+      check={(si) => coreProblem(stored, param.key, si)}
+      onCommit={(si) => actions.setParam(param.key, si, { coalesceKey: `param:${param.key}` })}
+      readOnly={locked}
+      hint={param.help}
+      note={locked ? 'Kept matched to the observed runoff (see Matching).' : null}
+    />
+  );
+}
+
+function ChoiceField({ choice, method }: { choice: ChoiceParam; method: LossMethod }) {
+  const actions = useActions();
+  const value = valueOf(method, choice.key);
+  const id = `choice-${choice.key}`;
+  const isSwitch =
+    choice.choices.length === 2 && choice.choices.every((c) => typeof c.value === 'boolean');
+  if (isSwitch) {
+    const on = choice.choices.find((c) => c.value === true);
+    return (
+      <div className="field field--switch">
+        <label htmlFor={id}>
+          <input
+            id={id}
+            type="checkbox"
+            role="switch"
+            checked={value === true}
+            aria-describedby={`${id}-hint`}
+            onChange={(e) => actions.setParam(choice.key, e.currentTarget.checked)}
+          />
+          <span>{choice.label}</span>
+        </label>
+        <p className="field__hint" id={`${id}-hint`}>
+          {value === true ? on?.label : choice.choices.find((c) => c.value === false)?.label}. {choice.help}
+        </p>
+      </div>
+    );
+  }
+  const index = choice.choices.findIndex((c) => c.value === value);
+  return (
+    <div className="field">
+      <label htmlFor={id}>{choice.label}</label>
+      <select
+        id={id}
+        value={index < 0 ? '' : String(index)}
+        aria-describedby={`${id}-hint`}
+        onChange={(e) => {
+          const picked = choice.choices[Number(e.currentTarget.value)];
+          if (picked) actions.setParam(choice.key, picked.value);
+        }}
+      >
+        {index < 0 ? <option value="">Choose…</option> : null}
+        {choice.choices.map((c, i) => (
+          <option key={String(c.value)} value={String(i)}>
+            {c.label}
+          </option>
+        ))}
+      </select>
+      <p className="field__hint" id={`${id}-hint`}>
+        {choice.help}
+      </p>
+    </div>
+  );
+}
+
+/** Loss method picker and the method's parameters, all generated from the core's METHODS table. */
+export function MethodPanel() {
+  const stored = useScenario((s) => s.method);
+  const method = useDerived((d, s) => d.effectiveMethod(s));
+  const actions = useActions();
+  const spec = methodSpec(method.kind) as MethodSpec;
+
+  return (
+    <section className="panel method" aria-labelledby="method-title">
+      <h2 id="method-title">Loss method</h2>
+      <div className="field">
+        <label htmlFor="method-kind">Loss method</label>
+        <select
+          id="method-kind"
+          value={method.kind}
+          aria-describedby="method-summary"
+          onChange={(e) => {
+            const kind = e.currentTarget.value;
+            if (isLossKind(kind)) actions.setMethodKind(kind);
+          }}
+        >
+          {METHOD_KINDS.map((kind) => (
+            <option key={kind} value={kind}>
+              {METHODS[kind].label}
+            </option>
+          ))}
+        </select>
+        <p className="field__hint" id="method-summary">
+          {spec.summary}
+        </p>
+      </div>
+      <div className="method__params" key={method.kind}>
+        {spec.params.map((param) => (
+          <ParamField key={param.key} param={param} method={method} stored={stored} />
+        ))}
+        {(spec.choices ?? []).map((choice) => (
+          <ChoiceField key={choice.key} choice={choice} method={method} />
+        ))}
+      </div>
+      <div className="method__foot">
+        <button type="button" onClick={actions.resetMethodDefaults}>
+          Use default values
+        </button>
+        <p className="method__source">
+          Source: {spec.source}
+        </p>
+      </div>
+    </section>
+  );
+}

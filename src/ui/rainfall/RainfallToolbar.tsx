@@ -1,0 +1,51 @@
+import type { ReactNode } from 'react';
+import { totalDepthMm, totalDurationH } from '../../core';
+import { useScenario } from '../../store';
+import { wallClockMs, formatWallDate, formatWallTime } from '../chart/clock';
+import { formatValue } from '../format';
+import { displayUnit, toDisplay, unitText } from '../units';
+
+/** "10 min", "1 h", "1 h 30 min" for a bar duration in hours. */
+export function formatDuration(hours: number): string {
+  // Round to a thousandth of a minute first, so 18 bars of 10 min read "3 h", not "2 h 60 min".
+  const minutes = Math.round(hours * 60 * 1000) / 1000;
+  if (minutes < 60) return `${formatValue(minutes)} min`;
+  const whole = Math.floor(minutes / 60);
+  const rest = Math.round((minutes - whole * 60) * 1000) / 1000;
+  return rest === 0 ? `${formatValue(whole)} h` : `${formatValue(whole)} h ${formatValue(rest)} min`;
+}
+
+/**
+ * The "Rainfall" region above the chart: what the storm is, in a sentence,
+ * and the slot where the rainfall-input tools (paste, draw, bar table, storm
+ * tools; src/ui/storm-input/) mount. They edit the storm through the store's
+ * setStorm / setBarDepth / setBarDuration / insertBar / deleteBar actions.
+ */
+export function RainfallToolbar({ tools }: { tools?: ReactNode }) {
+  const storm = useScenario((s) => s.storm);
+  const units = useScenario((s) => s.units);
+  const n = storm.depthsMm.length;
+  const d = storm.durationsH;
+  let uniform = n > 0;
+  for (let k = 1; k < n && uniform; k++) uniform = d[k] === d[0];
+  const first = d[0];
+  const bars =
+    n === 0
+      ? 'No bars'
+      : uniform && first !== undefined
+        ? `${n} bar${n === 1 ? '' : 's'} of ${formatDuration(first)}`
+        : `${n} bars of mixed durations`;
+  const depth = `${formatValue(toDisplay('depth', totalDepthMm(storm), units))} ${unitText(displayUnit('depth', units))}`;
+  const start = storm.startIso === undefined ? null : wallClockMs(storm.startIso);
+  const when = start === null ? '' : `, from ${formatWallDate(start)} ${formatWallTime(start)}`;
+  return (
+    <section className="rainfall" aria-labelledby="rainfall-title" data-slot="rainfall-tools">
+      <h2 id="rainfall-title">Rainfall</h2>
+      <p className="rainfall__summary" aria-live="polite">
+        {bars}, {depth} in {formatDuration(totalDurationH(storm))}
+        {when}
+      </p>
+      {tools ? <div className="rainfall__tools">{tools}</div> : null}
+    </section>
+  );
+}
