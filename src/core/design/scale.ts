@@ -23,9 +23,10 @@ export function scaleStormToDepth(storm: Storm, depthMm: number): Storm {
     );
   }
   const n = storm.depthsMm.length;
-  const factor = total > 0 ? depthMm / total : 0;
   const depths = new Float64Array(n);
-  for (let k = 0; k < n; k++) depths[k] = (storm.depthsMm[k] as number) * factor;
+  // Each bar's share of the total (≤ 1) times the new depth: a single factor
+  // depthMm / total would overflow for a storm of vanishing total depth.
+  if (total > 0) for (let k = 0; k < n; k++) depths[k] = ((storm.depthsMm[k] as number) / total) * depthMm;
   return {
     durationsH: Float64Array.from(storm.durationsH),
     depthsMm: depths,

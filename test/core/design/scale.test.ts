@@ -44,6 +44,12 @@ describe('scaling a storm to a chosen depth', () => {
     );
   });
 
+  test('a storm of vanishing depth scales without overflow', () => {
+    // Found by the property above: 5e-324 mm (the smallest double) to 1 mm.
+    const scaled = scaleStormToDepth({ durationsH: [1, 1], depthsMm: [5e-324, 0] }, 1);
+    expect(Array.from(scaled.depthsMm)).toEqual([1, 0]);
+  });
+
   test('a dry storm cannot be given rain: it has no pattern', () => {
     const error = thrown(() => scaleStormToDepth({ durationsH: [1, 1], depthsMm: [0, 0] }, 10));
     expect(error).toBeInstanceOf(InputError);
