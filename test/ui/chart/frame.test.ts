@@ -1,0 +1,57 @@
+import { describe, expect, it } from 'vitest';
+import { convertRate } from '../../../src/core';
+import { formatWallTime, wallClockMs } from '../../../src/ui/chart/clock';
+import { MARGIN, barTopsPx, chartFrame } from '../../../src/ui/chart/frame';
+
+const storm = { durationsH: [0.5, 0.5, 0.5, 0.5], depthsMm: [2, 6, 10, 2] }; // peak 20 mm/h
+
+describe('chart frame', () => {
+  it('the rate axis tops out at a round value above the peak, in the units on screen', () => {
+    const si = chartFrame(storm, 800, 300, 'si');
+    expect(si.topDisplay).toBeGreaterThan(20);
+    expect(si.topMmH).toBe(si.topDisplay);
+    expect(si.yTitle).toBe('Rainfall intensity (mm/h)');
+    const us = chartFrame(storm, 800, 300, 'us');
+    expect(us.topDisplay).toBeGreaterThan(convertRate(20, 'mm/h', 'in/h'));
+    expect(us.topMmH).toBeCloseTo(convertRate(us.topDisplay, 'in/h', 'mm/h'), 12);
+    expect(us.yTitle).toBe('Rainfall intensity (in/h)');
+    expect(us.yTicks.map((t) => t.label)).toContain('0.2');
+  });
+
+  it('bar edges run from the left to the right of the plot; tops are the bars’ intensities', () => {
+    const f = chartFrame(storm, 800, 300, 'si');
+    expect(f.edgesPx[0]).toBe(MARGIN.left);
+    expect(f.edgesPx[4]).toBe(800 - MARGIN.right);
+    const tops = barTopsPx(f, storm.depthsMm, storm.durationsH);
+    expect(tops[2]).toBeCloseTo(f.y(20), 12);
+    expect(tops[0]).toBeCloseTo(f.y(4), 12);
+  });
+
+  it('without a start the time axis is hours from the start', () => {
+    const f = chartFrame(storm, 800, 300, 'si');
+    expect(f.xTitle).toBe('Time from storm start (h)');
+    expect(f.xTicks[0]?.label).toBe('0');
+  });
+
+  it('with a start the time axis reads the storm’s own clock, whatever the viewer’s zone', () => {
+    const f = chartFrame({ ...storm, startIso: '2026-07-14T15:00:00+10:00' }, 800, 300, 'si');
+    expect(f.xTicks[0]?.label).toBe('15:00');
+    expect(f.xTicks.map((t) => t.label)).toContain('16:00');
+    expect(f.xTitle).toBe('Clock time, storm from 14 Jul 2026 15:00');
+  });
+
+  it('an empty storm still has a drawable frame', () => {
+    const f = chartFrame({ durationsH: [], depthsMm: [] }, 800, 300, 'si');
+    expect(f.topDisplay).toBe(10);
+    expect(f.edgesPx).toHaveLength(1);
+  });
+});
+
+describe('wall clock', () => {
+  it('reads the fields as written', () => {
+    const t = wallClockMs('2026-07-14T23:45:30.5Z');
+    expect(t).toBe(Date.UTC(2026, 6, 14, 23, 45, 30, 500));
+    expect(formatWallTime(wallClockMs('2026-07-14T09:05-05:00') ?? NaN)).toBe('09:05');
+    expect(wallClockMs('yesterday')).toBeNull();
+  });
+});

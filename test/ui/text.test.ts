@@ -1,0 +1,47 @@
+import { describe, expect, it } from 'vitest';
+import { formatForField, formatPercent, formatValue } from '../../src/ui/format';
+import { parseNumber } from '../../src/ui/parse-number';
+import { formatDuration } from '../../src/ui/rainfall/RainfallToolbar';
+
+describe('reading typed numbers', () => {
+  it('accepts a decimal point or a decimal comma, spaces and exponents', () => {
+    expect(parseNumber(' 12.5 ')).toEqual({ ok: true, value: 12.5 });
+    expect(parseNumber('12,5')).toEqual({ ok: true, value: 12.5 });
+    expect(parseNumber('.5')).toEqual({ ok: true, value: 0.5 });
+    expect(parseNumber('3.')).toEqual({ ok: true, value: 3 });
+    expect(parseNumber('-2')).toEqual({ ok: true, value: -2 });
+    expect(parseNumber('1e3')).toEqual({ ok: true, value: 1000 });
+  });
+  it('refuses anything else, quoting it', () => {
+    expect(parseNumber('')).toEqual({ ok: false, message: 'Enter a number.' });
+    expect(parseNumber('abc')).toEqual({ ok: false, message: '“abc” is not a number.' });
+    expect(parseNumber('1,234.5').ok).toBe(false);
+    expect(parseNumber('1,2,3').ok).toBe(false);
+    expect(parseNumber('12 mm').ok).toBe(false);
+    expect(parseNumber('Infinity').ok).toBe(false);
+    expect(parseNumber('1e999')).toEqual({ ok: false, message: '“1e999” is too large.' });
+  });
+});
+
+describe('formatting', () => {
+  it('results show four significant figures, whole numbers from 1000', () => {
+    expect(formatValue(41.6)).toBe('41.6');
+    expect(formatValue(19.7345)).toBe('19.73');
+    expect(formatValue(0.012345)).toBe('0.01235');
+    expect(formatValue(69973.4)).toBe('69,973');
+    expect(formatValue(-0)).toBe('0');
+    expect(formatValue(Number.NaN)).toBe('—');
+    expect(formatPercent(0.5256)).toBe('52.56 %');
+  });
+  it('fields show up to six significant figures that read back as typed', () => {
+    expect(formatForField(8)).toBe('8');
+    expect(formatForField(14.6612345)).toBe('14.6612');
+    expect(formatForField(0.1968503937)).toBe('0.19685');
+    expect(parseNumber(formatForField(123456.7)).ok).toBe(true);
+  });
+  it('durations read in minutes and hours', () => {
+    expect(formatDuration(10 / 60)).toBe('10 min');
+    expect(formatDuration(18 * (10 / 60))).toBe('3 h');
+    expect(formatDuration(1.5)).toBe('1 h 30 min');
+  });
+});
