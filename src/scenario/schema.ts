@@ -1,0 +1,289 @@
+import * as v from 'valibot';
+import { isInputError, isLossKind, validateStorm, type LossKind, type LossMethod } from '../core';
+import { isIsoDateTime } from './iso-date-time';
+import { fittableParameters, readMethod } from './method-check';
+import { CURRENT_SCENARIO_VERSION, migrate, type RawDocument } from './migrate';
+import {
+  capProblems,
+  describeValue,
+  failure,
+  problem,
+  problemAt,
+  type PathKey,
+  type Problem,
+  type ScenarioResult,
+} from './problems';
+import type { Scenario } from './types';
+
+/**
+ * The most bars a storm may have: a year of one-minute bars is about half
+ * of it. Keeps a crafted document from asking for endless work.
+ */
+export const MAX_BARS = 1_000_000;
+
+/** What each field holds, for "is missing" messages and the schema page. */
+export const FIELD_HELP: Readonly<Record<string, string>> = {
+  version: `the format version, ${CURRENT_SCENARIO_VERSION}`,
+  name: 'the scenario name, text',
+  notes: 'free notes, text (may be empty)',
+  storm: 'the storm: durationsH and depthsMm, one entry per bar',
+  'storm.durationsH': 'the duration of each bar, hours',
+  'storm.depthsMm': 'the rain depth of each bar, mm',
+  catchment: 'the catchment: name and areaM2',
+  'catchment.name': 'the catchment name, text',
+  'catchment.areaM2': 'the catchment area, m², 0 when not known',
+  units: 'the display units, "si" or "us"',
+  method: 'the active loss method, with its kind and parameters',
+  methodMemory: 'the last parameters used for each method, an object keyed by kind (may be empty)',
+  observed: 'the observed runoff to match, or null',
+  'observed.as': 'whether the observed runoff is a "depth" or a "volume"',
+  'observed.value': 'the observed runoff, mm for a depth or m³ for a volume',
+  'observed.parameter': 'the parameter of the active method to fit',
+  'observed.locked': 'whether the fit follows the bars as they change, true or false',
+};
+
+type Message = (issue: v.BaseIssue<unknown>) => string;
+const must = (rule: string): Message => (issue) => `must be ${rule} (got ${describeValue(issue.input)}).`;
+
+// -0 and 0 are the same amount; keep one so that documents compare equal.
+const unsignedZero = (x: number): number => (x === 0 ? 0 : x);
+
+function numberField(rule: string, test: (x: number) => boolean) {
+  const message = must(rule);
+  return v.pipe(v.number(message), v.check(test, message), v.transform(unsignedZero));
+}
+
+const text = () => v.string(must('text'));
+const nonNegative = (x: number): boolean => Number.isFinite(x) && x >= 0;
+const positive = (x: number): boolean => Number.isFinite(x) && x > 0;
+
+function barList<S extends v.GenericSchema<unknown, number>>(item: S, what: string) {
+  return v.pipe(
+    v.array(item, must(`a list of ${what}, one per bar`)),
+    v.maxLength(MAX_BARS, (issue) => `has ${(issue.input as unknown[]).length} bars; a scenario holds at most ${MAX_BARS}.`),
+  );
+}
+
+const isRecord = (x: unknown): x is Record<string, unknown> =>
+  x !== null && typeof x === 'object' && !Array.isArray(x);
+
+/**
+ * An object with the given fields. valibot's object schema also takes a
+ * list (an array is an object), so lists are refused first.
+ */
+function fields<const E extends v.ObjectEntries>(entries: E, what: string) {
+  const message = must(what);
+  return v.pipe(v.custom<Record<string, unknown>>(isRecord, message), v.object(entries, message));
+}
+
+const StormEntries = {
+  durationsH: barList(numberField('a number > 0 (bar duration, hours)', positive), 'durations in hours'),
+  depthsMm: barList(numberField('a number ≥ 0 (rain depth, mm)', nonNegative), 'rain depths in mm'),
+  startIso: v.exactOptional(
+    v.pipe(
+      v.string(must('text: an ISO 8601 date-time such as "2026-07-14T15:00", or left out')),
+      v.check(isIsoDateTime, must('an ISO 8601 date-time such as "2026-07-14T15:00" or "2026-07-14T15:00:00Z"')),
+    ),
+  ),
+};
+
+const CatchmentEntries = {
+  name: text(),
+  areaM2: numberField('a number ≥ 0 (catchment area, m²; 0 when not known)', nonNegative),
+};
+
+const ObservedEntries = {
+  as: v.picklist(['depth', 'volume'], must('"depth" or "volume"')),
+  value: numberField('a number ≥ 0 (mm for a depth, m³ for a volume)', nonNegative),
+  parameter: text(),
+  locked: v.boolean(must('true or false')),
+};
+
+/** Path items for issues raised inside a transform, relative to its input. */
+function issuePath(root: unknown, keys: readonly PathKey[]): [v.IssuePathItem, ...v.IssuePathItem[]] | undefined {
+  const items: v.IssuePathItem[] = [];
+  let input: unknown = root;
+  for (const key of keys) {
+    const value = input !== null && typeof input === 'object' ? (input as Record<PathKey, unknown>)[key] : undefined;
+    items.push(
+      typeof key === 'number'
+        ? { type: 'array', origin: 'value', input: Array.isArray(input) ? input : [], key, value }
+        : { type: 'object', origin: 'value', input: (input ?? {}) as Record<string, unknown>, key, value },
+    );
+    input = value;
+  }
+  const [first, ...rest] = items;
+  return first ? [first, ...rest] : undefined;
+}
+
+const MethodSchema = v.pipe(
+  v.unknown(),
+  v.rawTransform(({ dataset, addIssue, NEVER }) => {
+    const method = readMethod(dataset.value, (keys, message) =>
+      addIssue({ message, path: issuePath(dataset.value, keys) }),
+    );
+    return method ?? NEVER;
+  }),
+);
+
+type MethodMemory = Partial<Record<LossKind, LossMethod>>;
+
+const MethodMemorySchema = v.pipe(
+  v.unknown(),
+  v.rawTransform(({ dataset, addIssue, NEVER }): MethodMemory => {
+    const input = dataset.value;
+    if (input === null || typeof input !== 'object' || Array.isArray(input)) {
+      addIssue({ message: must('an object keyed by loss method kind (it may be empty: {})')({ input } as v.BaseIssue<unknown>) });
+      return NEVER;
+    }
+    const memory: MethodMemory = {};
+    let ok = true;
+    for (const key of Object.keys(input)) {
+      const entry = (input as Record<string, unknown>)[key];
+      if (!isLossKind(key)) {
+        addIssue({ message: 'is not a loss method kind this version of Raincut knows.', path: issuePath(input, [key]) });
+        ok = false;
+        continue;
+      }
+      const method = readMethod(
+        entry,
+        (keys, message) => addIssue({ message, path: issuePath(input, [key, ...keys]) }),
+        key,
+      );
+      if (method) memory[key] = method;
+      else ok = false;
+    }
+    return ok ? memory : NEVER;
+  }),
+);
+
+const DocumentEntries = {
+  version: v.literal(CURRENT_SCENARIO_VERSION, must(`${CURRENT_SCENARIO_VERSION}`)),
+  name: text(),
+  notes: text(),
+  storm: fields(StormEntries, 'an object with durationsH and depthsMm'),
+  catchment: fields(CatchmentEntries, 'an object with name and areaM2'),
+  units: v.picklist(['si', 'us'], must('"si" or "us"')),
+  method: MethodSchema,
+  methodMemory: MethodMemorySchema,
+  observed: v.nullable(fields(ObservedEntries, 'an object with as, value, parameter and locked, or null')),
+};
+
+/**
+ * Checks that need more than one field: bar lists of equal length, the fitted
+ * parameter belonging to the active method, and the core's own storm check
+ * (so a document that passes here is one the core accepts).
+ */
+const crossFieldChecks = v.rawCheck<v.InferOutput<v.ObjectSchema<typeof DocumentEntries, undefined>>>(
+  ({ dataset, addIssue }) => {
+    const doc = dataset.value as Partial<Record<string, unknown>>;
+    const add = (keys: readonly PathKey[], message: string) => addIssue({ message, path: issuePath(doc, keys) });
+    const storm = doc['storm'] as { durationsH?: unknown; depthsMm?: unknown } | undefined;
+    if (storm && Array.isArray(storm.durationsH) && Array.isArray(storm.depthsMm)) {
+      const n = storm.durationsH.length;
+      const m = storm.depthsMm.length;
+      if (n !== m) {
+        add(['storm', 'depthsMm'], `has ${m} bar${m === 1 ? '' : 's'} but storm.durationsH has ${n}; every bar needs both a duration and a depth.`);
+      }
+    }
+    const method = doc['method'] as { kind?: unknown } | undefined;
+    const observed = doc['observed'] as { parameter?: unknown } | null | undefined;
+    if (method && isLossKind(method.kind) && observed && typeof observed.parameter === 'string') {
+      const keys = fittableParameters(method.kind);
+      if (!keys.includes(observed.parameter)) {
+        add(
+          ['observed', 'parameter'],
+          `${describeValue(observed.parameter)} is not a parameter of the active method "${method.kind}" ` +
+            `(it can fit ${keys.join(', ') || 'nothing'}).`,
+        );
+      }
+    }
+    if (!dataset.issues && dataset.typed) {
+      try {
+        validateStorm(dataset.value.storm);
+      } catch (error) {
+        const message = error instanceof Error ? error.message : String(error);
+        const keys: PathKey[] = ['storm'];
+        if (isInputError(error)) {
+          keys.push(error.field);
+          if (error.index !== undefined) keys.push(error.index);
+        }
+        add(keys, message);
+      }
+    }
+  },
+);
+
+/** The valibot schema of the current scenario version (after migration). */
+export const ScenarioSchema = v.pipe(
+  v.custom<Record<string, unknown>>(isRecord, must('a scenario: a JSON object')),
+  v.object(DocumentEntries, must('a scenario: a JSON object')),
+  crossFieldChecks,
+);
+
+// The schema's output must be a Scenario; this fails to compile if they drift.
+type SchemaOutput = v.InferOutput<typeof ScenarioSchema>;
+const outputIsScenario = (x: SchemaOutput): Scenario => x;
+void outputIsScenario;
+
+const NESTED: Readonly<Record<string, readonly string[]>> = {
+  '': Object.keys(DocumentEntries),
+  storm: Object.keys(StormEntries),
+  catchment: Object.keys(CatchmentEntries),
+  observed: Object.keys(ObservedEntries),
+};
+
+/**
+ * Fields the document has but the format does not: reported rather than
+ * dropped, so that saving again never loses something silently.
+ */
+function unknownFields(doc: RawDocument): Problem[] {
+  const found: Problem[] = [];
+  const visit = (value: unknown, keys: readonly string[], known: readonly string[], where: string): void => {
+    if (value === null || typeof value !== 'object' || Array.isArray(value)) return;
+    for (const key of Object.keys(value)) {
+      if (!known.includes(key)) found.push(problemAt([...keys, key], `is not a field of ${where}.`));
+    }
+  };
+  visit(doc, [], NESTED[''] ?? [], `a version ${CURRENT_SCENARIO_VERSION} scenario`);
+  visit(doc['storm'], ['storm'], NESTED['storm'] ?? [], 'the storm');
+  visit(doc['catchment'], ['catchment'], NESTED['catchment'] ?? [], 'the catchment');
+  visit(doc['observed'], ['observed'], NESTED['observed'] ?? [], 'the observed runoff');
+  return found;
+}
+
+function keysOf(issue: v.BaseIssue<unknown>): PathKey[] {
+  return (issue.path ?? []).map((item) => (typeof item.key === 'number' ? item.key : String(item.key)));
+}
+
+function toProblem(issue: v.BaseIssue<unknown>): Problem {
+  const keys = keysOf(issue);
+  const last = issue.path?.[issue.path.length - 1];
+  if (issue.type === 'object' && last?.origin === 'key') {
+    const help = FIELD_HELP[keys.join('.')];
+    return problemAt(keys, help ? `is missing (${help}).` : 'is missing.');
+  }
+  return problemAt(keys, issue.message);
+}
+
+/** Validates a document that is already at the current version. */
+export function validateCurrent(doc: RawDocument): ScenarioResult {
+  const result = v.safeParse(ScenarioSchema, doc);
+  const problems = [...(result.success ? [] : result.issues.map(toProblem)), ...unknownFields(doc)];
+  if (result.success && problems.length === 0) return { ok: true, scenario: result.output };
+  return failure(capProblems(problems));
+}
+
+/**
+ * Reads a scenario document from any way in (link, file, browser storage,
+ * the store): upgrades older versions, then validates every field. Never
+ * throws; every problem names its field path.
+ */
+export function parseScenario(input: unknown): ScenarioResult {
+  if (input === null || typeof input !== 'object' || Array.isArray(input)) {
+    return failure([problem(`A scenario must be a JSON object with a version, a storm and a loss method (got ${describeValue(input)}).`)]);
+  }
+  const migrated = migrate(input as RawDocument);
+  if (!migrated.ok) return failure(migrated.problems);
+  return validateCurrent(migrated.doc);
+}
