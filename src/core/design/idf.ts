@@ -22,8 +22,9 @@ interface IdfUnits {
 /**
  * i = a / (t + b)^c. The shifted power form in which fitted IDF curves are
  * commonly reported (common practice). a > 0, b ≥ 0, 0 < c ≤ 1 (and b > 0
- * when c = 1): then the depth i·t grows with duration at a falling rate,
- * which the alternating block method relies on.
+ * when c = 1): then the depth D = a·t/(t + b)^c grows with duration at a
+ * falling rate (D' ∝ (1 − c)t + b > 0, D'' ∝ −c[(1 − c)t + 2b] < 0), which
+ * the alternating block method relies on.
  */
 export interface IdfShiftedPower extends IdfUnits {
   readonly kind: 'a/(t+b)^c';
@@ -36,7 +37,9 @@ export interface IdfShiftedPower extends IdfUnits {
  * i = a / (t^c + b). The form Chow, Maidment & Mays (1988) Applied Hydrology,
  * section 14.2, write as i = c / (T_d^e + f) (their c, e, f are our a, c, b;
  * section number from memory); their alternating block Example 14.4.1 uses
- * it. Same bounds as the shifted power form.
+ * it. Same bounds as the shifted power form, for the same reason: with
+ * u = t^c, D = a·t/(u + b) has D' ∝ (1 − c)u + b > 0 and
+ * D'' ∝ −[(1 − c)u + (1 + c)b] < 0.
  */
 export interface IdfPowerSum extends IdfUnits {
   readonly kind: 'a/(t^c+b)';

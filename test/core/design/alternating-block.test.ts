@@ -101,8 +101,12 @@ describe('alternating block storm from an IDF formula', () => {
     const storm = alternatingBlockStorm({ idf: denver, durationH: 2, stepH: 10 / 60 });
     const blocksIn = Array.from(storm.depthsMm, (d) => d / 25.4);
 
-    // From the published formula: cumulative depth D_j and block j, in inches.
-    const cumulativeIn = Array.from({ length: 12 }, (_, j) => idfDepthMm(denver, (j + 1) / 6) / 25.4);
+    // From the published formula, written out here: cumulative depth D_j (in)
+    // for T_d = 10j min is i · T_d / 60.
+    const cumulativeIn = Array.from({ length: 12 }, (_, j) => {
+      const tdMin = 10 * (j + 1);
+      return (96.6 / (Math.pow(tdMin, 0.97) + 13.9)) * (tdMin / 60);
+    });
     const incrementsIn = cumulativeIn.map((d, j) => d - (j === 0 ? 0 : (cumulativeIn[j - 1] as number)));
     // Centred arrangement: peak in 50–60 min, then alternately right and left.
     const expectedOrder = [10, 8, 6, 4, 2, 0, 1, 3, 5, 7, 9, 11];
