@@ -18,8 +18,8 @@ export type EventRunoff =
       readonly runoffFraction: number;
       /** runoffMm − observedMm: positive when the design value over-predicts. */
       readonly errorMm: number;
-      /** errorMm as a percentage of observedMm (NaN when nothing was observed). */
-      readonly errorPct: number;
+      /** errorMm as a percentage of observedMm (null when nothing was observed). */
+      readonly errorPct: number | null;
     }
   | {
       readonly id: string;
@@ -77,7 +77,7 @@ export function applyDesignValue(
       runoffMm: result.totalExcessMm,
       runoffFraction: result.runoffFraction,
       errorMm,
-      errorPct: observedMm > 0 ? (100 * errorMm) / observedMm : Number.NaN,
+      errorPct: observedMm > 0 ? (100 * errorMm) / observedMm : null,
     };
   });
 }

@@ -20,8 +20,9 @@ export function pickDesignValue(summary: FitSummary, pick: DesignPick = 'median'
   if (pick !== 'median' && pick !== 'mean' && pick !== 'min' && pick !== 'max') {
     throw new InputError('designValue', `Unknown choice of design value "${String(pick)}"; use median, mean, min, max or a number.`);
   }
-  if (summary.count === 0) {
+  const value = summary[pick];
+  if (summary.count === 0 || value === null) {
     throw new InputError('designValue', `No event has a fitted value, so there is no ${pick} to use; enter a value instead.`);
   }
-  return summary[pick];
+  return value;
 }

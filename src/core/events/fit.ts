@@ -7,21 +7,21 @@ import { validateEventList, type CatchmentEvent } from './event';
 /** One row of the event table: what was observed and what the fit found. */
 export interface EventFit {
   readonly id: string;
-  /** Storm rainfall, mm (NaN when the storm itself is invalid). */
-  readonly rainMm: number;
+  /** Storm rainfall, mm (null when the storm itself is invalid: no NaN leaves the core). */
+  readonly rainMm: number | null;
   /** Observed runoff as given, mm. */
   readonly observedMm: number;
-  /** Observed runoff / rainfall (NaN without rain or without a usable storm). */
-  readonly runoffFraction: number;
+  /** Observed runoff / rainfall (null without rain or without a usable storm). */
+  readonly runoffFraction: number | null;
   /** Exactly what `calibrate` returns for this event alone. */
   readonly result: CalibrationResult;
 }
 
-function rainOf(storm: Storm): number {
+function rainOf(storm: Storm): number | null {
   try {
     validateStorm(storm);
   } catch (error) {
-    if (isInputError(error)) return Number.NaN;
+    if (isInputError(error)) return null;
     throw error;
   }
   return totalDepthMm(storm);
@@ -43,7 +43,7 @@ export function fitEvents(events: readonly CatchmentEvent[], method: LossMethod,
       id: event.id,
       rainMm,
       observedMm,
-      runoffFraction: rainMm > 0 ? observedMm / rainMm : Number.NaN,
+      runoffFraction: rainMm !== null && rainMm > 0 ? observedMm / rainMm : null,
       result: calibrate(event.storm, method, parameter, observedMm),
     };
   });

@@ -6,12 +6,12 @@ export interface FitSummary {
   readonly count: number;
   /** Events without one (their rows say why). */
   readonly withoutAnswer: number;
-  /** The statistics below are NaN when `count` is 0. */
-  readonly mean: number;
+  /** The statistics below are null when `count` is 0 (no NaN leaves the core). */
+  readonly mean: number | null;
   /** Middle value; for an even count the mean of the two middle values. */
-  readonly median: number;
-  readonly min: number;
-  readonly max: number;
+  readonly median: number | null;
+  readonly min: number | null;
+  readonly max: number | null;
 }
 
 /** Count, mean, median, min and max of the fitted values, ignoring events without an answer. */
@@ -21,7 +21,7 @@ export function summariseFits(fits: readonly EventFit[]): FitSummary {
   const count = values.length;
   const withoutAnswer = fits.length - count;
   if (count === 0) {
-    return { count, withoutAnswer, mean: Number.NaN, median: Number.NaN, min: Number.NaN, max: Number.NaN };
+    return { count, withoutAnswer, mean: null, median: null, min: null, max: null };
   }
   values.sort((x, y) => x - y);
   let sum = 0;

@@ -32,7 +32,7 @@ describe('applying a design value to every event', () => {
       expect(row.id).toBe(e.id);
       expectClose(row.runoffMm, e.runoffMm);
       expectClose(row.errorMm, e.errorMm);
-      expectClose(row.errorPct, e.errorPct);
+      expectClose(row.errorPct ?? Number.POSITIVE_INFINITY, e.errorPct);
     });
     expect(okRow(rows[3])).toMatchObject({ rainMm: 20, observedMm: 10, runoffFraction: 0.8 });
   });
@@ -61,7 +61,7 @@ describe('applying a design value to every event', () => {
   test('nothing observed: the error in mm is given, the percentage is not', () => {
     const row = okRow(applyDesignValue([oneBar('z', 10, 0)], defaultMethod('constant'), 'rateMmH', 4)[0]);
     expect(row.errorMm).toBe(6);
-    expect(row.errorPct).toBeNaN();
+    expect(row.errorPct).toBeNull();
   });
 
   test('the other parameters of the method are kept', () => {

@@ -38,10 +38,10 @@ describe('fitting every event of a catchment', () => {
     ]);
     expect(rows[0]?.runoffFraction).toBe(1.2);
     // A broken storm has no rainfall to report; a dry one has no fraction.
-    expect(rows[2]?.rainMm).toBeNaN();
-    expect(rows[2]?.runoffFraction).toBeNaN();
+    expect(rows[2]?.rainMm).toBeNull();
+    expect(rows[2]?.runoffFraction).toBeNull();
     expect(rows[3]?.rainMm).toBe(0);
-    expect(rows[3]?.runoffFraction).toBeNaN();
+    expect(rows[3]?.runoffFraction).toBeNull();
     for (const row of rows) if (!row.result.ok) expect(row.result.message.length).toBeGreaterThan(0);
   });
 
