@@ -88,7 +88,12 @@ export function NumberField({
     <div className={`field${message ? ' field--bad' : ''}`}>
       <label htmlFor={id}>
         {label}
-        {unit ? <span className="field__unit"> ({unit})</span> : null}
+        {unit ? (
+          <>
+            {' '}
+            <span className="field__unit">({unit})</span>
+          </>
+        ) : null}
       </label>
       <div className="field__row">
       <input

@@ -1,0 +1,98 @@
+// @vitest-environment jsdom
+import { screen, within } from '@testing-library/react';
+import { describe, expect, it } from 'vitest';
+import { METHOD_KINDS, METHODS, defaultMethod } from '../../src/core';
+import { coreTotals, mmText, renderWorkbench } from './render';
+import { FOUR_BARS } from './store/fixtures';
+
+describe('the loss-method panel', () => {
+  it('offers every method in the core’s table', () => {
+    renderWorkbench();
+    const picker = screen.getByRole('combobox', { name: 'Loss method' });
+    const options = within(picker).getAllByRole('option').map((o) => o.textContent);
+    expect(options).toEqual(METHOD_KINDS.map((k) => METHODS[k].label));
+  });
+
+  it('shows each parameter of the chosen method with its unit', async () => {
+    const { user } = renderWorkbench();
+    await user.selectOptions(screen.getByRole('combobox', { name: 'Loss method' }), 'initial-continuing');
+    expect(screen.getByRole('textbox', { name: 'Initial loss (mm)' })).toHaveValue('10');
+    expect(screen.getByRole('textbox', { name: 'Continuing loss rate (mm/h)' })).toHaveValue('2.5');
+  });
+
+  it('every method the core lists renders its parameters and choices', async () => {
+    const { user } = renderWorkbench();
+    for (const kind of METHOD_KINDS) {
+      await user.selectOptions(screen.getByRole('combobox', { name: 'Loss method' }), kind);
+      const spec = METHODS[kind];
+      for (const p of spec.params) expect(screen.getByRole('textbox', { name: new RegExp(`^${p.label.replace(/[()]/g, '\\$&')}`) })).toBeInTheDocument();
+      for (const c of spec.choices ?? []) expect(screen.getByLabelText(c.label)).toBeInTheDocument();
+    }
+  });
+
+  it('switching method keeps the storm and brings back each method’s last parameters', async () => {
+    const { user, scenario } = renderWorkbench();
+    const picker = screen.getByRole('combobox', { name: 'Loss method' });
+    const rate = screen.getByRole('textbox', { name: 'Loss rate φ (mm/h)' });
+    await user.clear(rate);
+    await user.type(rate, '6.5');
+    await user.selectOptions(picker, 'proportional');
+    expect(scenario().storm).toBe(FOUR_BARS.storm);
+    expect(screen.getByRole('textbox', { name: 'Runoff coefficient' })).toHaveValue(String(defaultMethod('proportional').coefficient));
+    expect(screen.getByLabelText('Excess depth')).toHaveTextContent(mmText(coreTotals(FOUR_BARS.storm, defaultMethod('proportional')).totalExcessMm));
+    await user.selectOptions(picker, 'constant');
+    expect(screen.getByRole('textbox', { name: 'Loss rate φ (mm/h)' })).toHaveValue('6.5');
+    expect(screen.getByRole('slider', { name: 'Loss rate φ' })).toHaveAttribute('aria-valuenow', '6.5');
+  });
+
+  it('typed values go live as they are typed', async () => {
+    const { user } = renderWorkbench();
+    const rate = screen.getByRole('textbox', { name: 'Loss rate φ (mm/h)' });
+    await user.clear(rate);
+    await user.type(rate, '4');
+    expect(screen.getByLabelText('Excess depth')).toHaveTextContent(mmText(coreTotals(FOUR_BARS.storm, { kind: 'constant', rateMmH: 4 }).totalExcessMm));
+  });
+
+  it('an out-of-range value shows the core’s message beside the field and keeps the typed text', async () => {
+    const { user, scenario } = renderWorkbench({ ...FOUR_BARS, method: { kind: 'proportional', coefficient: 0.5 } });
+    const c = screen.getByRole('textbox', { name: 'Runoff coefficient' });
+    await user.clear(c);
+    await user.type(c, '1.5');
+    expect(c).toHaveValue('1.5');
+    expect(c).toHaveAttribute('aria-invalid', 'true');
+    expect(c).toHaveAccessibleDescription(/Runoff coefficient must be between 0 and 1 \(got 1\.5\)/);
+    // The store keeps the last good value, and leaving the field keeps the text.
+    expect(scenario().method).toEqual({ kind: 'proportional', coefficient: 1 });
+    await user.tab();
+    expect(c).toHaveValue('1.5');
+    await user.clear(c);
+    await user.type(c, '0.3');
+    expect(c).not.toHaveAttribute('aria-invalid');
+    expect(scenario().method).toEqual({ kind: 'proportional', coefficient: 0.3 });
+  });
+
+  it('text that is not a number is named in the message and never stored', async () => {
+    const { user, scenario } = renderWorkbench();
+    const rate = screen.getByRole('textbox', { name: 'Loss rate φ (mm/h)' });
+    await user.clear(rate);
+    await user.type(rate, '5x');
+    expect(rate).toHaveAccessibleDescription(/“5x” is not a number/);
+    expect(scenario().method).toEqual({ kind: 'constant', rateMmH: 5 });
+  });
+
+  it('Escape puts back the stored value', async () => {
+    const { user } = renderWorkbench();
+    const rate = screen.getByRole('textbox', { name: 'Loss rate φ (mm/h)' });
+    await user.clear(rate);
+    await user.type(rate, 'abc{Escape}');
+    expect(rate).toHaveValue('8');
+  });
+
+  it('"Use default values" restores the method’s defaults as one undoable edit', async () => {
+    const { user, scenario } = renderWorkbench();
+    await user.click(screen.getByRole('button', { name: 'Use default values' }));
+    expect(scenario().method).toEqual(defaultMethod('constant'));
+    await user.click(screen.getByRole('button', { name: 'Undo' }));
+    expect(scenario().method).toEqual(FOUR_BARS.method);
+  });
+});
