@@ -1,0 +1,45 @@
+// The text-import layer: pasted or opened text → storm or streamflow record,
+// with every guess an explicit setting and every bad cell a located problem.
+// Pure TypeScript: no React, no DOM.
+export { describeProblem, MAX_LISTED_PROBLEMS, type ImportProblem } from './problems';
+export { parseNumber, detectDecimal, type DecimalMark } from './numbers';
+export {
+  detectSeparator,
+  readTable,
+  normaliseText,
+  SEPARATORS,
+  type Separator,
+  type TableOptions,
+  type TextRow,
+  type TextTable,
+} from './table-text';
+export {
+  parseClock,
+  readTimes,
+  isoAt,
+  guessElapsedKind,
+  guessDateOrder,
+  TIME_KINDS,
+  DATE_ORDERS,
+  type TimeKind,
+  type DateOrder,
+  type ClockReading,
+  type CalendarOrigin,
+  type TimeLine,
+} from './time-values';
+export type { SeriesSettings } from './series';
+export {
+  guessRainImport,
+  guessRainSettings,
+  previewRainImport,
+  applyRainImport,
+  rainHintsFromName,
+  type RainImportSettings,
+  type RainImportPreview,
+  type RainImportResult,
+  type RainValueKind,
+  type RainUnit,
+  type TimeMarks,
+  type CumulativeFrom,
+  type ImportedStorm,
+} from './rain-import';

@@ -1,0 +1,361 @@
+import { DEPTH_UNITS, RATE_UNITS, isInputError, validateStorm, type Storm } from '../core';
+import { describeSteps, formatAmount, formatDuration, formatIsoForPeople, plural } from './describe';
+import { guessLayout, pickValueColumn } from './layout-guess';
+import { parseNumber } from './numbers';
+import { problem, problemList, type ImportProblem, type ProblemList } from './problems';
+import { checkSeriesSettings, checkStep, columnName, readSeries, type Series, type SeriesSettings } from './series';
+import type { TextRow } from './table-text';
+import { formatTimeOfDay, isoAt } from './time-values';
+
+/**
+ * Rainfall from pasted text: one column of values, or a time and a value.
+ *
+ * Conventions (each one a setting the user can change in the preview):
+ *
+ * - Depth or intensity per bar with times: by default a time stamp marks the
+ *   END of its bar (`timeMarks: 'end'`). Gauges and loggers report the rain
+ *   that fell in the interval ending at the stamp, so "10:10  1.2" is 1.2 mm
+ *   between 10:00 and 10:10. Each bar runs from the previous stamp to its own;
+ *   the first bar has no previous stamp and takes the first gap (the step from
+ *   the first stamp to the second). The storm starts one first-gap before the
+ *   first stamp. With `timeMarks: 'start'` a stamp opens its bar, each bar runs
+ *   to the next stamp and the last bar takes the last gap. Elapsed times that
+ *   begin at 0 are guessed as starts (0 is the storm's start), all else as ends.
+ * - Unequal gaps give bars of unequal duration: a gap of 40 min in a 10-min
+ *   record is one 40-min bar holding the rain reported at its end.
+ * - Cumulative depths are readings at instants; bars are the differences
+ *   between successive readings, and a reading below the one before is an
+ *   error. `cumulativeFrom: 'first-value'` (the guess when there are times, or
+ *   when the first value is 0) takes the first reading as the starting level,
+ *   so n readings give n − 1 bars; `'zero'` counts from nothing, so the first
+ *   value is the first bar's depth (with times, that bar takes the first gap).
+ *   `timeMarks` does not apply to cumulative readings.
+ * - Intensities are in mm/h or in/h (the `unit` setting gives the length);
+ *   depth = intensity × bar duration. Inches convert exactly, 1 in = 25.4 mm.
+ * - Without times, bars follow each other at `stepMinutesIfNoTime`.
+ * - The storm is placed on the calendar (`startIso`) only when the times carry
+ *   dates, or when they are times of day and the user gives the date of the
+ *   first one (`dateForTimesOfDay`). Times without a zone give a start without
+ *   a zone ("2024-05-01T09:50:00"), as the demo scenario's start is written.
+ */
+export type RainValueKind = 'depth' | 'intensity' | 'cumulative';
+export type RainUnit = 'mm' | 'in';
+/** Whether a time stamp marks the end (the usual gauge record) or the start of its bar. */
+export type TimeMarks = 'end' | 'start';
+/** Whether cumulative readings count from zero or from the first reading. */
+export type CumulativeFrom = 'zero' | 'first-value';
+
+export interface RainImportSettings extends SeriesSettings {
+  readonly valueKind: RainValueKind;
+  /** mm or in; for intensities, mm/h or in/h. */
+  readonly unit: RainUnit;
+  readonly timeMarks: TimeMarks;
+  readonly cumulativeFrom: CumulativeFrom;
+}
+
+/** A storm as imported: plain arrays, SI units (durations h, depths mm). */
+export interface ImportedStorm extends Storm {
+  readonly durationsH: number[];
+  readonly depthsMm: number[];
+}
+
+export type RainImportResult =
+  | { readonly ok: true; readonly storm: ImportedStorm; readonly summary: string; readonly problems: readonly [] }
+  | { readonly ok: false; readonly summary: string; readonly problems: readonly ImportProblem[] };
+
+/** What the paste dialog shows before anything is applied. */
+export interface RainImportPreview {
+  /** Every guess, as a setting to show and let the user correct. */
+  readonly settings: RainImportSettings;
+  /** One sentence: what was understood, or how many problems stand in the way. */
+  readonly summary: string;
+  readonly header: readonly string[] | null;
+  /** The data rows as split, with their line numbers. */
+  readonly rows: readonly TextRow[];
+  readonly columnCount: number;
+  readonly problems: readonly ImportProblem[];
+}
+
+const VALUE_KIND_WORDS: Record<RainValueKind, string> = {
+  depth: 'depth',
+  intensity: 'intensity',
+  cumulative: 'cumulative depth',
+};
+
+const RAIN_NAME = /rain|precip|depth|\bmm\b|inch|\bin\b|intens|cumul|\bcum\b|accum|mass\b|\bp\b|\bi\b/i;
+const isRainName = (name: string): boolean => RAIN_NAME.test(name);
+
+/** Kind, unit and step that a column name states, e.g. "Intensity (in/h)", "Cumulative rain [mm]", "10-min rain". */
+export function rainHintsFromName(name: string): { kind?: RainValueKind; unit?: RainUnit; stepMinutes?: number } {
+  const n = name.toLowerCase();
+  const hints: { kind?: RainValueKind; unit?: RainUnit; stepMinutes?: number } = {};
+  if (/intens|rate|\/\s*h(?:r|our)?\b|per\s+h(?:ou)?r|mm\/h|in\/h|iph|mmph/.test(n)) hints.kind = 'intensity';
+  else if (/cumul|\bcum\b|accum|mass\b|running/.test(n)) hints.kind = 'cumulative';
+  else if (/depth|increment|per\s+(?:bar|interval|step)/.test(n)) hints.kind = 'depth';
+  if (/\bmm\b|millim/.test(n)) hints.unit = 'mm';
+  else if (/inch|\bin\b|\(in|\[in|in\/h|iph|"/.test(n)) hints.unit = 'in';
+  const step = /(\d+(?:[.,]\d+)?)\s*-?\s*min/.exec(n);
+  if (step && hints.kind !== 'intensity') hints.stepMinutes = Number((step[1] as string).replace(',', '.'));
+  else if (/hourly/.test(n)) hints.stepMinutes = 60;
+  else if (/daily/.test(n)) hints.stepMinutes = 1440;
+  return hints;
+}
+
+/** Readings that only ever rise over several lines are most likely a gauge's cumulative record. */
+function looksCumulative(values: readonly number[]): boolean {
+  const finite = values.filter((v) => !Number.isNaN(v));
+  if (finite.length < 6) return false;
+  for (let i = 1; i < finite.length; i++) if ((finite[i] as number) < (finite[i - 1] as number)) return false;
+  return (finite[finite.length - 1] as number) > (finite[0] as number);
+}
+
+/** Guesses every setting for a rainfall paste. */
+export function guessRainSettings(text: string): RainImportSettings {
+  const layout = guessLayout(text, isRainName);
+  const valueColumn = pickValueColumn(layout, isRainName);
+  const hints = rainHintsFromName(columnName(layout.table, valueColumn));
+  const sample = layout.table.rows.slice(0, 500);
+  const values = sample.map((r) => parseNumber(r.cells[valueColumn - 1] ?? '', layout.decimal));
+  const valueKind: RainValueKind = hints.kind ?? (looksCumulative(values) ? 'cumulative' : 'depth');
+  const hasTimes = layout.timeColumn !== null;
+  let timeMarks: TimeMarks = 'end';
+  if (layout.timeKind === 'elapsed-min' || layout.timeKind === 'elapsed-h') {
+    const firstRow = sample.find((r) => r.cells.length > 0);
+    const firstTime = parseNumber(firstRow?.cells[(layout.timeColumn as number) - 1] ?? '', layout.decimal);
+    if (firstTime === 0) timeMarks = 'start';
+  }
+  const firstValue = values.find((v) => !Number.isNaN(v));
+  const cumulativeFrom: CumulativeFrom = hasTimes || firstValue === 0 ? 'first-value' : 'zero';
+  return {
+    separator: layout.separator,
+    decimal: layout.decimal,
+    skipLines: layout.skipLines,
+    hasHeader: layout.hasHeader,
+    dateColumn: layout.dateColumn,
+    timeColumn: layout.timeColumn,
+    valueColumn,
+    timeKind: layout.timeKind,
+    dateOrder: layout.dateOrder,
+    dateForTimesOfDay: null,
+    stepMinutesIfNoTime: hints.stepMinutes !== undefined && hints.stepMinutes > 0 ? hints.stepMinutes : 60,
+    valueKind,
+    unit: hints.unit ?? 'mm',
+    timeMarks,
+    cumulativeFrom,
+  };
+}
+
+function checkRainSettings(s: RainImportSettings, problems: ProblemList): void {
+  checkSeriesSettings(s, problems);
+  if (!(s.valueKind in VALUE_KIND_WORDS)) {
+    problems.add(problem(0, 0, 'valueKind', String(s.valueKind), 'must be depth, intensity or cumulative.'));
+  }
+  if (s.unit !== 'mm' && s.unit !== 'in') problems.add(problem(0, 0, 'unit', String(s.unit), 'must be mm or in.'));
+  if (s.timeMarks !== 'end' && s.timeMarks !== 'start') {
+    problems.add(problem(0, 0, 'timeMarks', String(s.timeMarks), 'must be end or start.'));
+  }
+  if (s.cumulativeFrom !== 'zero' && s.cumulativeFrom !== 'first-value') {
+    problems.add(problem(0, 0, 'cumulativeFrom', String(s.cumulativeFrom), 'must be zero or first-value.'));
+  }
+}
+
+/** Each cumulative reading must be at least the one before; a fall is reported where it happens. */
+function checkCumulative(series: Series, s: RainImportSettings, problems: ProblemList): void {
+  let prev: { value: number; line: number; cell: string } | null = null;
+  series.table.rows.forEach((row, i) => {
+    const v = series.values[i] as number;
+    if (Number.isNaN(v)) return;
+    const cell = row.cells[s.valueColumn - 1] ?? '';
+    if (prev !== null && v < prev.value) {
+      problems.add(
+        problem(row.line, s.valueColumn, 'cumulative depth', cell,
+          `the cumulative depth falls from ${prev.cell} on line ${prev.line}; cumulative readings cannot decrease (a gauge reset or a typing slip?).`),
+      );
+    }
+    prev = { value: v, line: row.line, cell };
+  });
+}
+
+interface Bars {
+  durationsH: number[];
+  depthsMm: number[];
+  /** Hours from the first time stamp to the storm's start (0 or negative). */
+  startOffsetH: number;
+}
+
+/**
+ * Bars from clean values (all finite, ≥ 0) and, when given, clean times
+ * (strictly rising hours). Adds a problem and returns null when the rows are
+ * too few for the settings.
+ */
+function buildBars(values: readonly number[], hours: readonly number[] | null, s: RainImportSettings, problems: ProblemList): Bars | null {
+  const n = values.length;
+  const cumulative = s.valueKind === 'cumulative';
+  const fromFirst = cumulative && s.cumulativeFrom === 'first-value';
+  if (fromFirst && n < 2) {
+    problems.add(problem(0, 0, 'text', '', 'cumulative readings counted from the first reading need at least two lines; set "count from zero" if the first value is already a depth.'));
+    return null;
+  }
+  const durationsH: number[] = [];
+  let startOffsetH = 0;
+  if (hours === null) {
+    if (!checkStep(s, problems)) return null;
+    const dt = s.stepMinutesIfNoTime / 60;
+    for (let k = fromFirst ? 1 : 0; k < n; k++) durationsH.push(dt);
+  } else if (fromFirst) {
+    for (let k = 1; k < n; k++) durationsH.push((hours[k] as number) - (hours[k - 1] as number));
+  } else if (n === 1) {
+    // One stamp gives no step: the bar takes the step setting.
+    if (!checkStep(s, problems)) return null;
+    const dt = s.stepMinutesIfNoTime / 60;
+    durationsH.push(dt);
+    startOffsetH = s.timeMarks === 'end' || cumulative ? -dt : 0;
+  } else if (s.timeMarks === 'end' || cumulative) {
+    durationsH.push((hours[1] as number) - (hours[0] as number));
+    for (let k = 1; k < n; k++) durationsH.push((hours[k] as number) - (hours[k - 1] as number));
+    startOffsetH = -(durationsH[0] as number);
+  } else {
+    for (let k = 0; k < n - 1; k++) durationsH.push((hours[k + 1] as number) - (hours[k] as number));
+    durationsH.push((hours[n - 1] as number) - (hours[n - 2] as number));
+  }
+  const depthsMm: number[] = [];
+  if (cumulative) {
+    const mm = DEPTH_UNITS[s.unit];
+    let prev = fromFirst ? (values[0] as number) : 0;
+    for (let k = fromFirst ? 1 : 0; k < n; k++) {
+      const v = values[k] as number;
+      depthsMm.push((v - prev) * mm);
+      prev = v;
+    }
+  } else if (s.valueKind === 'intensity') {
+    const mmH = RATE_UNITS[s.unit === 'mm' ? 'mm/h' : 'in/h'];
+    for (let k = 0; k < n; k++) depthsMm.push((values[k] as number) * mmH * (durationsH[k] as number));
+  } else {
+    const mm = DEPTH_UNITS[s.unit];
+    for (let k = 0; k < n; k++) depthsMm.push((values[k] as number) * mm);
+  }
+  return { durationsH, depthsMm, startOffsetH };
+}
+
+function describeTimes(s: RainImportSettings): string {
+  if (s.timeKind === 'none' || s.timeColumn === null) return `without times, at ${formatDuration(s.stepMinutesIfNoTime / 60)} steps`;
+  const kind = s.timeKind === 'clock' ? 'clock times' : s.timeKind === 'elapsed-min' ? 'elapsed minutes' : 'elapsed hours';
+  return `with ${kind} in column ${s.timeColumn}`;
+}
+
+function unitWords(s: RainImportSettings): string {
+  return s.valueKind === 'intensity' ? `${s.unit}/h` : s.unit;
+}
+
+function kindPlural(kind: RainValueKind): string {
+  return kind === 'depth' ? 'depths' : kind === 'intensity' ? 'intensities' : 'cumulative depths';
+}
+
+function failureSummary(series: Series | null, s: RainImportSettings, count: number): string {
+  const lines = series === null ? '' : `Read ${plural(series.table.rows.length, 'data line')} as ${kindPlural(s.valueKind)} in ${unitWords(s)} ${describeTimes(s)}; `;
+  const text = `${plural(count, 'problem')} to fix before importing.`;
+  return lines === '' ? text.charAt(0).toUpperCase() + text.slice(1) : lines + text;
+}
+
+function successSummary(storm: ImportedStorm, startOffsetH: number, series: Series, s: RainImportSettings): string {
+  const n = storm.durationsH.length;
+  let total = 0;
+  for (const p of storm.depthsMm) total += p;
+  const parts: string[] = [];
+  let head = `${plural(n, 'bar')} of ${describeSteps(storm.durationsH)}`;
+  if (storm.startIso !== undefined) head += ` from ${formatIsoForPeople(storm.startIso)}`;
+  else if (series.times !== null && series.times.firstTimeOfDayMs !== null) {
+    const dayMs = 24 * 3_600_000;
+    const startMs = (((series.times.firstTimeOfDayMs + startOffsetH * 3_600_000) % dayMs) + dayMs) % dayMs;
+    head += ` from ${formatTimeOfDay(startMs)} (time of day; no date given)`;
+  }
+  parts.push(head);
+  parts.push(`${kindPlural(s.valueKind)} in ${unitWords(s)}`);
+  parts.push(s.unit === 'in' ? `total ${formatAmount(total / DEPTH_UNITS.in, 3)} in (${formatAmount(total)} mm)` : `total ${formatAmount(total)} mm`);
+  const notes: string[] = [];
+  if (series.times !== null) {
+    if (s.valueKind !== 'cumulative') notes.push(`time stamps mark the ${s.timeMarks} of each bar`);
+  } else {
+    notes.push(`no times, so bars are ${formatDuration(s.stepMinutesIfNoTime / 60)} apart as set`);
+  }
+  if (s.valueKind === 'cumulative') {
+    const first = series.table.rows[0];
+    if (s.cumulativeFrom === 'zero') notes.push('counted from zero');
+    else if (first !== undefined && series.values[0] !== 0) {
+      notes.push(`counted from the first reading, ${first.cells[s.valueColumn - 1] ?? ''} on line ${first.line}`);
+    }
+  }
+  if (s.skipLines > 0) notes.push(`${plural(s.skipLines, 'line')} skipped at the top`);
+  return `${parts.join(', ')}${notes.length > 0 ? `; ${notes.join('; ')}` : ''}.`;
+}
+
+interface RainRun {
+  readonly result: RainImportResult;
+  /** The table as split, or null when the settings did not allow splitting. */
+  readonly series: Series | null;
+}
+
+function fail(series: Series | null, s: RainImportSettings, problems: ProblemList): RainRun {
+  return { result: { ok: false, summary: failureSummary(series, s, problems.count), problems: problems.list() }, series };
+}
+
+function runRainImport(text: string, settings: RainImportSettings): RainRun {
+  const problems = problemList();
+  if (typeof text !== 'string') {
+    problems.add(problem(0, 0, 'text', '', 'there is no text to read.'));
+    return fail(null, settings, problems);
+  }
+  checkRainSettings(settings, problems);
+  if (problems.count > 0) return fail(null, settings, problems);
+  const series = readSeries(text, settings, VALUE_KIND_WORDS[settings.valueKind], problems);
+  if (series.table.rows.length === 0) {
+    problems.add(problem(0, 0, 'text', '', 'no data lines were found; paste a column of values, or times and values.'));
+  }
+  if (settings.valueKind === 'cumulative') checkCumulative(series, settings, problems);
+  if (problems.count > 0) return fail(series, settings, problems);
+
+  const bars = buildBars(series.values, series.times?.hours ?? null, settings, problems);
+  if (bars === null) return fail(series, settings, problems);
+  const origin = series.times?.origin ?? null;
+  const storm: ImportedStorm =
+    origin === null
+      ? { durationsH: bars.durationsH, depthsMm: bars.depthsMm }
+      : { durationsH: bars.durationsH, depthsMm: bars.depthsMm, startIso: isoAt(origin, bars.startOffsetH) };
+  try {
+    // The core's own check, as a last guard: the steps above should make it pass.
+    validateStorm(storm);
+  } catch (error) {
+    const reason = isInputError(error) ? error.message : String(error);
+    problems.add(problem(0, 0, 'text', '', `the storm read from the text is not valid: ${reason}`));
+    return fail(series, settings, problems);
+  }
+  return { result: { ok: true, storm, summary: successSummary(storm, bars.startOffsetH, series, settings), problems: [] }, series };
+}
+
+/**
+ * Reads a storm from pasted text with the given settings. Never throws: any
+ * bad line, cell or setting is returned as a problem, and nothing is
+ * imported unless there are none.
+ */
+export function applyRainImport(text: string, settings: RainImportSettings): RainImportResult {
+  return runRainImport(text, settings).result;
+}
+
+/** The preview for given settings: the table as split, the summary and the problems. */
+export function previewRainImport(text: string, settings: RainImportSettings): RainImportPreview {
+  const { result, series } = runRainImport(text, settings);
+  const table = series?.table ?? null;
+  return {
+    settings,
+    summary: result.summary,
+    header: table?.header?.cells ?? null,
+    rows: table?.rows ?? [],
+    columnCount: table?.columnCount ?? 0,
+    problems: result.problems,
+  };
+}
+
+/** Guesses the settings and returns the preview they give. */
+export function guessRainImport(text: string): RainImportPreview {
+  return previewRainImport(text, guessRainSettings(typeof text === 'string' ? text : ''));
+}

@@ -1,0 +1,192 @@
+import { SEPARATORS, readTable, type Separator, type TextTable } from './table-text';
+import { notANumberReason, parseNumber, type DecimalMark } from './numbers';
+import { problem, type ProblemList } from './problems';
+import {
+  DATE_ORDERS,
+  TIME_KINDS,
+  parseIsoDate,
+  readTimes,
+  type DateOrder,
+  type TimeKind,
+  type TimeLine,
+  type TimeSource,
+} from './time-values';
+
+/**
+ * What rainfall and streamflow imports share: how the text is laid out, where
+ * the time and the value are, and how times are read. Column numbers are
+ * 1-based, as people count them and as problems report them.
+ */
+export interface SeriesSettings {
+  readonly separator: Separator;
+  readonly decimal: DecimalMark;
+  /** Lines at the top of the text to ignore before the header or the data. */
+  readonly skipLines: number;
+  /** The first non-empty line after the skipped ones holds column names. */
+  readonly hasHeader: boolean;
+  /** Column of dates when dates and times of day are in separate columns; else null. */
+  readonly dateColumn: number | null;
+  /** Column of times; null when there are none (then timeKind is 'none'). */
+  readonly timeColumn: number | null;
+  readonly valueColumn: number;
+  readonly timeKind: TimeKind;
+  readonly dateOrder: DateOrder;
+  /** "YYYY-MM-DD": the date of the first time when the times are times of day without a date; null keeps them off the calendar. */
+  readonly dateForTimesOfDay: string | null;
+  /** Step between values when there are no times (and the single bar's length when only one time is given), minutes. */
+  readonly stepMinutesIfNoTime: number;
+}
+
+/** A column of values, with their times, read off the table. Arrays follow `table.rows`. */
+export interface Series {
+  readonly table: TextTable;
+  /** Values in the unit they were pasted in; NaN where unreadable. */
+  readonly values: number[];
+  /** Times, or null when there is no time column. */
+  readonly times: TimeLine | null;
+}
+
+const isWholeAtLeast = (v: unknown, min: number): v is number => typeof v === 'number' && Number.isInteger(v) && v >= min;
+
+function checkColumn(v: unknown, key: string, nullable: boolean, problems: ProblemList): boolean {
+  if (nullable && v === null) return true;
+  if (isWholeAtLeast(v, 1)) return true;
+  problems.add(problem(0, 0, key, String(v), `must be a column number, 1 or more${nullable ? ', or none' : ''}.`));
+  return false;
+}
+
+/** Adds a problem for each setting that is out of range or contradicts another. */
+export function checkSeriesSettings(s: SeriesSettings, problems: ProblemList): void {
+  if (!SEPARATORS.includes(s.separator)) {
+    problems.add(problem(0, 0, 'separator', String(s.separator), 'must be tab, comma, semicolon or none.'));
+  }
+  if (s.decimal !== 'point' && s.decimal !== 'comma') {
+    problems.add(problem(0, 0, 'decimal', String(s.decimal), 'must be point or comma.'));
+  }
+  if (!isWholeAtLeast(s.skipLines, 0)) {
+    problems.add(problem(0, 0, 'skipLines', String(s.skipLines), 'must be a whole number of lines, 0 or more.'));
+  }
+  if (typeof s.hasHeader !== 'boolean') {
+    problems.add(problem(0, 0, 'hasHeader', String(s.hasHeader), 'must be true or false.'));
+  }
+  const valueOk = checkColumn(s.valueColumn, 'valueColumn', false, problems);
+  const timeOk = checkColumn(s.timeColumn, 'timeColumn', true, problems);
+  const dateOk = checkColumn(s.dateColumn, 'dateColumn', true, problems);
+  if (!TIME_KINDS.includes(s.timeKind)) {
+    problems.add(problem(0, 0, 'timeKind', String(s.timeKind), 'must be clock, elapsed-min, elapsed-h or none.'));
+  } else if (timeOk && (s.timeKind === 'none') !== (s.timeColumn === null)) {
+    problems.add(
+      s.timeColumn === null
+        ? problem(0, 0, 'timeColumn', 'none', `the time kind is ${s.timeKind} but no time column is chosen.`)
+        : problem(0, 0, 'timeKind', 'none', `column ${s.timeColumn} is chosen for times but the time kind is none.`),
+    );
+  }
+  if (valueOk && timeOk && s.timeColumn !== null && s.timeColumn === s.valueColumn) {
+    problems.add(problem(0, 0, 'timeColumn', String(s.timeColumn), 'the time column and the value column must differ.'));
+  }
+  if (dateOk && s.dateColumn !== null) {
+    if (s.dateColumn === s.valueColumn || s.dateColumn === s.timeColumn) {
+      problems.add(problem(0, 0, 'dateColumn', String(s.dateColumn), 'the date column must differ from the time and value columns.'));
+    }
+    if (s.timeColumn === null || s.timeKind !== 'clock') {
+      problems.add(problem(0, 0, 'dateColumn', String(s.dateColumn), 'a date column needs a time column of clock times beside it.'));
+    }
+  }
+  if (!DATE_ORDERS.includes(s.dateOrder)) {
+    problems.add(problem(0, 0, 'dateOrder', String(s.dateOrder), 'must be day-month or month-day.'));
+  }
+  if (s.dateForTimesOfDay !== null) {
+    const d = typeof s.dateForTimesOfDay === 'string' ? parseIsoDate(s.dateForTimesOfDay) : null;
+    if (d === null || !d.ok) {
+      problems.add(problem(0, 0, 'dateForTimesOfDay', String(s.dateForTimesOfDay), d === null ? 'must be a date or none.' : d.reason));
+    }
+  }
+  if (s.timeKind === 'none') checkStep(s, problems);
+}
+
+/** The step setting must be a positive, finite number of minutes wherever it is used. */
+export function checkStep(s: SeriesSettings, problems: ProblemList): boolean {
+  const v = s.stepMinutesIfNoTime;
+  if (typeof v === 'number' && v > 0 && Number.isFinite(v)) return true;
+  problems.add(problem(0, 0, 'stepMinutesIfNoTime', String(v), 'the time step must be a number of minutes greater than zero.'));
+  return false;
+}
+
+function capitalised(field: string): string {
+  return field.charAt(0).toUpperCase() + field.slice(1);
+}
+
+/**
+ * Reads the value column (and the time column) of every data row. Values must
+ * be numbers, zero or more: every one that is not adds a problem naming its
+ * line, column and field. Assumes the settings passed checkSeriesSettings.
+ */
+export function readSeries(text: string, s: SeriesSettings, field: string, problems: ProblemList): Series {
+  const table = readTable(text, s);
+  for (const p of table.problems) problems.add(p);
+  const { rows, columnCount } = table;
+  const columnExists = (key: string, c: number | null): boolean => {
+    if (c === null || rows.length === 0 || c <= columnCount) return true;
+    problems.add(problem(0, c, key, String(c), `there is no column ${c}: the data has ${columnCount} column${columnCount === 1 ? '' : 's'}.`));
+    return false;
+  };
+  const valueThere = columnExists('valueColumn', s.valueColumn);
+  const useTimes = s.timeKind !== 'none' && s.timeColumn !== null;
+  const timeThere = useTimes && columnExists('timeColumn', s.timeColumn);
+  const dateThere = useTimes && columnExists('dateColumn', s.dateColumn);
+
+  const values = new Array<number>(rows.length).fill(NaN);
+  const sources: TimeSource[] = [];
+  const sourceRow: number[] = [];
+  for (let i = 0; i < rows.length; i++) {
+    const { line, cells } = rows[i]!;
+    if (cells.length === 0) {
+      problems.add(problem(line, 0, 'line', '', `the line is empty, so its ${field} is missing; remove the line or fill in the value.`));
+      continue;
+    }
+    if (valueThere) {
+      const cell = cells[s.valueColumn - 1];
+      if (cell === undefined || cell === '') {
+        const only = cell === undefined ? ` (the line has ${cells.length} column${cells.length === 1 ? '' : 's'})` : '';
+        problems.add(problem(line, s.valueColumn, field, '', `the ${field} is missing${only}.`));
+      } else {
+        const v = parseNumber(cell, s.decimal);
+        if (Number.isNaN(v)) problems.add(problem(line, s.valueColumn, field, cell, notANumberReason(cell, s.decimal)));
+        else if (v < 0) problems.add(problem(line, s.valueColumn, field, cell, `${capitalised(field)} cannot be negative.`));
+        else values[i] = v;
+      }
+    }
+    if (timeThere && dateThere) {
+      const cell = cells[(s.timeColumn as number) - 1] ?? '';
+      const dateCell = s.dateColumn === null ? undefined : (cells[s.dateColumn - 1] ?? '');
+      sources.push(dateCell === undefined ? { line, cell } : { line, cell, dateCell });
+      sourceRow.push(i);
+    }
+  }
+  let times: TimeLine | null = null;
+  if (useTimes) {
+    const dateForTimesOfDay = s.dateForTimesOfDay === null ? null : parseIsoDate(s.dateForTimesOfDay);
+    const line = readTimes(
+      sources,
+      {
+        kind: s.timeKind as Exclude<TimeKind, 'none'>,
+        decimal: s.decimal,
+        dateOrder: s.dateOrder,
+        dateForTimesOfDay: dateForTimesOfDay !== null && dateForTimesOfDay.ok ? dateForTimesOfDay.value : null,
+        column: s.timeColumn as number,
+        dateColumn: s.dateColumn,
+      },
+      problems,
+    );
+    const hours = new Array<number>(rows.length).fill(NaN);
+    for (let k = 0; k < sourceRow.length; k++) hours[sourceRow[k]!] = line.hours[k]!;
+    times = { hours, origin: line.origin, firstTimeOfDayMs: line.firstTimeOfDayMs };
+  }
+  return { table, values, times };
+}
+
+/** The header's name for a 1-based column, or ''. */
+export function columnName(table: TextTable, column: number | null): string {
+  if (column === null || table.header === null) return '';
+  return table.header.cells[column - 1] ?? '';
+}
