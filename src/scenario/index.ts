@@ -5,4 +5,13 @@ export type { Problem, ScenarioResult } from './problems';
 export { MAX_LISTED_PROBLEMS } from './problems';
 export { parseScenario, ScenarioSchema, FIELD_HELP, MAX_BARS } from './schema';
 export { CURRENT_SCENARIO_VERSION, MIGRATIONS, migrate, type Migration, type MigrationResult, type RawDocument } from './migrate';
+export {
+  encodeScenarioLink,
+  decodeScenarioLink,
+  isScenarioLink,
+  LINK_FORMAT_VERSION,
+  LINK_PREFIX,
+  MAX_LINK_CHARS,
+  MAX_LINK_JSON_BYTES,
+} from './link';
 export { DEMO_SCENARIO } from './demo';
