@@ -43,3 +43,14 @@ export {
   type CumulativeFrom,
   type ImportedStorm,
 } from './rain-import';
+export {
+  guessFlowImport,
+  guessFlowSettings,
+  previewFlowImport,
+  applyFlowImport,
+  flowUnitFromName,
+  type FlowImportSettings,
+  type FlowImportPreview,
+  type FlowImportResult,
+  type FlowRecord,
+} from './flow-import';

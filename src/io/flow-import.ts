@@ -1,0 +1,179 @@
+import { DISCHARGE_UNITS, UNIT_LABELS, type DischargeUnit } from '../core';
+import { describeSteps, formatAmount, isRegular, formatDuration, formatIsoForPeople, plural } from './describe';
+import { guessLayout, pickValueColumn } from './layout-guess';
+import { problem, problemList, type ImportProblem, type ProblemList } from './problems';
+import { checkSeriesSettings, checkStep, columnName, readSeries, type Series, type SeriesSettings } from './series';
+import type { TextRow } from './table-text';
+import { formatTimeOfDay, isoAt } from './time-values';
+
+/**
+ * A streamflow record from pasted text: a time and a discharge per line (or
+ * discharges alone at a set step). Each time stamp is the instant of its
+ * sample; steps may be irregular. Times become hours after the first sample;
+ * discharges become m³/s (L/s × 10⁻³, ft³/s × 0.3048³, both exact).
+ */
+export interface FlowImportSettings extends SeriesSettings {
+  readonly unit: DischargeUnit;
+}
+
+/** A discharge record in SI: sample times in hours from the first sample, discharge in m³/s. */
+export interface FlowRecord {
+  readonly timesH: number[];
+  readonly dischargeM3s: number[];
+  /** ISO 8601 date-time of the first sample, when the times carry dates (or a date was given for times of day). */
+  readonly startIso?: string;
+}
+
+export type FlowImportResult =
+  | { readonly ok: true; readonly record: FlowRecord; readonly summary: string; readonly problems: readonly [] }
+  | { readonly ok: false; readonly summary: string; readonly problems: readonly ImportProblem[] };
+
+export interface FlowImportPreview {
+  readonly settings: FlowImportSettings;
+  readonly summary: string;
+  readonly header: readonly string[] | null;
+  readonly rows: readonly TextRow[];
+  readonly columnCount: number;
+  readonly problems: readonly ImportProblem[];
+}
+
+const FLOW_NAME = /flow|discharge|\bq\b|m3|m³|cumec|cms|cfs|l\/s|lps|ft3|ft³|cusec/i;
+const isFlowName = (name: string): boolean => FLOW_NAME.test(name);
+
+/** The discharge unit a column name states: "Q (L/s)", "Flow [cfs]", "Discharge m3/s". */
+export function flowUnitFromName(name: string): DischargeUnit | undefined {
+  const n = name.toLowerCase();
+  if (/l\/s|\blps\b|litre|liter|\bl\s*s-1/.test(n)) return 'L/s';
+  if (/cfs|ft3|ft³|ft\^3|cusec|cubic\s+f(?:ee|oo)t/.test(n)) return 'ft3/s';
+  if (/m3|m³|m\^3|cumec|\bcms\b|cubic\s+met/.test(n)) return 'm3/s';
+  return undefined;
+}
+
+/** Guesses every setting for a streamflow paste. */
+export function guessFlowSettings(text: string): FlowImportSettings {
+  const layout = guessLayout(text, isFlowName);
+  const valueColumn = pickValueColumn(layout, isFlowName);
+  const name = columnName(layout.table, valueColumn);
+  const step = /(\d+(?:[.,]\d+)?)\s*-?\s*min/i.exec(name);
+  const stepMinutes = step ? Number((step[1] as string).replace(',', '.')) : /hourly/i.test(name) ? 60 : /daily/i.test(name) ? 1440 : 15;
+  return {
+    separator: layout.separator,
+    decimal: layout.decimal,
+    skipLines: layout.skipLines,
+    hasHeader: layout.hasHeader,
+    dateColumn: layout.dateColumn,
+    timeColumn: layout.timeColumn,
+    valueColumn,
+    timeKind: layout.timeKind,
+    dateOrder: layout.dateOrder,
+    dateForTimesOfDay: null,
+    stepMinutesIfNoTime: stepMinutes > 0 ? stepMinutes : 15,
+    unit: flowUnitFromName(name) ?? 'm3/s',
+  };
+}
+
+function checkFlowSettings(s: FlowImportSettings, problems: ProblemList): void {
+  checkSeriesSettings(s, problems);
+  if (!Object.prototype.hasOwnProperty.call(DISCHARGE_UNITS, s.unit)) {
+    problems.add(problem(0, 0, 'unit', String(s.unit), 'must be m3/s, L/s or ft3/s.'));
+  }
+}
+
+function unitLabel(unit: DischargeUnit): string {
+  return UNIT_LABELS[unit] ?? unit;
+}
+
+function describeTimes(s: FlowImportSettings): string {
+  if (s.timeKind === 'none' || s.timeColumn === null) return `without times, ${formatDuration(s.stepMinutesIfNoTime / 60)} apart`;
+  const kind = s.timeKind === 'clock' ? 'clock times' : s.timeKind === 'elapsed-min' ? 'elapsed minutes' : 'elapsed hours';
+  return `with ${kind} in column ${s.timeColumn}`;
+}
+
+function failureSummary(series: Series | null, s: FlowImportSettings, count: number): string {
+  const text = `${plural(count, 'problem')} to fix before importing.`;
+  if (series === null) return text.charAt(0).toUpperCase() + text.slice(1);
+  return `Read ${plural(series.table.rows.length, 'data line')} as discharge in ${unitLabel(s.unit)} ${describeTimes(s)}; ${text}`;
+}
+
+function successSummary(record: FlowRecord, series: Series, s: FlowImportSettings): string {
+  const { timesH, dischargeM3s } = record;
+  const n = timesH.length;
+  const steps: number[] = [];
+  for (let k = 1; k < n; k++) steps.push((timesH[k] as number) - (timesH[k - 1] as number));
+  let peakAt = 0;
+  for (let k = 1; k < n; k++) if ((dischargeM3s[k] as number) > (dischargeM3s[peakAt] as number)) peakAt = k;
+  const spacing = isRegular(steps) ? `every ${describeSteps(steps)}` : `${describeSteps(steps).replace(' (irregular steps)', '')} apart (irregular steps)`;
+  let head = `${plural(n, 'sample')} ${spacing}`;
+  if (record.startIso !== undefined) head += ` from ${formatIsoForPeople(record.startIso)}`;
+  else if (series.times !== null && series.times.firstTimeOfDayMs !== null) {
+    head += ` from ${formatTimeOfDay(series.times.firstTimeOfDayMs)} (time of day; no date given)`;
+  }
+  head += `, spanning ${formatDuration(timesH[n - 1] as number)}`;
+  const peak = (dischargeM3s[peakAt] as number) / DISCHARGE_UNITS[s.unit];
+  const peakRow = series.table.rows[peakAt];
+  const parts = [head, `discharge in ${unitLabel(s.unit)}`, `peak ${formatAmount(peak, 3)} ${unitLabel(s.unit)}${peakRow ? ` on line ${peakRow.line}` : ''}`];
+  const notes: string[] = [];
+  if (series.times === null) notes.push(`no times, so samples are ${formatDuration(s.stepMinutesIfNoTime / 60)} apart as set`);
+  if (s.skipLines > 0) notes.push(`${plural(s.skipLines, 'line')} skipped at the top`);
+  return `${parts.join(', ')}${notes.length > 0 ? `; ${notes.join('; ')}` : ''}.`;
+}
+
+interface FlowRun {
+  readonly result: FlowImportResult;
+  readonly series: Series | null;
+}
+
+function fail(series: Series | null, s: FlowImportSettings, problems: ProblemList): FlowRun {
+  return { result: { ok: false, summary: failureSummary(series, s, problems.count), problems: problems.list() }, series };
+}
+
+function runFlowImport(text: string, settings: FlowImportSettings): FlowRun {
+  const problems = problemList();
+  if (typeof text !== 'string') {
+    problems.add(problem(0, 0, 'text', '', 'there is no text to read.'));
+    return fail(null, settings, problems);
+  }
+  checkFlowSettings(settings, problems);
+  if (problems.count > 0) return fail(null, settings, problems);
+  const series = readSeries(text, settings, 'discharge', problems);
+  const n = series.table.rows.length;
+  if (n === 0) problems.add(problem(0, 0, 'text', '', 'no data lines were found; paste times and discharges.'));
+  else if (n === 1) problems.add(problem(0, 0, 'text', '', 'a streamflow record needs at least two samples; only one line was found.'));
+  if (problems.count > 0) return fail(series, settings, problems);
+
+  const factor = DISCHARGE_UNITS[settings.unit];
+  const dischargeM3s = series.values.map((v) => v * factor);
+  let timesH: number[];
+  if (series.times === null) {
+    if (!checkStep(settings, problems)) return fail(series, settings, problems);
+    const dt = settings.stepMinutesIfNoTime / 60;
+    timesH = series.values.map((_, k) => k * dt);
+  } else timesH = series.times.hours.slice();
+  const origin = series.times?.origin ?? null;
+  const record: FlowRecord = origin === null ? { timesH, dischargeM3s } : { timesH, dischargeM3s, startIso: isoAt(origin, 0) };
+  return { result: { ok: true, record, summary: successSummary(record, series, settings), problems: [] }, series };
+}
+
+/** Reads a streamflow record with the given settings. Never throws; bad input comes back as problems. */
+export function applyFlowImport(text: string, settings: FlowImportSettings): FlowImportResult {
+  return runFlowImport(text, settings).result;
+}
+
+/** The preview for given settings: the table as split, the summary and the problems. */
+export function previewFlowImport(text: string, settings: FlowImportSettings): FlowImportPreview {
+  const { result, series } = runFlowImport(text, settings);
+  const table = series?.table ?? null;
+  return {
+    settings,
+    summary: result.summary,
+    header: table?.header?.cells ?? null,
+    rows: table?.rows ?? [],
+    columnCount: table?.columnCount ?? 0,
+    problems: result.problems,
+  };
+}
+
+/** Guesses the settings and returns the preview they give. */
+export function guessFlowImport(text: string): FlowImportPreview {
+  return previewFlowImport(text, guessFlowSettings(typeof text === 'string' ? text : ''));
+}
