@@ -1,0 +1,171 @@
+import { InputError } from './errors';
+import { barEdgesH, totalDurationH, validateStorm, type Storm } from './storm';
+
+/**
+ * Whole-storm edits behind the workbench's storm tools: resampling to another
+ * time step, scaling by a factor, an empty storm to draw on, and moving the
+ * boundary between two bars. Each validates its input, leaves it unchanged and
+ * returns a new storm (durations h, depths mm, start kept). Setting a total
+ * depth is the design core's `scaleStormToDepth`.
+ */
+
+/**
+ * Most bars a tool may make. Our own guard, so that a step typed in the wrong
+ * unit (seconds as minutes) is refused instead of allocating millions of bars.
+ */
+export const MAX_TOOL_BARS = 1_000_000;
+
+/** Steps are typed in minutes (10 min = 0.1666… h), so "a whole number of steps" is judged to rounding. */
+const STEP_REL_TOL = 1e-9;
+
+function keepStart(storm: Storm): { startIso?: string } {
+  return storm.startIso === undefined ? {} : { startIso: storm.startIso };
+}
+
+function checkStep(stepH: number): void {
+  if (typeof stepH !== 'number' || !Number.isFinite(stepH) || !(stepH > 0)) {
+    throw new InputError('stepH', `The time step must be a finite number of hours greater than zero (got ${String(stepH)}).`);
+  }
+}
+
+/**
+ * The storm redistributed onto bars of `stepH` hours from its start, with the
+ * total depth kept. The last bar is shorter when the storm's duration is not a
+ * whole number of steps (the storm keeps its length; no dry time is added).
+ *
+ * Derivation: a hyetograph bar stands for rain falling at a constant
+ * intensity over the bar (intensity = depth / duration; that is what the bar
+ * draws). The rain falling in a new bar [s, s′) is then the integral of that
+ * piecewise-constant intensity over [s, s′):
+ *
+ *     P′_j = Σ_k P_k · |[t_k, t_k+1) ∩ [s_j, s_j+1)| / Δt_k
+ *
+ * Each old bar's depth is shared between the new bars it overlaps in
+ * proportion to the overlap, so the total is conserved whatever the steps;
+ * when the new step is a multiple of the old one (the steps nest) this is a
+ * plain sum of whole bars, and when the old step is a multiple of the new one
+ * each bar is split evenly. It is the unique redistribution that conserves
+ * every old bar's depth and adds no shape inside a bar. In floating point the
+ * last share of each old bar is what remains of its depth, so the shares of
+ * every old bar add back to its depth to rounding.
+ */
+export function resampleStorm(storm: Storm, stepH: number): Storm {
+  validateStorm(storm);
+  checkStep(stepH);
+  const n = storm.depthsMm.length;
+  if (n === 0) return { durationsH: new Float64Array(0), depthsMm: new Float64Array(0), ...keepStart(storm) };
+  const totalH = totalDurationH(storm);
+  const steps = totalH / stepH;
+  if (!(steps <= MAX_TOOL_BARS * (1 + STEP_REL_TOL))) {
+    throw new InputError(
+      'stepH',
+      `A step of ${String(stepH)} h makes more than ${MAX_TOOL_BARS} bars of this ${String(totalH)} h storm; check the step's unit.`,
+    );
+  }
+  // A step that divides the storm to rounding gives bars of exactly that step
+  // (3 h in steps of 10/60 h is 18 bars of 10 min, not 17 and a sliver).
+  const nearest = Math.round(steps);
+  const divides = nearest >= 1 && Math.abs(steps - nearest) <= STEP_REL_TOL * steps;
+  const m = divides ? nearest : Math.floor(steps) + 1;
+
+  const durationsH = new Float64Array(m).fill(stepH);
+  if (!divides) durationsH[m - 1] = m === 1 ? totalH : totalH - (m - 1) * stepH;
+  // New bar j ends at (j + 1)·stepH; the last ends with the storm.
+  const endOf = (j: number): number => (j === m - 1 ? Infinity : (j + 1) * stepH);
+
+  const t = barEdgesH(storm);
+  const p = storm.depthsMm;
+  const d = storm.durationsH;
+  const depthsMm = new Float64Array(m);
+  let j = 0;
+  let shared = 0; // depth of old bar k given to new bars so far
+  for (let k = 0; k < n; ) {
+    const oldEnd = t[k + 1] as number;
+    const newEnd = endOf(j);
+    const depth = p[k] as number;
+    if (oldEnd <= newEnd) {
+      // Old bar k ends inside new bar j: j takes what is left of it.
+      const rest = depth - shared;
+      depthsMm[j] = (depthsMm[j] as number) + (rest > 0 ? rest : 0);
+      shared = 0;
+      k++;
+      if (oldEnd === newEnd) j++;
+    } else {
+      // Old bar k runs past the end of new bar j: j takes the overlapping share.
+      const from = Math.max(t[k] as number, j * stepH);
+      const overlap = newEnd - from;
+      let share = overlap > 0 ? (depth * overlap) / (d[k] as number) : 0;
+      if (share > depth - shared) share = depth - shared;
+      depthsMm[j] = (depthsMm[j] as number) + share;
+      shared += share;
+      j++;
+    }
+  }
+  return { durationsH, depthsMm, ...keepStart(storm) };
+}
+
+/** Every bar's depth multiplied by `factor` (≥ 0). */
+export function scaleStormByFactor(storm: Storm, factor: number): Storm {
+  validateStorm(storm);
+  if (typeof factor !== 'number' || !Number.isFinite(factor) || !(factor >= 0)) {
+    throw new InputError('factor', `The scale factor must be a finite number, zero or more (got ${String(factor)}).`);
+  }
+  const n = storm.depthsMm.length;
+  const depthsMm = new Float64Array(n);
+  for (let k = 0; k < n; k++) {
+    const v = (storm.depthsMm[k] as number) * factor;
+    if (!Number.isFinite(v)) {
+      throw new InputError('factor', `Bar ${k + 1} would hold more rain than can be stored after scaling by ${String(factor)}.`, k);
+    }
+    depthsMm[k] = v;
+  }
+  return { durationsH: Float64Array.from(storm.durationsH), depthsMm, ...keepStart(storm) };
+}
+
+/** `count` dry bars of `stepH` hours each: a storm to draw on. */
+export function emptyStorm(stepH: number, count: number, startIso?: string): Storm {
+  checkStep(stepH);
+  if (typeof count !== 'number' || !Number.isInteger(count) || count < 1 || count > MAX_TOOL_BARS) {
+    throw new InputError('count', `The number of bars must be a whole number from 1 to ${MAX_TOOL_BARS} (got ${String(count)}).`);
+  }
+  const storm: Storm = {
+    durationsH: new Float64Array(count).fill(stepH),
+    depthsMm: new Float64Array(count),
+    ...(startIso === undefined ? {} : { startIso }),
+  };
+  validateStorm(storm);
+  return storm;
+}
+
+/**
+ * Moves the boundary between bar k − 1 and bar k (0-based k ≥ 1) to `startH`
+ * hours after the storm's start: bar k − 1 ends and bar k starts there, every
+ * other bar keeps its times, and each bar keeps its depth (so the two bars'
+ * intensities change). The new start must fall strictly inside the span of
+ * the two bars.
+ */
+export function withBarStartH(storm: Storm, k: number, startH: number): Storm {
+  validateStorm(storm);
+  const n = storm.depthsMm.length;
+  if (!Number.isInteger(k) || k < 1 || k >= n) {
+    throw new InputError(
+      'durationsH',
+      n < 2 ? 'The storm has no boundary between bars to move.' : `Only bars 2 to ${n} have a start that can move (got bar ${String(k + 1)}).`,
+      Number.isInteger(k) ? k : undefined,
+    );
+  }
+  const edges = barEdgesH(storm);
+  const lo = edges[k - 1] as number;
+  const hi = edges[k + 1] as number;
+  if (typeof startH !== 'number' || !(startH > lo) || !(startH < hi)) {
+    throw new InputError(
+      'durationsH',
+      `Bar ${k + 1} must start after bar ${k} starts (${String(lo)} h) and before it itself ends (${String(hi)} h); got ${String(startH)} h.`,
+      k,
+    );
+  }
+  const durationsH = Float64Array.from(storm.durationsH);
+  durationsH[k - 1] = startH - lo;
+  durationsH[k] = hi - startH;
+  return { durationsH, depthsMm: Float64Array.from(storm.depthsMm), ...keepStart(storm) };
+}
