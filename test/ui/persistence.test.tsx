@@ -3,7 +3,7 @@ import { screen } from '@testing-library/react';
 import { describe, expect, it } from 'vitest';
 import { DEMO_SCENARIO } from '../../src/scenario/demo';
 import { SET_ASIDE_PREFIX, STORAGE_KEY, loadScenario } from '../../src/store';
-import { CAUTION_TEXT } from '../../src/ui/layout/Caution';
+import { CAUTION_TEXT } from '../../src/scenario';
 import { renderWorkbench } from './render';
 import { FOUR_BARS, memoryStorage } from './store/fixtures';
 
@@ -37,7 +37,7 @@ describe('opening the workbench from saved data', () => {
   it('the caution is always on screen', () => {
     renderWorkbench();
     expect(screen.getByRole('note', { name: 'Caution' })).toHaveTextContent(CAUTION_TEXT);
-    expect(CAUTION_TEXT).toMatch(/Screening estimates/);
+    expect(CAUTION_TEXT).toMatch(/screening/);
     expect(CAUTION_TEXT).toMatch(/local drainage criteria/);
     expect(CAUTION_TEXT).toMatch(/licensed professional/);
   });

@@ -1,8 +1,6 @@
-/** The caution the design asks to show once, plainly (DESIGN.md, "Cautions shown to the user"). */
-export const CAUTION_TEXT =
-  'Screening estimates for calibration support. Loss parameters vary between storms and catchments. ' +
-  'Designs that affect safety or property must follow the local drainage criteria and be reviewed by a licensed professional.';
+import { CAUTION_TEXT } from '../../scenario';
 
+/** The caution shown once, plainly (DESIGN.md, "Cautions shown to the user"); its text is the scenario layer's, shared with exports. */
 export function Caution() {
   return (
     <p className="caution" role="note" aria-label="Caution">
