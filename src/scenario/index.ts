@@ -14,4 +14,6 @@ export {
   MAX_LINK_CHARS,
   MAX_LINK_JSON_BYTES,
 } from './link';
+export { scenarioToFileText, scenarioFromFileText, scenarioFileName, FILE_FORMAT_TAG, MAX_FILE_CHARS } from './file';
+export { CAUTION_TEXT } from './caution';
 export { DEMO_SCENARIO } from './demo';

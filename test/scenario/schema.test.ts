@@ -1,6 +1,7 @@
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
 import { METHODS, METHOD_KINDS, defaultMethod, type MethodSpec } from '../../src/core';
+import { LISTED_BARS } from '../../src/scenario/schema';
 import {
   DEMO_SCENARIO,
   MAX_LISTED_PROBLEMS,
@@ -128,11 +129,27 @@ describe('parseScenario names the field of every problem', () => {
 
   it('lists at most a set number of problems and counts the rest', () => {
     const input = demo();
-    input['storm'].depthsMm = input['storm'].depthsMm.map(() => -1);
-    input['storm'].durationsH = Array.from({ length: 18 }, () => 0);
+    input['storm'].depthsMm = input['storm'].depthsMm.map(() => -1); // 10 listed + 1 count
+    input['storm'].durationsH = Array.from({ length: 18 }, () => 0); // 10 listed + 1 count
+    input['units'] = 'metric';
+    input['name'] = 1;
     const problems = problemsOf(parseScenario(input));
     expect(problems).toHaveLength(MAX_LISTED_PROBLEMS + 1);
-    expect(problems[MAX_LISTED_PROBLEMS]?.message).toBe(`… and ${36 - MAX_LISTED_PROBLEMS} more problems.`);
+    expect(problems[MAX_LISTED_PROBLEMS]?.message).toBe(`… and ${24 - MAX_LISTED_PROBLEMS} more problems.`);
+  });
+
+  it('counts, rather than lists, the bad bars of a long storm past the first few', () => {
+    const input = demo();
+    input['storm'] = { durationsH: Array.from({ length: 5000 }, () => 'x'), depthsMm: Array.from({ length: 5000 }, () => 1) };
+    const problems = problemsOf(parseScenario(input));
+    expect(problems).toHaveLength(LISTED_BARS + 1);
+    expect(problems.slice(0, LISTED_BARS).map((p) => p.path)).toEqual(
+      Array.from({ length: LISTED_BARS }, (_, k) => `storm.durationsH[${k}]`),
+    );
+    expect(problems[LISTED_BARS]).toEqual({
+      path: 'storm.durationsH',
+      message: `storm.durationsH: ${5000 - LISTED_BARS} more bars are wrong too (only the first ${LISTED_BARS} are listed).`,
+    });
   });
 
   it.each([
