@@ -1,2 +1,30 @@
-// Filled in by the baseflow work; re-exported from src/core/index.ts.
-export {};
+// Baseflow separation of an observed streamflow record. Pure functions; no
+// React, no DOM. Re-exported from src/core/index.ts.
+export type {
+  Hydrograph,
+  BaseflowMethod,
+  BaseflowKind,
+  BaseflowMethodOf,
+  BaseflowOptions,
+  BaseflowResult,
+  BaseflowMethodSpec,
+  BaseflowParam,
+  BaseflowParamUnit,
+  ConstantBaseflow,
+  StraightLineBaseflow,
+  LyneHollickBaseflow,
+  EckhardtBaseflow,
+} from './types';
+export {
+  BASEFLOW_METHODS,
+  BASEFLOW_KINDS,
+  isBaseflowKind,
+  baseflowMethodSpec,
+  defaultBaseflowMethod,
+  describeBaseflowRange,
+  validateBaseflowMethod,
+} from './methods';
+export { separateBaseflow } from './separate';
+export { validateHydrograph, dischargeAtH } from './hydrograph';
+export { findPeakIndex, findStartOfRise } from './peak';
+export { recessionDays } from './straight-line';

@@ -1,0 +1,98 @@
+import { InputError } from '../errors';
+import { AREA_UNITS } from '../units';
+import { dischargeAtH } from './hydrograph';
+import { resolveRiseIndex } from './peak';
+import type { BaseflowMethodSpec, SeparateFn } from './types';
+
+/**
+ * Days from the peak to the end of direct runoff, N = A^0.2 with A in mi²
+ * (Linsley, Kohler & Paulhus, Hydrology for Engineers). The area comes in m²
+ * and is converted here, since the formula is empirical in US units.
+ */
+export function recessionDays(areaM2: number): number {
+  return Math.pow(areaM2 / AREA_UNITS.mi2, 0.2);
+}
+
+/**
+ * Straight-line separation: baseflow runs straight from the start of rise
+ * (t_r, Q(t_r)) to an end point (t_e, Q(t_e)) on the recession, Q(t_e) by
+ * linear interpolation. The end is given, or N = A^0.2 days after the peak
+ * (Linsley, Kohler & Paulhus, Hydrology for Engineers, McGraw-Hill).
+ */
+export const separateStraightLine: SeparateFn<'straight-line'> = (timesH, dischargeM3s, method, context) => {
+  const n = dischargeM3s.length;
+  const rise = resolveRiseIndex(dischargeM3s, method.riseIndex, context.peakIndex);
+  const riseTimeH = timesH[rise] as number;
+  const lastTimeH = timesH[n - 1] as number;
+  let endTimeH: number;
+  if (method.endTimeH !== undefined) {
+    endTimeH = method.endTimeH;
+    if (endTimeH > lastTimeH) {
+      throw new InputError(
+        'endTimeH',
+        `The end point (${endTimeH} h) is after the last sample of the record (${lastTimeH} h).`,
+      );
+    }
+  } else {
+    if (context.areaM2 === undefined) {
+      throw new InputError(
+        'areaM2',
+        'The straight-line end point needs an end time or the catchment area (for N = A^0.2 days after the peak).',
+      );
+    }
+    const days = recessionDays(context.areaM2);
+    endTimeH = (timesH[context.peakIndex] as number) + 24 * days;
+    if (endTimeH > lastTimeH) {
+      throw new InputError(
+        'endTimeH',
+        `N = A^0.2 = ${days.toFixed(3)} days puts the end point at ${endTimeH.toFixed(2)} h, after the last sample of the record (${lastTimeH} h); give an end time or a longer record.`,
+      );
+    }
+  }
+  if (!(endTimeH > riseTimeH)) {
+    throw new InputError(
+      'endTimeH',
+      `The end point (${endTimeH} h) must be later than the start of rise (sample ${rise + 1}, ${riseTimeH} h).`,
+    );
+  }
+  const riseQ = dischargeM3s[rise] as number;
+  const endQ = dischargeAtH(timesH, dischargeM3s, endTimeH);
+  const slope = (endQ - riseQ) / (endTimeH - riseTimeH);
+  const lineM3s = new Float64Array(n);
+  for (let k = 0; k < n; k++) lineM3s[k] = riseQ + slope * ((timesH[k] as number) - riseTimeH);
+  return { lineM3s, startIndex: rise, endTimeH, endLineM3s: endQ };
+};
+
+export const straightLineSpec: BaseflowMethodSpec<'straight-line'> = {
+  kind: 'straight-line',
+  label: 'Straight line',
+  summary:
+    'Baseflow runs in a straight line from the start of rise to an end point on the recession; the flow above the line is direct runoff.',
+  source: 'Linsley, Kohler & Paulhus, Hydrology for Engineers (McGraw-Hill): N = A^0.2 days, A in mi².',
+  params: [
+    {
+      key: 'riseIndex',
+      label: 'Start of rise',
+      unit: 'sample',
+      min: 0,
+      max: Infinity,
+      integer: true,
+      optional: { auto: 'the lowest discharge at or before the peak' },
+      step: 1,
+      help: 'Sample (0-based) where the direct runoff begins; leave empty to take the lowest point before the peak.',
+    },
+    {
+      key: 'endTimeH',
+      label: 'End of direct runoff',
+      unit: 'h',
+      min: -Infinity,
+      max: Infinity,
+      optional: { auto: 'N = A^0.2 days after the peak (A in mi², needs the catchment area)' },
+      step: 0.25,
+      help: 'Time where the line meets the recession; leave empty to use N = A^0.2 days after the peak.',
+    },
+  ],
+  defaults: { kind: 'straight-line' },
+  needsArea: (method) => method.endTimeH === undefined,
+  separate: separateStraightLine,
+};
