@@ -37,6 +37,30 @@ export { calibrate, type CalibrationResult, type CalibrationFailure } from './ca
 export { exactPhi } from './calibrate/phi';
 export { brentRoot } from './calibrate/brent';
 export { solveMonotone, PARAMETER_REL_TOL } from './calibrate/monotone';
+// Infiltration loss methods (issue 3): Horton, Green–Ampt, curve number.
+export type { HortonLoss, GreenAmptLoss, CurveNumberLoss } from './loss/types';
+export {
+  hortonCumulativeMm,
+  hortonCapacityMmH,
+  HORTON_F0_CEILING_MMH,
+  HORTON_K_CEILING_PER_H,
+} from './loss/horton';
+export {
+  greenAmptPondedDepthMm,
+  greenAmptPondedIncrementMm,
+  greenAmptPondingDepthMm,
+  greenAmptRateMmH,
+} from './loss/green-ampt';
+export { curveNumberRetentionMm, curveNumberRunoffMm, RETENTION_RATIO_005 } from './loss/curve-number';
+export { curveNumberForCondition, type AntecedentCondition } from './loss/antecedent-condition';
+export {
+  SOIL_TEXTURES,
+  soilTexture,
+  moistureDeficitFromSaturation,
+  greenAmptForTexture,
+  type SoilTexture,
+  type SoilTextureName,
+} from './soils';
 export * from './units';
 export * from './baseflow';
 export * from './design';

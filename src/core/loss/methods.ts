@@ -2,6 +2,9 @@ import { InputError } from '../errors';
 import { constantSpec } from './constant';
 import { initialContinuingSpec } from './initial-continuing';
 import { proportionalSpec } from './proportional';
+import { hortonSpec } from './horton';
+import { greenAmptSpec } from './green-ampt';
+import { curveNumberSpec } from './curve-number';
 import type { LossKind, LossMethod, MethodOf, MethodSpec, NumericParam } from './types';
 
 /**
@@ -13,6 +16,9 @@ export const METHODS: { readonly [K in LossKind]: MethodSpec<K> } = {
   constant: constantSpec,
   'initial-continuing': initialContinuingSpec,
   proportional: proportionalSpec,
+  horton: hortonSpec,
+  'green-ampt': greenAmptSpec,
+  'curve-number': curveNumberSpec,
 };
 
 /** Method kinds in the order a picker shows them. */

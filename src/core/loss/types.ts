@@ -10,13 +10,40 @@ export interface InitialContinuingLoss {
 }
 /** Proportional loss: excess is a fixed fraction (runoff coefficient) of rain. */
 export interface ProportionalLoss { readonly kind: 'proportional'; readonly coefficient: number }
+/**
+ * Horton infiltration capacity f(t) = f_c + (f_0 − f_c)·e^(−k t). `ponding`
+ * false: t is time from the storm start; true: capacity follows cumulative
+ * infiltration (time compression).
+ */
+export interface HortonLoss {
+  readonly kind: 'horton';
+  readonly f0MmH: number;
+  readonly fcMmH: number;
+  readonly kPerH: number;
+  readonly ponding: boolean;
+}
+/** Green–Ampt: saturated conductivity, wetting-front suction head, moisture deficit Δθ. */
+export interface GreenAmptLoss {
+  readonly kind: 'green-ampt';
+  readonly ksMmH: number;
+  readonly suctionMm: number;
+  readonly moistureDeficit: number;
+}
+/** NRCS curve number on the λ = 0.2 basis; `iaRatio` 0.05 converts S to that basis. */
+export interface CurveNumberLoss { readonly kind: 'curve-number'; readonly cn: number; readonly iaRatio: 0.2 | 0.05 }
 
 /**
  * Every loss method the core knows, as a discriminated union on `kind`.
  * Adding a method: add its interface here, a file under `loss/`, and one
  * entry in `loss/methods.ts`.
  */
-export type LossMethod = ConstantLoss | InitialContinuingLoss | ProportionalLoss;
+export type LossMethod =
+  | ConstantLoss
+  | InitialContinuingLoss
+  | ProportionalLoss
+  | HortonLoss
+  | GreenAmptLoss
+  | CurveNumberLoss;
 export type LossKind = LossMethod['kind'];
 export type MethodOf<K extends LossKind> = Extract<LossMethod, { kind: K }>;
 
@@ -51,6 +78,11 @@ export interface NumericParam<K extends LossKind = LossKind> {
    * unbounded (e.g. the peak intensity for a rate: no excess above it).
    */
   readonly searchMax?: (storm: Storm, method: MethodOf<K>) => number;
+  /**
+   * Lower end of the search interval when it depends on the other parameters
+   * (e.g. Horton's f_0 cannot go below f_c); `min` otherwise.
+   */
+  readonly searchMin?: (storm: Storm, method: MethodOf<K>) => number;
   readonly help: string;
 }
 

@@ -1,0 +1,202 @@
+import { peakIntensityMmH, totalDepthMm, type Storm } from '../storm';
+import type { ComputeFn, GreenAmptLoss, MethodSpec } from './types';
+
+/**
+ * Green–Ampt infiltration under variable rainfall.
+ *
+ * Capacity f = K(1 + ψΔθ/F) (Green & Ampt 1911; Chow, Maidment & Mays 1988,
+ * Applied Hydrology, eq. 4.3.7 — equation numbers from memory). Infiltration
+ * follows dF/dt = min(i, f(F)): while rain is below capacity all of it soaks
+ * in; surface ponding starts when F reaches
+ *   F_p = K·ψΔθ / (i − K)   for i > K            (Mein & Larson 1973)
+ * and never for i ≤ K. Once ponded within a bar of constant intensity the
+ * capacity only falls, so the bar stays ponded, and F follows the implicit
+ * ponded equation
+ *   F₂ − F₁ − ψΔθ·ln((F₂ + ψΔθ)/(F₁ + ψΔθ)) = K·Δt
+ * (Chow, Maidment & Mays 1988, §4.4, the Green–Ampt equation from a known
+ * starting depth F₁). Each bar is solved exactly in this way, so the result
+ * does not depend on how the rain is cut into bars. Dry bars do not
+ * redistribute soil water (no recovery term).
+ */
+
+/**
+ * Depth infiltrated in `hours` of ponded infiltration starting from a
+ * cumulative depth `startMm` (mm): the x solving
+ *   x − M·ln(1 + x/(F₁ + M)) = K·t,   M = ψΔθ
+ * (the ponded Green–Ampt equation above, written in the increment x = F₂ − F₁
+ * so that short steps do not cancel). The left side is increasing and convex
+ * in x, so Newton's method started from above (x ≤ f(F₁)·t: the rate only
+ * falls) descends monotonically onto the root; bisection on the bracket
+ * [K·t, f(F₁)·t] takes over if Newton ever fails to settle.
+ */
+export function greenAmptPondedIncrementMm(
+  ksMmH: number,
+  suctionDeficitMm: number,
+  startMm: number,
+  hours: number,
+): number {
+  const kt = ksMmH * hours;
+  const m = suctionDeficitMm;
+  if (m === 0 || kt === 0) return kt;
+  const base = startMm + m;
+  if (startMm === 0) {
+    // From a dry surface the ponded curve starts at infinite rate, so f(F₁)
+    // gives no upper bound. With u = x/M: u − ln(1 + u) ≤ u²/2 gives
+    // x ≥ √(2MKt), and e^L ≥ 1 + L + L²/2 (L = ln(1 + u)) gives x ≤ K·t + √(2MKt).
+    return solveIncrement(kt, m, base, Math.max(kt, Math.sqrt(2 * m * kt)), kt + Math.sqrt(2 * m * kt));
+  }
+  const high = ksMmH * (1 + m / startMm) * hours;
+  return solveIncrement(kt, m, base, kt, high);
+}
+
+function solveIncrement(kt: number, m: number, base: number, low: number, high: number): number {
+  // ln(1 + x/base); for a tiny base x/base can overflow, and then ln x − ln base is exact enough.
+  const growth = (x: number): number => {
+    const ratio = x / base;
+    return ratio < 1e300 ? Math.log1p(ratio) : Math.log(x) - Math.log(base);
+  };
+  let x = high;
+  for (let iter = 0; iter < 60; iter++) {
+    const residual = x - m * growth(x) - kt;
+    const slope = (base - m + x) / (base + x); // 1 − M/(F₁ + M + x)
+    const step = residual / slope;
+    x -= step;
+    if (!(step > 1e-15 * x)) {
+      if (x >= low && x <= high) return x;
+      break;
+    }
+  }
+  // Safe fallback: plain bisection on [low, high], where the residual changes sign.
+  let a = low;
+  let b = high;
+  for (let iter = 0; iter < 200 && b - a > 1e-15 * b; iter++) {
+    const mid = 0.5 * (a + b);
+    if (mid - m * growth(mid) - kt > 0) b = mid;
+    else a = mid;
+  }
+  return 0.5 * (a + b);
+}
+
+/**
+ * Green–Ampt ponded infiltration from a dry surface (F = 0 at t = 0): the
+ * cumulative infiltration F(t), mm, of F − ψΔθ·ln(1 + F/ψΔθ) = K·t
+ * (Chow, Maidment & Mays 1988, eq. 4.3.8, number from memory).
+ */
+export function greenAmptPondedDepthMm(ksMmH: number, suctionMm: number, moistureDeficit: number, hours: number): number {
+  return greenAmptPondedIncrementMm(ksMmH, suctionMm * moistureDeficit, 0, hours);
+}
+
+/** Infiltration rate at cumulative depth F, f = K(1 + ψΔθ/F), mm/h (Green & Ampt 1911). */
+export function greenAmptRateMmH(ksMmH: number, suctionMm: number, moistureDeficit: number, depthMm: number): number {
+  return ksMmH * (1 + (suctionMm * moistureDeficit) / depthMm);
+}
+
+/**
+ * Cumulative infiltration at which rain of intensity i starts to pond,
+ * F_p = K·ψΔθ/(i − K), mm; Infinity for i ≤ K (Mein & Larson 1973).
+ */
+export function greenAmptPondingDepthMm(
+  ksMmH: number,
+  suctionMm: number,
+  moistureDeficit: number,
+  intensityMmH: number,
+): number {
+  return intensityMmH > ksMmH ? (ksMmH * suctionMm * moistureDeficit) / (intensityMmH - ksMmH) : Infinity;
+}
+
+export const computeGreenAmpt: ComputeFn<'green-ampt'> = (durationsH, depthsMm, method, lossOut, excessOut) => {
+  const k = method.ksMmH;
+  const m = method.suctionMm * method.moistureDeficit;
+  const km = k * m;
+  const n = depthsMm.length;
+  let depth = 0; // cumulative infiltration F, mm
+  for (let j = 0; j < n; j++) {
+    const p = depthsMm[j] as number;
+    const dt = durationsH[j] as number;
+    const i = p / dt;
+    if (i <= k) {
+      // Rain at or below K never ponds (and a dry bar has nothing to lose).
+      lossOut[j] = p;
+      excessOut[j] = 0;
+      depth += p;
+      continue;
+    }
+    const pondDepth = km / (i - k); // Mein & Larson (1973)
+    if (depth + p <= pondDepth) {
+      lossOut[j] = p;
+      excessOut[j] = 0;
+      depth += p;
+      continue;
+    }
+    let before = 0;
+    let pondedH = dt;
+    if (depth < pondDepth) {
+      // Ponding starts inside the bar, t_p = (F_p − F)/i after its start.
+      before = pondDepth - depth;
+      pondedH = dt - before / i;
+      depth = pondDepth;
+    }
+    const ponded = pondedH > 0 ? greenAmptPondedIncrementMm(k, m, depth, pondedH) : 0;
+    depth += ponded;
+    let loss = before + ponded;
+    if (loss > p) loss = p;
+    lossOut[j] = loss;
+    excessOut[j] = p - loss;
+  }
+};
+
+/**
+ * A suction head at which no bar ponds: with F ≤ ΣP throughout, F_p(i_max) ≥ ΣP
+ * keeps every bar below capacity, i.e. ψ ≥ ΣP·(i_max − K)/(K·Δθ). When ψ has no
+ * effect (Δθ = 0, or no bar above K) any positive bound will do.
+ */
+export function greenAmptAbsorbingSuctionMm(storm: Storm, method: GreenAmptLoss): number {
+  const excessRate = peakIntensityMmH(storm) - method.ksMmH;
+  if (!(excessRate > 0) || !(method.moistureDeficit > 0)) return 1;
+  return Math.max(1, (totalDepthMm(storm) * excessRate) / (method.ksMmH * method.moistureDeficit));
+}
+
+export const greenAmptSpec: MethodSpec<'green-ampt'> = {
+  kind: 'green-ampt',
+  label: 'Green–Ampt infiltration',
+  summary:
+    'A wetting front moves down into the soil; capacity falls as the soil fills, and rain above it becomes excess.',
+  source:
+    'Green & Ampt (1911); ponding time by Mein & Larson (1973); Chow, Maidment & Mays (1988) Applied Hydrology, sections 4.3–4.4.',
+  params: [
+    {
+      key: 'ksMmH',
+      label: 'Hydraulic conductivity K',
+      unit: 'mm/h',
+      min: 0,
+      minExclusive: true,
+      max: Infinity,
+      step: 0.1,
+      // Rain at or below K never ponds: above the peak intensity every drop soaks in.
+      searchMax: (storm) => peakIntensityMmH(storm),
+      help: 'Saturated (effective) hydraulic conductivity of the soil: the long-run infiltration rate.',
+    },
+    {
+      key: 'suctionMm',
+      label: 'Wetting-front suction head ψ',
+      unit: 'mm',
+      min: 0,
+      max: Infinity,
+      step: 1,
+      searchMax: greenAmptAbsorbingSuctionMm,
+      help: 'Capillary suction at the wetting front; larger in fine soils.',
+    },
+    {
+      key: 'moistureDeficit',
+      label: 'Moisture deficit Δθ',
+      unit: '-',
+      min: 0,
+      max: 1,
+      step: 0.01,
+      help: 'Soil water the soil can still take up, (1 − initial effective saturation) × effective porosity.',
+    },
+  ],
+  // Loam with initial effective saturation 0.3 (Rawls, Brakensiek & Miller 1983; see soils.ts).
+  defaults: { kind: 'green-ampt', ksMmH: 3.4, suctionMm: 88.9, moistureDeficit: 0.3038 },
+  compute: computeGreenAmpt,
+};

@@ -1,0 +1,93 @@
+// Invariants of the infiltration methods (Horton, Green–Ampt, curve number)
+// over random storms with unequal bar durations (fast-check), with parameter
+// draws that cover both Horton readings and both Iₐ ratios.
+import fc from 'fast-check';
+import { describe, expect, it } from 'vitest';
+import { computeLosses, type LossMethod, type Storm } from '../../../src/core';
+import { stormArb } from '../../helpers/arbitraries';
+
+const hortonArb = (ponding: boolean): fc.Arbitrary<LossMethod> =>
+  fc
+    .record({
+      fcMmH: fc.double({ min: 0, max: 40, noNaN: true }),
+      extra: fc.double({ min: 0, max: 300, noNaN: true }),
+      kPerH: fc.double({ min: 1e-3, max: 50, noNaN: true }),
+    })
+    .map(({ fcMmH, extra, kPerH }) => ({ kind: 'horton', f0MmH: fcMmH + extra, fcMmH, kPerH, ponding }));
+
+const greenAmptArb: fc.Arbitrary<LossMethod> = fc.record({
+  kind: fc.constant('green-ampt' as const),
+  ksMmH: fc.double({ min: 1e-3, max: 150, noNaN: true }),
+  suctionMm: fc.oneof(fc.constant(0), fc.double({ min: 0, max: 400, noNaN: true })),
+  moistureDeficit: fc.oneof(fc.constant(0), fc.double({ min: 0, max: 1, noNaN: true })),
+});
+
+const curveNumberArb: fc.Arbitrary<LossMethod> = fc.record({
+  kind: fc.constant('curve-number' as const),
+  cn: fc.oneof(fc.constant(100), fc.double({ min: 1, max: 100, noNaN: true })),
+  iaRatio: fc.constantFrom(0.2 as const, 0.05 as const),
+});
+
+const exactlySplitInvariant = fc.oneof(hortonArb(true), greenAmptArb, curveNumberArb);
+const every = fc.oneof(hortonArb(false), exactlySplitInvariant);
+
+const splitBar = (storm: { durationsH: number[]; depthsMm: number[] }, k: number): Storm => ({
+  durationsH: storm.durationsH.flatMap((d, j) => (j === k ? [d / 2, d / 2] : [d])),
+  depthsMm: storm.depthsMm.flatMap((p, j) => (j === k ? [p / 2, p / 2] : [p])),
+});
+
+describe('Horton, Green–Ampt and curve number', () => {
+  it('keep 0 ≤ loss ≤ rain in every bar and rain = loss + excess to 1e-9 relative', () => {
+    fc.assert(
+      fc.property(stormArb(80), every, (storm, method) => {
+        const r = computeLosses(storm, method);
+        let rain = 0;
+        for (let k = 0; k < storm.depthsMm.length; k++) {
+          const p = storm.depthsMm[k] as number;
+          const l = r.lossMm[k] as number;
+          const e = r.excessMm[k] as number;
+          rain += p;
+          expect(Number.isFinite(l) && Number.isFinite(e)).toBe(true);
+          expect(l).toBeGreaterThanOrEqual(0);
+          expect(e).toBeGreaterThanOrEqual(0);
+          expect(l).toBeLessThanOrEqual(p);
+          expect(Math.abs(p - l - e)).toBeLessThanOrEqual(1e-9 * p);
+        }
+        expect(Math.abs(rain - r.totalLossMm - r.totalExcessMm)).toBeLessThanOrEqual(1e-9 * Math.max(rain, 1e-300));
+      }),
+      { numRuns: 600 },
+    );
+  });
+
+  it('give the same result when a bar is split into two halves of equal intensity (to 1e-9; Horton with time compression, Green–Ampt, curve number)', () => {
+    fc.assert(
+      fc.property(stormArb(40), exactlySplitInvariant, fc.nat(), (storm, method, pick) => {
+        const k = pick % storm.depthsMm.length;
+        const whole = computeLosses(storm, method);
+        const halves = computeLosses(splitBar(storm, k), method);
+        const scale = Math.max(whole.rainMm, 1e-9);
+        expect(Math.abs(whole.totalExcessMm - halves.totalExcessMm)).toBeLessThanOrEqual(1e-9 * scale);
+        const joined = (halves.excessMm[k] as number) + (halves.excessMm[k + 1] as number);
+        expect(Math.abs((whole.excessMm[k] as number) - joined)).toBeLessThanOrEqual(1e-9 * scale);
+        // Bars after the split see the same state.
+        for (let j = k + 1; j < storm.depthsMm.length; j++) {
+          expect(Math.abs((whole.excessMm[j] as number) - (halves.excessMm[j + 1] as number))).toBeLessThanOrEqual(
+            1e-9 * scale,
+          );
+        }
+      }),
+      { numRuns: 600 },
+    );
+  });
+
+  it('give exactly zero excess for a dry storm', () => {
+    fc.assert(
+      fc.property(fc.array(fc.double({ min: 0.01, max: 5, noNaN: true }), { minLength: 1, maxLength: 20 }), every, (durationsH, method) => {
+        const r = computeLosses({ durationsH, depthsMm: durationsH.map(() => 0) }, method);
+        expect(r.totalExcessMm).toBe(0);
+        expect(r.totalLossMm).toBe(0);
+      }),
+      { numRuns: 100 },
+    );
+  });
+});
