@@ -133,6 +133,10 @@ function runFlowImport(text: string, settings: FlowImportSettings): FlowRun {
     problems.add(problem(0, 0, 'text', '', 'there is no text to read.'));
     return fail(null, settings, problems);
   }
+  if (settings === null || typeof settings !== 'object') {
+    problems.add(problem(0, 0, 'settings', String(settings), 'no import settings were given.'));
+    return fail(null, settings, problems);
+  }
   checkFlowSettings(settings, problems);
   if (problems.count > 0) return fail(null, settings, problems);
   const series = readSeries(text, settings, 'discharge', problems);

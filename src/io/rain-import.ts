@@ -95,7 +95,7 @@ export function rainHintsFromName(name: string): { kind?: RainValueKind; unit?: 
   if (/\bmm\b|millim/.test(n)) hints.unit = 'mm';
   else if (/inch|\bin\b|\(in|\[in|in\/h|iph|"/.test(n)) hints.unit = 'in';
   const step = /(\d+(?:[.,]\d+)?)\s*-?\s*min/.exec(n);
-  if (step && hints.kind !== 'intensity') hints.stepMinutes = Number((step[1] as string).replace(',', '.'));
+  if (step) hints.stepMinutes = Number((step[1] as string).replace(',', '.'));
   else if (/hourly/.test(n)) hints.stepMinutes = 60;
   else if (/daily/.test(n)) hints.stepMinutes = 1440;
   return hints;
@@ -303,6 +303,10 @@ function runRainImport(text: string, settings: RainImportSettings): RainRun {
   const problems = problemList();
   if (typeof text !== 'string') {
     problems.add(problem(0, 0, 'text', '', 'there is no text to read.'));
+    return fail(null, settings, problems);
+  }
+  if (settings === null || typeof settings !== 'object') {
+    problems.add(problem(0, 0, 'settings', String(settings), 'no import settings were given.'));
     return fail(null, settings, problems);
   }
   checkRainSettings(settings, problems);

@@ -151,6 +151,15 @@ describe('applyFlowImport reports every bad input by line and column', () => {
     ]);
   });
 
+  it('no settings, or no text', () => {
+    expect(applyFlowImport('1\n2', undefined as never).problems).toEqual([
+      { row: 0, column: 0, field: 'settings', value: 'undefined', reason: 'no import settings were given.' },
+    ]);
+    expect(applyFlowImport(null as never, guessFlowSettings('1\n2')).problems).toEqual([
+      { row: 0, column: 0, field: 'text', value: '', reason: 'there is no text to read.' },
+    ]);
+  });
+
   it('a failure summary that says what was read', () => {
     const result = applyFlowImport('Time\tQ\n10:00\t1\n10:15\t-1', guessFlowSettings('Time\tQ\n10:00\t1\n10:15\t-1'));
     expect(result.summary).toBe('Read 2 data lines as discharge in m³/s with clock times in column 1; 1 problem to fix before importing.');

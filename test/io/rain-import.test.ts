@@ -397,6 +397,9 @@ describe('applyRainImport checks its settings', () => {
   it('refuses text that is not a string without throwing', () => {
     expect(applyRainImport(42 as never, base).problems).toEqual([expect.objectContaining({ field: 'text', reason: 'there is no text to read.' })]);
     expect(guessRainImport(undefined as never).problems.length).toBeGreaterThan(0);
+    expect(applyRainImport('1\n2', null as never).problems).toEqual([
+      { row: 0, column: 0, field: 'settings', value: 'null', reason: 'no import settings were given.' },
+    ]);
   });
 });
 
