@@ -21,9 +21,9 @@ function Workbench({ rainfallTools }: { rainfallTools?: ReactNode }) {
   return (
     <div className="app">
       <Header />
-      <StorageNoticeBar />
       <Caution />
       <main className="bench">
+        <StorageNoticeBar />
         <div className="bench__main">
           <RainfallToolbar tools={rainfallTools} />
           <Hyetograph />

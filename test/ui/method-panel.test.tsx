@@ -26,7 +26,10 @@ describe('the loss-method panel', () => {
       await user.selectOptions(screen.getByRole('combobox', { name: 'Loss method' }), kind);
       const spec = METHODS[kind];
       for (const p of spec.params) expect(screen.getByRole('textbox', { name: new RegExp(`^${p.label.replace(/[()]/g, '\\$&')}`) })).toBeInTheDocument();
-      for (const c of spec.choices ?? []) expect(screen.getByLabelText(c.label)).toBeInTheDocument();
+      for (const c of spec.choices ?? []) {
+        const group = screen.getByRole('group', { name: c.label });
+        for (const option of c.choices) expect(within(group).getByRole('radio', { name: option.label })).toBeInTheDocument();
+      }
     }
   });
 

@@ -36,7 +36,7 @@ describe('opening the workbench from saved data', () => {
 
   it('the caution is always on screen', () => {
     renderWorkbench();
-    expect(screen.getByRole('note', { name: 'Caution' })).toHaveTextContent(CAUTION_TEXT);
+    expect(screen.getByRole('complementary', { name: 'Caution' })).toHaveTextContent(CAUTION_TEXT);
     expect(CAUTION_TEXT).toMatch(/screening/);
     expect(CAUTION_TEXT).toMatch(/local drainage criteria/);
     expect(CAUTION_TEXT).toMatch(/licensed professional/);

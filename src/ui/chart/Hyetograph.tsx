@@ -12,7 +12,7 @@ import { LossLine } from './LossLine';
 import { RainLayer } from './RainLayer';
 import { useElementWidth } from './useElementWidth';
 
-export const CHART_HEIGHT = 320;
+export const CHART_HEIGHT = 360;
 
 /** The part of the loss drawn in its own shade (initial loss), computed by the core. */
 function lossPart(storm: Scenario['storm'], method: LossMethod): Float64Array | null {

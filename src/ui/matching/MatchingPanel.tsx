@@ -61,7 +61,7 @@ export function MatchingPanel() {
   return (
     <section className="panel matching" aria-labelledby="matching-title">
       <h2 id="matching-title">Matching</h2>
-      <p className="panel__intro">Set a parameter so the rainfall excess equals an observed runoff.</p>
+      <p className="panel__intro">Fit one parameter so the rainfall excess equals an observed runoff.</p>
       <fieldset className="segmented">
         <legend>Observed runoff given as</legend>
         {(['depth', 'volume'] as const).map((option) => (
@@ -162,7 +162,7 @@ export function MatchingPanel() {
         </label>
       </div>
       <p className="field__hint" id="keep-matched-hint">
-        While on, the fitted value follows the observed runoff as the bars change.
+        While on, the fitted value follows the observed runoff as bars change.
         {areaM2 > 0 || as === 'depth' ? null : ' An observed volume needs the catchment area.'}
       </p>
       <p className="matching__answer" id="fit-answer" aria-live="polite">

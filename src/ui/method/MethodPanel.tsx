@@ -51,34 +51,35 @@ function ParamField({ param, method, stored }: { param: NumericParam; method: Lo
   );
 }
 
+/** More choices than this show as a drop-down rather than radio buttons. */
+const MAX_RADIOS = 4;
+
 function ChoiceField({ choice, method }: { choice: ChoiceParam; method: LossMethod }) {
   const actions = useActions();
   const value = valueOf(method, choice.key);
   const id = `choice-${choice.key}`;
-  const isSwitch =
-    choice.choices.length === 2 && choice.choices.every((c) => typeof c.value === 'boolean');
-  if (isSwitch) {
-    const on = choice.choices.find((c) => c.value === true);
+  const index = choice.choices.findIndex((c) => c.value === value);
+  if (choice.choices.length <= MAX_RADIOS) {
     return (
-      <div className="field field--switch">
-        <label htmlFor={id}>
-          <input
-            id={id}
-            type="checkbox"
-            role="switch"
-            checked={value === true}
-            aria-describedby={`${id}-hint`}
-            onChange={(e) => actions.setParam(choice.key, e.currentTarget.checked)}
-          />
-          <span>{choice.label}</span>
-        </label>
+      <fieldset className="field choice" aria-describedby={`${id}-hint`}>
+        <legend>{choice.label}</legend>
+        {choice.choices.map((c, i) => (
+          <label key={String(c.value)} className="choice__option">
+            <input
+              type="radio"
+              name={id}
+              checked={i === index}
+              onChange={() => actions.setParam(choice.key, c.value)}
+            />
+            <span>{c.label}</span>
+          </label>
+        ))}
         <p className="field__hint" id={`${id}-hint`}>
-          {value === true ? on?.label : choice.choices.find((c) => c.value === false)?.label}. {choice.help}
+          {choice.help}
         </p>
-      </div>
+      </fieldset>
     );
   }
-  const index = choice.choices.findIndex((c) => c.value === value);
   return (
     <div className="field">
       <label htmlFor={id}>{choice.label}</label>
@@ -114,7 +115,7 @@ export function MethodPanel() {
 
   return (
     <section className="panel method" aria-labelledby="method-title">
-      <h2 id="method-title">Loss method</h2>
+      <h2 id="method-title">Losses</h2>
       <div className="field">
         <label htmlFor="method-kind">Loss method</label>
         <select

@@ -1,0 +1,90 @@
+import { useState, type FormEvent } from 'react';
+import { isInputError } from '../../../core';
+import { emptyStorm } from '../../../core/storm-tools';
+import { useActions, useScenario } from '../../../store';
+import { fineStep } from '../../chart/drag-math';
+import { chartFrame } from '../../chart/frame';
+import { CHART_HEIGHT } from '../../chart/Hyetograph';
+import { formatForField, formatValue } from '../../format';
+import { parseNumber } from '../../parse-number';
+import { displayUnit, unitText } from '../../units';
+import { DRAW_PANEL_ID, useStormInput } from '../context';
+import { ToolField } from '../tools/ToolField';
+
+/**
+ * Shown while the chart is in drawing mode: how drawing works, and a fresh
+ * storm of dry bars to draw on (its bar duration and number of bars chosen here).
+ */
+export function DrawPanel() {
+  const { setDrawing } = useStormInput();
+  const actions = useActions();
+  const storm = useScenario((s) => s.storm);
+  const units = useScenario((s) => s.units);
+  const n = storm.depthsMm.length;
+  const [stepText, setStepText] = useState(() => formatForField((storm.durationsH[0] ?? 10 / 60) * 60));
+  const [countText, setCountText] = useState(() => String(n > 0 ? n : 18));
+  const [stepMessage, setStepMessage] = useState<string | null>(null);
+  const [countMessage, setCountMessage] = useState<string | null>(null);
+  const [status, setStatus] = useState('');
+
+  // The width does not change the rate axis, so any width gives the snap step on screen.
+  const topDisplay = chartFrame(storm, 880, CHART_HEIGHT, units).topDisplay;
+  const snap = `${formatValue(fineStep(topDisplay))} ${unitText(displayUnit('rate', units))}`;
+
+  const create = (e: FormEvent): void => {
+    e.preventDefault();
+    const step = parseNumber(stepText);
+    const count = parseNumber(countText);
+    const stepBad = !step.ok ? step.message : step.value > 0 ? null : 'The bar duration must be more than 0 minutes.';
+    const countBad = !count.ok
+      ? count.message
+      : Number.isInteger(count.value) && count.value >= 1
+        ? null
+        : 'The number of bars must be a whole number, 1 or more.';
+    setStepMessage(stepBad);
+    setCountMessage(countBad);
+    if (stepBad || countBad || !step.ok || !count.ok) return;
+    try {
+      const fresh = emptyStorm(step.value / 60, count.value, storm.startIso);
+      actions.setStorm(fresh, 'New empty storm');
+      setStatus(`${count.value} dry bars of ${formatValue(step.value)} min, ready to draw on. Undo brings back the storm before.`);
+    } catch (error) {
+      if (!isInputError(error)) throw error;
+      if (error.field === 'count') setCountMessage(error.message);
+      else setStepMessage(error.message);
+    }
+  };
+
+  return (
+    <section id={DRAW_PANEL_ID} className="panel storm-panel draw-panel" aria-labelledby="draw-panel-title">
+      <div className="storm-panel__head">
+        <h2 id="draw-panel-title">Drawing bars</h2>
+        <button type="button" onClick={() => setDrawing(false)}>
+          Stop drawing
+        </button>
+      </div>
+      <p className="panel__intro">
+        Press and sweep across the chart to set bar heights; each stroke is one step to undo. Heights snap to {snap}. Esc
+        stops a stroke. {n === 0 ? 'There are no bars yet: start a new empty storm below.' : ''}
+      </p>
+      <form className="tool tool--wide" onSubmit={create} aria-labelledby="new-storm-title">
+        <h3 id="new-storm-title">New empty storm</h3>
+        <div className="tool__fields">
+          <ToolField id="new-storm-step" label="Bar duration" unit="min" text={stepText} onText={setStepText} message={stepMessage} />
+          <ToolField
+            id="new-storm-count"
+            label="Number of bars"
+            text={countText}
+            onText={setCountText}
+            message={countMessage}
+            inputMode="numeric"
+          />
+          <button type="submit">Start a new empty storm</button>
+        </div>
+      </form>
+      <p className="storm-panel__status" role="status">
+        {status}
+      </p>
+    </section>
+  );
+}

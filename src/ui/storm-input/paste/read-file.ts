@@ -1,0 +1,36 @@
+/**
+ * Reads a chosen rainfall file as text for the paste preview. Never throws:
+ * a file that is too large, unreadable or not text gives a message naming it.
+ */
+export type FileText = { readonly ok: true; readonly text: string; readonly name: string } | { readonly ok: false; readonly message: string };
+
+/** Larger files are refused before reading: a rainfall record of a million lines is about 30 MB. */
+export const MAX_FILE_BYTES = 50 * 1024 * 1024;
+
+function readWithReader(file: Blob): Promise<string> {
+  return new Promise((resolve, reject) => {
+    const reader = new FileReader();
+    reader.onload = () => resolve(typeof reader.result === 'string' ? reader.result : '');
+    reader.onerror = () => reject(reader.error ?? new Error('the file could not be read'));
+    reader.readAsText(file);
+  });
+}
+
+export async function readTextFile(file: File): Promise<FileText> {
+  const name = file.name || 'the file';
+  if (file.size > MAX_FILE_BYTES) {
+    const mb = (file.size / (1024 * 1024)).toFixed(1);
+    return { ok: false, message: `${name} is ${mb} MB; files up to ${MAX_FILE_BYTES / (1024 * 1024)} MB can be read. Open a shorter record.` };
+  }
+  let text: string;
+  try {
+    text = typeof file.text === 'function' ? await file.text() : await readWithReader(file);
+  } catch (error) {
+    return { ok: false, message: `${name} could not be read (${error instanceof Error ? error.message : String(error)}).` };
+  }
+  if (text.includes('\u0000')) {
+    return { ok: false, message: `${name} is not a text file; save the rainfall as .csv or .txt and open that.` };
+  }
+  if (text.trim() === '') return { ok: false, message: `${name} is empty.` };
+  return { ok: true, text, name };
+}
