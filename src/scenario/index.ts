@@ -17,3 +17,17 @@ export {
 export { scenarioToFileText, scenarioFromFileText, scenarioFileName, FILE_FORMAT_TAG, MAX_FILE_CHARS } from './file';
 export { CAUTION_TEXT } from './caution';
 export { DEMO_SCENARIO } from './demo';
+export {
+  createScenarioLibrary,
+  LIBRARY_KEY,
+  LIBRARY_FORMAT_TAG,
+  LIBRARY_VERSION,
+  MAX_DELETED,
+  type ScenarioLibrary,
+  type LibraryEntry,
+  type DeletedEntry,
+  type LibraryListing,
+  type LibraryResult,
+  type LibraryOptions,
+  type StorageLike,
+} from './library';

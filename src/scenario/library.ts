@@ -1,0 +1,389 @@
+import { capProblems, describeValue, problem, type Problem } from './problems';
+import { parseScenario } from './schema';
+import type { Scenario } from './types';
+
+/**
+ * The part of the Web Storage interface the library uses: `localStorage` in
+ * the browser, a plain object in tests. Any method may throw (storage turned
+ * off, quota full); the library catches and reports it.
+ */
+export interface StorageLike {
+  getItem(key: string): string | null;
+  setItem(key: string, value: string): void;
+  removeItem(key: string): void;
+}
+
+/** A saved scenario. `id` is stable across renames; `savedAt` is ISO 8601 (UTC). */
+export interface LibraryEntry {
+  readonly id: string;
+  readonly savedAt: string;
+  readonly scenario: Scenario;
+}
+
+/** A deleted scenario kept for undo, with where it stood in the list. */
+export interface DeletedEntry extends LibraryEntry {
+  readonly deletedAt: string;
+  readonly position: number;
+}
+
+export interface LibraryListing {
+  /** Saved scenarios in the user's order. */
+  readonly entries: readonly LibraryEntry[];
+  /** Deleted scenarios that can be restored, most recently deleted first. */
+  readonly deleted: readonly DeletedEntry[];
+  /** Storage keys under which damaged saved data was set aside, oldest first. */
+  readonly setAside: readonly string[];
+  /** False when saving would overwrite data that could not be set aside. */
+  readonly canWrite: boolean;
+  /** What was found wrong with the stored list on this reading, if anything. */
+  readonly problems: readonly Problem[];
+}
+
+/** `problems` on success are notices (e.g. damaged data set aside while reading). */
+export type LibraryResult<T> =
+  | { readonly ok: true; readonly value: T; readonly problems: readonly Problem[] }
+  | { readonly ok: false; readonly problems: readonly Problem[] };
+
+export interface ScenarioLibrary {
+  list(): LibraryListing;
+  get(id: string): LibraryResult<LibraryEntry>;
+  /** Saves a new entry, or replaces entry `id` when it is still in the list. */
+  save(scenario: Scenario, id?: string): LibraryResult<LibraryEntry>;
+  rename(id: string, name: string): LibraryResult<LibraryEntry>;
+  /** A copy placed right after the original, named "… (copy)". */
+  duplicate(id: string): LibraryResult<LibraryEntry>;
+  /** Moves the entry to the deleted list, from which `restore` brings it back. */
+  delete(id: string): LibraryResult<DeletedEntry>;
+  restore(id: string): LibraryResult<LibraryEntry>;
+}
+
+export interface LibraryOptions {
+  /** Storage key of the list (default LIBRARY_KEY). */
+  readonly key?: string;
+  /** The clock, for time stamps (default: the system clock). */
+  readonly now?: () => Date;
+}
+
+export const LIBRARY_KEY = 'raincut.library';
+export const LIBRARY_FORMAT_TAG = 'raincut-library';
+export const LIBRARY_VERSION = 1;
+/** Deleted scenarios kept for undo; older deletions are dropped for good. */
+export const MAX_DELETED = 20;
+export const MAX_NAME_LENGTH = 200;
+
+interface State {
+  nextId: number;
+  entries: LibraryEntry[];
+  deleted: DeletedEntry[];
+  setAside: string[];
+}
+
+interface Loaded {
+  readonly state: State;
+  readonly canWrite: boolean;
+  readonly problems: Problem[];
+}
+
+const isRecord = (x: unknown): x is Record<string, unknown> => x !== null && typeof x === 'object' && !Array.isArray(x);
+const why = (error: unknown): string => (error instanceof Error ? error.message : String(error));
+const ISO_UTC = /^\d{4}-\d{2}-\d{2}T\d{2}:\d{2}:\d{2}(\.\d+)?Z$/;
+const ID = /^s[1-9]\d{0,14}$/;
+
+function emptyState(): State {
+  return { nextId: 1, entries: [], deleted: [], setAside: [] };
+}
+
+/** Reads one stored entry; its problems are prefixed with where it stood. */
+function readEntry(raw: unknown, where: string, deleted: boolean, problems: Problem[]): DeletedEntry | LibraryEntry | undefined {
+  const fail = (text: string): undefined => {
+    problems.push({ path: where, message: `${where}: ${text}` });
+    return undefined;
+  };
+  if (!isRecord(raw)) return fail(`is not a saved scenario (got ${describeValue(raw)}).`);
+  const { id, savedAt, scenario } = raw;
+  if (typeof id !== 'string' || !ID.test(id)) return fail(`has no proper id (got ${describeValue(id)}).`);
+  if (typeof savedAt !== 'string' || !ISO_UTC.test(savedAt)) return fail(`has no proper savedAt time (got ${describeValue(savedAt)}).`);
+  const parsed = parseScenario(scenario);
+  if (!parsed.ok) {
+    const name = isRecord(scenario) && typeof scenario['name'] === 'string' ? ` "${scenario['name'].slice(0, 60)}"` : '';
+    for (const p of parsed.problems) {
+      problems.push({ path: `${where}.scenario${p.path === '' ? '' : `.${p.path}`}`, message: `${where}${name}: ${p.message}` });
+    }
+    return undefined;
+  }
+  if (!deleted) return { id, savedAt, scenario: parsed.scenario };
+  const { deletedAt, position } = raw;
+  if (typeof deletedAt !== 'string' || !ISO_UTC.test(deletedAt)) return fail(`has no proper deletedAt time (got ${describeValue(deletedAt)}).`);
+  if (typeof position !== 'number' || !Number.isSafeInteger(position) || position < 0) {
+    return fail(`has no proper position (got ${describeValue(position)}).`);
+  }
+  return { id, savedAt, scenario: parsed.scenario, deletedAt, position };
+}
+
+type Parsed =
+  | { readonly kind: 'ok'; readonly state: State; readonly damage: Problem[] }
+  | { readonly kind: 'unreadable'; readonly reason: string }
+  | { readonly kind: 'newer'; readonly version: number };
+
+/** Reads the stored text: whole, partly damaged (damage listed), unreadable, or from a newer build. */
+function parseStored(text: string): Parsed {
+  let json: unknown;
+  try {
+    json = JSON.parse(text);
+  } catch (error) {
+    return { kind: 'unreadable', reason: `it is not valid JSON (${why(error)})` };
+  }
+  if (!isRecord(json) || json['$format'] !== LIBRARY_FORMAT_TAG) {
+    return { kind: 'unreadable', reason: `it is not a Raincut list of scenarios (no "$format": "${LIBRARY_FORMAT_TAG}")` };
+  }
+  const version = json['version'];
+  if (typeof version === 'number' && Number.isSafeInteger(version) && version > LIBRARY_VERSION) {
+    return { kind: 'newer', version };
+  }
+  if (version !== LIBRARY_VERSION) return { kind: 'unreadable', reason: `its version is ${describeValue(version)}` };
+  if (!Array.isArray(json['entries'])) return { kind: 'unreadable', reason: 'it has no list of entries' };
+
+  const damage: Problem[] = [];
+  const state = emptyState();
+  const seen = new Set<string>();
+  const take = (list: unknown, name: 'entries' | 'deleted'): void => {
+    if (list === undefined && name === 'deleted') return;
+    if (!Array.isArray(list)) {
+      damage.push(problem(`The ${name} list was not a list (got ${describeValue(list)}).`));
+      return;
+    }
+    list.forEach((raw, i) => {
+      const entry = readEntry(raw, `${name}[${i}]`, name === 'deleted', damage);
+      if (!entry) return;
+      if (seen.has(entry.id)) {
+        damage.push({ path: `${name}[${i}].id`, message: `${name}[${i}].id: "${entry.id}" is used twice.` });
+        return;
+      }
+      seen.add(entry.id);
+      if (name === 'entries') state.entries.push(entry);
+      else state.deleted.push(entry as DeletedEntry);
+    });
+  };
+  take(json['entries'], 'entries');
+  take(json['deleted'], 'deleted');
+  const setAside = json['setAside'] ?? [];
+  if (Array.isArray(setAside) && setAside.every((k) => typeof k === 'string')) state.setAside = [...setAside];
+  else damage.push(problem(`The list of set-aside keys was damaged (got ${describeValue(setAside)}).`));
+
+  // Ids are never reused, so the counter must pass every id seen.
+  const highest = Math.max(0, ...[...seen].map((id) => Number(id.slice(1))));
+  const nextId = json['nextId'];
+  if (typeof nextId === 'number' && Number.isSafeInteger(nextId) && nextId > highest) state.nextId = nextId;
+  else {
+    state.nextId = highest + 1;
+    if (nextId !== undefined) damage.push(problem(`The id counter was damaged (got ${describeValue(nextId)}); it now starts after the highest id.`));
+  }
+  return { kind: 'ok', state, damage };
+}
+
+function serialise(state: State): string {
+  return JSON.stringify({ $format: LIBRARY_FORMAT_TAG, version: LIBRARY_VERSION, ...state });
+}
+
+/**
+ * The browser's named list of scenarios. Every call reads storage afresh (so
+ * two tabs do not undo each other's changes) and writes the whole list in
+ * one `setItem`, so a write either happens completely or not at all. Damaged
+ * stored data is copied, as it was, to a set-aside key before anything is
+ * written over it; if that copy cannot be made, nothing is written at all.
+ * Never throws.
+ */
+export function createScenarioLibrary(storage: StorageLike, options: LibraryOptions = {}): ScenarioLibrary {
+  const key = options.key ?? LIBRARY_KEY;
+  const now = (): string => (options.now ?? (() => new Date()))().toISOString();
+
+  /** Writes the list; undefined on success, else the problem. */
+  function write(state: State, what: string): Problem | undefined {
+    try {
+      storage.setItem(key, serialise(state));
+      return undefined;
+    } catch (error) {
+      return problem(
+        `${what} could not be saved: the browser refused to store the list (${why(error)}). ` +
+          'Nothing saved before was changed; save the scenario as a file to keep it.',
+      );
+    }
+  }
+
+  /** A storage key not yet in use, for setting damaged data aside. */
+  function freeKey(stamp: string): string {
+    const base = `${key}.damaged.${stamp}`;
+    let candidate = base;
+    for (let n = 2; storage.getItem(candidate) !== null; n++) candidate = `${base}-${n}`;
+    return candidate;
+  }
+
+  function load(): Loaded {
+    let text: string | null;
+    try {
+      text = storage.getItem(key);
+    } catch (error) {
+      return {
+        state: emptyState(),
+        canWrite: false,
+        problems: [problem(`The saved scenarios could not be read from this browser (${why(error)}).`)],
+      };
+    }
+    if (text === null) return { state: emptyState(), canWrite: true, problems: [] };
+    const parsed = parseStored(text);
+    if (parsed.kind === 'ok' && parsed.damage.length === 0) return { state: parsed.state, canWrite: true, problems: [] };
+    if (parsed.kind === 'newer') {
+      return {
+        state: emptyState(),
+        canWrite: false,
+        problems: [
+          problem(
+            `The saved scenarios were written by a newer version of Raincut (list version ${parsed.version}); ` +
+              'reload the page to use it. Nothing will be changed here.',
+          ),
+        ],
+      };
+    }
+
+    // Damaged: keep an exact copy of what was stored, then carry on with what could be read.
+    const state = parsed.kind === 'ok' ? parsed.state : emptyState();
+    const details = capProblems(parsed.kind === 'ok' ? parsed.damage : [problem(`The saved list could not be read: ${parsed.reason}.`)]);
+    let asideKey: string;
+    try {
+      asideKey = freeKey(now());
+      storage.setItem(asideKey, text);
+    } catch (error) {
+      return {
+        state,
+        canWrite: false,
+        problems: [
+          problem(
+            `The saved scenarios are damaged and could not be set aside (${why(error)}). They are left as they are ` +
+              `under "${key}", and nothing will be saved over them.`,
+          ),
+          ...details,
+        ],
+      };
+    }
+    state.setAside = [...state.setAside, asideKey];
+    const summary = problem(
+      parsed.kind === 'ok'
+        ? `Part of the saved list of scenarios was damaged and is left out (see below). The list as it was is kept under browser storage key "${asideKey}".`
+        : `The saved list of scenarios was damaged and could not be read. It is kept as it was under browser storage key "${asideKey}".`,
+    );
+    const failed = write(state, 'The repaired list');
+    return { state, canWrite: true, problems: failed ? [summary, ...details, failed] : [summary, ...details] };
+  }
+
+  function findEntry(state: State, id: string): number {
+    return state.entries.findIndex((e) => e.id === id);
+  }
+
+  function missing(id: string, notices: readonly Problem[]): { readonly ok: false; readonly problems: readonly Problem[] } {
+    return { ok: false, problems: [...notices, problem(`There is no saved scenario with id ${describeValue(id)}; it may have been deleted in another tab.`)] };
+  }
+
+  /** Runs a change on a fresh reading and writes it back. */
+  function change<T>(what: string, apply: (state: State, notices: Problem[]) => LibraryResult<T>): LibraryResult<T> {
+    const loaded = load();
+    if (!loaded.canWrite) {
+      return { ok: false, problems: [...loaded.problems, problem(`${what} was not done: the saved list cannot be written safely now.`)] };
+    }
+    const result = apply(loaded.state, loaded.problems);
+    if (!result.ok) return result;
+    const failed = write(loaded.state, what);
+    return failed ? { ok: false, problems: [...loaded.problems, failed] } : result;
+  }
+
+  function copyName(state: State, name: string): string {
+    const names = new Set(state.entries.map((e) => e.scenario.name));
+    const base = name.replace(/ \(copy( \d+)?\)$/, '');
+    let candidate = `${base} (copy)`;
+    for (let n = 2; names.has(candidate); n++) candidate = `${base} (copy ${n})`;
+    return candidate;
+  }
+
+  return {
+    list() {
+      const { state, canWrite, problems } = load();
+      return { entries: state.entries, deleted: state.deleted, setAside: state.setAside, canWrite, problems };
+    },
+
+    get(id) {
+      const { state, problems } = load();
+      const entry = state.entries.find((e) => e.id === id);
+      return entry ? { ok: true, value: entry, problems } : missing(id, problems);
+    },
+
+    save(scenario, id) {
+      const parsed = parseScenario(scenario);
+      if (!parsed.ok) return { ok: false, problems: parsed.problems };
+      return change<LibraryEntry>('The scenario', (state, notices) => {
+        const index = id === undefined ? -1 : findEntry(state, id);
+        const entry: LibraryEntry = {
+          id: index >= 0 ? (state.entries[index] as LibraryEntry).id : `s${state.nextId++}`,
+          savedAt: now(),
+          scenario: parsed.scenario,
+        };
+        if (index >= 0) state.entries[index] = entry;
+        else state.entries.push(entry);
+        return { ok: true, value: entry, problems: notices };
+      });
+    },
+
+    rename(id, name) {
+      const trimmed = typeof name === 'string' ? name.trim() : '';
+      if (trimmed === '') return { ok: false, problems: [problem('A saved scenario needs a name; the new name is empty.')] };
+      if (trimmed.length > MAX_NAME_LENGTH) {
+        return { ok: false, problems: [problem(`The new name has ${trimmed.length} characters; a name may have at most ${MAX_NAME_LENGTH}.`)] };
+      }
+      return change<LibraryEntry>('The new name', (state, notices) => {
+        const index = findEntry(state, id);
+        if (index < 0) return missing(id, notices);
+        const old = state.entries[index] as LibraryEntry;
+        const entry: LibraryEntry = { ...old, scenario: { ...old.scenario, name: trimmed } };
+        state.entries[index] = entry;
+        return { ok: true, value: entry, problems: notices };
+      });
+    },
+
+    duplicate(id) {
+      return change<LibraryEntry>('The copy', (state, notices) => {
+        const index = findEntry(state, id);
+        if (index < 0) return missing(id, notices);
+        const original = state.entries[index] as LibraryEntry;
+        const entry: LibraryEntry = {
+          id: `s${state.nextId++}`,
+          savedAt: now(),
+          scenario: { ...original.scenario, name: copyName(state, original.scenario.name) },
+        };
+        state.entries.splice(index + 1, 0, entry);
+        return { ok: true, value: entry, problems: notices };
+      });
+    },
+
+    delete(id) {
+      return change<DeletedEntry>('The deletion', (state, notices) => {
+        const index = findEntry(state, id);
+        if (index < 0) return missing(id, notices);
+        const [entry] = state.entries.splice(index, 1) as [LibraryEntry];
+        const gone: DeletedEntry = { ...entry, deletedAt: now(), position: index };
+        state.deleted = [gone, ...state.deleted].slice(0, MAX_DELETED);
+        return { ok: true, value: gone, problems: notices };
+      });
+    },
+
+    restore(id) {
+      return change<LibraryEntry>('The restore', (state, notices) => {
+        const index = state.deleted.findIndex((e) => e.id === id);
+        if (index < 0) {
+          return { ok: false, problems: [...notices, problem(`There is no deleted scenario with id ${describeValue(id)} to restore.`)] };
+        }
+        const [gone] = state.deleted.splice(index, 1) as [DeletedEntry];
+        const entry: LibraryEntry = { id: gone.id, savedAt: gone.savedAt, scenario: gone.scenario };
+        state.entries.splice(Math.min(gone.position, state.entries.length), 0, entry);
+        return { ok: true, value: entry, problems: notices };
+      });
+    },
+  };
+}
