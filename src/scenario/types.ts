@@ -6,14 +6,19 @@ import type { LossKind, LossMethod, UnitSystem } from '../core';
  * share link carry. Results are always recomputed from it by the core.
  *
  * Version 1. Later versions add fields and a migration in `migrate.ts`.
+ * Every way in (link, file, browser storage) goes through `parseScenario`
+ * in `schema.ts`; docs/scenario-schema.md describes each field.
  */
 export interface ScenarioV1 {
   readonly version: 1;
   readonly name: string;
   readonly notes: string;
   readonly storm: {
+    /** Duration of each bar, h (> 0). */
     readonly durationsH: readonly number[];
+    /** Rain depth of each bar, mm (≥ 0); one per duration. */
     readonly depthsMm: readonly number[];
+    /** Start of the first bar, ISO 8601 date-time ("2026-07-14T15:00"); left out when not known. */
     readonly startIso?: string;
   };
   readonly catchment: {

@@ -1,14 +1,16 @@
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
-import { DEMO_SCENARIO, type Scenario } from '../../src/scenario';
 import {
+  DEMO_SCENARIO,
   LIBRARY_FORMAT_TAG,
   LIBRARY_KEY,
   MAX_DELETED,
   createScenarioLibrary,
   type LibraryResult,
+  type Scenario,
   type StorageLike,
 } from '../../src/scenario';
+import { scenarioArb } from './arbitraries';
 
 /** Web Storage in memory, with a quota and switches to make it fail. */
 class MemoryStorage implements StorageLike {
@@ -172,6 +174,17 @@ describe('the saved-scenario list', () => {
     expect(deleted).toHaveLength(MAX_DELETED);
     expect(deleted[0]?.id).toBe(ids[ids.length - 1]);
     expect(refusal(library.restore(ids[0] as string))).toEqual(['There is no deleted scenario with id "s1" to restore.']);
+  });
+
+  it('gives back exactly what was saved, for random scenarios', () => {
+    fc.assert(
+      fc.property(scenarioArb, (scenario) => {
+        const { library, storage } = setup();
+        const id = value(library.save(scenario)).id;
+        expect(value(createScenarioLibrary(storage).get(id)).scenario).toStrictEqual(scenario);
+      }),
+      { numRuns: 150, seed: 32 },
+    );
   });
 
   it('does not undo changes made in another tab', () => {
