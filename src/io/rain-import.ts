@@ -5,7 +5,7 @@ import { parseNumber } from './numbers';
 import { problem, problemList, type ImportProblem, type ProblemList } from './problems';
 import { checkSeriesSettings, checkStep, columnName, readSeries, type Series, type SeriesSettings } from './series';
 import type { TextRow } from './table-text';
-import { formatTimeOfDay, isoAt } from './time-values';
+import { formatTimeOfDay, isoAt, parseClock } from './time-values';
 
 /**
  * Rainfall from pasted text: one column of values, or a time and a value.
@@ -82,7 +82,8 @@ const VALUE_KIND_WORDS: Record<RainValueKind, string> = {
   cumulative: 'cumulative depth',
 };
 
-const RAIN_NAME = /rain|precip|depth|\bmm\b|inch|\bin\b|intens|cumul|\bcum\b|accum|mass\b|\bp\b|\bi\b/i;
+// "in" counts only as a unit in brackets or with /h, so "time in min" is not taken for rain.
+const RAIN_NAME = /rain|precip|depth|\bmm\b|inch|[([]in\b|\bin\/h|intens|cumul|\bcum\b|accum|mass\b|\bp\b|\bi\b/i;
 const isRainName = (name: string): boolean => RAIN_NAME.test(name);
 
 /** Kind, unit and step that a column name states, e.g. "Intensity (in/h)", "Cumulative rain [mm]", "10-min rain". */
@@ -119,10 +120,14 @@ export function guessRainSettings(text: string): RainImportSettings {
   const valueKind: RainValueKind = hints.kind ?? (looksCumulative(values) ? 'cumulative' : 'depth');
   const hasTimes = layout.timeColumn !== null;
   let timeMarks: TimeMarks = 'end';
+  const firstRow = sample.find((r) => r.cells.length > 0);
+  const firstTimeCell = layout.timeColumn === null ? '' : (firstRow?.cells[layout.timeColumn - 1] ?? '');
   if (layout.timeKind === 'elapsed-min' || layout.timeKind === 'elapsed-h') {
-    const firstRow = sample.find((r) => r.cells.length > 0);
-    const firstTime = parseNumber(firstRow?.cells[(layout.timeColumn as number) - 1] ?? '', layout.decimal);
-    if (firstTime === 0) timeMarks = 'start';
+    if (parseNumber(firstTimeCell, layout.decimal) === 0) timeMarks = 'start';
+  } else if (layout.timeKind === 'clock' && layout.dateColumn === null) {
+    // A daily record stamped with dates alone gives each day's rain under that day's date.
+    const first = parseClock(firstTimeCell, layout.dateOrder);
+    if (first.ok && first.value.date !== null && !first.value.hasTime) timeMarks = 'start';
   }
   const firstValue = values.find((v) => !Number.isNaN(v));
   const cumulativeFrom: CumulativeFrom = hasTimes || firstValue === 0 ? 'first-value' : 'zero';

@@ -199,10 +199,36 @@ describe('guessRainImport on realistic pastes', () => {
     ]);
   });
 
+  it('takes a column named "time in min" for elapsed minutes, not for rain', () => {
+    expect(guessRainSettings('Time in min\tP (in)\n5\t0.1\n10\t0.2\n15\t0.05')).toMatchObject({
+      timeColumn: 1,
+      timeKind: 'elapsed-min',
+      valueColumn: 2,
+      unit: 'in',
+    });
+  });
+
   it('ignores a bar-number column and takes the depths beside it', () => {
     const text = 'Bar\tDepth (mm)\n1\t0.5\n2\t1.5\n3\t0.25\n';
     expect(guessRainSettings(text)).toMatchObject({ timeColumn: null, valueColumn: 2, timeKind: 'none' });
     expect(stormOf(text).depthsMm).toEqual([0.5, 1.5, 0.25]);
+  });
+
+  it("reads a daily record stamped with dates alone as each day's rain under its date", () => {
+    const text = 'Date\tRain (mm)\n2024-05-01\t12.5\n2024-05-02\t0\n2024-05-03\t3.5\n';
+    expect(guessRainSettings(text)).toMatchObject({ timeKind: 'clock', timeMarks: 'start' });
+    const storm = stormOf(text);
+    expect(storm.durationsH).toEqual([24, 24, 24]);
+    expect(storm.startIso).toBe('2024-05-01T00:00:00');
+    expect(guessRainImport(text).summary).toBe(
+      '3 bars of 24 h from 2024-05-01 00:00, depths in mm, total 16 mm; time stamps mark the start of each bar.',
+    );
+  });
+
+  it('reports a footer line as a problem rather than reading or dropping it', () => {
+    expect(problemsOf('Time\tRain (mm)\n10:10\t1\n10:20\t2\nTotal\t3')).toEqual([
+      { row: 4, column: 1, field: 'time', value: 'Total', reason: expect.stringMatching(/^not a time/) },
+    ]);
   });
 
   it('places a storm on the calendar only from dates, never from a guess', () => {
