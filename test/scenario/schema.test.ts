@@ -324,6 +324,23 @@ describe('parseScenario checks the method through the core table', () => {
     }
   }
 
+  for (const kind of METHOD_KINDS) {
+    for (const choice of (METHODS[kind] as MethodSpec).choices ?? []) {
+      it(`${kind}: refuses a ${choice.key} that is not one of its choices, and a missing one`, () => {
+        const input = demo();
+        input['observed'] = null;
+        input['method'] = { ...defaultMethod(kind), [choice.key]: 'none of these' };
+        expect(problemAt(parseScenario(input), `method.${choice.key}`).message).toBe(
+          `method.${choice.key}: ${choice.label} must be ${choice.choices.map((c) => JSON.stringify(c.value)).join(' or ')} (got "none of these").`,
+        );
+        const method: Record<string, unknown> = { ...defaultMethod(kind) };
+        delete method[choice.key];
+        input['method'] = method;
+        expect(problemAt(parseScenario(input), `method.${choice.key}`).message).toBe(`method.${choice.key}: is missing (${choice.label}).`);
+      });
+    }
+  }
+
   it('checks remembered methods too, each under its own kind', () => {
     const input = demo();
     input['methodMemory'] = {
