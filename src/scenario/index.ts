@@ -8,6 +8,8 @@ export { CURRENT_SCENARIO_VERSION, MIGRATIONS, migrate, type Migration, type Mig
 export {
   encodeScenarioLink,
   decodeScenarioLink,
+  makeShareLink,
+  type ShareLinkResult,
   isScenarioLink,
   LINK_FORMAT_VERSION,
   LINK_PREFIX,

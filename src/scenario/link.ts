@@ -2,7 +2,7 @@ import { deflateSync } from 'fflate';
 import { decodeBase64Url, encodeBase64Url } from './base64url';
 import { crc32 } from './crc32';
 import { inflateRawCapped } from './inflate-capped';
-import { failure, problem, type ScenarioResult } from './problems';
+import { failure, problem, type Problem, type ScenarioResult } from './problems';
 import { parseScenario } from './schema';
 import type { Scenario } from './types';
 
@@ -85,6 +85,30 @@ export function encodeScenarioLink(scenario: Scenario): string {
   const sum = crc32(bytes.subarray(0, bytes.length - 4));
   new DataView(bytes.buffer).setUint32(bytes.length - 4, sum, false);
   return LINK_PREFIX + encodeBase64Url(bytes);
+}
+
+export type ShareLinkResult =
+  | { readonly ok: true; readonly fragment: string }
+  | { readonly ok: false; readonly problems: readonly Problem[] };
+
+/**
+ * What "Copy link" should call: checks the scenario as a reader will, makes
+ * the link, and refuses one that readers would refuse as too long (the
+ * scenario should then be shared as a file). Never throws.
+ */
+export function makeShareLink(scenario: Scenario): ShareLinkResult {
+  const checked = parseScenario(scenario);
+  if (!checked.ok) return checked;
+  const fragment = encodeScenarioLink(checked.scenario);
+  if (fragment.length > MAX_LINK_CHARS) {
+    return failure([
+      problem(
+        `This scenario makes a link of ${fragment.length} characters, more than the ${MAX_LINK_CHARS} a link may have. ` +
+          'Save it as a file to share it.',
+      ),
+    ]);
+  }
+  return { ok: true, fragment };
 }
 
 /** True when the fragment (with or without '#') looks like a scenario link of any format. */

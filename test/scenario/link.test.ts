@@ -9,6 +9,7 @@ import {
   decodeScenarioLink,
   encodeScenarioLink,
   isScenarioLink,
+  makeShareLink,
   type Scenario,
   type ScenarioResult,
 } from '../../src/scenario';
@@ -106,6 +107,32 @@ describe('a share link', () => {
     if (!result.ok) expect.fail(JSON.stringify(result.problems));
     const back = new Float64Array(result.scenario.storm.depthsMm);
     expect(new Uint8Array(back.buffer)).toEqual(new Uint8Array(new Float64Array(depthsMm).buffer));
+  });
+});
+
+describe('makeShareLink', () => {
+  it('gives the link for a valid scenario', () => {
+    expect(makeShareLink(DEMO_SCENARIO)).toEqual({ ok: true, fragment: encodeScenarioLink(DEMO_SCENARIO) });
+  });
+
+  it('refuses to make a link that would not open, naming the field', () => {
+    const bad = { ...DEMO_SCENARIO, catchment: { name: '', areaM2: -1 } };
+    const result = makeShareLink(bad);
+    expect(!result.ok && result.problems.map((p) => p.path)).toEqual(['catchment.areaM2']);
+  });
+
+  it('refuses a scenario too large for a link, pointing to the file', () => {
+    // Full-precision random depths do not compress: about 13 characters a bar.
+    let seed = 9;
+    const depthsMm = Array.from({ length: 30_000 }, () => {
+      seed = (seed * 48271) % 2147483647;
+      return seed / 2147483647;
+    });
+    const big: Scenario = { ...DEMO_SCENARIO, storm: { durationsH: depthsMm.map(() => 1 / 12), depthsMm } };
+    const result = makeShareLink(big);
+    expect(!result.ok && result.problems[0]?.message).toMatch(
+      new RegExp(`^This scenario makes a link of \\d+ characters, more than the ${MAX_LINK_CHARS} a link may have\\. Save it as a file to share it\\.$`),
+    );
   });
 });
 
