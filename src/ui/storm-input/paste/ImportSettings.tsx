@@ -1,5 +1,5 @@
 import { useId, useState, type ReactNode } from 'react';
-import { parseNumber as parseCell, type RainImportSettings, type TextRow } from '../../../io';
+import { parseClock, parseNumber as parseCell, type RainImportSettings, type TextRow } from '../../../io';
 import { NumberField } from '../../fields/NumberField';
 
 /** A change to the import settings as the user corrects a guess. */
@@ -97,6 +97,16 @@ export function ImportSettings({ settings: s, header, columnCount, rows, onChang
   const hasTimes = s.timeColumn !== null && s.timeKind !== 'none';
   const clock = hasTimes && s.timeKind === 'clock';
   const rateUnit = s.valueKind === 'intensity';
+  // Date controls only where the times call for them: times of day without dates, or dates written day/month.
+  const firstRow = rows.find((r) => r.cells.length > 0);
+  const timeCell = s.timeColumn === null ? '' : (firstRow?.cells[s.timeColumn - 1] ?? '');
+  const dateCell = s.dateColumn === null ? '' : (firstRow?.cells[s.dateColumn - 1] ?? '');
+  const reading = clock ? parseClock(timeCell, s.dateOrder) : null;
+  const timesOfDay = reading !== null && reading.ok && reading.value.date === null;
+  const slashed = /^\d{1,2}[./-]\d{1,2}[./-]\d{2,4}/;
+  const showDateColumn = clock && (timesOfDay || s.dateColumn !== null);
+  const showFirstDate = clock && ((timesOfDay && s.dateColumn === null) || s.dateForTimesOfDay !== null);
+  const showDateOrder = clock && (slashed.test(timeCell) || slashed.test(dateCell));
 
   const chooseTimeColumn = (value: string): void => {
     if (value === '') {
@@ -185,29 +195,29 @@ export function ImportSettings({ settings: s, header, columnCount, rows, onChang
             <option value="start">The start of its bar</option>
           </Select>
         ) : null}
-        {clock ? (
-          <>
-            <Select
-              label="Date column"
-              value={s.dateColumn === null ? '' : String(s.dateColumn)}
-              onChange={(v) => onChange({ dateColumn: v === '' ? null : Number(v) })}
-            >
-              <option value="">None (dates with the times, or no dates)</option>
-              {columns
-                .filter((c) => c !== s.timeColumn && c !== s.valueColumn)
-                .map((c) => (
-                  <option key={c} value={String(c)}>
-                    {columnLabel(c, header)}
-                  </option>
-                ))}
-            </Select>
-            <Select label="Dates are written" value={s.dateOrder} onChange={(v) => onChange({ dateOrder: v as RainImportSettings['dateOrder'] })}>
-              <option value="day-month">Day first (31/12/2024)</option>
-              <option value="month-day">Month first (12/31/2024)</option>
-            </Select>
-            <DateField value={s.dateForTimesOfDay} onChange={(d) => onChange({ dateForTimesOfDay: d })} />
-          </>
+        {showDateColumn ? (
+          <Select
+            label="Date column"
+            value={s.dateColumn === null ? '' : String(s.dateColumn)}
+            onChange={(v) => onChange({ dateColumn: v === '' ? null : Number(v) })}
+          >
+            <option value="">None (dates with the times)</option>
+            {columns
+              .filter((c) => c !== s.timeColumn && c !== s.valueColumn)
+              .map((c) => (
+                <option key={c} value={String(c)}>
+                  {columnLabel(c, header)}
+                </option>
+              ))}
+          </Select>
         ) : null}
+        {showDateOrder ? (
+          <Select label="Dates are written" value={s.dateOrder} onChange={(v) => onChange({ dateOrder: v as RainImportSettings['dateOrder'] })}>
+            <option value="day-month">Day first (31/12/2024)</option>
+            <option value="month-day">Month first (12/31/2024)</option>
+          </Select>
+        ) : null}
+        {showFirstDate ? <DateField value={s.dateForTimesOfDay} onChange={(d) => onChange({ dateForTimesOfDay: d })} /> : null}
       </fieldset>
 
       <fieldset className="guesses__group">

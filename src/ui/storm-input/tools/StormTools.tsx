@@ -129,7 +129,21 @@ export function StormTools() {
 
   return (
     <section id={STORM_TOOLS_ID} className="panel storm-panel storm-tools" aria-labelledby="storm-tools-title">
-      <h2 id="storm-tools-title">Storm tools</h2>
+      <div className="storm-panel__head">
+        <h2 id="storm-tools-title">Storm tools</h2>
+        <button
+          type="button"
+          className="button--danger"
+          onClick={clearStorm}
+          disabled={n === 0}
+          aria-describedby="clear-storm-hint"
+        >
+          Clear storm
+        </button>
+      </div>
+      <p className="visually-hidden" id="clear-storm-hint">
+        Removes every bar; Undo brings them back.
+      </p>
       <div className="storm-tools__grid">
         <form className="tool" onSubmit={onScale} aria-label="Scale by a factor">
           <ToolField id="tool-factor" label="Scale factor" text={factor} onText={setFactor} message={messages.factor ?? null} />
@@ -177,12 +191,6 @@ export function StormTools() {
             </button>
           </div>
         </form>
-        <div className="tool tool--clear">
-          <p className="field__hint">Removes every bar (Undo brings them back).</p>
-          <button type="button" className="button--danger" onClick={clearStorm} disabled={n === 0}>
-            Clear storm
-          </button>
-        </div>
       </div>
       <p className="storm-panel__status" role="status">
         {status}
