@@ -1,12 +1,18 @@
 /**
- * Passes at most one value per animation frame to `apply`: the latest one.
- * A drag produces pointer events faster than the screen redraws; only the
- * last position in each frame matters.
+ * At most one update per animation frame, without waiting for the frame when
+ * there is no need to. The first value pushed between two frames is applied
+ * at once (so a pointer move shows in the frame it arrives for, not one
+ * later); further values until the next frame wait, and only the latest is
+ * kept. A frame that closes with a value still waiting and nothing applied
+ * since the last frame applies it then. Frames are counted by a
+ * requestAnimationFrame ticker that runs from the first push until flush or
+ * cancel (the end of a drag).
  */
 export interface FrameThrottle<T> {
   push(value: T): void;
-  /** Applies a pending value now (on release), so the last position is never dropped. */
+  /** Applies a waiting value now and stops the ticker (on release: the last position is never dropped). */
   flush(): void;
+  /** Drops a waiting value and stops the ticker. */
   cancel(): void;
 }
 
@@ -15,27 +21,45 @@ export function frameThrottle<T>(
   request: (cb: () => void) => number = (cb) => requestAnimationFrame(cb),
   cancelRequest: (id: number) => void = (id) => cancelAnimationFrame(id),
 ): FrameThrottle<T> {
-  let pending: { value: T } | null = null;
-  let id: number | null = null;
-  const run = (): void => {
-    id = null;
-    const p = pending;
-    pending = null;
-    if (p) apply(p.value);
+  let waiting: { value: T } | null = null;
+  let frame = 0;
+  let appliedInFrame = -1;
+  let ticker: number | null = null;
+
+  const tick = (): void => {
+    if (waiting && appliedInFrame !== frame) {
+      const w = waiting;
+      waiting = null;
+      apply(w.value);
+    }
+    frame++;
+    ticker = request(tick);
   };
+  const stop = (): void => {
+    if (ticker !== null) cancelRequest(ticker);
+    ticker = null;
+  };
+
   return {
     push(value) {
-      pending = { value };
-      if (id === null) id = request(run);
+      if (ticker === null) ticker = request(tick);
+      if (appliedInFrame !== frame) {
+        waiting = null;
+        appliedInFrame = frame;
+        apply(value);
+      } else {
+        waiting = { value };
+      }
     },
     flush() {
-      if (id !== null) cancelRequest(id);
-      run();
+      stop();
+      const w = waiting;
+      waiting = null;
+      if (w) apply(w.value);
     },
     cancel() {
-      if (id !== null) cancelRequest(id);
-      id = null;
-      pending = null;
+      stop();
+      waiting = null;
     },
   };
 }
