@@ -3,6 +3,7 @@ import { describe, expect, it } from 'vitest';
 import { METHODS, METHOD_KINDS, defaultMethod, type MethodSpec } from '../../src/core';
 import { LISTED_BARS } from '../../src/scenario/schema';
 import {
+  CURRENT_SCENARIO_VERSION,
   DEMO_SCENARIO,
   MAX_LISTED_PROBLEMS,
   parseScenario,
@@ -179,7 +180,7 @@ describe('parseScenario names the field of every problem', () => {
     input['storm'].gauge = 'A1';
     input['catchment'].slope = 0.02;
     const result = parseScenario(input);
-    expect(problemAt(result, 'colour').message).toBe('colour: is not a field of a version 1 scenario.');
+    expect(problemAt(result, 'colour').message).toBe(`colour: is not a field of a version ${CURRENT_SCENARIO_VERSION} scenario.`);
     expect(problemAt(result, 'storm.gauge').message).toBe('storm.gauge: is not a field of the storm.');
     expect(problemAt(result, 'catchment.slope').message).toBe('catchment.slope: is not a field of the catchment.');
   });
