@@ -1,8 +1,9 @@
 import { StrictMode } from 'react';
 import { createRoot } from 'react-dom/client';
 import { DEMO_SCENARIO } from './scenario/demo';
-import { createWorkbenchStore, loadScenario, persistStore, type StorageLike } from './store';
+import { SET_ASIDE_PREFIX, STORAGE_KEY, createWorkbenchStore, loadScenario, persistStore, type StorageLike } from './store';
 import { App } from './ui/App';
+import { ErrorBoundary } from './ui/layout/ErrorBoundary';
 import './styles/app.css';
 
 /** The browser's storage, or null where it is switched off (reading `localStorage` can itself throw). */
@@ -27,10 +28,25 @@ if (storage && loaded.canSave) {
   });
 }
 
+/** After a crash: keep the saved scenario under a set-aside key, and reload on the demo. */
+function setAsideAndReload(): void {
+  try {
+    const saved = storage?.getItem(STORAGE_KEY);
+    if (storage && saved != null) {
+      storage.setItem(SET_ASIDE_PREFIX + new Date().toISOString(), saved);
+      storage.removeItem(STORAGE_KEY);
+    }
+  } finally {
+    window.location.reload();
+  }
+}
+
 const root = document.getElementById('root');
 if (!root) throw new Error('index.html has no #root element');
 createRoot(root).render(
   <StrictMode>
-    <App store={store} />
+    <ErrorBoundary onSetAside={setAsideAndReload}>
+      <App store={store} />
+    </ErrorBoundary>
   </StrictMode>,
 );
