@@ -6,7 +6,7 @@ import type { Scenario } from './types';
  * 10 minutes, 41.6 mm in all, over a 3.2 km² mixed rural–suburban catchment.
  */
 export const DEMO_SCENARIO: Scenario = {
-  version: 1,
+  version: 2,
   name: 'Demo: Fenmoor Brook storm (invented)',
   notes:
     'Invented example for trying the workbench: a made-up 3-hour summer storm over a made-up 3.2 km² catchment. ' +
@@ -21,4 +21,5 @@ export const DEMO_SCENARIO: Scenario = {
   method: { kind: 'constant', rateMmH: 8 },
   methodMemory: {},
   observed: { as: 'depth', value: 12.5, parameter: 'rateMmH', locked: false },
+  streamflow: null,
 };

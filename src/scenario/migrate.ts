@@ -1,7 +1,7 @@
 import { describeValue, problemAt, type Problem } from './problems';
 
 /** The scenario format version this build writes, and the newest it reads. */
-export const CURRENT_SCENARIO_VERSION = 1;
+export const CURRENT_SCENARIO_VERSION = 2;
 
 /** A scenario document of some version, before it is validated. */
 export type RawDocument = Readonly<Record<string, unknown>>;
@@ -23,12 +23,25 @@ export interface Migration {
 }
 
 /**
- * The upgrade chain, oldest first. Version 1 is the first version of the
- * format, so there is nothing to upgrade yet. When the document changes
- * (e.g. the streamflow record, the event set), bump CURRENT_SCENARIO_VERSION
- * and append `{ from: 1, to: 2, summary, up }`; never edit a released step.
+ * Version 1 → 2: the streamflow record joins the document. A version 1
+ * document had none, so it gets `streamflow: null` and nothing else
+ * changes. A `streamflow` field already there (only a hand-edited file
+ * could have one) is passed through for the schema to check like any
+ * version 2 record, rather than dropped.
  */
-export const MIGRATIONS: readonly Migration[] = [];
+const addStreamflow: Migration = {
+  from: 1,
+  to: 2,
+  summary: 'Adds `streamflow`: the event\'s streamflow record and its baseflow separation, null when there is none.',
+  up: (doc) => ({ ...doc, version: 2, streamflow: Object.hasOwn(doc, 'streamflow') ? doc['streamflow'] : null }),
+};
+
+/**
+ * The upgrade chain, oldest first. When the document changes (e.g. the
+ * event set), bump CURRENT_SCENARIO_VERSION and append the next step
+ * `{ from, to: from + 1, summary, up }`; never edit a released step.
+ */
+export const MIGRATIONS: readonly Migration[] = [addStreamflow];
 
 export type MigrationResult =
   | { readonly ok: true; readonly doc: RawDocument; readonly fromVersion: number }

@@ -36,13 +36,15 @@ export function formatPath(keys: readonly PathKey[]): string {
 }
 
 /**
- * Storm bars are counted from 1 for people and from 0 in the path, so a
- * per-bar path also says which bar: "storm.depthsMm[12] (bar 13)".
+ * Storm bars and streamflow samples are counted from 1 for people and from 0
+ * in the path, so a per-bar path also says which bar: "storm.depthsMm[12]
+ * (bar 13)", "streamflow.timesH[4] (sample 5)".
  */
 function label(keys: readonly PathKey[]): string {
   const path = formatPath(keys);
   const last = keys[keys.length - 1];
   if (keys.length === 3 && keys[0] === 'storm' && typeof last === 'number') return `${path} (bar ${last + 1})`;
+  if (keys.length === 3 && keys[0] === 'streamflow' && typeof last === 'number') return `${path} (sample ${last + 1})`;
   return path;
 }
 

@@ -1,5 +1,17 @@
 import * as v from 'valibot';
-import { isInputError, isLossKind, validateStorm, type LossKind, type LossMethod } from '../core';
+import {
+  isBaseflowKind,
+  isInputError,
+  isLossKind,
+  validateBaseflowMethod,
+  validateHydrograph,
+  validateStorm,
+  type BaseflowKind,
+  type BaseflowMethod,
+  type LossKind,
+  type LossMethod,
+} from '../core';
+import { baseflowRecordProblem, readBaseflowMethod } from './baseflow-check';
 import { isIsoDateTime } from './iso-date-time';
 import { fittableParameters, readMethod } from './method-check';
 import { CURRENT_SCENARIO_VERSION, migrate, type RawDocument } from './migrate';
@@ -40,7 +52,20 @@ export const FIELD_HELP: Readonly<Record<string, string>> = {
   'observed.value': 'the observed runoff, mm for a depth or m³ for a volume',
   'observed.parameter': 'the parameter of the active method to fit',
   'observed.locked': 'whether the fit follows the bars as they change, true or false',
+  streamflow: 'the streamflow record of the event and its baseflow separation, or null',
+  'streamflow.timesH': 'the time of each sample, hours after the first sample',
+  'streamflow.dischargeM3s': 'the discharge of each sample, m³/s',
+  'streamflow.offsetH': 'hours from the storm start to the first sample (negative when the record starts first)',
+  'streamflow.baseflow': 'the baseflow separation method, with its kind and parameters',
+  'streamflow.baseflowMemory': 'the last parameters used for each baseflow method, an object keyed by kind (may be empty)',
+  'streamflow.useAsObserved': 'whether the observed runoff is the separated direct-runoff depth, true or false',
 };
+
+/**
+ * The most samples a streamflow record may have: a year of one-minute
+ * readings is about half of it, as for bars.
+ */
+export const MAX_SAMPLES = 1_000_000;
 
 type Message = (issue: v.BaseIssue<unknown>) => string;
 const must = (rule: string): Message => (issue) => `must be ${rule} (got ${describeValue(issue.input)}).`;
@@ -121,6 +146,40 @@ const CatchmentEntries = {
   areaM2: numberField('a number ≥ 0 (catchment area, m²; 0 when not known)', nonNegative),
 };
 
+/**
+ * A list with one number per streamflow sample, checked in one loop like
+ * the bar lists (a million bad values cost a handful of messages).
+ */
+function sampleList(what: string, rule: string, test: (x: number) => boolean) {
+  return v.pipe(
+    v.array(v.unknown(), must(`a list of ${what}, one per sample`)),
+    v.maxLength(MAX_SAMPLES, (issue) => `has ${(issue.input as unknown[]).length} samples; a streamflow record holds at most ${MAX_SAMPLES}.`),
+    v.rawTransform(({ dataset, addIssue, NEVER }): number[] => {
+      const list = dataset.value;
+      const out: number[] = [];
+      let bad = 0;
+      for (let k = 0; k < list.length; k++) {
+        const x = list[k];
+        if (typeof x === 'number' && test(x)) {
+          out.push(unsignedZero(x));
+          continue;
+        }
+        bad++;
+        if (bad <= LISTED_BARS) {
+          addIssue({ message: `must be ${rule} (got ${describeValue(x)}).`, path: issuePath(list, [k]) });
+        }
+      }
+      if (bad > LISTED_BARS) {
+        const rest = bad - LISTED_BARS;
+        addIssue({ message: `${rest} more sample${rest === 1 ? ' is' : 's are'} wrong too (only the first ${LISTED_BARS} are listed).` });
+      }
+      return bad > 0 ? NEVER : out;
+    }),
+  );
+}
+
+const finite = (x: number): boolean => Number.isFinite(x);
+
 const ObservedEntries = {
   as: v.picklist(['depth', 'volume'], must('"depth" or "volume"')),
   value: numberField('a number ≥ 0 (mm for a depth, m³ for a volume)', nonNegative),
@@ -186,6 +245,119 @@ const MethodMemorySchema = v.pipe(
   }),
 );
 
+const BaseflowSchema = v.pipe(
+  v.unknown(),
+  v.rawTransform(({ dataset, addIssue, NEVER }) => {
+    const method = readBaseflowMethod(dataset.value, (keys, message) =>
+      addIssue({ message, path: issuePath(dataset.value, keys) }),
+    );
+    return method ?? NEVER;
+  }),
+);
+
+type BaseflowMemory = Partial<Record<BaseflowKind, BaseflowMethod>>;
+
+const BaseflowMemorySchema = v.pipe(
+  v.unknown(),
+  v.rawTransform(({ dataset, addIssue, NEVER }): BaseflowMemory => {
+    const input = dataset.value;
+    if (input === null || typeof input !== 'object' || Array.isArray(input)) {
+      addIssue({ message: `must be an object keyed by baseflow method kind, or {} (got ${describeValue(input)}).` });
+      return NEVER;
+    }
+    const memory: BaseflowMemory = {};
+    let ok = true;
+    for (const key of Object.keys(input)) {
+      const entry = (input as Record<string, unknown>)[key];
+      if (!isBaseflowKind(key)) {
+        addIssue({ message: 'is not a baseflow method kind this version of Raincut knows.', path: issuePath(input, [key]) });
+        ok = false;
+        continue;
+      }
+      const method = readBaseflowMethod(
+        entry,
+        (keys, message) => addIssue({ message, path: issuePath(input, [key, ...keys]) }),
+        key,
+      );
+      if (method) memory[key] = method;
+      else ok = false;
+    }
+    return ok ? memory : NEVER;
+  }),
+);
+
+const StreamflowEntries = {
+  timesH: sampleList('sample times in hours', 'a finite number (hours after the first sample)', finite),
+  dischargeM3s: sampleList('discharges in m³/s', 'a number ≥ 0 (discharge, m³/s)', nonNegative),
+  startIso: v.exactOptional(
+    v.pipe(
+      v.string(must('text: an ISO 8601 date-time such as "2026-07-14T15:00", or left out')),
+      v.check(isIsoDateTime, must('an ISO 8601 date-time such as "2026-07-14T15:00" or "2026-07-14T15:00:00Z"')),
+    ),
+  ),
+  offsetH: numberField('a finite number of hours (from the storm start to the first sample)', finite),
+  baseflow: BaseflowSchema,
+  baseflowMemory: BaseflowMemorySchema,
+  useAsObserved: v.boolean(must('true or false')),
+};
+
+/**
+ * Checks of the streamflow record that need more than one field: lists of
+ * equal length, the core's own record check (so a stored record is one the
+ * core accepts), baseflow parameters that fit this record, and a link to
+ * the observed runoff only where there is one.
+ */
+function checkStreamflow(doc: Partial<Record<string, unknown>>, add: (keys: readonly PathKey[], message: string) => void): void {
+  const flow = doc['streamflow'] as
+    | { timesH?: unknown; dischargeM3s?: unknown; baseflow?: unknown; baseflowMemory?: unknown; useAsObserved?: unknown }
+    | null
+    | undefined;
+  if (!flow || typeof flow !== 'object') return;
+  const { timesH, dischargeM3s } = flow;
+  if (flow.useAsObserved === true && doc['observed'] === null) {
+    add(
+      ['streamflow', 'useAsObserved'],
+      'is true, but there is no observed runoff to follow the separation (observed is null); set observed or make this false.',
+    );
+  }
+  if (!Array.isArray(timesH) || !Array.isArray(dischargeM3s)) return;
+  if (timesH.length !== dischargeM3s.length) {
+    add(
+      ['streamflow', 'dischargeM3s'],
+      `has ${dischargeM3s.length} sample${dischargeM3s.length === 1 ? '' : 's'} but streamflow.timesH has ${timesH.length}; every sample needs both a time and a discharge.`,
+    );
+    return;
+  }
+  // The per-sample lists are checked above; only a clean record goes to the core.
+  if (!timesH.every((t) => typeof t === 'number') || !dischargeM3s.every((q) => typeof q === 'number')) return;
+  const record = { timesH: timesH as number[], dischargeM3s: dischargeM3s as number[] };
+  try {
+    validateHydrograph(record);
+  } catch (error) {
+    if (!isInputError(error)) throw error;
+    const keys: PathKey[] = ['streamflow', error.field];
+    if (error.index !== undefined) keys.push(error.index);
+    add(keys, error.message);
+    return;
+  }
+  const judge = (method: unknown, keys: readonly PathKey[]): void => {
+    const kind = (method as { kind?: unknown } | null)?.kind;
+    if (method === null || typeof method !== 'object' || !isBaseflowKind(kind)) return;
+    try {
+      validateBaseflowMethod(method as BaseflowMethod);
+    } catch {
+      return; // already reported, with its field, by the method check
+    }
+    const found = baseflowRecordProblem(record, method as BaseflowMethod);
+    if (found) add([...keys, found[0]], found[1]);
+  };
+  judge(flow.baseflow, ['streamflow', 'baseflow']);
+  const memory = flow.baseflowMemory;
+  if (memory && typeof memory === 'object' && !Array.isArray(memory)) {
+    for (const [key, entry] of Object.entries(memory)) judge(entry, ['streamflow', 'baseflowMemory', key]);
+  }
+}
+
 const DocumentEntries = {
   version: v.literal(CURRENT_SCENARIO_VERSION, must(`${CURRENT_SCENARIO_VERSION}`)),
   name: text(),
@@ -196,12 +368,16 @@ const DocumentEntries = {
   method: MethodSchema,
   methodMemory: MethodMemorySchema,
   observed: v.nullable(fields(ObservedEntries, 'an object with as, value, parameter and locked, or null')),
+  streamflow: v.nullable(
+    fields(StreamflowEntries, 'an object with timesH, dischargeM3s, offsetH, baseflow, baseflowMemory and useAsObserved, or null'),
+  ),
 };
 
 /**
  * Checks that need more than one field: bar lists of equal length, the fitted
- * parameter belonging to the active method, and the core's own storm check
- * (so a document that passes here is one the core accepts).
+ * parameter belonging to the active method, the streamflow record's own
+ * checks (`checkStreamflow`), and the core's own storm check (so a document
+ * that passes here is one the core accepts).
  */
 const crossFieldChecks = v.rawCheck<v.InferOutput<v.ObjectSchema<typeof DocumentEntries, undefined>>>(
   ({ dataset, addIssue }) => {
@@ -227,6 +403,7 @@ const crossFieldChecks = v.rawCheck<v.InferOutput<v.ObjectSchema<typeof Document
         );
       }
     }
+    checkStreamflow(doc, add);
     if (!dataset.issues && dataset.typed) {
       try {
         validateStorm(dataset.value.storm);
@@ -269,6 +446,7 @@ function unknownFields(doc: RawDocument): Problem[] {
   visit(doc['storm'], ['storm'], Object.keys(StormEntries), 'the storm');
   visit(doc['catchment'], ['catchment'], Object.keys(CatchmentEntries), 'the catchment');
   visit(doc['observed'], ['observed'], Object.keys(ObservedEntries), 'the observed runoff');
+  visit(doc['streamflow'], ['streamflow'], Object.keys(StreamflowEntries), 'the streamflow record');
   return found;
 }
 

@@ -1,11 +1,12 @@
-import type { LossKind, LossMethod, UnitSystem } from '../core';
+import type { BaseflowKind, BaseflowMethod, LossKind, LossMethod, UnitSystem } from '../core';
 
 /**
  * The scenario document: everything the user chose, and nothing derived.
  * It is what the store holds, what the browser saves, what a file and a
  * share link carry. Results are always recomputed from it by the core.
  *
- * Version 1. Later versions add fields and a migration in `migrate.ts`.
+ * Version 1 is below; later versions add fields and a migration in `migrate.ts`
+ * (version 2: the streamflow record).
  * Every way in (link, file, browser storage) goes through `parseScenario`
  * in `schema.ts`; docs/scenario-schema.md describes each field.
  */
@@ -44,4 +45,47 @@ export interface ScenarioV1 {
   } | null;
 }
 
-export type Scenario = ScenarioV1;
+/**
+ * A streamflow record for the event, how it lines up with the storm, and
+ * how baseflow is separated from it. Added in version 2.
+ */
+export interface Streamflow {
+  /** Time of each sample, h after the first sample (strictly increasing; steps may differ). */
+  readonly timesH: readonly number[];
+  /** Discharge at each sample, m³/s (≥ 0); one per time. */
+  readonly dischargeM3s: readonly number[];
+  /** Clock time of the first sample, ISO 8601 date-time; left out when the record has no clock. */
+  readonly startIso?: string;
+  /**
+   * Hours from the start of the storm to the first sample (negative when the
+   * record starts before the rain). Used to line the two up when either has
+   * no clock time; when both have one, the clocks decide and this is kept
+   * for when one of them is taken away.
+   */
+  readonly offsetH: number;
+  /**
+   * The baseflow separation with its parameters. Times in its parameters
+   * (an end point) are hours after the first sample, like `timesH`; a start
+   * of rise is a 0-based sample index.
+   */
+  readonly baseflow: BaseflowMethod;
+  /** Last parameters used for each separation method, so switching back restores them. */
+  readonly baseflowMemory: Partial<Record<BaseflowKind, BaseflowMethod>>;
+  /**
+   * The observed runoff to match is this separation's direct-runoff depth,
+   * worked out afresh from the record, the method and the catchment area
+   * (so `observed.value` is not read while this is on). Needs `observed`.
+   */
+  readonly useAsObserved: boolean;
+}
+
+/**
+ * Version 2: version 1 with the event's streamflow record (or null). A
+ * version 1 document upgrades with no record.
+ */
+export interface ScenarioV2 extends Omit<ScenarioV1, 'version'> {
+  readonly version: 2;
+  readonly streamflow: Streamflow | null;
+}
+
+export type Scenario = ScenarioV2;

@@ -126,7 +126,7 @@ export const scenarioArb: fc.Arbitrary<Scenario> = fc
           }
         : null;
     return {
-      version: 1,
+      version: 2,
       name: r.name,
       notes: r.notes,
       storm: r.start === undefined ? r.storm : { ...r.storm, startIso: r.start },
@@ -135,6 +135,7 @@ export const scenarioArb: fc.Arbitrary<Scenario> = fc
       method: r.method,
       methodMemory: r.methodMemory,
       observed,
+      streamflow: null,
     } satisfies Scenario;
   });
 

@@ -2,6 +2,7 @@ import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
 import {
   CAUTION_TEXT,
+  CURRENT_SCENARIO_VERSION,
   DEMO_SCENARIO,
   FILE_FORMAT_TAG,
   MAX_FILE_CHARS,
@@ -113,8 +114,10 @@ describe('a file that is not right is refused with a message saying where', () =
   });
 
   it('refuses a file from a newer Raincut, saying so', () => {
-    const newer = good.replace('"version": 1,', '"version": 2,');
-    expect(messages(scenarioFromFileText(newer))[0]).toMatch(/^version: is 2, newer than this version of Raincut can read/);
+    const newer = good.replace(`"version": ${CURRENT_SCENARIO_VERSION},`, `"version": ${CURRENT_SCENARIO_VERSION + 1},`);
+    expect(messages(scenarioFromFileText(newer))[0]).toMatch(
+      new RegExp(`^version: is ${CURRENT_SCENARIO_VERSION + 1}, newer than this version of Raincut can read`),
+    );
   });
 
   it('refuses a file longer than the limit without parsing it', () => {
