@@ -9,6 +9,7 @@ import { MatchingPanel } from './matching/MatchingPanel';
 import { MethodPanel } from './method/MethodPanel';
 import { RainfallToolbar } from './rainfall/RainfallToolbar';
 import { ResultsPanel } from './results/ResultsPanel';
+import { BarTable, DrawableChart, RainfallTools, StormInputProvider, StormPanels } from './storm-input';
 
 export interface AppProps {
   readonly store: WorkbenchStore;
@@ -25,9 +26,15 @@ function Workbench({ rainfallTools }: { rainfallTools?: ReactNode }) {
       <main className="bench">
         <StorageNoticeBar />
         <div className="bench__main">
-          <RainfallToolbar tools={rainfallTools} />
-          <Hyetograph />
-          <ResultsPanel />
+          <StormInputProvider>
+            <RainfallToolbar tools={rainfallTools ?? <RainfallTools />} />
+            <StormPanels />
+            <DrawableChart>
+              <Hyetograph />
+            </DrawableChart>
+            <ResultsPanel />
+            <BarTable />
+          </StormInputProvider>
         </div>
         <div className="bench__side">
           <MethodPanel />

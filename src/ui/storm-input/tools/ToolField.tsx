@@ -24,7 +24,12 @@ export function ToolField({ id, label, unit, text, onText, message, hint, placeh
     <div className={`field tool-field${message ? ' field--bad' : ''}`}>
       <label htmlFor={id}>
         {label}
-        {unit ? <span className="field__unit"> ({unit})</span> : null}
+        {unit ? (
+          <>
+            {' '}
+            <span className="field__unit">({unit})</span>
+          </>
+        ) : null}
       </label>
       <input
         id={id}
