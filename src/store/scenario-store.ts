@@ -54,6 +54,8 @@ export interface WorkbenchActions {
   setMethodKind(kind: LossKind): void;
   setParam(key: string, value: number | boolean | string, options?: EditOptions): void;
   resetMethodDefaults(): void;
+  /** Sets all of the active method's parameters at once (a preset), as one undoable edit named `label`. */
+  setMethod(method: LossMethod, label: string): void;
 
   setObserved(patch: Partial<Observed> | null, options?: EditOptions): void;
   /** Turns "keep matched" on or off; turning it off keeps the fitted value. */
@@ -162,6 +164,13 @@ export function createWorkbenchStore(initial: Scenario, options: CreateStoreOpti
           opts,
         ),
       resetMethodDefaults: () => edit('Use default parameters', withMethodDefaults),
+      setMethod: (method, label) =>
+        edit(label, (s) => {
+          if (method.kind !== s.method.kind) {
+            throw new InputError('kind', `A ${methodSpec(method.kind).label} preset cannot be set while ${methodSpec(s.method.kind).label} is in use.`);
+          }
+          return withMethod(s, method);
+        }),
 
       setObserved: (patch, opts) => edit('Set observed runoff', (s) => withObserved(s, patch), opts),
       setKeepMatched: (on) =>

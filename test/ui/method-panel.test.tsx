@@ -1,7 +1,7 @@
 // @vitest-environment jsdom
 import { screen, within } from '@testing-library/react';
 import { describe, expect, it } from 'vitest';
-import { METHOD_KINDS, METHODS, defaultMethod } from '../../src/core';
+import { METHOD_KINDS, METHODS, defaultMethod, greenAmptForTexture } from '../../src/core';
 import { coreTotals, mmText, renderWorkbench } from './render';
 import { FOUR_BARS } from './store/fixtures';
 
@@ -97,5 +97,48 @@ describe('the loss-method panel', () => {
     expect(scenario().method).toEqual(defaultMethod('constant'));
     await user.click(screen.getByRole('button', { name: 'Undo' }));
     expect(scenario().method).toEqual(FOUR_BARS.method);
+  });
+});
+
+describe('infiltration methods', () => {
+  it('Horton’s choice of what capacity follows is a labelled radio group that sets the method', async () => {
+    const { user, scenario } = renderWorkbench({ ...FOUR_BARS, method: { kind: 'horton', f0MmH: 15, fcMmH: 3, kPerH: 1.5, ponding: true } });
+    const group = screen.getByRole('group', { name: 'Capacity follows' });
+    await user.click(within(group).getByRole('radio', { name: 'time from storm start' }));
+    expect(scenario().method).toEqual({ kind: 'horton', f0MmH: 15, fcMmH: 3, kPerH: 1.5, ponding: false });
+    // Capacity over clock time is drawn through the storm.
+    expect(document.querySelector('[data-layer="capacity"]')?.getAttribute('d')).toMatch(/^M/);
+    expect(screen.getByRole('list', { name: 'Legend' })).toHaveTextContent('Infiltration capacity');
+  });
+
+  it('Horton’s cross-parameter check is shown beside the field', async () => {
+    const { user } = renderWorkbench({ ...FOUR_BARS, method: { kind: 'horton', f0MmH: 15, fcMmH: 3, kPerH: 1.5, ponding: true } });
+    const f0 = screen.getByRole('textbox', { name: /^Initial capacity f₀/ });
+    await user.clear(f0);
+    await user.type(f0, '2');
+    expect(f0).toHaveAccessibleDescription(/must be at least the final capacity/);
+    expect(f0).toHaveValue('2');
+  });
+
+  it('Green–Ampt soil texture values set K, ψ and Δθ from the core’s table in one undoable edit', async () => {
+    const { user, scenario } = renderWorkbench({ ...FOUR_BARS, method: { kind: 'green-ampt', ksMmH: 3.4, suctionMm: 88.9, moistureDeficit: 0.3 } });
+    await user.selectOptions(screen.getByRole('combobox', { name: 'Soil texture' }), 'sandy loam');
+    const se = screen.getByRole('textbox', { name: 'Initial effective saturation' });
+    await user.clear(se);
+    await user.type(se, '0.5');
+    await user.click(screen.getByRole('button', { name: 'Use soil values' }));
+    expect(scenario().method).toEqual(greenAmptForTexture('sandy loam', 0.5));
+    expect(screen.getByRole('textbox', { name: 'Hydraulic conductivity K (mm/h)' })).toHaveValue('10.9');
+    await user.click(screen.getByRole('button', { name: 'Undo' }));
+    expect(scenario().method).toEqual({ kind: 'green-ampt', ksMmH: 3.4, suctionMm: 88.9, moistureDeficit: 0.3 });
+    expect(document.querySelector('[data-layer="capacity"]')?.getAttribute('d')).toMatch(/^M/);
+  });
+
+  it('a saturation outside 0 to 1 is refused beside the field', async () => {
+    const { user } = renderWorkbench({ ...FOUR_BARS, method: { kind: 'green-ampt', ksMmH: 3.4, suctionMm: 88.9, moistureDeficit: 0.3 } });
+    const se = screen.getByRole('textbox', { name: 'Initial effective saturation' });
+    await user.clear(se);
+    await user.type(se, '1.2');
+    expect(se).toHaveAccessibleDescription(/between 0 \(dry\) and 1 \(saturated\)/);
   });
 });

@@ -5,6 +5,7 @@ import { useDerived, useScenario } from '../../store';
 import { formatValue } from '../format';
 import { displayUnit, toDisplay, unitText } from '../units';
 import { Axes } from './Axes';
+import { CAPACITY_CURVES } from './capacity';
 import { chartFrame } from './frame';
 import { LINE_PARAM, LOSS_PARTS } from './line-params';
 import { LossLayer } from './LossLayer';
@@ -41,6 +42,11 @@ export function Hyetograph() {
 
   const frame = useMemo(() => chartFrame(storm, width, CHART_HEIGHT, units), [storm, width, units]);
   const part = useMemo(() => lossPart(storm, method), [storm, method]);
+  const capacity = CAPACITY_CURVES[method.kind];
+  const capacityPath = useMemo(
+    () => (capacity && results.ok ? capacity.path(frame, storm, method, results.result.lossMm) : null),
+    [capacity, frame, storm, method, results],
+  );
 
   const spec = methodSpec(method.kind);
   const lineKey = LINE_PARAM[method.kind];
@@ -72,6 +78,11 @@ export function Hyetograph() {
               <span className="swatch swatch--part" aria-hidden="true" /> {partLabel}
             </li>
           ) : null}
+          {capacity && capacityPath ? (
+            <li>
+              <span className="swatch swatch--capacity" aria-hidden="true" /> {capacity.label}
+            </li>
+          ) : null}
           {lineParam ? (
             <li>
               <span className="swatch swatch--line" aria-hidden="true" /> {lineParam.label} (drag or use arrow keys)
@@ -94,6 +105,7 @@ export function Hyetograph() {
               <LossLayer frame={frame} storm={storm} lossMm={results.result.lossMm} partMm={part} />
             ) : null}
           </g>
+          {capacityPath ? <path className="capacity" d={capacityPath} data-layer="capacity" aria-hidden="true" /> : null}
           {n === 0 ? (
             <text className="chart__empty" x={(frame.plot.left + frame.plot.right) / 2} y={(frame.plot.top + frame.plot.bottom) / 2} textAnchor="middle">
               No rainfall bars yet

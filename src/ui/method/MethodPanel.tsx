@@ -13,6 +13,7 @@ import {
 import { useActions, useDerived, useScenario } from '../../store';
 import { NumberField } from '../fields/NumberField';
 import { paramFromDisplay, paramToDisplay, paramUnitText } from '../units';
+import { SoilPresets } from './SoilPresets';
 
 const valueOf = (method: LossMethod, key: string): unknown => (method as unknown as Record<string, unknown>)[key];
 
@@ -144,6 +145,7 @@ export function MethodPanel() {
         {(spec.choices ?? []).map((choice) => (
           <ChoiceField key={choice.key} choice={choice} method={method} />
         ))}
+        {method.kind === 'green-ampt' ? <SoilPresets /> : null}
       </div>
       <div className="method__foot">
         <button type="button" onClick={actions.resetMethodDefaults}>

@@ -1,0 +1,65 @@
+import { useState } from 'react';
+import { SOIL_TEXTURES, greenAmptForTexture, isInputError, type SoilTextureName } from '../../core';
+import { useActions } from '../../store';
+import { NumberField } from '../fields/NumberField';
+
+const DEFAULT_TEXTURE: SoilTextureName = 'loam';
+
+/**
+ * Green–Ampt values from a soil texture (the core's table of Rawls,
+ * Brakensiek & Miller 1983) and the soil's initial effective saturation:
+ * one click sets K, ψ and Δθ together, as one undoable edit.
+ */
+export function SoilPresets() {
+  const actions = useActions();
+  const [texture, setTexture] = useState<SoilTextureName>(DEFAULT_TEXTURE);
+  const [saturation, setSaturation] = useState(0.3);
+  const [problem, setProblem] = useState<string | null>(null);
+  return (
+    <fieldset className="presets" aria-describedby="soil-preset-msg">
+      <legend>Soil texture values</legend>
+      <div className="field">
+        <label htmlFor="soil-texture">Soil texture</label>
+        <select
+          id="soil-texture"
+          value={texture}
+          onChange={(e) => {
+            const picked = SOIL_TEXTURES.find((t) => t.name === e.currentTarget.value);
+            if (picked) setTexture(picked.name);
+          }}
+        >
+          {SOIL_TEXTURES.map((t) => (
+            <option key={t.name} value={t.name}>
+              {t.name}
+            </option>
+          ))}
+        </select>
+      </div>
+      <NumberField
+        id="soil-saturation"
+        label="Initial effective saturation"
+        value={saturation}
+        check={(v) => (v < 0 || v > 1 ? 'Initial effective saturation must be between 0 (dry) and 1 (saturated).' : null)}
+        onCommit={setSaturation}
+        hint="0 as dry as the soil gets, 1 saturated."
+      />
+      <button
+        type="button"
+        onClick={() => {
+          try {
+            actions.setMethod(greenAmptForTexture(texture, saturation), `Use ${texture} soil values`);
+            setProblem(null);
+          } catch (error) {
+            if (!isInputError(error)) throw error;
+            setProblem(error.message);
+          }
+        }}
+      >
+        Use soil values
+      </button>
+      <p className="field__msg" id="soil-preset-msg" aria-live="polite">
+        {problem}
+      </p>
+    </fieldset>
+  );
+}

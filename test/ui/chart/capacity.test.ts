@@ -1,0 +1,48 @@
+import { describe, expect, it } from 'vitest';
+import { computeLosses, greenAmptRateMmH, hortonCapacityMmH, type LossMethod } from '../../../src/core';
+import { CAPACITY_CURVES } from '../../../src/ui/chart/capacity';
+import { chartFrame } from '../../../src/ui/chart/frame';
+
+const storm = { durationsH: [0.5, 0.5, 0.5, 0.5], depthsMm: [2, 6, 10, 2] };
+const frame = chartFrame(storm, 800, 300, 'si');
+
+/** The path's points, px (d3-shape writes them to three decimals). */
+const points = (d: string | null): [number, number][] =>
+  (d ?? '').replace(/^M/, '').split('L').map((p) => p.split(',').map(Number) as [number, number]);
+
+describe('capacity curves through the storm', () => {
+  it('Horton from the storm start follows the core’s capacity at clock time', () => {
+    const method: LossMethod = { kind: 'horton', f0MmH: 15, fcMmH: 3, kPerH: 1.5, ponding: false };
+    const d = CAPACITY_CURVES.horton?.path(frame, storm, method, computeLosses(storm, method).lossMm) ?? null;
+    const pts = points(d);
+    expect(pts.length).toBeGreaterThan(100);
+    const [x0, y0] = pts[0] as [number, number];
+    expect(x0).toBeCloseTo(frame.x(0), 2);
+    expect(y0).toBeCloseTo(frame.y(15), 2);
+    const [x1, y1] = pts[pts.length - 1] as [number, number];
+    expect(x1).toBeCloseTo(frame.x(2), 2);
+    expect(y1).toBeCloseTo(frame.y(hortonCapacityMmH(15, 3, 1.5, 2)), 2);
+  });
+
+  it('Horton with time compression draws nothing: the core has no capacity over time for it', () => {
+    const method: LossMethod = { kind: 'horton', f0MmH: 15, fcMmH: 3, kPerH: 1.5, ponding: true };
+    expect(CAPACITY_CURVES.horton?.path(frame, storm, method, computeLosses(storm, method).lossMm)).toBeNull();
+  });
+
+  it('Green–Ampt capacity at each bar end comes from the depth infiltrated so far', () => {
+    const method: LossMethod = { kind: 'green-ampt', ksMmH: 3.4, suctionMm: 88.9, moistureDeficit: 0.3 };
+    const loss = computeLosses(storm, method).lossMm;
+    const pts = points(CAPACITY_CURVES['green-ampt']?.path(frame, storm, method, loss) ?? null);
+    expect(pts).toHaveLength(5);
+    // Dry soil at the start: unbounded capacity, drawn along the top of the axis.
+    expect(pts[0]?.[1]).toBeCloseTo(frame.y(frame.topMmH), 2);
+    const f2 = (loss[0] as number) + (loss[1] as number);
+    expect(pts[2]?.[0]).toBeCloseTo(frame.x(1), 2);
+    expect(pts[2]?.[1]).toBeCloseTo(frame.y(Math.min(frame.topMmH, greenAmptRateMmH(3.4, 88.9, 0.3, f2))), 2);
+  });
+
+  it('methods without a capacity curve have none', () => {
+    expect(CAPACITY_CURVES.constant).toBeUndefined();
+    expect(CAPACITY_CURVES.proportional).toBeUndefined();
+  });
+});
