@@ -190,8 +190,16 @@ export function withMethod(s: Scenario, method: LossMethod): Scenario {
   return { ...s, method };
 }
 
-/** Changes part of the observed runoff (creating it when absent). */
+/**
+ * Changes part of the observed runoff (creating it when absent). Typing a
+ * value, or choosing depth or volume, takes the observed runoff back from
+ * the streamflow record when it followed the record's separation.
+ */
 export function withObserved(s: Scenario, patch: Partial<Observed> | null): Scenario {
+  const flow = s.streamflow;
+  if (flow?.useAsObserved && (patch === null || patch.value !== undefined || patch.as !== undefined)) {
+    return withObserved({ ...s, streamflow: { ...flow, useAsObserved: false } }, patch);
+  }
   if (patch === null) return s.observed === null ? s : { ...s, observed: null };
   const base: Observed = s.observed ?? {
     as: 'depth',

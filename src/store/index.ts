@@ -7,7 +7,20 @@ export type {
   WorkbenchState,
   WorkbenchStore,
 } from './scenario-store';
-export { createDerived, type Derived, type Results, type Target } from './derive';
+export { createDerived, type Derived, type Results, type Separation, type Target } from './derive';
+export {
+  FIRST_BASEFLOW_KIND,
+  recordOffsetH,
+  withBaseflowDefaults,
+  withBaseflowKind,
+  withBaseflowParam,
+  withRecordOffsetH,
+  withSeparationAsObserved,
+  withStreamflowRecord,
+  withoutStreamflow,
+  type RecordInput,
+} from './streamflow-edits';
+export { alignRecord, hoursBetweenClocks, type Alignment, type AlignmentSource } from './alignment';
 export type { Bar, Observed } from './edits';
 export { readScenario, readScenarioJson, type ReadResult } from './read-scenario';
 export {
