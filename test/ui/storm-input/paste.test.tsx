@@ -139,6 +139,8 @@ describe('pasting rainfall', () => {
     expect(screen.queryByRole('dialog')).toBeNull();
     const storm = scenario().storm;
     expect(storm.depthsMm).toEqual([0.4, 1.6, 3.2, 5, 2.2, 0.6]);
+    // Steps from clock times read as one step in the Rainfall summary, however their last bits fall.
+    expect(screen.getByRole('region', { name: 'Rainfall' })).toHaveTextContent('6 bars of 10 min, 13 mm in 1 h');
     expect(store.getState().history.past).toHaveLength(1);
     expect(store.getState().undoLabel).toBe('Paste rainfall');
     // Results come from the core for the new storm.

@@ -59,17 +59,19 @@ export function DrawPanel() {
     <section id={DRAW_PANEL_ID} className="panel storm-panel draw-panel" aria-labelledby="draw-panel-title">
       <div className="storm-panel__head">
         <h2 id="draw-panel-title">Drawing bars</h2>
+        <p className="draw-panel__hint">
+          Press and sweep across the chart to set bar heights; each stroke is one step to undo. Heights snap to {snap}.
+          Esc drops a stroke.{n === 0 ? ' There are no bars yet: start a new empty storm.' : ''}
+        </p>
         <button type="button" onClick={() => setDrawing(false)}>
           Stop drawing
         </button>
       </div>
-      <p className="panel__intro">
-        Press and sweep across the chart to set bar heights; each stroke is one step to undo. Heights snap to {snap}. Esc
-        stops a stroke. {n === 0 ? 'There are no bars yet: start a new empty storm below.' : ''}
-      </p>
       <form className="tool tool--wide" onSubmit={create} aria-labelledby="new-storm-title">
-        <h3 id="new-storm-title">New empty storm</h3>
         <div className="tool__fields">
+          <h3 id="new-storm-title" className="draw-panel__form-title">
+            New empty storm
+          </h3>
           <ToolField id="new-storm-step" label="Bar duration" unit="min" text={stepText} onText={setStepText} message={stepMessage} />
           <ToolField
             id="new-storm-count"

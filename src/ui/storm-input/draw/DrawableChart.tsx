@@ -4,7 +4,9 @@ import { barsPath } from '../../chart/bar-path';
 import { barTopsPx, chartFrame, type ChartFrame } from '../../chart/frame';
 import { frameThrottle, type FrameThrottle } from '../../chart/frame-throttle';
 import { CHART_HEIGHT } from '../../chart/Hyetograph';
+import { useTimeSpanH } from '../../chart/time-span';
 import { useStormInput } from '../context';
+import { DrawPanel } from './DrawPanel';
 import { paintSegment, rateAtPointer, type StrokePoint } from './draw-math';
 
 /** Where the chart's svg sits inside the wrapper, px. */
@@ -53,10 +55,14 @@ export function DrawableChart({ children }: { children?: ReactNode }) {
   const { drawing } = useStormInput();
   const wrapRef = useRef<HTMLDivElement | null>(null);
   return (
-    <div className={`drawable${drawing ? ' drawable--on' : ''}`} ref={wrapRef}>
-      {children}
-      {drawing ? <DrawLayer wrapRef={wrapRef} /> : null}
-    </div>
+    <>
+      <div className={`drawable${drawing ? ' drawable--on' : ''}`} ref={wrapRef}>
+        {children}
+        {drawing ? <DrawLayer wrapRef={wrapRef} /> : null}
+      </div>
+      {/* Under the chart, so the chart stays in view while drawing. */}
+      {drawing ? <DrawPanel /> : null}
+    </>
   );
 }
 
@@ -64,6 +70,8 @@ function DrawLayer({ wrapRef }: { wrapRef: RefObject<HTMLDivElement | null> }) {
   const actions = useActions();
   const storm = useScenario((s) => s.storm);
   const units = useScenario((s) => s.units);
+  // The hyetograph's own time axis (shared with a streamflow record when there is one).
+  const span = useTimeSpanH();
   const stroke = useRef<Stroke | null>(null);
   const [box, setBox] = useState<Box | null>(null);
   const [, setVersion] = useState(0);
@@ -103,7 +111,7 @@ function DrawLayer({ wrapRef }: { wrapRef: RefObject<HTMLDivElement | null> }) {
   }, []);
 
   const n = storm.depthsMm.length;
-  const frame = box ? chartFrame(storm, box.width, CHART_HEIGHT, units) : null;
+  const frame = box ? chartFrame(storm, box.width, CHART_HEIGHT, units, span) : null;
 
   const pointIn = (s: Pick<Stroke, 'frame' | 'box' | 'maxMmH'>, e: PointerEvent<HTMLDivElement>): StrokePoint => {
     const wrap = wrapRef.current;
@@ -130,7 +138,7 @@ function DrawLayer({ wrapRef }: { wrapRef: RefObject<HTMLDivElement | null> }) {
     if (!at) return;
     e.preventDefault();
     e.currentTarget.setPointerCapture?.(e.pointerId);
-    const f = chartFrame(storm, at.width, CHART_HEIGHT, units);
+    const f = chartFrame(storm, at.width, CHART_HEIGHT, units, span);
     const base = { frame: f, box: at, maxMmH: Math.max(f.y.invert(0), f.topMmH) };
     const first = pointIn(base, e);
     const s: Stroke = {
