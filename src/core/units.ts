@@ -9,10 +9,14 @@
  * written out so they can be checked by eye.
  */
 
-const FOOT_M = 0.3048;
+// Derived factors are written as their exact decimal values (the products of
+// the definitions below, worked out by hand) so each is the double nearest the
+// exact value (1 ft = 0.3048 m, 1 mi = 5280 ft); multiplying the factors in floating point would not be
+// (43560 × 0.3048² gives 4046.8564224000006, one unit in the last place off).
 const INCH_MM = 25.4;
-const MILE_M = 5280 * FOOT_M; // 1609.344 m
-const ACRE_M2 = 43560 * FOOT_M * FOOT_M; // 4046.8564224 m²
+const ACRE_M2 = 4046.8564224; // 43,560 ft²
+const CUBIC_FOOT_M3 = 0.028316846592; // 0.3048³
+const ACRE_FOOT_M3 = 1233.48183754752; // 43,560 ft³
 
 /** Size of one unit in the internal unit of its quantity. */
 export const DEPTH_UNITS = { mm: 1, in: INCH_MM } as const;
@@ -22,18 +26,18 @@ export const AREA_UNITS = {
   ha: 1e4,
   km2: 1e6,
   acre: ACRE_M2,
-  mi2: MILE_M * MILE_M, // 2,589,988.110336 m²
+  mi2: 2589988.110336, // (5280 ft)² = 1609.344² m²
 } as const;
 export const VOLUME_UNITS = {
   m3: 1,
   ML: 1e3,
-  ft3: FOOT_M * FOOT_M * FOOT_M, // 0.028316846592 m³
-  'acre-ft': ACRE_M2 * FOOT_M, // 1233.48183754752 m³
+  ft3: CUBIC_FOOT_M3,
+  'acre-ft': ACRE_FOOT_M3,
 } as const;
 export const DISCHARGE_UNITS = {
   'm3/s': 1,
   'L/s': 1e-3,
-  'ft3/s': FOOT_M * FOOT_M * FOOT_M,
+  'ft3/s': CUBIC_FOOT_M3,
 } as const;
 
 export type DepthUnit = keyof typeof DEPTH_UNITS;

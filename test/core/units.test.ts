@@ -22,20 +22,25 @@ describe('exact definitions', () => {
   });
 
   it('1 ft³ = 0.028316846592 m³ exactly (1 ft = 0.3048 m; NIST SP 811 (2008) B.8)', () => {
-    expectClose(VOLUME_UNITS.ft3, 0.028316846592, 1e-15);
-    expectClose(DISCHARGE_UNITS['ft3/s'], 0.028316846592, 1e-15);
+    expect(VOLUME_UNITS.ft3).toBe(0.028316846592);
+    expect(DISCHARGE_UNITS['ft3/s']).toBe(0.028316846592);
+    expectClose(0.3048 ** 3, VOLUME_UNITS.ft3, 1e-15); // the product of the definitions, to rounding
   });
 
   it('1 acre = 43,560 ft² = 4046.8564224 m² (international foot; NIST Handbook 44 (2023) appendix C)', () => {
-    expectClose(AREA_UNITS.acre, 4046.8564224, 1e-15);
+    // The double nearest the exact value, not 43560 × 0.3048² in floating point (1 ulp above).
+    expect(AREA_UNITS.acre).toBe(4046.8564224);
+    expectClose(43560 * 0.3048 * 0.3048, AREA_UNITS.acre, 1e-15);
   });
 
   it('1 acre-ft = 1233.48183754752 m³ (43,560 ft³ of the international foot)', () => {
-    expectClose(VOLUME_UNITS['acre-ft'], 1233.48183754752, 1e-15);
+    expect(VOLUME_UNITS['acre-ft']).toBe(1233.48183754752);
+    expectClose(43560 * 0.3048 ** 3, VOLUME_UNITS['acre-ft'], 1e-15);
   });
 
   it('1 mi² = 2,589,988.110336 m² (1 mi = 5280 ft = 1609.344 m; NIST SP 811 (2008) B.8)', () => {
-    expectClose(AREA_UNITS.mi2, 2589988.110336, 1e-15);
+    expect(AREA_UNITS.mi2).toBe(2589988.110336);
+    expectClose((5280 * 0.3048) ** 2, AREA_UNITS.mi2, 1e-15);
     expectClose(convertArea(1, 'mi2', 'acre'), 640, 1e-14);
   });
 
