@@ -71,7 +71,7 @@ export function Modal({ labelledBy, describedBy, onClose, initialFocus, classNam
     if (e.key !== 'Tab') return;
     const box = boxRef.current;
     if (!box) return;
-    const items = Array.from(box.querySelectorAll<HTMLElement>(FOCUSABLE)).filter((el) => !el.closest('[hidden]'));
+    const items = Array.from(box.querySelectorAll<HTMLElement>(FOCUSABLE)).filter((el) => el.tabIndex >= 0 && !el.closest('[hidden]'));
     const first = items[0];
     const last = items[items.length - 1];
     if (!first || !last) {

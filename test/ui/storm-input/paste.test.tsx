@@ -71,6 +71,17 @@ describe('pasting rainfall', () => {
     await waitFor(() => expect(within(dialog).getByText(/intensities in in\/h/)).toBeInTheDocument());
   });
 
+  it('on a US customary screen, values with no unit named are guessed to be inches; a named unit wins', async () => {
+    const { user } = renderWorkbench({ ...FOUR_BARS, units: 'us' });
+    const dialog = await openPaste(user);
+    const box = await pasteText(user, '0.1\n0.3\n0.2\n');
+    await waitFor(() => expect(within(dialog).getByRole('combobox', { name: 'Unit' })).toHaveValue('in'));
+    expect(within(dialog).getByText(/depths in in, total 0\.6 in \(15\.24 mm\)/)).toBeInTheDocument();
+    await user.clear(box);
+    await user.paste(TEN_MINUTE);
+    await waitFor(() => expect(within(dialog).getByRole('combobox', { name: 'Unit' })).toHaveValue('mm'));
+  });
+
   it('without a time column, bars take the step the user sets', async () => {
     const { user } = renderWorkbench();
     const dialog = await openPaste(user);
@@ -197,6 +208,17 @@ describe('pasting rainfall', () => {
     await user.click(within(dialog).getByRole('button', { name: 'Use these bars' }));
     expect(scenario().storm.durationsH).toEqual([0.25, 0.25, 0.25]);
     expect(store.getState().undoLabel).toBe('Open rainfall file event-invented.csv');
+  });
+
+  it('“Open a file…” inside the dialog replaces the text with the file’s', async () => {
+    const { user } = renderWorkbench();
+    const dialog = await openPaste(user);
+    await pasteText(user, ONE_COLUMN);
+    expect(within(dialog).getByRole('button', { name: 'Open a file…' })).toBeInTheDocument();
+    await user.upload(within(dialog).getByLabelText('Text file to read'), new File(['2\n4\n'], 'two-bars-invented.txt', { type: 'text/plain' }));
+    expect(await within(dialog).findByText('Read from two-bars-invented.txt')).toBeInTheDocument();
+    expect(within(dialog).getByRole('textbox', { name: 'Rainfall text' })).toHaveValue('2\n4\n');
+    await waitFor(() => expect(within(dialog).getByText(/^2 bars of 1 h, depths in mm, total 6 mm/)).toBeInTheDocument());
   });
 
   it('a file that is not text is refused with its name, and the storm is kept', async () => {

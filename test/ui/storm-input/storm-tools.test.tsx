@@ -53,6 +53,14 @@ describe('storm tools', () => {
     expect(store.getState().undoLabel).toBe('Set total depth to 2 in');
   });
 
+  it('a switch of units rewrites the total depth field in the new unit, so nothing typed is read in the wrong one', async () => {
+    const { user } = renderWorkbench();
+    const tools = await openTools(user);
+    expect(within(tools).getByRole('textbox', { name: 'Total depth (mm)' })).toHaveValue('20');
+    await user.click(screen.getByRole('radio', { name: 'US customary' }));
+    expect(within(tools).getByRole('textbox', { name: 'Total depth (in)' })).toHaveValue('0.787402');
+  });
+
   it('resample to another step with the depth kept, in one step', async () => {
     const { user, scenario, store } = renderWorkbench();
     const tools = await openTools(user);

@@ -1,10 +1,11 @@
 import { useDeferredValue, useId, useMemo, useRef, useState } from 'react';
 import { totalDepthMm } from '../../../core';
-import { applyRainImport, guessRainSettings, previewRainImport, type RainImportSettings } from '../../../io';
+import { applyRainImport, previewRainImport, type RainImportSettings } from '../../../io';
 import { useActions, useScenario } from '../../../store';
 import { formatValue } from '../../format';
 import { displayUnit, toDisplay, unitText } from '../../units';
 import { Modal } from '../Modal';
+import { guessForScreen } from './guess';
 import { ImportSettings, type SettingsPatch } from './ImportSettings';
 import { PreviewBars } from './PreviewBars';
 import { ProblemTable } from './ProblemTable';
@@ -49,7 +50,7 @@ export function PasteDialog({ initial, onClose }: PasteDialogProps) {
   const shownText = useDeferredValue(text);
   const stale = shownText !== text;
   const empty = shownText.trim() === '';
-  const guessed = useMemo(() => guessRainSettings(shownText), [shownText]);
+  const guessed = useMemo(() => guessForScreen(shownText, units), [shownText, units]);
   const settings: RainImportSettings = useMemo(() => ({ ...guessed, ...corrections }), [guessed, corrections]);
   const preview = useMemo(() => (empty ? null : previewRainImport(shownText, settings)), [empty, shownText, settings]);
   const result = useMemo(

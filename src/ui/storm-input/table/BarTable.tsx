@@ -210,11 +210,13 @@ export function BarTable() {
   const row = n === 0 ? 0 : Math.min(active.row, n - 1);
   const at: CellPos = { row, col: active.col };
 
-  // Bars added or removed elsewhere (undo, paste, draw) shift rows: typed-but-refused values no longer belong.
+  // Bars added or removed elsewhere (undo, paste, draw) shift rows, and a unit switch changes what typed
+  // depths mean: typed-but-refused values no longer belong.
   useEffect(() => {
     setDrafts(new Map());
     setEditing(null);
-  }, [n]);
+    editingRef.current = null;
+  }, [n, units]);
 
   useLayoutEffect(() => {
     const el = scrollerRef.current;

@@ -1,4 +1,4 @@
-import { useState, type FormEvent } from 'react';
+import { useEffect, useRef, useState, type FormEvent } from 'react';
 import { isInputError, scaleStormToDepth, totalDepthMm, type Storm } from '../../../core';
 import { resampleStorm, scaleStormByFactor } from '../../../core/storm-tools';
 import { useActions, useScenario } from '../../../store';
@@ -10,7 +10,7 @@ import { readStartText, startFieldText } from '../bar-times';
 import { STORM_TOOLS_ID } from '../context';
 import { ToolField } from './ToolField';
 
-type Messages = Partial<Record<'factor' | 'total' | 'step' | 'start', string>>;
+type Messages = { readonly [K in 'factor' | 'total' | 'step' | 'start']?: string | undefined };
 
 /**
  * Whole-storm edits, each one undoable step with its own name in the
@@ -33,6 +33,15 @@ export function StormTools() {
   const [start, setStart] = useState(() => startFieldText(storm.startIso));
   const [messages, setMessages] = useState<Messages>({});
   const [status, setStatus] = useState('');
+
+  // A depth typed in one unit must never be applied in another: a switch of units rewrites the field.
+  const shownUnits = useRef(units);
+  useEffect(() => {
+    if (shownUnits.current === units) return;
+    shownUnits.current = units;
+    setTotal(formatForField(toDisplay('depth', totalDepthMm(storm), units)));
+    setMessages((m) => ({ ...m, total: undefined }));
+  }, [units, storm]);
 
   const fail = (key: keyof Messages, message: string): void => {
     setMessages((m) => ({ ...m, [key]: message }));

@@ -1,0 +1,23 @@
+import type { UnitSystem } from '../../../core';
+import { guessRainSettings, rainHintsFromName, readTable, type RainImportSettings } from '../../../io';
+
+/** Lines past the skipped ones read to find the header: it is the first non-empty one. */
+const HEAD_LINES = 50;
+
+/**
+ * The import layer's guesses, with one addition from the screen: when nothing
+ * in the text names the unit (no "mm" or "in" in the value column's name),
+ * the values are taken to be in the unit the screen shows, inches on a US
+ * customary screen. It is a guess like the others, shown and correctable.
+ */
+export function guessForScreen(text: string, units: UnitSystem): RainImportSettings {
+  const guessed = guessRainSettings(text);
+  if (units !== 'us' || guessed.unit === 'in') return guessed;
+  let named = false;
+  if (guessed.hasHeader) {
+    const head = text.split('\n', guessed.skipLines + HEAD_LINES).join('\n');
+    const name = readTable(head, guessed).header?.cells[guessed.valueColumn - 1] ?? '';
+    named = rainHintsFromName(name).unit !== undefined;
+  }
+  return named ? guessed : { ...guessed, unit: 'in' };
+}
