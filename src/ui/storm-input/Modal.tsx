@@ -68,6 +68,11 @@ export function Modal({ labelledBy, describedBy, onClose, initialFocus, classNam
       onClose();
       return;
     }
+    // Undo and redo of the page's history stay with the page: inside the dialog nothing is applied yet.
+    if ((e.ctrlKey || e.metaKey) && ['z', 'y'].includes(e.key.toLowerCase())) {
+      e.stopPropagation();
+      return;
+    }
     if (e.key !== 'Tab') return;
     const box = boxRef.current;
     if (!box) return;

@@ -180,6 +180,18 @@ describe('pasting rainfall', () => {
     expect(screen.getByRole('button', { name: 'Paste rainfall…' })).toHaveFocus();
   });
 
+  it('Ctrl+Z inside the dialog does not undo edits behind it', async () => {
+    const { user, scenario, actions } = renderWorkbench();
+    actions.setBarDepth(0, 3);
+    const dialog = await openPaste(user);
+    within(dialog).getByRole('button', { name: 'Cancel' }).focus();
+    await user.keyboard('{Control>}z{/Control}');
+    expect(scenario().storm.depthsMm[0]).toBe(3);
+    await user.keyboard('{Escape}');
+    await user.keyboard('{Control>}z{/Control}');
+    expect(scenario().storm.depthsMm[0]).toBe(2);
+  });
+
   it('keeps Tab inside the dialog', async () => {
     const { user } = renderWorkbench();
     const dialog = await openPaste(user);
