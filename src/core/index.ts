@@ -53,6 +53,7 @@ export {
 } from './loss/green-ampt';
 export { curveNumberRetentionMm, curveNumberRunoffMm, RETENTION_RATIO_005 } from './loss/curve-number';
 export { curveNumberForCondition, type AntecedentCondition } from './loss/antecedent-condition';
+export { curveNumberFromRunoff } from './calibrate/curve-number';
 export {
   SOIL_TEXTURES,
   soilTexture,

@@ -4,7 +4,7 @@ import { describeRange, methodSpec, numericParam, validateMethod } from '../loss
 import type { LossMethod, NumericParam } from '../loss/types';
 import { totalDepthMm, validateStorm, type Storm } from '../storm';
 import { EXACT_CALIBRATORS } from './exact';
-import { solveMonotone } from './monotone';
+import { PARAMETER_REL_TOL, solveMonotone } from './monotone';
 
 export type CalibrationFailure =
   | 'invalid-input'
@@ -118,6 +118,21 @@ export function calibrate(
         `the ${bound} value (${fmt(solved.x)}${unitText(param)}) gives ${fmt(solved.g)} mm.`,
     };
   }
-  const fitted = withValue(solved.x);
-  return { ok: true, value: solved.x, method: fitted, excessMm: totalExcessMm(storm, fitted) };
+  const value = refineSmallRoot(excessWith, lo, hi, target, solved.x);
+  const fitted = withValue(value);
+  return { ok: true, value, method: fitted, excessMm: totalExcessMm(storm, fitted) };
+}
+
+/**
+ * solveMonotone's tolerance is a fraction of the bracket. When the answer lies
+ * far below the top of a wide bracket (a decay constant of 0.05 1/h searched up
+ * to 1000 1/h), that fraction is too coarse relative to the answer itself, so
+ * solve once more in a bracket a few tolerances wide around it: the answer is
+ * then good to 1e-9 of its own size.
+ */
+function refineSmallRoot(g: (x: number) => number, lo: number, hi: number, target: number, x: number): number {
+  const tol = PARAMETER_REL_TOL * 1e-3 * Math.max(Math.abs(lo), Math.abs(hi));
+  if (tol <= PARAMETER_REL_TOL * Math.abs(x)) return x;
+  const again = solveMonotone(g, Math.max(lo, x - 4 * tol), Math.min(hi, x + 4 * tol), target);
+  return again.ok ? again.x : x;
 }

@@ -1,0 +1,154 @@
+// Calibration of every numeric parameter of the infiltration methods, the
+// others held fixed: Brent's method inside each parameter's search bounds
+// (the curve number through its closed form), to 1e-9 relative.
+import fc from 'fast-check';
+import { describe, expect, it } from 'vitest';
+import {
+  calibrate,
+  computeLosses,
+  HORTON_K_CEILING_PER_H,
+  METHODS,
+  type LossMethod,
+  type Storm,
+} from '../../../src/core';
+import { stormArb } from '../../helpers/arbitraries';
+
+const excessOf = (storm: Storm, method: LossMethod): number => computeLosses(storm, method).totalExcessMm;
+const withValue = (method: LossMethod, key: string, value: number): LossMethod =>
+  ({ ...method, [key]: value }) as LossMethod;
+
+interface Case {
+  readonly name: string;
+  readonly method: LossMethod;
+  readonly key: string;
+  /** Range the true value is drawn from. */
+  readonly low: number;
+  readonly high: number;
+}
+
+const hortonBase = (ponding: boolean): LossMethod => ({ kind: 'horton', f0MmH: 75, fcMmH: 10, kPerH: 4, ponding });
+const greenAmptBase: LossMethod = { kind: 'green-ampt', ksMmH: 3.4, suctionMm: 88.9, moistureDeficit: 0.3 };
+
+const CASES: readonly Case[] = [
+  ...[true, false].flatMap((ponding): Case[] => {
+    const mode = ponding ? 'time compression' : 'from storm start';
+    return [
+      { name: `Horton f₀ (${mode})`, method: hortonBase(ponding), key: 'f0MmH', low: 10, high: 400 },
+      { name: `Horton f_c (${mode})`, method: hortonBase(ponding), key: 'fcMmH', low: 0, high: 75 },
+      { name: `Horton k (${mode})`, method: hortonBase(ponding), key: 'kPerH', low: 0.02, high: 50 },
+    ];
+  }),
+  { name: 'Green–Ampt K', method: greenAmptBase, key: 'ksMmH', low: 0.05, high: 60 },
+  { name: 'Green–Ampt ψ', method: greenAmptBase, key: 'suctionMm', low: 0, high: 400 },
+  { name: 'Green–Ampt Δθ', method: greenAmptBase, key: 'moistureDeficit', low: 0, high: 1 },
+  { name: 'curve number, Iₐ = 0.2 S', method: { kind: 'curve-number', cn: 75, iaRatio: 0.2 }, key: 'cn', low: 20, high: 100 },
+  { name: 'curve number, Iₐ = 0.05 S', method: { kind: 'curve-number', cn: 75, iaRatio: 0.05 }, key: 'cn', low: 20, high: 100 },
+];
+
+describe('calibration of every infiltration parameter', () => {
+  it('covers every numeric parameter of Horton, Green–Ampt and curve number', () => {
+    for (const kind of ['horton', 'green-ampt', 'curve-number'] as const) {
+      const keys = METHODS[kind].params.map((p) => p.key).sort();
+      expect(keys).toEqual([...new Set(CASES.filter((c) => c.method.kind === kind).map((c) => c.key))].sort());
+    }
+  });
+
+  it.each(CASES)('round-trips $name on random storms: the fitted value is within 1e-9 of an exact answer, and of the true value where runoff responds', (c) => {
+    fc.assert(
+      fc.property(stormArb(30), fc.double({ min: c.low, max: c.high, noNaN: true }), (storm, truth) => {
+        const truthMethod = withValue(c.method, c.key, truth);
+        // Horton's f₀ ≥ f_c: keep the drawn pair valid.
+        if (truthMethod.kind === 'horton' && truthMethod.f0MmH < truthMethod.fcMmH) return;
+        const target = excessOf(storm, truthMethod);
+        const rain = computeLosses(storm, c.method).rainMm;
+        const r = calibrate(storm, c.method, c.key, target);
+        expect(r.ok).toBe(true);
+        if (!r.ok) return;
+        const nudged = (value: number, factor: number): number | undefined => {
+          try {
+            return excessOf(storm, withValue(c.method, c.key, value * factor));
+          } catch {
+            return undefined; // the nudge left the valid range (f₀ < f_c, Δθ > 1, CN > 100)
+          }
+        };
+        // The fitted value is within 2e-9 of itself of an exact answer: the target
+        // lies between the runoffs of value·(1 ± 2e-9), to rounding of the rain.
+        const fitted = excessOf(storm, r.method);
+        const around = [fitted, nudged(r.value, 1 - 2e-9) ?? fitted, nudged(r.value, 1 + 2e-9) ?? fitted];
+        const slack = 1e-12 * Math.max(rain, 1);
+        expect(target).toBeGreaterThanOrEqual(Math.min(...around) - slack);
+        expect(target).toBeLessThanOrEqual(Math.max(...around) + slack);
+        expect(Math.abs(fitted - target)).toBeLessThanOrEqual(1e-6 * target + slack);
+        // Where runoff changes measurably on both sides of the true value (not on
+        // a plateau, where many values fit), the value itself comes back.
+        const up = nudged(truth, 1 + 1e-6);
+        const down = nudged(truth, 1 - 1e-6);
+        const moves = (e: number | undefined): boolean => e !== undefined && Math.abs(e - target) > 1e-7 * Math.max(target, 1e-3);
+        if (truth > 0 && moves(up) && moves(down)) {
+          expect(Math.abs(r.value - truth)).toBeLessThanOrEqual(1e-9 * truth);
+        }
+      }),
+      { numRuns: 120 },
+    );
+  });
+
+  it('keeps the other parameters as they were', () => {
+    const storm = { durationsH: [0.5, 0.25, 1], depthsMm: [10, 20, 6] };
+    const r = calibrate(storm, { kind: 'horton', f0MmH: 75, fcMmH: 10, kPerH: 4, ponding: false }, 'kPerH', 8);
+    expect(r.ok).toBe(true);
+    if (r.ok) expect(r.method).toMatchObject({ kind: 'horton', f0MmH: 75, fcMmH: 10, ponding: false });
+  });
+
+  it('never fits Horton f₀ below f_c', () => {
+    // f₀ = f_c = 10 mm/h already gives 24.25 mm; asking for more must stop at f₀ = f_c.
+    const storm = { durationsH: [0.5, 0.25, 1], depthsMm: [10, 20, 6] };
+    const method: LossMethod = { kind: 'horton', f0MmH: 75, fcMmH: 10, kPerH: 4, ponding: true };
+    const r = calibrate(storm, method, 'f0MmH', 30);
+    expect(r).toMatchObject({ ok: false, reason: 'bound-reached', bound: 'min', boundValue: 10 });
+  });
+});
+
+describe('out-of-reach targets say which bound was reached and what runoff it gives', () => {
+  const storm = { durationsH: [0.5, 0.25, 1, 0.5], depthsMm: [4, 15, 12, 1] };
+
+  it('Horton k: runoff above what the fastest decay gives stops at the top of the search', () => {
+    const method: LossMethod = { kind: 'horton', f0MmH: 75, fcMmH: 10, kPerH: 4, ponding: false };
+    const atTop = excessOf(storm, withValue(method, 'kPerH', HORTON_K_CEILING_PER_H));
+    const r = calibrate(storm, method, 'kPerH', atTop + 1);
+    expect(r).toMatchObject({ ok: false, reason: 'bound-reached', bound: 'max', boundValue: HORTON_K_CEILING_PER_H });
+    if (r.ok) return;
+    expect(r.boundExcessMm).toBeCloseTo(atTop, 12);
+    expect(r.message).toMatch(/^No decay constant k greater than 0 1\/h gives .* mm of runoff: the highest value \(1000 1\/h\) gives .* mm\.$/);
+  });
+
+  it('Horton f_c: runoff below what f_c = f₀ gives stops at the top of its range, f₀', () => {
+    const method: LossMethod = { kind: 'horton', f0MmH: 30, fcMmH: 5, kPerH: 2, ponding: true };
+    const atTop = excessOf(storm, withValue(method, 'fcMmH', 30));
+    expect(atTop).toBeGreaterThan(0.5);
+    const r = calibrate(storm, method, 'fcMmH', atTop - 0.5);
+    expect(r).toMatchObject({ ok: false, reason: 'bound-reached', bound: 'max', boundValue: 30 });
+    if (r.ok) return;
+    expect(r.boundExcessMm).toBeCloseTo(atTop, 12);
+    expect(r.message).toMatch(/the highest value \(30 mm\/h\) gives/);
+  });
+
+  it('Green–Ampt ψ: runoff above what no suction gives stops at ψ = 0', () => {
+    const method: LossMethod = { kind: 'green-ampt', ksMmH: 8, suctionMm: 100, moistureDeficit: 0.3 };
+    const atZero = excessOf(storm, withValue(method, 'suctionMm', 0));
+    const r = calibrate(storm, method, 'suctionMm', atZero + 0.25);
+    expect(r).toMatchObject({ ok: false, reason: 'bound-reached', bound: 'min', boundValue: 0 });
+    if (r.ok) return;
+    expect(r.boundExcessMm).toBeCloseTo(atZero, 12);
+    expect(r.message).toMatch(/^No wetting-front suction head ψ at least 0 mm gives .* mm of runoff: the lowest value \(0 mm\) gives/);
+  });
+
+  it('Green–Ampt Δθ: runoff above what a saturated soil gives stops at Δθ = 0 and names the symbol as written', () => {
+    const method: LossMethod = { kind: 'green-ampt', ksMmH: 8, suctionMm: 100, moistureDeficit: 0.3 };
+    const atZero = excessOf(storm, withValue(method, 'moistureDeficit', 0));
+    const r = calibrate(storm, method, 'moistureDeficit', atZero + 0.5);
+    expect(r).toMatchObject({ ok: false, reason: 'bound-reached', bound: 'min', boundValue: 0 });
+    if (r.ok) return;
+    expect(r.boundExcessMm).toBeCloseTo(atZero, 12);
+    expect(r.message).toMatch(/^No moisture deficit Δθ between 0 and 1 gives/);
+  });
+});
