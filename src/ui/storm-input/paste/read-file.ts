@@ -16,7 +16,8 @@ function readWithReader(file: Blob): Promise<string> {
   });
 }
 
-export async function readTextFile(file: File): Promise<FileText> {
+/** `what` names the record in the messages ("the rainfall", "the streamflow record"). */
+export async function readTextFile(file: File, what = 'the rainfall'): Promise<FileText> {
   const name = file.name || 'the file';
   if (file.size > MAX_FILE_BYTES) {
     const mb = (file.size / (1024 * 1024)).toFixed(1);
@@ -29,7 +30,7 @@ export async function readTextFile(file: File): Promise<FileText> {
     return { ok: false, message: `${name} could not be read (${error instanceof Error ? error.message : String(error)}).` };
   }
   if (text.includes('\u0000')) {
-    return { ok: false, message: `${name} is not a text file; save the rainfall as .csv or .txt and open that.` };
+    return { ok: false, message: `${name} is not a text file; save ${what} as .csv or .txt and open that.` };
   }
   if (text.trim() === '') return { ok: false, message: `${name} is empty.` };
   return { ok: true, text, name };
