@@ -32,7 +32,7 @@ export {
   describeRange,
   validateMethod,
 } from './loss/methods';
-export { computeLosses, computeLossesUnchecked, totalExcessMm, type LossBuffers } from './loss/compute';
+export { computeLosses, computeLossesUnchecked, totalExcessMm, scratchBuffers, type LossBuffers } from './loss/compute';
 export { calibrate, type CalibrationResult, type CalibrationFailure } from './calibrate/calibrate';
 export { exactPhi } from './calibrate/phi';
 export { brentRoot } from './calibrate/brent';
@@ -66,3 +66,4 @@ export * from './units';
 export * from './baseflow';
 export * from './design';
 export * from './events';
+export * from './storm-tools';
