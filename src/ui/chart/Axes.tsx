@@ -1,8 +1,11 @@
 import { memo } from 'react';
 import type { ChartFrame } from './frame';
 
+/** What the axes read from a frame (the hyetograph's, or the hydrograph's below it). */
+export type AxesFrame = Pick<ChartFrame, 'plot' | 'xTicks' | 'yTicks' | 'height' | 'xTitle' | 'yTitle'>;
+
 /** Axes, grid lines and titles. Depends on the frame only, so a drag never redraws it. */
-export const Axes = memo(function Axes({ frame }: { frame: ChartFrame }) {
+export const Axes = memo(function Axes({ frame }: { frame: AxesFrame }) {
   const { plot, xTicks, yTicks } = frame;
   return (
     <g className="axes" aria-hidden="true">

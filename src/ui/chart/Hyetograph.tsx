@@ -11,6 +11,7 @@ import { LINE_PARAM, LOSS_PARTS } from './line-params';
 import { LossLayer } from './LossLayer';
 import { LossLine } from './LossLine';
 import { RainLayer } from './RainLayer';
+import { useTimeSpanH } from './time-span';
 import { useElementWidth } from './useElementWidth';
 
 export const CHART_HEIGHT = 360;
@@ -40,7 +41,9 @@ export function Hyetograph() {
   const fittedKey = useScenario((s) => s.observed?.parameter ?? null);
   const method = results.method;
 
-  const frame = useMemo(() => chartFrame(storm, width, CHART_HEIGHT, units), [storm, width, units]);
+  // With a streamflow record the axis holds the record too, shared with the hydrograph below.
+  const span = useTimeSpanH();
+  const frame = useMemo(() => chartFrame(storm, width, CHART_HEIGHT, units, span), [storm, width, units, span]);
   const part = useMemo(() => lossPart(storm, method), [storm, method]);
   const capacity = CAPACITY_CURVES[method.kind];
   const capacityPath = useMemo(

@@ -3,6 +3,7 @@ import { barEdgesH, peakIntensityMmH, totalDurationH, type Storm, type UnitSyste
 import { formatValue } from '../format';
 import { displayUnit, fromDisplay, toDisplay, unitText } from '../units';
 import { formatWallDate, formatWallTime, wallClockMs } from './clock';
+import type { TimeSpanH } from './time-span';
 
 /** Space around the plot for the axes, px. */
 export const MARGIN = { top: 18, right: 20, bottom: 46, left: 62 } as const;
@@ -21,7 +22,7 @@ export interface ChartFrame {
   readonly width: number;
   readonly height: number;
   readonly plot: { readonly left: number; readonly right: number; readonly top: number; readonly bottom: number };
-  /** Hours from the storm start → px. */
+  /** Hours from the storm start → px (over the storm, or the span given to chartFrame). */
   readonly x: ScaleLinear<number, number>;
   /** Rate, mm/h (internal unit) → px. */
   readonly y: ScaleLinear<number, number>;
@@ -39,7 +40,12 @@ export interface ChartFrame {
 /** Rate axes start at a round value even for a dry or empty storm. */
 const EMPTY_TOP = { si: 10, us: 0.5 } as const;
 
-export function chartFrame(storm: Storm, width: number, height: number, system: UnitSystem): ChartFrame {
+/**
+ * `span`, when given, is the stretch of time to show (hours from the storm
+ * start; see time-span.ts): the storm and a streamflow record on one axis.
+ * Without it the axis runs over the storm.
+ */
+export function chartFrame(storm: Storm, width: number, height: number, system: UnitSystem, span?: TimeSpanH): ChartFrame {
   const plot = {
     left: MARGIN.left,
     right: Math.max(MARGIN.left + 40, width - MARGIN.right),
@@ -60,16 +66,17 @@ export function chartFrame(storm: Storm, width: number, height: number, system: 
 
   const durationH = totalDurationH(storm);
   const x = scaleLinear()
-    .domain([0, durationH > 0 ? durationH : 1])
+    .domain(span ? [span.startH, span.endH] : [0, durationH > 0 ? durationH : 1])
     .range([plot.left, plot.right]);
   const tickCount = Math.max(2, Math.floor((plot.right - plot.left) / 90));
   const startMs = storm.startIso === undefined ? null : wallClockMs(storm.startIso);
   let xTicks: Tick[];
   let xTitle: string;
   if (startMs !== null) {
+    const fromMs = startMs + (x.domain()[0] as number) * 3.6e6;
     const endMs = startMs + (x.domain()[1] as number) * 3.6e6;
-    const clock = scaleUtc().domain([startMs, endMs]).range([plot.left, plot.right]);
-    const multiDay = formatWallDate(startMs) !== formatWallDate(endMs);
+    const clock = scaleUtc().domain([fromMs, endMs]).range([plot.left, plot.right]);
+    const multiDay = formatWallDate(fromMs) !== formatWallDate(endMs);
     xTicks = clock.ticks(tickCount).map((t) => ({
       px: clock(t),
       label: multiDay && formatWallTime(t.getTime()) === '00:00' ? formatWallDate(t.getTime()) : formatWallTime(t.getTime()),

@@ -1,0 +1,44 @@
+import { useMemo } from 'react';
+import { totalDurationH } from '../../core';
+import type { Scenario } from '../../scenario/types';
+import { useDerived, type Derived } from '../../store';
+
+/**
+ * The stretch of time the charts show, in hours from the storm start. The
+ * hyetograph alone shows its storm; with a streamflow record lined up
+ * beside it, both charts share one axis that holds the storm and the whole
+ * record, so a bar and the discharge at the same moment stand one above the
+ * other.
+ */
+export interface TimeSpanH {
+  readonly startH: number;
+  readonly endH: number;
+}
+
+/** The shared span, or undefined when there is no record (the chart then shows the storm alone). */
+export function sharedTimeSpanH(
+  stormDurationH: number,
+  record: { readonly firstH: number; readonly lastH: number } | null,
+): TimeSpanH | undefined {
+  if (record === null) return undefined;
+  const hasStorm = stormDurationH > 0;
+  const startH = hasStorm ? Math.min(0, record.firstH) : record.firstH;
+  const endH = hasStorm ? Math.max(stormDurationH, record.lastH) : record.lastH;
+  return endH > startH ? { startH, endH } : undefined;
+}
+
+function spanOf(d: Derived, s: Scenario): TimeSpanH | undefined {
+  const flow = s.streamflow;
+  const aligned = d.alignment(s);
+  if (!flow || !aligned) return undefined;
+  const first = flow.timesH[0] ?? 0;
+  const last = flow.timesH[flow.timesH.length - 1] ?? first;
+  return sharedTimeSpanH(totalDurationH(s.storm), { firstH: first + aligned.offsetH, lastH: last + aligned.offsetH });
+}
+
+/** The shared span for the charts on screen (a stable object while its ends stay put). */
+export function useTimeSpanH(): TimeSpanH | undefined {
+  const startH = useDerived((d, s) => spanOf(d, s)?.startH ?? null);
+  const endH = useDerived((d, s) => spanOf(d, s)?.endH ?? null);
+  return useMemo(() => (startH === null || endH === null ? undefined : { startH, endH }), [startH, endH]);
+}
