@@ -1,9 +1,11 @@
 import { StrictMode } from 'react';
 import { createRoot } from 'react-dom/client';
 import { DEMO_SCENARIO } from './scenario/demo';
-import { SET_ASIDE_PREFIX, STORAGE_KEY, createWorkbenchStore, loadScenario, persistStore, type StorageLike } from './store';
+import { SET_ASIDE_PREFIX, STORAGE_KEY, type StorageLike } from './store';
+import { startWorkbench } from './store/start';
 import { App } from './ui/App';
 import { ErrorBoundary } from './ui/layout/ErrorBoundary';
+import { browserServices } from './ui/share';
 import './styles/app.css';
 
 /** The browser's storage, or null where it is switched off (reading `localStorage` can itself throw). */
@@ -17,16 +19,22 @@ function browserStorage(): StorageLike | null {
 }
 
 const storage = browserStorage();
-const loaded = loadScenario(storage, DEMO_SCENARIO, new Date().toISOString());
-const store = createWorkbenchStore(loaded.scenario, { notice: loaded.notice });
-if (storage && loaded.canSave) {
-  const persistence = persistStore(store, storage);
-  // Save a change made just before the page closes or reloads.
-  window.addEventListener('pagehide', () => persistence.flush());
-  document.addEventListener('visibilitychange', () => {
-    if (document.visibilityState === 'hidden') persistence.flush();
-  });
-}
+// The saved scenario, and a share link in the address shown over it unsaved until the user chooses (src/store/link-session.ts).
+const { store, link } = startWorkbench({
+  storage,
+  fragment: window.location.hash,
+  fallback: DEMO_SCENARIO,
+  nowIso: new Date().toISOString(),
+  clearFragment: () => window.history.replaceState(window.history.state, '', window.location.pathname + window.location.search),
+});
+// Save a change made just before the page closes or reloads.
+window.addEventListener('pagehide', () => link.flush());
+document.addEventListener('visibilitychange', () => {
+  if (document.visibilityState === 'hidden') link.flush();
+});
+// A link pasted into the address of an open page changes only the fragment.
+window.addEventListener('hashchange', () => link.open(window.location.hash));
+const services = browserServices({ storage, link });
 
 /** After a crash: keep the saved scenario under a set-aside key, and reload on the demo. */
 function setAsideAndReload(): void {
@@ -46,7 +54,7 @@ if (!root) throw new Error('index.html has no #root element');
 createRoot(root).render(
   <StrictMode>
     <ErrorBoundary onSetAside={setAsideAndReload}>
-      <App store={store} />
+      <App store={store} services={services} />
     </ErrorBoundary>
   </StrictMode>,
 );

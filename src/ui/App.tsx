@@ -10,11 +10,16 @@ import { MethodPanel } from './method/MethodPanel';
 import { RainfallToolbar } from './rainfall/RainfallToolbar';
 import { ResultsPanel } from './results/ResultsPanel';
 import { BarTable, DrawableChart, RainfallTools, StormInputProvider, StormPanels } from './storm-input';
+import { ComparePanel } from './compare';
+import { PrintReport } from './export';
+import { LinkNotice, ScenarioBar, ScenarioServicesProvider, type ScenarioServices } from './share';
 
 export interface AppProps {
   readonly store: WorkbenchStore;
   /** Rainfall-input tools (paste, draw, bar table, storm tools) shown in the Rainfall region. */
   readonly rainfallTools?: ReactNode;
+  /** Storage, share-link session, clipboard and downloads for the scenario tools (default: the browser's). */
+  readonly services?: ScenarioServices;
 }
 
 function Workbench({ rainfallTools }: { rainfallTools?: ReactNode }) {
@@ -22,9 +27,11 @@ function Workbench({ rainfallTools }: { rainfallTools?: ReactNode }) {
   return (
     <div className="app">
       <Header />
+      <ScenarioBar />
       <Caution />
       <main className="bench">
         <StorageNoticeBar />
+        <LinkNotice />
         <div className="bench__main">
           <StormInputProvider>
             <RainfallToolbar tools={rainfallTools ?? <RainfallTools />} />
@@ -40,16 +47,20 @@ function Workbench({ rainfallTools }: { rainfallTools?: ReactNode }) {
           <MethodPanel />
           <MatchingPanel />
         </div>
+        <ComparePanel />
       </main>
+      <PrintReport />
     </div>
   );
 }
 
 /** The workbench screen, on the given store. */
-export function App({ store, rainfallTools }: AppProps) {
+export function App({ store, rainfallTools, services }: AppProps) {
   return (
     <StoreProvider store={store}>
-      <Workbench rainfallTools={rainfallTools} />
+      <ScenarioServicesProvider services={services}>
+        <Workbench rainfallTools={rainfallTools} />
+      </ScenarioServicesProvider>
     </StoreProvider>
   );
 }

@@ -1,0 +1,42 @@
+import type { Scenario } from '../scenario/types';
+import { createLinkSession, type LinkSession } from './link-session';
+import { loadScenario, type StorageLike } from './persistence';
+import { createWorkbenchStore, type WorkbenchStore } from './scenario-store';
+
+export interface StartOptions {
+  /** The browser's storage, or null where it is switched off. */
+  readonly storage: StorageLike | null;
+  /** The address's fragment ('#…' or ''): a share link in it opens at once, unsaved. */
+  readonly fragment: string;
+  /** Shown when nothing is saved (the demo). */
+  readonly fallback: Scenario;
+  readonly nowIso: string;
+  /** Takes the fragment out of the address once the user has chosen (history.replaceState). */
+  readonly clearFragment: () => void;
+  readonly persistDelayMs?: number;
+}
+
+export interface Started {
+  readonly store: WorkbenchStore;
+  readonly link: LinkSession;
+}
+
+/**
+ * The workbench at page load: the saved scenario (damaged data set aside, as
+ * `loadScenario` does), then a share link in the address, if any, shown on
+ * top of it without being saved (see `createLinkSession`). Saving starts
+ * only when no shared scenario is waiting for the user's choice.
+ */
+export function startWorkbench(options: StartOptions): Started {
+  const loaded = loadScenario(options.storage, options.fallback, options.nowIso);
+  const store = createWorkbenchStore(loaded.scenario, { notice: loaded.notice });
+  const link = createLinkSession({
+    store,
+    storage: options.storage,
+    canSave: loaded.canSave,
+    fragment: options.fragment,
+    clearFragment: options.clearFragment,
+    ...(options.persistDelayMs === undefined ? {} : { persistDelayMs: options.persistDelayMs }),
+  });
+  return { store, link };
+}

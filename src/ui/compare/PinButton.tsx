@@ -1,0 +1,35 @@
+import { useWorkbenchStore } from '../../store';
+import { useBarMessage } from '../share/bar-message';
+import { usePins, useServices } from '../share/services';
+import { MAX_PINS } from './pins';
+
+/** "Pin to compare": a copy of the scenario on screen joins the comparison (up to MAX_PINS). */
+export function PinButton() {
+  const store = useWorkbenchStore();
+  const { pins: board } = useServices();
+  const { pins } = usePins();
+  const show = useBarMessage();
+  const pin = (): void => {
+    const result = board.pin(store.getState().scenario);
+    if (!result.ok) {
+      show({ tone: 'problem', title: result.message });
+      return;
+    }
+    const count = board.getState().pins.length;
+    show({
+      tone: 'done',
+      title: `Pinned “${result.pin.scenario.name}” as ${count} of ${MAX_PINS}.`,
+      body: <p>The pin is a copy: editing the scenario on screen does not change it. The comparison is below the workbench.</p>,
+    });
+  };
+  return (
+    <>
+      <button type="button" onClick={pin} aria-describedby="pin-count">
+        Pin to compare
+      </button>
+      <span id="pin-count" className="scenario-bar__count">
+        {pins.length} of {MAX_PINS} pinned
+      </span>
+    </>
+  );
+}

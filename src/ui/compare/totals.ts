@@ -1,0 +1,51 @@
+import { methodSpec, type NumericParam } from '../../core';
+import type { Scenario } from '../../scenario/types';
+import type { Derived } from '../../store';
+
+/**
+ * A scenario's totals as the comparison and the report show them, all in SI
+ * and all from the core through the store's derived selectors (results,
+ * runoff volume, fit); nothing is computed here.
+ */
+export interface Totals {
+  readonly rainMm: number | null;
+  readonly lossMm: number | null;
+  readonly excessMm: number | null;
+  /** Null without a catchment area. */
+  readonly volumeM3: number | null;
+  readonly fraction: number | null;
+  readonly peakExcessMmH: number | null;
+  /** The parameter fitted to the observed runoff and its value, or null with the reason in `fitNote`. */
+  readonly fitted: { readonly param: NumericParam; readonly value: number } | null;
+  readonly fitNote: string | null;
+  /** The core's message when the losses cannot be worked out. */
+  readonly error: string | null;
+}
+
+export function totalsOf(scenario: Scenario, derived: Derived): Totals {
+  const results = derived.results(scenario);
+  const r = results.ok ? results.result : null;
+  const fit = derived.fit(scenario);
+  const spec = methodSpec(scenario.method.kind);
+  const param = spec.params.find((p) => p.key === scenario.observed?.parameter);
+  let fitted: Totals['fitted'] = null;
+  let fitNote: string | null = null;
+  if (scenario.observed === null) fitNote = 'no observed runoff to fit';
+  else if (fit === null) {
+    const target = derived.target(scenario);
+    fitNote = target && !target.ok ? target.message : 'nothing to fit';
+  } else if (!fit.ok) fitNote = fit.message;
+  else if (param) fitted = { param, value: fit.value };
+  else fitNote = 'the fitted parameter is not one of this method';
+  return {
+    rainMm: r ? r.rainMm : null,
+    lossMm: r ? r.totalLossMm : null,
+    excessMm: r ? r.totalExcessMm : null,
+    volumeM3: derived.runoffVolumeM3(scenario),
+    fraction: r ? r.runoffFraction : null,
+    peakExcessMmH: r ? r.peakExcessMmH : null,
+    fitted,
+    fitNote,
+    error: results.ok ? null : results.message,
+  };
+}

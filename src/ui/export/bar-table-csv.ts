@@ -1,0 +1,139 @@
+import { barEdgesH, methodSpec, type LossMethod, type LossResult, type UnitSystem } from '../../core';
+import { CAUTION_TEXT } from '../../scenario';
+import type { Scenario } from '../../scenario/types';
+import { wallClockMs } from '../chart/clock';
+import { formatPercent, formatValue } from '../format';
+import { displayUnit, paramToDisplay, paramUnitText, toDisplay, unitText } from '../units';
+
+/**
+ * The bar table as CSV: a few leading note lines that start with "#" (the
+ * scenario name, the caution, the method and totals; spreadsheets show them
+ * as text rows, and CSV readers skip them with a comment setting such as
+ * papaparse `comments: '#'`, pandas `comment='#'`), then one header row with
+ * the unit of every column, then one row per bar.
+ *
+ * Numbers in the rows are written in full (shortest text that reads back as
+ * the same double), in the units the screen shows, so the table reads back to
+ * the same bars; durations are always hours. Losses and excess per bar are
+ * the core's, passed in from the store.
+ */
+export interface BarTableInput {
+  readonly scenario: Scenario;
+  /** The method the results were computed with (the fitted one while kept matched). */
+  readonly method: LossMethod;
+  readonly result: LossResult;
+  /** Runoff volume, m³, or null without a catchment area. */
+  readonly volumeM3: number | null;
+}
+
+/** A note line: "#", then the text on one line (line breaks in names would end the note early). */
+const note = (text: string): string => `# ${text.replace(/[\r\n]+/g, ' ')}`;
+
+const pad = (n: number, width = 2): string => String(n).padStart(width, '0');
+
+/** Wall-clock text "2026-07-14 15:10" (with seconds when not whole minutes) of a time on the storm's axis. */
+function clockText(ms: number): string {
+  const d = new Date(Math.round(ms));
+  const s = d.getUTCSeconds() + d.getUTCMilliseconds() / 1000;
+  const seconds = s === 0 ? '' : `:${s < 10 ? '0' : ''}${Number(s.toFixed(3))}`;
+  return (
+    `${pad(d.getUTCFullYear(), 4)}-${pad(d.getUTCMonth() + 1)}-${pad(d.getUTCDate())} ` +
+    `${pad(d.getUTCHours())}:${pad(d.getUTCMinutes())}${seconds}`
+  );
+}
+
+/** "Loss rate φ = 8 mm/h; …" for the method's numeric parameters and choices, in display units. */
+export function methodParametersText(method: LossMethod, units: UnitSystem): string {
+  const spec = methodSpec(method.kind);
+  const values = method as unknown as Record<string, unknown>;
+  const parts: string[] = [];
+  for (const p of spec.params) {
+    const v = values[p.key];
+    if (typeof v !== 'number') continue;
+    const unit = paramUnitText(p.unit, units);
+    parts.push(`${p.label} = ${formatValue(paramToDisplay(p.unit, v, units))}${unit ? ` ${unit}` : ''}`);
+  }
+  for (const c of spec.choices ?? []) {
+    const chosen = c.choices.find((o) => o.value === values[c.key]);
+    if (chosen) parts.push(`${c.label}: ${chosen.label}`);
+  }
+  return parts.join('; ');
+}
+
+/** The column headings, with units, for a unit system and storm. */
+export function barTableHeader(scenario: Scenario): string[] {
+  const depth = unitText(displayUnit('depth', scenario.units));
+  const rate = unitText(displayUnit('rate', scenario.units));
+  const head = ['Bar'];
+  if (scenario.storm.startIso !== undefined && wallClockMs(scenario.storm.startIso) !== null) head.push('Start (clock)');
+  head.push(
+    'Start (h from storm start)',
+    'Duration (h)',
+    `Rainfall depth (${depth})`,
+    `Rainfall intensity (${rate})`,
+    `Loss (${depth})`,
+    `Rainfall excess (${depth})`,
+  );
+  return head;
+}
+
+/** A CSV field: quoted when it holds a separator, a quote or a line break. */
+function field(text: string): string {
+  return /[",\r\n]/.test(text) ? `"${text.replace(/"/g, '""')}"` : text;
+}
+
+export function barTableCsv({ scenario, method, result, volumeM3 }: BarTableInput): string {
+  const { storm, units } = scenario;
+  const depthUnit = unitText(displayUnit('depth', units));
+  const show = (mm: number): string => `${formatValue(toDisplay('depth', mm, units))} ${depthUnit}`;
+  const startMs = storm.startIso === undefined ? null : wallClockMs(storm.startIso);
+
+  const lines: string[] = [
+    note(`Raincut bar table: ${scenario.name}`),
+    note(`Caution: ${CAUTION_TEXT}`),
+    note(`Loss method: ${methodSpec(method.kind).label}; ${methodParametersText(method, units)}`),
+  ];
+  if (scenario.catchment.name !== '' || scenario.catchment.areaM2 > 0) {
+    const area = scenario.catchment.areaM2 > 0
+      ? `${formatValue(toDisplay('area', scenario.catchment.areaM2, units))} ${unitText(displayUnit('area', units))}`
+      : 'area not given';
+    lines.push(note(`Catchment: ${scenario.catchment.name === '' ? 'unnamed' : scenario.catchment.name}, ${area}`));
+  }
+  if (storm.startIso !== undefined) lines.push(note(`Storm start: ${storm.startIso}`));
+  const volume =
+    volumeM3 === null ? '' : `; runoff volume ${formatValue(toDisplay('volume', volumeM3, units))} ${unitText(displayUnit('volume', units))}`;
+  lines.push(
+    note(
+      `Totals: rainfall ${show(result.rainMm)}; loss ${show(result.totalLossMm)}; rainfall excess ${show(result.totalExcessMm)}` +
+        `; runoff fraction ${formatPercent(result.runoffFraction)}${volume}`,
+    ),
+    note('Numbers in the rows are unrounded; each column heading gives its unit.'),
+    barTableHeader(scenario).map(field).join(','),
+  );
+
+  const edges = barEdgesH(storm);
+  const n = storm.depthsMm.length;
+  for (let k = 0; k < n; k++) {
+    const depthMm = storm.depthsMm[k] as number;
+    const durationH = storm.durationsH[k] as number;
+    const startH = edges[k] as number;
+    const row = [String(k + 1)];
+    if (startMs !== null) row.push(clockText(startMs + startH * 3_600_000));
+    row.push(
+      String(startH),
+      String(durationH),
+      String(toDisplay('depth', depthMm, units)),
+      String(toDisplay('rate', depthMm / durationH, units)),
+      String(toDisplay('depth', result.lossMm[k] as number, units)),
+      String(toDisplay('depth', result.excessMm[k] as number, units)),
+    );
+    lines.push(row.join(','));
+  }
+  // A byte-order mark so spreadsheet programs read the file as UTF-8 (φ, ³ in names and notes).
+  return `\ufeff${lines.join('\r\n')}\r\n`;
+}
+
+/** "fenmoor-brook-storm-bars.csv" from the scenario file name. */
+export function exportFileName(base: string, suffix: string, extension: string): string {
+  return `${base.replace(/\.json$/, '')}-${suffix}.${extension}`;
+}

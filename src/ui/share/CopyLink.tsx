@@ -1,0 +1,93 @@
+import { useEffect, useRef } from 'react';
+import { makeShareLink } from '../../scenario';
+import { useWorkbenchStore } from '../../store';
+import { ProblemList, useBarMessage } from './bar-message';
+import { useServices } from './services';
+
+/** Mail and chat programs are known to cut or wrap links past about this length. */
+export const LONG_LINK_CHARS = 2000;
+
+const grouped = new Intl.NumberFormat('en-US');
+
+/** "535 characters", with advice when the link is long enough to be cut on the way. */
+export function linkLengthText(chars: number): string {
+  const base = `The link is ${grouped.format(chars)} characters long and holds the whole scenario; nothing is sent to a server.`;
+  return chars > LONG_LINK_CHARS
+    ? `${base} Some mail programs cut links longer than about ${grouped.format(LONG_LINK_CHARS)} characters: if it does not open for your colleague, send the scenario as a file.`
+    : base;
+}
+
+/** The words of a refusal (a DOMException is not an Error in every realm). */
+function reason(error: unknown): string {
+  const message = typeof error === 'object' && error !== null && 'message' in error ? String(error.message) : '';
+  return message !== '' ? message : 'the browser refused';
+}
+
+/** The link in a box to copy by hand, selected as soon as it shows. */
+function ManualCopy({ url }: { url: string }) {
+  const ref = useRef<HTMLInputElement | null>(null);
+  useEffect(() => {
+    ref.current?.focus();
+    ref.current?.select();
+  }, [url]);
+  return (
+    <div className="share-link__manual">
+      <label htmlFor="share-link-text">Share link</label>
+      <input id="share-link-text" ref={ref} type="text" readOnly value={url} onFocus={(e) => e.currentTarget.select()} />
+    </div>
+  );
+}
+
+/**
+ * "Copy link": the whole scenario, checked and packed into the address's
+ * fragment (makeShareLink), on the clipboard. When the browser refuses the
+ * clipboard, the link is shown in a box to copy by hand.
+ */
+export function CopyLink() {
+  const store = useWorkbenchStore();
+  const { clipboard, pageAddress } = useServices();
+  const show = useBarMessage();
+
+  const copy = async (): Promise<void> => {
+    const made = makeShareLink(store.getState().scenario);
+    if (!made.ok) {
+      show({
+        tone: 'problem',
+        title: 'No link was made.',
+        body: <ProblemList problems={made.problems} label="Why no link was made" />,
+      });
+      return;
+    }
+    const url = `${pageAddress()}#${made.fragment}`;
+    const length = <p>{linkLengthText(url.length)}</p>;
+    let refused: string | null = null;
+    if (!clipboard) refused = 'this browser gives the page no clipboard';
+    else {
+      try {
+        await clipboard.writeText(url);
+      } catch (error) {
+        refused = reason(error);
+      }
+    }
+    if (refused === null) {
+      show({ tone: 'done', title: 'Link copied.', body: length });
+      return;
+    }
+    show({
+      tone: 'problem',
+      title: `The link could not be put on the clipboard (${refused}). Copy it from the box below (Ctrl+C).`,
+      body: (
+        <>
+          <ManualCopy url={url} />
+          {length}
+        </>
+      ),
+    });
+  };
+
+  return (
+    <button type="button" onClick={() => void copy()} title="Put the whole scenario in a link and copy it">
+      Copy link
+    </button>
+  );
+}

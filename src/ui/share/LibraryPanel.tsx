@@ -1,0 +1,251 @@
+import { useCallback, useEffect, useState, type FormEvent, type KeyboardEvent } from 'react';
+import { methodSpec } from '../../core';
+import type { DeletedEntry, LibraryEntry, LibraryListing, LibraryResult, Problem } from '../../scenario';
+import { useActions, useWorkbenchStore } from '../../store';
+import { useServices } from './services';
+
+export const LIBRARY_PANEL_ID = 'saved-scenarios';
+
+const savedAtFormat = new Intl.DateTimeFormat(undefined, { dateStyle: 'medium', timeStyle: 'short' });
+const quoted = (name: string): string => `“${name}”`;
+
+function savedAtText(iso: string): string {
+  const t = Date.parse(iso);
+  return Number.isNaN(t) ? iso : savedAtFormat.format(t);
+}
+
+function summary(entry: LibraryEntry): string {
+  const n = entry.scenario.storm.depthsMm.length;
+  return `${n} bar${n === 1 ? '' : 's'} · ${methodSpec(entry.scenario.method.kind).label}`;
+}
+
+type Status =
+  | { readonly kind: 'done'; readonly text: string }
+  | { readonly kind: 'deleted'; readonly entry: DeletedEntry }
+  | { readonly kind: 'problem'; readonly text: string; readonly problems: readonly Problem[] };
+
+const EMPTY: LibraryListing = { entries: [], deleted: [], setAside: [], canWrite: false, problems: [] };
+
+function RenameForm({ entry, onDone }: { entry: LibraryEntry; onDone: (name: string | null) => void }) {
+  const [name, setName] = useState(entry.scenario.name);
+  const submit = (e: FormEvent): void => {
+    e.preventDefault();
+    onDone(name);
+  };
+  const onKeyDown = (e: KeyboardEvent<HTMLInputElement>): void => {
+    if (e.key === 'Escape') {
+      e.preventDefault();
+      onDone(null);
+    }
+  };
+  return (
+    <form className="library__rename" onSubmit={submit}>
+      <input
+        type="text"
+        aria-label={`New name for ${entry.scenario.name}`}
+        value={name}
+        autoFocus
+        onChange={(e) => setName(e.currentTarget.value)}
+        onKeyDown={onKeyDown}
+      />
+      <button type="submit" className="share-button--small">
+        Save name
+      </button>
+      <button type="button" className="share-button--small" onClick={() => onDone(null)}>
+        Cancel
+      </button>
+    </form>
+  );
+}
+
+/**
+ * The named list of scenarios kept in this browser (the scenario layer's
+ * library on localStorage): save the current one, open, rename, duplicate
+ * and delete, with Undo for a deletion.
+ */
+export function LibraryPanel() {
+  const { library, link } = useServices();
+  const store = useWorkbenchStore();
+  const actions = useActions();
+  const [listing, setListing] = useState<LibraryListing>(() => library?.list() ?? EMPTY);
+  const [status, setStatus] = useState<Status | null>(null);
+  const [renaming, setRenaming] = useState<string | null>(null);
+  /** The entry the scenario on screen was opened from or saved as, offered for "Update". */
+  const [currentId, setCurrentId] = useState<string | null>(null);
+
+  const refresh = useCallback(() => setListing(library?.list() ?? EMPTY), [library]);
+  useEffect(() => {
+    // Another tab, or keeping a shared link, may change the list.
+    window.addEventListener('storage', refresh);
+    const stop = link?.subscribe(refresh);
+    return () => {
+      window.removeEventListener('storage', refresh);
+      stop?.();
+    };
+  }, [refresh, link]);
+
+  /** Runs a library call; its problems (or its notices) show as the status. */
+  function run<T>(result: LibraryResult<T>, done: (value: T) => Status | null): void {
+    refresh();
+    if (!result.ok) {
+      setStatus({ kind: 'problem', text: 'That was not done.', problems: result.problems });
+      return;
+    }
+    const next = done(result.value);
+    setStatus(result.problems.length > 0 ? { kind: 'problem', text: 'Done, but the saved list needed repair.', problems: result.problems } : next);
+  }
+
+  if (!library) {
+    return (
+      <section className="panel library" id={LIBRARY_PANEL_ID} aria-labelledby="library-title">
+        <h2 id="library-title">Saved scenarios</h2>
+        <p className="library__intro">This browser does not allow saving here. Use “Save as file” to keep scenarios.</p>
+      </section>
+    );
+  }
+
+  const current = currentId === null ? undefined : listing.entries.find((e) => e.id === currentId);
+
+  return (
+    <section className="panel library" id={LIBRARY_PANEL_ID} aria-labelledby="library-title">
+      <div className="library__head">
+        <h2 id="library-title">Saved scenarios</h2>
+        <p className="library__intro">Kept in this browser only; save a file to move a scenario to another computer.</p>
+        <div className="library__actions">
+          <button
+            type="button"
+            className="button--primary"
+            onClick={() =>
+              run(library.save(store.getState().scenario), (entry) => {
+                setCurrentId(entry.id);
+                return { kind: 'done', text: `Saved ${quoted(entry.scenario.name)} to the list.` };
+              })
+            }
+          >
+            Save current scenario to list
+          </button>
+          {current ? (
+            <button
+              type="button"
+              onClick={() =>
+                run(library.save(store.getState().scenario, current.id), (entry) => ({
+                  kind: 'done',
+                  text: `Updated ${quoted(entry.scenario.name)} in the list with the scenario on screen.`,
+                }))
+              }
+            >
+              Update {quoted(current.scenario.name)}
+            </button>
+          ) : null}
+        </div>
+      </div>
+
+      {listing.problems.length > 0 ? (
+        <div className="library__problems" role="alert">
+          <ul>
+            {listing.problems.map((p, i) => (
+              <li key={i}>{p.message}</li>
+            ))}
+          </ul>
+        </div>
+      ) : null}
+
+      <div className="library__status" role="status">
+        {status?.kind === 'done' ? <p>{status.text}</p> : null}
+        {status?.kind === 'deleted' ? (
+          <p>
+            Deleted {quoted(status.entry.scenario.name)} —{' '}
+            <button
+              type="button"
+              className="share-button--small"
+              onClick={() =>
+                run(library.restore(status.entry.id), (entry) => ({ kind: 'done', text: `Brought back ${quoted(entry.scenario.name)}.` }))
+              }
+            >
+              Undo
+            </button>
+          </p>
+        ) : null}
+      </div>
+      {status?.kind === 'problem' ? (
+        <div className="library__problems" role="alert">
+          <p>{status.text}</p>
+          <ul>
+            {status.problems.map((p, i) => (
+              <li key={i}>{p.message}</li>
+            ))}
+          </ul>
+        </div>
+      ) : null}
+
+      {listing.entries.length === 0 ? (
+        <p className="library__empty">Nothing is saved in the list yet.</p>
+      ) : (
+        <ul className="library__list" aria-label="Scenarios saved in this browser">
+          {listing.entries.map((entry) => {
+            const name = entry.scenario.name;
+            return (
+              <li key={entry.id} className={`library__entry${entry.id === currentId ? ' library__entry--current' : ''}`}>
+                {renaming === entry.id ? (
+                  <RenameForm
+                    entry={entry}
+                    onDone={(next) => {
+                      setRenaming(null);
+                      if (next === null) return;
+                      run(library.rename(entry.id, next), (renamed) => ({ kind: 'done', text: `Renamed to ${quoted(renamed.scenario.name)}.` }));
+                    }}
+                  />
+                ) : (
+                  <div className="library__name">
+                    <strong>{name}</strong>
+                    <span className="library__meta">
+                      {summary(entry)} · saved {savedAtText(entry.savedAt)}
+                    </span>
+                  </div>
+                )}
+                <div className="library__buttons" role="group" aria-label={`Actions for ${name}`}>
+                  <button
+                    type="button"
+                    className="share-button--small"
+                    aria-label={`Open ${name}`}
+                    onClick={() => {
+                      actions.replaceScenario(entry.scenario, `Open ${quoted(name)} from the saved list`);
+                      setCurrentId(entry.id);
+                      setStatus({ kind: 'done', text: `Opened ${quoted(name)}. Undo brings back the scenario you had before.` });
+                    }}
+                  >
+                    Open
+                  </button>
+                  <button type="button" className="share-button--small" aria-label={`Rename ${name}`} onClick={() => setRenaming(entry.id)}>
+                    Rename
+                  </button>
+                  <button
+                    type="button"
+                    className="share-button--small"
+                    aria-label={`Duplicate ${name}`}
+                    onClick={() => run(library.duplicate(entry.id), (copy) => ({ kind: 'done', text: `Made ${quoted(copy.scenario.name)}.` }))}
+                  >
+                    Duplicate
+                  </button>
+                  <button
+                    type="button"
+                    className="share-button--small share-button--danger"
+                    aria-label={`Delete ${name}`}
+                    onClick={() =>
+                      run(library.delete(entry.id), (gone) => {
+                        if (gone.id === currentId) setCurrentId(null);
+                        return { kind: 'deleted', entry: gone };
+                      })
+                    }
+                  >
+                    Delete
+                  </button>
+                </div>
+              </li>
+            );
+          })}
+        </ul>
+      )}
+    </section>
+  );
+}

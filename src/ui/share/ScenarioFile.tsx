@@ -1,0 +1,92 @@
+import { useRef, type ReactNode } from 'react';
+import { MAX_FILE_CHARS, scenarioFileName, scenarioFromFileText, scenarioToFileText } from '../../scenario';
+import { useActions, useWorkbenchStore } from '../../store';
+import { ProblemList, useBarMessage } from './bar-message';
+import { useServices } from './services';
+
+const megabytes = (bytes: number): string => `${(bytes / (1024 * 1024)).toFixed(1)} MB`;
+
+async function fileText(file: File): Promise<string> {
+  if (typeof file.text === 'function') return file.text();
+  return new Promise((resolve, reject) => {
+    const reader = new FileReader();
+    reader.onload = () => resolve(typeof reader.result === 'string' ? reader.result : '');
+    reader.onerror = () => reject(reader.error ?? new Error('the file could not be read'));
+    reader.readAsText(file);
+  });
+}
+
+/**
+ * "Save as file" writes the scenario as a readable .json file (with the
+ * caution); "Open scenario file…" reads one back. A file that cannot be
+ * opened lists each problem with its field path and changes nothing; one
+ * that opens replaces the scenario as one undoable step.
+ */
+export function ScenarioFile() {
+  const store = useWorkbenchStore();
+  const actions = useActions();
+  const { saveFile } = useServices();
+  const show = useBarMessage();
+  const inputRef = useRef<HTMLInputElement | null>(null);
+
+  const save = (): void => {
+    const scenario = store.getState().scenario;
+    const name = scenarioFileName(scenario);
+    saveFile(new Blob([scenarioToFileText(scenario)], { type: 'application/json' }), name);
+    show({ tone: 'done', title: `Saved as ${name}.`, body: <p>Open it again with “Open scenario file…”, here or in any Raincut.</p> });
+  };
+
+  const open = async (file: File | undefined): Promise<void> => {
+    if (!file) return;
+    const name = file.name || 'The file';
+    const refuse = (body: ReactNode): void =>
+      show({ tone: 'problem', title: `${name} was not opened; the scenario on screen is unchanged.`, body });
+    if (file.size > MAX_FILE_CHARS) {
+      refuse(<p>It is {megabytes(file.size)}; a scenario file may be at most {megabytes(MAX_FILE_CHARS)}.</p>);
+      return;
+    }
+    let text: string;
+    try {
+      text = await fileText(file);
+    } catch (error) {
+      refuse(<p>It could not be read ({error instanceof Error ? error.message : String(error)}).</p>);
+      return;
+    }
+    const read = scenarioFromFileText(text);
+    if (!read.ok) {
+      refuse(<ProblemList problems={read.problems} label={`Problems in ${name}`} />);
+      return;
+    }
+    actions.replaceScenario(read.scenario, `Open ${name}`);
+    show({
+      tone: 'done',
+      title: `Opened “${read.scenario.name}” from ${name}.`,
+      body: <p>Undo brings back the scenario you had before.</p>,
+    });
+  };
+
+  return (
+    <>
+      <button type="button" onClick={save}>
+        Save as file
+      </button>
+      <button type="button" onClick={() => inputRef.current?.click()}>
+        Open scenario file…
+      </button>
+      <input
+        ref={inputRef}
+        type="file"
+        accept=".json,application/json"
+        className="visually-hidden"
+        tabIndex={-1}
+        aria-label="Scenario file to open"
+        onChange={(e) => {
+          const input = e.currentTarget;
+          void open(input.files?.[0]).finally(() => {
+            input.value = '';
+          });
+        }}
+      />
+    </>
+  );
+}

@@ -1,0 +1,10 @@
+// Whole-scenario tools: share link, scenario file, the browser's saved list,
+// and the bar that holds them with the export and compare buttons. Mounted by App.tsx.
+import './share.css';
+
+export { ScenarioBar } from './ScenarioBar';
+export { LinkNotice } from './LinkNotice';
+export { CopyLink, linkLengthText, LONG_LINK_CHARS } from './CopyLink';
+export { ScenarioFile } from './ScenarioFile';
+export { LibraryPanel, LIBRARY_PANEL_ID } from './LibraryPanel';
+export { ScenarioServicesProvider, browserServices, browserStorage, useServices, type ScenarioServices } from './services';
