@@ -1,9 +1,9 @@
 // The scenario document layer: schema, versions, share links, files and the
 // browser's list of saved scenarios. Pure TypeScript, no React or DOM.
-export type { Scenario, ScenarioV1 } from './types';
+export type { Scenario, ScenarioV1, SetEvent, EventSet, EventObserved, DesignPickDoc } from './types';
 export type { Problem, ScenarioResult } from './problems';
 export { MAX_LISTED_PROBLEMS } from './problems';
-export { parseScenario, ScenarioSchema, FIELD_HELP, MAX_BARS } from './schema';
+export { parseScenario, ScenarioSchema, FIELD_HELP, MAX_BARS, MAX_EVENTS } from './schema';
 export { CURRENT_SCENARIO_VERSION, MIGRATIONS, migrate, type Migration, type MigrationResult, type RawDocument } from './migrate';
 export {
   encodeScenarioLink,

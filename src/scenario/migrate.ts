@@ -1,7 +1,7 @@
 import { describeValue, problemAt, type Problem } from './problems';
 
 /** The scenario format version this build writes, and the newest it reads. */
-export const CURRENT_SCENARIO_VERSION = 2;
+export const CURRENT_SCENARIO_VERSION = 3;
 
 /** A scenario document of some version, before it is validated. */
 export type RawDocument = Readonly<Record<string, unknown>>;
@@ -37,11 +37,35 @@ const addStreamflow: Migration = {
 };
 
 /**
+ * Version 2 → 3: the event set joins the document. A version 2 document is
+ * one workbench storm with no set, so it gets an empty set with nothing on
+ * the workbench taken from it (`activeId: null`): the storm, observed runoff
+ * and record stay where they were and mean what they meant, so every old
+ * link and file opens to the same screen and numbers. (Making the storm a
+ * one-event set instead would put an event into fits and summaries the user
+ * never added.) An `eventSet` already there is passed through for the
+ * schema to check.
+ */
+const addEventSet: Migration = {
+  from: 2,
+  to: 3,
+  summary:
+    'Adds `eventSet`: the catchment\'s observed events, the one on the workbench, the parameter fitted for all and the design value pick; version 2 documents get an empty set.',
+  up: (doc) => ({
+    ...doc,
+    version: 3,
+    eventSet: Object.hasOwn(doc, 'eventSet')
+      ? doc['eventSet']
+      : { events: [], activeId: null, parameter: null, designPick: 'median' },
+  }),
+};
+
+/**
  * The upgrade chain, oldest first. When the document changes (e.g. the
  * event set), bump CURRENT_SCENARIO_VERSION and append the next step
  * `{ from, to: from + 1, summary, up }`; never edit a released step.
  */
-export const MIGRATIONS: readonly Migration[] = [addStreamflow];
+export const MIGRATIONS: readonly Migration[] = [addStreamflow, addEventSet];
 
 export type MigrationResult =
   | { readonly ok: true; readonly doc: RawDocument; readonly fromVersion: number }

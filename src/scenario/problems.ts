@@ -45,6 +45,13 @@ function label(keys: readonly PathKey[]): string {
   const last = keys[keys.length - 1];
   if (keys.length === 3 && keys[0] === 'storm' && typeof last === 'number') return `${path} (bar ${last + 1})`;
   if (keys.length === 3 && keys[0] === 'streamflow' && typeof last === 'number') return `${path} (sample ${last + 1})`;
+  // Inside the event set: say which event, counted from 1, and which bar or sample.
+  const event = keys[2];
+  if (keys[0] === 'eventSet' && keys[1] === 'events' && typeof event === 'number') {
+    const inner = label(keys.slice(3));
+    const part = / \((bar|sample) (\d+)\)$/.exec(inner);
+    return `${path} (event ${event + 1}${part ? `, ${part[1]} ${part[2]}` : ''})`;
+  }
   return path;
 }
 

@@ -59,7 +59,15 @@ export const FIELD_HELP: Readonly<Record<string, string>> = {
   'streamflow.baseflow': 'the baseflow separation method, with its kind and parameters',
   'streamflow.baseflowMemory': 'the last parameters used for each baseflow method, an object keyed by kind (may be empty)',
   'streamflow.useAsObserved': 'whether the observed runoff is the separated direct-runoff depth, true or false',
+  eventSet: 'the event set: events, activeId, parameter and designPick',
+  'eventSet.events': 'the observed events of the catchment, a list (may be empty)',
+  'eventSet.activeId': 'the id of the event on the workbench, or null',
+  'eventSet.parameter': 'the parameter fitted for every event, or null for the workbench\'s',
+  'eventSet.designPick': 'the design value: "median", "mean", "min", "max" or { "value": number }',
 };
+
+/** The most events a set may hold: far more than anyone calibrates by hand, small enough to keep fits instant. */
+export const MAX_EVENTS = 200;
 
 /**
  * The most samples a streamflow record may have: a year of one-minute
@@ -358,6 +366,91 @@ function checkStreamflow(doc: Partial<Record<string, unknown>>, add: (keys: read
   }
 }
 
+const EventObservedEntries = {
+  as: v.picklist(['depth', 'volume'], must('"depth" or "volume"')),
+  value: numberField('a number ≥ 0 (mm for a depth, m³ for a volume)', nonNegative),
+};
+
+const EventEntries = {
+  id: v.pipe(text(), v.nonEmpty(must('a non-empty id'))),
+  name: text(),
+  storm: fields(StormEntries, 'an object with durationsH and depthsMm'),
+  observed: v.nullable(fields(EventObservedEntries, 'an object with as and value, or null')),
+  streamflow: v.nullable(
+    fields(StreamflowEntries, 'an object with timesH, dischargeM3s, offsetH, baseflow, baseflowMemory and useAsObserved, or null'),
+  ),
+};
+
+const DesignPickSchema = v.union(
+  [v.picklist(['median', 'mean', 'min', 'max']), fields({ value: numberField('a finite number', finite) }, 'an object with value')],
+  must('"median", "mean", "min", "max" or an object { "value": number }'),
+);
+
+const EventSetEntries = {
+  events: v.pipe(
+    v.array(fields(EventEntries, 'an event: an object with id, name, storm, observed and streamflow'), must('a list of events')),
+    v.maxLength(MAX_EVENTS, (issue) => `has ${(issue.input as unknown[]).length} events; a set holds at most ${MAX_EVENTS}.`),
+  ),
+  activeId: v.nullable(text()),
+  parameter: v.nullable(text()),
+  designPick: DesignPickSchema,
+};
+
+/** Storm lists of equal length, then the core's own storm check, with keys under `at`. */
+function checkStorm(storm: unknown, at: readonly PathKey[], add: (keys: readonly PathKey[], message: string) => void, clean: boolean): void {
+  const st = storm as { durationsH?: unknown; depthsMm?: unknown } | undefined;
+  if (!st || !Array.isArray(st.durationsH) || !Array.isArray(st.depthsMm)) return;
+  const n = st.durationsH.length;
+  const m = st.depthsMm.length;
+  if (n !== m) {
+    add([...at, 'depthsMm'], `has ${m} bar${m === 1 ? '' : 's'} but ${[...at, 'durationsH'].join('.')} has ${n}; every bar needs both a duration and a depth.`);
+    return;
+  }
+  // Bars already refused one by one are not reported again by the core.
+  if (!clean) return;
+  try {
+    validateStorm(st as { durationsH: number[]; depthsMm: number[] });
+  } catch (error) {
+    const message = error instanceof Error ? error.message : String(error);
+    const keys: PathKey[] = [...at];
+    if (isInputError(error)) {
+      keys.push(error.field);
+      if (error.index !== undefined) keys.push(error.index);
+    }
+    add(keys, message);
+  }
+}
+
+/**
+ * The event set's own cross-field checks: unique ids, an activeId that
+ * names an event, and each event's storm and record checked as the
+ * workbench's are.
+ */
+function checkEventSet(
+  doc: Partial<Record<string, unknown>>,
+  add: (keys: readonly PathKey[], message: string) => void,
+  clean: boolean,
+): void {
+  const set = doc['eventSet'] as { events?: unknown; activeId?: unknown } | undefined;
+  if (!set || typeof set !== 'object' || !Array.isArray(set.events)) return;
+  const seen = new Map<string, number>();
+  set.events.forEach((raw: unknown, k: number) => {
+    if (!isRecord(raw)) return;
+    const at: PathKey[] = ['eventSet', 'events', k];
+    const id = raw['id'];
+    if (typeof id === 'string') {
+      const earlier = seen.get(id);
+      if (earlier !== undefined) add([...at, 'id'], `"${id}" is already the id of event ${earlier + 1}; ids must be unique.`);
+      else seen.set(id, k);
+    }
+    checkStorm(raw['storm'], [...at, 'storm'], add, clean);
+    checkStreamflow(raw, (keys, message) => add([...at, ...keys], message));
+  });
+  if (typeof set.activeId === 'string' && !seen.has(set.activeId)) {
+    add(['eventSet', 'activeId'], `"${set.activeId}" is not the id of any event in the set; use one of them or null.`);
+  }
+}
+
 const DocumentEntries = {
   version: v.literal(CURRENT_SCENARIO_VERSION, must(`${CURRENT_SCENARIO_VERSION}`)),
   name: text(),
@@ -371,6 +464,7 @@ const DocumentEntries = {
   streamflow: v.nullable(
     fields(StreamflowEntries, 'an object with timesH, dischargeM3s, offsetH, baseflow, baseflowMemory and useAsObserved, or null'),
   ),
+  eventSet: fields(EventSetEntries, 'an object with events, activeId, parameter and designPick'),
 };
 
 /**
@@ -404,6 +498,7 @@ const crossFieldChecks = v.rawCheck<v.InferOutput<v.ObjectSchema<typeof Document
       }
     }
     checkStreamflow(doc, add);
+    checkEventSet(doc, add, !dataset.issues && dataset.typed);
     if (!dataset.issues && dataset.typed) {
       try {
         validateStorm(dataset.value.storm);
@@ -436,7 +531,7 @@ export const ScenarioSchema = v.pipe(
  */
 function unknownFields(doc: RawDocument): Problem[] {
   const found: Problem[] = [];
-  const visit = (value: unknown, keys: readonly string[], known: readonly string[], where: string): void => {
+  const visit = (value: unknown, keys: readonly PathKey[], known: readonly string[], where: string): void => {
     if (value === null || typeof value !== 'object' || Array.isArray(value)) return;
     for (const key of Object.keys(value)) {
       if (!known.includes(key)) found.push(problemAt([...keys, key], `is not a field of ${where}.`));
@@ -447,6 +542,17 @@ function unknownFields(doc: RawDocument): Problem[] {
   visit(doc['catchment'], ['catchment'], Object.keys(CatchmentEntries), 'the catchment');
   visit(doc['observed'], ['observed'], Object.keys(ObservedEntries), 'the observed runoff');
   visit(doc['streamflow'], ['streamflow'], Object.keys(StreamflowEntries), 'the streamflow record');
+  const set = doc['eventSet'];
+  visit(set, ['eventSet'], Object.keys(EventSetEntries), 'the event set');
+  const events = isRecord(set) && Array.isArray(set['events']) ? (set['events'] as unknown[]) : [];
+  events.forEach((event, k) => {
+    const at: PathKey[] = ['eventSet', 'events', k];
+    visit(event, at, Object.keys(EventEntries), `event ${k + 1}`);
+    if (!isRecord(event)) return;
+    visit(event['storm'], [...at, 'storm'], Object.keys(StormEntries), `the storm of event ${k + 1}`);
+    visit(event['observed'], [...at, 'observed'], Object.keys(EventObservedEntries), `the observed runoff of event ${k + 1}`);
+    visit(event['streamflow'], [...at, 'streamflow'], Object.keys(StreamflowEntries), `the streamflow record of event ${k + 1}`);
+  });
   return found;
 }
 

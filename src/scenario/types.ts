@@ -88,4 +88,54 @@ export interface ScenarioV2 extends Omit<ScenarioV1, 'version'> {
   readonly streamflow: Streamflow | null;
 }
 
-export type Scenario = ScenarioV2;
+/** An event's observed runoff: a depth (mm) or a volume (m³), or null when none was measured. */
+export interface EventObserved {
+  readonly as: 'depth' | 'volume';
+  /** mm when `as` is 'depth', m³ when 'volume'. */
+  readonly value: number;
+}
+
+/**
+ * One observed event of the catchment: its storm and the runoff it produced
+ * (typed, or the direct-runoff depth of its own streamflow record, as on the
+ * workbench). Added in version 3.
+ */
+export interface SetEvent {
+  /** Stable key, unique in the set (survives rename and reorder). */
+  readonly id: string;
+  readonly name: string;
+  readonly storm: ScenarioV1['storm'];
+  readonly observed: EventObserved | null;
+  readonly streamflow: Streamflow | null;
+}
+
+/** How the design value is chosen from the fitted values: a statistic, or a number of the user's own. */
+export type DesignPickDoc = 'median' | 'mean' | 'min' | 'max' | { readonly value: number };
+
+/**
+ * The catchment's event set (version 3). While `activeId` names an event,
+ * that event is the one on the workbench: the top-level `storm`, `observed`
+ * (as, value) and `streamflow` are its data, and the store copies every
+ * workbench edit into its entry, so the two never differ in a saved document.
+ * With `activeId` null the workbench holds a storm of its own (a version 2
+ * document, a design storm).
+ */
+export interface EventSet {
+  readonly events: readonly SetEvent[];
+  readonly activeId: string | null;
+  /** Parameter of the active method fitted for every event; null: the workbench's (observed.parameter, else the method's first). */
+  readonly parameter: string | null;
+  readonly designPick: DesignPickDoc;
+}
+
+/**
+ * Version 3: version 2 with the event set. A version 2 document upgrades
+ * with an empty set and its storm as the workbench's own, so it opens to
+ * exactly the same screen and numbers.
+ */
+export interface ScenarioV3 extends Omit<ScenarioV2, 'version'> {
+  readonly version: 3;
+  readonly eventSet: EventSet;
+}
+
+export type Scenario = ScenarioV3;

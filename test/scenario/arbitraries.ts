@@ -113,6 +113,22 @@ export const scenarioArb: fc.Arbitrary<Scenario> = fc
       }),
       { nil: null },
     ),
+    // Version 3: a few events of the catchment, each with its own storm and observed runoff.
+    events: fc.array(
+      fc.record({
+        name: textArb(30),
+        storm: stormArb,
+        observed: fc.option(
+          fc.record({ as: fc.constantFrom('depth' as const, 'volume' as const), value: fc.double({ min: 0, max: 500, noNaN: true }).map(unsignedZero) }),
+          { nil: null },
+        ),
+      }),
+      { maxLength: 3 },
+    ),
+    designPick: fc.oneof(
+      fc.constantFrom('median' as const, 'mean' as const, 'min' as const, 'max' as const),
+      fc.record({ value: fc.double({ min: -1e6, max: 1e6, noNaN: true }).map(unsignedZero) }),
+    ),
   })
   .map((r) => {
     const params: string[] = (METHODS[r.method.kind] as MethodSpec).params.map((p) => String(p.key));
@@ -126,7 +142,7 @@ export const scenarioArb: fc.Arbitrary<Scenario> = fc
           }
         : null;
     return {
-      version: 2,
+      version: 3,
       name: r.name,
       notes: r.notes,
       storm: r.start === undefined ? r.storm : { ...r.storm, startIso: r.start },
@@ -136,6 +152,20 @@ export const scenarioArb: fc.Arbitrary<Scenario> = fc
       methodMemory: r.methodMemory,
       observed,
       streamflow: null,
+      eventSet: {
+        // Plain literals: fast-check's records are not plain objects, and the round trip is checked strictly.
+        events: r.events.map((e, k) => ({
+          id: `e${k + 1}`,
+          name: e.name,
+          storm: e.storm,
+          observed: e.observed ? { as: e.observed.as, value: e.observed.value } : null,
+          streamflow: null,
+        })),
+        // The active event is left out here: the store keeps it equal to the workbench, which a random document is not.
+        activeId: null,
+        parameter: null,
+        designPick: typeof r.designPick === 'string' ? r.designPick : { value: r.designPick.value },
+      },
     } satisfies Scenario;
   });
 

@@ -5,6 +5,7 @@ import { join } from 'node:path';
 import {
   CURRENT_SCENARIO_VERSION,
   DEMO_SCENARIO,
+  MIGRATIONS,
   decodeScenarioLink,
   encodeScenarioLink,
   migrate,
@@ -32,7 +33,7 @@ const WITH_RECORD: Scenario = { ...DEMO_SCENARIO, streamflow: RECORD };
 
 /** A version 1 document as Raincut 1 wrote it: no streamflow field at all. */
 function versionOne(): Record<string, unknown> {
-  const { streamflow: _none, ...rest } = DEMO_SCENARIO;
+  const { streamflow: _none, eventSet: _set, ...rest } = DEMO_SCENARIO;
   return { ...rest, version: 1 };
 }
 
@@ -53,13 +54,14 @@ const withFlow = (patch: Record<string, unknown>): Record<string, unknown> => ({
 });
 
 describe('scenario version 2: the streamflow record', () => {
-  it('is the current version', () => {
-    expect(CURRENT_SCENARIO_VERSION).toBe(2);
+  it('is in the upgrade chain, and the current version is at least 2', () => {
+    expect(CURRENT_SCENARIO_VERSION).toBeGreaterThanOrEqual(2);
+    expect(MIGRATIONS.map((m) => [m.from, m.to])).toContainEqual([1, 2]);
   });
 
   it('upgrades a version 1 document to version 2 with no record and nothing else changed', () => {
     const v1 = versionOne();
-    const migrated = migrate(v1);
+    const migrated = migrate(v1, MIGRATIONS, 2);
     expect(migrated).toEqual({ ok: true, doc: { ...v1, version: 2, streamflow: null }, fromVersion: 1 });
     expect(parseScenario(v1)).toEqual({ ok: true, scenario: DEMO_SCENARIO });
   });
@@ -72,7 +74,10 @@ describe('scenario version 2: the streamflow record', () => {
   });
 
   it('opens a version 1 file and a version 1 link with no record', () => {
-    const file = scenarioToFileText(DEMO_SCENARIO).replace('"version": 2,', '"version": 1,').replace(/,\n\s*"streamflow": null/, '');
+    const file = scenarioToFileText(DEMO_SCENARIO)
+      .replace(`"version": ${CURRENT_SCENARIO_VERSION},`, '"version": 1,')
+      .replace(/,\n\s*"streamflow": null/, '')
+      .replace(/,\n\s*"eventSet": \{[\s\S]*?\n {2}\}/, '');
     expect(file).not.toContain('streamflow');
     expect(scenarioFromFileText(file)).toEqual({ ok: true, scenario: DEMO_SCENARIO });
     const link = encodeScenarioLink(versionOne() as unknown as Scenario);
@@ -211,7 +216,7 @@ describe('scenario version 2: the streamflow record', () => {
 
   it('matches the example in docs/scenario-schema.md', () => {
     const page = readFileSync(join(import.meta.dirname, '../../docs/scenario-schema.md'), 'utf8');
-    const example = /## Example \(version 2\)\s+```json\n([\s\S]*?)```/.exec(page)?.[1];
+    const example = /## Example \(version \d+\)\s+```json\n([\s\S]*?)```/.exec(page)?.[1];
     expect(example).toBeDefined();
     const doc = JSON.parse(example as string);
     expect(parseScenario(doc)).toEqual({ ok: true, scenario: doc });
