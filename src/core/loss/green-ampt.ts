@@ -22,12 +22,15 @@ import type { ComputeFn, GreenAmptLoss, MethodSpec } from './types';
 /**
  * Depth infiltrated in `hours` of ponded infiltration starting from a
  * cumulative depth `startMm` (mm): the x solving
- *   x − M·ln(1 + x/(F₁ + M)) = K·t,   M = ψΔθ
+ *   g(x) = x − M·ln(1 + x/(F₁ + M)) = K·t,   M = ψΔθ
  * (the ponded Green–Ampt equation above, written in the increment x = F₂ − F₁
- * so that short steps do not cancel). The left side is increasing and convex
- * in x, so Newton's method started from above (x ≤ f(F₁)·t: the rate only
- * falls) descends monotonically onto the root; bisection on the bracket
- * [K·t, f(F₁)·t] takes over if Newton ever fails to settle.
+ * so that short steps do not cancel). g is increasing and convex, so after at
+ * most one step Newton's method approaches the root from above and descends
+ * monotonically onto it. The start is the root of the quadratic that replaces
+ * ln(1 + u) by u − u²/2 (u = x/(F₁ + M)): a lower bound, exact to O(u³), so
+ * the short steps of a long storm need no iteration and others one or two;
+ * bisection on the bracket [K·t, f(F₁)·t] takes over if Newton ever fails to
+ * settle.
  */
 export function greenAmptPondedIncrementMm(
   ksMmH: number,
@@ -39,30 +42,43 @@ export function greenAmptPondedIncrementMm(
   const m = suctionDeficitMm;
   if (m === 0 || kt === 0) return kt;
   const base = startMm + m;
-  if (startMm === 0) {
-    // From a dry surface the ponded curve starts at infinite rate, so f(F₁)
-    // gives no upper bound. With u = x/M: u − ln(1 + u) ≤ u²/2 gives
-    // x ≥ √(2MKt), and e^L ≥ 1 + L + L²/2 (L = ln(1 + u)) gives x ≤ K·t + √(2MKt).
-    return solveIncrement(kt, m, base, Math.max(kt, Math.sqrt(2 * m * kt)), kt + Math.sqrt(2 * m * kt));
-  }
-  const high = ksMmH * (1 + m / startMm) * hours;
-  return solveIncrement(kt, m, base, kt, high);
+  let root = Math.sqrt(startMm * startMm + 2 * m * kt);
+  // Squares of tiny depths can underflow; then take the same root without squaring.
+  if (!(root >= startMm) || root === 0) root = Math.hypot(startMm, Math.sqrt(2 * m) * Math.sqrt(kt));
+  // Lower bound from ln(1 + u) ≥ u − u²/2, in the form that does not cancel:
+  // x = B(√(F₁² + 2MKt) − F₁)/M = 2BKt/(F₁ + √(F₁² + 2MKt)).
+  const guess = (2 * base * kt) / (startMm + root);
+  // Upper bound: the rate only falls, x ≤ f(F₁)·t. From a dry surface f(0) is
+  // infinite; there e^L ≥ 1 + L + L²/2 (L = ln(1 + x/M)) gives x ≤ K·t + √(2MKt).
+  const high = startMm > 0 ? kt + kt * (m / startMm) : kt + root;
+  // (Written so that a 0/0 guess falls back to K·t; past `high` it can only be by rounding.)
+  const low = guess > kt ? (guess < high ? guess : high) : kt;
+  // ln(1 + u) − (u − u²/2) ≤ u³/3, so g(low) ≥ K·t − M·u³/3 and, g being convex,
+  // the root lies within (M·u³/3)/g′(low) above `low`. On the short steps of a
+  // long storm (u ~ 1e-6) that is below 1e-15 of the answer: no iteration needed.
+  const u = low / base;
+  if (m * u * u * u <= 3e-15 * low * ((startMm + low) / (base + low))) return low < high ? low : high;
+  return solveIncrement(kt, m, startMm, base, low, high);
 }
 
-function solveIncrement(kt: number, m: number, base: number, low: number, high: number): number {
-  // ln(1 + x/base); for a tiny base x/base can overflow, and then ln x − ln base is exact enough.
-  const growth = (x: number): number => {
-    const ratio = x / base;
-    return ratio < 1e300 ? Math.log1p(ratio) : Math.log(x) - Math.log(base);
-  };
-  let x = high;
+/** ln(1 + x/base); for a tiny base x/base can overflow, and then ln x − ln base is exact enough. */
+function growth(x: number, base: number): number {
+  const ratio = x / base;
+  return ratio < 1e300 ? Math.log1p(ratio) : Math.log(x) - Math.log(base);
+}
+
+function solveIncrement(kt: number, m: number, startMm: number, base: number, low: number, high: number): number {
+  let x = low;
   for (let iter = 0; iter < 60; iter++) {
-    const residual = x - m * growth(x) - kt;
-    const slope = (base - m + x) / (base + x); // 1 − M/(F₁ + M + x)
-    const step = residual / slope;
+    const residual = x - m * growth(x, base) - kt;
+    const step = (residual * (base + x)) / (startMm + x); // residual / g′(x), g′ = (F₁ + x)/(F₁ + M + x)
     x -= step;
-    if (!(step > 1e-15 * x)) {
-      if (x >= low && x <= high) return x;
+    // The first step may go up (from the lower bound); after it every step goes
+    // down, so a step that does not (rounding noise at the root) means done.
+    if (iter === 0 ? !(Math.abs(step) > 1e-15 * x) : !(step > 1e-15 * x)) {
+      // Settled: inside the bracket up to rounding (the start is often exact
+      // to the last bit, and a step of noise may leave it by one), else fall back.
+      if (x >= low * (1 - 1e-12) && x <= high * (1 + 1e-12)) return x < low ? low : x > high ? high : x;
       break;
     }
   }
@@ -71,7 +87,7 @@ function solveIncrement(kt: number, m: number, base: number, low: number, high: 
   let b = high;
   for (let iter = 0; iter < 200 && b - a > 1e-15 * b; iter++) {
     const mid = 0.5 * (a + b);
-    if (mid - m * growth(mid) - kt > 0) b = mid;
+    if (mid - m * growth(mid, base) - kt > 0) b = mid;
     else a = mid;
   }
   return 0.5 * (a + b);

@@ -44,7 +44,8 @@ const computeFromStart = (
     const p = depthsMm[j] as number;
     const dt = durationsH[j] as number;
     t += dt;
-    const decayEnd = Math.exp(-k * t);
+    // Once e^(−kt) has underflowed to zero it stays there: skip the exponential.
+    const decayEnd = decayStart > 0 ? Math.exp(-k * t) : 0;
     // ∫ f dt over the bar = f_c·Δt + (f_0 − f_c)/k·(e^(−k t_a) − e^(−k t_b)) (Horton 1940).
     let loss = fc * dt + a * (decayStart - decayEnd);
     if (loss > p) loss = p;
@@ -68,6 +69,8 @@ function decayAtDepth(fc: number, a: number, k: number, f0: number, depth: numbe
   }
   // Lower bounds: F ≤ f_0·τ and F ≤ f_c·τ + a.
   let tau = Math.max(depth / f0, (depth - a) / fc, 0);
+  // e^(−kτ) underflows to zero beyond kτ ≈ 745, whatever the exact τ.
+  if (k * tau > 746) return 0;
   for (let iter = 0; iter < 100; iter++) {
     const e = Math.exp(-k * tau);
     const residual = depth - fc * tau - a * (1 - e);
@@ -109,44 +112,47 @@ const computeTimeCompression = (
       onCurve = false;
       continue;
     }
-    let pondDepth: number; // F at which capacity equals i
-    let pondDecay: number; // e^(−kτ) there
-    if (onCurve && fc + span * decay <= i) {
-      // Already ponded at the bar's start.
-      pondDepth = depth;
-      pondDecay = decay;
-    } else if (i >= f0) {
-      pondDepth = 0;
-      pondDecay = 1;
-    } else {
-      // f(τ_p) = i gives e^(−kτ_p) = (i − f_c)/(f_0 − f_c), and then
-      // F(τ_p) = f_c·τ_p + (f_0 − i)/k.
+    // Is the bar ponded from its start (capacity already at or below i)?
+    let pondedAtStart: boolean;
+    if (onCurve) pondedAtStart = fc + span * decay <= i;
+    // Off the curve, a cheap sufficient test first: −ln x ≤ 1/x − 1 bounds the
+    // depth F_p at which capacity falls to i by (f_0 − i)·i / (k(i − f_c)).
+    else pondedAtStart = depth * k * (i - fc) >= (f0 - i) * i;
+    let pondDepth = depth; // F at which capacity equals i
+    let pondDecay = decay; // e^(−kτ) there
+    if (!pondedAtStart) {
+      // Here f_c < i < f_0. f(τ_p) = i gives e^(−kτ_p) = (i − f_c)/(f_0 − f_c),
+      // and then F(τ_p) = f_c·τ_p + (f_0 − i)/k.
       pondDecay = (i - fc) / span;
       pondDepth = (fc * -Math.log(pondDecay)) / k + (f0 - i) / k;
+      if (depth + p <= pondDepth) {
+        // Capacity stays above i through the bar: all rain soaks in.
+        lossOut[j] = p;
+        excessOut[j] = 0;
+        depth += p;
+        onCurve = false;
+        continue;
+      }
+      pondedAtStart = depth >= pondDepth;
     }
-    if (depth + p <= pondDepth) {
-      lossOut[j] = p;
-      excessOut[j] = 0;
-      depth += p;
-      onCurve = false;
-      continue;
-    }
-    let before: number; // rain soaked in before ponding, mm
-    let pondedH: number;
-    if (depth < pondDepth) {
+    let before = 0; // rain soaked in before ponding, mm
+    let pondedH = dt;
+    if (pondedAtStart) {
+      if (!onCurve) decay = decayAtDepth(fc, a, k, f0, depth);
+    } else {
       before = pondDepth - depth;
       pondedH = dt - before / i;
       depth = pondDepth;
       decay = pondDecay;
-    } else {
-      before = 0;
-      pondedH = dt;
-      if (!onCurve) decay = decayAtDepth(fc, a, k, f0, depth);
     }
     // Ponded: τ advances with clock time, F(τ + Δ) − F(τ) = f_c·Δ + a·e^(−kτ)(1 − e^(−kΔ)).
-    const step = -Math.expm1(-k * pondedH);
-    const ponded = fc * pondedH + a * decay * step;
-    decay -= decay * step;
+    let ponded = fc * pondedH;
+    if (decay > 0) {
+      // (Once e^(−kτ) has underflowed to zero the curve is f_c alone.)
+      const step = -Math.expm1(-k * pondedH);
+      ponded += a * decay * step;
+      decay -= decay * step;
+    }
     onCurve = true;
     depth += ponded;
     let loss = before + ponded;

@@ -208,6 +208,20 @@ describe('Green–Ampt under variable rainfall', () => {
     );
   });
 
+  it('stays finite and exact when ψΔθ or K·t underflow (subnormal inputs)', () => {
+    for (const [k, m, f1, t] of [
+      [1e-6, 5e-324, 0, 1.65],
+      [1e-6, 5e-324, 1e-300, 1.65],
+      [0.5, 1e-320, 0, 1e-300],
+      [1e-300, 1e-10, 0, 1e-20],
+    ] as const) {
+      const x = greenAmptPondedIncrementMm(k, m, f1, t);
+      expect(Number.isFinite(x)).toBe(true);
+      expect(x).toBeGreaterThanOrEqual(k * t);
+      expect(x).toBeLessThanOrEqual(k * t + Math.sqrt(2 * m * k * t) + (f1 > 0 ? k * t * (m / f1) : 0));
+    }
+  });
+
   it('with no suction or no deficit is a constant loss rate K', () => {
     const storm = { durationsH: [0.5, 1, 0.25], depthsMm: [2, 30, 9] };
     const c = computeLosses(storm, { kind: 'constant', rateMmH: 6.5 });
