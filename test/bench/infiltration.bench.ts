@@ -1,0 +1,77 @@
+// Infiltration methods (issue 3): each method's pass over the bars, and the
+// calibration of every parameter, on storms of 10³, 10⁵ and 10⁶ bars.
+// Target (issue 3, medians on the 2-core reference machine): every method's
+// pass over 10⁶ bars < 60 ms. Calibration targets are runoffs the method gives
+// at another value of the parameter, so each fit has an answer to find.
+import { afterAll, test } from 'vitest';
+import { calibrate, computeLossesUnchecked, type LossBuffers, type LossMethod } from '../../src/core';
+import { measure, printTable, syntheticStorm } from './measure';
+
+const SIZES = [1e3, 1e5, 1e6];
+
+interface Bench {
+  readonly name: string;
+  readonly method: LossMethod;
+  /** Parameters to calibrate and the value whose runoff is the target. */
+  readonly fits: readonly (readonly [key: string, targetValue: number])[];
+}
+
+const BENCHES: readonly Bench[] = [
+  {
+    name: 'horton (time compression)',
+    method: { kind: 'horton', f0MmH: 75, fcMmH: 10, kPerH: 4, ponding: true },
+    fits: [
+      ['f0MmH', 120],
+      ['fcMmH', 6],
+      ['kPerH', 1.5],
+    ],
+  },
+  {
+    name: 'horton (from storm start)',
+    method: { kind: 'horton', f0MmH: 75, fcMmH: 10, kPerH: 4, ponding: false },
+    fits: [
+      ['f0MmH', 120],
+      ['fcMmH', 6],
+      ['kPerH', 1.5],
+    ],
+  },
+  {
+    name: 'green-ampt',
+    method: { kind: 'green-ampt', ksMmH: 3.4, suctionMm: 88.9, moistureDeficit: 0.3038 },
+    fits: [
+      ['ksMmH', 5],
+      ['suctionMm', 150],
+      ['moistureDeficit', 0.2],
+    ],
+  },
+  { name: 'curve-number (Ia = 0.2 S)', method: { kind: 'curve-number', cn: 75, iaRatio: 0.2 }, fits: [['cn', 82]] },
+  { name: 'curve-number (Ia = 0.05 S)', method: { kind: 'curve-number', cn: 75, iaRatio: 0.05 }, fits: [['cn', 82]] },
+];
+
+test('infiltration passes and calibration', () => {
+  for (const n of SIZES) {
+    const storm = syntheticStorm(n, 7);
+    const buffers: LossBuffers = { lossMm: new Float64Array(n), excessMm: new Float64Array(n) };
+    for (const b of BENCHES) {
+      measure('pass (reused buffers)', b.name, () => computeLossesUnchecked(storm, b.method, buffers), {
+        bars: n,
+        ...(n === 1e6 ? { targetMs: 60 } : {}),
+      });
+    }
+    for (const b of BENCHES) {
+      for (const [key, value] of b.fits) {
+        const target = computeLossesUnchecked(storm, { ...b.method, [key]: value } as LossMethod).totalExcessMm;
+        const how = b.method.kind === 'curve-number' ? 'closed form' : 'Brent';
+        const result = calibrate(storm, b.method, key, target);
+        if (!result.ok) throw new Error(`${b.name}.${key}: ${result.message}`);
+        measure('calibrate', `${b.name}.${key} (${how})`, () => calibrate(storm, b.method, key, target), {
+          bars: n,
+          samples: n >= 1e6 ? 3 : n >= 1e5 ? 5 : 15,
+          budgetMs: n >= 1e6 ? 1 : 1500,
+        });
+      }
+    }
+  }
+});
+
+afterAll(() => printTable('Raincut infiltration benchmark (medians of repeated runs)'));
