@@ -40,12 +40,16 @@ export function MatchingPanel() {
   const target = useDerived((d, s) => d.target(s));
   const fit = useDerived((d, s) => d.fit(s));
   const matched = useDerived((d, s) => d.isMatched(s));
+  // While the streamflow record is the observed runoff, the field shows its separated depth (derived, never stored).
+  const fromRecord = useDerived((d, s) => d.observedFromSeparation(s));
   const actions = useActions();
   const [volumeUnitBySystem, setVolumeUnitBySystem] = useState(DEFAULT_VOLUME_UNIT);
   const volumeUnit = volumeUnitBySystem[units];
 
   const spec = methodSpec(kind);
-  const as = observed?.as ?? 'depth';
+  const as = fromRecord ? 'depth' : (observed?.as ?? 'depth');
+  const shown: Scenario['observed'] =
+    fromRecord && observed ? { ...observed, as: 'depth', value: target?.ok ? target.mm : observed.value } : observed;
   const parameter = observed?.parameter ?? spec.params[0]?.key ?? '';
   const param = spec.params.find((p) => p.key === parameter);
   const depthUnit = unitText(displayUnit('depth', units));
@@ -71,7 +75,7 @@ export function MatchingPanel() {
               name="observed-as"
               value={option}
               checked={as === option}
-              onChange={() => actions.setObserved({ as: option, value: convertObserved(observed, option, areaM2) })}
+              onChange={() => actions.setObserved({ as: option, value: convertObserved(shown, option, areaM2) })}
             />
             <span>{option === 'depth' ? 'Depth' : 'Volume'}</span>
           </label>
@@ -83,11 +87,16 @@ export function MatchingPanel() {
           id="observed-value"
           label="Observed runoff"
           unit={depthUnit}
-          value={observed?.value ?? null}
+          value={shown?.value ?? null}
           toDisplay={(mm) => toDisplay('depth', mm, units)}
           fromDisplay={(v) => fromDisplay('depth', v, units)}
           onCommit={(mm) => actions.setObserved({ as: 'depth', value: mm, parameter }, { coalesceKey: 'observed' })}
           note={problem}
+          hint={
+            fromRecord
+              ? 'The direct runoff separated from the streamflow record (see Baseflow separation); typing a value here stops following it.'
+              : null
+          }
         />
       ) : (
         <NumberField
