@@ -7,6 +7,7 @@ import { Header } from './layout/Header';
 import { StorageNoticeBar } from './layout/StorageNotice';
 import { MatchingPanel } from './matching/MatchingPanel';
 import { MethodPanel } from './method/MethodPanel';
+import { HydrographChart, SeparationPanel } from './observed';
 import { RainfallToolbar } from './rainfall/RainfallToolbar';
 import { ResultsPanel } from './results/ResultsPanel';
 import { BarTable, DrawableChart, RainfallTools, StormInputProvider, StormPanels } from './storm-input';
@@ -39,7 +40,9 @@ function Workbench({ rainfallTools }: { rainfallTools?: ReactNode }) {
             <DrawableChart>
               <Hyetograph />
             </DrawableChart>
+            <HydrographChart />
             <ResultsPanel />
+            <SeparationPanel />
             <BarTable />
           </StormInputProvider>
         </div>
