@@ -142,7 +142,8 @@ function ReportBody() {
         </table>
       </section>
       <p className="report__foot">
-        Losses and excess computed by Raincut’s core ({spec.source}). The per-bar table is in the CSV export.
+        Losses and excess computed by Raincut’s core; method source: {spec.source.replace(/\.$/, '')}. The per-bar table is in the CSV
+        export.
       </p>
     </>
   );

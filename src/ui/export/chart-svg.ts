@@ -105,7 +105,6 @@ export function standaloneSvg(live: SVGSVGElement, options: StandaloneOptions): 
   const height = chartHeight + footHeight;
 
   const root = doc.createElementNS(SVG_NS, 'svg');
-  root.setAttribute('xmlns', SVG_NS);
   root.setAttribute('width', String(width));
   root.setAttribute('height', String(height));
   root.setAttribute('viewBox', `0 0 ${width} ${height}`);
@@ -147,6 +146,9 @@ export function standaloneSvg(live: SVGSVGElement, options: StandaloneOptions): 
   cautionLines.forEach((l) => line(l, '400'));
   root.appendChild(foot);
 
-  const text = `<?xml version="1.0" encoding="UTF-8"?>\n${new view.XMLSerializer().serializeToString(root)}\n`;
+  // The serialiser writes the namespace of an element made in it; say it in any case, once.
+  let xml = new view.XMLSerializer().serializeToString(root);
+  if (!/^<svg[^>]*\sxmlns="/.test(xml)) xml = xml.replace(/^<svg/, `<svg xmlns="${SVG_NS}"`);
+  const text = `<?xml version="1.0" encoding="UTF-8"?>\n${xml}\n`;
   return { text, width, height };
 }

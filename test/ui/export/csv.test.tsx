@@ -1,0 +1,137 @@
+// @vitest-environment jsdom
+import { act, screen } from '@testing-library/react';
+import Papa from 'papaparse';
+import { describe, expect, it } from 'vitest';
+import { barEdgesH, computeLosses, convertDepth } from '../../../src/core';
+import { CAUTION_TEXT } from '../../../src/scenario';
+import type { Scenario } from '../../../src/scenario/types';
+import { barTableCsv } from '../../../src/ui/export';
+import { FOUR_BARS } from '../store/fixtures';
+import { SHARED, renderTools } from '../share/render-tools';
+
+const MESSAGE = 'Scenario tools message';
+
+function bytesOf(blob: Blob): Promise<Uint8Array> {
+  return new Promise((resolve, reject) => {
+    const reader = new FileReader();
+    reader.onload = () => resolve(new Uint8Array(reader.result as ArrayBuffer));
+    reader.onerror = () => reject(reader.error);
+    reader.readAsArrayBuffer(blob);
+  });
+}
+
+/** Reads the CSV as a spreadsheet-minded program would: UTF-8, '#' lines as comments, first row the header. */
+function parse(text: string) {
+  const parsed = Papa.parse<Record<string, string>>(text, { header: true, comments: '#', skipEmptyLines: true });
+  expect(parsed.errors).toEqual([]);
+  return parsed;
+}
+
+async function exportedCsv(scenario: Scenario) {
+  const view = renderTools({ fallback: scenario });
+  await view.user.click(screen.getByRole('button', { name: 'Export CSV' }));
+  const file = view.saved.at(-1);
+  if (!file) throw new Error('no CSV was saved');
+  const bytes = await bytesOf(file.blob);
+  return { ...view, name: file.name, bytes, text: new TextDecoder('utf-8').decode(bytes) };
+}
+
+describe('bar table CSV', () => {
+  it('carries the name and caution as note lines, units in the header, and reads back with papaparse to the same bars', async () => {
+    const { text, bytes, name } = await exportedCsv(FOUR_BARS);
+    expect(name).toBe('four-bars-bars.csv');
+    // UTF-8 with a byte-order mark, so spreadsheet programs show φ and ³.
+    expect([...bytes.slice(0, 3)]).toEqual([0xef, 0xbb, 0xbf]);
+    const lines = text.replace(/^\ufeff/, '').split('\r\n');
+    expect(lines[0]).toBe('# Raincut bar table: Four bars');
+    expect(lines[1]).toBe(`# Caution: ${CAUTION_TEXT}`);
+    expect(lines).toContain('# Loss method: Constant loss rate (φ-index); Loss rate φ = 8 mm/h');
+
+    const parsed = parse(text);
+    expect(parsed.meta.fields).toEqual([
+      'Bar',
+      'Start (h from storm start)',
+      'Duration (h)',
+      'Rainfall depth (mm)',
+      'Rainfall intensity (mm/h)',
+      'Loss (mm)',
+      'Rainfall excess (mm)',
+    ]);
+    const rows = parsed.data;
+    expect(rows.map((r) => Number(r['Duration (h)']))).toEqual(FOUR_BARS.storm.durationsH);
+    expect(rows.map((r) => Number(r['Rainfall depth (mm)']))).toEqual(FOUR_BARS.storm.depthsMm);
+    const core = computeLosses(FOUR_BARS.storm, FOUR_BARS.method);
+    expect(rows.map((r) => Number(r['Loss (mm)']))).toEqual([...core.lossMm]);
+    expect(rows.map((r) => Number(r['Rainfall excess (mm)']))).toEqual([...core.excessMm]);
+    expect(rows.map((r) => Number(r['Rainfall intensity (mm/h)']))).toEqual([4, 12, 20, 4]);
+    expect(rows.map((r) => Number(r['Start (h from storm start)']))).toEqual([...barEdgesH(FOUR_BARS.storm).slice(0, 4)]);
+    expect(screen.getByRole('status', { name: MESSAGE })).toHaveTextContent('Exported four-bars-bars.csv: 4 bars with loss and excess.');
+  });
+
+  it('in US units the depths are inches, exactly the stored millimetres converted, with a clock column for a storm with a start', async () => {
+    const { text } = await exportedCsv(SHARED);
+    const parsed = parse(text);
+    expect(parsed.meta.fields).toEqual([
+      'Bar',
+      'Start (clock)',
+      'Start (h from storm start)',
+      'Duration (h)',
+      'Rainfall depth (in)',
+      'Rainfall intensity (in/h)',
+      'Loss (in)',
+      'Rainfall excess (in)',
+    ]);
+    const rows = parsed.data;
+    expect(rows.map((r) => r['Start (clock)'])).toEqual([
+      '2026-02-12 21:45',
+      '2026-02-12 22:00',
+      '2026-02-12 22:15',
+      '2026-02-12 22:45',
+      '2026-02-12 23:45',
+      '2026-02-13 00:15',
+    ]);
+    expect(rows.map((r) => Number(r['Rainfall depth (in)']))).toEqual(SHARED.storm.depthsMm.map((mm) => convertDepth(mm, 'mm', 'in')));
+    // Back to millimetres: the same bars, to the last few bits of a double.
+    rows.forEach((r, k) => {
+      const mm = convertDepth(Number(r['Rainfall depth (in)']), 'in', 'mm');
+      expect(Math.abs(mm - (SHARED.storm.depthsMm[k] as number))).toBeLessThanOrEqual(1e-12 * (SHARED.storm.depthsMm[k] as number));
+    });
+    const core = computeLosses(SHARED.storm, SHARED.method);
+    expect(rows.map((r) => Number(r['Rainfall excess (in)']))).toEqual([...core.excessMm].map((mm) => convertDepth(mm, 'mm', 'in')));
+  });
+
+  it('while kept matched, the table is computed with the fitted value the screen shows', async () => {
+    const observed = { as: 'depth' as const, value: 6, parameter: 'rateMmH', locked: true };
+    const matched: Scenario = { ...FOUR_BARS, observed };
+    const { text, store } = await exportedCsv(matched);
+    const method = store.derived.effectiveMethod(store.getState().scenario);
+    expect(method).not.toEqual(FOUR_BARS.method);
+    const rows = parse(text).data;
+    const excess = rows.reduce((sum, r) => sum + Number(r['Rainfall excess (mm)']), 0);
+    expect(excess).toBeCloseTo(6, 9);
+    expect(text).toContain(`Loss rate φ = `);
+  });
+
+  it('a name with commas, quotes and a line break stays one note line, so the rows still read back', () => {
+    const odd: Scenario = { ...FOUR_BARS, name: 'Pond 3, "east" arm\nsecond try' };
+    const result = computeLosses(odd.storm, odd.method);
+    const text = barTableCsv({ scenario: odd, method: odd.method, result, volumeM3: null });
+    expect(text.split('\r\n')[0]).toBe('\ufeff# Raincut bar table: Pond 3, "east" arm second try');
+    expect(parse(text).data.map((r) => Number(r['Rainfall depth (mm)']))).toEqual(odd.storm.depthsMm);
+  });
+
+  it('when the losses cannot be worked out, nothing is exported and the core’s reason is shown', async () => {
+    const view = renderTools({ fallback: FOUR_BARS });
+    act(() => view.actions.setMethodKind('green-ampt'));
+    // A hand-made bad parameter in the document (as an old file might carry) is refused by the core, not by the export.
+    act(() =>
+      view.store.setState((s) => {
+        const scenario = { ...s.scenario, method: { kind: 'green-ampt' as const, ksMmH: -1, suctionMm: 100, moistureDeficit: 0.3 } };
+        return { scenario, history: { ...s.history, present: scenario } };
+      }),
+    );
+    await view.user.click(screen.getByRole('button', { name: 'Export CSV' }));
+    expect(screen.getByRole('alert', { name: MESSAGE })).toHaveTextContent('No table was exported: the losses cannot be worked out.');
+    expect(view.saved).toEqual([]);
+  });
+});

@@ -1,0 +1,65 @@
+// @vitest-environment jsdom
+import { act, screen, within } from '@testing-library/react';
+import { describe, expect, it } from 'vitest';
+import { computeLosses, runoffVolumeM3 } from '../../../src/core';
+import { CAUTION_TEXT } from '../../../src/scenario';
+import { formatPercent, formatValue } from '../../../src/ui/format';
+import { FOUR_BARS } from '../store/fixtures';
+import { SHARED, renderTools } from '../share/render-tools';
+
+const mm = (v: number): string => `${formatValue(v)} mm`;
+const cell = (table: HTMLElement, row: string): string =>
+  within(table).getByRole('rowheader', { name: row }).closest('tr')?.querySelector('td')?.textContent ?? '';
+
+describe('printable report', () => {
+  it('Print report opens the print dialog; the report is built for printing only, with inputs, chart, results and caution', async () => {
+    const observed = { as: 'depth' as const, value: 6, parameter: 'rateMmH', locked: false };
+    const { user, calls } = renderTools({ fallback: { ...FOUR_BARS, observed, notes: 'Invented test notes.' } });
+    expect(screen.queryByRole('article', { name: 'Printable report' })).toBeNull();
+    await user.click(screen.getByRole('button', { name: 'Print report' }));
+    expect(calls.print).toBe(1);
+
+    act(() => {
+      window.dispatchEvent(new Event('beforeprint'));
+    });
+    const report = screen.getByRole('article', { name: 'Printable report' });
+    expect(within(report).getByRole('heading', { name: 'Four bars' })).toBeInTheDocument();
+    expect(within(report).getByRole('note')).toHaveTextContent(`Caution. ${CAUTION_TEXT}`);
+
+    const inputs = within(report).getByRole('region', { name: 'Inputs' });
+    expect(inputs).toHaveTextContent('4 bars, 20 mm in 2 h');
+    expect(inputs).toHaveTextContent('Test catchment, 100 ha');
+    expect(inputs).toHaveTextContent('Constant loss rate (φ-index): Loss rate φ = 8 mm/h');
+    expect(inputs).toHaveTextContent('6 mm; fitting Loss rate φ');
+    expect(inputs).toHaveTextContent('Invented test notes.');
+
+    expect(within(report).getByRole('img', { name: /^Hyetograph of Four bars/ })).toBeInTheDocument();
+
+    const results = within(report).getByRole('table');
+    const core = computeLosses(FOUR_BARS.storm, FOUR_BARS.method);
+    expect(cell(results, 'Rainfall depth')).toBe(mm(core.rainMm));
+    expect(cell(results, 'Loss depth')).toBe(mm(core.totalLossMm));
+    expect(cell(results, 'Rainfall excess depth')).toBe(mm(core.totalExcessMm));
+    expect(cell(results, 'Runoff volume')).toBe(`${formatValue(runoffVolumeM3(core.totalExcessMm, 1e6))} m³`);
+    expect(cell(results, 'Runoff fraction')).toBe(formatPercent(core.runoffFraction));
+    expect(cell(results, 'Fitted parameter')).toMatch(/^Loss rate φ [\d.]+ mm\/h$/);
+
+    act(() => {
+      window.dispatchEvent(new Event('afterprint'));
+    });
+    expect(screen.queryByRole('article', { name: 'Printable report' })).toBeNull();
+  });
+
+  it('shows the scenario’s own units and says when there is nothing to fit', () => {
+    renderTools({ fallback: { ...SHARED, observed: null } });
+    act(() => {
+      window.dispatchEvent(new Event('beforeprint'));
+    });
+    const report = screen.getByRole('article', { name: 'Printable report' });
+    const results = within(report).getByRole('table');
+    expect(cell(results, 'Rainfall depth')).toMatch(/ in$/);
+    expect(cell(results, 'Runoff volume')).toMatch(/ acre-ft$/);
+    expect(cell(results, 'Fitted parameter')).toBe('— (no observed runoff to fit)');
+    expect(within(report).getByRole('region', { name: 'Inputs' })).toHaveTextContent('from 12 Feb 2026 21:45');
+  });
+});
