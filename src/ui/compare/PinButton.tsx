@@ -24,12 +24,14 @@ export function PinButton() {
   };
   return (
     <>
-      <button type="button" onClick={pin} aria-describedby="pin-count">
+      <button type="button" onClick={pin} aria-describedby={pins.length > 0 ? 'pin-count' : undefined}>
         Pin to compare
       </button>
-      <span id="pin-count" className="scenario-bar__count">
-        {pins.length} of {MAX_PINS} pinned
-      </span>
+      {pins.length > 0 ? (
+        <span id="pin-count" className="scenario-bar__count">
+          {pins.length} of {MAX_PINS} pinned
+        </span>
+      ) : null}
     </>
   );
 }

@@ -35,8 +35,6 @@ export function ScenarioBar() {
           </Group>
           <Group id="file" label="File">
             <ScenarioFile />
-          </Group>
-          <Group id="browser" label="This browser">
             <button
               type="button"
               aria-expanded={libraryOpen}
