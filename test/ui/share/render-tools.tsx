@@ -109,5 +109,11 @@ export function renderTools(options: ToolsOptions = {}) {
 export async function savedText(saved: readonly { name: string; blob: Blob }[], index = -1): Promise<string> {
   const file = saved.at(index);
   if (!file) throw new Error('nothing was saved');
-  return file.blob.text();
+  // jsdom's Blob has no text(); FileReader reads it.
+  return new Promise((resolve, reject) => {
+    const reader = new FileReader();
+    reader.onload = () => resolve(String(reader.result));
+    reader.onerror = () => reject(reader.error);
+    reader.readAsText(file.blob);
+  });
 }
