@@ -1,0 +1,253 @@
+// Sharing and exports in Debian's chromium, against the built app: build a
+// scenario on screen, copy its link and open it in a fresh browser context
+// (no shared storage) where the same results must show; a damaged link keeps
+// the saved scenario; the CSV export reads back to the same bars, the SVG is
+// valid and carries the page's colours inline, the PNG is drawn at 2×, and the
+// printed report is one page.
+import { readFile } from 'node:fs/promises';
+import { resolve } from 'node:path';
+import Papa from 'papaparse';
+import { createServer } from 'vite';
+
+const ROOT = resolve(import.meta.dirname, '../..');
+const RESULTS = ['Rainfall depth', 'Loss depth', 'Excess depth', 'Runoff volume', 'Runoff fraction', 'Peak excess intensity'];
+
+function check(condition, message) {
+  if (!condition) throw new Error(message);
+}
+
+/** The core and the scenario layer from source through Vite, to check the page against. */
+async function loadModules() {
+  const server = await createServer({
+    root: ROOT,
+    configFile: false,
+    logLevel: 'error',
+    appType: 'custom',
+    server: { middlewareMode: true, hmr: false, ws: false },
+    optimizeDeps: { noDiscovery: true, include: [] },
+  });
+  return {
+    core: await server.ssrLoadModule('/src/core/index.ts'),
+    scenario: await server.ssrLoadModule('/src/scenario/index.ts'),
+    close: () => server.close(),
+  };
+}
+
+const shown = async (page, label) => ((await page.getByLabel(label, { exact: true }).first().textContent()) ?? '').trim();
+const results = async (page) => Object.fromEntries(await Promise.all(RESULTS.map(async (l) => [l, await shown(page, l)])));
+const stored = (page) => page.evaluate(() => localStorage.getItem('raincut.scenario'));
+
+/** Waits until the page has saved the scenario with this name (the last edit made), and returns its text. */
+async function savedAs(page, name) {
+  await page.waitForFunction((n) => JSON.parse(localStorage.getItem('raincut.scenario') ?? 'null')?.name === n, name);
+  return stored(page);
+}
+
+/** Builds a scenario on screen: three bars typed into the table, another method and its parameters, US units. */
+async function buildScenario(page) {
+  const grid = page.getByRole('grid', { name: 'Bar table' });
+  const cell = (bar, col) => grid.locator(`[role="row"][aria-rowindex="${bar + 1}"] [aria-colindex="${col}"]`);
+  for (const [bar, depth] of [
+    [3, '2.25'],
+    [8, '9.75'],
+    [12, '0'],
+  ]) {
+    await cell(bar, 4).click();
+    await page.keyboard.type(depth);
+    await page.keyboard.press('Enter');
+  }
+  await page.getByLabel('Loss method').selectOption('initial-continuing');
+  for (const [name, value] of [
+    [/^Initial loss/, '7.5'],
+    [/^Continuing loss rate/, '3.25'],
+  ]) {
+    const field = page.getByRole('textbox', { name });
+    await field.fill(value);
+    await field.press('Enter');
+  }
+  await page.getByRole('radio', { name: 'US customary' }).check();
+  await page.getByLabel('Scenario name').fill('Share check (invented)');
+}
+
+/** Copies the link: from the clipboard, or from the box shown when the clipboard is refused. */
+async function copyLink(page) {
+  await page.getByRole('button', { name: 'Copy link' }).click();
+  const message = page.getByLabel('Scenario tools message');
+  await message.waitFor();
+  const box = message.getByRole('textbox', { name: 'Share link' });
+  const link = (await box.count()) > 0 ? await box.inputValue() : await page.evaluate(() => navigator.clipboard.readText());
+  const said = (await message.textContent()) ?? '';
+  check(said.includes(`The link is ${link.length} characters long`), `the length said is not the link's ${link.length}: "${said}"`);
+  return link;
+}
+
+async function download(page, button) {
+  const [file] = await Promise.all([page.waitForEvent('download'), page.getByRole('button', { name: button }).click()]);
+  const path = await file.path();
+  check(path, `${button}: the download has no file`);
+  return { name: file.suggestedFilename(), bytes: await readFile(path) };
+}
+
+export const tests = [
+  {
+    name: 'a copied link opens in a fresh browser context with every bar, parameter and unit, and the same results',
+    async run({ browser, baseUrl, newPage, context }) {
+      await context.grantPermissions(['clipboard-read', 'clipboard-write'], { origin: new URL(baseUrl).origin });
+      const page = await newPage();
+      await page.goto(baseUrl);
+      await buildScenario(page);
+      const mine = await savedAs(page, 'Share check (invented)');
+      const built = JSON.parse(mine);
+      check(
+        built.storm.depthsMm[2] === 2.25 && built.storm.depthsMm[7] === 9.75 && built.storm.depthsMm[11] === 0,
+        `the typed bars did not land: ${built.storm.depthsMm}`,
+      );
+      check(built.method.kind === 'initial-continuing' && built.method.initialMm === 7.5 && built.method.rateMmH === 3.25, `method ${JSON.stringify(built.method)}`);
+      const link = await copyLink(page);
+      check(link.startsWith(`${baseUrl}#rc1.`), `not a link to this page: ${link.slice(0, 60)}`);
+      const want = await results(page);
+      check(want['Rainfall depth'].endsWith(' in'), `results should be in inches: ${want['Rainfall depth']}`);
+
+      const fresh = await browser.newContext({ viewport: { width: 1400, height: 900 } });
+      try {
+        const other = await fresh.newPage();
+        const errors = [];
+        other.on('pageerror', (e) => errors.push(e.message));
+        await other.goto(link);
+        await other.getByRole('region', { name: 'Shared scenario: “Share check (invented)”' }).waitFor();
+        const got = await results(other);
+        for (const label of RESULTS) check(got[label] === want[label], `${label}: the link shows "${got[label]}", the sender "${want[label]}"`);
+        check(await other.getByRole('radio', { name: 'US customary' }).isChecked(), 'the unit choice did not travel');
+        check((await other.getByLabel('Loss method').inputValue()) === 'initial-continuing', 'the method did not travel');
+        check((await other.getByLabel('Scenario name').inputValue()) === 'Share check (invented)', 'the name did not travel');
+        check((await stored(other)) === null, 'the fresh browser saved the shared scenario before it was kept');
+
+        await other.getByRole('button', { name: 'Keep the shared scenario' }).click();
+        const kept = await stored(other);
+        check(kept === mine, 'the kept scenario is not exactly the sender’s (bars, parameters or units differ)');
+        check(!(await other.evaluate(() => location.hash)), 'the link stayed in the address after keeping it');
+        check(errors.length === 0, errors.join('; '));
+      } finally {
+        await fresh.close();
+      }
+    },
+  },
+  {
+    name: 'a damaged link, pasted or loaded, says what is wrong and leaves the saved scenario as it was',
+    async run({ baseUrl, newPage }) {
+      const { scenario, close } = await loadModules();
+      try {
+        const page = await newPage();
+        await page.goto(baseUrl);
+        await page.getByLabel('Scenario name').fill('Mine, saved');
+        const mine = await savedAs(page, 'Mine, saved');
+        const good = scenario.encodeScenarioLink({ ...JSON.parse(mine), name: 'Someone else’s' });
+        const cut = good.slice(0, good.length - 9);
+
+        // Pasted into the address of the open page: only the fragment changes.
+        await page.goto(`${baseUrl}#${cut}`);
+        const alert = page.getByRole('alert').filter({ hasText: 'The shared link could not be opened.' });
+        await alert.waitFor();
+        check(/The link is damaged/.test((await alert.textContent()) ?? ''), `no reason given: ${await alert.textContent()}`);
+        check((await page.getByLabel('Scenario name').inputValue()) === 'Mine, saved', 'the damaged link changed the scenario');
+        // Loaded afresh with the damaged link in the address.
+        await page.reload();
+        await alert.waitFor();
+        check((await page.getByLabel('Scenario name').inputValue()) === 'Mine, saved', 'after reload the scenario changed');
+        check((await stored(page)) === mine, 'the saved scenario was written over');
+      } finally {
+        await close();
+      }
+    },
+  },
+  {
+    name: 'exports: the CSV reads back to the same bars, the SVG is valid with inline colours, the PNG is 2×',
+    async run({ baseUrl, newPage }) {
+      const { core, close } = await loadModules();
+      try {
+        const page = await newPage();
+        await page.goto(baseUrl);
+        await buildScenario(page);
+        const s = JSON.parse(await savedAs(page, 'Share check (invented)'));
+
+        const csv = await download(page, 'Export CSV');
+        check(csv.name === 'share-check-invented-bars.csv', `CSV named ${csv.name}`);
+        const text = csv.bytes.toString('utf8');
+        check(text.length > 0, 'the CSV is empty');
+        check(text.includes('Estimates are for screening'), 'the CSV has no caution');
+        const parsed = Papa.parse(text, { header: true, comments: '#', skipEmptyLines: true });
+        check(parsed.errors.length === 0, `CSV errors: ${JSON.stringify(parsed.errors.slice(0, 3))}`);
+        check(parsed.data.length === s.storm.depthsMm.length, `${parsed.data.length} rows for ${s.storm.depthsMm.length} bars`);
+        parsed.data.forEach((row, k) => {
+          const want = core.convertDepth(s.storm.depthsMm[k], 'mm', 'in');
+          check(Number(row['Rainfall depth (in)']) === want, `bar ${k + 1}: CSV ${row['Rainfall depth (in)']}, scenario ${want} in`);
+          check(Number(row['Duration (h)']) === s.storm.durationsH[k], `bar ${k + 1}: duration ${row['Duration (h)']}`);
+        });
+        const r = core.computeLosses(s.storm, s.method);
+        parsed.data.forEach((row, k) => {
+          check(Number(row['Loss (in)']) === core.convertDepth(r.lossMm[k], 'mm', 'in'), `bar ${k + 1}: loss is not the core’s`);
+        });
+
+        const svg = await download(page, 'Export SVG');
+        check(svg.name === 'share-check-invented-chart.svg', `SVG named ${svg.name}`);
+        const svgText = svg.bytes.toString('utf8');
+        const verdict = await page.evaluate(async (xml) => {
+          const doc = new DOMParser().parseFromString(xml, 'image/svg+xml');
+          const root = doc.documentElement;
+          const fills = Array.from(doc.querySelectorAll('path')).map((p) => /fill:\s*(rgb\([^)]*\))/.exec(p.getAttribute('style') ?? '')?.[1] ?? null);
+          const img = new Image();
+          const url = URL.createObjectURL(new Blob([xml], { type: 'image/svg+xml' }));
+          const loaded = await new Promise((ok) => {
+            img.onload = () => ok(img.naturalWidth > 0);
+            img.onerror = () => ok(false);
+            img.src = url;
+          });
+          return {
+            errors: doc.getElementsByTagName('parsererror').length,
+            root: root.localName,
+            ns: root.namespaceURI,
+            fills,
+            loaded,
+            classes: doc.querySelectorAll('[class]').length,
+            text: root.textContent,
+            width: Number(root.getAttribute('width')),
+            height: Number(root.getAttribute('height')),
+          };
+        }, svgText);
+        check(verdict.errors === 0 && verdict.root === 'svg' && verdict.ns === 'http://www.w3.org/2000/svg', `not a valid SVG: ${JSON.stringify(verdict)}`);
+        check(verdict.loaded, 'the SVG does not load as a picture');
+        check(verdict.classes === 0, 'the SVG still leans on page classes');
+        // The workbench's excess blue and loss tan, written on the shapes.
+        check(verdict.fills.includes('rgb(45, 95, 139)') && verdict.fills.includes('rgb(216, 201, 166)'), `fills: ${verdict.fills}`);
+        check(verdict.text.includes('Estimates are for screening'), 'the SVG has no caution');
+
+        const png = await download(page, 'Export PNG');
+        check(png.bytes.subarray(0, 8).equals(Buffer.from([0x89, 0x50, 0x4e, 0x47, 0x0d, 0x0a, 0x1a, 0x0a])), 'not a PNG');
+        const width = png.bytes.readUInt32BE(16);
+        const height = png.bytes.readUInt32BE(20);
+        check(width === verdict.width * 2 && height === verdict.height * 2, `PNG ${width}×${height} for an SVG of ${verdict.width}×${verdict.height}`);
+      } finally {
+        await close();
+      }
+    },
+  },
+  {
+    name: 'the printed report is one page with the inputs, chart, results and caution',
+    async run({ baseUrl, newPage }) {
+      const page = await newPage();
+      await page.goto(baseUrl);
+      await page.emulateMedia({ media: 'print' });
+      const report = page.getByRole('article', { name: 'Printable report' });
+      await report.waitFor();
+      const words = (await report.textContent()) ?? '';
+      for (const part of ['Caution.', 'Inputs', 'Results', 'Constant loss rate (φ-index)', 'Runoff fraction', 'licensed professional']) {
+        check(words.includes(part), `the report lacks "${part}"`);
+      }
+      check(await report.getByRole('img', { name: /^Hyetograph of/ }).isVisible(), 'the report has no chart');
+      check(!(await page.getByRole('button', { name: 'Copy link' }).isVisible()), 'the workbench prints along with the report');
+      const pdf = await page.pdf({ format: 'A4', printBackground: true });
+      const pages = (pdf.toString('latin1').match(/\/Type\s*\/Page(?![s\w])/g) ?? []).length;
+      check(pages === 1, `the report prints on ${pages} pages`);
+    },
+  },
+];
