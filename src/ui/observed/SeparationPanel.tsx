@@ -39,7 +39,8 @@ function hintOf(param: BaseflowParam): string {
   const auto = param.optional ? ` Empty: ${param.optional.auto}.` : '';
   if (param.unit === 'sample') return `Sample number where the direct runoff begins (1 = the first sample).${auto}`;
   if (param.unit === 'h' && param.min === -Infinity) return `Hours after the first sample.${auto}`;
-  return `${param.help}${auto}`;
+  // The table's help already says what an empty field means.
+  return param.help;
 }
 
 function ParamFields({ flow, spec }: { flow: Streamflow; spec: BaseflowMethodSpec }) {

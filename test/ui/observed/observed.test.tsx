@@ -27,7 +27,6 @@ const flowOf = (s: Scenario) => {
   return s.streamflow;
 };
 const separate = (method: BaseflowMethod, areaM2 = AREA_M2) => separateBaseflow(TRIANGLE, method, { areaM2 });
-const rateOf = (s: Scenario): number => (s.method as { rateMmH: number }).rateMmH;
 const m3 = (v: number): string => `${formatValue(v)} m³`;
 const mm = (v: number): string => `${formatValue(v)} mm`;
 
@@ -283,6 +282,8 @@ describe('use as observed runoff', () => {
     expect(use).toHaveAttribute('aria-pressed', 'false');
     await user.click(use);
     expect(use).toHaveAttribute('aria-pressed', 'true');
+    expect(flowOf(scenario()).useAsObserved).toBe(true);
+    expect(scenario().observed).toMatchObject({ as: 'depth', parameter: 'rateMmH', locked: true });
     const r = separate({ kind: 'straight-line', endTimeH: 7 });
     expect(screen.getByLabelText(/^Observed runoff/)).toHaveValue(formatField(r.directDepthMm as number));
     expect(screen.getByRole('switch', { name: 'Keep matched' })).toBeChecked();
