@@ -34,3 +34,14 @@ export {
 } from './persistence';
 export { StoreProvider, useActions, useDerived, useScenario, useWorkbench, useWorkbenchStore } from './react';
 export { HISTORY_LIMIT, COALESCE_WINDOW_MS } from './history';
+export {
+  withActiveEventSynced,
+  withDesignPick,
+  withDesignStormOnWorkbench,
+  withEventAdded,
+  withEventMoved,
+  withEventOnWorkbench,
+  withEventParameter,
+  withEventRemoved,
+  withEventRenamed,
+} from './event-edits';

@@ -20,6 +20,7 @@ import {
   type Bar,
   type Observed,
 } from './edits';
+import { withActiveEventSynced } from './event-edits';
 import { createHistory, record, redo, redoLabel, replacePresent, undo, undoLabel, type History } from './history';
 
 /** Problems with the browser's saved copy, shown on screen until dismissed. */
@@ -118,7 +119,8 @@ export function createWorkbenchStore(initial: Scenario, options: CreateStoreOpti
 
     const edit = (label: string, recipe: (s: Scenario) => Scenario, opts: EditOptions = {}): void => {
       const { history, gesture } = get();
-      const next = recipe(history.present);
+      // The event on the workbench follows every workbench edit (scenario version 3).
+      const next = withActiveEventSynced(recipe(history.present));
       if (next === history.present) return;
       if (gesture) commit(replacePresent(history, next));
       else {

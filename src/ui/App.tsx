@@ -14,6 +14,8 @@ import { BarTable, DrawableChart, RainfallTools, StormInputProvider, StormPanels
 import { ComparePanel } from './compare';
 import { PrintReport } from './export';
 import { LinkNotice, ScenarioBar, ScenarioServicesProvider, type ScenarioServices } from './share';
+import { EventsView, ViewTabs } from './events';
+import { DesignStormView } from './design-storm';
 
 export interface AppProps {
   readonly store: WorkbenchStore;
@@ -30,28 +32,41 @@ function Workbench({ rainfallTools }: { rainfallTools?: ReactNode }) {
       <Header />
       <ScenarioBar />
       <Caution />
-      <main className="bench">
-        <StorageNoticeBar />
-        <LinkNotice />
-        <div className="bench__main">
-          <StormInputProvider>
-            <RainfallToolbar tools={rainfallTools ?? <RainfallTools />} />
-            <StormPanels />
-            <DrawableChart>
-              <Hyetograph />
-            </DrawableChart>
-            <HydrographChart />
-            <ResultsPanel />
-            <SeparationPanel />
-            <BarTable />
-          </StormInputProvider>
-        </div>
-        <div className="bench__side">
-          <MethodPanel />
-          <MatchingPanel />
-        </div>
-        <ComparePanel />
-      </main>
+      {/* The workbench first and by default; the event set and design storms in views of their own. */}
+      <ViewTabs
+        views={[
+          {
+            id: 'workbench',
+            label: 'Workbench',
+            content: (
+            <main className="bench">
+              <StorageNoticeBar />
+              <LinkNotice />
+              <div className="bench__main">
+                <StormInputProvider>
+                  <RainfallToolbar tools={rainfallTools ?? <RainfallTools />} />
+                  <StormPanels />
+                  <DrawableChart>
+                    <Hyetograph />
+                  </DrawableChart>
+                  <HydrographChart />
+                  <ResultsPanel />
+                  <SeparationPanel />
+                  <BarTable />
+                </StormInputProvider>
+              </div>
+              <div className="bench__side">
+                <MethodPanel />
+                <MatchingPanel />
+              </div>
+              <ComparePanel />
+            </main>
+            ),
+          },
+          { id: 'events', label: 'Event set', content: <EventsView /> },
+          { id: 'design', label: 'Design storm', content: <DesignStormView /> },
+        ]}
+      />
       <PrintReport />
     </div>
   );

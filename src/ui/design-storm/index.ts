@@ -1,0 +1,6 @@
+// Design storms: alternating block from an IDF formula or table, uniform storms, scaling; the design loss applied.
+import './design-storm.css';
+
+export { DesignStormView } from './DesignStormView';
+export { StormBars } from './StormBars';
+export { buildDesignStorm, parseIdfTable, FIELD_LABELS, type DesignForm, type Built, type FormField } from './build';

@@ -1,0 +1,90 @@
+import { scaleLinear } from 'd3-scale';
+import { formatValue } from '../format';
+import type { FitRow } from './event-fits';
+
+export interface FitChartProps {
+  readonly rows: readonly FitRow[];
+  readonly parameterLabel: string;
+  /** Unit text of the shown values ('' for none). */
+  readonly unit: string;
+  readonly depthUnit: string;
+  /** SI → shown, for the fitted value and for depths. */
+  readonly showValue: (si: number) => number;
+  readonly showDepth: (mm: number) => number;
+  readonly designValue: number | null;
+}
+
+const W = 420;
+const H = 240;
+const M = { top: 14, right: 16, bottom: 42, left: 56 };
+
+/**
+ * Each event's fitted value against its storm's rainfall depth, so a trend
+ * with storm size shows; the design value as a dashed line. A figure with a
+ * text summary for readers who cannot see the points.
+ */
+export function FitChart({ rows, parameterLabel, unit, depthUnit, showValue, showDepth, designValue }: FitChartProps) {
+  const points: { name: string; x: number; y: number }[] = [];
+  for (const row of rows) {
+    if (row.kind !== 'fit' || !row.fit.result.ok || row.fit.rainMm === null) continue;
+    points.push({ name: row.event.name, x: showDepth(row.fit.rainMm), y: showValue(row.fit.result.value) });
+  }
+  const design = designValue === null ? null : showValue(designValue);
+  const xs = points.map((p) => p.x);
+  const ys = points.map((p) => p.y).concat(design === null ? [] : [design]);
+  const x = scaleLinear().domain([0, Math.max(1, ...xs)]).nice().range([M.left, W - M.right]);
+  const y = scaleLinear().domain([Math.min(0, ...ys), Math.max(1e-9, ...ys)]).nice().range([H - M.bottom, M.top]);
+  const u = unit === '' ? '' : ` ${unit}`;
+  const sorted = [...points].sort((p, q) => p.x - q.x);
+  const first = sorted[0];
+  const last = sorted[sorted.length - 1];
+  const summary =
+    points.length === 0
+      ? `No event has a fitted ${parameterLabel.toLowerCase()} to plot.`
+      : points.length === 1 || !first || !last
+        ? `One event: ${parameterLabel} ${formatValue(points[0]?.y ?? NaN)}${u} at ${formatValue(points[0]?.x ?? NaN)} ${depthUnit} of rain.`
+        : `${points.length} events, from ${formatValue(first.x)} to ${formatValue(last.x)} ${depthUnit} of rain. ` +
+          `${parameterLabel} is ${formatValue(first.y)}${u} for the smallest storm and ${formatValue(last.y)}${u} for the largest; ` +
+          `${points.length > 1 ? `it ranges from ${formatValue(Math.min(...points.map((p) => p.y)))} to ${formatValue(Math.max(...points.map((p) => p.y)))}${u}` : ''}` +
+          (design === null ? '.' : `; the design value ${formatValue(design)}${u} is dashed.`);
+  return (
+    <figure className="fit-chart" aria-labelledby="fit-chart-caption">
+      <svg viewBox={`0 0 ${W} ${H}`} width="100%" role="img" aria-label={summary} className="fit-chart__svg">
+        {x.ticks(5).map((t) => (
+          <g key={`x${t}`} transform={`translate(${x(t)},0)`}>
+            <line className="axes__grid" y1={M.top} y2={H - M.bottom} />
+            <text className="axes__label" y={H - M.bottom + 16} textAnchor="middle">
+              {formatValue(t)}
+            </text>
+          </g>
+        ))}
+        {y.ticks(5).map((t) => (
+          <g key={`y${t}`} transform={`translate(0,${y(t)})`}>
+            <line className="axes__grid" x1={M.left} x2={W - M.right} />
+            <text className="axes__label" x={M.left - 6} dy="0.32em" textAnchor="end">
+              {formatValue(t)}
+            </text>
+          </g>
+        ))}
+        <line className="axes__line" x1={M.left} x2={W - M.right} y1={H - M.bottom} y2={H - M.bottom} />
+        <line className="axes__line" x1={M.left} x2={M.left} y1={M.top} y2={H - M.bottom} />
+        <text className="axes__title" x={(M.left + W - M.right) / 2} y={H - 6} textAnchor="middle">
+          Storm rainfall ({depthUnit})
+        </text>
+        <text className="axes__title" transform={`translate(14,${(M.top + H - M.bottom) / 2}) rotate(-90)`} textAnchor="middle">
+          {parameterLabel}
+          {u === '' ? '' : ` (${unit})`}
+        </text>
+        {design === null ? null : (
+          <line className="fit-chart__design" x1={M.left} x2={W - M.right} y1={y(design)} y2={y(design)} />
+        )}
+        {points.map((p) => (
+          <circle key={p.name + p.x} className="fit-chart__point" cx={x(p.x)} cy={y(p.y)} r={5}>
+            <title>{`${p.name}: ${formatValue(p.y)}${u} at ${formatValue(p.x)} ${depthUnit}`}</title>
+          </circle>
+        ))}
+      </svg>
+      <figcaption id="fit-chart-caption">{summary}</figcaption>
+    </figure>
+  );
+}
