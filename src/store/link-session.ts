@@ -29,7 +29,13 @@ export type LinkState =
       /** Why the last "keep" did not go through (the shared scenario stays on screen, unsaved). */
       readonly problem?: string;
     }
-  | { readonly kind: 'refused'; readonly problems: readonly Problem[]; readonly ownName: string }
+  | {
+      readonly kind: 'refused';
+      readonly problems: readonly Problem[];
+      /** The scenario on screen, and whether the browser holds a saved one. */
+      readonly ownName: string;
+      readonly ownSaved: boolean;
+    }
   | { readonly kind: 'kept'; readonly message: string }
   | { readonly kind: 'back'; readonly message: string };
 
@@ -106,7 +112,10 @@ export function createLinkSession(options: LinkSessionOptions): LinkSession {
         state.setState({ ...current, problem: `The new link could not be opened: ${decoded.problems.map((p) => p.message).join(' ')}` }, true);
         return;
       }
-      state.setState({ kind: 'refused', problems: decoded.problems, ownName: store.getState().scenario.name }, true);
+      state.setState(
+        { kind: 'refused', problems: decoded.problems, ownName: store.getState().scenario.name, ownSaved: storageHolds() },
+        true,
+      );
       return;
     }
     if (current.kind !== 'shared') {

@@ -10,6 +10,7 @@ import Papa from 'papaparse';
 import { createServer } from 'vite';
 
 const ROOT = resolve(import.meta.dirname, '../..');
+const AXE = resolve(ROOT, 'node_modules/axe-core/axe.min.js');
 const RESULTS = ['Rainfall depth', 'Loss depth', 'Excess depth', 'Runoff volume', 'Runoff fraction', 'Peak excess intensity'];
 
 function check(condition, message) {
@@ -248,6 +249,53 @@ export const tests = [
       const pdf = await page.pdf({ format: 'A4', printBackground: true });
       const pages = (pdf.toString('latin1').match(/\/Type\s*\/Page(?![s\w])/g) ?? []).length;
       check(pages === 1, `the report prints on ${pages} pages`);
+    },
+  },
+  {
+    name: 'axe-core finds no accessibility violations in the scenario bar, saved list, messages, link notices and comparison',
+    async run({ browser, baseUrl, newPage }) {
+      // Checked where this spec's screens are: the scenario bar (with the saved list and messages), the link notice, the comparison.
+      const axe = async (page) => {
+        await page.addScriptTag({ path: AXE });
+        return page.evaluate(async () => {
+          const include = ['.scenario-bar', '.link-notice', '.compare'].filter((sel) => document.querySelector(sel)).map((sel) => [sel]);
+          const result = await window.axe.run({ include });
+          return result.violations.map((v) => `${v.id}: ${v.help} (${v.nodes.map((n) => n.target.join(' ')).join(', ')})`);
+        });
+      };
+      const page = await newPage();
+      await page.goto(baseUrl);
+      await page.getByRole('button', { name: 'Pin to compare' }).click();
+      await page.getByRole('radio', { name: 'US customary' }).check();
+      await page.getByRole('button', { name: 'Pin to compare' }).click();
+      await page.getByRole('button', { name: 'Saved scenarios' }).click();
+      await page.getByRole('button', { name: 'Save current scenario to list' }).click();
+      await page.getByRole('button', { name: 'Duplicate Demo: Fenmoor Brook storm (invented)' }).click();
+      await page.getByRole('button', { name: 'Delete Demo: Fenmoor Brook storm (invented) (copy)' }).click();
+      await page.getByRole('button', { name: 'Rename Demo: Fenmoor Brook storm (invented)' }).click();
+      const first = await axe(page);
+      check(first.length === 0, first.join('\n'));
+
+      const fresh = await browser.newContext({ viewport: { width: 1400, height: 900 } });
+      try {
+        const other = await fresh.newPage();
+        await other.goto(`${baseUrl}#rc1.AAAAAAAAAAAA`);
+        await other.getByRole('alert').filter({ hasText: 'The shared link could not be opened.' }).waitFor();
+        const refused = await axe(other);
+        check(refused.length === 0, refused.join('\n'));
+        const { scenario, close } = await loadModules();
+        try {
+          const link = scenario.encodeScenarioLink({ ...scenario.DEMO_SCENARIO, name: 'Sent by a colleague (invented)' });
+          await other.goto(`${baseUrl}#${link}`);
+          await other.getByRole('region', { name: 'Shared scenario: “Sent by a colleague (invented)”' }).waitFor();
+          const shared = await axe(other);
+          check(shared.length === 0, shared.join('\n'));
+        } finally {
+          await close();
+        }
+      } finally {
+        await fresh.close();
+      }
     },
   },
 ];

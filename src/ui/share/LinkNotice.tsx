@@ -53,8 +53,8 @@ export function LinkNotice() {
       <div className="link-notice link-notice--problem" role="alert">
         <div className="link-notice__text">
           <p>
-            <strong>The shared link could not be opened.</strong> Nothing was changed: {quoted(state.ownName)} is on screen and your saved
-            scenario is as it was.
+            <strong>The shared link could not be opened.</strong> Nothing was changed: {quoted(state.ownName)} is on screen
+            {state.ownSaved ? ' and your saved scenario is as it was.' : '.'}
           </p>
           <ProblemList problems={state.problems} label="What is wrong with the link" />
         </div>

@@ -106,6 +106,12 @@ describe('opening a share link', () => {
     expect(JSON.parse(storage.data.get(STORAGE_KEY) as string).name).toBe('Still mine');
   });
 
+  it('in a browser with nothing saved, a bad link says only that nothing changed', () => {
+    renderTools({ storage: memoryStorage(), fragment: '#rc1.AAAAAAAAAAAA' });
+    expect(screen.getByRole('alert')).toHaveTextContent('Nothing was changed: “Four bars” is on screen.');
+    expect(screen.getByRole('alert')).not.toHaveTextContent('your saved scenario');
+  });
+
   it('a link pasted into the address of an open page is opened the same way', async () => {
     const { storage, text } = usedBrowser();
     const { link, scenario, user } = renderTools({ storage });
