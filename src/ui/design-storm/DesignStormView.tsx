@@ -48,7 +48,12 @@ function Text({
     <div className="design-form__field">
       <label htmlFor={id}>
         {FIELD_LABELS[field]}
-        {hint ? <span className="design-form__unit"> {hint}</span> : null}
+        {hint ? (
+          <>
+            {' '}
+            <span className="design-form__unit">{hint}</span>
+          </>
+        ) : null}
       </label>
       <input id={id} type="text" inputMode="decimal" value={form[field] as string} onChange={(e) => set(field, e.currentTarget.value)} {...wrong} />
     </div>
