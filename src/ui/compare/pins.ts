@@ -112,8 +112,24 @@ export function createPinBoard(storage: StorageLike | null, options: PinBoardOpt
   let canWrite = storage !== null;
   const state = createStore<PinState>()(() => ({ pins: [], problems: [] }));
 
-  /** Reads storage; damaged data is set aside first. Returns the problems found. */
+  /**
+   * Reads storage into `memory`; pins made while the browser's copy could
+   * not be written join the list once it can be. Returns the problems found.
+   */
   function load(): Problem[] {
+    const unsaved = canWrite ? [] : memory.pins;
+    const problems = readStorage();
+    if (unsaved.length === 0 || !canWrite) return problems;
+    let nextId = memory.nextId;
+    const pins = [...memory.pins];
+    for (const p of unsaved) if (pins.length < MAX_PINS) pins.push({ ...p, id: `p${nextId++}` });
+    memory = { nextId, pins };
+    const failed = write();
+    return failed ? [...problems, failed] : problems;
+  }
+
+  /** Reads storage; damaged data is set aside first. */
+  function readStorage(): Problem[] {
     if (!storage) return [];
     let text: string | null;
     try {

@@ -128,6 +128,17 @@ describe('opening a share link', () => {
     expect(scenario().name).toBe('My own work');
   });
 
+  it('an edit not yet saved when a link arrives is saved first, and is what Back returns to', async () => {
+    const { storage } = usedBrowser();
+    const { link, actions, scenario, user } = renderTools({ storage });
+    act(() => actions.setName('Edited just now'));
+    // The save is still waiting for quiet time when the link comes in.
+    act(() => link.open(`#${encodeScenarioLink(SHARED)}`));
+    expect(JSON.parse(storage.data.get(STORAGE_KEY) as string).name).toBe('Edited just now');
+    await user.click(screen.getByRole('button', { name: 'Back to my scenario' }));
+    expect(scenario().name).toBe('Edited just now');
+  });
+
   it('a link to what the browser already holds asks nothing', () => {
     const { storage, own } = usedBrowser();
     const { scenario } = renderTools({ storage, fragment: `#${encodeScenarioLink(own)}` });
