@@ -3,6 +3,7 @@ import { makeShareLink } from '../../scenario';
 import { useWorkbenchStore } from '../../store';
 import { ProblemList, useBarMessage } from './bar-message';
 import { useServices } from './services';
+import { LongLinkOffer, PRACTICAL_LINK_CHARS } from '../events/LongLinkOffer';
 
 /** Mail and chat programs are known to cut or wrap links past about this length. */
 export const LONG_LINK_CHARS = 2000;
@@ -45,11 +46,12 @@ function ManualCopy({ url }: { url: string }) {
  */
 export function CopyLink() {
   const store = useWorkbenchStore();
-  const { clipboard, pageAddress } = useServices();
+  const { clipboard, pageAddress, saveFile } = useServices();
   const show = useBarMessage();
 
-  const copy = async (): Promise<void> => {
-    const made = makeShareLink(store.getState().scenario);
+  const copy = async (anyway = false): Promise<void> => {
+    const scenario = store.getState().scenario;
+    const made = makeShareLink(scenario);
     if (!made.ok) {
       show({
         tone: 'problem',
@@ -59,6 +61,15 @@ export function CopyLink() {
       return;
     }
     const url = `${pageAddress()}#${made.fragment}`;
+    // A link too long to send (an event set of long storms): offer the file instead, and say why.
+    if (url.length > PRACTICAL_LINK_CHARS && !anyway) {
+      show({
+        tone: 'problem',
+        title: 'This scenario is too large for a practical link.',
+        body: <LongLinkOffer chars={url.length} scenario={scenario} saveFile={saveFile} onCopyAnyway={() => void copy(true)} />,
+      });
+      return;
+    }
     const length = <p>{linkLengthText(url.length)}</p>;
     let refused: string | null = null;
     if (!clipboard) refused = 'this browser gives the page no clipboard';
