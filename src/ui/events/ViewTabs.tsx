@@ -26,7 +26,9 @@ export function ViewTabs({ views }: { views: readonly View[] }) {
   };
   return (
     <>
-      <div role="tablist" aria-label="Views" className="view-tabs">
+      {/* In a landmark of its own, so nothing on the page sits outside one. */}
+      <nav aria-label="Views" className="view-tabs">
+        <div role="tablist" aria-label="Views" className="view-tabs__list">
         {views.map((view, k) => (
           <button
             key={view.id}
@@ -46,7 +48,8 @@ export function ViewTabs({ views }: { views: readonly View[] }) {
             {view.label}
           </button>
         ))}
-      </div>
+        </div>
+      </nav>
       {views.map((view) => (
         <div
           key={view.id}
