@@ -211,6 +211,9 @@ export const tests = [
             loaded,
             classes: doc.querySelectorAll('[class]').length,
             text: root.textContent,
+            legend: Array.from(doc.querySelectorAll('rect'))
+              .map((r) => /fill:\s*(rgb\([^)]*\))/.exec(r.getAttribute('style') ?? '')?.[1])
+              .filter(Boolean),
             width: Number(root.getAttribute('width')),
             height: Number(root.getAttribute('height')),
           };
@@ -221,6 +224,7 @@ export const tests = [
         // The workbench's excess blue and loss tan, written on the shapes.
         check(verdict.fills.includes('rgb(45, 95, 139)') && verdict.fills.includes('rgb(216, 201, 166)'), `fills: ${verdict.fills}`);
         check(verdict.text.includes('Estimates are for screening'), 'the SVG has no caution');
+        check(verdict.legend.includes('rgb(45, 95, 139)') && verdict.text.includes('Rainfall excess'), `no legend in the page’s colours: ${verdict.legend}`);
 
         const png = await download(page, 'Export PNG');
         check(png.bytes.subarray(0, 8).equals(Buffer.from([0x89, 0x50, 0x4e, 0x47, 0x0d, 0x0a, 0x1a, 0x0a])), 'not a PNG');

@@ -1,4 +1,4 @@
-import { methodSpec } from '../../core';
+import { methodSpec, type LossMethod } from '../../core';
 import { CAUTION_TEXT, scenarioFileName } from '../../scenario';
 import type { Scenario } from '../../scenario/types';
 import { useWorkbenchStore } from '../../store';
@@ -6,7 +6,9 @@ import { useBarMessage } from '../share/bar-message';
 import { useServices } from '../share/services';
 import { barTableCsv, exportFileName, methodParametersText } from './bar-table-csv';
 import { svgToPng } from './chart-png';
-import { standaloneSvg } from './chart-svg';
+import { CAPACITY_CURVES } from '../chart/capacity';
+import { LINE_PARAM, LOSS_PARTS } from '../chart/line-params';
+import { standaloneSvg, type LegendEntry } from './chart-svg';
 
 /** The workbench's live chart: the hyetograph's SVG (src/ui/chart/Hyetograph.tsx). */
 export function liveChartSvg(doc: Document = document): SVGSVGElement | null {
@@ -16,6 +18,21 @@ export function liveChartSvg(doc: Document = document): SVGSVGElement | null {
 /** The line under an exported chart: scenario, method and parameters. */
 export function chartHeading(scenario: Scenario, method: Scenario['method']): string {
   return `${scenario.name} — ${methodSpec(method.kind).label}; ${methodParametersText(method, scenario.units)}`;
+}
+
+/** The chart's legend for a file: the layers the hyetograph draws (data-layer marks them), in the method's words. */
+export function chartLegend(method: LossMethod): LegendEntry[] {
+  const lineKey = LINE_PARAM[method.kind];
+  const line = lineKey ? methodSpec(method.kind).params.find((p) => p.key === lineKey)?.label : undefined;
+  const part = LOSS_PARTS[method.kind]?.label;
+  const capacity = CAPACITY_CURVES[method.kind]?.label;
+  return [
+    { selector: '[data-layer="rain"]', label: 'Rainfall excess', kind: 'fill' },
+    { selector: '[data-layer="loss"]', label: 'Loss', kind: 'fill' },
+    ...(part ? [{ selector: '[data-layer="loss-part"]', label: part, kind: 'fill' as const }] : []),
+    ...(capacity ? [{ selector: '[data-layer="capacity"]', label: capacity, kind: 'line' as const }] : []),
+    ...(line ? [{ selector: '.loss-line__stroke', label: line, kind: 'line' as const }] : []),
+  ];
 }
 
 const why = (error: unknown): string => (error instanceof Error ? error.message : String(error));
@@ -57,7 +74,10 @@ export function ExportButtons() {
     const live = liveChartSvg();
     if (!live) throw new Error('the chart is not on screen');
     const { scenario, results, base } = current();
-    return { svg: standaloneSvg(live, { heading: chartHeading(scenario, results.method), caution: CAUTION_TEXT }), base };
+    return {
+      svg: standaloneSvg(live, { heading: chartHeading(scenario, results.method), caution: CAUTION_TEXT, legend: chartLegend(results.method) }),
+      base,
+    };
   };
 
   const exportSvg = (): void => {

@@ -2,7 +2,7 @@ import { barEdgesH, methodSpec, type LossMethod, type LossResult, type UnitSyste
 import { CAUTION_TEXT } from '../../scenario';
 import type { Scenario } from '../../scenario/types';
 import { wallClockMs } from '../chart/clock';
-import { formatPercent, formatValue } from '../format';
+import { formatValue } from '../format';
 import { displayUnit, paramToDisplay, paramUnitText, toDisplay, unitText } from '../units';
 
 /**
@@ -26,6 +26,18 @@ export interface BarTableInput {
   readonly volumeM3: number | null;
 }
 
+/**
+ * Numbers in notes: four significant figures like the screen, but never a
+ * thousands comma, which a spreadsheet would read as a cell boundary.
+ */
+const sig4 = new Intl.NumberFormat('en-US', { maximumSignificantDigits: 4, useGrouping: false });
+const whole = new Intl.NumberFormat('en-US', { maximumFractionDigits: 0, useGrouping: false });
+function noteNumber(x: number): string {
+  if (!Number.isFinite(x)) return '—';
+  if (Object.is(x, -0)) return '0';
+  return Math.abs(x) >= 1000 ? whole.format(x) : sig4.format(x);
+}
+
 /** A note line: "#", then the text on one line (line breaks in names would end the note early). */
 const note = (text: string): string => `# ${text.replace(/[\r\n]+/g, ' ')}`;
 
@@ -43,7 +55,7 @@ function clockText(ms: number): string {
 }
 
 /** "Loss rate φ = 8 mm/h; …" for the method's numeric parameters and choices, in display units. */
-export function methodParametersText(method: LossMethod, units: UnitSystem): string {
+export function methodParametersText(method: LossMethod, units: UnitSystem, format: (x: number) => string = formatValue): string {
   const spec = methodSpec(method.kind);
   const values = method as unknown as Record<string, unknown>;
   const parts: string[] = [];
@@ -51,7 +63,7 @@ export function methodParametersText(method: LossMethod, units: UnitSystem): str
     const v = values[p.key];
     if (typeof v !== 'number') continue;
     const unit = paramUnitText(p.unit, units);
-    parts.push(`${p.label} = ${formatValue(paramToDisplay(p.unit, v, units))}${unit ? ` ${unit}` : ''}`);
+    parts.push(`${p.label} = ${format(paramToDisplay(p.unit, v, units))}${unit ? ` ${unit}` : ''}`);
   }
   for (const c of spec.choices ?? []) {
     const chosen = c.choices.find((o) => o.value === values[c.key]);
@@ -85,27 +97,27 @@ function field(text: string): string {
 export function barTableCsv({ scenario, method, result, volumeM3 }: BarTableInput): string {
   const { storm, units } = scenario;
   const depthUnit = unitText(displayUnit('depth', units));
-  const show = (mm: number): string => `${formatValue(toDisplay('depth', mm, units))} ${depthUnit}`;
+  const show = (mm: number): string => `${noteNumber(toDisplay('depth', mm, units))} ${depthUnit}`;
   const startMs = storm.startIso === undefined ? null : wallClockMs(storm.startIso);
 
   const lines: string[] = [
     note(`Raincut bar table: ${scenario.name}`),
     note(`Caution: ${CAUTION_TEXT}`),
-    note(`Loss method: ${methodSpec(method.kind).label}; ${methodParametersText(method, units)}`),
+    note(`Loss method: ${methodSpec(method.kind).label}; ${methodParametersText(method, units, noteNumber)}`),
   ];
   if (scenario.catchment.name !== '' || scenario.catchment.areaM2 > 0) {
     const area = scenario.catchment.areaM2 > 0
-      ? `${formatValue(toDisplay('area', scenario.catchment.areaM2, units))} ${unitText(displayUnit('area', units))}`
+      ? `${noteNumber(toDisplay('area', scenario.catchment.areaM2, units))} ${unitText(displayUnit('area', units))}`
       : 'area not given';
-    lines.push(note(`Catchment: ${scenario.catchment.name === '' ? 'unnamed' : scenario.catchment.name}, ${area}`));
+    lines.push(note(`Catchment: ${scenario.catchment.name === '' ? 'unnamed' : scenario.catchment.name}; ${area}`));
   }
   if (storm.startIso !== undefined) lines.push(note(`Storm start: ${storm.startIso}`));
   const volume =
-    volumeM3 === null ? '' : `; runoff volume ${formatValue(toDisplay('volume', volumeM3, units))} ${unitText(displayUnit('volume', units))}`;
+    volumeM3 === null ? '' : `; runoff volume ${noteNumber(toDisplay('volume', volumeM3, units))} ${unitText(displayUnit('volume', units))}`;
   lines.push(
     note(
       `Totals: rainfall ${show(result.rainMm)}; loss ${show(result.totalLossMm)}; rainfall excess ${show(result.totalExcessMm)}` +
-        `; runoff fraction ${formatPercent(result.runoffFraction)}${volume}`,
+        `; runoff fraction ${noteNumber(result.runoffFraction * 100)} %${volume}`,
     ),
     note('Numbers in the rows are unrounded; each column heading gives its unit.'),
     barTableHeader(scenario).map(field).join(','),

@@ -69,11 +69,42 @@ export function wrapText(text: string, max: number): string[] {
   return lines;
 }
 
+/** A legend entry: drawn only when `selector` finds a shape in the live chart, in that shape's colour. */
+export interface LegendEntry {
+  readonly selector: string;
+  readonly label: string;
+  /** 'fill': a swatch in the shape's fill; 'line': a stroke in the shape's stroke and dashes. */
+  readonly kind: 'fill' | 'line';
+}
+
 export interface StandaloneOptions {
   /** First line under the chart (scenario name, method). */
   readonly heading: string;
   /** The caution text; always printed under the chart. */
   readonly caution: string;
+  /** What the colours are (the page's legend is HTML beside the chart, so the file needs its own). */
+  readonly legend?: readonly LegendEntry[];
+}
+
+interface LegendItem {
+  readonly label: string;
+  readonly kind: 'fill' | 'line';
+  readonly paint: string;
+  readonly dash: string | null;
+}
+
+/** The legend entries whose shapes are in the live chart, with those shapes' computed colours. */
+function legendItems(live: SVGSVGElement, entries: readonly LegendEntry[], view: Window): LegendItem[] {
+  const items: LegendItem[] = [];
+  for (const entry of entries) {
+    const shape = live.querySelector(entry.selector);
+    if (!shape) continue;
+    const style = view.getComputedStyle(shape);
+    const paint = style.getPropertyValue(entry.kind === 'fill' ? 'fill' : 'stroke').trim().replace(/url\((["']?)[^"')]*?(#[^"')]+)\1\)/g, 'url($2)');
+    const dash = style.getPropertyValue('stroke-dasharray').trim();
+    items.push({ label: entry.label, kind: entry.kind, paint: paint || '#000', dash: dash === '' || dash === 'none' ? null : dash });
+  }
+  return items;
 }
 
 export interface StandaloneSvg {
@@ -101,7 +132,8 @@ export function standaloneSvg(live: SVGSVGElement, options: StandaloneOptions): 
   const perLine = Math.max(40, Math.floor((width - 24) / (FOOT_FONT_PX * 0.56)));
   const headLines = wrapText(options.heading, perLine);
   const cautionLines = wrapText(`Caution: ${options.caution}`, perLine);
-  const footHeight = 12 + (headLines.length + cautionLines.length) * FOOT_LINE_PX;
+  const legend = legendItems(live, options.legend ?? [], view);
+  const footHeight = 12 + (headLines.length + cautionLines.length + (legend.length > 0 ? 1 : 0)) * FOOT_LINE_PX;
   const height = chartHeight + footHeight;
 
   const root = doc.createElementNS(SVG_NS, 'svg');
@@ -142,6 +174,34 @@ export function standaloneSvg(live: SVGSVGElement, options: StandaloneOptions): 
     t.textContent = text;
     foot.appendChild(t);
   };
+  if (legend.length > 0) {
+    y += FOOT_LINE_PX;
+    let x = 12;
+    for (const item of legend) {
+      const mark = doc.createElementNS(SVG_NS, item.kind === 'fill' ? 'rect' : 'line');
+      if (item.kind === 'fill') {
+        mark.setAttribute('x', String(x));
+        mark.setAttribute('y', String(y - 9));
+        mark.setAttribute('width', '14');
+        mark.setAttribute('height', '10');
+        mark.setAttribute('style', `fill:${item.paint}`);
+      } else {
+        mark.setAttribute('x1', String(x));
+        mark.setAttribute('x2', String(x + 18));
+        mark.setAttribute('y1', String(y - 4));
+        mark.setAttribute('y2', String(y - 4));
+        mark.setAttribute('style', `stroke:${item.paint};stroke-width:2.5${item.dash ? `;stroke-dasharray:${item.dash}` : ''}`);
+      }
+      foot.appendChild(mark);
+      const gap = item.kind === 'fill' ? 19 : 24;
+      const t = doc.createElementNS(SVG_NS, 'text');
+      t.setAttribute('x', String(x + gap));
+      t.setAttribute('y', String(y));
+      t.textContent = item.label;
+      foot.appendChild(t);
+      x += gap + item.label.length * FOOT_FONT_PX * 0.56 + 18;
+    }
+  }
   headLines.forEach((l) => line(l, '600'));
   cautionLines.forEach((l) => line(l, '400'));
   root.appendChild(foot);

@@ -2,7 +2,7 @@
 import { act, screen } from '@testing-library/react';
 import Papa from 'papaparse';
 import { describe, expect, it } from 'vitest';
-import { barEdgesH, computeLosses, convertDepth } from '../../../src/core';
+import { barEdgesH, computeLosses, convertDepth, runoffVolumeM3 } from '../../../src/core';
 import { CAUTION_TEXT } from '../../../src/scenario';
 import type { Scenario } from '../../../src/scenario/types';
 import { barTableCsv } from '../../../src/ui/export';
@@ -118,6 +118,20 @@ describe('bar table CSV', () => {
     const text = barTableCsv({ scenario: odd, method: odd.method, result, volumeM3: null });
     expect(text.split('\r\n')[0]).toBe('\ufeff# Raincut bar table: Pond 3, "east" arm second try');
     expect(parse(text).data.map((r) => Number(r['Rainfall depth (mm)']))).toEqual(odd.storm.depthsMm);
+  });
+
+  it('note lines carry no thousands commas, so a spreadsheet keeps each number in one cell', () => {
+    const big: Scenario = { ...FOUR_BARS, catchment: { name: 'Wide plain (invented)', areaM2: 2.5e9 } };
+    const result = computeLosses(big.storm, big.method);
+    const volume = runoffVolumeM3(result.totalExcessMm, big.catchment.areaM2);
+    const notes = barTableCsv({ scenario: big, method: big.method, result, volumeM3: volume })
+      .split('\r\n')
+      .filter((l) => l.replace(/^\ufeff/, '').startsWith('#'));
+    expect(notes).toContain('# Catchment: Wide plain (invented); 250000 ha');
+    expect(notes.find((l) => l.startsWith('# Totals:'))).toBe(
+      `# Totals: rainfall 20 mm; loss 12 mm; rainfall excess 8 mm; runoff fraction 40 %; runoff volume ${Math.round(volume)} m³`,
+    );
+    for (const line of notes.slice(2)) expect(line).not.toMatch(/\d,\d/);
   });
 
   it('when the losses cannot be worked out, nothing is exported and the core’s reason is shown', async () => {

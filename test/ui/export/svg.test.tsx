@@ -59,6 +59,9 @@ describe('chart SVG', () => {
     expect(doc.getElementsByTagName('parsererror')).toHaveLength(0);
     expect(doc.getElementById('part-hatch')?.localName).toBe('pattern');
     expect(doc.querySelectorAll('pattern line')).toHaveLength(1);
+    // The file has its own legend, in the method's words.
+    const texts = Array.from(doc.querySelectorAll('text')).map((t) => t.textContent);
+    for (const label of ['Rainfall excess', 'Loss', 'Initial loss', 'Continuing loss rate']) expect(texts).toContain(label);
     // The live chart's line group (three lines and its tag) is copied as drawn.
     expect(doc.querySelectorAll('line').length).toBeGreaterThan(3);
   });
