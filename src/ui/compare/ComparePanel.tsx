@@ -95,7 +95,7 @@ function PinnedChart({ pin, index, frame, units, derived }: PinnedChartProps) {
           Unpin
         </button>
       </div>
-      <p className="compare__method">
+      <p className="compare__method" title={`${methodSpec(method.kind).label}: ${methodParametersText(method, units)}`}>
         {methodSpec(method.kind).label}: {methodParametersText(method, units)}
       </p>
       <StaticChart
@@ -192,7 +192,8 @@ export function ComparePanel() {
                   <th scope="col">Total</th>
                   {pins.map((pin, i) => (
                     <th key={pin.id} scope="col">
-                      <span className="compare__index">{i + 1}</span> {pin.scenario.name}
+                      <span className="compare__index">{i + 1}</span> {pin.scenario.name}{' '}
+                      <span className="compare__col-method">{methodSpec(pin.scenario.method.kind).label}</span>
                     </th>
                   ))}
                 </tr>

@@ -66,7 +66,7 @@ describe('comparing pinned scenarios', () => {
       actions.setName('Changed after pinning');
     });
     expect(text(row('Rainfall depth')[0])).toBe(mm(20));
-    expect(within(table()).getByRole('columnheader', { name: '1 Four bars' })).toBeInTheDocument();
+    expect(within(table()).getByRole('columnheader', { name: '1 Four bars Constant loss rate (φ-index)' })).toBeInTheDocument();
   });
 
   it('draws the small charts on one scale: the same time and intensity axes for every pin', async () => {
@@ -115,7 +115,7 @@ describe('comparing pinned scenarios', () => {
     await pin(first.user);
     cleanup();
     const again = renderTools({ storage, fallback: { ...FOUR_BARS, units: 'si' } as Scenario });
-    expect(within(table()).getByRole('columnheader', { name: `1 ${SHARED.name}` })).toBeInTheDocument();
+    expect(within(table()).getByRole('columnheader', { name: `1 ${SHARED.name} Horton infiltration` })).toBeInTheDocument();
     // The pin was made in US units; it is shown in the screen's SI units.
     expect(text(row('Rainfall depth')[0])).toBe(mm(30.8));
     void again;
