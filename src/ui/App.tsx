@@ -39,7 +39,7 @@ function Workbench({ rainfallTools }: { rainfallTools?: ReactNode }) {
             id: 'workbench',
             label: 'Workbench',
             content: (
-            <main className="bench">
+            <div className="bench">
               <StorageNoticeBar />
               <LinkNotice />
               <div className="bench__main">
@@ -60,7 +60,7 @@ function Workbench({ rainfallTools }: { rainfallTools?: ReactNode }) {
                 <MatchingPanel />
               </div>
               <ComparePanel />
-            </main>
+            </div>
             ),
           },
           { id: 'events', label: 'Event set', content: <EventsView /> },

@@ -58,7 +58,7 @@ describe('guessFlowImport on realistic pastes', () => {
     const settings = guessFlowSettings(text);
     expect(settings).toMatchObject({ unit: 'ft3/s', dateOrder: 'month-day', separator: 'comma' });
     const record = recordOf(text);
-    const ft3 = 0.3048 * 0.3048 * 0.3048;
+    const ft3 = 0.028316846592; // 0.3048³ m³ exactly (the double nearest it)
     expect(DISCHARGE_UNITS['ft3/s']).toBe(ft3);
     expect(record.dischargeM3s).toEqual([12 * ft3, 14 * ft3, 13 * ft3]);
     expectAllClose(record.timesH, [0, 1, 2]);

@@ -50,6 +50,8 @@ export function ViewTabs({ views }: { views: readonly View[] }) {
         ))}
         </div>
       </nav>
+      {/* The views share the page's one main landmark, so every view's content is inside it. */}
+      <main className="view-tabs__views">
       {views.map((view) => (
         <div
           key={view.id}
@@ -62,6 +64,7 @@ export function ViewTabs({ views }: { views: readonly View[] }) {
           {view.content}
         </div>
       ))}
+      </main>
     </>
   );
 }
