@@ -72,5 +72,7 @@ export function scratchBuffers(n: number): LossBuffers {
 
 /** Total excess only, mm (validated input): the quantity calibration matches. */
 export function totalExcessMm(storm: Storm, method: LossMethod): number {
+  const fast = (methodSpec(method.kind) as MethodSpec).totalExcess;
+  if (fast) return fast(storm.durationsH, storm.depthsMm, method as never);
   return computeLossesUnchecked(storm, method, scratchBuffers(storm.depthsMm.length)).totalExcessMm;
 }

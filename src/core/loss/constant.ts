@@ -1,4 +1,4 @@
-import type { ComputeFn, MethodSpec } from './types';
+import type { ComputeFn, MethodSpec, TotalExcessFn } from './types';
 import { peakRate } from './search-bounds';
 
 /**
@@ -20,6 +20,17 @@ export const computeConstant: ComputeFn<'constant'> = (durationsH, depthsMm, met
   }
 };
 
+/** Σ max(0, P − φΔt), the same expression as computeConstant, summed only. */
+export const totalExcessConstant: TotalExcessFn<'constant'> = (durationsH, depthsMm, method) => {
+  const phi = method.rateMmH;
+  let total = 0;
+  for (let k = 0; k < depthsMm.length; k++) {
+    const x = (depthsMm[k] as number) - phi * (durationsH[k] as number);
+    total += 0.5 * (x + Math.abs(x));
+  }
+  return total;
+};
+
 export const constantSpec: MethodSpec<'constant'> = {
   kind: 'constant',
   label: 'Constant loss rate (φ-index)',
@@ -39,4 +50,5 @@ export const constantSpec: MethodSpec<'constant'> = {
   ],
   defaults: { kind: 'constant', rateMmH: 5 },
   compute: computeConstant,
+  totalExcess: totalExcessConstant,
 };

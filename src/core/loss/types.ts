@@ -112,6 +112,13 @@ export type ComputeFn<K extends LossKind> = (
   excessOut: Float64Array,
 ) => void;
 
+/** Total excess of a clean storm, mm, with no per-bar output. */
+export type TotalExcessFn<K extends LossKind> = (
+  durationsH: ArrayLike<number>,
+  depthsMm: ArrayLike<number>,
+  method: MethodOf<K>,
+) => number;
+
 /** Everything the core and the UI need to know about one loss method. */
 export interface MethodSpec<K extends LossKind = LossKind> {
   readonly kind: K;
@@ -125,4 +132,10 @@ export interface MethodSpec<K extends LossKind = LossKind> {
   readonly compute: ComputeFn<K>;
   /** Cross-parameter checks beyond each parameter's own range (throws InputError). */
   readonly validateExtra?: (method: MethodOf<K>) => void;
+  /**
+   * Optional: total excess without writing per-bar arrays, for calibration's
+   * many evaluations. Must equal the sum of `compute`'s excess (a property
+   * test in test/core/loss/total-excess.test.ts holds every method to it).
+   */
+  readonly totalExcess?: TotalExcessFn<K>;
 }
