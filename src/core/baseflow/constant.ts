@@ -1,4 +1,5 @@
 import { resolveRiseIndex } from './peak';
+import { START_OF_RISE_PARAM } from './rise-param';
 import type { BaseflowMethodSpec, SeparateFn } from './types';
 
 /**
@@ -36,17 +37,7 @@ export const constantSpec: BaseflowMethodSpec<'constant'> = {
     'Baseflow holds at the discharge of the start of rise until the recession falls back to it; the flow above that level is direct runoff.',
   source: 'Graphical separation, e.g. Chow, Maidment & Mays (1988) Applied Hydrology, §5.1.',
   params: [
-    {
-      key: 'riseIndex',
-      label: 'Start of rise',
-      unit: 'sample',
-      min: 0,
-      max: Infinity,
-      integer: true,
-      optional: { auto: 'the lowest discharge at or before the peak' },
-      step: 1,
-      help: 'Sample (0-based) where the direct runoff begins; leave empty to take the lowest point before the peak.',
-    },
+    { key: 'riseIndex', ...START_OF_RISE_PARAM },
   ],
   defaults: { kind: 'constant' },
   needsArea: () => false,

@@ -2,6 +2,7 @@ import { InputError } from '../errors';
 import { AREA_UNITS } from '../units';
 import { dischargeAtH } from './hydrograph';
 import { resolveRiseIndex } from './peak';
+import { START_OF_RISE_PARAM } from './rise-param';
 import type { BaseflowMethodSpec, SeparateFn } from './types';
 
 /**
@@ -70,17 +71,7 @@ export const straightLineSpec: BaseflowMethodSpec<'straight-line'> = {
     'Baseflow runs in a straight line from the start of rise to an end point on the recession; the flow above the line is direct runoff.',
   source: 'Linsley, Kohler & Paulhus, Hydrology for Engineers (McGraw-Hill): N = A^0.2 days, A in mi².',
   params: [
-    {
-      key: 'riseIndex',
-      label: 'Start of rise',
-      unit: 'sample',
-      min: 0,
-      max: Infinity,
-      integer: true,
-      optional: { auto: 'the lowest discharge at or before the peak' },
-      step: 1,
-      help: 'Sample (0-based) where the direct runoff begins; leave empty to take the lowest point before the peak.',
-    },
+    { key: 'riseIndex', ...START_OF_RISE_PARAM },
     {
       key: 'endTimeH',
       label: 'End of direct runoff',
