@@ -1,11 +1,10 @@
-import { useEffect, useRef, type KeyboardEvent, type PointerEvent } from 'react';
 import type { UnitSystem } from '../../core';
 import { useActions } from '../../store';
 import { formatValue } from '../format';
+import { useDragHandle } from '../interaction/useDragHandle';
 import { displayUnit, fromDisplay, toDisplay, unitText } from '../units';
 import { fineStep, grabOffsetPx, valueAfterKey, valueAtPointer } from './drag-math';
 import type { ChartFrame } from './frame';
-import { frameThrottle, type FrameThrottle } from './frame-throttle';
 
 export interface LossLineProps {
   readonly frame: ChartFrame;
@@ -20,12 +19,6 @@ export interface LossLineProps {
   readonly locked: boolean;
 }
 
-interface Drag {
-  readonly pointerId: number;
-  readonly grabPx: number;
-  readonly throttle: FrameThrottle<number>;
-}
-
 /**
  * The loss-rate line: a slider drawn across the chart. Drag with the pointer
  * (pointer capture; one store update per frame; the whole drag is one undo
@@ -33,7 +26,6 @@ interface Drag {
  */
 export function LossLine({ frame, paramKey, label, valueMmH, minMmH, system, locked }: LossLineProps) {
   const actions = useActions();
-  const drag = useRef<Drag | null>(null);
   const { plot, y, topMmH, topDisplay } = frame;
   const above = valueMmH > topMmH;
   const yPx = y(Math.min(valueMmH, topMmH));
@@ -42,77 +34,26 @@ export function LossLine({ frame, paramKey, label, valueMmH, minMmH, system, loc
   const valueText = `${formatValue(shown)} ${unit}${above ? ', above the top of the chart' : ''}${locked ? ', kept matched to the observed runoff' : ''}`;
   const step = fineStep(topDisplay);
 
-  // A drag still running when the line goes away (method switched) is finished, not lost.
-  useEffect(
-    () => () => {
-      if (drag.current) {
-        drag.current.throttle.flush();
-        drag.current = null;
-        actions.endGesture();
-      }
+  const handlers = useDragHandle({
+    axis: 'y',
+    gesture: `Drag ${label.toLowerCase()}`,
+    disabled: locked,
+    grabOffsetPx: (px) => grabOffsetPx(y, px, Math.min(valueMmH, topMmH)),
+    valueAt: (px, grabPx) => valueAtPointer(y, px, grabPx, minMmH, topMmH),
+    apply: (v) => actions.setParam(paramKey, v),
+    stepKey: (key) => {
+      const next = valueAfterKey(key, Math.min(shown, topDisplay), {
+        step,
+        coarse: step * 10,
+        min: toDisplay('rate', minMmH, system),
+        max: topDisplay,
+      });
+      if (next === null) return false;
+      const nextMmH = key === 'End' ? topMmH : key === 'Home' ? minMmH : fromDisplay('rate', next, system);
+      actions.setParam(paramKey, nextMmH, { coalesceKey: `line:${paramKey}` });
+      return true;
     },
-    [actions],
-  );
-
-  const pointerPx = (e: PointerEvent<SVGGElement>): number => {
-    const svg = e.currentTarget.ownerSVGElement;
-    return e.clientY - (svg ? svg.getBoundingClientRect().top : 0);
-  };
-
-  const onPointerDown = (e: PointerEvent<SVGGElement>): void => {
-    if (locked || e.button !== 0 || drag.current) return;
-    e.preventDefault();
-    const el = e.currentTarget;
-    el.focus({ preventScroll: true });
-    el.setPointerCapture?.(e.pointerId);
-    actions.beginGesture(`Drag ${label.toLowerCase()}`);
-    drag.current = {
-      pointerId: e.pointerId,
-      grabPx: grabOffsetPx(y, pointerPx(e), Math.min(valueMmH, topMmH)),
-      throttle: frameThrottle((v: number) => actions.setParam(paramKey, v)),
-    };
-  };
-
-  const onPointerMove = (e: PointerEvent<SVGGElement>): void => {
-    const d = drag.current;
-    if (!d || e.pointerId !== d.pointerId) return;
-    d.throttle.push(valueAtPointer(y, pointerPx(e), d.grabPx, minMmH, topMmH));
-  };
-
-  const finish = (e: PointerEvent<SVGGElement>, keep: boolean): void => {
-    const d = drag.current;
-    if (!d || e.pointerId !== d.pointerId) return;
-    drag.current = null;
-    if (keep) {
-      d.throttle.flush();
-      actions.endGesture();
-    } else {
-      d.throttle.cancel();
-      actions.cancelGesture();
-    }
-    if (e.currentTarget.hasPointerCapture?.(e.pointerId)) e.currentTarget.releasePointerCapture(e.pointerId);
-  };
-
-  const onKeyDown = (e: KeyboardEvent<SVGGElement>): void => {
-    if (e.key === 'Escape' && drag.current) {
-      e.preventDefault();
-      drag.current.throttle.cancel();
-      drag.current = null;
-      actions.cancelGesture();
-      return;
-    }
-    if (locked || drag.current) return;
-    const next = valueAfterKey(e.key, Math.min(shown, topDisplay), {
-      step,
-      coarse: step * 10,
-      min: toDisplay('rate', minMmH, system),
-      max: topDisplay,
-    });
-    if (next === null) return;
-    e.preventDefault();
-    const nextMmH = e.key === 'End' ? topMmH : e.key === 'Home' ? minMmH : fromDisplay('rate', next, system);
-    actions.setParam(paramKey, nextMmH, { coalesceKey: `line:${paramKey}` });
-  };
+  });
 
   const labelText = `${label} ${formatValue(shown)} ${unit}${above ? ' ↑' : ''}`;
   const labelWidth = Math.max(90, labelText.length * 7 + 16);
@@ -128,12 +69,7 @@ export function LossLine({ frame, paramKey, label, valueMmH, minMmH, system, loc
       aria-valuenow={shown}
       aria-valuetext={valueText}
       aria-disabled={locked ? true : undefined}
-      onPointerDown={onPointerDown}
-      onPointerMove={onPointerMove}
-      onPointerUp={(e) => finish(e, true)}
-      onPointerCancel={(e) => finish(e, false)}
-      onLostPointerCapture={(e) => finish(e, true)}
-      onKeyDown={onKeyDown}
+      {...handlers}
       data-value-mmh={valueMmH}
     >
       <line className="loss-line__hit" x1={plot.left} x2={plot.right} y1={yPx} y2={yPx} />

@@ -1,9 +1,8 @@
-import { useEffect, useRef, type KeyboardEvent, type PointerEvent } from 'react';
 import { isInputError, type UnitSystem } from '../../core';
 import { useActions, withBaseflowParam } from '../../store';
 import { valueAfterKey } from '../chart/drag-math';
-import { frameThrottle, type FrameThrottle } from '../chart/frame-throttle';
 import { formatValue } from '../format';
+import { useDragHandle } from '../interaction/useDragHandle';
 import { dischargeText } from './discharge';
 import { endGrabOffsetPx, endPointSteps, endTimeAtPointer, type EndBounds } from './end-point-math';
 import type { HydrographFrame } from './hydrograph-frame';
@@ -24,12 +23,6 @@ export interface EndPointHandleProps {
   readonly automatic: boolean;
 }
 
-interface Drag {
-  readonly pointerId: number;
-  readonly grabPx: number;
-  readonly throttle: FrameThrottle<number>;
-}
-
 /**
  * The end of direct runoff for the straight-line separation, as a handle on
  * the recession: drag it along the time axis (pointer capture, one store
@@ -40,7 +33,6 @@ interface Drag {
  */
 export function EndPointHandle({ frame, paramKey, label, endTimeH, endM3s, bounds, clock, system, automatic }: EndPointHandleProps) {
   const actions = useActions();
-  const drag = useRef<Drag | null>(null);
   const { x, y, plot, offsetH } = frame;
   const cx = x(endTimeH + offsetH);
   const cy = y(endM3s);
@@ -55,70 +47,19 @@ export function EndPointHandle({ frame, paramKey, label, endTimeH, endM3s, bound
     }
   };
 
-  useEffect(
-    () => () => {
-      if (drag.current) {
-        drag.current.throttle.flush();
-        drag.current = null;
-        actions.endGesture();
-      }
+  const handlers = useDragHandle({
+    axis: 'x',
+    gesture: `Drag ${label.toLowerCase()}`,
+    grabOffsetPx: (px) => endGrabOffsetPx(x, px, endTimeH, offsetH),
+    valueAt: (px, grabPx) => endTimeAtPointer(x, px, grabPx, offsetH, bounds),
+    apply: (tH) => setEnd(tH),
+    stepKey: (key) => {
+      const next = valueAfterKey(key, endTimeH, { step, coarse, min: bounds.minH, max: bounds.maxH });
+      if (next === null) return false;
+      setEnd(next, `end:${paramKey}`);
+      return true;
     },
-    [actions],
-  );
-
-  const pointerPx = (e: PointerEvent<SVGGElement>): number => {
-    const svg = e.currentTarget.ownerSVGElement;
-    return e.clientX - (svg ? svg.getBoundingClientRect().left : 0);
-  };
-
-  const onPointerDown = (e: PointerEvent<SVGGElement>): void => {
-    if (e.button !== 0 || drag.current) return;
-    e.preventDefault();
-    const el = e.currentTarget;
-    el.focus({ preventScroll: true });
-    el.setPointerCapture?.(e.pointerId);
-    actions.beginGesture(`Drag ${label.toLowerCase()}`);
-    drag.current = {
-      pointerId: e.pointerId,
-      grabPx: endGrabOffsetPx(x, pointerPx(e), endTimeH, offsetH),
-      throttle: frameThrottle((tH: number) => setEnd(tH)),
-    };
-  };
-
-  const onPointerMove = (e: PointerEvent<SVGGElement>): void => {
-    const d = drag.current;
-    if (!d || e.pointerId !== d.pointerId) return;
-    d.throttle.push(endTimeAtPointer(x, pointerPx(e), d.grabPx, offsetH, bounds));
-  };
-
-  const finish = (e: PointerEvent<SVGGElement>, keep: boolean): void => {
-    const d = drag.current;
-    if (!d || e.pointerId !== d.pointerId) return;
-    drag.current = null;
-    if (keep) {
-      d.throttle.flush();
-      actions.endGesture();
-    } else {
-      d.throttle.cancel();
-      actions.cancelGesture();
-    }
-    if (e.currentTarget.hasPointerCapture?.(e.pointerId)) e.currentTarget.releasePointerCapture(e.pointerId);
-  };
-
-  const onKeyDown = (e: KeyboardEvent<SVGGElement>): void => {
-    if (e.key === 'Escape' && drag.current) {
-      e.preventDefault();
-      drag.current.throttle.cancel();
-      drag.current = null;
-      actions.cancelGesture();
-      return;
-    }
-    if (drag.current) return;
-    const next = valueAfterKey(e.key, endTimeH, { step, coarse, min: bounds.minH, max: bounds.maxH });
-    if (next === null) return;
-    e.preventDefault();
-    setEnd(next, `end:${paramKey}`);
-  };
+  });
 
   const at = clockAt(clock, endTimeH);
   const valueText =
@@ -138,12 +79,7 @@ export function EndPointHandle({ frame, paramKey, label, endTimeH, endM3s, bound
       aria-valuemax={bounds.maxH}
       aria-valuenow={endTimeH}
       aria-valuetext={valueText}
-      onPointerDown={onPointerDown}
-      onPointerMove={onPointerMove}
-      onPointerUp={(e) => finish(e, true)}
-      onPointerCancel={(e) => finish(e, false)}
-      onLostPointerCapture={(e) => finish(e, true)}
-      onKeyDown={onKeyDown}
+      {...handlers}
       data-end-h={endTimeH}
     >
       <line className="end-handle__hit" x1={cx} x2={cx} y1={plot.top} y2={plot.bottom} />
