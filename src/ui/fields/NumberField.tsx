@@ -2,6 +2,7 @@ import { useState, type ReactNode } from 'react';
 import { isInputError } from '../../core';
 import { formatForField } from '../format';
 import { parseNumber } from '../parse-number';
+import { FieldFrame, fieldDescribedBy } from './FieldFrame';
 
 export interface NumberFieldProps {
   readonly id: string;
@@ -13,6 +14,8 @@ export interface NumberFieldProps {
   readonly value: number | null;
   readonly toDisplay?: (si: number) => number;
   readonly fromDisplay?: (display: number) => number;
+  /** Checks the typed number as shown, before conversion; returns the message to show, or null. */
+  readonly checkShown?: ((display: number) => string | null) | undefined;
   /** Checks a candidate SI value; returns the message to show, or null when it may be stored. */
   readonly check?: (si: number) => string | null;
   /** Stores a value; an InputError thrown here is shown as the field's message. */
@@ -23,12 +26,20 @@ export interface NumberFieldProps {
   readonly hint?: ReactNode;
   /** Shown right after the input (e.g. a unit picker). */
   readonly after?: ReactNode;
+  readonly placeholder?: string | undefined;
+  /**
+   * What an empty field means, when it is more than a missing number: stored
+   * as nothing (`store`, e.g. automatic), or refused with this `message`.
+   */
+  readonly empty?: EmptyText | undefined;
 }
+
+export type EmptyText = { readonly store: () => void } | { readonly message: string };
 
 interface Draft {
   readonly text: string;
-  /** The SI value this text stored, or null when the text is not valid and nothing was stored. */
-  readonly stored: number | null;
+  /** The SI value this text stored ('empty': stored as nothing), or null when the text is not valid and nothing was stored. */
+  readonly stored: number | 'empty' | null;
   readonly message: string | null;
 }
 
@@ -47,25 +58,48 @@ export function NumberField({
   value,
   toDisplay = same,
   fromDisplay = same,
+  checkShown,
   check,
   onCommit,
   readOnly = false,
   note,
   hint,
   after,
+  placeholder,
+  empty,
 }: NumberFieldProps) {
   const [draft, setDraft] = useState<Draft | null>(null);
   // The typed text stands while it is invalid, or while it is what the store holds.
-  const live = draft !== null && (draft.stored === null || draft.stored === value) ? draft : null;
+  const now = value === null ? 'empty' : value;
+  const live = draft !== null && (draft.stored === null || draft.stored === now) ? draft : null;
   const text = live ? live.text : value === null ? '' : formatForField(toDisplay(value));
   const message = live?.message ?? null;
-  const msgId = `${id}-msg`;
-  const hintId = `${id}-hint`;
+
+  /** Stores what the text means; an InputError from the store is shown as the message. */
+  const store = (typed: string, stored: number | 'empty', commit: () => void): void => {
+    try {
+      commit();
+      setDraft({ text: typed, stored, message: null });
+    } catch (error) {
+      if (!isInputError(error)) throw error;
+      setDraft({ text: typed, stored: null, message: error.message });
+    }
+  };
 
   const onChange = (typed: string): void => {
+    if (empty && typed.trim() === '') {
+      if ('message' in empty) setDraft({ text: typed, stored: null, message: empty.message });
+      else store(typed, 'empty', empty.store);
+      return;
+    }
     const parsed = parseNumber(typed);
     if (!parsed.ok) {
       setDraft({ text: typed, stored: null, message: parsed.message });
+      return;
+    }
+    const refused = checkShown?.(parsed.value) ?? null;
+    if (refused) {
+      setDraft({ text: typed, stored: null, message: refused });
       return;
     }
     const si = fromDisplay(parsed.value);
@@ -74,60 +108,37 @@ export function NumberField({
       setDraft({ text: typed, stored: null, message: problem });
       return;
     }
-    try {
-      onCommit(si);
-      setDraft({ text: typed, stored: si, message: null });
-    } catch (error) {
-      if (!isInputError(error)) throw error;
-      setDraft({ text: typed, stored: null, message: error.message });
-    }
+    store(typed, si, () => onCommit(si));
   };
 
-  const describedBy = [hint ? hintId : null, msgId].filter(Boolean).join(' ');
   return (
-    <div className={`field${message ? ' field--bad' : ''}`}>
-      <label htmlFor={id}>
-        {label}
-        {unit ? (
-          <>
-            {' '}
-            <span className="field__unit">({unit})</span>
-          </>
-        ) : null}
-      </label>
+    <FieldFrame id={id} label={label} unit={unit} bad={Boolean(message)} hint={hint} message={message ?? note ?? null}>
       <div className="field__row">
-      <input
-        id={id}
-        type="text"
-        inputMode="decimal"
-        autoComplete="off"
-        spellCheck={false}
-        value={text}
-        readOnly={readOnly}
-        aria-invalid={message ? true : undefined}
-        aria-describedby={describedBy}
-        onChange={(e) => onChange(e.currentTarget.value)}
-        onBlur={() => {
-          // A good value is shown tidied once the field is left; a bad one stays as typed.
-          if (draft && draft.message === null) setDraft(null);
-        }}
-        onKeyDown={(e) => {
-          if (e.key === 'Escape' && draft) {
-            e.preventDefault();
-            setDraft(null);
-          }
-        }}
-      />
-      {after}
+        <input
+          id={id}
+          type="text"
+          inputMode="decimal"
+          autoComplete="off"
+          spellCheck={false}
+          value={text}
+          readOnly={readOnly}
+          placeholder={placeholder}
+          aria-invalid={message ? true : undefined}
+          aria-describedby={fieldDescribedBy(id, Boolean(hint))}
+          onChange={(e) => onChange(e.currentTarget.value)}
+          onBlur={() => {
+            // A good value is shown tidied once the field is left; a bad one stays as typed.
+            if (draft && draft.message === null) setDraft(null);
+          }}
+          onKeyDown={(e) => {
+            if (e.key === 'Escape' && draft) {
+              e.preventDefault();
+              setDraft(null);
+            }
+          }}
+        />
+        {after}
       </div>
-      {hint ? (
-        <p className="field__hint" id={hintId}>
-          {hint}
-        </p>
-      ) : null}
-      <p className="field__msg" id={msgId} aria-live="polite">
-        {message ?? note ?? null}
-      </p>
-    </div>
+    </FieldFrame>
   );
 }

@@ -1,4 +1,5 @@
 import type { ReactNode } from 'react';
+import { FieldFrame, fieldDescribedBy } from '../../fields/FieldFrame';
 
 export interface ToolFieldProps {
   readonly id: string;
@@ -19,18 +20,8 @@ export interface ToolFieldProps {
  * stays in the field with the reason beside it.
  */
 export function ToolField({ id, label, unit, text, onText, message, hint, placeholder, inputMode = 'decimal' }: ToolFieldProps) {
-  const describedBy = [hint ? `${id}-hint` : null, `${id}-msg`].filter(Boolean).join(' ');
   return (
-    <div className={`field tool-field${message ? ' field--bad' : ''}`}>
-      <label htmlFor={id}>
-        {label}
-        {unit ? (
-          <>
-            {' '}
-            <span className="field__unit">({unit})</span>
-          </>
-        ) : null}
-      </label>
+    <FieldFrame id={id} label={label} unit={unit} className="tool-field" bad={Boolean(message)} hint={hint} message={message}>
       <input
         id={id}
         type="text"
@@ -40,17 +31,9 @@ export function ToolField({ id, label, unit, text, onText, message, hint, placeh
         value={text}
         placeholder={placeholder}
         aria-invalid={message ? true : undefined}
-        aria-describedby={describedBy}
+        aria-describedby={fieldDescribedBy(id, Boolean(hint))}
         onChange={(e) => onText(e.currentTarget.value)}
       />
-      {hint ? (
-        <p className="field__hint" id={`${id}-hint`}>
-          {hint}
-        </p>
-      ) : null}
-      <p className="field__msg" id={`${id}-msg`} aria-live="polite">
-        {message}
-      </p>
-    </div>
+    </FieldFrame>
   );
 }
