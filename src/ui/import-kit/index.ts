@@ -1,5 +1,7 @@
 // What the rainfall and streamflow imports share: the controls that correct
-// their guesses. The screens that import keep their own words and settings.
+// their guesses and the preview sketch. The screens that import keep their
+// own words and settings.
+export { PreviewSketch, LISTED, SKETCH_HEIGHT, SKETCH_PAD, SKETCH_WIDTH, type PreviewSketchProps } from './PreviewSketch';
 export type { SettingsPanelProps } from './settings-panel';
 export { Select } from './Select';
 export { DateField } from './DateField';

@@ -4,14 +4,9 @@ import { barEdgesH, peakIntensityMmH, totalDurationH, type Storm, type UnitSyste
 import { barsPath } from '../../chart/bar-path';
 import { formatDuration } from '../../rainfall/RainfallToolbar';
 import { formatValue } from '../../format';
+import { LISTED, PreviewSketch, SKETCH_HEIGHT, SKETCH_PAD, SKETCH_WIDTH } from '../../import-kit';
 import { displayUnit, toDisplay, unitText } from '../../units';
 import { barClock, barTimeText } from '../bar-times';
-
-const WIDTH = 560;
-const HEIGHT = 110;
-const PAD = { top: 6, right: 4, bottom: 4, left: 4 } as const;
-/** Bars listed under the sketch; the rest are counted. */
-const LISTED = 8;
 
 /**
  * What the paste would become: a sketch of the bars (one path, however many)
@@ -21,14 +16,14 @@ export function PreviewBars({ storm, units }: { storm: Storm; units: UnitSystem 
   const n = storm.depthsMm.length;
   const path = useMemo(() => {
     const edges = barEdgesH(storm);
-    const x = scaleLinear().domain([0, totalDurationH(storm) || 1]).range([PAD.left, WIDTH - PAD.right]);
+    const x = scaleLinear().domain([0, totalDurationH(storm) || 1]).range([SKETCH_PAD.left, SKETCH_WIDTH - SKETCH_PAD.right]);
     const peak = peakIntensityMmH(storm);
-    const y = scaleLinear().domain([0, peak > 0 ? peak : 1]).range([HEIGHT - PAD.bottom, PAD.top]);
+    const y = scaleLinear().domain([0, peak > 0 ? peak : 1]).range([SKETCH_HEIGHT - SKETCH_PAD.bottom, SKETCH_PAD.top]);
     const edgesPx = new Float64Array(edges.length);
     for (let k = 0; k < edges.length; k++) edgesPx[k] = x(edges[k] as number);
     const tops = new Float64Array(n);
     for (let k = 0; k < n; k++) tops[k] = y((storm.depthsMm[k] as number) / (storm.durationsH[k] as number));
-    return barsPath(edgesPx, tops, HEIGHT - PAD.bottom);
+    return barsPath(edgesPx, tops, SKETCH_HEIGHT - SKETCH_PAD.bottom);
   }, [storm, n]);
 
   const clock = barClock(storm.startIso, totalDurationH(storm));
@@ -39,38 +34,29 @@ export function PreviewBars({ storm, units }: { storm: Storm; units: UnitSystem 
   const listed = Math.min(n, LISTED);
 
   return (
-    <div className="paste-preview">
-      <svg
-        className="paste-preview__sketch"
-        viewBox={`0 0 ${WIDTH} ${HEIGHT}`}
-        preserveAspectRatio="none"
-        role="img"
-        aria-label={`Sketch of the ${n} bars read, highest intensity ${peakText}`}
-      >
-        <line className="paste-preview__base" x1={PAD.left} x2={WIDTH - PAD.right} y1={HEIGHT - PAD.bottom} y2={HEIGHT - PAD.bottom} />
-        <path className="paste-preview__bars" d={path} />
-      </svg>
-      <table className="paste-preview__table">
-        <caption>Bars read{n > listed ? ` (first ${listed} of ${n})` : ''}</caption>
-        <thead>
-          <tr>
-            <th scope="col">Bar</th>
-            <th scope="col">Start ({clock.heading})</th>
-            <th scope="col">Duration</th>
-            <th scope="col">Depth ({depthUnit})</th>
-          </tr>
-        </thead>
-        <tbody>
-          {Array.from({ length: listed }, (_, k) => (
-            <tr key={k}>
-              <th scope="row">{k + 1}</th>
-              <td>{barTimeText(clock, edges[k] as number)}</td>
-              <td>{formatDuration(storm.durationsH[k] as number)}</td>
-              <td>{formatValue(toDisplay('depth', storm.depthsMm[k] as number, units))}</td>
-            </tr>
-          ))}
-        </tbody>
-      </table>
-    </div>
+    <PreviewSketch
+      label={`Sketch of the ${n} bars read, highest intensity ${peakText}`}
+      pathClassName="paste-preview__bars"
+      path={path}
+      caption="Bars read"
+      count={n}
+      headings={
+        <>
+          <th scope="col">Bar</th>
+          <th scope="col">Start ({clock.heading})</th>
+          <th scope="col">Duration</th>
+          <th scope="col">Depth ({depthUnit})</th>
+        </>
+      }
+    >
+      {Array.from({ length: listed }, (_, k) => (
+        <tr key={k}>
+          <th scope="row">{k + 1}</th>
+          <td>{barTimeText(clock, edges[k] as number)}</td>
+          <td>{formatDuration(storm.durationsH[k] as number)}</td>
+          <td>{formatValue(toDisplay('depth', storm.depthsMm[k] as number, units))}</td>
+        </tr>
+      ))}
+    </PreviewSketch>
   );
 }
