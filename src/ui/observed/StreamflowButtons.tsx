@@ -1,7 +1,7 @@
-import { useRef, useState } from 'react';
+import type { FlowImportSettings } from '../../io';
 import { useActions, useScenario, useWorkbenchStore, withoutStreamflow } from '../../store';
-import { readTextFile } from '../storm-input/paste/read-file';
-import { EMPTY_FLOW_DRAFT, FlowPasteDialog, type FlowDraft } from './paste/FlowPasteDialog';
+import { OpenFileButton, useImportLauncher } from '../import-kit';
+import { EMPTY_FLOW_DRAFT, FlowPasteDialog } from './paste/FlowPasteDialog';
 
 /**
  * The buttons in the hydrograph's head: paste or open a streamflow record
@@ -11,25 +11,7 @@ export function StreamflowButtons() {
   const store = useWorkbenchStore();
   const actions = useActions();
   const hasRecord = useScenario((s) => s.streamflow !== null);
-  const [dialog, setDialog] = useState<FlowDraft | null>(null);
-  const [kept, setKept] = useState<FlowDraft>(EMPTY_FLOW_DRAFT);
-  const [fileMessage, setFileMessage] = useState<string | null>(null);
-  const fileRef = useRef<HTMLInputElement | null>(null);
-
-  const openWith = (draft: FlowDraft): void => {
-    setFileMessage(null);
-    setDialog(draft);
-  };
-
-  const openFile = async (file: File | undefined): Promise<void> => {
-    if (!file) return;
-    const read = await readTextFile(file, 'the streamflow record');
-    if (!read.ok) {
-      setFileMessage(read.message);
-      return;
-    }
-    openWith({ text: read.text, fileName: read.name, corrections: {} });
-  };
+  const paste = useImportLauncher<FlowImportSettings>({ empty: EMPTY_FLOW_DRAFT, fileWhat: 'the streamflow record' });
 
   const remove = (): void => {
     const s = store.getState().scenario;
@@ -40,45 +22,23 @@ export function StreamflowButtons() {
 
   return (
     <div className="storm-input__buttons hydro__buttons" role="group" aria-label="Streamflow input">
-      <button type="button" onClick={() => openWith(kept)} aria-haspopup="dialog">
+      <button type="button" onClick={paste.openPaste} aria-haspopup="dialog">
         Paste streamflow…
       </button>
-      <button type="button" onClick={() => fileRef.current?.click()} aria-haspopup="dialog">
+      <OpenFileButton inputLabel="Streamflow file to open" opensDialog onFile={paste.openFile}>
         Open streamflow file…
-      </button>
-      <input
-        ref={fileRef}
-        type="file"
-        accept=".csv,.txt,.tsv,.dat,text/csv,text/plain"
-        className="visually-hidden"
-        tabIndex={-1}
-        aria-label="Streamflow file to open"
-        onChange={(e) => {
-          const input = e.currentTarget;
-          void openFile(input.files?.[0]).finally(() => {
-            input.value = '';
-          });
-        }}
-      />
+      </OpenFileButton>
       {hasRecord ? (
         <button type="button" className="button--danger" onClick={remove}>
           Remove record
         </button>
       ) : null}
-      {fileMessage ? (
+      {paste.fileMessage ? (
         <p className="storm-input__file-msg" role="alert">
-          {fileMessage}
+          {paste.fileMessage}
         </p>
       ) : null}
-      {dialog ? (
-        <FlowPasteDialog
-          initial={dialog}
-          onClose={(keep) => {
-            setKept(keep ?? EMPTY_FLOW_DRAFT);
-            setDialog(null);
-          }}
-        />
-      ) : null}
+      {paste.dialog ? <FlowPasteDialog initial={paste.dialog} onClose={paste.close} /> : null}
     </div>
   );
 }

@@ -1,20 +1,11 @@
-import { useRef, type ReactNode } from 'react';
+import type { ReactNode } from 'react';
 import { MAX_FILE_CHARS, scenarioFileName, scenarioFromFileText, scenarioToFileText } from '../../scenario';
 import { useActions, useWorkbenchStore } from '../../store';
+import { OpenFileButton, readAsText } from '../import-kit';
 import { ProblemList, useBarMessage } from './bar-message';
 import { useServices } from './services';
 
 const megabytes = (bytes: number): string => `${(bytes / (1024 * 1024)).toFixed(1)} MB`;
-
-async function fileText(file: File): Promise<string> {
-  if (typeof file.text === 'function') return file.text();
-  return new Promise((resolve, reject) => {
-    const reader = new FileReader();
-    reader.onload = () => resolve(typeof reader.result === 'string' ? reader.result : '');
-    reader.onerror = () => reject(reader.error ?? new Error('the file could not be read'));
-    reader.readAsText(file);
-  });
-}
 
 /**
  * "Save as file" writes the scenario as a readable .json file (with the
@@ -27,7 +18,6 @@ export function ScenarioFile() {
   const actions = useActions();
   const { saveFile } = useServices();
   const show = useBarMessage();
-  const inputRef = useRef<HTMLInputElement | null>(null);
 
   const save = (): void => {
     const scenario = store.getState().scenario;
@@ -36,8 +26,7 @@ export function ScenarioFile() {
     show({ tone: 'done', title: `Saved as ${name}.`, body: <p>Open it again with “Open scenario file…”, here or in any Raincut.</p> });
   };
 
-  const open = async (file: File | undefined): Promise<void> => {
-    if (!file) return;
+  const open = async (file: File): Promise<void> => {
     const name = file.name || 'The file';
     const refuse = (body: ReactNode): void =>
       show({ tone: 'problem', title: `${name} was not opened; the scenario on screen is unchanged.`, body });
@@ -47,7 +36,7 @@ export function ScenarioFile() {
     }
     let text: string;
     try {
-      text = await fileText(file);
+      text = await readAsText(file);
     } catch (error) {
       refuse(<p>It could not be read ({error instanceof Error ? error.message : String(error)}).</p>);
       return;
@@ -70,23 +59,9 @@ export function ScenarioFile() {
       <button type="button" onClick={save}>
         Save as file
       </button>
-      <button type="button" onClick={() => inputRef.current?.click()}>
+      <OpenFileButton inputLabel="Scenario file to open" accept=".json,application/json" onFile={open}>
         Open scenario file…
-      </button>
-      <input
-        ref={inputRef}
-        type="file"
-        accept=".json,application/json"
-        className="visually-hidden"
-        tabIndex={-1}
-        aria-label="Scenario file to open"
-        onChange={(e) => {
-          const input = e.currentTarget;
-          void open(input.files?.[0]).finally(() => {
-            input.value = '';
-          });
-        }}
-      />
+      </OpenFileButton>
     </>
   );
 }

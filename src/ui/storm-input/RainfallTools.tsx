@@ -1,7 +1,7 @@
-import { useRef, useState } from 'react';
+import type { RainImportSettings } from '../../io';
+import { OpenFileButton, useImportLauncher } from '../import-kit';
 import { DRAW_PANEL_ID, STORM_TOOLS_ID, useStormInput } from './context';
-import { EMPTY_DRAFT, PasteDialog, type PasteDraft } from './paste/PasteDialog';
-import { readTextFile } from './paste/read-file';
+import { EMPTY_DRAFT, PasteDialog } from './paste/PasteDialog';
 
 /**
  * The buttons in the Rainfall region: paste or open rainfall (into the
@@ -9,69 +9,28 @@ import { readTextFile } from './paste/read-file';
  */
 export function RainfallTools() {
   const { drawing, setDrawing, toolsOpen, setToolsOpen } = useStormInput();
-  const [dialog, setDialog] = useState<PasteDraft | null>(null);
-  const [kept, setKept] = useState<PasteDraft>(EMPTY_DRAFT);
-  const [fileMessage, setFileMessage] = useState<string | null>(null);
-  const fileRef = useRef<HTMLInputElement | null>(null);
-
-  const openWith = (draft: PasteDraft): void => {
-    setDrawing(false);
-    setFileMessage(null);
-    setDialog(draft);
-  };
-
-  const openFile = async (file: File | undefined): Promise<void> => {
-    if (!file) return;
-    const read = await readTextFile(file);
-    if (!read.ok) {
-      setFileMessage(read.message);
-      return;
-    }
-    openWith({ text: read.text, fileName: read.name, corrections: {} });
-  };
+  const paste = useImportLauncher<RainImportSettings>({ empty: EMPTY_DRAFT, fileWhat: 'the rainfall', beforeOpen: () => setDrawing(false) });
 
   return (
     <div className="storm-input__buttons" role="group" aria-label="Rainfall input">
-      <button type="button" onClick={() => openWith(kept)} aria-haspopup="dialog">
+      <button type="button" onClick={paste.openPaste} aria-haspopup="dialog">
         Paste rainfall…
       </button>
-      <button type="button" onClick={() => fileRef.current?.click()} aria-haspopup="dialog">
+      <OpenFileButton inputLabel="Rainfall file to open" opensDialog onFile={paste.openFile}>
         Open rainfall file…
-      </button>
-      <input
-        ref={fileRef}
-        type="file"
-        accept=".csv,.txt,.tsv,.dat,text/csv,text/plain"
-        className="visually-hidden"
-        tabIndex={-1}
-        aria-label="Rainfall file to open"
-        onChange={(e) => {
-          const input = e.currentTarget;
-          void openFile(input.files?.[0]).finally(() => {
-            input.value = '';
-          });
-        }}
-      />
+      </OpenFileButton>
       <button type="button" aria-pressed={drawing} aria-controls={drawing ? DRAW_PANEL_ID : undefined} onClick={() => setDrawing(!drawing)}>
         Draw bars
       </button>
       <button type="button" aria-expanded={toolsOpen} aria-controls={STORM_TOOLS_ID} onClick={() => setToolsOpen(!toolsOpen)}>
         Storm tools
       </button>
-      {fileMessage ? (
+      {paste.fileMessage ? (
         <p className="storm-input__file-msg" role="alert">
-          {fileMessage}
+          {paste.fileMessage}
         </p>
       ) : null}
-      {dialog ? (
-        <PasteDialog
-          initial={dialog}
-          onClose={(keep) => {
-            setKept(keep ?? EMPTY_DRAFT);
-            setDialog(null);
-          }}
-        />
-      ) : null}
+      {paste.dialog ? <PasteDialog initial={paste.dialog} onClose={paste.close} /> : null}
     </div>
   );
 }

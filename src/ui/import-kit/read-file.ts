@@ -1,13 +1,16 @@
 /**
- * Reads a chosen rainfall file as text for the paste preview. Never throws:
- * a file that is too large, unreadable or not text gives a message naming it.
+ * Reads a chosen rainfall or streamflow file as text for the paste preview.
+ * Never throws: a file that is too large, unreadable or not text gives a
+ * message naming it.
  */
 export type FileText = { readonly ok: true; readonly text: string; readonly name: string } | { readonly ok: false; readonly message: string };
 
 /** Larger files are refused before reading: a rainfall record of a million lines is about 30 MB. */
 export const MAX_FILE_BYTES = 50 * 1024 * 1024;
 
-function readWithReader(file: Blob): Promise<string> {
+/** The file's text, through FileReader where Blob.text is missing. Rejects when the file cannot be read. */
+export async function readAsText(file: Blob): Promise<string> {
+  if (typeof file.text === 'function') return file.text();
   return new Promise((resolve, reject) => {
     const reader = new FileReader();
     reader.onload = () => resolve(typeof reader.result === 'string' ? reader.result : '');
@@ -25,7 +28,7 @@ export async function readTextFile(file: File, what = 'the rainfall'): Promise<F
   }
   let text: string;
   try {
-    text = typeof file.text === 'function' ? await file.text() : await readWithReader(file);
+    text = await readAsText(file);
   } catch (error) {
     return { ok: false, message: `${name} could not be read (${error instanceof Error ? error.message : String(error)}).` };
   }

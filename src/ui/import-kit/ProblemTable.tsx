@@ -1,4 +1,4 @@
-import type { ImportProblem } from '../../../io';
+import type { ImportProblem } from '../../io';
 
 /** Plain words for the settings keys a problem may name (row 0: a setting, not a line of the text). */
 const SETTING_NAMES: Readonly<Record<string, string>> = {

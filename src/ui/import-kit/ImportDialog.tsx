@@ -1,0 +1,202 @@
+import { useDeferredValue, useId, useMemo, useRef, useState, type ComponentType, type ReactNode } from 'react';
+import type { ImportProblem, SeriesSettings, TextRow } from '../../io';
+import { Modal } from '../storm-input/Modal';
+import { OpenFileButton } from './OpenFileButton';
+import { ProblemTable } from './ProblemTable';
+import type { SettingsPanelProps } from './settings-panel';
+import { useTextFile } from './use-text-file';
+
+/** What an import dialog holds: kept when it is cancelled, so reopening shows the same text and corrections. */
+export interface ImportDraft<Patch> {
+  readonly text: string;
+  /** The file the text came from, or null for pasted text. */
+  readonly fileName: string | null;
+  /** The guesses the user corrected; every other setting is guessed afresh from the text. */
+  readonly corrections: Patch;
+}
+
+/** What the io layer's preview of an import says, whatever is imported. */
+export interface ImportPreview {
+  readonly summary: string;
+  readonly header: readonly string[] | null;
+  readonly rows: readonly TextRow[];
+  readonly columnCount: number;
+  readonly problems: readonly ImportProblem[];
+}
+
+/** The words of one kind of import: what the dialog, its text area and its buttons say. */
+export interface ImportWords {
+  readonly title: string;
+  readonly intro: string;
+  readonly textLabel: string;
+  readonly placeholder: string;
+  /** Accessible name of the dialog's hidden file input. */
+  readonly fileInputLabel: string;
+  /** Names the record in file messages ("the rainfall"). */
+  readonly fileWhat: string;
+  readonly acceptLabel: string;
+}
+
+/** One kind of import (rainfall, streamflow): its words and how its text is guessed, previewed and read. */
+export interface ImportKind<S extends SeriesSettings, R> {
+  readonly words: ImportWords;
+  readonly className: string;
+  /** Kept stable between renders: the guesses are memoised on it. */
+  readonly guess: (text: string) => S;
+  readonly preview: (text: string, settings: S) => ImportPreview;
+  /** What the text becomes, or null when it cannot be used. */
+  readonly apply: (text: string, settings: S) => R | null;
+  readonly Settings: ComponentType<SettingsPanelProps<S>>;
+  /** How the problem table names this import's settings, where it differs from the default. */
+  readonly problemWords?: Readonly<Record<string, string>>;
+}
+
+export interface ImportDialogProps<S extends SeriesSettings, R> {
+  readonly kind: ImportKind<S, R>;
+  readonly initial: ImportDraft<Partial<S>>;
+  /** Called on cancel with what to keep, and on accept with null. */
+  readonly onClose: (keep: ImportDraft<Partial<S>> | null) => void;
+  /** The preview of what the text became. */
+  readonly renderPreview: (imported: R) => ReactNode;
+  /** What accepting does to what is on screen, and how to undo it. */
+  readonly keepText: string;
+  /** Applies the import as one undoable edit; returns why it could not, to show while the dialog stays open. */
+  readonly onUse: (imported: R, fileName: string | null) => string | null;
+}
+
+const inWords = (problems: readonly ImportProblem[], words: Readonly<Record<string, string>> | undefined): readonly ImportProblem[] =>
+  words ? problems.map((p) => (words[p.field] ? { ...p, field: words[p.field] as string } : p)) : problems;
+
+/**
+ * Paste or open a record, see what was understood, correct any guess, and
+ * only then use it (one undoable edit). What is on screen is untouched until
+ * then; cancelling changes nothing.
+ */
+export function ImportDialog<S extends SeriesSettings, R>({ kind, initial, onClose, renderPreview, keepText, onUse }: ImportDialogProps<S, R>) {
+  const { words, guess, preview: previewOf, apply, Settings } = kind;
+  const id = useId();
+  const titleId = `${id}-title`;
+  const [text, setText] = useState(initial.text);
+  const [fileName, setFileName] = useState(initial.fileName);
+  const [corrections, setCorrections] = useState<Partial<S>>(initial.corrections);
+  const textRef = useRef<HTMLTextAreaElement | null>(null);
+  const file = useTextFile(words.fileWhat, (read, name) => {
+    setText(read);
+    setFileName(name);
+    setCorrections({});
+  });
+
+  // Reading a long record takes a moment: the text area stays responsive and the preview follows.
+  const shownText = useDeferredValue(text);
+  const stale = shownText !== text;
+  const empty = shownText.trim() === '';
+  const guessed = useMemo(() => guess(shownText), [guess, shownText]);
+  const settings: S = useMemo(() => ({ ...guessed, ...corrections }), [guessed, corrections]);
+  const preview = useMemo(() => (empty ? null : previewOf(shownText, settings)), [previewOf, empty, shownText, settings]);
+  const imported = useMemo(
+    () => (preview !== null && preview.problems.length === 0 ? apply(shownText, settings) : null),
+    [apply, preview, shownText, settings],
+  );
+
+  const correct = (patch: Partial<S>): void => setCorrections((c) => ({ ...c, ...patch }));
+  const cancel = (): void => onClose({ text, fileName, corrections });
+  const accept = (): void => {
+    if (imported === null || stale) return;
+    const refused = onUse(imported, fileName);
+    if (refused !== null) {
+      file.setMessage(refused);
+      return;
+    }
+    onClose(null);
+  };
+
+  return (
+    <Modal labelledBy={titleId} describedBy={`${id}-intro`} onClose={cancel} initialFocus={textRef} className={kind.className}>
+      <div className="paste__head">
+        <h2 id={titleId}>{words.title}</h2>
+        <p id={`${id}-intro`} className="paste__intro">
+          {words.intro}
+        </p>
+      </div>
+      <div className="paste__body">
+        <div className="paste__source">
+          <div className="field">
+            <label htmlFor={`${id}-text`}>{words.textLabel}</label>
+            <textarea
+              id={`${id}-text`}
+              ref={textRef}
+              className="paste__text"
+              value={text}
+              spellCheck={false}
+              autoComplete="off"
+              wrap="off"
+              rows={14}
+              placeholder={words.placeholder}
+              aria-describedby={`${id}-summary`}
+              onChange={(e) => {
+                const next = e.currentTarget.value;
+                if (text.trim() === '') setCorrections({});
+                setText(next);
+                if (fileName !== null && next.trim() === '') setFileName(null);
+              }}
+            />
+          </div>
+          <div className="paste__file">
+            <OpenFileButton inputLabel={words.fileInputLabel} onFile={file.open}>
+              Open a file…
+            </OpenFileButton>
+            <span className="paste__file-name">{fileName ? `Read from ${fileName}` : ''}</span>
+          </div>
+          {file.message ? (
+            <p className="paste__file-msg" role="alert">
+              {file.message}
+            </p>
+          ) : null}
+        </div>
+
+        <div className="paste__check">
+          <section className="paste__understood" aria-labelledby={`${id}-understood`}>
+            <h3 id={`${id}-understood`}>What was understood</h3>
+            <p
+              id={`${id}-summary`}
+              className={`paste__summary${preview && preview.problems.length > 0 ? ' paste__summary--bad' : ''}`}
+              role="status"
+            >
+              {empty ? 'Nothing pasted yet.' : stale || preview === null ? 'Reading…' : preview.summary}
+            </p>
+            {imported !== null && !stale ? renderPreview(imported) : null}
+            {preview && preview.problems.length > 0 ? <ProblemTable problems={inWords(preview.problems, kind.problemWords)} /> : null}
+          </section>
+          {!empty ? (
+            <section className="paste__settings" aria-labelledby={`${id}-settings`}>
+              <div className="paste__settings-head">
+                <h3 id={`${id}-settings`}>Guesses to check</h3>
+                {Object.keys(corrections).length > 0 ? (
+                  <button type="button" className="button--small" onClick={() => setCorrections({})}>
+                    Guess again
+                  </button>
+                ) : null}
+              </div>
+              <Settings
+                settings={settings}
+                header={preview?.header ?? null}
+                columnCount={preview?.columnCount ?? 0}
+                rows={preview?.rows ?? []}
+                onChange={correct}
+              />
+            </section>
+          ) : null}
+        </div>
+      </div>
+      <div className="paste__foot">
+        <p className="paste__keep">{keepText}</p>
+        <button type="button" onClick={cancel}>
+          Cancel
+        </button>
+        <button type="button" className="button--primary" onClick={accept} disabled={imported === null || stale}>
+          {words.acceptLabel}
+        </button>
+      </div>
+    </Modal>
+  );
+}
