@@ -28,8 +28,10 @@ export function computeLossesUnchecked(storm: Storm, method: LossMethod, buffers
   const n = storm.depthsMm.length;
   const lossMm = buffers && buffers.lossMm.length >= n ? buffers.lossMm.subarray(0, n) : new Float64Array(n);
   const excessMm = buffers && buffers.excessMm.length >= n ? buffers.excessMm.subarray(0, n) : new Float64Array(n);
-  (methodSpec(method.kind) as MethodSpec).compute(storm.durationsH, storm.depthsMm, method as never, lossMm, excessMm);
-  return summarise(storm, lossMm, excessMm);
+  const totals = (methodSpec(method.kind) as MethodSpec).compute(storm.durationsH, storm.depthsMm, method as never, lossMm, excessMm);
+  if (!totals) return summarise(storm, lossMm, excessMm);
+  const { rainMm } = totals;
+  return { lossMm, excessMm, ...totals, runoffFraction: rainMm > 0 ? totals.totalExcessMm / rainMm : 0 };
 }
 
 function summarise(storm: Storm, lossMm: Float64Array, excessMm: Float64Array): LossResult {

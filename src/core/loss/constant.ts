@@ -8,16 +8,28 @@ import { peakRate } from './search-bounds';
 export const computeConstant: ComputeFn<'constant'> = (durationsH, depthsMm, method, lossOut, excessOut) => {
   const phi = method.rateMmH;
   const n = depthsMm.length;
+  let rain = 0;
+  let loss = 0;
+  let total = 0;
+  let peak = 0;
   for (let k = 0; k < n; k++) {
     const p = depthsMm[k] as number;
+    const dt = durationsH[k] as number;
     // max(0, x) as (x + |x|)/2: exact in floating point (x + |x| is 2x or 0)
     // and branch-free, which matters on real storms where bars above and
     // below φ alternate unpredictably (about 3x faster than a branch here).
-    const x = p - phi * (durationsH[k] as number);
+    const x = p - phi * dt;
     const excess = 0.5 * (x + Math.abs(x));
+    const l = p - excess;
     excessOut[k] = excess;
-    lossOut[k] = p - excess;
+    lossOut[k] = l;
+    // Totals in the same pass: one read of the storm instead of two.
+    rain += p;
+    loss += l;
+    total += excess;
+    if (excess > peak * dt) peak = excess / dt;
   }
+  return { rainMm: rain, totalLossMm: loss, totalExcessMm: total, peakExcessMmH: peak };
 };
 
 /** Σ max(0, P − φΔt), the same expression as computeConstant, summed only. */

@@ -110,7 +110,18 @@ export type ComputeFn<K extends LossKind> = (
   method: MethodOf<K>,
   lossOut: Float64Array,
   excessOut: Float64Array,
-) => void;
+) => void | BarTotals;
+
+/**
+ * Totals a compute may return when it has summed them in its own loop (one
+ * pass instead of two on long storms); otherwise they are summed afterwards.
+ */
+export interface BarTotals {
+  readonly rainMm: number;
+  readonly totalLossMm: number;
+  readonly totalExcessMm: number;
+  readonly peakExcessMmH: number;
+}
 
 /** Total excess of a clean storm, mm, with no per-bar output. */
 export type TotalExcessFn<K extends LossKind> = (

@@ -3,6 +3,7 @@
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
 import { calibrate, computeLosses, exactPhi, peakIntensityMmH, totalDepthMm, type Storm } from '../../../src/core';
+import { exactPhiByBuckets, exactPhiBySelection, exactPhiInBracket } from '../../../src/core/calibrate/phi';
 import { stormArb } from '../../helpers/arbitraries';
 import { expectClose } from '../../helpers/tolerance';
 
@@ -112,5 +113,57 @@ describe('exact φ-index calibration', () => {
       expect(r.ok).toBe(true);
       if (r.ok) expectClose(computeLosses(s, r.method).totalExcessMm, target, 1e-9);
     }
+  });
+});
+
+describe('the three routes to the exact φ on long storms', () => {
+  // Long storms take the sampled-bracket route (≥ 16,384 bars); it must agree
+  // with plain selection and with the bucket route, including storms of
+  // gauge-like discrete depths full of ties and storms where the guess misses.
+  const longStorm = (n: number, seed: number, discrete: boolean) => {
+    let s = seed >>> 0 || 1;
+    const rand = (): number => {
+      s = (Math.imul(s, 1664525) + 1013904223) >>> 0;
+      return s / 4294967296;
+    };
+    const durationsH: number[] = [];
+    const depthsMm: number[] = [];
+    for (let k = 0; k < n; k++) {
+      durationsH.push(discrete ? (rand() < 0.8 ? 1 / 6 : 1 / 12) : (1 + 14 * rand()) / 60);
+      const wet = rand() > 0.35;
+      depthsMm.push(!wet ? 0 : discrete ? 0.2 * Math.ceil(rand() * 20) : -Math.log(rand() + 1e-12) * 3);
+    }
+    return { durationsH, depthsMm };
+  };
+
+  it.each([
+    [20000, 3, false],
+    [50000, 11, true],
+    [40000, 99, false],
+  ] as const)('%i bars (seed %i, discrete %s): sampled, bucket and plain selection agree and reproduce the target', (n, seed, discrete) => {
+    const s = longStorm(n, seed, discrete);
+    const rain = totalDepthMm(s);
+    for (const share of [0, 0.001, 0.05, 0.3, 0.7, 0.999, 1]) {
+      const target = share * rain;
+      const a = exactPhi(s.durationsH, s.depthsMm, target);
+      const b = exactPhiByBuckets(s.durationsH, s.depthsMm, target);
+      const c = exactPhiBySelection(s.durationsH, s.depthsMm, target);
+      const peak = peakIntensityMmH(s);
+      expect(Math.abs(a - c)).toBeLessThanOrEqual(1e-9 * c + 1e-12 * peak);
+      expect(Math.abs(b - c)).toBeLessThanOrEqual(1e-9 * c + 1e-12 * peak);
+      const back = computeLosses(s, { kind: 'constant', rateMmH: a }).totalExcessMm;
+      expect(Math.abs(back - target)).toBeLessThanOrEqual(1e-9 * rain);
+    }
+  });
+
+  it('a bracket that misses φ is refused, so the caller falls back', () => {
+    const s = longStorm(20000, 5, false);
+    const target = 0.3 * totalDepthMm(s);
+    const phi = exactPhiBySelection(s.durationsH, s.depthsMm, target);
+    expect(exactPhiInBracket(s.durationsH, s.depthsMm, target, phi * 1.5, phi * 2)).toBeNull();
+    expect(exactPhiInBracket(s.durationsH, s.depthsMm, target, 0, phi * 0.5)).toBeNull();
+    const inside = exactPhiInBracket(s.durationsH, s.depthsMm, target, phi * 0.9, phi * 1.1);
+    expect(inside).not.toBeNull();
+    expect(Math.abs((inside as number) - phi)).toBeLessThanOrEqual(1e-9 * phi);
   });
 });
