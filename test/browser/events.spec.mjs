@@ -1,7 +1,7 @@
 // The event set and design storm path in chromium: three events built on the
 // workbench, fitted at once, the median picked and applied to a design storm.
 // Every number is checked against the core loaded from source, never copied.
-import { loadSource } from './workbench-source.mjs';
+import { loadSource } from './support.mjs';
 
 const shot = async (page, name) => {
   if (process.env.EVENTS_SHOTS) await page.screenshot({ path: `/tmp/events-${name}.png`, fullPage: true });

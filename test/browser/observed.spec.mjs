@@ -5,33 +5,10 @@
 // the page saved); then open the scenario from a share link in a fresh
 // browser context and find the same record, end point and numbers; and pass
 // an axe-core check with the record, the paste dialog and its problems showing.
-import { resolve } from 'node:path';
-import { createServer } from 'vite';
+import { AXE, check, loadSourceModules } from './support.mjs';
 
-const ROOT = resolve(import.meta.dirname, '../..');
-const AXE = resolve(ROOT, 'node_modules/axe-core/axe.min.js');
-
-function check(condition, message) {
-  if (!condition) throw new Error(message);
-}
-
-/** The core, the scenario layer and the screen's number format from source, to check the page against. */
-async function loadModules() {
-  const server = await createServer({
-    root: ROOT,
-    configFile: false,
-    logLevel: 'error',
-    appType: 'custom',
-    server: { middlewareMode: true, hmr: false, ws: false },
-    optimizeDeps: { noDiscovery: true, include: [] },
-  });
-  return {
-    core: await server.ssrLoadModule('/src/core/index.ts'),
-    scenario: await server.ssrLoadModule('/src/scenario/index.ts'),
-    format: await server.ssrLoadModule('/src/ui/format.ts'),
-    close: () => server.close(),
-  };
-}
+/** Source modules to check the page against (see support.mjs). */
+const loadModules = () => loadSourceModules({ core: '/src/core/index.ts', scenario: '/src/scenario/index.ts', format: '/src/ui/format.ts' });
 
 /**
  * An INVENTED event record for the demo catchment (no real gauge): 15-minute

@@ -5,34 +5,13 @@
 // valid and carries the page's colours inline, the PNG is drawn at 2×, and the
 // printed report is one page.
 import { readFile } from 'node:fs/promises';
-import { resolve } from 'node:path';
 import Papa from 'papaparse';
-import { createServer } from 'vite';
+import { AXE, check, loadSourceModules } from './support.mjs';
 
-const ROOT = resolve(import.meta.dirname, '../..');
-const AXE = resolve(ROOT, 'node_modules/axe-core/axe.min.js');
+/** Source modules to check the page against (see support.mjs). */
+const loadModules = () => loadSourceModules({ core: '/src/core/index.ts', scenario: '/src/scenario/index.ts' });
+
 const RESULTS = ['Rainfall depth', 'Loss depth', 'Excess depth', 'Runoff volume', 'Runoff fraction', 'Peak excess intensity'];
-
-function check(condition, message) {
-  if (!condition) throw new Error(message);
-}
-
-/** The core and the scenario layer from source through Vite, to check the page against. */
-async function loadModules() {
-  const server = await createServer({
-    root: ROOT,
-    configFile: false,
-    logLevel: 'error',
-    appType: 'custom',
-    server: { middlewareMode: true, hmr: false, ws: false },
-    optimizeDeps: { noDiscovery: true, include: [] },
-  });
-  return {
-    core: await server.ssrLoadModule('/src/core/index.ts'),
-    scenario: await server.ssrLoadModule('/src/scenario/index.ts'),
-    close: () => server.close(),
-  };
-}
 
 const shown = async (page, label) => ((await page.getByLabel(label, { exact: true }).first().textContent()) ?? '').trim();
 const results = async (page) => Object.fromEntries(await Promise.all(RESULTS.map(async (l) => [l, await shown(page, l)])));

@@ -3,36 +3,16 @@
 // with the mouse, and check every shown number against the project's own core
 // computing the same thing (loaded from source, never copied numbers). Also
 // axe-core with the dialog, tools and drawing open, and a narrow window.
-import { resolve } from 'node:path';
-import { createServer } from 'vite';
+import { AXE, check, loadSourceModules } from './support.mjs';
 
-const ROOT = resolve(import.meta.dirname, '../..');
-const AXE = resolve(ROOT, 'node_modules/axe-core/axe.min.js');
-
-function check(condition, message) {
-  if (!condition) throw new Error(message);
-}
-
-/** The core, the number format and the chart's pure maths, from source through Vite. */
-async function loadModules() {
-  const server = await createServer({
-    root: ROOT,
-    configFile: false,
-    logLevel: 'error',
-    appType: 'custom',
-    server: { middlewareMode: true, hmr: false, ws: false },
-    optimizeDeps: { noDiscovery: true, include: [] },
+/** Source modules to check the page against (see support.mjs). */
+const loadModules = () => loadSourceModules({
+    core: '/src/core/index.ts',
+    format: '/src/ui/format.ts',
+    frame: '/src/ui/chart/frame.ts',
+    draw: '/src/ui/storm-input/draw/draw-math.ts',
+    demo: '/src/scenario/demo.ts',
   });
-  const load = (path) => server.ssrLoadModule(path);
-  return {
-    core: await load('/src/core/index.ts'),
-    format: await load('/src/ui/format.ts'),
-    frame: await load('/src/ui/chart/frame.ts'),
-    draw: await load('/src/ui/storm-input/draw/draw-math.ts'),
-    demo: await load('/src/scenario/demo.ts'),
-    close: () => server.close(),
-  };
-}
 
 // Invented gauge record (no real gauge or storm): day-first dates, times of day
 // and decimal commas in separate semicolon-separated columns, 10-min steps.

@@ -2,14 +2,7 @@
 // line with the mouse and check every shown number against the core, reload and
 // keep the scenario, recover from damaged saved data, work from the keyboard,
 // and pass an axe-core check.
-import { resolve } from 'node:path';
-import { loadSource } from './workbench-source.mjs';
-
-const AXE = resolve(import.meta.dirname, '../../node_modules/axe-core/axe.min.js');
-
-function check(condition, message) {
-  if (!condition) throw new Error(message);
-}
+import { AXE, check, loadSource } from './support.mjs';
 
 const text = async (page, label) => ((await page.getByLabel(label, { exact: true }).first().textContent()) ?? '').trim();
 

@@ -1,0 +1,38 @@
+// Shared pieces of the browser specs.
+//
+// loadSourceModules loads the project's own TypeScript modules (the core, the
+// scenario layer, the screen's number format, …) into Node through Vite, so a
+// spec checks what the page shows against the core computing the same thing —
+// never against copied numbers.
+import { resolve } from 'node:path';
+import { createServer } from 'vite';
+
+const ROOT = resolve(import.meta.dirname, '../..');
+
+/** axe-core's browser build, for page.addScriptTag({ path: AXE }). */
+export const AXE = resolve(ROOT, 'node_modules/axe-core/axe.min.js');
+
+/** Throws `message` unless `condition` holds (specs fail by throwing). */
+export function check(condition, message) {
+  if (!condition) throw new Error(message);
+}
+
+/** Loads { name: '/src/…' } source modules; returns them by name plus close(). */
+export async function loadSourceModules(paths) {
+  const server = await createServer({
+    root: ROOT,
+    configFile: false,
+    logLevel: 'error',
+    appType: 'custom',
+    server: { middlewareMode: true, hmr: false, ws: false },
+    optimizeDeps: { noDiscovery: true, include: [] },
+  });
+  const modules = {};
+  for (const [name, path] of Object.entries(paths)) modules[name] = await server.ssrLoadModule(path);
+  return { ...modules, close: () => server.close() };
+}
+
+/** The core and the screen's number format. */
+export function loadSource() {
+  return loadSourceModules({ core: '/src/core/index.ts', format: '/src/ui/format.ts' });
+}
