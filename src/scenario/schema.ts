@@ -13,7 +13,7 @@ import {
 } from '../core';
 import { baseflowRecordProblem, readBaseflowMethod } from './baseflow-check';
 import { isIsoDateTime } from './iso-date-time';
-import { fittableParameters, readMethod } from './method-check';
+import { fittableParameters, readMethod, type ReportAt } from './method-check';
 import { CURRENT_SCENARIO_VERSION, migrate, type RawDocument } from './migrate';
 import {
   capProblems,
@@ -212,87 +212,55 @@ function issuePath(root: unknown, keys: readonly PathKey[]): [v.IssuePathItem, .
   return first ? [first, ...rest] : undefined;
 }
 
-const MethodSchema = v.pipe(
-  v.unknown(),
-  v.rawTransform(({ dataset, addIssue, NEVER }) => {
-    const method = readMethod(dataset.value, (keys, message) =>
-      addIssue({ message, path: issuePath(dataset.value, keys) }),
-    );
-    return method ?? NEVER;
-  }),
-);
+/** Reads one method of a family (loss or baseflow) and reports its problems by path. */
+type ReadOne<K extends string, M> = (input: unknown, report: ReportAt, storedAs?: K) => M | undefined;
 
-type MethodMemory = Partial<Record<LossKind, LossMethod>>;
+/** A schema for one method of a family, checked by that family's reader. */
+function methodSchema<K extends string, M>(read: ReadOne<K, M>) {
+  return v.pipe(
+    v.unknown(),
+    v.rawTransform(({ dataset, addIssue, NEVER }) => {
+      const method = read(dataset.value, (keys, message) => addIssue({ message, path: issuePath(dataset.value, keys) }));
+      return method ?? NEVER;
+    }),
+  );
+}
 
-const MethodMemorySchema = v.pipe(
-  v.unknown(),
-  v.rawTransform(({ dataset, addIssue, NEVER }): MethodMemory => {
-    const input = dataset.value;
-    if (input === null || typeof input !== 'object' || Array.isArray(input)) {
-      addIssue({ message: `must be an object keyed by loss method kind, or {} (got ${describeValue(input)}).` });
-      return NEVER;
-    }
-    const memory: MethodMemory = {};
-    let ok = true;
-    for (const key of Object.keys(input)) {
-      const entry = (input as Record<string, unknown>)[key];
-      if (!isLossKind(key)) {
-        addIssue({ message: 'is not a loss method kind this version of Raincut knows.', path: issuePath(input, [key]) });
-        ok = false;
-        continue;
+/**
+ * A schema for a family's memory: the last parameters of each method, keyed
+ * by kind, each entry a full method whose kind equals its key.
+ */
+function methodMemorySchema<K extends string, M>(read: ReadOne<K, M>, isKind: (key: string) => key is K, family: string) {
+  return v.pipe(
+    v.unknown(),
+    v.rawTransform(({ dataset, addIssue, NEVER }): Partial<Record<K, M>> => {
+      const input = dataset.value;
+      if (input === null || typeof input !== 'object' || Array.isArray(input)) {
+        addIssue({ message: `must be an object keyed by ${family} method kind, or {} (got ${describeValue(input)}).` });
+        return NEVER;
       }
-      const method = readMethod(
-        entry,
-        (keys, message) => addIssue({ message, path: issuePath(input, [key, ...keys]) }),
-        key,
-      );
-      if (method) memory[key] = method;
-      else ok = false;
-    }
-    return ok ? memory : NEVER;
-  }),
-);
-
-const BaseflowSchema = v.pipe(
-  v.unknown(),
-  v.rawTransform(({ dataset, addIssue, NEVER }) => {
-    const method = readBaseflowMethod(dataset.value, (keys, message) =>
-      addIssue({ message, path: issuePath(dataset.value, keys) }),
-    );
-    return method ?? NEVER;
-  }),
-);
-
-type BaseflowMemory = Partial<Record<BaseflowKind, BaseflowMethod>>;
-
-const BaseflowMemorySchema = v.pipe(
-  v.unknown(),
-  v.rawTransform(({ dataset, addIssue, NEVER }): BaseflowMemory => {
-    const input = dataset.value;
-    if (input === null || typeof input !== 'object' || Array.isArray(input)) {
-      addIssue({ message: `must be an object keyed by baseflow method kind, or {} (got ${describeValue(input)}).` });
-      return NEVER;
-    }
-    const memory: BaseflowMemory = {};
-    let ok = true;
-    for (const key of Object.keys(input)) {
-      const entry = (input as Record<string, unknown>)[key];
-      if (!isBaseflowKind(key)) {
-        addIssue({ message: 'is not a baseflow method kind this version of Raincut knows.', path: issuePath(input, [key]) });
-        ok = false;
-        continue;
+      const memory: Partial<Record<K, M>> = {};
+      let ok = true;
+      for (const key of Object.keys(input)) {
+        const entry = (input as Record<string, unknown>)[key];
+        if (!isKind(key)) {
+          addIssue({ message: `is not a ${family} method kind this version of Raincut knows.`, path: issuePath(input, [key]) });
+          ok = false;
+          continue;
+        }
+        const method = read(entry, (keys, message) => addIssue({ message, path: issuePath(input, [key, ...keys]) }), key);
+        if (method) memory[key] = method;
+        else ok = false;
       }
-      const method = readBaseflowMethod(
-        entry,
-        (keys, message) => addIssue({ message, path: issuePath(input, [key, ...keys]) }),
-        key,
-      );
-      if (method) memory[key] = method;
-      else ok = false;
-    }
-    return ok ? memory : NEVER;
-  }),
-);
+      return ok ? memory : NEVER;
+    }),
+  );
+}
+
+const MethodSchema = methodSchema(readMethod);
+const MethodMemorySchema = methodMemorySchema(readMethod, isLossKind, 'loss');
+const BaseflowSchema = methodSchema(readBaseflowMethod);
+const BaseflowMemorySchema = methodMemorySchema(readBaseflowMethod, isBaseflowKind, 'baseflow');
 
 const StreamflowEntries = {
   timesH: sampleList('sample times in hours', 'a finite number (hours after the first sample)', finite),
