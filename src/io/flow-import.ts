@@ -2,7 +2,7 @@ import { DISCHARGE_UNITS, UNIT_LABELS, type DischargeUnit } from '../core';
 import { describeSteps, formatAmount, isRegular, formatDuration, formatIsoForPeople, plural } from './describe';
 import { guessLayout, pickValueColumn } from './layout-guess';
 import { problem, problemList, type ImportProblem, type ProblemList } from './problems';
-import { checkSeriesSettings, checkStep, columnName, readSeries, type Series, type SeriesSettings } from './series';
+import { checkSeriesSettings, checkStep, columnName, openSeries, type Series, type SeriesSettings } from './series';
 import type { TextRow } from './table-text';
 import { formatTimeOfDay, isoAt } from './time-values';
 
@@ -129,17 +129,8 @@ function fail(series: Series | null, s: FlowImportSettings, problems: ProblemLis
 
 function runFlowImport(text: string, settings: FlowImportSettings): FlowRun {
   const problems = problemList();
-  if (typeof text !== 'string') {
-    problems.add(problem(0, 0, 'text', '', 'there is no text to read.'));
-    return fail(null, settings, problems);
-  }
-  if (settings === null || typeof settings !== 'object') {
-    problems.add(problem(0, 0, 'settings', String(settings), 'no import settings were given.'));
-    return fail(null, settings, problems);
-  }
-  checkFlowSettings(settings, problems);
-  if (problems.count > 0) return fail(null, settings, problems);
-  const series = readSeries(text, settings, 'discharge', problems);
+  const series = openSeries(text, settings, checkFlowSettings, () => 'discharge', problems);
+  if (series === null) return fail(null, settings, problems);
   const n = series.table.rows.length;
   if (n === 0) problems.add(problem(0, 0, 'text', '', 'no data lines were found; paste times and discharges.'));
   else if (n === 1) problems.add(problem(0, 0, 'text', '', 'a streamflow record needs at least two samples; only one line was found.'));

@@ -3,7 +3,7 @@ import { describeSteps, formatAmount, formatDuration, formatIsoForPeople, plural
 import { guessLayout, pickValueColumn } from './layout-guess';
 import { parseNumber } from './numbers';
 import { problem, problemList, type ImportProblem, type ProblemList } from './problems';
-import { checkSeriesSettings, checkStep, columnName, readSeries, type Series, type SeriesSettings } from './series';
+import { checkSeriesSettings, checkStep, columnName, openSeries, type Series, type SeriesSettings } from './series';
 import type { TextRow } from './table-text';
 import { formatTimeOfDay, isoAt, parseClock } from './time-values';
 
@@ -306,17 +306,8 @@ function fail(series: Series | null, s: RainImportSettings, problems: ProblemLis
 
 function runRainImport(text: string, settings: RainImportSettings): RainRun {
   const problems = problemList();
-  if (typeof text !== 'string') {
-    problems.add(problem(0, 0, 'text', '', 'there is no text to read.'));
-    return fail(null, settings, problems);
-  }
-  if (settings === null || typeof settings !== 'object') {
-    problems.add(problem(0, 0, 'settings', String(settings), 'no import settings were given.'));
-    return fail(null, settings, problems);
-  }
-  checkRainSettings(settings, problems);
-  if (problems.count > 0) return fail(null, settings, problems);
-  const series = readSeries(text, settings, VALUE_KIND_WORDS[settings.valueKind], problems);
+  const series = openSeries(text, settings, checkRainSettings, (s) => VALUE_KIND_WORDS[s.valueKind], problems);
+  if (series === null) return fail(null, settings, problems);
   if (series.table.rows.length === 0) {
     problems.add(problem(0, 0, 'text', '', 'no data lines were found; paste a column of values, or times and values.'));
   }

@@ -190,3 +190,28 @@ export function columnName(table: TextTable, column: number | null): string {
   if (column === null || table.header === null) return '';
   return table.header.cells[column - 1] ?? '';
 }
+
+/**
+ * The opening every import run shares: the text and the settings are there,
+ * the settings pass the import's own check, and the text splits into a
+ * series. Returns null when the run cannot go on (its problems are listed).
+ */
+export function openSeries<S extends SeriesSettings>(
+  text: unknown,
+  settings: S,
+  checkSettings: (s: S, problems: ProblemList) => void,
+  field: (s: S) => string,
+  problems: ProblemList,
+): Series | null {
+  if (typeof text !== 'string') {
+    problems.add(problem(0, 0, 'text', '', 'there is no text to read.'));
+    return null;
+  }
+  if (settings === null || typeof settings !== 'object') {
+    problems.add(problem(0, 0, 'settings', String(settings), 'no import settings were given.'));
+    return null;
+  }
+  checkSettings(settings, problems);
+  if (problems.count > 0) return null;
+  return readSeries(text, settings, field(settings), problems);
+}
