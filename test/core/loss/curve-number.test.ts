@@ -1,7 +1,8 @@
 import { describe, expect, it } from 'vitest';
-import { computeLosses, curveNumberRetentionMm, curveNumberRunoffMm, InputError, validateMethod } from '../../../src/core';
+import { computeLosses, curveNumberRetentionMm, curveNumberRunoffMm, validateMethod } from '../../../src/core';
 import { readFixtureCsv } from '../../helpers/fixture-csv';
 import { expectClose } from '../../helpers/tolerance';
+import { expectInputError } from '../../helpers/input-error';
 
 const IN = 25.4; // mm per inch, exact
 
@@ -99,13 +100,6 @@ describe('curve number input checks', () => {
     [{ kind: 'curve-number', cn: Number.NaN, iaRatio: 0.2 }, 'cn', /finite number/],
     [{ kind: 'curve-number', cn: 70, iaRatio: 0.1 }, 'iaRatio', /0\.2 or 0\.05/],
   ])('rejects %o naming the field', (method, field, message) => {
-    try {
-      validateMethod(method as never);
-      expect.fail('no error');
-    } catch (error) {
-      expect(error).toBeInstanceOf(InputError);
-      expect((error as InputError).field).toBe(field);
-      expect((error as InputError).message).toMatch(message);
-    }
+    expectInputError(() => validateMethod(method as never), field, message);
   });
 });

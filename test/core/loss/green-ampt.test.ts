@@ -7,12 +7,12 @@ import {
   greenAmptPondedIncrementMm,
   greenAmptPondingDepthMm,
   greenAmptRateMmH,
-  InputError,
   validateMethod,
   type GreenAmptLoss,
 } from '../../../src/core';
 import { stormArb } from '../../helpers/arbitraries';
 import { expectClose } from '../../helpers/tolerance';
+import { expectInputError } from '../../helpers/input-error';
 
 // Silt loam at initial effective saturation 0.3 (Rawls, Brakensiek & Miller 1983):
 // K = 6.5 mm/h, ψ = 166.8 mm, Δθ = 0.7 × 0.486 = 0.3402, ψΔθ = 56.745 mm.
@@ -242,13 +242,6 @@ describe('Green–Ampt input checks', () => {
     [{ ...siltLoam, moistureDeficit: 1.2 }, 'moistureDeficit', /between 0 and 1/],
     [{ ...siltLoam, moistureDeficit: undefined }, 'moistureDeficit', /finite number/],
   ])('rejects a bad method naming %#', (method, field, message) => {
-    try {
-      validateMethod(method as never);
-      expect.fail('no error');
-    } catch (error) {
-      expect(error).toBeInstanceOf(InputError);
-      expect((error as InputError).field).toBe(field);
-      expect((error as InputError).message).toMatch(message);
-    }
+    expectInputError(() => validateMethod(method as never), field, message);
   });
 });

@@ -4,12 +4,12 @@ import {
   computeLosses,
   hortonCapacityMmH,
   hortonCumulativeMm,
-  InputError,
   validateMethod,
   type HortonLoss,
 } from '../../../src/core';
 import { stormArb } from '../../helpers/arbitraries';
 import { expectClose } from '../../helpers/tolerance';
+import { expectInputError } from '../../helpers/input-error';
 
 const horton = (ponding: boolean, f0MmH = 60, fcMmH = 8, kPerH = 3): HortonLoss => ({
   kind: 'horton',
@@ -202,13 +202,6 @@ describe('Horton input checks', () => {
     [{ ...horton(true), f0MmH: Number.POSITIVE_INFINITY }, 'f0MmH', /finite number/],
     [{ ...horton(true), ponding: 'yes' }, 'ponding', /true or false/],
   ])('rejects a bad method naming %#', (method, field, message) => {
-    try {
-      validateMethod(method as never);
-      expect.fail('no error');
-    } catch (error) {
-      expect(error).toBeInstanceOf(InputError);
-      expect((error as InputError).field).toBe(field);
-      expect((error as InputError).message).toMatch(message);
-    }
+    expectInputError(() => validateMethod(method as never), field, message);
   });
 });
