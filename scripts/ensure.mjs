@@ -37,7 +37,10 @@ export function ensureChromium() {
   }
   console.log("raincut: installing Debian's chromium for the browser tests …");
   const env = { ...process.env, DEBIAN_FRONTEND: 'noninteractive' };
-  if (run('apt-get', ['update', '-q'], { env }) !== 0 || run('apt-get', ['install', '-y', '-q', 'chromium'], { env }) !== 0) {
+  if (
+    run('apt-get', ['update', '-q'], { env }) !== 0 ||
+    run('apt-get', ['install', '-y', '-q', 'chromium'], { env }) !== 0
+  ) {
     throw new Error('apt-get could not install chromium; see the messages above.');
   }
 }

@@ -45,7 +45,11 @@ if (run('npx', ['vite', 'build', '--logLevel', 'warn']) !== 0) {
   failed++;
   failures.push('vite build');
 } else {
-  const browser = spawnSync('node', ['test/browser/run.mjs'], { cwd: ROOT, encoding: 'utf8', stdio: ['ignore', 'pipe', 'inherit'] });
+  const browser = spawnSync('node', ['test/browser/run.mjs'], {
+    cwd: ROOT,
+    encoding: 'utf8',
+    stdio: ['ignore', 'pipe', 'inherit'],
+  });
   process.stdout.write(browser.stdout ?? '');
   const m = /browser: (\d+) passed, (\d+) failed/.exec(browser.stdout ?? '');
   if (m) {

@@ -25,7 +25,8 @@ const { store, link } = startWorkbench({
   fragment: window.location.hash,
   fallback: DEMO_SCENARIO,
   nowIso: new Date().toISOString(),
-  clearFragment: () => window.history.replaceState(window.history.state, '', window.location.pathname + window.location.search),
+  clearFragment: () =>
+    window.history.replaceState(window.history.state, '', window.location.pathname + window.location.search),
 });
 // Save a change made just before the page closes or reloads.
 window.addEventListener('pagehide', () => link.flush());

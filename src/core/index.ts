@@ -1,14 +1,7 @@
 // The public surface of the hydrology core. Everything outside src/core imports
 // from here. Pure TypeScript: no React, no DOM.
 export { InputError, isInputError } from './errors';
-export {
-  validateStorm,
-  totalDepthMm,
-  totalDurationH,
-  peakIntensityMmH,
-  barEdgesH,
-  type Storm,
-} from './storm';
+export { validateStorm, totalDepthMm, totalDurationH, peakIntensityMmH, barEdgesH, type Storm } from './storm';
 export type {
   LossMethod,
   LossKind,
@@ -39,12 +32,7 @@ export { brentRoot } from './calibrate/brent';
 export { solveMonotone, PARAMETER_REL_TOL } from './calibrate/monotone';
 // Infiltration loss methods (issue 3): Horton, Green–Ampt, curve number.
 export type { HortonLoss, GreenAmptLoss, CurveNumberLoss } from './loss/types';
-export {
-  hortonCumulativeMm,
-  hortonCapacityMmH,
-  HORTON_F0_CEILING_MMH,
-  HORTON_K_CEILING_PER_H,
-} from './loss/horton';
+export { hortonCumulativeMm, hortonCapacityMmH, HORTON_F0_CEILING_MMH, HORTON_K_CEILING_PER_H } from './loss/horton';
 export {
   greenAmptPondedDepthMm,
   greenAmptPondedIncrementMm,

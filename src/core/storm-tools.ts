@@ -24,7 +24,10 @@ function keepStart(storm: Storm): { startIso?: string } {
 
 function checkStep(stepH: number): void {
   if (typeof stepH !== 'number' || !Number.isFinite(stepH) || !(stepH > 0)) {
-    throw new InputError('stepH', `The time step must be a finite number of hours greater than zero (got ${String(stepH)}).`);
+    throw new InputError(
+      'stepH',
+      `The time step must be a finite number of hours greater than zero (got ${String(stepH)}).`,
+    );
   }
 }
 
@@ -79,7 +82,7 @@ export function resampleStorm(storm: Storm, stepH: number): Storm {
   const depthsMm = new Float64Array(m);
   let j = 0;
   let shared = 0; // depth of old bar k given to new bars so far
-  for (let k = 0; k < n; ) {
+  for (let k = 0; k < n;) {
     const oldEnd = t[k + 1] as number;
     const newEnd = endOf(j);
     const depth = p[k] as number;
@@ -115,7 +118,11 @@ export function scaleStormByFactor(storm: Storm, factor: number): Storm {
   for (let k = 0; k < n; k++) {
     const v = (storm.depthsMm[k] as number) * factor;
     if (!Number.isFinite(v)) {
-      throw new InputError('factor', `Bar ${k + 1} would hold more rain than can be stored after scaling by ${String(factor)}.`, k);
+      throw new InputError(
+        'factor',
+        `Bar ${k + 1} would hold more rain than can be stored after scaling by ${String(factor)}.`,
+        k,
+      );
     }
     depthsMm[k] = v;
   }
@@ -126,7 +133,10 @@ export function scaleStormByFactor(storm: Storm, factor: number): Storm {
 export function emptyStorm(stepH: number, count: number, startIso?: string): Storm {
   checkStep(stepH);
   if (typeof count !== 'number' || !Number.isInteger(count) || count < 1 || count > MAX_TOOL_BARS) {
-    throw new InputError('count', `The number of bars must be a whole number from 1 to ${MAX_TOOL_BARS} (got ${String(count)}).`);
+    throw new InputError(
+      'count',
+      `The number of bars must be a whole number from 1 to ${MAX_TOOL_BARS} (got ${String(count)}).`,
+    );
   }
   const storm: Storm = {
     durationsH: new Float64Array(count).fill(stepH),
@@ -150,7 +160,9 @@ export function withBarStartH(storm: Storm, k: number, startH: number): Storm {
   if (!Number.isInteger(k) || k < 1 || k >= n) {
     throw new InputError(
       'durationsH',
-      n < 2 ? 'The storm has no boundary between bars to move.' : `Only bars 2 to ${n} have a start that can move (got bar ${String(k + 1)}).`,
+      n < 2
+        ? 'The storm has no boundary between bars to move.'
+        : `Only bars 2 to ${n} have a start that can move (got bar ${String(k + 1)}).`,
       Number.isInteger(k) ? k : undefined,
     );
   }

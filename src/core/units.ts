@@ -75,8 +75,10 @@ function convert<T extends Table>(table: T, value: number, from: keyof T, to: ke
 
 export const convertDepth = (value: number, from: DepthUnit, to: DepthUnit): number =>
   convert(DEPTH_UNITS, value, from, to);
-export const convertRate = (value: number, from: RateUnit, to: RateUnit): number => convert(RATE_UNITS, value, from, to);
-export const convertArea = (value: number, from: AreaUnit, to: AreaUnit): number => convert(AREA_UNITS, value, from, to);
+export const convertRate = (value: number, from: RateUnit, to: RateUnit): number =>
+  convert(RATE_UNITS, value, from, to);
+export const convertArea = (value: number, from: AreaUnit, to: AreaUnit): number =>
+  convert(AREA_UNITS, value, from, to);
 export const convertVolume = (value: number, from: VolumeUnit, to: VolumeUnit): number =>
   convert(VOLUME_UNITS, value, from, to);
 export const convertDischarge = (value: number, from: DischargeUnit, to: DischargeUnit): number =>

@@ -55,7 +55,13 @@ export function guessFlowSettings(text: string): FlowImportSettings {
   const valueColumn = pickValueColumn(layout, isFlowName);
   const name = columnName(layout.table, valueColumn);
   const step = /(\d+(?:[.,]\d+)?)\s*-?\s*min/i.exec(name);
-  const stepMinutes = step ? Number((step[1] as string).replace(',', '.')) : /hourly/i.test(name) ? 60 : /daily/i.test(name) ? 1440 : 15;
+  const stepMinutes = step
+    ? Number((step[1] as string).replace(',', '.'))
+    : /hourly/i.test(name)
+      ? 60
+      : /daily/i.test(name)
+        ? 1440
+        : 15;
   return {
     separator: layout.separator,
     decimal: layout.decimal,
@@ -84,8 +90,10 @@ function unitLabel(unit: DischargeUnit): string {
 }
 
 function describeTimes(s: FlowImportSettings): string {
-  if (s.timeKind === 'none' || s.timeColumn === null) return `without times, ${formatDuration(s.stepMinutesIfNoTime / 60)} apart`;
-  const kind = s.timeKind === 'clock' ? 'clock times' : s.timeKind === 'elapsed-min' ? 'elapsed minutes' : 'elapsed hours';
+  if (s.timeKind === 'none' || s.timeColumn === null)
+    return `without times, ${formatDuration(s.stepMinutesIfNoTime / 60)} apart`;
+  const kind =
+    s.timeKind === 'clock' ? 'clock times' : s.timeKind === 'elapsed-min' ? 'elapsed minutes' : 'elapsed hours';
   return `with ${kind} in column ${s.timeColumn}`;
 }
 
@@ -102,7 +110,9 @@ function successSummary(record: FlowRecord, series: Series, s: FlowImportSetting
   for (let k = 1; k < n; k++) steps.push((timesH[k] as number) - (timesH[k - 1] as number));
   let peakAt = 0;
   for (let k = 1; k < n; k++) if ((dischargeM3s[k] as number) > (dischargeM3s[peakAt] as number)) peakAt = k;
-  const spacing = isRegular(steps) ? `every ${describeSteps(steps)}` : `${describeSteps(steps).replace(' (irregular steps)', '')} apart (irregular steps)`;
+  const spacing = isRegular(steps)
+    ? `every ${describeSteps(steps)}`
+    : `${describeSteps(steps).replace(' (irregular steps)', '')} apart (irregular steps)`;
   let head = `${plural(n, 'sample')} ${spacing}`;
   if (record.startIso !== undefined) head += ` from ${formatIsoForPeople(record.startIso)}`;
   else if (series.times !== null && series.times.firstTimeOfDayMs !== null) {
@@ -111,9 +121,14 @@ function successSummary(record: FlowRecord, series: Series, s: FlowImportSetting
   head += `, spanning ${formatDuration(timesH[n - 1] as number)}`;
   const peak = (dischargeM3s[peakAt] as number) / DISCHARGE_UNITS[s.unit];
   const peakRow = series.table.rows[peakAt];
-  const parts = [head, `discharge in ${unitLabel(s.unit)}`, `peak ${formatAmount(peak, 3)} ${unitLabel(s.unit)}${peakRow ? ` on line ${peakRow.line}` : ''}`];
+  const parts = [
+    head,
+    `discharge in ${unitLabel(s.unit)}`,
+    `peak ${formatAmount(peak, 3)} ${unitLabel(s.unit)}${peakRow ? ` on line ${peakRow.line}` : ''}`,
+  ];
   const notes: string[] = [];
-  if (series.times === null) notes.push(`no times, so samples are ${formatDuration(s.stepMinutesIfNoTime / 60)} apart as set`);
+  if (series.times === null)
+    notes.push(`no times, so samples are ${formatDuration(s.stepMinutesIfNoTime / 60)} apart as set`);
   if (s.skipLines > 0) notes.push(`${plural(s.skipLines, 'line')} skipped at the top`);
   return `${parts.join(', ')}${notes.length > 0 ? `; ${notes.join('; ')}` : ''}.`;
 }
@@ -124,7 +139,10 @@ interface FlowRun {
 }
 
 function fail(series: Series | null, s: FlowImportSettings, problems: ProblemList): FlowRun {
-  return { result: { ok: false, summary: failureSummary(series, s, problems.count), problems: problems.list() }, series };
+  return {
+    result: { ok: false, summary: failureSummary(series, s, problems.count), problems: problems.list() },
+    series,
+  };
 }
 
 function runFlowImport(text: string, settings: FlowImportSettings): FlowRun {
@@ -133,7 +151,8 @@ function runFlowImport(text: string, settings: FlowImportSettings): FlowRun {
   if (series === null) return fail(null, settings, problems);
   const n = series.table.rows.length;
   if (n === 0) problems.add(problem(0, 0, 'text', '', 'no data lines were found; paste times and discharges.'));
-  else if (n === 1) problems.add(problem(0, 0, 'text', '', 'a streamflow record needs at least two samples; only one line was found.'));
+  else if (n === 1)
+    problems.add(problem(0, 0, 'text', '', 'a streamflow record needs at least two samples; only one line was found.'));
   if (problems.count > 0) return fail(series, settings, problems);
 
   const factor = DISCHARGE_UNITS[settings.unit];
@@ -145,7 +164,8 @@ function runFlowImport(text: string, settings: FlowImportSettings): FlowRun {
     timesH = series.values.map((_, k) => k * dt);
   } else timesH = series.times.hours.slice();
   const origin = series.times?.origin ?? null;
-  const record: FlowRecord = origin === null ? { timesH, dischargeM3s } : { timesH, dischargeM3s, startIso: isoAt(origin, 0) };
+  const record: FlowRecord =
+    origin === null ? { timesH, dischargeM3s } : { timesH, dischargeM3s, startIso: isoAt(origin, 0) };
   return { result: { ok: true, record, summary: successSummary(record, series, settings), problems: [] }, series };
 }
 

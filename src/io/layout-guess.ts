@@ -1,6 +1,13 @@
 import { detectDecimal, isMissingCell, looksNumeric, parseNumber, type DecimalMark } from './numbers';
 import { detectSeparator, readTable, splitRows, type Separator, type TextRow, type TextTable } from './table-text';
-import { guessDateOrder, guessElapsedKind, looksLikeClock, parseClock, type DateOrder, type TimeKind } from './time-values';
+import {
+  guessDateOrder,
+  guessElapsedKind,
+  looksLikeClock,
+  parseClock,
+  type DateOrder,
+  type TimeKind,
+} from './time-values';
 
 /**
  * First guesses at how a paste is laid out, shared by the rainfall and the
@@ -198,7 +205,18 @@ export function guessLayout(text: string, isValueName: (name: string) => boolean
     if (c + 1 !== timeColumn && c + 1 !== dateColumn && numeric(c)) numberColumns.push(c + 1);
   }
   const dateOrder = guessDateOrder(clockCells);
-  return { separator, decimal, skipLines, hasHeader, table, dateColumn, timeColumn, timeKind, dateOrder, numberColumns };
+  return {
+    separator,
+    decimal,
+    skipLines,
+    hasHeader,
+    table,
+    dateColumn,
+    timeColumn,
+    timeKind,
+    dateOrder,
+    numberColumns,
+  };
 }
 
 /** Picks the value column: the first number column whose name matches, else the first number column, else the first column not holding times. */

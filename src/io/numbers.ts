@@ -80,4 +80,3 @@ export function detectDecimal(cells: Iterable<string>, separatorIsComma: boolean
   }
   return commas > points ? 'comma' : 'point';
 }
-

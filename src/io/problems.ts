@@ -54,7 +54,13 @@ export function problemList(): ProblemList {
       const more = sorted.length - MAX_LISTED_PROBLEMS;
       return [
         ...sorted.slice(0, MAX_LISTED_PROBLEMS),
-        problem(0, 0, 'text', '', `${more} more problem${more === 1 ? '' : 's'} not listed; fix the ones above or check the settings.`),
+        problem(
+          0,
+          0,
+          'text',
+          '',
+          `${more} more problem${more === 1 ? '' : 's'} not listed; fix the ones above or check the settings.`,
+        ),
       ];
     },
   };

@@ -173,8 +173,13 @@ function checkCumulative(series: Series, s: RainImportSettings, problems: Proble
     const cell = row.cells[s.valueColumn - 1] ?? '';
     if (prev !== null && v < prev.value) {
       problems.add(
-        problem(row.line, s.valueColumn, 'cumulative depth', cell,
-          `the cumulative depth falls from ${prev.cell} on line ${prev.line}; cumulative readings cannot decrease (a gauge reset or a typing slip?).`),
+        problem(
+          row.line,
+          s.valueColumn,
+          'cumulative depth',
+          cell,
+          `the cumulative depth falls from ${prev.cell} on line ${prev.line}; cumulative readings cannot decrease (a gauge reset or a typing slip?).`,
+        ),
       );
     }
     prev = { value: v, line: row.line, cell };
@@ -193,12 +198,25 @@ interface Bars {
  * (strictly rising hours). Adds a problem and returns null when the rows are
  * too few for the settings.
  */
-function buildBars(values: readonly number[], hours: readonly number[] | null, s: RainImportSettings, problems: ProblemList): Bars | null {
+function buildBars(
+  values: readonly number[],
+  hours: readonly number[] | null,
+  s: RainImportSettings,
+  problems: ProblemList,
+): Bars | null {
   const n = values.length;
   const cumulative = s.valueKind === 'cumulative';
   const fromFirst = cumulative && s.cumulativeFrom === 'first-value';
   if (fromFirst && n < 2) {
-    problems.add(problem(0, 0, 'text', '', 'cumulative readings counted from the first reading need at least two lines; set "count from zero" if the first value is already a depth.'));
+    problems.add(
+      problem(
+        0,
+        0,
+        'text',
+        '',
+        'cumulative readings counted from the first reading need at least two lines; set "count from zero" if the first value is already a depth.',
+      ),
+    );
     return null;
   }
   const durationsH: number[] = [];
@@ -243,8 +261,10 @@ function buildBars(values: readonly number[], hours: readonly number[] | null, s
 }
 
 function describeTimes(s: RainImportSettings): string {
-  if (s.timeKind === 'none' || s.timeColumn === null) return `without times, at ${formatDuration(s.stepMinutesIfNoTime / 60)} steps`;
-  const kind = s.timeKind === 'clock' ? 'clock times' : s.timeKind === 'elapsed-min' ? 'elapsed minutes' : 'elapsed hours';
+  if (s.timeKind === 'none' || s.timeColumn === null)
+    return `without times, at ${formatDuration(s.stepMinutesIfNoTime / 60)} steps`;
+  const kind =
+    s.timeKind === 'clock' ? 'clock times' : s.timeKind === 'elapsed-min' ? 'elapsed minutes' : 'elapsed hours';
   return `with ${kind} in column ${s.timeColumn}`;
 }
 
@@ -257,7 +277,10 @@ function kindPlural(kind: RainValueKind): string {
 }
 
 function failureSummary(series: Series | null, s: RainImportSettings, count: number): string {
-  const lines = series === null ? '' : `Read ${plural(series.table.rows.length, 'data line')} as ${kindPlural(s.valueKind)} in ${unitWords(s)} ${describeTimes(s)}; `;
+  const lines =
+    series === null
+      ? ''
+      : `Read ${plural(series.table.rows.length, 'data line')} as ${kindPlural(s.valueKind)} in ${unitWords(s)} ${describeTimes(s)}; `;
   const text = `${plural(count, 'problem')} to fix before importing.`;
   return lines === '' ? text.charAt(0).toUpperCase() + text.slice(1) : lines + text;
 }
@@ -276,7 +299,11 @@ function successSummary(storm: ImportedStorm, startOffsetH: number, series: Seri
   }
   parts.push(head);
   parts.push(`${kindPlural(s.valueKind)} in ${unitWords(s)}`);
-  parts.push(s.unit === 'in' ? `total ${formatAmount(total / DEPTH_UNITS.in, 3)} in (${formatAmount(total)} mm)` : `total ${formatAmount(total)} mm`);
+  parts.push(
+    s.unit === 'in'
+      ? `total ${formatAmount(total / DEPTH_UNITS.in, 3)} in (${formatAmount(total)} mm)`
+      : `total ${formatAmount(total)} mm`,
+  );
   const notes: string[] = [];
   if (series.times !== null) {
     if (s.valueKind !== 'cumulative') notes.push(`time stamps mark the ${s.timeMarks} of each bar`);
@@ -301,7 +328,10 @@ interface RainRun {
 }
 
 function fail(series: Series | null, s: RainImportSettings, problems: ProblemList): RainRun {
-  return { result: { ok: false, summary: failureSummary(series, s, problems.count), problems: problems.list() }, series };
+  return {
+    result: { ok: false, summary: failureSummary(series, s, problems.count), problems: problems.list() },
+    series,
+  };
 }
 
 function runRainImport(text: string, settings: RainImportSettings): RainRun {
@@ -329,7 +359,10 @@ function runRainImport(text: string, settings: RainImportSettings): RainRun {
     problems.add(problem(0, 0, 'text', '', `the storm read from the text is not valid: ${reason}`));
     return fail(series, settings, problems);
   }
-  return { result: { ok: true, storm, summary: successSummary(storm, bars.startOffsetH, series, settings), problems: [] }, series };
+  return {
+    result: { ok: true, storm, summary: successSummary(storm, bars.startOffsetH, series, settings), problems: [] },
+    series,
+  };
 }
 
 /**

@@ -46,7 +46,8 @@ export interface Series {
   readonly times: TimeLine | null;
 }
 
-const isWholeAtLeast = (v: unknown, min: number): v is number => typeof v === 'number' && Number.isInteger(v) && v >= min;
+const isWholeAtLeast = (v: unknown, min: number): v is number =>
+  typeof v === 'number' && Number.isInteger(v) && v >= min;
 
 function checkColumn(v: unknown, key: string, nullable: boolean, problems: ProblemList): boolean {
   if (nullable && v === null) return true;
@@ -82,14 +83,32 @@ export function checkSeriesSettings(s: SeriesSettings, problems: ProblemList): v
     );
   }
   if (valueOk && timeOk && s.timeColumn !== null && s.timeColumn === s.valueColumn) {
-    problems.add(problem(0, 0, 'timeColumn', String(s.timeColumn), 'the time column and the value column must differ.'));
+    problems.add(
+      problem(0, 0, 'timeColumn', String(s.timeColumn), 'the time column and the value column must differ.'),
+    );
   }
   if (dateOk && s.dateColumn !== null) {
     if (s.dateColumn === s.valueColumn || s.dateColumn === s.timeColumn) {
-      problems.add(problem(0, 0, 'dateColumn', String(s.dateColumn), 'the date column must differ from the time and value columns.'));
+      problems.add(
+        problem(
+          0,
+          0,
+          'dateColumn',
+          String(s.dateColumn),
+          'the date column must differ from the time and value columns.',
+        ),
+      );
     }
     if (s.timeColumn === null || s.timeKind !== 'clock') {
-      problems.add(problem(0, 0, 'dateColumn', String(s.dateColumn), 'a date column needs a time column of clock times beside it.'));
+      problems.add(
+        problem(
+          0,
+          0,
+          'dateColumn',
+          String(s.dateColumn),
+          'a date column needs a time column of clock times beside it.',
+        ),
+      );
     }
   }
   if (!DATE_ORDERS.includes(s.dateOrder)) {
@@ -98,7 +117,15 @@ export function checkSeriesSettings(s: SeriesSettings, problems: ProblemList): v
   if (s.dateForTimesOfDay !== null) {
     const d = typeof s.dateForTimesOfDay === 'string' ? parseIsoDate(s.dateForTimesOfDay) : null;
     if (d === null || !d.ok) {
-      problems.add(problem(0, 0, 'dateForTimesOfDay', String(s.dateForTimesOfDay), d === null ? 'must be a date or none.' : d.reason));
+      problems.add(
+        problem(
+          0,
+          0,
+          'dateForTimesOfDay',
+          String(s.dateForTimesOfDay),
+          d === null ? 'must be a date or none.' : d.reason,
+        ),
+      );
     }
   }
   if (s.timeKind === 'none') checkStep(s, problems);
@@ -108,7 +135,9 @@ export function checkSeriesSettings(s: SeriesSettings, problems: ProblemList): v
 export function checkStep(s: SeriesSettings, problems: ProblemList): boolean {
   const v = s.stepMinutesIfNoTime;
   if (typeof v === 'number' && v > 0 && Number.isFinite(v)) return true;
-  problems.add(problem(0, 0, 'stepMinutesIfNoTime', String(v), 'the time step must be a number of minutes greater than zero.'));
+  problems.add(
+    problem(0, 0, 'stepMinutesIfNoTime', String(v), 'the time step must be a number of minutes greater than zero.'),
+  );
   return false;
 }
 
@@ -127,7 +156,15 @@ export function readSeries(text: string, s: SeriesSettings, field: string, probl
   const { rows, columnCount } = table;
   const columnExists = (key: string, c: number | null): boolean => {
     if (c === null || rows.length === 0 || c <= columnCount) return true;
-    problems.add(problem(0, c, key, String(c), `there is no column ${c}: the data has ${columnCount} column${columnCount === 1 ? '' : 's'}.`));
+    problems.add(
+      problem(
+        0,
+        c,
+        key,
+        String(c),
+        `there is no column ${c}: the data has ${columnCount} column${columnCount === 1 ? '' : 's'}.`,
+      ),
+    );
     return false;
   };
   const valueThere = columnExists('valueColumn', s.valueColumn);
@@ -141,7 +178,15 @@ export function readSeries(text: string, s: SeriesSettings, field: string, probl
   for (let i = 0; i < rows.length; i++) {
     const { line, cells } = rows[i]!;
     if (cells.length === 0) {
-      problems.add(problem(line, 0, 'line', '', `the line is empty, so its ${field} is missing; remove the line or fill in the value.`));
+      problems.add(
+        problem(
+          line,
+          0,
+          'line',
+          '',
+          `the line is empty, so its ${field} is missing; remove the line or fill in the value.`,
+        ),
+      );
       continue;
     }
     if (valueThere) {
@@ -152,7 +197,8 @@ export function readSeries(text: string, s: SeriesSettings, field: string, probl
       } else {
         const v = parseNumber(cell, s.decimal);
         if (Number.isNaN(v)) problems.add(problem(line, s.valueColumn, field, cell, notANumberReason(cell, s.decimal)));
-        else if (v < 0) problems.add(problem(line, s.valueColumn, field, cell, `${capitalised(field)} cannot be negative.`));
+        else if (v < 0)
+          problems.add(problem(line, s.valueColumn, field, cell, `${capitalised(field)} cannot be negative.`));
         else values[i] = v;
       }
     }

@@ -70,7 +70,8 @@ function splitSingleColumn(text: string): { rows: TextRow[]; problems: ImportPro
   const rows: TextRow[] = [];
   for (let i = 0; i < lines.length; i++) {
     let cell = (lines[i] as string).trim();
-    if (cell.length >= 2 && cell.startsWith('"') && cell.endsWith('"')) cell = cell.slice(1, -1).replace(/""/g, '"').trim();
+    if (cell.length >= 2 && cell.startsWith('"') && cell.endsWith('"'))
+      cell = cell.slice(1, -1).replace(/""/g, '"').trim();
     rows.push({ line: i + 1, cells: cell === '' ? [] : [cell] });
   }
   return { rows, problems: [] };

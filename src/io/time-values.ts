@@ -61,7 +61,9 @@ const TIME_ONLY = new RegExp(`^${TIME_PART}$`);
 /** Year first: 2024-05-01, 2024/05/01, 2024.05.01. */
 const YEAR_FIRST = new RegExp(String.raw`^(\d{4})([-/.])(\d{1,2})\2(\d{1,2})(?:(?:T|\s+)${TIME_PART}${ZONE_PART})?$`);
 /** Day or month first: 01/05/2024, 1.5.2024, 01-05-2024, with a two-digit year caught to explain it. */
-const YEAR_LAST = new RegExp(String.raw`^(\d{1,2})([-/.])(\d{1,2})\2(\d{2}|\d{4})(?:(?:T|\s+)${TIME_PART}${ZONE_PART})?$`);
+const YEAR_LAST = new RegExp(
+  String.raw`^(\d{1,2})([-/.])(\d{1,2})\2(\d{2}|\d{4})(?:(?:T|\s+)${TIME_PART}${ZONE_PART})?$`,
+);
 
 const CLOCK_HELP =
   'use an ISO 8601 date-time (2024-05-01T10:00), a date and time (01/05/2024 10:00) or a time of day (10:00).';
@@ -92,12 +94,14 @@ function readTimeOfDay(
   if (minute > 59) return { ok: false, reason: `minute ${minute} is out of range (0 to 59).` };
   if (second > 59) return { ok: false, reason: `second ${second} is out of range (0 to 59).` };
   if (ampm !== undefined) {
-    if (hour < 1 || hour > 12) return { ok: false, reason: `hour ${hour} is out of range for a 12-hour clock (1 to 12).` };
+    if (hour < 1 || hour > 12)
+      return { ok: false, reason: `hour ${hour} is out of range for a 12-hour clock (1 to 12).` };
     const pm = ampm.toLowerCase() === 'p';
     hour = (hour % 12) + (pm ? 12 : 0);
   } else if (hour === 24) {
     // 24:00 is the end of a day (ISO 8601 allows it); 24:10 is not a time.
-    if (minute !== 0 || second !== 0 || ms !== 0) return { ok: false, reason: 'after 24:00 comes 00:00; hour 24 is only allowed as 24:00.' };
+    if (minute !== 0 || second !== 0 || ms !== 0)
+      return { ok: false, reason: 'after 24:00 comes 00:00; hour 24 is only allowed as 24:00.' };
   } else if (hour > 23) {
     return { ok: false, reason: `hour ${hour} is out of range (0 to 23, or 24:00 for the end of a day).` };
   }
@@ -138,7 +142,10 @@ export function parseClock(cell: string, order: DateOrder): Parsed<ClockReading>
     m = YEAR_LAST.exec(text);
     if (!m) return { ok: false, reason: `not a time; ${CLOCK_HELP}` };
     if ((m[4] as string).length === 2) {
-      return { ok: false, reason: 'the year has two digits; write it with four (2024, not 24) so the date is not misread.' };
+      return {
+        ok: false,
+        reason: 'the year has two digits; write it with four (2024, not 24) so the date is not misread.',
+      };
     }
     year = Number(m[4]);
     yearLast = true;
@@ -151,9 +158,13 @@ export function parseClock(cell: string, order: DateOrder): Parsed<ClockReading>
   if (!date.ok) {
     if (!yearLast) return date;
     const readAs = order === 'day-month' ? 'day first' : 'month first';
-    return { ok: false, reason: `${date.reason.slice(0, -1)} (dates are read ${readAs}; change the date order if that is wrong).` };
+    return {
+      ok: false,
+      reason: `${date.reason.slice(0, -1)} (dates are read ${readAs}; change the date order if that is wrong).`,
+    };
   }
-  if (m[5] === undefined) return { ok: true, value: { date: date.value, hasTime: false, msOfDay: 0, zoneMinutes: null } };
+  if (m[5] === undefined)
+    return { ok: true, value: { date: date.value, hasTime: false, msOfDay: 0, zoneMinutes: null } };
   const t = readTimeOfDay(m[5], m[6] as string, m[7], m[8], m[9]);
   if (!t.ok) return t;
   const zone = readZone(m[10]);
@@ -285,7 +296,15 @@ function readInstant(source: TimeSource, options: TimeReadOptions, problems: Pro
       return null;
     }
     if (d.value.date === null || (d.value.hasTime && d.value.msOfDay !== 0)) {
-      problems.add(problem(line, options.dateColumn, 'date', dateCell, 'expected a date alone in the date column (the time is in its own column).'));
+      problems.add(
+        problem(
+          line,
+          options.dateColumn,
+          'date',
+          dateCell,
+          'expected a date alone in the date column (the time is in its own column).',
+        ),
+      );
       return null;
     }
     const t = parseClock(cell, options.dateOrder);
@@ -294,7 +313,15 @@ function readInstant(source: TimeSource, options: TimeReadOptions, problems: Pro
       return null;
     }
     if (t.value.date !== null) {
-      problems.add(problem(line, options.column, 'time', cell, 'this cell holds a date as well; with a separate date column the time column must hold a time of day only.'));
+      problems.add(
+        problem(
+          line,
+          options.column,
+          'time',
+          cell,
+          'this cell holds a date as well; with a separate date column the time column must hold a time of day only.',
+        ),
+      );
       return null;
     }
     return { ms: dateMs(d.value.date) + t.value.msOfDay, dated: true, zoned: false, zoneMinutes: null };
@@ -309,7 +336,12 @@ function readInstant(source: TimeSource, options: TimeReadOptions, problems: Pro
   const r = c.value;
   if (r.date === null) return { ms: r.msOfDay, dated: false, zoned: false, zoneMinutes: null };
   const zone = r.zoneMinutes;
-  return { ms: dateMs(r.date) + r.msOfDay - (zone ?? 0) * 60_000, dated: true, zoned: zone !== null, zoneMinutes: zone };
+  return {
+    ms: dateMs(r.date) + r.msOfDay - (zone ?? 0) * 60_000,
+    dated: true,
+    zoned: zone !== null,
+    zoneMinutes: zone,
+  };
 }
 
 /**
@@ -330,16 +362,28 @@ export function readTimes(sources: readonly TimeSource[], options: TimeReadOptio
     if (first === null) first = instant;
     else if (instant.dated !== first.dated) {
       problems.add(
-        problem(line, options.column, 'time', cell, instant.dated
-          ? 'this time has a date but the first time does not; give all times a date, or none.'
-          : 'this time has no date but the first time does; give all times a date, or none.'),
+        problem(
+          line,
+          options.column,
+          'time',
+          cell,
+          instant.dated
+            ? 'this time has a date but the first time does not; give all times a date, or none.'
+            : 'this time has no date but the first time does; give all times a date, or none.',
+        ),
       );
       continue;
     } else if (instant.zoned !== first.zoned) {
       problems.add(
-        problem(line, options.column, 'time', cell, instant.zoned
-          ? 'this time has a time zone but the first time does not; give all times a zone, or none.'
-          : 'this time has no time zone but the first time has one; give all times a zone, or none.'),
+        problem(
+          line,
+          options.column,
+          'time',
+          cell,
+          instant.zoned
+            ? 'this time has a time zone but the first time does not; give all times a zone, or none.'
+            : 'this time has no time zone but the first time has one; give all times a zone, or none.',
+        ),
       );
       continue;
     }

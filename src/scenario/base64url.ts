@@ -16,7 +16,11 @@ export function encodeBase64Url(bytes: Uint8Array): string {
   let i = 0;
   for (; i + 2 < bytes.length; i += 3) {
     const n = ((bytes[i] as number) << 16) | ((bytes[i + 1] as number) << 8) | (bytes[i + 2] as number);
-    out += ALPHABET.charAt(n >>> 18) + ALPHABET.charAt((n >>> 12) & 63) + ALPHABET.charAt((n >>> 6) & 63) + ALPHABET.charAt(n & 63);
+    out +=
+      ALPHABET.charAt(n >>> 18) +
+      ALPHABET.charAt((n >>> 12) & 63) +
+      ALPHABET.charAt((n >>> 6) & 63) +
+      ALPHABET.charAt(n & 63);
   }
   const rest = bytes.length - i;
   if (rest === 1) {
@@ -30,8 +34,7 @@ export function encodeBase64Url(bytes: Uint8Array): string {
 }
 
 export type Base64Result =
-  | { readonly ok: true; readonly bytes: Uint8Array }
-  | { readonly ok: false; readonly reason: string };
+  { readonly ok: true; readonly bytes: Uint8Array } | { readonly ok: false; readonly reason: string };
 
 export function decodeBase64Url(text: string): Base64Result {
   for (let i = 0; i < text.length; i++) {
@@ -41,7 +44,8 @@ export function decodeBase64Url(text: string): Base64Result {
       return { ok: false, reason: `it has a character that does not belong in it (${shown} at position ${i + 1})` };
     }
   }
-  if (text.length % 4 === 1) return { ok: false, reason: 'its length is impossible for its encoding (a character is missing or extra)' };
+  if (text.length % 4 === 1)
+    return { ok: false, reason: 'its length is impossible for its encoding (a character is missing or extra)' };
   const bytes = new Uint8Array(Math.floor((text.length * 3) / 4));
   const value = (i: number): number => VALUES[text.charCodeAt(i)] as number;
   let o = 0;
@@ -55,11 +59,13 @@ export function decodeBase64Url(text: string): Base64Result {
   const rest = text.length - i;
   if (rest === 2) {
     const n = (value(i) << 18) | (value(i + 1) << 12);
-    if (n & 0xffff) return { ok: false, reason: 'its last character is not one the encoder writes (the link was changed)' };
+    if (n & 0xffff)
+      return { ok: false, reason: 'its last character is not one the encoder writes (the link was changed)' };
     bytes[o++] = n >>> 16;
   } else if (rest === 3) {
     const n = (value(i) << 18) | (value(i + 1) << 12) | (value(i + 2) << 6);
-    if (n & 0xff) return { ok: false, reason: 'its last character is not one the encoder writes (the link was changed)' };
+    if (n & 0xff)
+      return { ok: false, reason: 'its last character is not one the encoder writes (the link was changed)' };
     bytes[o++] = n >>> 16;
     bytes[o++] = (n >>> 8) & 255;
   }

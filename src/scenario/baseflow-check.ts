@@ -25,9 +25,16 @@ const kindList = (): string => BASEFLOW_KINDS.map((k) => `"${k}"`).join(', ');
  * `storedAs` is set for an entry of `baseflowMemory`, whose kind must match
  * the key it is stored under.
  */
-export function readBaseflowMethod(input: unknown, report: ReportAt, storedAs?: BaseflowKind): BaseflowMethod | undefined {
+export function readBaseflowMethod(
+  input: unknown,
+  report: ReportAt,
+  storedAs?: BaseflowKind,
+): BaseflowMethod | undefined {
   if (input === null || typeof input !== 'object' || Array.isArray(input)) {
-    report([], `must be a baseflow method: an object with a "kind" (${kindList()}) and its parameters (got ${describeValue(input)}).`);
+    report(
+      [],
+      `must be a baseflow method: an object with a "kind" (${kindList()}) and its parameters (got ${describeValue(input)}).`,
+    );
     return undefined;
   }
   const raw = input as Readonly<Record<string, unknown>>;
@@ -51,7 +58,10 @@ export function readBaseflowMethod(input: unknown, report: ReportAt, storedAs?: 
   let ok = true;
   for (const key of Object.keys(raw)) {
     if (key !== 'kind' && !keys.includes(key)) {
-      report([key], `is not a parameter of the "${kind}" baseflow method (its parameters are ${keys.join(', ') || 'none'}).`);
+      report(
+        [key],
+        `is not a parameter of the "${kind}" baseflow method (its parameters are ${keys.join(', ') || 'none'}).`,
+      );
       ok = false;
     }
   }

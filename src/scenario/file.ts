@@ -53,7 +53,9 @@ function syntaxProblem(text: string, error: unknown): Problem {
 
 function read(raw: string): ScenarioResult {
   if (raw.length > MAX_FILE_CHARS) {
-    return failure([problem(`The file is ${raw.length} characters long; a scenario file may have at most ${MAX_FILE_CHARS}.`)]);
+    return failure([
+      problem(`The file is ${raw.length} characters long; a scenario file may have at most ${MAX_FILE_CHARS}.`),
+    ]);
   }
   // Editors on some systems put a byte-order mark in front.
   const text = raw.charCodeAt(0) === 0xfeff ? raw.slice(1) : raw;
@@ -65,7 +67,9 @@ function read(raw: string): ScenarioResult {
     return failure([syntaxProblem(text, error)]);
   }
   if (json === null || typeof json !== 'object' || Array.isArray(json)) {
-    return failure([problem(`The file does not hold a Raincut scenario: its JSON is ${describeValue(json)}, not an object.`)]);
+    return failure([
+      problem(`The file does not hold a Raincut scenario: its JSON is ${describeValue(json)}, not an object.`),
+    ]);
   }
   const { $format: tag, caution, ...doc } = json as Record<string, unknown>;
   if (tag !== FILE_FORMAT_TAG) {

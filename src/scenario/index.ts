@@ -4,7 +4,14 @@ export type { Scenario, ScenarioV1, SetEvent, EventSet, EventObserved, DesignPic
 export type { Problem, ScenarioResult } from './problems';
 export { MAX_LISTED_PROBLEMS } from './problems';
 export { parseScenario, ScenarioSchema, FIELD_HELP, MAX_BARS, MAX_EVENTS } from './schema';
-export { CURRENT_SCENARIO_VERSION, MIGRATIONS, migrate, type Migration, type MigrationResult, type RawDocument } from './migrate';
+export {
+  CURRENT_SCENARIO_VERSION,
+  MIGRATIONS,
+  migrate,
+  type Migration,
+  type MigrationResult,
+  type RawDocument,
+} from './migrate';
 export {
   encodeScenarioLink,
   decodeScenarioLink,

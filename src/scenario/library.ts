@@ -94,7 +94,12 @@ function emptyState(): State {
 }
 
 /** Reads one stored entry; its problems are prefixed with where it stood. */
-function readEntry(raw: unknown, where: string, deleted: boolean, problems: Problem[]): DeletedEntry | LibraryEntry | undefined {
+function readEntry(
+  raw: unknown,
+  where: string,
+  deleted: boolean,
+  problems: Problem[],
+): DeletedEntry | LibraryEntry | undefined {
   const fail = (text: string): undefined => {
     problems.push({ path: where, message: `${where}: ${text}` });
     return undefined;
@@ -102,18 +107,24 @@ function readEntry(raw: unknown, where: string, deleted: boolean, problems: Prob
   if (!isRecord(raw)) return fail(`is not a saved scenario (got ${describeValue(raw)}).`);
   const { id, savedAt, scenario } = raw;
   if (typeof id !== 'string' || !ID.test(id)) return fail(`has no proper id (got ${describeValue(id)}).`);
-  if (typeof savedAt !== 'string' || !ISO_UTC.test(savedAt)) return fail(`has no proper savedAt time (got ${describeValue(savedAt)}).`);
+  if (typeof savedAt !== 'string' || !ISO_UTC.test(savedAt))
+    return fail(`has no proper savedAt time (got ${describeValue(savedAt)}).`);
   const parsed = parseScenario(scenario);
   if (!parsed.ok) {
-    const name = isRecord(scenario) && typeof scenario['name'] === 'string' ? ` "${scenario['name'].slice(0, 60)}"` : '';
+    const name =
+      isRecord(scenario) && typeof scenario['name'] === 'string' ? ` "${scenario['name'].slice(0, 60)}"` : '';
     for (const p of parsed.problems) {
-      problems.push({ path: `${where}.scenario${p.path === '' ? '' : `.${p.path}`}`, message: `${where}${name}: ${p.message}` });
+      problems.push({
+        path: `${where}.scenario${p.path === '' ? '' : `.${p.path}`}`,
+        message: `${where}${name}: ${p.message}`,
+      });
     }
     return undefined;
   }
   if (!deleted) return { id, savedAt, scenario: parsed.scenario };
   const { deletedAt, position } = raw;
-  if (typeof deletedAt !== 'string' || !ISO_UTC.test(deletedAt)) return fail(`has no proper deletedAt time (got ${describeValue(deletedAt)}).`);
+  if (typeof deletedAt !== 'string' || !ISO_UTC.test(deletedAt))
+    return fail(`has no proper deletedAt time (got ${describeValue(deletedAt)}).`);
   if (typeof position !== 'number' || !Number.isSafeInteger(position) || position < 0) {
     return fail(`has no proper position (got ${describeValue(position)}).`);
   }
@@ -134,7 +145,10 @@ function parseStored(text: string): Parsed {
     return { kind: 'unreadable', reason: `it is not valid JSON (${why(error)})` };
   }
   if (!isRecord(json) || json['$format'] !== LIBRARY_FORMAT_TAG) {
-    return { kind: 'unreadable', reason: `it is not a Raincut list of scenarios (no "$format": "${LIBRARY_FORMAT_TAG}")` };
+    return {
+      kind: 'unreadable',
+      reason: `it is not a Raincut list of scenarios (no "$format": "${LIBRARY_FORMAT_TAG}")`,
+    };
   }
   const version = json['version'];
   if (typeof version === 'number' && Number.isSafeInteger(version) && version > LIBRARY_VERSION) {
@@ -176,7 +190,10 @@ function parseStored(text: string): Parsed {
   if (typeof nextId === 'number' && Number.isSafeInteger(nextId) && nextId > highest) state.nextId = nextId;
   else {
     state.nextId = highest + 1;
-    if (nextId !== undefined) damage.push(problem(`The id counter was damaged (got ${describeValue(nextId)}); it now starts after the highest id.`));
+    if (nextId !== undefined)
+      damage.push(
+        problem(`The id counter was damaged (got ${describeValue(nextId)}); it now starts after the highest id.`),
+      );
   }
   return { kind: 'ok', state, damage };
 }
@@ -231,7 +248,8 @@ export function createScenarioLibrary(storage: StorageLike, options: LibraryOpti
     }
     if (text === null) return { state: emptyState(), canWrite: true, problems: [] };
     const parsed = parseStored(text);
-    if (parsed.kind === 'ok' && parsed.damage.length === 0) return { state: parsed.state, canWrite: true, problems: [] };
+    if (parsed.kind === 'ok' && parsed.damage.length === 0)
+      return { state: parsed.state, canWrite: true, problems: [] };
     if (parsed.kind === 'newer') {
       return {
         state: emptyState(),
@@ -247,7 +265,9 @@ export function createScenarioLibrary(storage: StorageLike, options: LibraryOpti
 
     // Damaged: keep an exact copy of what was stored, then carry on with what could be read.
     const state = parsed.kind === 'ok' ? parsed.state : emptyState();
-    const details = capProblems(parsed.kind === 'ok' ? parsed.damage : [problem(`The saved list could not be read: ${parsed.reason}.`)]);
+    const details = capProblems(
+      parsed.kind === 'ok' ? parsed.damage : [problem(`The saved list could not be read: ${parsed.reason}.`)],
+    );
     let asideKey: string;
     try {
       asideKey = freeKey(now());
@@ -279,15 +299,27 @@ export function createScenarioLibrary(storage: StorageLike, options: LibraryOpti
     return state.entries.findIndex((e) => e.id === id);
   }
 
-  function missing(id: string, notices: readonly Problem[]): { readonly ok: false; readonly problems: readonly Problem[] } {
-    return { ok: false, problems: [...notices, problem(`There is no saved scenario with id ${describeValue(id)}; it may have been deleted in another tab.`)] };
+  function missing(
+    id: string,
+    notices: readonly Problem[],
+  ): { readonly ok: false; readonly problems: readonly Problem[] } {
+    return {
+      ok: false,
+      problems: [
+        ...notices,
+        problem(`There is no saved scenario with id ${describeValue(id)}; it may have been deleted in another tab.`),
+      ],
+    };
   }
 
   /** Runs a change on a fresh reading and writes it back. */
   function change<T>(what: string, apply: (state: State, notices: Problem[]) => LibraryResult<T>): LibraryResult<T> {
     const loaded = load();
     if (!loaded.canWrite) {
-      return { ok: false, problems: [...loaded.problems, problem(`${what} was not done: the saved list cannot be written safely now.`)] };
+      return {
+        ok: false,
+        problems: [...loaded.problems, problem(`${what} was not done: the saved list cannot be written safely now.`)],
+      };
     }
     const result = apply(loaded.state, loaded.problems);
     if (!result.ok) return result;
@@ -333,9 +365,15 @@ export function createScenarioLibrary(storage: StorageLike, options: LibraryOpti
 
     rename(id, name) {
       const trimmed = typeof name === 'string' ? name.trim() : '';
-      if (trimmed === '') return { ok: false, problems: [problem('A saved scenario needs a name; the new name is empty.')] };
+      if (trimmed === '')
+        return { ok: false, problems: [problem('A saved scenario needs a name; the new name is empty.')] };
       if (trimmed.length > MAX_NAME_LENGTH) {
-        return { ok: false, problems: [problem(`The new name has ${trimmed.length} characters; a name may have at most ${MAX_NAME_LENGTH}.`)] };
+        return {
+          ok: false,
+          problems: [
+            problem(`The new name has ${trimmed.length} characters; a name may have at most ${MAX_NAME_LENGTH}.`),
+          ],
+        };
       }
       return change<LibraryEntry>('The new name', (state, notices) => {
         const index = findEntry(state, id);
@@ -377,7 +415,10 @@ export function createScenarioLibrary(storage: StorageLike, options: LibraryOpti
       return change<LibraryEntry>('The restore', (state, notices) => {
         const index = state.deleted.findIndex((e) => e.id === id);
         if (index < 0) {
-          return { ok: false, problems: [...notices, problem(`There is no deleted scenario with id ${describeValue(id)} to restore.`)] };
+          return {
+            ok: false,
+            problems: [...notices, problem(`There is no deleted scenario with id ${describeValue(id)} to restore.`)],
+          };
         }
         const [gone] = state.deleted.splice(index, 1) as [DeletedEntry];
         const entry: LibraryEntry = { id: gone.id, savedAt: gone.savedAt, scenario: gone.scenario };

@@ -88,8 +88,7 @@ export function encodeScenarioLink(scenario: Scenario): string {
 }
 
 export type ShareLinkResult =
-  | { readonly ok: true; readonly fragment: string }
-  | { readonly ok: false; readonly problems: readonly Problem[] };
+  { readonly ok: true; readonly fragment: string } | { readonly ok: false; readonly problems: readonly Problem[] };
 
 /**
  * What "Copy link" should call: checks the scenario as a reader will, makes
@@ -125,7 +124,9 @@ function decode(fragment: string): ScenarioResult {
 
   const prefix = PREFIX_PATTERN.exec(text);
   if (!prefix) {
-    return failure([problem(`This is not a Raincut scenario link: the part after "#" should start with "${LINK_PREFIX}".`)]);
+    return failure([
+      problem(`This is not a Raincut scenario link: the part after "#" should start with "${LINK_PREFIX}".`),
+    ]);
   }
   const format = Number(prefix[1]);
   if (format !== LINK_FORMAT_VERSION) {

@@ -31,7 +31,10 @@ function parameterKeys(spec: MethodSpec): string[] {
  */
 export function readMethod(input: unknown, report: ReportAt, storedAs?: LossKind): LossMethod | undefined {
   if (input === null || typeof input !== 'object' || Array.isArray(input)) {
-    report([], `must be a loss method: an object with a "kind" (${kindList()}) and its parameters (got ${describeValue(input)}).`);
+    report(
+      [],
+      `must be a loss method: an object with a "kind" (${kindList()}) and its parameters (got ${describeValue(input)}).`,
+    );
     return undefined;
   }
   const raw = input as Readonly<Record<string, unknown>>;

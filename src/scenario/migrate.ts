@@ -32,7 +32,7 @@ export interface Migration {
 const addStreamflow: Migration = {
   from: 1,
   to: 2,
-  summary: 'Adds `streamflow`: the event\'s streamflow record and its baseflow separation, null when there is none.',
+  summary: "Adds `streamflow`: the event's streamflow record and its baseflow separation, null when there is none.",
   up: (doc) => ({ ...doc, version: 2, streamflow: Object.hasOwn(doc, 'streamflow') ? doc['streamflow'] : null }),
 };
 
@@ -50,7 +50,7 @@ const addEventSet: Migration = {
   from: 2,
   to: 3,
   summary:
-    'Adds `eventSet`: the catchment\'s observed events, the one on the workbench, the parameter fitted for all and the design value pick; version 2 documents get an empty set.',
+    "Adds `eventSet`: the catchment's observed events, the one on the workbench, the parameter fitted for all and the design value pick; version 2 documents get an empty set.",
   up: (doc) => ({
     ...doc,
     version: 3,

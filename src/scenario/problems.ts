@@ -13,8 +13,7 @@ export interface Problem {
 
 /** The outcome of reading a scenario from any way in. Never thrown. */
 export type ScenarioResult =
-  | { readonly ok: true; readonly scenario: Scenario }
-  | { readonly ok: false; readonly problems: readonly Problem[] };
+  { readonly ok: true; readonly scenario: Scenario } | { readonly ok: false; readonly problems: readonly Problem[] };
 
 /** A key or an index on the way from the document root to a field. */
 export type PathKey = string | number;
@@ -79,10 +78,7 @@ export function failure(problems: readonly Problem[]): { readonly ok: false; rea
 export function capProblems(problems: readonly Problem[]): readonly Problem[] {
   if (problems.length <= MAX_LISTED_PROBLEMS) return problems;
   const rest = problems.length - MAX_LISTED_PROBLEMS;
-  return [
-    ...problems.slice(0, MAX_LISTED_PROBLEMS),
-    problem(`… and ${rest} more problem${rest === 1 ? '' : 's'}.`),
-  ];
+  return [...problems.slice(0, MAX_LISTED_PROBLEMS), problem(`… and ${rest} more problem${rest === 1 ? '' : 's'}.`)];
 }
 
 /**

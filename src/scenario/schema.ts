@@ -57,12 +57,13 @@ export const FIELD_HELP: Readonly<Record<string, string>> = {
   'streamflow.dischargeM3s': 'the discharge of each sample, m³/s',
   'streamflow.offsetH': 'hours from the storm start to the first sample (negative when the record starts first)',
   'streamflow.baseflow': 'the baseflow separation method, with its kind and parameters',
-  'streamflow.baseflowMemory': 'the last parameters used for each baseflow method, an object keyed by kind (may be empty)',
+  'streamflow.baseflowMemory':
+    'the last parameters used for each baseflow method, an object keyed by kind (may be empty)',
   'streamflow.useAsObserved': 'whether the observed runoff is the separated direct-runoff depth, true or false',
   eventSet: 'the event set: events, activeId, parameter and designPick',
   'eventSet.events': 'the observed events of the catchment, a list (may be empty)',
   'eventSet.activeId': 'the id of the event on the workbench, or null',
-  'eventSet.parameter': 'the parameter fitted for every event, or null for the workbench\'s',
+  'eventSet.parameter': "the parameter fitted for every event, or null for the workbench's",
   'eventSet.designPick': 'the design value: "median", "mean", "min", "max" or { "value": number }',
 };
 
@@ -76,7 +77,10 @@ export const MAX_EVENTS = 200;
 export const MAX_SAMPLES = 1_000_000;
 
 type Message = (issue: v.BaseIssue<unknown>) => string;
-const must = (rule: string): Message => (issue) => `must be ${rule} (got ${describeValue(issue.input)}).`;
+const must =
+  (rule: string): Message =>
+  (issue) =>
+    `must be ${rule} (got ${describeValue(issue.input)}).`;
 
 // -0 and 0 are the same amount; keep one so that documents compare equal.
 const unsignedZero = (x: number): number => (x === 0 ? 0 : x);
@@ -101,7 +105,10 @@ export const LISTED_BARS = 10;
 function barList(what: string, rule: string, test: (x: number) => boolean) {
   return v.pipe(
     v.array(v.unknown(), must(`a list of ${what}, one per bar`)),
-    v.maxLength(MAX_BARS, (issue) => `has ${(issue.input as unknown[]).length} bars; a scenario holds at most ${MAX_BARS}.`),
+    v.maxLength(
+      MAX_BARS,
+      (issue) => `has ${(issue.input as unknown[]).length} bars; a scenario holds at most ${MAX_BARS}.`,
+    ),
     v.rawTransform(({ dataset, addIssue, NEVER }): number[] => {
       const list = dataset.value;
       const out: number[] = [];
@@ -119,15 +126,16 @@ function barList(what: string, rule: string, test: (x: number) => boolean) {
       }
       if (bad > LISTED_BARS) {
         const rest = bad - LISTED_BARS;
-        addIssue({ message: `${rest} more bar${rest === 1 ? ' is' : 's are'} wrong too (only the first ${LISTED_BARS} are listed).` });
+        addIssue({
+          message: `${rest} more bar${rest === 1 ? ' is' : 's are'} wrong too (only the first ${LISTED_BARS} are listed).`,
+        });
       }
       return bad > 0 ? NEVER : out;
     }),
   );
 }
 
-const isRecord = (x: unknown): x is Record<string, unknown> =>
-  x !== null && typeof x === 'object' && !Array.isArray(x);
+const isRecord = (x: unknown): x is Record<string, unknown> => x !== null && typeof x === 'object' && !Array.isArray(x);
 
 /**
  * An object with the given fields. valibot's object schema also takes a
@@ -161,7 +169,10 @@ const CatchmentEntries = {
 function sampleList(what: string, rule: string, test: (x: number) => boolean) {
   return v.pipe(
     v.array(v.unknown(), must(`a list of ${what}, one per sample`)),
-    v.maxLength(MAX_SAMPLES, (issue) => `has ${(issue.input as unknown[]).length} samples; a streamflow record holds at most ${MAX_SAMPLES}.`),
+    v.maxLength(
+      MAX_SAMPLES,
+      (issue) => `has ${(issue.input as unknown[]).length} samples; a streamflow record holds at most ${MAX_SAMPLES}.`,
+    ),
     v.rawTransform(({ dataset, addIssue, NEVER }): number[] => {
       const list = dataset.value;
       const out: number[] = [];
@@ -179,7 +190,9 @@ function sampleList(what: string, rule: string, test: (x: number) => boolean) {
       }
       if (bad > LISTED_BARS) {
         const rest = bad - LISTED_BARS;
-        addIssue({ message: `${rest} more sample${rest === 1 ? ' is' : 's are'} wrong too (only the first ${LISTED_BARS} are listed).` });
+        addIssue({
+          message: `${rest} more sample${rest === 1 ? ' is' : 's are'} wrong too (only the first ${LISTED_BARS} are listed).`,
+        });
       }
       return bad > 0 ? NEVER : out;
     }),
@@ -220,7 +233,9 @@ function methodSchema<K extends string, M>(read: ReadOne<K, M>) {
   return v.pipe(
     v.unknown(),
     v.rawTransform(({ dataset, addIssue, NEVER }) => {
-      const method = read(dataset.value, (keys, message) => addIssue({ message, path: issuePath(dataset.value, keys) }));
+      const method = read(dataset.value, (keys, message) =>
+        addIssue({ message, path: issuePath(dataset.value, keys) }),
+      );
       return method ?? NEVER;
     }),
   );
@@ -230,7 +245,11 @@ function methodSchema<K extends string, M>(read: ReadOne<K, M>) {
  * A schema for a family's memory: the last parameters of each method, keyed
  * by kind, each entry a full method whose kind equals its key.
  */
-function methodMemorySchema<K extends string, M>(read: ReadOne<K, M>, isKind: (key: string) => key is K, family: string) {
+function methodMemorySchema<K extends string, M>(
+  read: ReadOne<K, M>,
+  isKind: (key: string) => key is K,
+  family: string,
+) {
   return v.pipe(
     v.unknown(),
     v.rawTransform(({ dataset, addIssue, NEVER }): Partial<Record<K, M>> => {
@@ -244,11 +263,18 @@ function methodMemorySchema<K extends string, M>(read: ReadOne<K, M>, isKind: (k
       for (const key of Object.keys(input)) {
         const entry = (input as Record<string, unknown>)[key];
         if (!isKind(key)) {
-          addIssue({ message: `is not a ${family} method kind this version of Raincut knows.`, path: issuePath(input, [key]) });
+          addIssue({
+            message: `is not a ${family} method kind this version of Raincut knows.`,
+            path: issuePath(input, [key]),
+          });
           ok = false;
           continue;
         }
-        const method = read(entry, (keys, message) => addIssue({ message, path: issuePath(input, [key, ...keys]) }), key);
+        const method = read(
+          entry,
+          (keys, message) => addIssue({ message, path: issuePath(input, [key, ...keys]) }),
+          key,
+        );
         if (method) memory[key] = method;
         else ok = false;
       }
@@ -283,9 +309,18 @@ const StreamflowEntries = {
  * core accepts), baseflow parameters that fit this record, and a link to
  * the observed runoff only where there is one.
  */
-function checkStreamflow(doc: Partial<Record<string, unknown>>, add: (keys: readonly PathKey[], message: string) => void): void {
+function checkStreamflow(
+  doc: Partial<Record<string, unknown>>,
+  add: (keys: readonly PathKey[], message: string) => void,
+): void {
   const flow = doc['streamflow'] as
-    | { timesH?: unknown; dischargeM3s?: unknown; baseflow?: unknown; baseflowMemory?: unknown; useAsObserved?: unknown }
+    | {
+        timesH?: unknown;
+        dischargeM3s?: unknown;
+        baseflow?: unknown;
+        baseflowMemory?: unknown;
+        useAsObserved?: unknown;
+      }
     | null
     | undefined;
   if (!flow || typeof flow !== 'object') return;
@@ -345,19 +380,31 @@ const EventEntries = {
   storm: fields(StormEntries, 'an object with durationsH and depthsMm'),
   observed: v.nullable(fields(EventObservedEntries, 'an object with as and value, or null')),
   streamflow: v.nullable(
-    fields(StreamflowEntries, 'an object with timesH, dischargeM3s, offsetH, baseflow, baseflowMemory and useAsObserved, or null'),
+    fields(
+      StreamflowEntries,
+      'an object with timesH, dischargeM3s, offsetH, baseflow, baseflowMemory and useAsObserved, or null',
+    ),
   ),
 };
 
 const DesignPickSchema = v.union(
-  [v.picklist(['median', 'mean', 'min', 'max']), fields({ value: numberField('a finite number', finite) }, 'an object with value')],
+  [
+    v.picklist(['median', 'mean', 'min', 'max']),
+    fields({ value: numberField('a finite number', finite) }, 'an object with value'),
+  ],
   must('"median", "mean", "min", "max" or an object { "value": number }'),
 );
 
 const EventSetEntries = {
   events: v.pipe(
-    v.array(fields(EventEntries, 'an event: an object with id, name, storm, observed and streamflow'), must('a list of events')),
-    v.maxLength(MAX_EVENTS, (issue) => `has ${(issue.input as unknown[]).length} events; a set holds at most ${MAX_EVENTS}.`),
+    v.array(
+      fields(EventEntries, 'an event: an object with id, name, storm, observed and streamflow'),
+      must('a list of events'),
+    ),
+    v.maxLength(
+      MAX_EVENTS,
+      (issue) => `has ${(issue.input as unknown[]).length} events; a set holds at most ${MAX_EVENTS}.`,
+    ),
   ),
   activeId: v.nullable(text()),
   parameter: v.nullable(text()),
@@ -365,13 +412,21 @@ const EventSetEntries = {
 };
 
 /** Storm lists of equal length, then the core's own storm check, with keys under `at`. */
-function checkStorm(storm: unknown, at: readonly PathKey[], add: (keys: readonly PathKey[], message: string) => void, clean: boolean): void {
+function checkStorm(
+  storm: unknown,
+  at: readonly PathKey[],
+  add: (keys: readonly PathKey[], message: string) => void,
+  clean: boolean,
+): void {
   const st = storm as { durationsH?: unknown; depthsMm?: unknown } | undefined;
   if (!st || !Array.isArray(st.durationsH) || !Array.isArray(st.depthsMm)) return;
   const n = st.durationsH.length;
   const m = st.depthsMm.length;
   if (n !== m) {
-    add([...at, 'depthsMm'], `has ${m} bar${m === 1 ? '' : 's'} but ${[...at, 'durationsH'].join('.')} has ${n}; every bar needs both a duration and a depth.`);
+    add(
+      [...at, 'depthsMm'],
+      `has ${m} bar${m === 1 ? '' : 's'} but ${[...at, 'durationsH'].join('.')} has ${n}; every bar needs both a duration and a depth.`,
+    );
     return;
   }
   // Bars already refused one by one are not reported again by the core.
@@ -408,7 +463,8 @@ function checkEventSet(
     const id = raw['id'];
     if (typeof id === 'string') {
       const earlier = seen.get(id);
-      if (earlier !== undefined) add([...at, 'id'], `"${id}" is already the id of event ${earlier + 1}; ids must be unique.`);
+      if (earlier !== undefined)
+        add([...at, 'id'], `"${id}" is already the id of event ${earlier + 1}; ids must be unique.`);
       else seen.set(id, k);
     }
     checkStorm(raw['storm'], [...at, 'storm'], add, clean);
@@ -430,7 +486,10 @@ const DocumentEntries = {
   methodMemory: MethodMemorySchema,
   observed: v.nullable(fields(ObservedEntries, 'an object with as, value, parameter and locked, or null')),
   streamflow: v.nullable(
-    fields(StreamflowEntries, 'an object with timesH, dischargeM3s, offsetH, baseflow, baseflowMemory and useAsObserved, or null'),
+    fields(
+      StreamflowEntries,
+      'an object with timesH, dischargeM3s, offsetH, baseflow, baseflowMemory and useAsObserved, or null',
+    ),
   ),
   eventSet: fields(EventSetEntries, 'an object with events, activeId, parameter and designPick'),
 };
@@ -450,7 +509,10 @@ const crossFieldChecks = v.rawCheck<v.InferOutput<v.ObjectSchema<typeof Document
       const n = storm.durationsH.length;
       const m = storm.depthsMm.length;
       if (n !== m) {
-        add(['storm', 'depthsMm'], `has ${m} bar${m === 1 ? '' : 's'} but storm.durationsH has ${n}; every bar needs both a duration and a depth.`);
+        add(
+          ['storm', 'depthsMm'],
+          `has ${m} bar${m === 1 ? '' : 's'} but storm.durationsH has ${n}; every bar needs both a duration and a depth.`,
+        );
       }
     }
     const method = doc['method'] as { kind?: unknown } | undefined;
@@ -518,8 +580,18 @@ function unknownFields(doc: RawDocument): Problem[] {
     visit(event, at, Object.keys(EventEntries), `event ${k + 1}`);
     if (!isRecord(event)) return;
     visit(event['storm'], [...at, 'storm'], Object.keys(StormEntries), `the storm of event ${k + 1}`);
-    visit(event['observed'], [...at, 'observed'], Object.keys(EventObservedEntries), `the observed runoff of event ${k + 1}`);
-    visit(event['streamflow'], [...at, 'streamflow'], Object.keys(StreamflowEntries), `the streamflow record of event ${k + 1}`);
+    visit(
+      event['observed'],
+      [...at, 'observed'],
+      Object.keys(EventObservedEntries),
+      `the observed runoff of event ${k + 1}`,
+    );
+    visit(
+      event['streamflow'],
+      [...at, 'streamflow'],
+      Object.keys(StreamflowEntries),
+      `the streamflow record of event ${k + 1}`,
+    );
   });
   return found;
 }
@@ -553,7 +625,11 @@ export function validateCurrent(doc: RawDocument): ScenarioResult {
  */
 export function parseScenario(input: unknown): ScenarioResult {
   if (input === null || typeof input !== 'object' || Array.isArray(input)) {
-    return failure([problem(`A scenario must be a JSON object with a version, a storm and a loss method (got ${describeValue(input)}).`)]);
+    return failure([
+      problem(
+        `A scenario must be a JSON object with a version, a storm and a loss method (got ${describeValue(input)}).`,
+      ),
+    ]);
   }
   const migrated = migrate(input as RawDocument);
   if (!migrated.ok) return failure(migrated.problems);

@@ -33,7 +33,10 @@ function wallMs(iso: string): number | null {
 }
 
 /** Hours from `fromIso` to `toIso`, or null when either is not a readable date-time. */
-export function hoursBetweenClocks(fromIso: string, toIso: string): { readonly hours: number; readonly asWritten: boolean } | null {
+export function hoursBetweenClocks(
+  fromIso: string,
+  toIso: string,
+): { readonly hours: number; readonly asWritten: boolean } | null {
   const zoned = ZONE.test(fromIso) && ZONE.test(toIso);
   const a = zoned ? Date.parse(fromIso) : wallMs(fromIso);
   const b = zoned ? Date.parse(toIso) : wallMs(toIso);
@@ -53,7 +56,9 @@ export function alignRecord(
       return {
         offsetH: between.hours,
         source: 'clocks',
-        note: oneZone ? 'Only one of the two start times names its time zone, so the clock readings are compared as written.' : null,
+        note: oneZone
+          ? 'Only one of the two start times names its time zone, so the clock readings are compared as written.'
+          : null,
       };
     }
   }

@@ -66,7 +66,12 @@ export function createDerived(): Derived {
   type Flow = NonNullable<Scenario['streamflow']>;
   // Keyed on the record's lists, not the record, so moving the offset does not separate again.
   const separation = memoLast(
-    (timesH: Flow['timesH'] | null, dischargeM3s: Flow['dischargeM3s'] | null, method: BaseflowMethod | null, areaM2: number): Separation | null => {
+    (
+      timesH: Flow['timesH'] | null,
+      dischargeM3s: Flow['dischargeM3s'] | null,
+      method: BaseflowMethod | null,
+      areaM2: number,
+    ): Separation | null => {
       if (timesH === null || dischargeM3s === null || method === null) return null;
       try {
         return { ok: true, result: separateBaseflow({ timesH, dischargeM3s }, method, { areaM2 }), method };
@@ -77,7 +82,12 @@ export function createDerived(): Derived {
     },
   );
   const separationOf = (s: Scenario): Separation | null =>
-    separation(s.streamflow?.timesH ?? null, s.streamflow?.dischargeM3s ?? null, s.streamflow?.baseflow ?? null, s.catchment.areaM2);
+    separation(
+      s.streamflow?.timesH ?? null,
+      s.streamflow?.dischargeM3s ?? null,
+      s.streamflow?.baseflow ?? null,
+      s.catchment.areaM2,
+    );
   const linked = (s: Scenario): boolean => Boolean(s.streamflow?.useAsObserved && s.observed !== null);
 
   const alignment = memoLast((stormStart: string | undefined, flow: Flow | null): Alignment | null =>
@@ -89,7 +99,10 @@ export function createDerived(): Derived {
     if (!sep.ok) return { ok: false, message: `The streamflow record cannot be separated: ${sep.message}` };
     const mm = sep.result.directDepthMm;
     if (mm === undefined) {
-      return { ok: false, message: 'Enter the catchment area to turn the separated direct runoff into a depth over the catchment.' };
+      return {
+        ok: false,
+        message: 'Enter the catchment area to turn the separated direct runoff into a depth over the catchment.',
+      };
     }
     return { ok: true, mm };
   });
@@ -109,7 +122,12 @@ export function createDerived(): Derived {
     linked(s) ? separatedTarget(separationOf(s)) : target(s.observed, s.catchment.areaM2);
 
   const fit = memoLast(
-    (storm: Scenario['storm'], method: LossMethod, parameter: string | null, t: Target | null): CalibrationResult | null => {
+    (
+      storm: Scenario['storm'],
+      method: LossMethod,
+      parameter: string | null,
+      t: Target | null,
+    ): CalibrationResult | null => {
       if (parameter === null || t === null || !t.ok) return null;
       return calibrate(storm, method, parameter, t.mm);
     },

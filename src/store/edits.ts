@@ -43,7 +43,10 @@ export function withUnits(s: Scenario, units: UnitSystem): Scenario {
 
 export function withAreaM2(s: Scenario, areaM2: number): Scenario {
   if (typeof areaM2 !== 'number' || !Number.isFinite(areaM2) || areaM2 < 0) {
-    throw new InputError('areaM2', `The catchment area must be a finite number of m², zero or more (got ${String(areaM2)}).`);
+    throw new InputError(
+      'areaM2',
+      `The catchment area must be a finite number of m², zero or more (got ${String(areaM2)}).`,
+    );
   }
   return areaM2 === s.catchment.areaM2 ? s : { ...s, catchment: { ...s.catchment, areaM2 } };
 }
@@ -209,7 +212,10 @@ export function withObserved(s: Scenario, patch: Partial<Observed> | null): Scen
   };
   const next: Observed = { ...base, ...patch };
   if (next.as !== 'depth' && next.as !== 'volume') {
-    throw new InputError('observed.as', `Observed runoff is given as "depth" or "volume" (got ${JSON.stringify(next.as)}).`);
+    throw new InputError(
+      'observed.as',
+      `Observed runoff is given as "depth" or "volume" (got ${JSON.stringify(next.as)}).`,
+    );
   }
   if (typeof next.value !== 'number' || !Number.isFinite(next.value) || next.value < 0) {
     throw new InputError(
@@ -218,7 +224,10 @@ export function withObserved(s: Scenario, patch: Partial<Observed> | null): Scen
     );
   }
   if (!methodSpec(s.method.kind).params.some((p) => p.key === next.parameter)) {
-    throw new InputError('observed.parameter', `${methodSpec(s.method.kind).label} has no parameter "${next.parameter}" to fit.`);
+    throw new InputError(
+      'observed.parameter',
+      `${methodSpec(s.method.kind).label} has no parameter "${next.parameter}" to fit.`,
+    );
   }
   const same =
     s.observed !== null &&

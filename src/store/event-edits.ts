@@ -31,10 +31,18 @@ export function withActiveEventSynced(s: Scenario): Scenario {
   const data = workbenchData(s);
   const sameObserved =
     event.observed === data.observed ||
-    (event.observed !== null && data.observed !== null && event.observed.as === data.observed.as && event.observed.value === data.observed.value);
+    (event.observed !== null &&
+      data.observed !== null &&
+      event.observed.as === data.observed.as &&
+      event.observed.value === data.observed.value);
   if (event.storm === data.storm && sameObserved && event.streamflow === data.streamflow) return s;
   const events = s.eventSet.events.slice();
-  events[k] = { ...event, storm: data.storm, observed: sameObserved ? event.observed : data.observed, streamflow: data.streamflow };
+  events[k] = {
+    ...event,
+    storm: data.storm,
+    observed: sameObserved ? event.observed : data.observed,
+    streamflow: data.streamflow,
+  };
   return { ...s, eventSet: { ...s.eventSet, events } };
 }
 
@@ -111,7 +119,10 @@ export function withEventOnWorkbench(s: Scenario, id: string): Scenario {
 /** The parameter fitted for every event (null: the workbench's). */
 export function withEventParameter(s: Scenario, parameter: string | null): Scenario {
   if (parameter !== null && !methodSpec(s.method.kind).params.some((p) => p.key === parameter)) {
-    throw new InputError('eventSet.parameter', `${methodSpec(s.method.kind).label} has no parameter "${parameter}" to fit.`);
+    throw new InputError(
+      'eventSet.parameter',
+      `${methodSpec(s.method.kind).label} has no parameter "${parameter}" to fit.`,
+    );
   }
   return parameter === s.eventSet.parameter ? s : { ...s, eventSet: { ...s.eventSet, parameter } };
 }
@@ -132,7 +143,11 @@ export function withDesignPick(s: Scenario, pick: DesignPickDoc): Scenario {
  * with the given loss method: the event on the workbench, if any, is kept
  * as it was in the set; the workbench has no observed runoff or record.
  */
-export function withDesignStormOnWorkbench(s: Scenario, storm: Scenario['storm'], method: Scenario['method']): Scenario {
+export function withDesignStormOnWorkbench(
+  s: Scenario,
+  storm: Scenario['storm'],
+  method: Scenario['method'],
+): Scenario {
   return {
     ...s,
     storm,

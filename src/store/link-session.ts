@@ -109,11 +109,22 @@ export function createLinkSession(options: LinkSessionOptions): LinkSession {
     if (!decoded.ok) {
       if (current.kind === 'shared') {
         // The shared scenario on screen still waits for the user's choice; say what was wrong with the new link.
-        state.setState({ ...current, problem: `The new link could not be opened: ${decoded.problems.map((p) => p.message).join(' ')}` }, true);
+        state.setState(
+          {
+            ...current,
+            problem: `The new link could not be opened: ${decoded.problems.map((p) => p.message).join(' ')}`,
+          },
+          true,
+        );
         return;
       }
       state.setState(
-        { kind: 'refused', problems: decoded.problems, ownName: store.getState().scenario.name, ownSaved: storageHolds() },
+        {
+          kind: 'refused',
+          problems: decoded.problems,
+          ownName: store.getState().scenario.name,
+          ownSaved: storageHolds(),
+        },
         true,
       );
       return;
@@ -128,12 +139,23 @@ export function createLinkSession(options: LinkSessionOptions): LinkSession {
       if (current.kind === 'shared') show(own.scenario);
       startSaving();
       clearFragment();
-      state.setState({ kind: 'kept', message: `The link holds ${quoted(decoded.scenario.name)} exactly as it is already saved in this browser.` }, true);
+      state.setState(
+        {
+          kind: 'kept',
+          message: `The link holds ${quoted(decoded.scenario.name)} exactly as it is already saved in this browser.`,
+        },
+        true,
+      );
       return;
     }
     show(decoded.scenario);
     state.setState(
-      { kind: 'shared', name: decoded.scenario.name, ownName: own.saved ? own.scenario.name : null, canSave: Boolean(storage && canSave) },
+      {
+        kind: 'shared',
+        name: decoded.scenario.name,
+        ownName: own.saved ? own.scenario.name : null,
+        canSave: Boolean(storage && canSave),
+      },
       true,
     );
   };
@@ -188,7 +210,10 @@ export function createLinkSession(options: LinkSessionOptions): LinkSession {
     own = { scenario: shared, saved: true };
     startSaving();
     clearFragment();
-    state.setState({ kind: 'kept', message: `${quoted(shared.name)} is now your current scenario in this browser.${putAside}` }, true);
+    state.setState(
+      { kind: 'kept', message: `${quoted(shared.name)} is now your current scenario in this browser.${putAside}` },
+      true,
+    );
   };
 
   const back = (): void => {
@@ -198,7 +223,10 @@ export function createLinkSession(options: LinkSessionOptions): LinkSession {
     startSaving();
     clearFragment();
     state.setState(
-      { kind: 'back', message: `Back to ${quoted(own.scenario.name)}. The shared scenario ${quoted(current.name)} was not saved.` },
+      {
+        kind: 'back',
+        message: `Back to ${quoted(own.scenario.name)}. The shared scenario ${quoted(current.name)} was not saved.`,
+      },
       true,
     );
   };

@@ -45,7 +45,10 @@ export function loadScenario(storage: StorageLike | null, fallback: Scenario, no
   } catch (error) {
     return {
       scenario: fallback,
-      notice: { kind: 'unavailable', message: `The saved scenario could not be read from this browser (${describe(error)}).` },
+      notice: {
+        kind: 'unavailable',
+        message: `The saved scenario could not be read from this browser (${describe(error)}).`,
+      },
       canSave: false,
     };
   }

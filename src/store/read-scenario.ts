@@ -7,7 +7,8 @@ import type { Scenario } from '../scenario/types';
  * older versions, checks every field, methods through the core). Never throws;
  * the message names the damaged fields.
  */
-export type ReadResult = { readonly ok: true; readonly scenario: Scenario } | { readonly ok: false; readonly message: string };
+export type ReadResult =
+  { readonly ok: true; readonly scenario: Scenario } | { readonly ok: false; readonly message: string };
 
 export function readScenario(value: unknown): ReadResult {
   const result = parseScenario(value);
@@ -21,7 +22,10 @@ export function readScenarioJson(json: string): ReadResult {
   try {
     value = JSON.parse(json);
   } catch (error) {
-    return { ok: false, message: `The saved text is not valid JSON (${error instanceof Error ? error.message : String(error)}).` };
+    return {
+      ok: false,
+      message: `The saved text is not valid JSON (${error instanceof Error ? error.message : String(error)}).`,
+    };
   }
   return readScenario(value);
 }

@@ -1,5 +1,13 @@
 import { createStore, type StoreApi } from 'zustand/vanilla';
-import { InputError, methodSpec, type CalibrationResult, type LossKind, type LossMethod, type Storm, type UnitSystem } from '../core';
+import {
+  InputError,
+  methodSpec,
+  type CalibrationResult,
+  type LossKind,
+  type LossMethod,
+  type Storm,
+  type UnitSystem,
+} from '../core';
 import type { Scenario } from '../scenario/types';
 import { createDerived, type Derived } from './derive';
 import {
@@ -124,7 +132,8 @@ export function createWorkbenchStore(initial: Scenario, options: CreateStoreOpti
       if (next === history.present) return;
       if (gesture) commit(replacePresent(history, next));
       else {
-        const recordOptions = opts.coalesceKey === undefined ? { nowMs: now() } : { nowMs: now(), coalesceKey: opts.coalesceKey };
+        const recordOptions =
+          opts.coalesceKey === undefined ? { nowMs: now() } : { nowMs: now(), coalesceKey: opts.coalesceKey };
         commit(record(history, next, label, recordOptions));
       }
     };
@@ -137,7 +146,8 @@ export function createWorkbenchStore(initial: Scenario, options: CreateStoreOpti
     const actions: WorkbenchActions = {
       edit,
       setName: (name) => edit('Rename scenario', (s) => withName(s, name), { coalesceKey: 'name' }),
-      setUnits: (units) => edit(units === 'us' ? 'Show US customary units' : 'Show SI units', (s) => withUnits(s, units)),
+      setUnits: (units) =>
+        edit(units === 'us' ? 'Show US customary units' : 'Show SI units', (s) => withUnits(s, units)),
       setAreaM2: (areaM2, opts) => edit('Set catchment area', (s) => withAreaM2(s, areaM2), opts),
 
       setStorm: (storm, label) => edit(label, (s) => withStorm(s, storm)),
@@ -147,7 +157,9 @@ export function createWorkbenchStore(initial: Scenario, options: CreateStoreOpti
       insertBar: (k, bar) => edit(`Insert bar ${k + 1}`, (s) => withBarInserted(s, k, bar)),
       deleteBar: (k) => edit(`Delete bar ${k + 1}`, (s) => withBarDeleted(s, k)),
       setStartIso: (startIso) =>
-        edit(startIso === undefined ? 'Clear storm start time' : 'Set storm start time', (s) => withStartIso(s, startIso)),
+        edit(startIso === undefined ? 'Clear storm start time' : 'Set storm start time', (s) =>
+          withStartIso(s, startIso),
+        ),
 
       setMethodKind: (kind) =>
         edit(`Use ${methodSpec(kind).label}`, (s) => withMethodKind(s, kind, derived.effectiveMethod(s))),
@@ -169,7 +181,10 @@ export function createWorkbenchStore(initial: Scenario, options: CreateStoreOpti
       setMethod: (method, label) =>
         edit(label, (s) => {
           if (method.kind !== s.method.kind) {
-            throw new InputError('kind', `A ${methodSpec(method.kind).label} preset cannot be set while ${methodSpec(s.method.kind).label} is in use.`);
+            throw new InputError(
+              'kind',
+              `A ${methodSpec(method.kind).label} preset cannot be set while ${methodSpec(s.method.kind).label} is in use.`,
+            );
           }
           return withMethod(s, method);
         }),
@@ -177,7 +192,8 @@ export function createWorkbenchStore(initial: Scenario, options: CreateStoreOpti
       setObserved: (patch, opts) => edit('Set observed runoff', (s) => withObserved(s, patch), opts),
       setKeepMatched: (on) =>
         edit(on ? 'Keep matched to observed runoff' : 'Stop keeping matched', (s) => {
-          if (!s.observed) throw new InputError('observed', 'Enter an observed runoff before keeping the method matched to it.');
+          if (!s.observed)
+            throw new InputError('observed', 'Enter an observed runoff before keeping the method matched to it.');
           if (on) return withObserved(s, { locked: true });
           // Keep what the screen showed: the fitted value becomes the stored one.
           const shown = derived.effectiveMethod(s);

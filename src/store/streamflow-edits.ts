@@ -67,7 +67,11 @@ function parameterObjection(
  * optional parameter the new record cannot take (an end point past its last
  * sample, a start of rise it does not have) put back to automatic.
  */
-function fitToRecord(record: Pick<Streamflow, 'timesH' | 'dischargeM3s'>, method: BaseflowMethod, areaM2: number): BaseflowMethod {
+function fitToRecord(
+  record: Pick<Streamflow, 'timesH' | 'dischargeM3s'>,
+  method: BaseflowMethod,
+  areaM2: number,
+): BaseflowMethod {
   let current = method;
   const spec = baseflowMethodSpec(method.kind) as BaseflowMethodSpec;
   for (let i = 0; i < spec.params.length; i++) {
@@ -116,7 +120,10 @@ function requireRecord(s: Scenario, field: string): Streamflow {
 export function withoutStreamflow(s: Scenario, keepDepthMm?: number): Scenario {
   if (s.streamflow === null) return s;
   const linked = s.streamflow.useAsObserved && s.observed !== null;
-  const observed = linked && s.observed && keepDepthMm !== undefined ? { ...s.observed, as: 'depth' as const, value: keepDepthMm } : s.observed;
+  const observed =
+    linked && s.observed && keepDepthMm !== undefined
+      ? { ...s.observed, as: 'depth' as const, value: keepDepthMm }
+      : s.observed;
   return { ...s, streamflow: null, observed };
 }
 
@@ -157,7 +164,9 @@ export function withBaseflowParam(s: Scenario, key: string, value: number | unde
     throw new InputError(key, `${param.label} cannot be left empty (${spec.label}).`);
   }
   const baseflow =
-    value === undefined ? withoutParam(flow.baseflow, key) : ({ ...flow.baseflow, [key]: value === 0 ? 0 : value } as BaseflowMethod);
+    value === undefined
+      ? withoutParam(flow.baseflow, key)
+      : ({ ...flow.baseflow, [key]: value === 0 ? 0 : value } as BaseflowMethod);
   validateBaseflowMethod(baseflow);
   const objection = parameterObjection(flow, baseflow, s.catchment.areaM2);
   if (objection) throw objection;
@@ -184,12 +193,16 @@ export function withSeparationAsObserved(s: Scenario, on: boolean, depthMm?: num
   if (on) {
     if (flow.useAsObserved && s.observed?.locked) return s;
     const parameter = s.observed?.parameter ?? methodSpec(s.method.kind).params[0]?.key;
-    if (parameter === undefined) throw new InputError('useAsObserved', `${methodSpec(s.method.kind).label} has no parameter to fit.`);
-    const observed = s.observed ? { ...s.observed, locked: true } : { as: 'depth' as const, value: depth ?? 0, parameter, locked: true };
+    if (parameter === undefined)
+      throw new InputError('useAsObserved', `${methodSpec(s.method.kind).label} has no parameter to fit.`);
+    const observed = s.observed
+      ? { ...s.observed, locked: true }
+      : { as: 'depth' as const, value: depth ?? 0, parameter, locked: true };
     return { ...s, observed, streamflow: flow.useAsObserved ? flow : { ...flow, useAsObserved: true } };
   }
   if (!flow.useAsObserved) return s;
-  const observed = s.observed && depth !== undefined ? { ...s.observed, as: 'depth' as const, value: depth } : s.observed;
+  const observed =
+    s.observed && depth !== undefined ? { ...s.observed, as: 'depth' as const, value: depth } : s.observed;
   return { ...s, observed, streamflow: { ...flow, useAsObserved: false } };
 }
 

@@ -39,28 +39,28 @@ function Workbench({ rainfallTools }: { rainfallTools?: ReactNode }) {
             id: 'workbench',
             label: 'Workbench',
             content: (
-            <div className="bench">
-              <StorageNoticeBar />
-              <LinkNotice />
-              <div className="bench__main">
-                <StormInputProvider>
-                  <RainfallToolbar tools={rainfallTools ?? <RainfallTools />} />
-                  <StormPanels />
-                  <DrawableChart>
-                    <Hyetograph />
-                  </DrawableChart>
-                  <HydrographChart />
-                  <ResultsPanel />
-                  <SeparationPanel />
-                  <BarTable />
-                </StormInputProvider>
+              <div className="bench">
+                <StorageNoticeBar />
+                <LinkNotice />
+                <div className="bench__main">
+                  <StormInputProvider>
+                    <RainfallToolbar tools={rainfallTools ?? <RainfallTools />} />
+                    <StormPanels />
+                    <DrawableChart>
+                      <Hyetograph />
+                    </DrawableChart>
+                    <HydrographChart />
+                    <ResultsPanel />
+                    <SeparationPanel />
+                    <BarTable />
+                  </StormInputProvider>
+                </div>
+                <div className="bench__side">
+                  <MethodPanel />
+                  <MatchingPanel />
+                </div>
+                <ComparePanel />
               </div>
-              <div className="bench__side">
-                <MethodPanel />
-                <MatchingPanel />
-              </div>
-              <ComparePanel />
-            </div>
             ),
           },
           { id: 'events', label: 'Event set', content: <EventsView /> },

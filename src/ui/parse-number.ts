@@ -12,10 +12,16 @@ export function parseNumber(text: string): Parsed {
   if (t === '') return { ok: false, message: 'Enter a number.' };
   const hasComma = t.includes(',');
   if (hasComma && t.includes('.')) {
-    return { ok: false, message: `“${t}” mixes a decimal point and a comma; write it with one decimal mark and no thousands separators.` };
+    return {
+      ok: false,
+      message: `“${t}” mixes a decimal point and a comma; write it with one decimal mark and no thousands separators.`,
+    };
   }
   if ((t.match(/,/g) ?? []).length > 1) {
-    return { ok: false, message: `“${t}” has more than one comma; write it with one decimal mark and no thousands separators.` };
+    return {
+      ok: false,
+      message: `“${t}” has more than one comma; write it with one decimal mark and no thousands separators.`,
+    };
   }
   const normal = hasComma ? t.replace(',', '.') : t;
   if (!NUMBER.test(normal)) return { ok: false, message: `“${t}” is not a number.` };

@@ -24,18 +24,33 @@ test('loss passes and calibration', () => {
     }
     const rain = computeLossesUnchecked(storm, { kind: 'proportional', coefficient: 1 }).rainMm;
     const target = 0.3 * rain;
-    measure('calibrate', 'constant.rateMmH (exact φ)', () => calibrate(storm, METHODS[0] as LossMethod, 'rateMmH', target), {
-      bars: n,
-      ...(n === 1e6 ? { targetMs: 20 } : {}),
-    });
-    measure('calibrate', 'proportional.coefficient', () => calibrate(storm, METHODS[2] as LossMethod, 'coefficient', target), {
-      bars: n,
-    });
-    for (const p of ['initialMm', 'rateMmH']) {
-      measure('calibrate', `initial-continuing.${p} (Brent)`, () => calibrate(storm, METHODS[1] as LossMethod, p, target), {
+    measure(
+      'calibrate',
+      'constant.rateMmH (exact φ)',
+      () => calibrate(storm, METHODS[0] as LossMethod, 'rateMmH', target),
+      {
         bars: n,
-        samples: n >= 1e6 ? 5 : 15,
-      });
+        ...(n === 1e6 ? { targetMs: 20 } : {}),
+      },
+    );
+    measure(
+      'calibrate',
+      'proportional.coefficient',
+      () => calibrate(storm, METHODS[2] as LossMethod, 'coefficient', target),
+      {
+        bars: n,
+      },
+    );
+    for (const p of ['initialMm', 'rateMmH']) {
+      measure(
+        'calibrate',
+        `initial-continuing.${p} (Brent)`,
+        () => calibrate(storm, METHODS[1] as LossMethod, p, target),
+        {
+          bars: n,
+          samples: n >= 1e6 ? 5 : 15,
+        },
+      );
     }
   }
 });

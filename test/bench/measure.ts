@@ -63,7 +63,9 @@ export function printTable(title: string): void {
     fmt(r.p95Ms),
     String(r.samples),
     r.targetMs === undefined ? '' : `< ${r.targetMs}`,
-    r.targetMs === undefined ? '' : `${(r.medianMs / r.targetMs).toFixed(2)}${r.medianMs <= r.targetMs ? ' ok' : ' OVER'}`,
+    r.targetMs === undefined
+      ? ''
+      : `${(r.medianMs / r.targetMs).toFixed(2)}${r.medianMs <= r.targetMs ? ' ok' : ' OVER'}`,
   ]);
   const head = ['group', 'case', 'bars', 'median ms', 'p95 ms', 'samples', 'target ms', 'median/target'];
   const widths = head.map((h, c) => Math.max(h.length, ...rows.map((r) => (r[c] as string).length)));

@@ -165,7 +165,13 @@ async function dragAcross(page, steps) {
     queue: window.__probe.queue,
     work: window.__probe.work,
   }));
-  return { update: summarise(samples), frame: summarise(frames), queue: summarise(queue), work: summarise(work), skipped };
+  return {
+    update: summarise(samples),
+    frame: summarise(frames),
+    queue: summarise(queue),
+    work: summarise(work),
+    skipped,
+  };
 }
 
 /** Time from a click on the unit switch to the next frame with every layer redrawn. */
@@ -179,11 +185,13 @@ async function redrawTimes(page, rounds) {
       );
       const t0 = performance.now();
       input.click();
-      await new Promise((ok) => requestAnimationFrame(() => {
-        const channel = new MessageChannel();
-        channel.port1.onmessage = ok;
-        channel.port2.postMessage(0);
-      }));
+      await new Promise((ok) =>
+        requestAnimationFrame(() => {
+          const channel = new MessageChannel();
+          channel.port1.onmessage = ok;
+          channel.port2.postMessage(0);
+        }),
+      );
       return performance.now() - t0;
     }, target);
     times.push(t);
@@ -203,7 +211,9 @@ try {
   const big = await openWith(browser, server.baseUrl, syntheticScenario(100_000, 0.25, 11));
   const pathCount = await big.page.evaluate(() => document.querySelectorAll('.chart__svg path').length);
   const subpaths = await big.page.evaluate(() =>
-    [...document.querySelectorAll('.chart__svg path[data-layer]')].map((p) => (p.getAttribute('d') ?? '').split('M').length - 1),
+    [...document.querySelectorAll('.chart__svg path[data-layer]')].map(
+      (p) => (p.getAttribute('d') ?? '').split('M').length - 1,
+    ),
   );
   const redraw100k = await redrawTimes(big.page, 10);
   const drag100k = await dragAcross(big.page, 100);
@@ -211,17 +221,30 @@ try {
 
   const verdict = (x) => (x < TARGET_P95_MS ? 'met' : 'NOT met');
   console.log('Drag the loss-rate line across a 10,000-bar storm, results and chart updated on the page:');
-  console.log(`  from the pointer event's time stamp: ${drag10k.update.n} moves, p50 ${ms(drag10k.update.p50)}, p95 ${ms(drag10k.update.p95)}, max ${ms(drag10k.update.max)}` +
-    `   (target p95 < ${TARGET_P95_MS} ms: ${verdict(drag10k.update.p95)})`);
-  console.log(`    of which chromium held the event before dispatching it (pointermove is aligned to frames): p50 ${ms(drag10k.queue.p50)}, p95 ${ms(drag10k.queue.p95)}`);
-  console.log(`  from the event reaching the page (the page's own work): p50 ${ms(drag10k.work.p50)}, p95 ${ms(drag10k.work.p95)}, max ${ms(drag10k.work.max)}` +
-    `   (target p95 < ${TARGET_P95_MS} ms: ${verdict(drag10k.work.p95)})`);
-  console.log(`  to the frame after: p50 ${ms(drag10k.frame.p50)}, p95 ${ms(drag10k.frame.p95)}` + (drag10k.skipped ? `  (${drag10k.skipped} moves changed nothing shown)` : ''));
+  console.log(
+    `  from the pointer event's time stamp: ${drag10k.update.n} moves, p50 ${ms(drag10k.update.p50)}, p95 ${ms(drag10k.update.p95)}, max ${ms(drag10k.update.max)}` +
+      `   (target p95 < ${TARGET_P95_MS} ms: ${verdict(drag10k.update.p95)})`,
+  );
+  console.log(
+    `    of which chromium held the event before dispatching it (pointermove is aligned to frames): p50 ${ms(drag10k.queue.p50)}, p95 ${ms(drag10k.queue.p95)}`,
+  );
+  console.log(
+    `  from the event reaching the page (the page's own work): p50 ${ms(drag10k.work.p50)}, p95 ${ms(drag10k.work.p95)}, max ${ms(drag10k.work.max)}` +
+      `   (target p95 < ${TARGET_P95_MS} ms: ${verdict(drag10k.work.p95)})`,
+  );
+  console.log(
+    `  to the frame after: p50 ${ms(drag10k.frame.p50)}, p95 ${ms(drag10k.frame.p95)}` +
+      (drag10k.skipped ? `  (${drag10k.skipped} moves changed nothing shown)` : ''),
+  );
   console.log('\n100,000-bar record:');
   console.log(`  open and first draw (navigation → chart on screen): ${big.loadMs} ms`);
-  console.log(`  chart elements: ${pathCount} paths; bar layers hold ${subpaths.join(' and ')} subpaths (merged per pixel column)`);
+  console.log(
+    `  chart elements: ${pathCount} paths; bar layers hold ${subpaths.join(' and ')} subpaths (merged per pixel column)`,
+  );
   console.log(`  full redraw (unit switch → next frame): p50 ${ms(redraw100k.p50)}, p95 ${ms(redraw100k.p95)}`);
-  console.log(`  drag, from the event's time stamp: p50 ${ms(drag100k.update.p50)}, p95 ${ms(drag100k.update.p95)}; the page's own work: p50 ${ms(drag100k.work.p50)}, p95 ${ms(drag100k.work.p95)}; to the frame after: p95 ${ms(drag100k.frame.p95)}`);
+  console.log(
+    `  drag, from the event's time stamp: p50 ${ms(drag100k.update.p50)}, p95 ${ms(drag100k.update.p95)}; the page's own work: p50 ${ms(drag100k.work.p50)}, p95 ${ms(drag100k.work.p95)}; to the frame after: p95 ${ms(drag100k.frame.p95)}`,
+  );
 } finally {
   await close();
   await server.close();

@@ -39,7 +39,12 @@ export const tests = [
           depthsMm: [0.4, 0.8, 1.2, 1.8, 2.6, 3.8, 5.6, 6.4, 4.8, 3.6, 2.8, 2.2, 1.6, 1.2, 1.0, 0.8, 0.6, 0.4],
         };
         const method = { kind: 'constant', rateMmH: 8 };
-        const events = observed.map((mm, k) => ({ id: `e${k + 1}`, name: `Event ${k + 1}`, storm, observedExcessMm: mm }));
+        const events = observed.map((mm, k) => ({
+          id: `e${k + 1}`,
+          name: `Event ${k + 1}`,
+          storm,
+          observedExcessMm: mm,
+        }));
         const fits = core.fitEvents(events, method, 'rateMmH');
         const summary = core.summariseFits(fits);
         const median = core.pickDesignValue(summary, 'median');
@@ -51,7 +56,8 @@ export const tests = [
           if (!text.includes(want)) throw new Error(`event ${k + 1} row "${text}" lacks the core's fit ${want}`);
         }
         const medianText = await page.getByText(/^Design loss rate φ:/).textContent();
-        if (!medianText.includes(`${format.formatValue(median)} mm/h`)) throw new Error(`design value shown as "${medianText}", core median ${median}`);
+        if (!medianText.includes(`${format.formatValue(median)} mm/h`))
+          throw new Error(`design value shown as "${medianText}", core median ${median}`);
 
         // The design storm from the form's starting values, with the design loss.
         await page.getByRole('tab', { name: 'Design storm' }).click();
@@ -60,13 +66,15 @@ export const tests = [
         const result = core.computeLosses(design, { kind: 'constant', rateMmH: median });
         const totals = page.getByLabel('Design storm totals');
         const excess = await totals.getByText(/mm$/).nth(2).textContent();
-        if (excess !== `${format.formatValue(result.totalExcessMm)} mm`) throw new Error(`excess shown ${excess}, core ${result.totalExcessMm}`);
+        if (excess !== `${format.formatValue(result.totalExcessMm)} mm`)
+          throw new Error(`excess shown ${excess}, core ${result.totalExcessMm}`);
         await shot(page, 'design');
 
         await page.getByRole('button', { name: 'Put the design storm on the workbench' }).click();
         await page.getByRole('tab', { name: 'Workbench' }).click();
         const bench = await page.getByLabel('Excess depth').first().textContent();
-        if (!bench.includes(format.formatValue(result.totalExcessMm))) throw new Error(`workbench excess ${bench}, core ${result.totalExcessMm}`);
+        if (!bench.includes(format.formatValue(result.totalExcessMm)))
+          throw new Error(`workbench excess ${bench}, core ${result.totalExcessMm}`);
         await shot(page, 'bench');
       } finally {
         await close();

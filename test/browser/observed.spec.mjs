@@ -8,7 +8,8 @@
 import { AXE, check, loadSourceModules } from './support.mjs';
 
 /** Source modules to check the page against (see support.mjs). */
-const loadModules = () => loadSourceModules({ core: '/src/core/index.ts', scenario: '/src/scenario/index.ts', format: '/src/ui/format.ts' });
+const loadModules = () =>
+  loadSourceModules({ core: '/src/core/index.ts', scenario: '/src/scenario/index.ts', format: '/src/ui/format.ts' });
 
 /**
  * An INVENTED event record for the demo catchment (no real gauge): 15-minute
@@ -23,12 +24,15 @@ function inventedRecord() {
     const wave = since > 0 ? 5 * (since / 1.5) ** 3 * Math.exp(3 * (1 - since / 1.5)) : 0;
     const q = 0.35 + (since > 0 ? 0.08 * Math.min(1, since / 6) : 0) + wave;
     const minutes = 14 * 60 + 15 * k;
-    lines.push(`2026-07-${14 + Math.floor(minutes / 1440)} ${pad(Math.floor((minutes % 1440) / 60))}:${pad(minutes % 60)}\t${q.toFixed(3)}`);
+    lines.push(
+      `2026-07-${14 + Math.floor(minutes / 1440)} ${pad(Math.floor((minutes % 1440) / 60))}:${pad(minutes % 60)}\t${q.toFixed(3)}`,
+    );
   }
   return lines.join('\n');
 }
 
-const shown = async (page, label) => ((await page.getByLabel(label, { exact: true }).first().textContent()) ?? '').trim();
+const shown = async (page, label) =>
+  ((await page.getByLabel(label, { exact: true }).first().textContent()) ?? '').trim();
 const saved = (page) => page.evaluate(() => JSON.parse(localStorage.getItem('raincut.scenario') ?? 'null'));
 
 /** Waits until the page has saved an end point equal to the handle's value, and returns the saved scenario. */
@@ -93,14 +97,26 @@ export const tests = [
         const phiLine = page.getByRole('slider', { name: 'Loss rate φ' });
         // A new record starts with the end N = A^0.2 days after the peak (3.2 km² → 1.04 days).
         const auto = Number(await handle.getAttribute('aria-valuenow'));
-        await page.waitForFunction(() => Array.isArray(JSON.parse(localStorage.getItem('raincut.scenario') ?? 'null')?.streamflow?.timesH));
+        await page.waitForFunction(() =>
+          Array.isArray(JSON.parse(localStorage.getItem('raincut.scenario') ?? 'null')?.streamflow?.timesH),
+        );
         const first = await saved(page);
         check(first.streamflow.timesH.length === 121, `the record saved has ${first.streamflow.timesH.length} samples`);
-        const coreAuto = mods.core.separateBaseflow(first.streamflow, { kind: 'straight-line' }, { areaM2: first.catchment.areaM2 });
-        check(Math.abs(auto - coreAuto.endTimeH) < 1e-9, `the handle stands at ${auto} h, the core's N = A^0.2 end at ${coreAuto.endTimeH} h`);
+        const coreAuto = mods.core.separateBaseflow(
+          first.streamflow,
+          { kind: 'straight-line' },
+          { areaM2: first.catchment.areaM2 },
+        );
+        check(
+          Math.abs(auto - coreAuto.endTimeH) < 1e-9,
+          `the handle stands at ${auto} h, the core's N = A^0.2 end at ${coreAuto.endTimeH} h`,
+        );
 
         await page.getByRole('button', { name: 'Use as observed runoff' }).click();
-        check((await page.getByRole('button', { name: 'Use as observed runoff' }).getAttribute('aria-pressed')) === 'true', 'the link is not on');
+        check(
+          (await page.getByRole('button', { name: 'Use as observed runoff' }).getAttribute('aria-pressed')) === 'true',
+          'the link is not on',
+        );
         check(await page.getByRole('switch', { name: 'Keep matched' }).isChecked(), 'Keep matched is not on');
         const volumeBefore = await shown(page, 'Direct runoff volume');
         const rateBefore = Number(await phiLine.getAttribute('data-value-mmh'));
@@ -122,7 +138,10 @@ export const tests = [
         check(rate === want.rateMmH, `the matched loss rate is ${rate} mm/h, the core fits ${want.rateMmH} mm/h`);
         check(rate !== rateBefore, `the matched loss rate did not change (${rate} mm/h)`);
         const answer = (await page.locator('#fit-answer').textContent()) ?? '';
-        check(answer.startsWith(`Matched: Loss rate φ ${mods.format.formatValue(want.rateMmH)} mm/h`), `Matching says "${answer}"`);
+        check(
+          answer.startsWith(`Matched: Loss rate φ ${mods.format.formatValue(want.rateMmH)} mm/h`),
+          `Matching says "${answer}"`,
+        );
         const undo = await page.getByRole('button', { name: 'Undo' }).getAttribute('title');
         check(undo === 'Undo: Drag end of direct runoff (Ctrl+Z)', `the drag is not one undo step: ${undo}`);
 
@@ -151,7 +170,9 @@ export const tests = [
         await pasteRecord(page);
         await page.getByRole('button', { name: 'Use as observed runoff' }).click();
         await dragEnd(page, -200);
-        const endH = Number(await page.getByRole('slider', { name: 'End of direct runoff' }).getAttribute('aria-valuenow'));
+        const endH = Number(
+          await page.getByRole('slider', { name: 'End of direct runoff' }).getAttribute('aria-valuenow'),
+        );
         const s = await savedWithEnd(page, endH);
         const link = mods.scenario.encodeScenarioLink({ ...s, name: 'Observed event check (invented)' });
         const want = expected(mods, s);
@@ -165,12 +186,22 @@ export const tests = [
           await other.getByRole('region', { name: 'Shared scenario: “Observed event check (invented)”' }).waitFor();
           const handle = other.getByRole('slider', { name: 'End of direct runoff' });
           check(Number(await handle.getAttribute('aria-valuenow')) === endH, 'the end point did not travel');
-          check((await shown(other, 'Direct runoff volume')) === want.volume, 'the direct runoff volume differs in the fresh browser');
-          check((await shown(other, 'Direct runoff depth')) === want.depth, 'the direct runoff depth differs in the fresh browser');
-          const rate = Number(await other.getByRole('slider', { name: 'Loss rate φ' }).getAttribute('data-value-mmh'));
-          check(rate === want.rateMmH, `the matched loss rate is ${rate} mm/h in the fresh browser, the core fits ${want.rateMmH}`);
           check(
-            (await other.getByRole('button', { name: 'Use as observed runoff' }).getAttribute('aria-pressed')) === 'true',
+            (await shown(other, 'Direct runoff volume')) === want.volume,
+            'the direct runoff volume differs in the fresh browser',
+          );
+          check(
+            (await shown(other, 'Direct runoff depth')) === want.depth,
+            'the direct runoff depth differs in the fresh browser',
+          );
+          const rate = Number(await other.getByRole('slider', { name: 'Loss rate φ' }).getAttribute('data-value-mmh'));
+          check(
+            rate === want.rateMmH,
+            `the matched loss rate is ${rate} mm/h in the fresh browser, the core fits ${want.rateMmH}`,
+          );
+          check(
+            (await other.getByRole('button', { name: 'Use as observed runoff' }).getAttribute('aria-pressed')) ===
+              'true',
             'the link to the observed runoff did not travel',
           );
           check(errors.length === 0, errors.join('; '));
@@ -193,9 +224,13 @@ export const tests = [
         page.evaluate(async () => {
           const parts = ['.hydro', '.separation', '[role="dialog"]'].filter((sel) => document.querySelector(sel));
           const result = await window.axe.run({ include: parts.map((sel) => [sel]) });
-          const found = result.violations.map((v) => `${v.id}: ${v.help} (${v.nodes.map((n) => n.target.join(' ')).join(', ')})`);
+          const found = result.violations.map(
+            (v) => `${v.id}: ${v.help} (${v.nodes.map((n) => n.target.join(' ')).join(', ')})`,
+          );
           // An empty selection would pass everything: say what was looked at.
-          return parts.length >= 2 && result.passes.length > 0 ? found : [`nothing checked (${parts.join(', ') || 'no parts on screen'})`];
+          return parts.length >= 2 && result.passes.length > 0
+            ? found
+            : [`nothing checked (${parts.join(', ') || 'no parts on screen'})`];
         });
       await pasteRecord(page);
       const withRecord = await run();

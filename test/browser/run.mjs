@@ -28,7 +28,11 @@ try {
         console.log(`  ok   ${spec} › ${t.name} (${Math.round(performance.now() - started)} ms)`);
       } catch (error) {
         failed++;
-        console.log(`  FAIL ${spec} › ${t.name}\n       ${String(error?.stack ?? error).split('\n').join('\n       ')}`);
+        console.log(
+          `  FAIL ${spec} › ${t.name}\n       ${String(error?.stack ?? error)
+            .split('\n')
+            .join('\n       ')}`,
+        );
       } finally {
         await context.close();
       }

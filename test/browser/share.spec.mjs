@@ -11,10 +11,19 @@ import { AXE, check, loadSourceModules } from './support.mjs';
 /** Source modules to check the page against (see support.mjs). */
 const loadModules = () => loadSourceModules({ core: '/src/core/index.ts', scenario: '/src/scenario/index.ts' });
 
-const RESULTS = ['Rainfall depth', 'Loss depth', 'Excess depth', 'Runoff volume', 'Runoff fraction', 'Peak excess intensity'];
+const RESULTS = [
+  'Rainfall depth',
+  'Loss depth',
+  'Excess depth',
+  'Runoff volume',
+  'Runoff fraction',
+  'Peak excess intensity',
+];
 
-const shown = async (page, label) => ((await page.getByLabel(label, { exact: true }).first().textContent()) ?? '').trim();
-const results = async (page) => Object.fromEntries(await Promise.all(RESULTS.map(async (l) => [l, await shown(page, l)])));
+const shown = async (page, label) =>
+  ((await page.getByLabel(label, { exact: true }).first().textContent()) ?? '').trim();
+const results = async (page) =>
+  Object.fromEntries(await Promise.all(RESULTS.map(async (l) => [l, await shown(page, l)])));
 const stored = (page) => page.evaluate(() => localStorage.getItem('raincut.scenario'));
 
 /** Waits until the page has saved the scenario with this name (the last edit made), and returns its text. */
@@ -55,9 +64,13 @@ async function copyLink(page) {
   const message = page.getByLabel('Scenario tools message');
   await message.waitFor();
   const box = message.getByRole('textbox', { name: 'Share link' });
-  const link = (await box.count()) > 0 ? await box.inputValue() : await page.evaluate(() => navigator.clipboard.readText());
+  const link =
+    (await box.count()) > 0 ? await box.inputValue() : await page.evaluate(() => navigator.clipboard.readText());
   const said = (await message.textContent()) ?? '';
-  check(said.includes(`The link is ${link.length} characters long`), `the length said is not the link's ${link.length}: "${said}"`);
+  check(
+    said.includes(`The link is ${link.length} characters long`),
+    `the length said is not the link's ${link.length}: "${said}"`,
+  );
   return link;
 }
 
@@ -82,7 +95,10 @@ export const tests = [
         built.storm.depthsMm[2] === 2.25 && built.storm.depthsMm[7] === 9.75 && built.storm.depthsMm[11] === 0,
         `the typed bars did not land: ${built.storm.depthsMm}`,
       );
-      check(built.method.kind === 'initial-continuing' && built.method.initialMm === 7.5 && built.method.rateMmH === 3.25, `method ${JSON.stringify(built.method)}`);
+      check(
+        built.method.kind === 'initial-continuing' && built.method.initialMm === 7.5 && built.method.rateMmH === 3.25,
+        `method ${JSON.stringify(built.method)}`,
+      );
       const link = await copyLink(page);
       check(link.startsWith(`${baseUrl}#rc1.`), `not a link to this page: ${link.slice(0, 60)}`);
       const want = await results(page);
@@ -96,10 +112,17 @@ export const tests = [
         await other.goto(link);
         await other.getByRole('region', { name: 'Shared scenario: “Share check (invented)”' }).waitFor();
         const got = await results(other);
-        for (const label of RESULTS) check(got[label] === want[label], `${label}: the link shows "${got[label]}", the sender "${want[label]}"`);
+        for (const label of RESULTS)
+          check(got[label] === want[label], `${label}: the link shows "${got[label]}", the sender "${want[label]}"`);
         check(await other.getByRole('radio', { name: 'US customary' }).isChecked(), 'the unit choice did not travel');
-        check((await other.getByLabel('Loss method').inputValue()) === 'initial-continuing', 'the method did not travel');
-        check((await other.getByLabel('Scenario name').inputValue()) === 'Share check (invented)', 'the name did not travel');
+        check(
+          (await other.getByLabel('Loss method').inputValue()) === 'initial-continuing',
+          'the method did not travel',
+        );
+        check(
+          (await other.getByLabel('Scenario name').inputValue()) === 'Share check (invented)',
+          'the name did not travel',
+        );
         check((await stored(other)) === null, 'the fresh browser saved the shared scenario before it was kept');
 
         await other.getByRole('button', { name: 'Keep the shared scenario' }).click();
@@ -128,12 +151,21 @@ export const tests = [
         await page.goto(`${baseUrl}#${cut}`);
         const alert = page.getByRole('alert').filter({ hasText: 'The shared link could not be opened.' });
         await alert.waitFor();
-        check(/The link is damaged/.test((await alert.textContent()) ?? ''), `no reason given: ${await alert.textContent()}`);
-        check((await page.getByLabel('Scenario name').inputValue()) === 'Mine, saved', 'the damaged link changed the scenario');
+        check(
+          /The link is damaged/.test((await alert.textContent()) ?? ''),
+          `no reason given: ${await alert.textContent()}`,
+        );
+        check(
+          (await page.getByLabel('Scenario name').inputValue()) === 'Mine, saved',
+          'the damaged link changed the scenario',
+        );
         // Loaded afresh with the damaged link in the address.
         await page.reload();
         await alert.waitFor();
-        check((await page.getByLabel('Scenario name').inputValue()) === 'Mine, saved', 'after reload the scenario changed');
+        check(
+          (await page.getByLabel('Scenario name').inputValue()) === 'Mine, saved',
+          'after reload the scenario changed',
+        );
         check((await stored(page)) === mine, 'the saved scenario was written over');
       } finally {
         await close();
@@ -157,15 +189,24 @@ export const tests = [
         check(text.includes('Estimates are for screening'), 'the CSV has no caution');
         const parsed = Papa.parse(text, { header: true, comments: '#', skipEmptyLines: true });
         check(parsed.errors.length === 0, `CSV errors: ${JSON.stringify(parsed.errors.slice(0, 3))}`);
-        check(parsed.data.length === s.storm.depthsMm.length, `${parsed.data.length} rows for ${s.storm.depthsMm.length} bars`);
+        check(
+          parsed.data.length === s.storm.depthsMm.length,
+          `${parsed.data.length} rows for ${s.storm.depthsMm.length} bars`,
+        );
         parsed.data.forEach((row, k) => {
           const want = core.convertDepth(s.storm.depthsMm[k], 'mm', 'in');
-          check(Number(row['Rainfall depth (in)']) === want, `bar ${k + 1}: CSV ${row['Rainfall depth (in)']}, scenario ${want} in`);
+          check(
+            Number(row['Rainfall depth (in)']) === want,
+            `bar ${k + 1}: CSV ${row['Rainfall depth (in)']}, scenario ${want} in`,
+          );
           check(Number(row['Duration (h)']) === s.storm.durationsH[k], `bar ${k + 1}: duration ${row['Duration (h)']}`);
         });
         const r = core.computeLosses(s.storm, s.method);
         parsed.data.forEach((row, k) => {
-          check(Number(row['Loss (in)']) === core.convertDepth(r.lossMm[k], 'mm', 'in'), `bar ${k + 1}: loss is not the core’s`);
+          check(
+            Number(row['Loss (in)']) === core.convertDepth(r.lossMm[k], 'mm', 'in'),
+            `bar ${k + 1}: loss is not the core’s`,
+          );
         });
 
         const svg = await download(page, 'Export SVG');
@@ -174,7 +215,9 @@ export const tests = [
         const verdict = await page.evaluate(async (xml) => {
           const doc = new DOMParser().parseFromString(xml, 'image/svg+xml');
           const root = doc.documentElement;
-          const fills = Array.from(doc.querySelectorAll('path')).map((p) => /fill:\s*(rgb\([^)]*\))/.exec(p.getAttribute('style') ?? '')?.[1] ?? null);
+          const fills = Array.from(doc.querySelectorAll('path')).map(
+            (p) => /fill:\s*(rgb\([^)]*\))/.exec(p.getAttribute('style') ?? '')?.[1] ?? null,
+          );
           const img = new Image();
           const url = URL.createObjectURL(new Blob([xml], { type: 'image/svg+xml' }));
           const loaded = await new Promise((ok) => {
@@ -197,19 +240,34 @@ export const tests = [
             height: Number(root.getAttribute('height')),
           };
         }, svgText);
-        check(verdict.errors === 0 && verdict.root === 'svg' && verdict.ns === 'http://www.w3.org/2000/svg', `not a valid SVG: ${JSON.stringify(verdict)}`);
+        check(
+          verdict.errors === 0 && verdict.root === 'svg' && verdict.ns === 'http://www.w3.org/2000/svg',
+          `not a valid SVG: ${JSON.stringify(verdict)}`,
+        );
         check(verdict.loaded, 'the SVG does not load as a picture');
         check(verdict.classes === 0, 'the SVG still leans on page classes');
         // The workbench's excess blue and loss tan, written on the shapes.
-        check(verdict.fills.includes('rgb(45, 95, 139)') && verdict.fills.includes('rgb(216, 201, 166)'), `fills: ${verdict.fills}`);
+        check(
+          verdict.fills.includes('rgb(45, 95, 139)') && verdict.fills.includes('rgb(216, 201, 166)'),
+          `fills: ${verdict.fills}`,
+        );
         check(verdict.text.includes('Estimates are for screening'), 'the SVG has no caution');
-        check(verdict.legend.includes('rgb(45, 95, 139)') && verdict.text.includes('Rainfall excess'), `no legend in the page’s colours: ${verdict.legend}`);
+        check(
+          verdict.legend.includes('rgb(45, 95, 139)') && verdict.text.includes('Rainfall excess'),
+          `no legend in the page’s colours: ${verdict.legend}`,
+        );
 
         const png = await download(page, 'Export PNG');
-        check(png.bytes.subarray(0, 8).equals(Buffer.from([0x89, 0x50, 0x4e, 0x47, 0x0d, 0x0a, 0x1a, 0x0a])), 'not a PNG');
+        check(
+          png.bytes.subarray(0, 8).equals(Buffer.from([0x89, 0x50, 0x4e, 0x47, 0x0d, 0x0a, 0x1a, 0x0a])),
+          'not a PNG',
+        );
         const width = png.bytes.readUInt32BE(16);
         const height = png.bytes.readUInt32BE(20);
-        check(width === verdict.width * 2 && height === verdict.height * 2, `PNG ${width}×${height} for an SVG of ${verdict.width}×${verdict.height}`);
+        check(
+          width === verdict.width * 2 && height === verdict.height * 2,
+          `PNG ${width}×${height} for an SVG of ${verdict.width}×${verdict.height}`,
+        );
       } finally {
         await close();
       }
@@ -224,11 +282,21 @@ export const tests = [
       const report = page.getByRole('article', { name: 'Printable report' });
       await report.waitFor();
       const words = (await report.textContent()) ?? '';
-      for (const part of ['Caution.', 'Inputs', 'Results', 'Constant loss rate (φ-index)', 'Runoff fraction', 'licensed professional']) {
+      for (const part of [
+        'Caution.',
+        'Inputs',
+        'Results',
+        'Constant loss rate (φ-index)',
+        'Runoff fraction',
+        'licensed professional',
+      ]) {
         check(words.includes(part), `the report lacks "${part}"`);
       }
       check(await report.getByRole('img', { name: /^Hyetograph of/ }).isVisible(), 'the report has no chart');
-      check(!(await page.getByRole('button', { name: 'Copy link' }).isVisible()), 'the workbench prints along with the report');
+      check(
+        !(await page.getByRole('button', { name: 'Copy link' }).isVisible()),
+        'the workbench prints along with the report',
+      );
       const pdf = await page.pdf({ format: 'A4', printBackground: true });
       const pages = (pdf.toString('latin1').match(/\/Type\s*\/Page(?![s\w])/g) ?? []).length;
       check(pages === 1, `the report prints on ${pages} pages`);
@@ -241,9 +309,13 @@ export const tests = [
       const axe = async (page) => {
         await page.addScriptTag({ path: AXE });
         return page.evaluate(async () => {
-          const include = ['.scenario-bar', '.link-notice', '.compare'].filter((sel) => document.querySelector(sel)).map((sel) => [sel]);
+          const include = ['.scenario-bar', '.link-notice', '.compare']
+            .filter((sel) => document.querySelector(sel))
+            .map((sel) => [sel]);
           const result = await window.axe.run({ include });
-          return result.violations.map((v) => `${v.id}: ${v.help} (${v.nodes.map((n) => n.target.join(' ')).join(', ')})`);
+          return result.violations.map(
+            (v) => `${v.id}: ${v.help} (${v.nodes.map((n) => n.target.join(' ')).join(', ')})`,
+          );
         });
       };
       const page = await newPage();
@@ -268,7 +340,10 @@ export const tests = [
         check(refused.length === 0, refused.join('\n'));
         const { scenario, close } = await loadModules();
         try {
-          const link = scenario.encodeScenarioLink({ ...scenario.DEMO_SCENARIO, name: 'Sent by a colleague (invented)' });
+          const link = scenario.encodeScenarioLink({
+            ...scenario.DEMO_SCENARIO,
+            name: 'Sent by a colleague (invented)',
+          });
           await other.goto(`${baseUrl}#${link}`);
           await other.getByRole('region', { name: 'Shared scenario: “Sent by a colleague (invented)”' }).waitFor();
           const shared = await axe(other);

@@ -6,7 +6,8 @@
 import { AXE, check, loadSourceModules } from './support.mjs';
 
 /** Source modules to check the page against (see support.mjs). */
-const loadModules = () => loadSourceModules({
+const loadModules = () =>
+  loadSourceModules({
     core: '/src/core/index.ts',
     format: '/src/ui/format.ts',
     frame: '/src/ui/chart/frame.ts',
@@ -26,7 +27,8 @@ const PASTE =
     return `03/11/2026;${hh}:${mm};${String(d).replace('.', ',')}`;
   }).join('\n');
 
-const shown = async (page, label) => ((await page.getByLabel(label, { exact: true }).first().textContent()) ?? '').trim();
+const shown = async (page, label) =>
+  ((await page.getByLabel(label, { exact: true }).first().textContent()) ?? '').trim();
 
 /** The scenario as the page saved it (it saves shortly after each change). */
 async function saved(page, previous) {
@@ -84,7 +86,10 @@ export const tests = [
         check((await dialog.getByLabel('Decimal mark').inputValue()) === 'comma', 'the decimal comma was not guessed');
         check((await dialog.getByLabel('Date column').inputValue()) === '1', 'the date column was not guessed');
         // Nothing has changed yet behind the dialog.
-        check((await page.evaluate(() => localStorage.getItem('raincut.scenario'))) === before, 'the storm changed before accepting');
+        check(
+          (await page.evaluate(() => localStorage.getItem('raincut.scenario'))) === before,
+          'the storm changed before accepting',
+        );
         await dialog.getByRole('button', { name: 'Use these bars' }).click();
         check((await page.getByRole('dialog').count()) === 0, 'the dialog did not close');
         const scenario = JSON.parse(await saved(page, before));
@@ -95,9 +100,15 @@ export const tests = [
         const r = await checkResults(page, mods, scenario);
         check(Math.abs(r.rainMm - 31.4) < 1e-9, `the core reads ${r.rainMm} mm`);
         const undo = page.getByRole('button', { name: 'Undo' });
-        check((await undo.getAttribute('title')) === 'Undo: Paste rainfall (Ctrl+Z)', `undo says "${await undo.getAttribute('title')}"`);
+        check(
+          (await undo.getAttribute('title')) === 'Undo: Paste rainfall (Ctrl+Z)',
+          `undo says "${await undo.getAttribute('title')}"`,
+        );
         // The chart's clock follows the pasted start.
-        check((await page.locator('.axes__title').first().textContent()).includes('3 Nov 2026 06:00'), 'the time axis is not on the storm’s clock');
+        check(
+          (await page.locator('.axes__title').first().textContent()).includes('3 Nov 2026 06:00'),
+          'the time axis is not on the storm’s clock',
+        );
         await undo.click();
         check((await shown(page, 'Rainfall depth')) === '41.6 mm', 'undo did not bring the demo storm back');
       } finally {
@@ -123,13 +134,19 @@ export const tests = [
         check(await cell(7, 4).evaluate((el) => el === document.activeElement), 'Enter did not move to the next bar');
         await checkResults(page, mods, scenario);
         const r = mods.core.computeLosses(scenario.storm, scenario.method);
-        check((await cell(6, 7).textContent()) === mods.format.formatValue(r.excessMm[5]), 'bar 6 excess is not the core’s');
+        check(
+          (await cell(6, 7).textContent()) === mods.format.formatValue(r.excessMm[5]),
+          'bar 6 excess is not the core’s',
+        );
 
         await page.keyboard.type('wet');
         await page.keyboard.press('Enter');
         const note = (await cell(7, 8).textContent()) ?? '';
         check(note === 'Bar 7 depth: “wet” is not a number.', `the note says "${note}"`);
-        check((await page.getByRole('textbox', { name: 'Bar 7 depth' }).inputValue()) === 'wet', 'the typed text was not kept');
+        check(
+          (await page.getByRole('textbox', { name: 'Bar 7 depth' }).inputValue()) === 'wet',
+          'the typed text was not kept',
+        );
         const still = JSON.parse(await page.evaluate(() => localStorage.getItem('raincut.scenario')));
         check(still.storm.depthsMm[6] === scenario.storm.depthsMm[6], 'a bad value reached the storm');
         const violations = await axeViolations(page);
@@ -163,14 +180,23 @@ export const tests = [
         const width = Number(await chart.getAttribute('width'));
         const height = Number(await chart.getAttribute('height'));
         const frameBefore = mods.frame.chartFrame(stormBefore, width, height, 'si');
-        const rate = mods.draw.rateAtPointer(frameBefore.y, y - svg.y, Math.max(frameBefore.y.invert(0), frameBefore.topMmH), frameBefore.topDisplay, 'si');
+        const rate = mods.draw.rateAtPointer(
+          frameBefore.y,
+          y - svg.y,
+          Math.max(frameBefore.y.invert(0), frameBefore.topMmH),
+          frameBefore.topDisplay,
+          'si',
+        );
         check(rate > 0, `the stroke read ${rate} mm/h`);
         scenario.storm.depthsMm.forEach((d, k) => {
           const want = rate * scenario.storm.durationsH[k];
           check(Math.abs(d - want) < 1e-9, `bar ${k + 1}: ${d} mm, the chart's scale gives ${want}`);
         });
         const undo = page.getByRole('button', { name: 'Undo' });
-        check((await undo.getAttribute('title')) === 'Undo: Draw bars (Ctrl+Z)', `undo says "${await undo.getAttribute('title')}"`);
+        check(
+          (await undo.getAttribute('title')) === 'Undo: Draw bars (Ctrl+Z)',
+          `undo says "${await undo.getAttribute('title')}"`,
+        );
         await checkResults(page, mods, scenario);
       } finally {
         await mods.close();
@@ -209,12 +235,18 @@ export const tests = [
       await page.goto(baseUrl);
       await page.getByRole('button', { name: 'Storm tools' }).click();
       await page.getByRole('button', { name: 'Draw bars' }).click();
-      const { scroll, inner } = await page.evaluate(() => ({ scroll: document.documentElement.scrollWidth, inner: window.innerWidth }));
+      const { scroll, inner } = await page.evaluate(() => ({
+        scroll: document.documentElement.scrollWidth,
+        inner: window.innerWidth,
+      }));
       check(scroll <= inner, `the page is ${scroll} px wide in a ${inner} px window`);
       await page.getByRole('button', { name: 'Paste rainfall…' }).click();
       await page.getByLabel('Rainfall text').fill(PASTE);
       const box = await page.getByRole('dialog').boundingBox();
-      check(box && box.x >= 0 && box.x + box.width <= inner, `the dialog runs from ${box?.x} to ${box && box.x + box.width}`);
+      check(
+        box && box.x >= 0 && box.x + box.width <= inner,
+        `the dialog runs from ${box?.x} to ${box && box.x + box.width}`,
+      );
     },
   },
 ];

@@ -4,7 +4,8 @@
 // and pass an axe-core check.
 import { AXE, check, loadSource } from './support.mjs';
 
-const text = async (page, label) => ((await page.getByLabel(label, { exact: true }).first().textContent()) ?? '').trim();
+const text = async (page, label) =>
+  ((await page.getByLabel(label, { exact: true }).first().textContent()) ?? '').trim();
 
 /** The demo scenario's storm, as the page holds it (read back from its saved copy after an edit). */
 async function savedScenario(page) {
@@ -55,7 +56,11 @@ export const tests = [
           const shown = await text(page, label);
           check(shown === want, `${label}: shown "${shown}", core gives "${want}"`);
         }
-        check((await page.getByRole('button', { name: 'Undo' }).getAttribute('title')) === 'Undo: Drag loss rate φ (Ctrl+Z)', 'the drag is not the last undo step');
+        check(
+          (await page.getByRole('button', { name: 'Undo' }).getAttribute('title')) ===
+            'Undo: Drag loss rate φ (Ctrl+Z)',
+          'the drag is not the last undo step',
+        );
       } finally {
         await close();
       }
@@ -75,7 +80,10 @@ export const tests = [
       check((await page.getByLabel('Scenario name').inputValue()) === 'Reload check', 'the name was not kept');
       check(await page.getByRole('radio', { name: 'US customary' }).isChecked(), 'the unit system was not kept');
       const after = page.getByRole('slider', { name: 'Loss rate φ' });
-      check((await after.getAttribute('data-value-mmh')) === phi, `the rate was ${phi}, after reload ${await after.getAttribute('data-value-mmh')}`);
+      check(
+        (await after.getAttribute('data-value-mmh')) === phi,
+        `the rate was ${phi}, after reload ${await after.getAttribute('data-value-mmh')}`,
+      );
       check((await text(page, 'Excess depth')) === excess, 'the results changed on reload');
       check(excess.endsWith(' in'), `results should stay in inches, got ${excess}`);
     },
@@ -110,11 +118,15 @@ export const tests = [
       const page = await newPage();
       await page.goto(baseUrl);
       const line = page.getByRole('slider', { name: 'Loss rate φ' });
-      for (let i = 0; i < 40 && !(await line.evaluate((el) => el === document.activeElement)); i++) await page.keyboard.press('Tab');
+      for (let i = 0; i < 40 && !(await line.evaluate((el) => el === document.activeElement)); i++)
+        await page.keyboard.press('Tab');
       check(await line.evaluate((el) => el === document.activeElement), 'Tab never reached the loss-rate line');
       await page.keyboard.press('PageUp');
       await page.keyboard.press('ArrowUp');
-      check((await line.getAttribute('aria-valuenow')) === '9.1', `PageUp then ArrowUp from 8 gave ${await line.getAttribute('aria-valuenow')}`);
+      check(
+        (await line.getAttribute('aria-valuenow')) === '9.1',
+        `PageUp then ArrowUp from 8 gave ${await line.getAttribute('aria-valuenow')}`,
+      );
       await page.keyboard.press('Control+z');
       check((await line.getAttribute('aria-valuenow')) === '8', 'Ctrl+Z did not undo the key moves');
       await page.keyboard.press('Control+Shift+z');
@@ -133,7 +145,9 @@ export const tests = [
       const run = () =>
         page.evaluate(async () => {
           const result = await window.axe.run(document);
-          return result.violations.map((v) => `${v.id}: ${v.help} (${v.nodes.map((n) => n.target.join(' ')).join(', ')})`);
+          return result.violations.map(
+            (v) => `${v.id}: ${v.help} (${v.nodes.map((n) => n.target.join(' ')).join(', ')})`,
+          );
         });
       const first = await run();
       check(first.length === 0, first.join('\n'));
@@ -150,7 +164,10 @@ export const tests = [
       const page = await newPage();
       await page.setViewportSize({ width: 420, height: 900 });
       await page.goto(baseUrl);
-      const { scroll, inner } = await page.evaluate(() => ({ scroll: document.documentElement.scrollWidth, inner: window.innerWidth }));
+      const { scroll, inner } = await page.evaluate(() => ({
+        scroll: document.documentElement.scrollWidth,
+        inner: window.innerWidth,
+      }));
       check(scroll <= inner, `the page is ${scroll} px wide in a ${inner} px window`);
       const svgWidth = await page.locator('.chart__svg').evaluate((el) => el.getBoundingClientRect().width);
       check(svgWidth <= inner, `the chart is ${svgWidth} px wide`);

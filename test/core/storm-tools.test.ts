@@ -92,13 +92,18 @@ describe('resampling a storm to another time step', () => {
   });
 
   it('leaves the storm it was given unchanged', () => {
-    const copy = { ...uneven, durationsH: [...(uneven.durationsH as number[])], depthsMm: [...(uneven.depthsMm as number[])] };
+    const copy = {
+      ...uneven,
+      durationsH: [...(uneven.durationsH as number[])],
+      depthsMm: [...(uneven.depthsMm as number[])],
+    };
     resampleStorm(uneven, 0.1);
     expect(uneven).toEqual(copy);
   });
 
   it('refuses a step that is not a positive number of hours, naming the step', () => {
-    for (const bad of [0, -1, Number.NaN, Infinity]) expect(thrown(() => resampleStorm(uneven, bad)).field).toBe('stepH');
+    for (const bad of [0, -1, Number.NaN, Infinity])
+      expect(thrown(() => resampleStorm(uneven, bad)).field).toBe('stepH');
   });
 
   it('refuses a step that would make too many bars', () => {
@@ -133,7 +138,12 @@ describe('resampling a storm to another time step', () => {
         const edges = barEdgesH(out);
         const scale = Math.max(1, totalDepthMm(storm));
         for (let j = 0; j < out.depthsMm.length; j++) {
-          expectClose(out.depthsMm[j] as number, rainBetween(storm, edges[j] as number, edges[j + 1] as number), 1e-9, 1e-12 * scale);
+          expectClose(
+            out.depthsMm[j] as number,
+            rainBetween(storm, edges[j] as number, edges[j + 1] as number),
+            1e-9,
+            1e-12 * scale,
+          );
         }
       }),
     );
@@ -169,7 +179,8 @@ describe('scaling a storm by a factor', () => {
   });
 
   it('refuses a negative or non-finite factor, naming the factor', () => {
-    for (const bad of [-0.5, Number.NaN, Infinity]) expect(thrown(() => scaleStormByFactor(uneven, bad)).field).toBe('factor');
+    for (const bad of [-0.5, Number.NaN, Infinity])
+      expect(thrown(() => scaleStormByFactor(uneven, bad)).field).toBe('factor');
   });
 
   it('refuses a factor that would overflow a bar, naming the bar', () => {

@@ -9,7 +9,9 @@ import { fileURLToPath } from 'node:url';
  */
 export function readFixtureCsv(name: string): { header: string; columns: string[]; rows: string[][] } {
   const path = fileURLToPath(new URL(`../fixtures/${name}`, import.meta.url));
-  const lines = readFileSync(path, 'utf8').split(/\r?\n/).filter((l) => l.trim() !== '');
+  const lines = readFileSync(path, 'utf8')
+    .split(/\r?\n/)
+    .filter((l) => l.trim() !== '');
   const header = lines.filter((l) => l.startsWith('#')).join('\n');
   const [head, ...body] = lines.filter((l) => !l.startsWith('#'));
   if (head === undefined) throw new Error(`Fixture ${name} has no column header.`);

@@ -28,9 +28,17 @@ function problemsOf(text: string, settings?: Partial<FlowImportSettings>): reado
 
 describe('guessFlowImport on realistic pastes', () => {
   it('reads an ISO-dated record in m³/s with irregular steps', () => {
-    const text = 'Date-time\tQ (m3/s)\n2024-05-01T00:00\t0.8\n2024-05-01T00:15\t0.9\n2024-05-01T00:30\t2.4\n2024-05-01T01:30\t5.1\n2024-05-01T03:30\t1.2\n';
+    const text =
+      'Date-time\tQ (m3/s)\n2024-05-01T00:00\t0.8\n2024-05-01T00:15\t0.9\n2024-05-01T00:30\t2.4\n2024-05-01T01:30\t5.1\n2024-05-01T03:30\t1.2\n';
     const preview = guessFlowImport(text);
-    expect(preview.settings).toMatchObject({ separator: 'tab', timeColumn: 1, valueColumn: 2, timeKind: 'clock', unit: 'm3/s', hasHeader: true });
+    expect(preview.settings).toMatchObject({
+      separator: 'tab',
+      timeColumn: 1,
+      valueColumn: 2,
+      timeKind: 'clock',
+      unit: 'm3/s',
+      hasHeader: true,
+    });
     expect(preview.problems).toEqual([]);
     expect(preview.summary).toBe(
       '5 samples 15 min to 2 h apart (irregular steps) from 2024-05-01 00:00, spanning 3 h 30 min, discharge in m³/s, peak 5.1 m³/s on line 5.',
@@ -44,7 +52,12 @@ describe('guessFlowImport on realistic pastes', () => {
   it('reads litres per second from a European CSV with day-first dates', () => {
     const text = 'Datum;Abfluss (l/s)\n30.04.2024 23:45;120\n01.05.2024 00:00;135,5\n01.05.2024 00:15;160\n';
     const preview = guessFlowImport(text);
-    expect(preview.settings).toMatchObject({ separator: 'semicolon', decimal: 'comma', unit: 'L/s', dateOrder: 'day-month' });
+    expect(preview.settings).toMatchObject({
+      separator: 'semicolon',
+      decimal: 'comma',
+      unit: 'L/s',
+      dateOrder: 'day-month',
+    });
     expect(preview.summary).toBe(
       '3 samples every 15 min from 2024-04-30 23:45, spanning 30 min, discharge in L/s, peak 160 L/s on line 4.',
     );
@@ -141,7 +154,13 @@ describe('applyFlowImport reports every bad input by line and column', () => {
 
   it('a record of one sample', () => {
     expect(problemsOf('2024-05-01 10:00\t1')).toEqual([
-      { row: 0, column: 0, field: 'text', value: '', reason: 'a streamflow record needs at least two samples; only one line was found.' },
+      {
+        row: 0,
+        column: 0,
+        field: 'text',
+        value: '',
+        reason: 'a streamflow record needs at least two samples; only one line was found.',
+      },
     ]);
   });
 
@@ -162,6 +181,8 @@ describe('applyFlowImport reports every bad input by line and column', () => {
 
   it('a failure summary that says what was read', () => {
     const result = applyFlowImport('Time\tQ\n10:00\t1\n10:15\t-1', guessFlowSettings('Time\tQ\n10:00\t1\n10:15\t-1'));
-    expect(result.summary).toBe('Read 2 data lines as discharge in m³/s with clock times in column 1; 1 problem to fix before importing.');
+    expect(result.summary).toBe(
+      'Read 2 data lines as discharge in m³/s with clock times in column 1; 1 problem to fix before importing.',
+    );
   });
 });

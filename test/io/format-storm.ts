@@ -126,7 +126,10 @@ export function formatPaste(spec: PasteSpec): Paste {
     }
   } else {
     for (let k = 0; k < n; k++) {
-      rows.push({ atMin: (spec.timeMarks === 'end' ? edges[k + 1] : edges[k]) as number, value: spec.values[k] as number });
+      rows.push({
+        atMin: (spec.timeMarks === 'end' ? edges[k + 1] : edges[k]) as number,
+        value: spec.values[k] as number,
+      });
     }
   }
 
@@ -165,7 +168,14 @@ export function formatPaste(spec: PasteSpec): Paste {
   const text = lines.join(eol) + (spec.trailingNewline ? eol : '');
 
   const first = spec.indexColumn ? 2 : 1;
-  const timeKind = spec.timeFormat === 'elapsed-min' ? 'elapsed-min' : spec.timeFormat === 'elapsed-h' ? 'elapsed-h' : hasTimes ? 'clock' : 'none';
+  const timeKind =
+    spec.timeFormat === 'elapsed-min'
+      ? 'elapsed-min'
+      : spec.timeFormat === 'elapsed-h'
+        ? 'elapsed-h'
+        : hasTimes
+          ? 'clock'
+          : 'none';
   const firstStampMin = (rows[0] as { atMin: number }).atMin;
   const settings: RainImportSettings = {
     separator: spec.separator,
@@ -188,8 +198,14 @@ export function formatPaste(spec: PasteSpec): Paste {
 
   const mm = MM_PER_UNIT[spec.unit];
   const durationsH = durMin.map((d) => d / 60);
-  const depthsMm = spec.values.map((v, k) => (spec.valueKind === 'intensity' ? v * mm * (durationsH[k] as number) : v * mm));
-  const onCalendar = spec.timeFormat === 'iso' || spec.timeFormat === 'iso-zone' || spec.timeFormat === 'hhmm' || spec.timeFormat === 'date+time';
+  const depthsMm = spec.values.map((v, k) =>
+    spec.valueKind === 'intensity' ? v * mm * (durationsH[k] as number) : v * mm,
+  );
+  const onCalendar =
+    spec.timeFormat === 'iso' ||
+    spec.timeFormat === 'iso-zone' ||
+    spec.timeFormat === 'hhmm' ||
+    spec.timeFormat === 'date+time';
   const zone = spec.timeFormat === 'iso-zone' ? spec.zone : '';
   const startIso = onCalendar ? `${isoMinutes(spec.startMin, 'T')}:00${zone}` : undefined;
   return { text, settings, durationsH, depthsMm, startIso };

@@ -15,10 +15,53 @@ import {
 
 /** Pieces that make text look like data, so random pastes reach the deep paths and not only "not a number". */
 const TOKENS = [
-  '0', '1', '12', '0.5', '0,5', '-1', '1e3', '1e999', '.', ',', ';', '\t', '\n', '\r\n', '\r', ' ', '"', '""',
-  ':', '10:00', '23:59', '24:00', '00:10', '12:00 PM', '2024-05-01', '2024-05-01T10:00', 'T', 'Z', '+10:00',
-  '01/05/2024', '13/13/2024', '2023-02-29', '31.12.1999', 'NA', '-', 'Time', 'Rain (mm)', 'in/h', 'cumulative',
-  'Q (L/s)', 'cfs', '\ufeff', '\u2212', '\u00a0', '#', 'é', '💧',
+  '0',
+  '1',
+  '12',
+  '0.5',
+  '0,5',
+  '-1',
+  '1e3',
+  '1e999',
+  '.',
+  ',',
+  ';',
+  '\t',
+  '\n',
+  '\r\n',
+  '\r',
+  ' ',
+  '"',
+  '""',
+  ':',
+  '10:00',
+  '23:59',
+  '24:00',
+  '00:10',
+  '12:00 PM',
+  '2024-05-01',
+  '2024-05-01T10:00',
+  'T',
+  'Z',
+  '+10:00',
+  '01/05/2024',
+  '13/13/2024',
+  '2023-02-29',
+  '31.12.1999',
+  'NA',
+  '-',
+  'Time',
+  'Rain (mm)',
+  'in/h',
+  'cumulative',
+  'Q (L/s)',
+  'cfs',
+  '\ufeff',
+  '\u2212',
+  '\u00a0',
+  '#',
+  'é',
+  '💧',
 ];
 
 const tokenText = fc.array(fc.constantFrom(...TOKENS), { maxLength: 80 }).map((parts) => parts.join(''));
@@ -28,7 +71,12 @@ const anyText = fc.oneof(fc.string({ maxLength: 300 }), fc.string({ unit: 'graph
 const noisyTable = fc
   .record({
     sep: fc.constantFrom('\t', ',', ';'),
-    rows: fc.array(fc.array(fc.array(fc.constantFrom(...TOKENS.filter((t) => !/[\n\r\t,;]/.test(t))), { maxLength: 3 }), { maxLength: 5 }), { maxLength: 30 }),
+    rows: fc.array(
+      fc.array(fc.array(fc.constantFrom(...TOKENS.filter((t) => !/[\n\r\t,;]/.test(t))), { maxLength: 3 }), {
+        maxLength: 5,
+      }),
+      { maxLength: 30 },
+    ),
   })
   .map(({ sep, rows }) => rows.map((cells) => cells.map((c) => c.join('')).join(sep)).join('\n'));
 
@@ -81,11 +129,23 @@ function checkFlow(text: string): void {
 
 describe('the importers never throw, whatever the text', () => {
   it('on thousands of random strings', () => {
-    fc.assert(fc.property(anyText, (text) => { checkRain(text); checkFlow(text); }), { numRuns: 4000 });
+    fc.assert(
+      fc.property(anyText, (text) => {
+        checkRain(text);
+        checkFlow(text);
+      }),
+      { numRuns: 4000 },
+    );
   }, 120_000);
 
   it('on thousands of noisy tables', () => {
-    fc.assert(fc.property(noisyTable, (text) => { checkRain(text); checkFlow(text); }), { numRuns: 2000 });
+    fc.assert(
+      fc.property(noisyTable, (text) => {
+        checkRain(text);
+        checkFlow(text);
+      }),
+      { numRuns: 2000 },
+    );
   }, 120_000);
 });
 
@@ -96,7 +156,32 @@ const wildValue = fc.oneof(
   fc.boolean(),
   fc.integer({ min: -3, max: 8 }),
   fc.double(),
-  fc.constantFrom('tab', 'comma', 'semicolon', 'none', 'point', 'clock', 'elapsed-min', 'elapsed-h', 'depth', 'intensity', 'cumulative', 'mm', 'in', 'end', 'start', 'zero', 'first-value', 'day-month', 'month-day', '2024-05-01', 'm3/s', 'L/s', 'ft3/s', ''),
+  fc.constantFrom(
+    'tab',
+    'comma',
+    'semicolon',
+    'none',
+    'point',
+    'clock',
+    'elapsed-min',
+    'elapsed-h',
+    'depth',
+    'intensity',
+    'cumulative',
+    'mm',
+    'in',
+    'end',
+    'start',
+    'zero',
+    'first-value',
+    'day-month',
+    'month-day',
+    '2024-05-01',
+    'm3/s',
+    'L/s',
+    'ft3/s',
+    '',
+  ),
 );
 
 function scramble<T extends object>(base: T, changes: Record<string, unknown>): T {
@@ -105,8 +190,21 @@ function scramble<T extends object>(base: T, changes: Record<string, unknown>): 
 
 describe('the importers never throw, whatever the settings', () => {
   const keys = [
-    'separator', 'decimal', 'skipLines', 'hasHeader', 'dateColumn', 'timeColumn', 'valueColumn', 'timeKind',
-    'dateOrder', 'dateForTimesOfDay', 'stepMinutesIfNoTime', 'valueKind', 'unit', 'timeMarks', 'cumulativeFrom',
+    'separator',
+    'decimal',
+    'skipLines',
+    'hasHeader',
+    'dateColumn',
+    'timeColumn',
+    'valueColumn',
+    'timeKind',
+    'dateOrder',
+    'dateForTimesOfDay',
+    'stepMinutesIfNoTime',
+    'valueKind',
+    'unit',
+    'timeMarks',
+    'cumulativeFrom',
   ];
   const changes = fc.dictionary(fc.constantFrom(...keys), wildValue, { maxKeys: 4 });
 

@@ -25,7 +25,21 @@ describe('parseNumber', () => {
   });
 
   it('refuses anything that is not one plain finite number', () => {
-    for (const cell of ['', ' ', 'abc', '1.2mm', '1,234.5', '1 234', '1e999', 'Infinity', 'NaN', '0x10', '1.2.3', '--1', '1e']) {
+    for (const cell of [
+      '',
+      ' ',
+      'abc',
+      '1.2mm',
+      '1,234.5',
+      '1 234',
+      '1e999',
+      'Infinity',
+      'NaN',
+      '0x10',
+      '1.2.3',
+      '--1',
+      '1e',
+    ]) {
       expect(parseNumber(cell, 'point'), cell).toBeNaN();
     }
   });

@@ -17,9 +17,12 @@ describe('src/io', () => {
     expect(sources.filter((s) => s.name.endsWith('.tsx'))).toEqual([]);
   });
 
-  it.each(sources.map((s) => [s.name, s.text] as const))('%s imports only its own files, the core and papaparse', (_name, text) => {
-    const imports = [...text.matchAll(/\bfrom\s+['"]([^'"]+)['"]/g)].map((m) => m[1] as string);
-    for (const spec of imports) expect(spec, `import "${spec}"`).toMatch(/^(?:\.\/[\w-]+|\.\.\/core|papaparse)$/);
-    expect(text).not.toMatch(/\b(document|window|localStorage|navigator)\s*\./);
-  });
+  it.each(sources.map((s) => [s.name, s.text] as const))(
+    '%s imports only its own files, the core and papaparse',
+    (_name, text) => {
+      const imports = [...text.matchAll(/\bfrom\s+['"]([^'"]+)['"]/g)].map((m) => m[1] as string);
+      for (const spec of imports) expect(spec, `import "${spec}"`).toMatch(/^(?:\.\/[\w-]+|\.\.\/core|papaparse)$/);
+      expect(text).not.toMatch(/\b(document|window|localStorage|navigator)\s*\./);
+    },
+  );
 });

@@ -41,7 +41,9 @@ const TEN_MIN = 10 / 60;
 
 describe('guessRainImport on realistic pastes', () => {
   it('reads a spreadsheet copy (tabs, header, times of day) and says what it understood', () => {
-    const text = ['Time\tRain (mm)', ...INVENTED_DEPTHS.map((p, k) => `${clock(15 * 60 + 10 * (k + 1))}\t${p}`)].join('\n');
+    const text = ['Time\tRain (mm)', ...INVENTED_DEPTHS.map((p, k) => `${clock(15 * 60 + 10 * (k + 1))}\t${p}`)].join(
+      '\n',
+    );
     const preview = guessRainImport(text);
     expect(preview.settings).toMatchObject({
       separator: 'tab',
@@ -63,45 +65,77 @@ describe('guessRainImport on realistic pastes', () => {
       '18 bars of 10 min from 15:00 (time of day; no date given), depths in mm, total 41.6 mm; time stamps mark the end of each bar.',
     );
     const storm = stormOf(text);
-    expectAllClose(storm.durationsH, INVENTED_DEPTHS.map(() => TEN_MIN));
+    expectAllClose(
+      storm.durationsH,
+      INVENTED_DEPTHS.map(() => TEN_MIN),
+    );
     expect(storm.depthsMm).toEqual(INVENTED_DEPTHS);
     expect(storm.startIso).toBeUndefined();
   });
 
   it('reads a European CSV: semicolons, decimal commas, day-first dates with dots', () => {
-    const text = 'Zeit;Niederschlag (mm)\n01.05.2024 10:10;0,4\n01.05.2024 10:20;1,25\n01.05.2024 10:30;0\n01.05.2024 10:40;2,5\n';
+    const text =
+      'Zeit;Niederschlag (mm)\n01.05.2024 10:10;0,4\n01.05.2024 10:20;1,25\n01.05.2024 10:30;0\n01.05.2024 10:40;2,5\n';
     const preview = guessRainImport(text);
-    expect(preview.settings).toMatchObject({ separator: 'semicolon', decimal: 'comma', timeKind: 'clock', dateOrder: 'day-month' });
+    expect(preview.settings).toMatchObject({
+      separator: 'semicolon',
+      decimal: 'comma',
+      timeKind: 'clock',
+      dateOrder: 'day-month',
+    });
     const storm = stormOf(text);
     expect(storm.depthsMm).toEqual([0.4, 1.25, 0, 2.5]);
     expectAllClose(storm.durationsH, [TEN_MIN, TEN_MIN, TEN_MIN, TEN_MIN]);
     expect(storm.startIso).toBe('2024-05-01T10:00:00');
-    expect(preview.summary).toBe('4 bars of 10 min from 2024-05-01 10:00, depths in mm, total 4.15 mm; time stamps mark the end of each bar.');
+    expect(preview.summary).toBe(
+      '4 bars of 10 min from 2024-05-01 10:00, depths in mm, total 4.15 mm; time stamps mark the end of each bar.',
+    );
   });
 
   it('reads a single column of values at the step the user sets', () => {
     const text = INVENTED_DEPTHS.join('\n');
     const settings = guessRainSettings(text);
-    expect(settings).toMatchObject({ separator: 'none', timeColumn: null, timeKind: 'none', valueColumn: 1, stepMinutesIfNoTime: 60 });
-    expect(guessRainImport(text).summary).toBe('18 bars of 1 h, depths in mm, total 41.6 mm; no times, so bars are 1 h apart as set.');
+    expect(settings).toMatchObject({
+      separator: 'none',
+      timeColumn: null,
+      timeKind: 'none',
+      valueColumn: 1,
+      stepMinutesIfNoTime: 60,
+    });
+    expect(guessRainImport(text).summary).toBe(
+      '18 bars of 1 h, depths in mm, total 41.6 mm; no times, so bars are 1 h apart as set.',
+    );
     const storm = stormOf(text, { stepMinutesIfNoTime: 10 });
-    expectAllClose(storm.durationsH, INVENTED_DEPTHS.map(() => TEN_MIN));
+    expectAllClose(
+      storm.durationsH,
+      INVENTED_DEPTHS.map(() => TEN_MIN),
+    );
     expect(storm.depthsMm).toEqual(INVENTED_DEPTHS);
     expect(previewRainImport(text, { ...settings, stepMinutesIfNoTime: 10 }).summary).toMatch(/^18 bars of 10 min, /);
   });
 
   it('reads a single column with decimal commas and takes the step from the column name', () => {
     const text = 'Rain (mm per 5 min)\n0,4\n0,8\n1,2\n0,6\n';
-    expect(guessRainSettings(text)).toMatchObject({ separator: 'none', decimal: 'comma', hasHeader: true, stepMinutesIfNoTime: 5 });
+    expect(guessRainSettings(text)).toMatchObject({
+      separator: 'none',
+      decimal: 'comma',
+      hasHeader: true,
+      stepMinutesIfNoTime: 5,
+    });
     const storm = stormOf(text);
     expect(storm.depthsMm).toEqual([0.4, 0.8, 1.2, 0.6]);
     expectAllClose(storm.durationsH, [5 / 60, 5 / 60, 5 / 60, 5 / 60]);
   });
 
   it('turns cumulative gauge readings into bar depths, counting from the first reading', () => {
-    const text = 'Date-time,Cumulative rain (mm)\n2024-05-01 10:00,12.4\n2024-05-01 10:15,12.4\n2024-05-01 10:30,15.0\n2024-05-01 10:45,21.2\n2024-05-01 11:00,22.0\n';
+    const text =
+      'Date-time,Cumulative rain (mm)\n2024-05-01 10:00,12.4\n2024-05-01 10:15,12.4\n2024-05-01 10:30,15.0\n2024-05-01 10:45,21.2\n2024-05-01 11:00,22.0\n';
     const preview = guessRainImport(text);
-    expect(preview.settings).toMatchObject({ valueKind: 'cumulative', cumulativeFrom: 'first-value', separator: 'comma' });
+    expect(preview.settings).toMatchObject({
+      valueKind: 'cumulative',
+      cumulativeFrom: 'first-value',
+      separator: 'comma',
+    });
     const storm = stormOf(text);
     expectAllClose(storm.depthsMm, [0, 2.6, 6.2, 0.8], 1e-12, 1e-12);
     expectAllClose(storm.durationsH, [0.25, 0.25, 0.25, 0.25]);
@@ -128,7 +162,8 @@ describe('guessRainImport on realistic pastes', () => {
   });
 
   it('gives bars of unequal duration for ISO times with irregular gaps, and keeps the zone', () => {
-    const text = 'time,rain\n2024-05-01T10:05Z,0.4\n2024-05-01T10:10Z,1.0\n2024-05-01T10:30Z,2.0\n2024-05-01T11:30Z,3.0\n';
+    const text =
+      'time,rain\n2024-05-01T10:05Z,0.4\n2024-05-01T10:10Z,1.0\n2024-05-01T10:30Z,2.0\n2024-05-01T11:30Z,3.0\n';
     const preview = guessRainImport(text);
     expect(preview.summary).toBe(
       '4 bars of 5 min to 1 h (irregular steps) from 2024-05-01 10:00Z, depths in mm, total 6.4 mm; time stamps mark the end of each bar.',
@@ -144,7 +179,9 @@ describe('guessRainImport on realistic pastes', () => {
     expectAllClose(storm.durationsH, [TEN_MIN, 2 * TEN_MIN, 2 * TEN_MIN]);
     expect(storm.startIso).toBe('2024-05-01T10:00:00');
     expect(applyRainImport(text, { ...guessRainSettings(text), timeMarks: 'start' }).ok && 'yes').toBe('yes');
-    expect(previewRainImport(text, { ...guessRainSettings(text), timeMarks: 'start' }).summary).toMatch(/mark the start of each bar/);
+    expect(previewRainImport(text, { ...guessRainSettings(text), timeMarks: 'start' }).summary).toMatch(
+      /mark the start of each bar/,
+    );
   });
 
   it('converts inches exactly, 1 in = 25.4 mm', () => {
@@ -159,7 +196,12 @@ describe('guessRainImport on realistic pastes', () => {
 
   it('turns intensities into depths over each bar, in mm/h and in/h', () => {
     const text = 'Elapsed (min)\tIntensity (mm/h)\n10\t12\n20\t30\n40\t6\n';
-    expect(guessRainSettings(text)).toMatchObject({ valueKind: 'intensity', unit: 'mm', timeKind: 'elapsed-min', timeMarks: 'end' });
+    expect(guessRainSettings(text)).toMatchObject({
+      valueKind: 'intensity',
+      unit: 'mm',
+      timeKind: 'elapsed-min',
+      timeMarks: 'end',
+    });
     expectAllClose(stormOf(text).depthsMm, [2, 5, 2]);
     expectAllClose(stormOf(text).durationsH, [TEN_MIN, TEN_MIN, 2 * TEN_MIN]);
     const inches = 'Time\tRain rate (in/h)\n10:30\t1.2\n11:00\t0.4\n';
@@ -170,14 +212,26 @@ describe('guessRainImport on realistic pastes', () => {
   it('reads elapsed hours that start at 0 as bar starts', () => {
     const text = 'h;mm\n0;1,5\n0,5;2\n1;0,5\n';
     const settings = guessRainSettings(text);
-    expect(settings).toMatchObject({ separator: 'semicolon', decimal: 'comma', timeKind: 'elapsed-h', timeMarks: 'start' });
+    expect(settings).toMatchObject({
+      separator: 'semicolon',
+      decimal: 'comma',
+      timeKind: 'elapsed-h',
+      timeMarks: 'start',
+    });
     expectAllClose(stormOf(text).durationsH, [0.5, 0.5, 0.5]);
   });
 
   it('joins a date column and a time column, and reads US month-first dates with AM/PM', () => {
-    const text = 'Date\tTime\tRain (in)\n4/30/2024\t11:30 PM\t0.02\n4/30/2024\t11:45 PM\t0.10\n5/1/2024\t12:00 AM\t0.04\n';
+    const text =
+      'Date\tTime\tRain (in)\n4/30/2024\t11:30 PM\t0.02\n4/30/2024\t11:45 PM\t0.10\n5/1/2024\t12:00 AM\t0.04\n';
     const settings = guessRainSettings(text);
-    expect(settings).toMatchObject({ dateColumn: 1, timeColumn: 2, valueColumn: 3, dateOrder: 'month-day', unit: 'in' });
+    expect(settings).toMatchObject({
+      dateColumn: 1,
+      timeColumn: 2,
+      valueColumn: 3,
+      dateOrder: 'month-day',
+      unit: 'in',
+    });
     const storm = stormOf(text);
     expect(storm.startIso).toBe('2024-04-30T23:15:00');
     expectAllClose(storm.durationsH, [0.25, 0.25, 0.25]);
@@ -195,7 +249,13 @@ describe('guessRainImport on realistic pastes', () => {
     const text = '10:10\t1.2x\n10:20\t0.4\n10:30\t0.8\n';
     expect(guessRainSettings(text).hasHeader).toBe(false);
     expect(problemsOf(text)).toEqual([
-      { row: 1, column: 2, field: 'depth', value: '1.2x', reason: 'not a plain number; remove any unit or text after the number.' },
+      {
+        row: 1,
+        column: 2,
+        field: 'depth',
+        value: '1.2x',
+        reason: 'not a plain number; remove any unit or text after the number.',
+      },
     ]);
   });
 
@@ -281,18 +341,32 @@ describe('applyRainImport reports every bad input by line and column', () => {
 
   it('an empty line between data lines', () => {
     expect(problemsOf(`${header}10:10\t0.4\n\n10:30\t0.8`)).toEqual([
-      { row: 3, column: 0, field: 'line', value: '', reason: 'the line is empty, so its depth is missing; remove the line or fill in the value.' },
+      {
+        row: 3,
+        column: 0,
+        field: 'line',
+        value: '',
+        reason: 'the line is empty, so its depth is missing; remove the line or fill in the value.',
+      },
     ]);
   });
 
   it('an empty line in a single column, as a spreadsheet copies an empty cell', () => {
     expect(problemsOf('0.4\n0.8\n\n1.2\n')).toEqual([
-      { row: 3, column: 0, field: 'line', value: '', reason: 'the line is empty, so its depth is missing; remove the line or fill in the value.' },
+      {
+        row: 3,
+        column: 0,
+        field: 'line',
+        value: '',
+        reason: 'the line is empty, so its depth is missing; remove the line or fill in the value.',
+      },
     ]);
   });
 
   it('a repeated time and a time that goes back', () => {
-    expect(problemsOf(`${header}2024-05-01 10:10\t0.4\n2024-05-01 10:10\t0.8\n2024-05-01 10:30\t0.8\n2024-05-01 10:20\t0.8`)).toEqual([
+    expect(
+      problemsOf(`${header}2024-05-01 10:10\t0.4\n2024-05-01 10:10\t0.8\n2024-05-01 10:30\t0.8\n2024-05-01 10:20\t0.8`),
+    ).toEqual([
       {
         row: 3,
         column: 1,
@@ -312,7 +386,13 @@ describe('applyRainImport reports every bad input by line and column', () => {
 
   it('a time that cannot be read', () => {
     expect(problemsOf(`${header}10:10\t0.4\n10:2O\t0.8\n10:30\t0.8`)).toEqual([
-      { row: 3, column: 1, field: 'time', value: '10:2O', reason: expect.stringMatching(/^not a time; use an ISO 8601 date-time/) },
+      {
+        row: 3,
+        column: 1,
+        field: 'time',
+        value: '10:2O',
+        reason: expect.stringMatching(/^not a time; use an ISO 8601 date-time/),
+      },
     ]);
   });
 
@@ -323,14 +403,21 @@ describe('applyRainImport reports every bad input by line and column', () => {
         column: 2,
         field: 'cumulative depth',
         value: '1.4',
-        reason: 'the cumulative depth falls from 1.5 on line 3; cumulative readings cannot decrease (a gauge reset or a typing slip?).',
+        reason:
+          'the cumulative depth falls from 1.5 on line 3; cumulative readings cannot decrease (a gauge reset or a typing slip?).',
       },
     ]);
   });
 
   it('a decimal mark that does not match the setting', () => {
     expect(problemsOf('Time;Rain\n10:10;0,4\n10:20;0.8\n10:30;1,2')).toEqual([
-      { row: 3, column: 2, field: 'depth', value: '0.8', reason: 'this number has a decimal point but the decimal mark is set to a comma.' },
+      {
+        row: 3,
+        column: 2,
+        field: 'depth',
+        value: '0.8',
+        reason: 'this number has a decimal point but the decimal mark is set to a comma.',
+      },
     ]);
   });
 
@@ -396,14 +483,29 @@ describe('applyRainImport checks its settings', () => {
   const text = '10:10\t1\n10:20\t2';
   const base = guessRainSettings(text);
   const cases: [string, Partial<RainImportSettings>, string, RegExp][] = [
-    ['a step of zero minutes', { timeColumn: null, timeKind: 'none', stepMinutesIfNoTime: 0 }, 'stepMinutesIfNoTime', /greater than zero/],
-    ['a step that is not a number', { timeColumn: null, timeKind: 'none', stepMinutesIfNoTime: NaN }, 'stepMinutesIfNoTime', /greater than zero/],
+    [
+      'a step of zero minutes',
+      { timeColumn: null, timeKind: 'none', stepMinutesIfNoTime: 0 },
+      'stepMinutesIfNoTime',
+      /greater than zero/,
+    ],
+    [
+      'a step that is not a number',
+      { timeColumn: null, timeKind: 'none', stepMinutesIfNoTime: NaN },
+      'stepMinutesIfNoTime',
+      /greater than zero/,
+    ],
     ['a time kind without a time column', { timeColumn: null }, 'timeColumn', /no time column is chosen/],
     ['a time column with no time kind', { timeKind: 'none' }, 'timeKind', /time kind is none/],
     ['the same column for times and values', { valueColumn: 1 }, 'timeColumn', /must differ/],
     ['a column number below 1', { valueColumn: 0 }, 'valueColumn', /column number, 1 or more/],
     ['a fractional column number', { timeColumn: 1.5 }, 'timeColumn', /column number/],
-    ['a date column without clock times', { dateColumn: 3, timeKind: 'elapsed-min' }, 'dateColumn', /needs a time column of clock times/],
+    [
+      'a date column without clock times',
+      { dateColumn: 3, timeKind: 'elapsed-min' },
+      'dateColumn',
+      /needs a time column of clock times/,
+    ],
     ['a date for times of day that is no date', { dateForTimesOfDay: '31/12/2024' }, 'dateForTimesOfDay', /YYYY-MM-DD/],
     ['negative lines to skip', { skipLines: -1 }, 'skipLines', /whole number of lines/],
     ['an unknown separator', { separator: 'pipe' as never }, 'separator', /tab, comma, semicolon or none/],
@@ -417,11 +519,15 @@ describe('applyRainImport checks its settings', () => {
   it.each(cases)('refuses %s, naming the setting', (_, change, field, reason) => {
     const result = applyRainImport(text, { ...base, ...change });
     expect(result.ok).toBe(false);
-    expect(result.problems).toContainEqual(expect.objectContaining({ row: 0, field, reason: expect.stringMatching(reason) }));
+    expect(result.problems).toContainEqual(
+      expect.objectContaining({ row: 0, field, reason: expect.stringMatching(reason) }),
+    );
   });
 
   it('refuses text that is not a string without throwing', () => {
-    expect(applyRainImport(42 as never, base).problems).toEqual([expect.objectContaining({ field: 'text', reason: 'there is no text to read.' })]);
+    expect(applyRainImport(42 as never, base).problems).toEqual([
+      expect.objectContaining({ field: 'text', reason: 'there is no text to read.' }),
+    ]);
     expect(guessRainImport(undefined as never).problems.length).toBeGreaterThan(0);
     expect(applyRainImport('1\n2', null as never).problems).toEqual([
       { row: 0, column: 0, field: 'settings', value: 'null', reason: 'no import settings were given.' },
@@ -434,7 +540,9 @@ describe('describeProblem', () => {
     expect(describeProblem({ row: 4, column: 2, field: 'depth', value: 'abc', reason: 'not a number.' })).toBe(
       'Line 4, column 2 (depth) "abc": not a number.',
     );
-    expect(describeProblem({ row: 3, column: 0, field: 'line', value: '', reason: 'the line is empty.' })).toBe('Line 3 (line): the line is empty.');
+    expect(describeProblem({ row: 3, column: 0, field: 'line', value: '', reason: 'the line is empty.' })).toBe(
+      'Line 3 (line): the line is empty.',
+    );
     expect(describeProblem({ row: 0, column: 0, field: 'stepMinutesIfNoTime', value: '0', reason: 'too small.' })).toBe(
       'Setting stepMinutesIfNoTime "0": too small.',
     );

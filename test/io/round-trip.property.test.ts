@@ -1,6 +1,13 @@
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
-import { applyRainImport, describeProblem, guessRainImport, applyFlowImport, guessFlowSettings, type Separator } from '../../src/io';
+import {
+  applyRainImport,
+  describeProblem,
+  guessRainImport,
+  applyFlowImport,
+  guessFlowSettings,
+  type Separator,
+} from '../../src/io';
 import { expectClose } from '../helpers/tolerance';
 import { formatPaste, type Paste, type PasteSpec, type TimeFormat } from './format-storm';
 
@@ -12,7 +19,11 @@ const UNITS = ['mm', 'in'] as const;
 const TIMED: TimeFormat[] = ['iso', 'iso-zone', 'hhmm', 'date+time', 'elapsed-min', 'elapsed-h'];
 
 /** A value as pasted: zero, small, or up to a heavy bar; any finite double in range. */
-const value = fc.oneof(fc.constant(0), fc.double({ min: 0, max: 200, noNaN: true, noDefaultInfinity: true }), fc.integer({ min: 0, max: 50 }));
+const value = fc.oneof(
+  fc.constant(0),
+  fc.double({ min: 0, max: 200, noNaN: true, noDefaultInfinity: true }),
+  fc.integer({ min: 0, max: 50 }),
+);
 
 const bars = fc.integer({ min: 1, max: 25 }).chain((n) =>
   fc.record({
@@ -50,19 +61,28 @@ const anySpec: fc.Arbitrary<PasteSpec> = fc
   .map(({ bars: b, ...rest }) => {
     // One column has no separator; several columns need one.
     const single = rest.timeFormat === 'none' && !rest.indexColumn;
-    const separator: Separator = single ? (rest.separator === 'none' ? 'none' : rest.separator) : rest.separator === 'none' ? 'tab' : rest.separator;
+    const separator: Separator = single
+      ? rest.separator === 'none'
+        ? 'none'
+        : rest.separator
+      : rest.separator === 'none'
+        ? 'tab'
+        : rest.separator;
     return { ...rest, ...b, separator };
   });
 
 function expectSameStorm(paste: Paste): void {
   const result = applyRainImport(paste.text, paste.settings);
   if (!result.ok) {
-    expect.fail(`the import failed on\n${paste.text}\nwith ${JSON.stringify(paste.settings)}:\n${result.problems.map(describeProblem).join('\n')}`);
+    expect.fail(
+      `the import failed on\n${paste.text}\nwith ${JSON.stringify(paste.settings)}:\n${result.problems.map(describeProblem).join('\n')}`,
+    );
   }
   const { storm } = result;
   expect(storm.durationsH.length).toBe(paste.durationsH.length);
   // Times pass through minutes → hours (and decimal hours for elapsed-h); relative 1e-9 is far below a second.
-  for (let k = 0; k < paste.durationsH.length; k++) expectClose(storm.durationsH[k]!, paste.durationsH[k]!, 1e-9, 1e-12);
+  for (let k = 0; k < paste.durationsH.length; k++)
+    expectClose(storm.durationsH[k]!, paste.durationsH[k]!, 1e-9, 1e-12);
   // Depths: a cumulative reading minus the one before carries the rounding of the level (up to
   // ~50,000 mm here), not of the bar, so an absolute 1e-7 mm, far below any gauge's resolution.
   for (let k = 0; k < paste.depthsMm.length; k++) expectClose(storm.depthsMm[k]!, paste.depthsMm[k]!, 1e-9, 1e-7);
@@ -71,7 +91,10 @@ function expectSameStorm(paste: Paste): void {
 
 describe('a storm written out as text and read back is the same storm', () => {
   it('for every separator, decimal mark, value kind, unit and time format', () => {
-    fc.assert(fc.property(anySpec, (spec) => expectSameStorm(formatPaste(spec))), { numRuns: 1500 });
+    fc.assert(
+      fc.property(anySpec, (spec) => expectSameStorm(formatPaste(spec))),
+      { numRuns: 1500 },
+    );
   }, 60_000);
 
   it.each(
@@ -81,7 +104,9 @@ describe('a storm written out as text and read back is the same storm', () => {
   )('with %s separators, decimal %s and %s values', (separator, decimal, valueKind) => {
     const spec = fc.record({ ...common, bars, unit: fc.constantFrom(...UNITS), timeFormat: fc.constantFrom(...TIMED) });
     fc.assert(
-      fc.property(spec, ({ bars: b, ...rest }) => expectSameStorm(formatPaste({ ...rest, ...b, separator, decimal, valueKind }))),
+      fc.property(spec, ({ bars: b, ...rest }) =>
+        expectSameStorm(formatPaste({ ...rest, ...b, separator, decimal, valueKind })),
+      ),
       { numRuns: 60 },
     );
   });
@@ -116,9 +141,13 @@ const describedSpec: fc.Arbitrary<PasteSpec> = fc
   })
   .map(({ bars: b, layout, ...rest }) => {
     const unitName = rest.valueKind === 'intensity' ? `${rest.unit}/h` : rest.unit;
-    const kindName = rest.valueKind === 'intensity' ? 'Intensity' : rest.valueKind === 'cumulative' ? 'Cumulative rain' : 'Rain depth';
+    const kindName =
+      rest.valueKind === 'intensity' ? 'Intensity' : rest.valueKind === 'cumulative' ? 'Cumulative rain' : 'Rain depth';
     const step = rest.timeFormat === 'none' ? `, ${b.durMin[0]}-min bars` : '';
-    const values = rest.valueKind === 'cumulative' && rest.timeFormat === 'none' ? b.values.map((v, k) => (k === 0 ? v + 0.5 : v)) : b.values;
+    const values =
+      rest.valueKind === 'cumulative' && rest.timeFormat === 'none'
+        ? b.values.map((v, k) => (k === 0 ? v + 0.5 : v))
+        : b.values;
     const timeName = rest.timeFormat === 'elapsed-min' ? 'Elapsed (min)' : 'Time';
     // Single columns keep the decimal point; see above.
     const bare = rest.timeFormat === 'none';
@@ -154,7 +183,10 @@ describe('the guesses read a described paste as the storm it stands for', () => 
           valueColumn: paste.settings.valueColumn,
         });
         // Times of day carry no date, and a guess never invents one.
-        const expected = spec.timeFormat === 'hhmm' ? { ...paste, startIso: undefined, settings: preview.settings } : { ...paste, settings: preview.settings };
+        const expected =
+          spec.timeFormat === 'hhmm'
+            ? { ...paste, startIso: undefined, settings: preview.settings }
+            : { ...paste, settings: preview.settings };
         expectSameStorm(expected);
       }),
       { numRuns: 800 },
@@ -167,7 +199,10 @@ describe('a streamflow record written out and read back is the same record', () 
     const units = { 'm3/s': 1, 'L/s': 1e-3, 'ft3/s': 0.028316846592 } as const;
     const record = fc.record({
       stepsMin: fc.array(fc.integer({ min: 1, max: 24 * 60 }), { minLength: 1, maxLength: 40 }),
-      flows: fc.array(fc.double({ min: 0, max: 5000, noNaN: true, noDefaultInfinity: true }), { minLength: 41, maxLength: 41 }),
+      flows: fc.array(fc.double({ min: 0, max: 5000, noNaN: true, noDefaultInfinity: true }), {
+        minLength: 41,
+        maxLength: 41,
+      }),
       unit: fc.constantFrom('m3/s' as const, 'L/s' as const, 'ft3/s' as const),
       layout: fc.constantFrom(
         { separator: 'tab' as const, decimal: 'point' as const, sep: '\t' },

@@ -5,7 +5,11 @@ const plain = { skipLines: 0, hasHeader: false } as const;
 
 describe('readTable', () => {
   it('splits a tab-separated spreadsheet copy into a header and rows with their line numbers', () => {
-    const table = readTable('Time\tRain (mm)\n10:10\t0.4\n10:20\t0.8\n', { separator: 'tab', skipLines: 0, hasHeader: true });
+    const table = readTable('Time\tRain (mm)\n10:10\t0.4\n10:20\t0.8\n', {
+      separator: 'tab',
+      skipLines: 0,
+      hasHeader: true,
+    });
     expect(table.header).toEqual({ line: 1, cells: ['Time', 'Rain (mm)'] });
     expect(table.rows).toEqual([
       { line: 2, cells: ['10:10', '0.4'] },
@@ -71,7 +75,10 @@ describe('readTable', () => {
 
   it('gives an empty table for empty text or a skip past the end', () => {
     expect(readTable('', { separator: 'tab', ...plain }).rows).toEqual([]);
-    expect(readTable('1\n2', { separator: 'none', skipLines: 5, hasHeader: true })).toMatchObject({ header: null, rows: [] });
+    expect(readTable('1\n2', { separator: 'none', skipLines: 5, hasHeader: true })).toMatchObject({
+      header: null,
+      rows: [],
+    });
   });
 });
 

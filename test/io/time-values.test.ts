@@ -28,7 +28,12 @@ const H = 3_600_000;
 
 describe('parseClock', () => {
   it('reads ISO 8601 date-times with T or a space, seconds and fractions', () => {
-    expect(reading('2024-05-01T10:20')).toEqual({ date: { year: 2024, month: 5, day: 1 }, hasTime: true, msOfDay: 10 * H + 20 * 60_000, zoneMinutes: null });
+    expect(reading('2024-05-01T10:20')).toEqual({
+      date: { year: 2024, month: 5, day: 1 },
+      hasTime: true,
+      msOfDay: 10 * H + 20 * 60_000,
+      zoneMinutes: null,
+    });
     expect(reading('2024-05-01 10:20:30').msOfDay).toBe(10 * H + 20 * 60_000 + 30_000);
     expect(reading('2024-05-01T10:20:30.250').msOfDay).toBe(10 * H + 20 * 60_000 + 30_250);
   });
@@ -58,7 +63,10 @@ describe('parseClock', () => {
     expect(reading('12:00 AM').msOfDay).toBe(0);
     expect(reading('12:30 pm').msOfDay).toBe(12.5 * H);
     expect(reading('1:15 P.M.').msOfDay).toBe(13.25 * H);
-    expect(reading('5/1/2024 10:00 PM', 'month-day')).toMatchObject({ date: { year: 2024, month: 5, day: 1 }, msOfDay: 22 * H });
+    expect(reading('5/1/2024 10:00 PM', 'month-day')).toMatchObject({
+      date: { year: 2024, month: 5, day: 1 },
+      msOfDay: 22 * H,
+    });
   });
 
   it('takes 24:00 as the end of a day and nothing later', () => {
@@ -104,7 +112,15 @@ function read(cells: readonly string[], options: Partial<TimeReadOptions> = {}, 
   const sources: TimeSource[] = cells.map((cell, i) => ({ line: firstLine + i, cell }));
   const line = readTimes(
     sources,
-    { kind: 'clock', decimal: 'point', dateOrder: 'day-month', dateForTimesOfDay: null, column: 1, dateColumn: null, ...options },
+    {
+      kind: 'clock',
+      decimal: 'point',
+      dateOrder: 'day-month',
+      dateForTimesOfDay: null,
+      column: 1,
+      dateColumn: null,
+      ...options,
+    },
     problems,
   );
   return { ...line, problems: problems.list() };
@@ -163,13 +179,24 @@ describe('readTimes', () => {
   it('reports a dated time that goes back, without reading it as the next day', () => {
     const r = read(['2024-05-01 23:50', '2024-05-01 00:10']);
     expect(r.problems[0]).toMatchObject({ row: 2, column: 1 });
-    expect(r.problems[0]?.reason).toBe('this time is earlier than the time on line 1 ("2024-05-01 23:50"); times must increase.');
+    expect(r.problems[0]?.reason).toBe(
+      'this time is earlier than the time on line 1 ("2024-05-01 23:50"); times must increase.',
+    );
   });
 
   it('refuses a mix of dated and undated times, and of zoned and unzoned ones', () => {
-    expect(read(['2024-05-01 10:00', '10:10']).problems[0]).toMatchObject({ row: 2, reason: expect.stringMatching(/no date but the first time does/) });
-    expect(read(['10:00', '2024-05-01 10:10']).problems[0]).toMatchObject({ row: 2, reason: expect.stringMatching(/has a date but the first time does not/) });
-    expect(read(['2024-05-01T10:00Z', '2024-05-01T10:10']).problems[0]).toMatchObject({ row: 2, reason: expect.stringMatching(/no time zone/) });
+    expect(read(['2024-05-01 10:00', '10:10']).problems[0]).toMatchObject({
+      row: 2,
+      reason: expect.stringMatching(/no date but the first time does/),
+    });
+    expect(read(['10:00', '2024-05-01 10:10']).problems[0]).toMatchObject({
+      row: 2,
+      reason: expect.stringMatching(/has a date but the first time does not/),
+    });
+    expect(read(['2024-05-01T10:00Z', '2024-05-01T10:10']).problems[0]).toMatchObject({
+      row: 2,
+      reason: expect.stringMatching(/no time zone/),
+    });
   });
 
   it('compares times written in different zones as instants', () => {
@@ -198,7 +225,9 @@ describe('readTimes', () => {
   });
 
   it('hints at elapsed times when a clock column holds plain numbers', () => {
-    expect(read(['10:00', '15']).problems[0]?.reason).toMatch(/plain number: set the time kind to elapsed minutes or hours/);
+    expect(read(['10:00', '15']).problems[0]?.reason).toMatch(
+      /plain number: set the time kind to elapsed minutes or hours/,
+    );
   });
 
   it('joins a date column to a time-of-day column', () => {
@@ -227,7 +256,9 @@ describe('isoAt', () => {
     expect(isoAt({ wallMs: Date.UTC(2024, 4, 1, 10), zoneMinutes: null }, -1 / 6)).toBe('2024-05-01T09:50:00');
     expect(isoAt({ wallMs: Date.UTC(2024, 4, 1, 10), zoneMinutes: 0 }, 0)).toBe('2024-05-01T10:00:00Z');
     expect(isoAt({ wallMs: Date.UTC(2024, 4, 1, 0, 5), zoneMinutes: 330 }, -0.25)).toBe('2024-04-30T23:50:00+05:30');
-    expect(isoAt({ wallMs: Date.UTC(2024, 4, 1), zoneMinutes: -210 }, 0.5 / 3600)).toBe('2024-05-01T00:00:00.500-03:30');
+    expect(isoAt({ wallMs: Date.UTC(2024, 4, 1), zoneMinutes: -210 }, 0.5 / 3600)).toBe(
+      '2024-05-01T00:00:00.500-03:30',
+    );
   });
 });
 

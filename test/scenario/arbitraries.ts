@@ -6,7 +6,9 @@ import type { Scenario } from '../../src/scenario';
 const unsignedZero = (x: number): number => (x === 0 ? 0 : x);
 
 /** Any finite double ≥ 0, from the smallest subnormal to the largest double. */
-const anyNonNegative = fc.double({ min: 0, max: Number.MAX_VALUE, noNaN: true, noDefaultInfinity: true }).map(unsignedZero);
+const anyNonNegative = fc
+  .double({ min: 0, max: Number.MAX_VALUE, noNaN: true, noDefaultInfinity: true })
+  .map(unsignedZero);
 
 /** A rain depth: gauge resolution (0.1 mm), arbitrary precision, or an extreme double. */
 const depthMm = fc.oneof(
@@ -15,7 +17,12 @@ const depthMm = fc.oneof(
   { weight: 1, arbitrary: anyNonNegative },
 );
 
-const positiveDuration = fc.double({ min: Number.MIN_VALUE, max: Number.MAX_VALUE, noNaN: true, noDefaultInfinity: true });
+const positiveDuration = fc.double({
+  min: Number.MIN_VALUE,
+  max: Number.MAX_VALUE,
+  noNaN: true,
+  noDefaultInfinity: true,
+});
 
 /** Steps as gauges log them (1, 5, 6, 10, 15, 30 min, 1 h) or any positive double. */
 const stepH = fc.oneof(
@@ -38,7 +45,11 @@ export const stormArb = fc
 /** ISO 8601 start times in the forms the schema reads. */
 export const startIsoArb = fc
   .record({
-    date: fc.date({ min: new Date('1900-01-01T00:00:00Z'), max: new Date('2100-12-31T23:59:59Z'), noInvalidDate: true }),
+    date: fc.date({
+      min: new Date('1900-01-01T00:00:00Z'),
+      max: new Date('2100-12-31T23:59:59Z'),
+      noInvalidDate: true,
+    }),
     form: fc.constantFrom('minutes', 'seconds', 'utc', 'offset'),
   })
   .map(({ date, form }) => {
@@ -52,7 +63,13 @@ export const startIsoArb = fc
 /** A value for one numeric parameter, anywhere inside its bounds. */
 function paramValue(param: MethodSpec['params'][number]): fc.Arbitrary<number> {
   const max = Number.isFinite(param.max) ? param.max : Number.MAX_VALUE;
-  const options = { min: param.min, max, noNaN: true, noDefaultInfinity: true, minExcluded: param.minExclusive === true };
+  const options = {
+    min: param.min,
+    max,
+    noNaN: true,
+    noDefaultInfinity: true,
+    minExcluded: param.minExclusive === true,
+  };
   const near = { ...options, max: Math.min(max, Math.max(param.min + 1, param.min * 2 + 100)) };
   return fc.oneof(fc.double(near), fc.double(options)).map(unsignedZero);
 }
@@ -119,7 +136,10 @@ export const scenarioArb: fc.Arbitrary<Scenario> = fc
         name: textArb(30),
         storm: stormArb,
         observed: fc.option(
-          fc.record({ as: fc.constantFrom('depth' as const, 'volume' as const), value: fc.double({ min: 0, max: 500, noNaN: true }).map(unsignedZero) }),
+          fc.record({
+            as: fc.constantFrom('depth' as const, 'volume' as const),
+            value: fc.double({ min: 0, max: 500, noNaN: true }).map(unsignedZero),
+          }),
           { nil: null },
         ),
       }),

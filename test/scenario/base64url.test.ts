@@ -35,7 +35,10 @@ describe('base64url', () => {
   });
 
   it('refuses padding, other characters and impossible lengths, saying where', () => {
-    expect(decodeBase64Url('Zm8=')).toEqual({ ok: false, reason: 'it has a character that does not belong in it ("=" at position 4)' });
+    expect(decodeBase64Url('Zm8=')).toEqual({
+      ok: false,
+      reason: 'it has a character that does not belong in it ("=" at position 4)',
+    });
     expect(decodeBase64Url('Zm+v')).toMatchObject({ ok: false });
     expect(decodeBase64Url('Zm 9v')).toMatchObject({ ok: false });
     expect(decodeBase64Url('Zm9vé')).toMatchObject({ ok: false });

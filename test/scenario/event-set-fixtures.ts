@@ -21,7 +21,11 @@ export function inventedEvents(count: number, bars: number, resolutionMm: number
     return {
       id: `e${e + 1}`,
       name: `Invented storm ${e + 1}`,
-      storm: { durationsH: Array.from({ length: bars }, () => 0.25), depthsMm, startIso: `2026-0${1 + (e % 9)}-1${e % 10}T06:00` },
+      storm: {
+        durationsH: Array.from({ length: bars }, () => 0.25),
+        depthsMm,
+        startIso: `2026-0${1 + (e % 9)}-1${e % 10}T06:00`,
+      },
       observed: { as: 'depth', value: 5 + e },
       streamflow: null,
     };
@@ -38,4 +42,3 @@ export function withSet(events: SetEvent[]): Scenario {
     eventSet: { events, activeId: first.id, parameter: null, designPick: 'median' },
   };
 }
-

@@ -48,12 +48,18 @@ describe('scenario version 3: the event set', () => {
       .replace(/,\n\s*"eventSet": \{[\s\S]*?\n {2}\}/, '');
     expect(file).not.toContain('eventSet');
     expect(scenarioFromFileText(file)).toEqual({ ok: true, scenario: DEMO_SCENARIO });
-    expect(decodeScenarioLink(encodeScenarioLink(v2 as unknown as Scenario))).toEqual({ ok: true, scenario: DEMO_SCENARIO });
+    expect(decodeScenarioLink(encodeScenarioLink(v2 as unknown as Scenario))).toEqual({
+      ok: true,
+      scenario: DEMO_SCENARIO,
+    });
   });
 
   it('round-trips a set of events through a share link and a file, every double included', () => {
     const events = inventedEvents(3, 40, null);
-    const scenario: Scenario = { ...withSet(events), eventSet: { ...withSet(events).eventSet, parameter: 'rateMmH', designPick: { value: 2.5 } } };
+    const scenario: Scenario = {
+      ...withSet(events),
+      eventSet: { ...withSet(events).eventSet, parameter: 'rateMmH', designPick: { value: 2.5 } },
+    };
     expect(parseScenario(scenario)).toEqual({ ok: true, scenario });
     expect(decodeScenarioLink(encodeScenarioLink(scenario))).toStrictEqual({ ok: true, scenario });
     expect(scenarioFromFileText(scenarioToFileText(scenario))).toStrictEqual({ ok: true, scenario });

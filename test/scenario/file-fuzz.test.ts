@@ -12,12 +12,33 @@ const corpus: string[] = [
   ...fc.sample(scenarioArb, { numRuns: 20, seed: 777 }).map(scenarioToFileText),
 ];
 
-const PIECES = ['{', '}', '[', ']', ',', ':', '"', '\\', '-', '.', 'e', '0', '1e999', '-1', 'null', 'true', ' ', '\n', 'é', '\ud800'];
+const PIECES = [
+  '{',
+  '}',
+  '[',
+  ']',
+  ',',
+  ':',
+  '"',
+  '\\',
+  '-',
+  '.',
+  'e',
+  '0',
+  '1e999',
+  '-1',
+  'null',
+  'true',
+  ' ',
+  '\n',
+  'é',
+  '\ud800',
+];
 
 describe('the file reader under fuzzing never throws and always says why it refuses', { timeout: 60_000 }, () => {
   it('survives characters changed, added and removed, and files cut short', () => {
     const random = seeded(21);
-    const pick = <T,>(list: readonly T[]): T => list[Math.floor(random() * list.length)] as T;
+    const pick = <T>(list: readonly T[]): T => list[Math.floor(random() * list.length)] as T;
     const tally = { ok: 0, refused: 0 };
     for (let n = 0; n < 12_000; n++) {
       const text = pick(corpus);
@@ -38,7 +59,9 @@ describe('the file reader under fuzzing never throws and always says why it refu
           break;
         default: {
           // A number somewhere replaced by an awkward one.
-          mutated = text.replace(/-?\d+(\.\d+)?(e[-+]?\d+)?/g, (m) => (random() < 0.02 ? pick(['-1', '1e999', '"7"', 'null', '-0', '0']) : m));
+          mutated = text.replace(/-?\d+(\.\d+)?(e[-+]?\d+)?/g, (m) =>
+            random() < 0.02 ? pick(['-1', '1e999', '"7"', 'null', '-0', '0']) : m,
+          );
         }
       }
       expectContract(scenarioFromFileText, mutated, tally);
@@ -59,7 +82,9 @@ describe('the file reader under fuzzing never throws and always says why it refu
       { numRuns: 3_000, seed: 23 },
     );
     fc.assert(
-      fc.property(fc.string({ unit: 'binary', maxLength: 200 }), (text) => expectContract(scenarioFromFileText, text, tally)),
+      fc.property(fc.string({ unit: 'binary', maxLength: 200 }), (text) =>
+        expectContract(scenarioFromFileText, text, tally),
+      ),
       { numRuns: 2_000, seed: 24 },
     );
     expect(tally.ok).toBe(0);
@@ -70,7 +95,18 @@ describe('the file reader under fuzzing never throws and always says why it refu
     fc.assert(
       fc.property(
         fc.constantFrom(...corpus.slice(0, 6)),
-        fc.constantFrom('version', 'name', 'storm', 'catchment', 'units', 'method', 'methodMemory', 'observed', 'caution', 'other'),
+        fc.constantFrom(
+          'version',
+          'name',
+          'storm',
+          'catchment',
+          'units',
+          'method',
+          'methodMemory',
+          'observed',
+          'caution',
+          'other',
+        ),
         fc.jsonValue({ maxDepth: 3 }),
         (text, field, value) => {
           expectContract(scenarioFromFileText, JSON.stringify({ ...JSON.parse(text), [field]: value }), tally);

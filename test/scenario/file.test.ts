@@ -21,7 +21,10 @@ function messages(result: ScenarioResult): string[] {
 
 describe('a scenario file', () => {
   it('opens as exactly the scenario it was saved from', () => {
-    expect(scenarioFromFileText(scenarioToFileText(DEMO_SCENARIO))).toStrictEqual({ ok: true, scenario: DEMO_SCENARIO });
+    expect(scenarioFromFileText(scenarioToFileText(DEMO_SCENARIO))).toStrictEqual({
+      ok: true,
+      scenario: DEMO_SCENARIO,
+    });
   });
 
   it('round-trips random scenarios exactly', () => {
@@ -114,7 +117,10 @@ describe('a file that is not right is refused with a message saying where', () =
   });
 
   it('refuses a file from a newer Raincut, saying so', () => {
-    const newer = good.replace(`"version": ${CURRENT_SCENARIO_VERSION},`, `"version": ${CURRENT_SCENARIO_VERSION + 1},`);
+    const newer = good.replace(
+      `"version": ${CURRENT_SCENARIO_VERSION},`,
+      `"version": ${CURRENT_SCENARIO_VERSION + 1},`,
+    );
     expect(messages(scenarioFromFileText(newer))[0]).toMatch(
       new RegExp(`^version: is ${CURRENT_SCENARIO_VERSION + 1}, newer than this version of Raincut can read`),
     );
@@ -127,7 +133,9 @@ describe('a file that is not right is refused with a message saying where', () =
   });
 
   it('refuses a value that is not text at all', () => {
-    expect(messages(scenarioFromFileText(null as unknown as string))).toEqual(['The file could not be read: it is not text.']);
+    expect(messages(scenarioFromFileText(null as unknown as string))).toEqual([
+      'The file could not be read: it is not text.',
+    ]);
   });
 });
 

@@ -21,7 +21,11 @@ export const BASE64URL = 'ABCDEFGHIJKLMNOPQRSTUVWXYZabcdefghijklmnopqrstuvwxyz01
  * non-empty and none from the last-resort safety net; an acceptance is a
  * scenario that passes the schema again.
  */
-export function expectContract(read: (input: string) => ScenarioResult, input: string, tally: { ok: number; refused: number }): void {
+export function expectContract(
+  read: (input: string) => ScenarioResult,
+  input: string,
+  tally: { ok: number; refused: number },
+): void {
   let result: ScenarioResult;
   try {
     result = read(input);
@@ -30,7 +34,8 @@ export function expectContract(read: (input: string) => ScenarioResult, input: s
   }
   if (result.ok) {
     tally.ok++;
-    if (!parseScenario(result.scenario).ok) expect.fail(`accepted an invalid scenario from ${JSON.stringify(input.slice(0, 200))}`);
+    if (!parseScenario(result.scenario).ok)
+      expect.fail(`accepted an invalid scenario from ${JSON.stringify(input.slice(0, 200))}`);
     return;
   }
   tally.refused++;

@@ -63,7 +63,8 @@ function refusal<T>(result: LibraryResult<T>): string[] {
 }
 
 const named = (name: string): Scenario => ({ ...DEMO_SCENARIO, name });
-const names = (library: ReturnType<typeof setup>['library']): string[] => library.list().entries.map((e) => e.scenario.name);
+const names = (library: ReturnType<typeof setup>['library']): string[] =>
+  library.list().entries.map((e) => e.scenario.name);
 
 describe('the saved-scenario list', () => {
   it('starts empty, with nothing wrong', () => {
@@ -173,7 +174,9 @@ describe('the saved-scenario list', () => {
     const deleted = library.list().deleted;
     expect(deleted).toHaveLength(MAX_DELETED);
     expect(deleted[0]?.id).toBe(ids[ids.length - 1]);
-    expect(refusal(library.restore(ids[0] as string))).toEqual(['There is no deleted scenario with id "s1" to restore.']);
+    expect(refusal(library.restore(ids[0] as string))).toEqual([
+      'There is no deleted scenario with id "s1" to restore.',
+    ]);
   });
 
   it('gives back exactly what was saved, for random scenarios', () => {
@@ -257,8 +260,12 @@ describe('the saved-scenario list with damaged or failing storage', () => {
     const before = storage.snapshot();
     const listing = library.list();
     expect(listing.canWrite).toBe(false);
-    expect(listing.problems[0]?.message).toMatch(/^The saved scenarios are damaged and could not be set aside \(QuotaExceededError/);
-    expect(refusal(library.save(named('A'))).at(-1)).toBe('The scenario was not done: the saved list cannot be written safely now.');
+    expect(listing.problems[0]?.message).toMatch(
+      /^The saved scenarios are damaged and could not be set aside \(QuotaExceededError/,
+    );
+    expect(refusal(library.save(named('A'))).at(-1)).toBe(
+      'The scenario was not done: the saved list cannot be written safely now.',
+    );
     expect(storage.snapshot()).toEqual(before);
   });
 
@@ -307,7 +314,9 @@ describe('the saved-scenario list with damaged or failing storage', () => {
     const damaged = fc.oneof(
       fc.string({ unit: 'binary', maxLength: 80 }),
       fc.json({ maxDepth: 3 }),
-      fc.tuple(fc.nat({ max: good.length }), fc.string({ maxLength: 3 })).map(([at, s]) => good.slice(0, at) + s + good.slice(at + 1)),
+      fc
+        .tuple(fc.nat({ max: good.length }), fc.string({ maxLength: 3 }))
+        .map(([at, s]) => good.slice(0, at) + s + good.slice(at + 1)),
       fc.nat({ max: good.length }).map((at) => good.slice(0, at)),
     );
     fc.assert(

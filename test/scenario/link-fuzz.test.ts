@@ -45,7 +45,7 @@ function varint(n: number): number[] {
 describe('the link reader under fuzzing never throws and always says why it refuses', { timeout: 60_000 }, () => {
   it('survives characters changed, added, removed and moved in real links', () => {
     const random = seeded(1);
-    const pick = <T,>(list: readonly T[]): T => list[Math.floor(random() * list.length)] as T;
+    const pick = <T>(list: readonly T[]): T => list[Math.floor(random() * list.length)] as T;
     const tally = { ok: 0, refused: 0 };
     for (let n = 0; n < 12_000; n++) {
       const link = pick(corpus);
@@ -66,7 +66,11 @@ describe('the link reader under fuzzing never throws and always says why it refu
           break;
         case 4: {
           const len = 1 + Math.floor(random() * 40);
-          mutated = link.slice(0, at) + link.slice(at + len, at + 2 * len) + link.slice(at, at + len) + link.slice(at + 2 * len);
+          mutated =
+            link.slice(0, at) +
+            link.slice(at + len, at + 2 * len) +
+            link.slice(at, at + len) +
+            link.slice(at + 2 * len);
           break;
         }
         default:
@@ -118,9 +122,13 @@ describe('the link reader under fuzzing never throws and always says why it refu
       { numRuns: 8_000, seed: 3 },
     );
     fc.assert(
-      fc.property(fc.string({ unit: 'binary', maxLength: 300 }), fc.constantFrom('', '#', LINK_PREFIX, '#rc', 'rc999999.'), (text, lead) => {
-        expectContract(decodeScenarioLink, lead + text, tally);
-      }),
+      fc.property(
+        fc.string({ unit: 'binary', maxLength: 300 }),
+        fc.constantFrom('', '#', LINK_PREFIX, '#rc', 'rc999999.'),
+        (text, lead) => {
+          expectContract(decodeScenarioLink, lead + text, tally);
+        },
+      ),
       { numRuns: 4_000, seed: 4 },
     );
     expect(tally.ok).toBe(0);
@@ -158,14 +166,26 @@ describe('the link reader under fuzzing never throws and always says why it refu
       return resealed(packed);
     };
     fc.assert(
-      fc.property(fc.jsonValue({ maxDepth: 4 }), (value) => expectContract(decodeScenarioLink, seal(JSON.stringify(value)), tally)),
+      fc.property(fc.jsonValue({ maxDepth: 4 }), (value) =>
+        expectContract(decodeScenarioLink, seal(JSON.stringify(value)), tally),
+      ),
       { numRuns: 2_000, seed: 6 },
     );
     // Documents that are almost right: one field of a valid scenario replaced.
     fc.assert(
       fc.property(
         scenarioArb,
-        fc.constantFrom('version', 'name', 'storm', 'catchment', 'units', 'method', 'methodMemory', 'observed', 'extra'),
+        fc.constantFrom(
+          'version',
+          'name',
+          'storm',
+          'catchment',
+          'units',
+          'method',
+          'methodMemory',
+          'observed',
+          'extra',
+        ),
         fc.jsonValue({ maxDepth: 2 }),
         (scenario, field, value) => {
           expectContract(decodeScenarioLink, seal(JSON.stringify({ ...scenario, [field]: value })), tally);

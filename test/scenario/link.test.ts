@@ -131,7 +131,9 @@ describe('makeShareLink', () => {
     const big: Scenario = { ...DEMO_SCENARIO, storm: { durationsH: depthsMm.map(() => 1 / 12), depthsMm } };
     const result = makeShareLink(big);
     expect(!result.ok && result.problems[0]?.message).toMatch(
-      new RegExp(`^This scenario makes a link of \\d+ characters, more than the ${MAX_LINK_CHARS} a link may have\\. Save it as a file to share it\\.$`),
+      new RegExp(
+        `^This scenario makes a link of \\d+ characters, more than the ${MAX_LINK_CHARS} a link may have\\. Save it as a file to share it\\.$`,
+      ),
     );
   });
 });

@@ -62,12 +62,14 @@ describe('migrate refuses versions it cannot read', () => {
     expect(versionMessage(rest)).toMatch(/^version: is missing; every scenario says which version/);
   });
 
-  it.each([['1', '"1"'], [1.5, '1.5'], [null, 'null'], [Number.MAX_VALUE, String(Number.MAX_VALUE)]])(
-    'refuses the version %s',
-    (version, shown) => {
-      expect(versionMessage({ ...DEMO_SCENARIO, version })).toBe(`version: must be a whole number (got ${shown}).`);
-    },
-  );
+  it.each([
+    ['1', '"1"'],
+    [1.5, '1.5'],
+    [null, 'null'],
+    [Number.MAX_VALUE, String(Number.MAX_VALUE)],
+  ])('refuses the version %s', (version, shown) => {
+    expect(versionMessage({ ...DEMO_SCENARIO, version })).toBe(`version: must be a whole number (got ${shown}).`);
+  });
 
   it('refuses a version older than the first one', () => {
     expect(versionMessage({ ...DEMO_SCENARIO, version: 0 })).toBe(
@@ -123,7 +125,14 @@ describe('the chain mechanics (with a made-up chain, not a real format history)'
   });
 
   it('stops with a message when a step throws or forgets the version', () => {
-    const throwing: Migration = { from: 1, to: 2, summary: 'throws', up: () => { throw new Error('bad data'); } };
+    const throwing: Migration = {
+      from: 1,
+      to: 2,
+      summary: 'throws',
+      up: () => {
+        throw new Error('bad data');
+      },
+    };
     const forgetful: Migration = { from: 1, to: 2, summary: 'forgets', up: (doc) => ({ ...doc }) };
     const skipping: Migration = { from: 1, to: 3, summary: 'skips', up: (doc) => ({ ...doc, version: 3 }) };
     const message = (step: Migration): string => {

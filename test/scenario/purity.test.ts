@@ -15,10 +15,13 @@ describe('src/scenario', () => {
     expect(sources.length).toBeGreaterThan(8);
   });
 
-  it.each(sources.map((s) => [s.name, s.text] as const))('%s imports only the core, its own files, valibot and fflate', (_name, text) => {
-    const imports = [...text.matchAll(/\bfrom\s+['"]([^'"]+)['"]/g)].map((m) => m[1] as string);
-    for (const spec of imports) expect(spec, `import "${spec}"`).toMatch(/^(\.\/[\w-]+|\.\.\/core|valibot|fflate)$/);
-    expect(text).not.toMatch(/\b(document|window|localStorage|sessionStorage|navigator)\.[A-Za-z_]/);
-    expect(text).not.toMatch(/\b(eval|Function)\s*\(/);
-  });
+  it.each(sources.map((s) => [s.name, s.text] as const))(
+    '%s imports only the core, its own files, valibot and fflate',
+    (_name, text) => {
+      const imports = [...text.matchAll(/\bfrom\s+['"]([^'"]+)['"]/g)].map((m) => m[1] as string);
+      for (const spec of imports) expect(spec, `import "${spec}"`).toMatch(/^(\.\/[\w-]+|\.\.\/core|valibot|fflate)$/);
+      expect(text).not.toMatch(/\b(document|window|localStorage|sessionStorage|navigator)\.[A-Za-z_]/);
+      expect(text).not.toMatch(/\b(eval|Function)\s*\(/);
+    },
+  );
 });

@@ -77,14 +77,17 @@ describe('parseScenario accepts good documents', () => {
     expect(parseScenario(input).ok).toBe(true);
   });
 
-  it.each(['2026-07-14T15:00', '2026-07-14T15:00:59', '2026-07-14T15:00:00.125Z', '2024-02-29T23:59+10:00', '2026-07-14T15:00:00-05:30'])(
-    'accepts the storm start %s',
-    (startIso) => {
-      const input = demo();
-      input['storm'].startIso = startIso;
-      expect(parseScenario(input).ok).toBe(true);
-    },
-  );
+  it.each([
+    '2026-07-14T15:00',
+    '2026-07-14T15:00:59',
+    '2026-07-14T15:00:00.125Z',
+    '2024-02-29T23:59+10:00',
+    '2026-07-14T15:00:00-05:30',
+  ])('accepts the storm start %s', (startIso) => {
+    const input = demo();
+    input['storm'].startIso = startIso;
+    expect(parseScenario(input).ok).toBe(true);
+  });
 });
 
 describe('parseScenario names the field of every problem', () => {
@@ -141,7 +144,10 @@ describe('parseScenario names the field of every problem', () => {
 
   it('counts, rather than lists, the bad bars of a long storm past the first few', () => {
     const input = demo();
-    input['storm'] = { durationsH: Array.from({ length: 5000 }, () => 'x'), depthsMm: Array.from({ length: 5000 }, () => 1) };
+    input['storm'] = {
+      durationsH: Array.from({ length: 5000 }, () => 'x'),
+      depthsMm: Array.from({ length: 5000 }, () => 1),
+    };
     const problems = problemsOf(parseScenario(input));
     expect(problems).toHaveLength(LISTED_BARS + 1);
     expect(problems.slice(0, LISTED_BARS).map((p) => p.path)).toEqual(
@@ -170,7 +176,9 @@ describe('parseScenario names the field of every problem', () => {
     delete input['storm'].depthsMm;
     delete input['units'];
     const result = parseScenario(input);
-    expect(problemAt(result, 'storm.depthsMm').message).toBe('storm.depthsMm: is missing (the rain depth of each bar, mm).');
+    expect(problemAt(result, 'storm.depthsMm').message).toBe(
+      'storm.depthsMm: is missing (the rain depth of each bar, mm).',
+    );
     expect(problemAt(result, 'units').message).toBe('units: is missing (the display units, "si" or "us").');
   });
 
@@ -180,7 +188,9 @@ describe('parseScenario names the field of every problem', () => {
     input['storm'].gauge = 'A1';
     input['catchment'].slope = 0.02;
     const result = parseScenario(input);
-    expect(problemAt(result, 'colour').message).toBe(`colour: is not a field of a version ${CURRENT_SCENARIO_VERSION} scenario.`);
+    expect(problemAt(result, 'colour').message).toBe(
+      `colour: is not a field of a version ${CURRENT_SCENARIO_VERSION} scenario.`,
+    );
     expect(problemAt(result, 'storm.gauge').message).toBe('storm.gauge: is not a field of the storm.');
     expect(problemAt(result, 'catchment.slope').message).toBe('catchment.slope: is not a field of the catchment.');
   });
@@ -213,7 +223,9 @@ describe('parseScenario names the field of every problem', () => {
   it('refuses a negative catchment area', () => {
     const input = demo();
     input['catchment'].areaM2 = -5;
-    expect(problemAt(parseScenario(input), 'catchment.areaM2').message).toContain('must be a number ≥ 0 (catchment area, m²');
+    expect(problemAt(parseScenario(input), 'catchment.areaM2').message).toContain(
+      'must be a number ≥ 0 (catchment area, m²',
+    );
   });
 
   it('refuses a bad observed runoff, field by field', () => {
@@ -246,24 +258,29 @@ describe('parseScenario names the field of every problem', () => {
     // Random damage to random fields of random scenarios.
     const damage = fc.constantFrom<unknown>(-1, 'x', null, [], {}, true, 1e400, NaN);
     fc.assert(
-      fc.property(scenarioArb, fc.array(fc.tuple(fc.nat(), damage), { minLength: 1, maxLength: 4 }), (scenario, hits) => {
-        const doc = structuredClone(scenario) as unknown as Record<string, unknown>;
-        const slots = [
-          (v: unknown) => (doc['name'] = v),
-          (v: unknown) => (doc['units'] = v),
-          (v: unknown) => (doc['catchment'] = { ...(doc['catchment'] as object), areaM2: v }),
-          (v: unknown) => (doc['storm'] = { ...(doc['storm'] as object), durationsH: [v] }),
-          (v: unknown) => (doc['method'] = { ...(doc['method'] as object), kind: v }),
-          (v: unknown) => (doc['observed'] = v === null ? 'none' : { as: 'depth', value: v, parameter: 'p', locked: false }),
-        ];
-        for (const [slot, value] of hits) slots[slot % slots.length]?.(value);
-        const result = parseScenario(doc);
-        if (result.ok) return; // some damage happens to be valid (e.g. observed: null)
-        for (const p of result.problems) {
-          expect(p.message.length).toBeGreaterThan(p.path.length + 2);
-          if (p.path !== '') expect(p.message.startsWith(p.path)).toBe(true);
-        }
-      }),
+      fc.property(
+        scenarioArb,
+        fc.array(fc.tuple(fc.nat(), damage), { minLength: 1, maxLength: 4 }),
+        (scenario, hits) => {
+          const doc = structuredClone(scenario) as unknown as Record<string, unknown>;
+          const slots = [
+            (v: unknown) => (doc['name'] = v),
+            (v: unknown) => (doc['units'] = v),
+            (v: unknown) => (doc['catchment'] = { ...(doc['catchment'] as object), areaM2: v }),
+            (v: unknown) => (doc['storm'] = { ...(doc['storm'] as object), durationsH: [v] }),
+            (v: unknown) => (doc['method'] = { ...(doc['method'] as object), kind: v }),
+            (v: unknown) =>
+              (doc['observed'] = v === null ? 'none' : { as: 'depth', value: v, parameter: 'p', locked: false }),
+          ];
+          for (const [slot, value] of hits) slots[slot % slots.length]?.(value);
+          const result = parseScenario(doc);
+          if (result.ok) return; // some damage happens to be valid (e.g. observed: null)
+          for (const p of result.problems) {
+            expect(p.message.length).toBeGreaterThan(p.path.length + 2);
+            if (p.path !== '') expect(p.message.startsWith(p.path)).toBe(true);
+          }
+        },
+      ),
       { numRuns: 300, seed: 7 },
     );
   });
@@ -337,7 +354,9 @@ describe('parseScenario checks the method through the core table', () => {
         const method: Record<string, unknown> = { ...defaultMethod(kind) };
         delete method[choice.key];
         input['method'] = method;
-        expect(problemAt(parseScenario(input), `method.${choice.key}`).message).toBe(`method.${choice.key}: is missing (${choice.label}).`);
+        expect(problemAt(parseScenario(input), `method.${choice.key}`).message).toBe(
+          `method.${choice.key}: is missing (${choice.label}).`,
+        );
       });
     }
   }

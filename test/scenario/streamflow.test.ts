@@ -88,7 +88,9 @@ describe('scenario version 2: the streamflow record', () => {
     const good = parseScenario({ ...versionOne(), streamflow: RECORD });
     expect(good).toEqual({ ok: true, scenario: WITH_RECORD });
     const bad = parseScenario({ ...versionOne(), streamflow: { ...RECORD, offsetH: 'soon' } });
-    expect(messages(bad)).toEqual(['streamflow.offsetH: must be a finite number of hours (from the storm start to the first sample) (got "soon").']);
+    expect(messages(bad)).toEqual([
+      'streamflow.offsetH: must be a finite number of hours (from the storm start to the first sample) (got "soon").',
+    ]);
   });
 
   it('reads a record with its separation, end point and link to the observed runoff', () => {
@@ -126,7 +128,9 @@ describe('scenario version 2: the streamflow record', () => {
             dischargeM3s,
             offsetH: r.offsetH === 0 ? 0 : r.offsetH,
             baseflow: { kind: 'lyne-hollick', alpha: r.alpha === 0 ? 0 : r.alpha, passes: r.passes },
-            baseflowMemory: { 'straight-line': { kind: 'straight-line', endTimeH: timesH[timesH.length - 1] as number } },
+            baseflowMemory: {
+              'straight-line': { kind: 'straight-line', endTimeH: timesH[timesH.length - 1] as number },
+            },
             useAsObserved: r.linked && observed !== null,
           },
         };
@@ -166,7 +170,9 @@ describe('scenario version 2: the streamflow record', () => {
     expect(messages(parseScenario(withFlow({ baseflow: { kind: 'sponge' } })))[0]).toMatch(
       /^streamflow\.baseflow\.kind: "sponge" is not a baseflow method this version of Raincut knows \("constant", "straight-line"/,
     );
-    expect(messages(parseScenario(withFlow({ baseflow: { kind: 'eckhardt', a: 0.98, bfiMax: 0.8, beta: 1 } })))).toEqual([
+    expect(
+      messages(parseScenario(withFlow({ baseflow: { kind: 'eckhardt', a: 0.98, bfiMax: 0.8, beta: 1 } }))),
+    ).toEqual([
       'streamflow.baseflow.beta: is not a parameter of the "eckhardt" baseflow method (its parameters are a, bfiMax, stepH).',
     ]);
     expect(messages(parseScenario(withFlow({ baseflow: { kind: 'eckhardt', a: 1, bfiMax: 0.8 } })))).toEqual([
@@ -181,9 +187,15 @@ describe('scenario version 2: the streamflow record', () => {
     expect(messages(parseScenario(withFlow({ baseflow: { kind: 'straight-line', endTimeH: 13 } })))).toEqual([
       'streamflow.baseflow.endTimeH: The end point (13 h) is after the last sample of the record (12 h).',
     ]);
-    expect(paths(parseScenario(withFlow({ baseflow: { kind: 'constant', riseIndex: 8 } })))).toEqual(['streamflow.baseflow.riseIndex']);
+    expect(paths(parseScenario(withFlow({ baseflow: { kind: 'constant', riseIndex: 8 } })))).toEqual([
+      'streamflow.baseflow.riseIndex',
+    ]);
     expect(
-      paths(parseScenario(withFlow({ baseflowMemory: { 'straight-line': { kind: 'straight-line', endTimeH: 0.5, riseIndex: 1 } } }))),
+      paths(
+        parseScenario(
+          withFlow({ baseflowMemory: { 'straight-line': { kind: 'straight-line', endTimeH: 0.5, riseIndex: 1 } } }),
+        ),
+      ),
     ).toEqual(['streamflow.baseflowMemory["straight-line"].endTimeH']);
   });
 
@@ -203,8 +215,12 @@ describe('scenario version 2: the streamflow record', () => {
     expect(messages(parseScenario({ ...WITH_RECORD, streamflow: rest }))).toEqual([
       'streamflow.offsetH: is missing (hours from the storm start to the first sample (negative when the record starts first)).',
     ]);
-    expect(messages(parseScenario(withFlow({ gauge: 'G1' })))).toEqual(['streamflow.gauge: is not a field of the streamflow record.']);
-    expect(messages(parseScenario({ ...WITH_RECORD, streamflow: [1, 2] }))[0]).toMatch(/^streamflow: must be an object with timesH/);
+    expect(messages(parseScenario(withFlow({ gauge: 'G1' })))).toEqual([
+      'streamflow.gauge: is not a field of the streamflow record.',
+    ]);
+    expect(messages(parseScenario({ ...WITH_RECORD, streamflow: [1, 2] }))[0]).toMatch(
+      /^streamflow: must be an object with timesH/,
+    );
   });
 
   it('requires the field in a version 2 document', () => {

@@ -29,7 +29,9 @@ describe('the loss-rate line', () => {
     fireEvent.pointerMove(line, { pointerId: 1, clientY: frame.y(6) });
     // Before release, the screen already shows the new rate and its results.
     await waitFor(() => expect(rate(scenario())).toBeCloseTo(6, 9));
-    expect(screen.getByLabelText('Excess depth')).toHaveTextContent(mmText(coreTotals(FOUR_BARS.storm, { kind: 'constant', rateMmH: rate(scenario()) }).totalExcessMm));
+    expect(screen.getByLabelText('Excess depth')).toHaveTextContent(
+      mmText(coreTotals(FOUR_BARS.storm, { kind: 'constant', rateMmH: rate(scenario()) }).totalExcessMm),
+    );
     fireEvent.pointerMove(line, { pointerId: 1, clientY: frame.y(3) });
     fireEvent.pointerUp(line, { pointerId: 1, clientY: frame.y(3) });
     const phi = rate(scenario());
@@ -90,7 +92,9 @@ describe('the loss-rate line', () => {
     await user.keyboard('{ArrowLeft}');
     expect(rate(scenario())).toBe(7.1);
     expect(line).toHaveAttribute('aria-valuetext', '7.1 mm/h');
-    expect(screen.getByLabelText('Excess depth')).toHaveTextContent(mmText(coreTotals(FOUR_BARS.storm, { kind: 'constant', rateMmH: 7.1 }).totalExcessMm));
+    expect(screen.getByLabelText('Excess depth')).toHaveTextContent(
+      mmText(coreTotals(FOUR_BARS.storm, { kind: 'constant', rateMmH: 7.1 }).totalExcessMm),
+    );
     await user.keyboard('{Home}');
     expect(rate(scenario())).toBe(0);
     await user.keyboard('{End}');
@@ -100,7 +104,10 @@ describe('the loss-rate line', () => {
   });
 
   it('for initial–continuing loss the line is the continuing rate, and the initial loss has its own layer', async () => {
-    const { user, scenario } = renderWorkbench({ ...FOUR_BARS, method: { kind: 'initial-continuing', initialMm: 5, rateMmH: 2 } });
+    const { user, scenario } = renderWorkbench({
+      ...FOUR_BARS,
+      method: { kind: 'initial-continuing', initialMm: 5, rateMmH: 2 },
+    });
     const line = screen.getByRole('slider', { name: 'Continuing loss rate' });
     expect(line).toHaveAttribute('aria-valuenow', '2');
     expect(screen.getByRole('list', { name: 'Legend' })).toHaveTextContent('Initial loss');

@@ -15,7 +15,9 @@ describe('matching an observed runoff', () => {
     const expected = calibrate(FOUR_BARS.storm, FOUR_BARS.method, 'rateMmH', 4.5);
     if (!expected.ok) throw new Error(expected.message);
     expect(rate(scenario())).toBe(expected.value);
-    expect(Number(screen.getByRole('slider', { name: 'Loss rate φ' }).getAttribute('aria-valuenow'))).toBe(expected.value);
+    expect(Number(screen.getByRole('slider', { name: 'Loss rate φ' }).getAttribute('aria-valuenow'))).toBe(
+      expected.value,
+    );
     expect(screen.getByLabelText('Excess depth')).toHaveTextContent(mmText(4.5));
     expect(screen.getByText(/^Answer: Loss rate φ/)).toBeInTheDocument();
   });
@@ -30,12 +32,22 @@ describe('matching an observed runoff', () => {
   });
 
   it('an out-of-reach parameter is explained in the core’s words', async () => {
-    const { user } = renderWorkbench({ ...FOUR_BARS, method: { kind: 'initial-continuing', initialMm: 0, rateMmH: 30 } });
+    const { user } = renderWorkbench({
+      ...FOUR_BARS,
+      method: { kind: 'initial-continuing', initialMm: 0, rateMmH: 30 },
+    });
     await user.type(screen.getByRole('textbox', { name: 'Observed runoff (mm)' }), '5');
     await user.selectOptions(screen.getByRole('combobox', { name: 'Parameter to fit' }), 'initialMm');
-    const expected = calibrate(FOUR_BARS.storm, { kind: 'initial-continuing', initialMm: 0, rateMmH: 30 }, 'initialMm', 5);
+    const expected = calibrate(
+      FOUR_BARS.storm,
+      { kind: 'initial-continuing', initialMm: 0, rateMmH: 30 },
+      'initialMm',
+      5,
+    );
     expect(expected.ok).toBe(false);
-    expect(screen.getByRole('textbox', { name: 'Observed runoff (mm)' })).toHaveAccessibleDescription(!expected.ok ? expected.message : '');
+    expect(screen.getByRole('textbox', { name: 'Observed runoff (mm)' })).toHaveAccessibleDescription(
+      !expected.ok ? expected.message : '',
+    );
   });
 
   it('a negative observed runoff is refused with a message and the typed text stays', async () => {
@@ -91,7 +103,10 @@ describe('matching an observed runoff', () => {
   });
 
   it('switching between depth and volume keeps the same runoff', async () => {
-    const { user, scenario } = renderWorkbench({ ...FOUR_BARS, observed: { as: 'depth', value: 4.5, parameter: 'rateMmH', locked: false } });
+    const { user, scenario } = renderWorkbench({
+      ...FOUR_BARS,
+      observed: { as: 'depth', value: 4.5, parameter: 'rateMmH', locked: false },
+    });
     await user.click(screen.getByRole('radio', { name: 'Volume' }));
     expect(scenario().observed).toMatchObject({ as: 'volume', value: 4500 });
     await user.click(screen.getByRole('radio', { name: 'Depth' }));
@@ -99,12 +114,19 @@ describe('matching an observed runoff', () => {
   });
 
   it('the results stay the core’s while matched through a method switch', async () => {
-    const { user, scenario } = renderWorkbench({ ...FOUR_BARS, observed: { as: 'depth', value: 4.5, parameter: 'rateMmH', locked: true } });
+    const { user, scenario } = renderWorkbench({
+      ...FOUR_BARS,
+      observed: { as: 'depth', value: 4.5, parameter: 'rateMmH', locked: true },
+    });
     await user.selectOptions(screen.getByRole('combobox', { name: 'Loss method' }), 'proportional');
     expect(screen.getByRole('combobox', { name: 'Parameter to fit' })).toHaveValue('coefficient');
     const expected = calibrate(FOUR_BARS.storm, { kind: 'proportional', coefficient: 0.4 }, 'coefficient', 4.5);
     if (!expected.ok) throw new Error(expected.message);
-    expect(screen.getByRole('textbox', { name: 'Runoff coefficient' })).toHaveValue(String(Number(expected.value.toPrecision(6))));
-    expect(screen.getByLabelText('Excess depth')).toHaveTextContent(mmText(coreTotals(scenario().storm, expected.method).totalExcessMm));
+    expect(screen.getByRole('textbox', { name: 'Runoff coefficient' })).toHaveValue(
+      String(Number(expected.value.toPrecision(6))),
+    );
+    expect(screen.getByLabelText('Excess depth')).toHaveTextContent(
+      mmText(coreTotals(scenario().storm, expected.method).totalExcessMm),
+    );
   });
 });

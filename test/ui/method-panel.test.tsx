@@ -9,7 +9,9 @@ describe('the loss-method panel', () => {
   it('offers every method in the core’s table', () => {
     renderWorkbench();
     const picker = screen.getByRole('combobox', { name: 'Loss method' });
-    const options = within(picker).getAllByRole('option').map((o) => o.textContent);
+    const options = within(picker)
+      .getAllByRole('option')
+      .map((o) => o.textContent);
     expect(options).toEqual(METHOD_KINDS.map((k) => METHODS[k].label));
   });
 
@@ -25,10 +27,14 @@ describe('the loss-method panel', () => {
     for (const kind of METHOD_KINDS) {
       await user.selectOptions(screen.getByRole('combobox', { name: 'Loss method' }), kind);
       const spec = METHODS[kind];
-      for (const p of spec.params) expect(screen.getByRole('textbox', { name: new RegExp(`^${p.label.replace(/[()]/g, '\\$&')}`) })).toBeInTheDocument();
+      for (const p of spec.params)
+        expect(
+          screen.getByRole('textbox', { name: new RegExp(`^${p.label.replace(/[()]/g, '\\$&')}`) }),
+        ).toBeInTheDocument();
       for (const c of spec.choices ?? []) {
         const group = screen.getByRole('group', { name: c.label });
-        for (const option of c.choices) expect(within(group).getByRole('radio', { name: option.label })).toBeInTheDocument();
+        for (const option of c.choices)
+          expect(within(group).getByRole('radio', { name: option.label })).toBeInTheDocument();
       }
     }
   });
@@ -41,8 +47,12 @@ describe('the loss-method panel', () => {
     await user.type(rate, '6.5');
     await user.selectOptions(picker, 'proportional');
     expect(scenario().storm).toBe(FOUR_BARS.storm);
-    expect(screen.getByRole('textbox', { name: 'Runoff coefficient' })).toHaveValue(String(defaultMethod('proportional').coefficient));
-    expect(screen.getByLabelText('Excess depth')).toHaveTextContent(mmText(coreTotals(FOUR_BARS.storm, defaultMethod('proportional')).totalExcessMm));
+    expect(screen.getByRole('textbox', { name: 'Runoff coefficient' })).toHaveValue(
+      String(defaultMethod('proportional').coefficient),
+    );
+    expect(screen.getByLabelText('Excess depth')).toHaveTextContent(
+      mmText(coreTotals(FOUR_BARS.storm, defaultMethod('proportional')).totalExcessMm),
+    );
     await user.selectOptions(picker, 'constant');
     expect(screen.getByRole('textbox', { name: 'Loss rate φ (mm/h)' })).toHaveValue('6.5');
     expect(screen.getByRole('slider', { name: 'Loss rate φ' })).toHaveAttribute('aria-valuenow', '6.5');
@@ -53,7 +63,9 @@ describe('the loss-method panel', () => {
     const rate = screen.getByRole('textbox', { name: 'Loss rate φ (mm/h)' });
     await user.clear(rate);
     await user.type(rate, '4');
-    expect(screen.getByLabelText('Excess depth')).toHaveTextContent(mmText(coreTotals(FOUR_BARS.storm, { kind: 'constant', rateMmH: 4 }).totalExcessMm));
+    expect(screen.getByLabelText('Excess depth')).toHaveTextContent(
+      mmText(coreTotals(FOUR_BARS.storm, { kind: 'constant', rateMmH: 4 }).totalExcessMm),
+    );
   });
 
   it('an out-of-range value shows the core’s message beside the field and keeps the typed text', async () => {
@@ -102,7 +114,10 @@ describe('the loss-method panel', () => {
 
 describe('infiltration methods', () => {
   it('Horton’s choice of what capacity follows is a labelled radio group that sets the method', async () => {
-    const { user, scenario } = renderWorkbench({ ...FOUR_BARS, method: { kind: 'horton', f0MmH: 15, fcMmH: 3, kPerH: 1.5, ponding: true } });
+    const { user, scenario } = renderWorkbench({
+      ...FOUR_BARS,
+      method: { kind: 'horton', f0MmH: 15, fcMmH: 3, kPerH: 1.5, ponding: true },
+    });
     const group = screen.getByRole('group', { name: 'Capacity follows' });
     await user.click(within(group).getByRole('radio', { name: 'time from storm start' }));
     expect(scenario().method).toEqual({ kind: 'horton', f0MmH: 15, fcMmH: 3, kPerH: 1.5, ponding: false });
@@ -112,7 +127,10 @@ describe('infiltration methods', () => {
   });
 
   it('Horton’s cross-parameter check is shown beside the field', async () => {
-    const { user } = renderWorkbench({ ...FOUR_BARS, method: { kind: 'horton', f0MmH: 15, fcMmH: 3, kPerH: 1.5, ponding: true } });
+    const { user } = renderWorkbench({
+      ...FOUR_BARS,
+      method: { kind: 'horton', f0MmH: 15, fcMmH: 3, kPerH: 1.5, ponding: true },
+    });
     const f0 = screen.getByRole('textbox', { name: /^Initial capacity f₀/ });
     await user.clear(f0);
     await user.type(f0, '2');
@@ -121,7 +139,10 @@ describe('infiltration methods', () => {
   });
 
   it('Green–Ampt soil texture values set K, ψ and Δθ from the core’s table in one undoable edit', async () => {
-    const { user, scenario } = renderWorkbench({ ...FOUR_BARS, method: { kind: 'green-ampt', ksMmH: 3.4, suctionMm: 88.9, moistureDeficit: 0.3 } });
+    const { user, scenario } = renderWorkbench({
+      ...FOUR_BARS,
+      method: { kind: 'green-ampt', ksMmH: 3.4, suctionMm: 88.9, moistureDeficit: 0.3 },
+    });
     await user.selectOptions(screen.getByRole('combobox', { name: 'Soil texture' }), 'sandy loam');
     const se = screen.getByRole('textbox', { name: 'Initial effective saturation' });
     await user.clear(se);
@@ -135,7 +156,10 @@ describe('infiltration methods', () => {
   });
 
   it('a saturation outside 0 to 1 is refused beside the field', async () => {
-    const { user } = renderWorkbench({ ...FOUR_BARS, method: { kind: 'green-ampt', ksMmH: 3.4, suctionMm: 88.9, moistureDeficit: 0.3 } });
+    const { user } = renderWorkbench({
+      ...FOUR_BARS,
+      method: { kind: 'green-ampt', ksMmH: 3.4, suctionMm: 88.9, moistureDeficit: 0.3 },
+    });
     const se = screen.getByRole('textbox', { name: 'Initial effective saturation' });
     await user.clear(se);
     await user.type(se, '1.2');

@@ -11,15 +11,28 @@ describe('the unit switch', () => {
     const { user } = renderWorkbench();
     await user.click(screen.getByRole('radio', { name: 'US customary' }));
     const t = coreTotals(FOUR_BARS.storm, FOUR_BARS.method);
-    expect(screen.getByLabelText('Rainfall depth')).toHaveTextContent(`${formatValue(convertDepth(t.rainMm, 'mm', 'in'))} in`);
-    expect(screen.getByLabelText('Excess depth')).toHaveTextContent(`${formatValue(convertDepth(t.totalExcessMm, 'mm', 'in'))} in`);
-    expect(screen.getByLabelText('Peak excess intensity')).toHaveTextContent(`${formatValue(convertRate(t.peakExcessMmH, 'mm/h', 'in/h'))} in/h`);
+    expect(screen.getByLabelText('Rainfall depth')).toHaveTextContent(
+      `${formatValue(convertDepth(t.rainMm, 'mm', 'in'))} in`,
+    );
+    expect(screen.getByLabelText('Excess depth')).toHaveTextContent(
+      `${formatValue(convertDepth(t.totalExcessMm, 'mm', 'in'))} in`,
+    );
+    expect(screen.getByLabelText('Peak excess intensity')).toHaveTextContent(
+      `${formatValue(convertRate(t.peakExcessMmH, 'mm/h', 'in/h'))} in/h`,
+    );
     expect(screen.getByLabelText('Runoff volume')).toHaveTextContent(
       `${formatValue(convertVolume(runoffVolumeM3(t.totalExcessMm, 1e6), 'm3', 'acre-ft'))} acre-ft`,
     );
-    expect(screen.getByRole('textbox', { name: 'Loss rate φ (in/h)' })).toHaveValue(String(Number((8 / 25.4).toPrecision(6))));
-    expect(screen.getByRole('textbox', { name: 'Catchment area' })).toHaveValue(String(Number(convertArea(1e6, 'm2', 'acre').toPrecision(6))));
-    expect(screen.getByRole('slider', { name: 'Loss rate φ' })).toHaveAttribute('aria-valuetext', `${formatValue(8 / 25.4)} in/h`);
+    expect(screen.getByRole('textbox', { name: 'Loss rate φ (in/h)' })).toHaveValue(
+      String(Number((8 / 25.4).toPrecision(6))),
+    );
+    expect(screen.getByRole('textbox', { name: 'Catchment area' })).toHaveValue(
+      String(Number(convertArea(1e6, 'm2', 'acre').toPrecision(6))),
+    );
+    expect(screen.getByRole('slider', { name: 'Loss rate φ' })).toHaveAttribute(
+      'aria-valuetext',
+      `${formatValue(8 / 25.4)} in/h`,
+    );
   });
 
   it('switching back and forth changes no stored value', async () => {

@@ -36,9 +36,7 @@ export const constantSpec: BaseflowMethodSpec<'constant'> = {
   summary:
     'Baseflow holds at the discharge of the start of rise until the recession falls back to it; the flow above that level is direct runoff.',
   source: 'Graphical separation, e.g. Chow, Maidment & Mays (1988) Applied Hydrology, §5.1.',
-  params: [
-    { key: 'riseIndex', ...START_OF_RISE_PARAM },
-  ],
+  params: [{ key: 'riseIndex', ...START_OF_RISE_PARAM }],
   defaults: { kind: 'constant' },
   needsArea: () => false,
   separate: separateConstant,

@@ -32,9 +32,7 @@ export const separateEckhardt: SeparateFn<'eckhardt'> = (timesH, dischargeM3s, m
   for (let k = 1; k < n; k++) {
     const q = dischargeM3s[k] as number;
     const a =
-      stepH === undefined
-        ? method.a
-        : Math.pow(method.a, ((timesH[k] as number) - (timesH[k - 1] as number)) / stepH);
+      stepH === undefined ? method.a : Math.pow(method.a, ((timesH[k] as number) - (timesH[k - 1] as number)) / stepH);
     b = ((1 - bfiMax) * a * b + (1 - a) * bfiMax * q) / (1 - a * bfiMax);
     if (b > q) b = q;
     lineM3s[k] = b;

@@ -43,9 +43,7 @@ export function lyneHollickPass(
     const prev = k - dir;
     const x = input[k] as number;
     const a =
-      stepH === undefined
-        ? alpha
-        : Math.pow(alpha, Math.abs((timesH[k] as number) - (timesH[prev] as number)) / stepH);
+      stepH === undefined ? alpha : Math.pow(alpha, Math.abs((timesH[k] as number) - (timesH[prev] as number)) / stepH);
     f = a * f + 0.5 * (1 + a) * (x - (input[prev] as number));
     if (f < 0) f = 0;
     else if (f > x) f = x;

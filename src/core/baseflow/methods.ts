@@ -66,12 +66,19 @@ export function validateBaseflowMethod(method: BaseflowMethod): void {
     // A sample index names a sample, so a bad one is reported with it.
     const index = param.unit === 'sample' && Number.isInteger(v) && (v as number) >= 0 ? (v as number) : undefined;
     if (typeof v !== 'number' || !Number.isFinite(v)) {
-      throw new InputError(param.key, `${param.label} must be a finite number${unit && ` of hours`} (got ${String(v)}).`);
+      throw new InputError(
+        param.key,
+        `${param.label} must be a finite number${unit && ` of hours`} (got ${String(v)}).`,
+      );
     }
     const tooLow = param.minExclusive ? v <= param.min : v < param.min;
     const tooHigh = param.maxExclusive ? v >= param.max : v > param.max;
     if (tooLow || tooHigh || (param.integer && !Number.isInteger(v))) {
-      throw new InputError(param.key, `${param.label} must be ${describeBaseflowRange(param)}${unit} (got ${v}).`, index);
+      throw new InputError(
+        param.key,
+        `${param.label} must be ${describeBaseflowRange(param)}${unit} (got ${v}).`,
+        index,
+      );
     }
   }
 }

@@ -7,12 +7,7 @@ import { EXACT_CALIBRATORS } from './exact';
 import { PARAMETER_REL_TOL, solveMonotone } from './monotone';
 
 export type CalibrationFailure =
-  | 'invalid-input'
-  | 'unknown-parameter'
-  | 'invalid-target'
-  | 'negative-target'
-  | 'exceeds-rainfall'
-  | 'bound-reached';
+  'invalid-input' | 'unknown-parameter' | 'invalid-target' | 'negative-target' | 'exceeds-rainfall' | 'bound-reached';
 
 export type CalibrationResult =
   | {
@@ -73,7 +68,11 @@ export function calibrate(
     };
   }
   if (typeof targetExcessMm !== 'number' || !Number.isFinite(targetExcessMm)) {
-    return { ok: false, reason: 'invalid-target', message: 'The observed runoff must be a finite number of millimetres.' };
+    return {
+      ok: false,
+      reason: 'invalid-target',
+      message: 'The observed runoff must be a finite number of millimetres.',
+    };
   }
   if (targetExcessMm < 0) {
     return { ok: false, reason: 'negative-target', message: 'The observed runoff cannot be negative.' };

@@ -49,11 +49,18 @@ export function exactPhi(durationsH: ArrayLike<number>, depthsMm: ArrayLike<numb
   const n = depthsMm.length;
   if (n < SAMPLE_FROM) return exactPhiBySelection(durationsH, depthsMm, targetMm);
   const bracket = sampledBracket(durationsH, depthsMm, targetMm);
-  return exactPhiInBracket(durationsH, depthsMm, targetMm, bracket.lo, bracket.hi) ?? exactPhiByBuckets(durationsH, depthsMm, targetMm);
+  return (
+    exactPhiInBracket(durationsH, depthsMm, targetMm, bracket.lo, bracket.hi) ??
+    exactPhiByBuckets(durationsH, depthsMm, targetMm)
+  );
 }
 
 /** Weighted quickselect over every bar (short storms). */
-export function exactPhiBySelection(durationsH: ArrayLike<number>, depthsMm: ArrayLike<number>, targetMm: number): number {
+export function exactPhiBySelection(
+  durationsH: ArrayLike<number>,
+  depthsMm: ArrayLike<number>,
+  targetMm: number,
+): number {
   const n = depthsMm.length;
   const depth = new Float64Array(n);
   const dur = new Float64Array(n);
@@ -184,7 +191,11 @@ export function exactPhiInBracket(
 }
 
 /** The bucket route (module comment), used when the sampled bracket misses. */
-export function exactPhiByBuckets(durationsH: ArrayLike<number>, depthsMm: ArrayLike<number>, targetMm: number): number {
+export function exactPhiByBuckets(
+  durationsH: ArrayLike<number>,
+  depthsMm: ArrayLike<number>,
+  targetMm: number,
+): number {
   const n = depthsMm.length;
   // Pass 1: intensities (one division per bar, kept), total and peak.
   if (workIntensity.length < n) {

@@ -80,15 +80,25 @@ function isFiniteNumber(x: unknown): x is number {
  * index for a table) when the relation cannot be used.
  */
 export function validateIdf(idf: Idf): void {
-  if (!idf || typeof idf !== 'object') throw new InputError('idf', 'No intensity–duration–frequency relation was given.');
+  if (!idf || typeof idf !== 'object')
+    throw new InputError('idf', 'No intensity–duration–frequency relation was given.');
   if (!IDF_KINDS.includes(idf.kind)) {
-    throw new InputError('kind', `Unknown IDF relation "${String(idf.kind)}"; use ${IDF_KINDS.map((k) => `"${k}"`).join(', ')}.`);
+    throw new InputError(
+      'kind',
+      `Unknown IDF relation "${String(idf.kind)}"; use ${IDF_KINDS.map((k) => `"${k}"`).join(', ')}.`,
+    );
   }
   if (idf.durationUnit !== 'min' && idf.durationUnit !== 'h') {
-    throw new InputError('durationUnit', `The IDF duration unit must be "min" or "h" (got ${JSON.stringify(idf.durationUnit)}).`);
+    throw new InputError(
+      'durationUnit',
+      `The IDF duration unit must be "min" or "h" (got ${JSON.stringify(idf.durationUnit)}).`,
+    );
   }
   if (!Object.prototype.hasOwnProperty.call(RATE_UNITS, idf.intensityUnit)) {
-    throw new InputError('intensityUnit', `The IDF intensity unit must be "mm/h" or "in/h" (got ${JSON.stringify(idf.intensityUnit)}).`);
+    throw new InputError(
+      'intensityUnit',
+      `The IDF intensity unit must be "mm/h" or "in/h" (got ${JSON.stringify(idf.intensityUnit)}).`,
+    );
   }
   if (idf.kind === 'table') validateTable(idf);
   else validateFormula(idf);
@@ -109,16 +119,23 @@ function validateFormula(idf: IdfShiftedPower | IdfPowerSum): void {
     );
   }
   if (c === 1 && b === 0) {
-    throw new InputError('b', 'With c = 1 and b = 0 every duration has the same rainfall depth; b must be greater than 0 when c is 1.');
+    throw new InputError(
+      'b',
+      'With c = 1 and b = 0 every duration has the same rainfall depth; b must be greater than 0 when c is 1.',
+    );
   }
 }
 
 function validateTable(idf: IdfTable): void {
   const { durations: t, intensities: i } = idf;
   if (!t || typeof t.length !== 'number') throw new InputError('durations', 'The IDF table has no list of durations.');
-  if (!i || typeof i.length !== 'number') throw new InputError('intensities', 'The IDF table has no list of intensities.');
+  if (!i || typeof i.length !== 'number')
+    throw new InputError('intensities', 'The IDF table has no list of intensities.');
   if (t.length < 2) {
-    throw new InputError('durations', `The IDF table needs at least two durations to interpolate between (got ${t.length}).`);
+    throw new InputError(
+      'durations',
+      `The IDF table needs at least two durations to interpolate between (got ${t.length}).`,
+    );
   }
   if (i.length !== t.length) {
     throw new InputError(
@@ -131,7 +148,11 @@ function validateTable(idf: IdfTable): void {
     const tk = t[k];
     const ik = i[k];
     if (!isFiniteNumber(tk) || !(tk > 0)) {
-      throw new InputError('durations', `IDF row ${k + 1}: the duration must be a finite number of ${unit} greater than 0 (got ${String(tk)}).`, k);
+      throw new InputError(
+        'durations',
+        `IDF row ${k + 1}: the duration must be a finite number of ${unit} greater than 0 (got ${String(tk)}).`,
+        k,
+      );
     }
     if (!isFiniteNumber(ik) || !(ik > 0)) {
       throw new InputError(
@@ -144,7 +165,11 @@ function validateTable(idf: IdfTable): void {
     const tPrev = t[k - 1] as number;
     const iPrev = i[k - 1] as number;
     if (!(tk > tPrev)) {
-      throw new InputError('durations', `IDF row ${k + 1}: durations must increase down the table (${fmt(tk)} ${unit} follows ${fmt(tPrev)} ${unit}).`, k);
+      throw new InputError(
+        'durations',
+        `IDF row ${k + 1}: durations must increase down the table (${fmt(tk)} ${unit} follows ${fmt(tPrev)} ${unit}).`,
+        k,
+      );
     }
     if (ik > iPrev) {
       throw new InputError(
@@ -237,7 +262,10 @@ function tableEvaluator(idf: IdfTable, perH: number, toMmH: number): (durationH:
 
 function checkDuration(idf: Idf, durationH: number): void {
   if (!isFiniteNumber(durationH) || !(durationH > 0)) {
-    throw new InputError('durationH', `The duration must be a finite number of hours greater than 0 (got ${String(durationH)}).`);
+    throw new InputError(
+      'durationH',
+      `The duration must be a finite number of hours greater than 0 (got ${String(durationH)}).`,
+    );
   }
   if (idf.kind === 'table' && !idfCovers(idf, durationH)) {
     throw new InputError('durationH', outsideTableMessage(idf, durationH));

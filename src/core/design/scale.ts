@@ -13,7 +13,10 @@ import { fmt } from './format';
 export function scaleStormToDepth(storm: Storm, depthMm: number): Storm {
   validateStorm(storm);
   if (typeof depthMm !== 'number' || !Number.isFinite(depthMm) || !(depthMm >= 0)) {
-    throw new InputError('depthMm', `The new total depth must be a finite number of millimetres, 0 or more (got ${String(depthMm)}).`);
+    throw new InputError(
+      'depthMm',
+      `The new total depth must be a finite number of millimetres, 0 or more (got ${String(depthMm)}).`,
+    );
   }
   const total = totalDepthMm(storm);
   if (total === 0 && depthMm > 0) {

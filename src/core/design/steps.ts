@@ -18,10 +18,16 @@ const WHOLE_REL_TOL = 1e-9;
  */
 export function stepCount(durationH: number, stepH: number): number {
   if (typeof durationH !== 'number' || !Number.isFinite(durationH) || !(durationH > 0)) {
-    throw new InputError('durationH', `The storm duration must be a finite number of hours greater than 0 (got ${String(durationH)}).`);
+    throw new InputError(
+      'durationH',
+      `The storm duration must be a finite number of hours greater than 0 (got ${String(durationH)}).`,
+    );
   }
   if (typeof stepH !== 'number' || !Number.isFinite(stepH) || !(stepH > 0)) {
-    throw new InputError('stepH', `The time step must be a finite number of hours greater than 0 (got ${String(stepH)}).`);
+    throw new InputError(
+      'stepH',
+      `The time step must be a finite number of hours greater than 0 (got ${String(stepH)}).`,
+    );
   }
   if (stepH > durationH * (1 + WHOLE_REL_TOL)) {
     throw new InputError('stepH', `The time step (${fmt(stepH)} h) is longer than the storm (${fmt(durationH)} h).`);

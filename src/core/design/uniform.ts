@@ -19,7 +19,10 @@ export interface UniformStormOptions {
 export function uniformStorm(options: UniformStormOptions): Storm {
   const { depthMm, durationH, stepH } = options;
   if (typeof depthMm !== 'number' || !Number.isFinite(depthMm) || !(depthMm >= 0)) {
-    throw new InputError('depthMm', `The storm depth must be a finite number of millimetres, 0 or more (got ${String(depthMm)}).`);
+    throw new InputError(
+      'depthMm',
+      `The storm depth must be a finite number of millimetres, 0 or more (got ${String(depthMm)}).`,
+    );
   }
   const n = stepCount(durationH, stepH);
   const storm: Storm = {

@@ -46,7 +46,10 @@ export function applyDesignValue(
   validateMethod(method);
   if (!numericParam(method.kind, parameter)) {
     const spec = methodSpec(method.kind);
-    throw new InputError('parameter', `${spec.label} has no parameter "${parameter}"; it has ${spec.params.map((p) => p.key).join(', ')}.`);
+    throw new InputError(
+      'parameter',
+      `${spec.label} has no parameter "${parameter}"; it has ${spec.params.map((p) => p.key).join(', ')}.`,
+    );
   }
   const design = { ...method, [parameter]: value } as LossMethod;
   validateMethod(design);

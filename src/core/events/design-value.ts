@@ -18,11 +18,17 @@ export function pickDesignValue(summary: FitSummary, pick: DesignPick = 'median'
     return pick.value;
   }
   if (pick !== 'median' && pick !== 'mean' && pick !== 'min' && pick !== 'max') {
-    throw new InputError('designValue', `Unknown choice of design value "${String(pick)}"; use median, mean, min, max or a number.`);
+    throw new InputError(
+      'designValue',
+      `Unknown choice of design value "${String(pick)}"; use median, mean, min, max or a number.`,
+    );
   }
   const value = summary[pick];
   if (summary.count === 0 || value === null) {
-    throw new InputError('designValue', `No event has a fitted value, so there is no ${pick} to use; enter a value instead.`);
+    throw new InputError(
+      'designValue',
+      `No event has a fitted value, so there is no ${pick} to use; enter a value instead.`,
+    );
   }
   return value;
 }

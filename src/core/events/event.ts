@@ -27,7 +27,11 @@ export function validateEventList(events: readonly CatchmentEvent[]): void {
     }
     const earlier = seen.get(event.id);
     if (earlier !== undefined) {
-      throw new InputError('id', `Events ${earlier + 1} and ${k + 1} share the id "${event.id}"; ids must be unique.`, k);
+      throw new InputError(
+        'id',
+        `Events ${earlier + 1} and ${k + 1} share the id "${event.id}"; ids must be unique.`,
+        k,
+      );
     }
     seen.set(event.id, k);
     if (typeof event.name !== 'string') throw new InputError('name', `Event ${k + 1} has no name.`, k);

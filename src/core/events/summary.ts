@@ -27,6 +27,14 @@ export function summariseFits(fits: readonly EventFit[]): FitSummary {
   let sum = 0;
   for (const v of values) sum += v;
   const mid = count >> 1;
-  const median = count % 2 === 1 ? (values[mid] as number) : ((values[mid - 1] as number) + (values[mid] as number)) / 2;
-  return { count, withoutAnswer, mean: sum / count, median, min: values[0] as number, max: values[count - 1] as number };
+  const median =
+    count % 2 === 1 ? (values[mid] as number) : ((values[mid - 1] as number) + (values[mid] as number)) / 2;
+  return {
+    count,
+    withoutAnswer,
+    mean: sum / count,
+    median,
+    min: values[0] as number,
+    max: values[count - 1] as number,
+  };
 }

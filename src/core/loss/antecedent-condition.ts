@@ -17,5 +17,8 @@ export function curveNumberForCondition(cnII: number, condition: AntecedentCondi
   if (condition === 'I') return (4.2 * cnII) / (10 - 0.058 * cnII);
   if (condition === 'III') return (23 * cnII) / (10 + 0.13 * cnII);
   if (condition === 'II') return cnII;
-  throw new InputError('condition', `Antecedent runoff condition must be "I", "II" or "III" (got ${JSON.stringify(condition)}).`);
+  throw new InputError(
+    'condition',
+    `Antecedent runoff condition must be "I", "II" or "III" (got ${JSON.stringify(condition)}).`,
+  );
 }

@@ -28,7 +28,13 @@ export function computeLossesUnchecked(storm: Storm, method: LossMethod, buffers
   const n = storm.depthsMm.length;
   const lossMm = buffers && buffers.lossMm.length >= n ? buffers.lossMm.subarray(0, n) : new Float64Array(n);
   const excessMm = buffers && buffers.excessMm.length >= n ? buffers.excessMm.subarray(0, n) : new Float64Array(n);
-  const totals = (methodSpec(method.kind) as MethodSpec).compute(storm.durationsH, storm.depthsMm, method as never, lossMm, excessMm);
+  const totals = (methodSpec(method.kind) as MethodSpec).compute(
+    storm.durationsH,
+    storm.depthsMm,
+    method as never,
+    lossMm,
+    excessMm,
+  );
   if (!totals) return summarise(storm, lossMm, excessMm);
   const { rainMm } = totals;
   return { lossMm, excessMm, ...totals, runoffFraction: rainMm > 0 ? totals.totalExcessMm / rainMm : 0 };

@@ -64,8 +64,7 @@ export const computeCurveNumber: ComputeFn<'curve-number'> = (_durationsH, depth
 export const curveNumberSpec: MethodSpec<'curve-number'> = {
   kind: 'curve-number',
   label: 'NRCS curve number',
-  summary:
-    'Cumulative runoff from cumulative rain through the curve number; an initial abstraction is lost first.',
+  summary: 'Cumulative runoff from cumulative rain through the curve number; an initial abstraction is lost first.',
   source: 'USDA SCS (1986) TR-55, chapter 2; Chow, Maidment & Mays (1988) Applied Hydrology, section 5.5.',
   params: [
     {

@@ -98,7 +98,12 @@ function solveIncrement(kt: number, m: number, startMm: number, base: number, lo
  * cumulative infiltration F(t), mm, of F − ψΔθ·ln(1 + F/ψΔθ) = K·t
  * (Chow, Maidment & Mays 1988, eq. 4.3.8, number from memory).
  */
-export function greenAmptPondedDepthMm(ksMmH: number, suctionMm: number, moistureDeficit: number, hours: number): number {
+export function greenAmptPondedDepthMm(
+  ksMmH: number,
+  suctionMm: number,
+  moistureDeficit: number,
+  hours: number,
+): number {
   return greenAmptPondedIncrementMm(ksMmH, suctionMm * moistureDeficit, 0, hours);
 }
 

@@ -216,7 +216,8 @@ export function hortonAbsorbingF0(storm: Storm, method: HortonLoss): number {
 export const hortonSpec: MethodSpec<'horton'> = {
   kind: 'horton',
   label: 'Horton infiltration',
-  summary: 'Infiltration capacity decays exponentially from an initial to a final rate; rain above capacity becomes excess.',
+  summary:
+    'Infiltration capacity decays exponentially from an initial to a final rate; rain above capacity becomes excess.',
   source: 'Horton (1940), Soil Sci. Soc. Am. Proc. 5; Chow, Maidment & Mays (1988) Applied Hydrology, section 4.2.',
   params: [
     {

@@ -48,7 +48,9 @@ export function defaultMethod<K extends LossKind>(kind: K): MethodOf<K> {
 export function describeRange(param: NumericParam): string {
   const low = param.minExclusive ? `greater than ${param.min}` : `at least ${param.min}`;
   if (param.max === Infinity) return low;
-  return param.minExclusive ? `greater than ${param.min} and at most ${param.max}` : `between ${param.min} and ${param.max}`;
+  return param.minExclusive
+    ? `greater than ${param.min} and at most ${param.max}`
+    : `between ${param.min} and ${param.max}`;
 }
 
 /**
@@ -64,7 +66,10 @@ export function validateMethod(method: LossMethod): void {
     const v = values[param.key];
     const unit = param.unit === '-' ? '' : ` ${param.unit}`;
     if (typeof v !== 'number' || !Number.isFinite(v)) {
-      throw new InputError(param.key, `${param.label} must be a finite number${unit ? ` in${unit}` : ''} (got ${String(v)}).`);
+      throw new InputError(
+        param.key,
+        `${param.label} must be a finite number${unit ? ` in${unit}` : ''} (got ${String(v)}).`,
+      );
     }
     const tooLow = param.minExclusive ? v <= param.min : v < param.min;
     if (tooLow || v > param.max) {

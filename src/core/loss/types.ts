@@ -1,7 +1,10 @@
 import type { Storm } from '../storm';
 
 /** Constant loss rate, the φ-index: L_k = min(P_k, φ·Δt_k). */
-export interface ConstantLoss { readonly kind: 'constant'; readonly rateMmH: number }
+export interface ConstantLoss {
+  readonly kind: 'constant';
+  readonly rateMmH: number;
+}
 /** Initial loss (mm) satisfied first, then a continuing rate (mm/h). */
 export interface InitialContinuingLoss {
   readonly kind: 'initial-continuing';
@@ -9,7 +12,10 @@ export interface InitialContinuingLoss {
   readonly rateMmH: number;
 }
 /** Proportional loss: excess is a fixed fraction (runoff coefficient) of rain. */
-export interface ProportionalLoss { readonly kind: 'proportional'; readonly coefficient: number }
+export interface ProportionalLoss {
+  readonly kind: 'proportional';
+  readonly coefficient: number;
+}
 /**
  * Horton infiltration capacity f(t) = f_c + (f_0 − f_c)·e^(−k t). `ponding`
  * false: t is time from the storm start; true: capacity follows cumulative
@@ -30,7 +36,11 @@ export interface GreenAmptLoss {
   readonly moistureDeficit: number;
 }
 /** NRCS curve number on the λ = 0.2 basis; `iaRatio` 0.05 converts S to that basis. */
-export interface CurveNumberLoss { readonly kind: 'curve-number'; readonly cn: number; readonly iaRatio: 0.2 | 0.05 }
+export interface CurveNumberLoss {
+  readonly kind: 'curve-number';
+  readonly cn: number;
+  readonly iaRatio: 0.2 | 0.05;
+}
 
 /**
  * Every loss method the core knows, as a discriminated union on `kind`.
@@ -38,12 +48,7 @@ export interface CurveNumberLoss { readonly kind: 'curve-number'; readonly cn: n
  * entry in `loss/methods.ts`.
  */
 export type LossMethod =
-  | ConstantLoss
-  | InitialContinuingLoss
-  | ProportionalLoss
-  | HortonLoss
-  | GreenAmptLoss
-  | CurveNumberLoss;
+  ConstantLoss | InitialContinuingLoss | ProportionalLoss | HortonLoss | GreenAmptLoss | CurveNumberLoss;
 export type LossKind = LossMethod['kind'];
 export type MethodOf<K extends LossKind> = Extract<LossMethod, { kind: K }>;
 

@@ -104,13 +104,18 @@ export function Hyetograph() {
           <Axes frame={frame} />
           <g role="img" aria-label={`Bars: ${summary}`}>
             <RainLayer frame={frame} storm={storm} />
-            {results.ok ? (
-              <LossLayer frame={frame} storm={storm} lossMm={results.result.lossMm} partMm={part} />
-            ) : null}
+            {results.ok ? <LossLayer frame={frame} storm={storm} lossMm={results.result.lossMm} partMm={part} /> : null}
           </g>
-          {capacityPath ? <path className="capacity" d={capacityPath} data-layer="capacity" aria-hidden="true" /> : null}
+          {capacityPath ? (
+            <path className="capacity" d={capacityPath} data-layer="capacity" aria-hidden="true" />
+          ) : null}
           {n === 0 ? (
-            <text className="chart__empty" x={(frame.plot.left + frame.plot.right) / 2} y={(frame.plot.top + frame.plot.bottom) / 2} textAnchor="middle">
+            <text
+              className="chart__empty"
+              x={(frame.plot.left + frame.plot.right) / 2}
+              y={(frame.plot.top + frame.plot.bottom) / 2}
+              textAnchor="middle"
+            >
               No rainfall bars yet
             </text>
           ) : null}

@@ -1,5 +1,12 @@
 import { line } from 'd3-shape';
-import { greenAmptRateMmH, hortonCapacityMmH, totalDurationH, type LossKind, type LossMethod, type Storm } from '../../core';
+import {
+  greenAmptRateMmH,
+  hortonCapacityMmH,
+  totalDurationH,
+  type LossKind,
+  type LossMethod,
+  type Storm,
+} from '../../core';
 import type { ChartFrame } from './frame';
 
 /**

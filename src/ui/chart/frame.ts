@@ -45,7 +45,13 @@ const EMPTY_TOP = { si: 10, us: 0.5 } as const;
  * start; see time-span.ts): the storm and a streamflow record on one axis.
  * Without it the axis runs over the storm.
  */
-export function chartFrame(storm: Storm, width: number, height: number, system: UnitSystem, span?: TimeSpanH): ChartFrame {
+export function chartFrame(
+  storm: Storm,
+  width: number,
+  height: number,
+  system: UnitSystem,
+  span?: TimeSpanH,
+): ChartFrame {
   const plot = {
     left: MARGIN.left,
     right: Math.max(MARGIN.left + 40, width - MARGIN.right),
@@ -79,7 +85,8 @@ export function chartFrame(storm: Storm, width: number, height: number, system: 
     const multiDay = formatWallDate(fromMs) !== formatWallDate(endMs);
     xTicks = clock.ticks(tickCount).map((t) => ({
       px: clock(t),
-      label: multiDay && formatWallTime(t.getTime()) === '00:00' ? formatWallDate(t.getTime()) : formatWallTime(t.getTime()),
+      label:
+        multiDay && formatWallTime(t.getTime()) === '00:00' ? formatWallDate(t.getTime()) : formatWallTime(t.getTime()),
     }));
     xTitle = `Clock time, storm from ${formatWallDate(startMs)} ${formatWallTime(startMs)}`;
   } else {

@@ -28,12 +28,14 @@ interface Row {
 }
 
 function rows(units: UnitSystem): Row[] {
-  const q = (quantity: Quantity, pick: (t: Totals) => number | null): Row['cell'] => (t) => {
-    const si = pick(t);
-    if (si === null) return { text: '—', value: null };
-    const v = toDisplay(quantity, si, units);
-    return { text: `${formatValue(v)} ${unitText(displayUnit(quantity, units))}`, value: v };
-  };
+  const q =
+    (quantity: Quantity, pick: (t: Totals) => number | null): Row['cell'] =>
+    (t) => {
+      const si = pick(t);
+      if (si === null) return { text: '—', value: null };
+      const v = toDisplay(quantity, si, units);
+      return { text: `${formatValue(v)} ${unitText(displayUnit(quantity, units))}`, value: v };
+    };
   const u = (quantity: Quantity): string => unitText(displayUnit(quantity, units));
   return [
     { id: 'rain', label: 'Rainfall depth', cell: q('depth', (t) => t.rainMm), unit: u('depth') },
@@ -43,7 +45,8 @@ function rows(units: UnitSystem): Row[] {
     {
       id: 'fraction',
       label: 'Runoff fraction',
-      cell: (t) => (t.fraction === null ? { text: '—', value: null } : { text: formatPercent(t.fraction), value: t.fraction * 100 }),
+      cell: (t) =>
+        t.fraction === null ? { text: '—', value: null } : { text: formatPercent(t.fraction), value: t.fraction * 100 },
       unit: 'percentage points',
       percentPoints: true,
     },
@@ -91,7 +94,12 @@ function PinnedChart({ pin, index, frame, units, derived }: PinnedChartProps) {
         <h3>
           <span className="compare__index">{index + 1}</span> {name}
         </h3>
-        <button type="button" className="share-button--small" aria-label={`Unpin ${name}`} onClick={() => pins.unpin(pin.id)}>
+        <button
+          type="button"
+          className="share-button--small"
+          aria-label={`Unpin ${name}`}
+          onClick={() => pins.unpin(pin.id)}
+        >
           Unpin
         </button>
       </div>
@@ -111,20 +119,40 @@ function PinnedChart({ pin, index, frame, units, derived }: PinnedChartProps) {
 }
 
 /** The small charts, each as wide as a share of the panel, on frames with one scale. */
-function PinnedCharts({ pins, units, derivedOf }: { pins: readonly Pin[]; units: UnitSystem; derivedOf: (pin: Pin) => Derived }) {
+function PinnedCharts({
+  pins,
+  units,
+  derivedOf,
+}: {
+  pins: readonly Pin[];
+  units: UnitSystem;
+  derivedOf: (pin: Pin) => Derived;
+}) {
   const [boxRef, width] = useElementWidth<HTMLDivElement>(1000);
   const n = Math.max(1, pins.length);
   const chartWidth = Math.max(220, Math.floor((width - GAP_PX * (n - 1)) / n));
   const frames = useMemo(
-    () => commonFrames(pins.map((p) => p.scenario.storm), chartWidth, SMALL_CHART_HEIGHT, units),
+    () =>
+      commonFrames(
+        pins.map((p) => p.scenario.storm),
+        chartWidth,
+        SMALL_CHART_HEIGHT,
+        units,
+      ),
     [pins, chartWidth, units],
   );
   return (
     <div ref={boxRef} className="compare__cards-box">
-      <ul className="compare__cards" aria-label="Pinned scenario charts" style={{ gridTemplateColumns: `repeat(${n}, minmax(0, 1fr))` }}>
+      <ul
+        className="compare__cards"
+        aria-label="Pinned scenario charts"
+        style={{ gridTemplateColumns: `repeat(${n}, minmax(0, 1fr))` }}
+      >
         {pins.map((pin, i) => {
           const frame = frames[i];
-          return frame ? <PinnedChart key={pin.id} pin={pin} index={i} frame={frame} units={units} derived={derivedOf(pin)} /> : null;
+          return frame ? (
+            <PinnedChart key={pin.id} pin={pin} index={i} frame={frame} units={units} derived={derivedOf(pin)} />
+          ) : null;
         })}
       </ul>
     </div>
@@ -161,8 +189,8 @@ export function ComparePanel() {
       <div className="compare__head">
         <h2 id="compare-title">Compare pinned scenarios</h2>
         <p className="compare__intro">
-          {pins.length} of {MAX_PINS} pinned. Pins are copies: editing the scenario on screen does not change them. Charts share one time
-          and intensity scale; differences are from pin 1.
+          {pins.length} of {MAX_PINS} pinned. Pins are copies: editing the scenario on screen does not change them.
+          Charts share one time and intensity scale; differences are from pin 1.
         </p>
         {pins.length > 1 ? (
           <button type="button" className="share-button--small" onClick={() => pins.forEach((p) => board.unpin(p.id))}>
@@ -185,7 +213,8 @@ export function ComparePanel() {
           <div className="compare__table-box">
             <table className="compare__table">
               <caption>
-                Totals of the pinned scenarios, in {units === 'si' ? 'SI' : 'US customary'} units, with the difference from pin 1
+                Totals of the pinned scenarios, in {units === 'si' ? 'SI' : 'US customary'} units, with the difference
+                from pin 1
               </caption>
               <thead>
                 <tr>
@@ -209,10 +238,18 @@ export function ComparePanel() {
                         const comparable = i > 0 && first !== undefined && (!row.key || row.key(t) === row.key(first));
                         const unit = row.id === 'fitted' ? fittedUnit(t, units) : row.unit;
                         const diff: Difference | null = comparable
-                          ? difference(base?.value ?? null, cell.value, unit, row.percentPoints ? { percentPoints: true } : {})
+                          ? difference(
+                              base?.value ?? null,
+                              cell.value,
+                              unit,
+                              row.percentPoints ? { percentPoints: true } : {},
+                            )
                           : null;
                         return (
-                          <td key={pins[i]?.id ?? i} className={diff ? `compare__cell compare__cell--${diff.direction}` : 'compare__cell'}>
+                          <td
+                            key={pins[i]?.id ?? i}
+                            className={diff ? `compare__cell compare__cell--${diff.direction}` : 'compare__cell'}
+                          >
                             <span className="compare__value">{cell.text}</span>
                             {diff ? <DifferenceNote diff={diff} /> : null}
                             {i > 0 && !comparable && cell.value !== null ? (

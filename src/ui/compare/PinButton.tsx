@@ -19,7 +19,11 @@ export function PinButton() {
     show({
       tone: 'done',
       title: `Pinned “${result.pin.scenario.name}” as ${count} of ${MAX_PINS}.`,
-      body: <p>The pin is a copy: editing the scenario on screen does not change it. The comparison is below the workbench.</p>,
+      body: (
+        <p>
+          The pin is a copy: editing the scenario on screen does not change it. The comparison is below the workbench.
+        </p>
+      ),
     });
   };
   return (

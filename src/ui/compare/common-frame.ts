@@ -12,7 +12,12 @@ import { chartFrame, type ChartFrame } from '../chart/frame';
  * rounded in the units on screen, as on the main chart); each storm then gets
  * its own bar edges on that time scale.
  */
-export function commonFrames(storms: readonly Storm[], width: number, height: number, system: UnitSystem): ChartFrame[] {
+export function commonFrames(
+  storms: readonly Storm[],
+  width: number,
+  height: number,
+  system: UnitSystem,
+): ChartFrame[] {
   let spanH = 0;
   let peakMmH = 0;
   for (const s of storms) {

@@ -15,12 +15,18 @@ const SAME_REL = 1e-9;
 
 const MINUS = '−';
 
-export function difference(first: number | null, value: number | null, unit: string, options: { percentPoints?: boolean } = {}): Difference {
+export function difference(
+  first: number | null,
+  value: number | null,
+  unit: string,
+  options: { percentPoints?: boolean } = {},
+): Difference {
   if (first === null || value === null || !Number.isFinite(first) || !Number.isFinite(value)) {
     return { direction: 'none', text: 'no difference to show' };
   }
   const d = value - first;
-  if (Math.abs(d) <= SAME_REL * Math.max(Math.abs(first), Math.abs(value))) return { direction: 'same', text: '= same as 1' };
+  if (Math.abs(d) <= SAME_REL * Math.max(Math.abs(first), Math.abs(value)))
+    return { direction: 'same', text: '= same as 1' };
   const up = d > 0;
   const sign = up ? '+' : MINUS;
   const amount = `${sign}${formatValue(Math.abs(d))}${unit === '' ? '' : ` ${unit}`}`;

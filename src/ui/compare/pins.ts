@@ -71,7 +71,8 @@ function readStored(text: string): { stored: Stored; damage: Problem[] } | { unr
     return { unreadable: `it is not valid JSON (${why(error)})` };
   }
   if (!isRecord(json) || json['$format'] !== PINS_FORMAT_TAG) return { unreadable: `it is not a Raincut list of pins` };
-  if (json['version'] !== PINS_VERSION) return { unreadable: `its version is ${String(json['version'])}, not ${PINS_VERSION}` };
+  if (json['version'] !== PINS_VERSION)
+    return { unreadable: `its version is ${String(json['version'])}, not ${PINS_VERSION}` };
   const list = json['pins'];
   if (!Array.isArray(list)) return { unreadable: 'it has no list of pins' };
   const damage: Problem[] = [];
@@ -79,13 +80,21 @@ function readStored(text: string): { stored: Stored; damage: Problem[] } | { unr
   let highest = 0;
   list.forEach((raw, i) => {
     const where = `pins[${i}]`;
-    if (!isRecord(raw) || typeof raw['id'] !== 'string' || !/^p[1-9]\d{0,14}$/.test(raw['id']) || typeof raw['pinnedAt'] !== 'string') {
+    if (
+      !isRecord(raw) ||
+      typeof raw['id'] !== 'string' ||
+      !/^p[1-9]\d{0,14}$/.test(raw['id']) ||
+      typeof raw['pinnedAt'] !== 'string'
+    ) {
       damage.push({ path: where, message: `${where}: is not a pinned scenario, and was left out.` });
       return;
     }
     const copy = copyOf(raw['scenario']);
     if (!copy.ok) {
-      damage.push({ path: `${where}.scenario`, message: `${where}: the pinned scenario was left out: ${copy.message}` });
+      damage.push({
+        path: `${where}.scenario`,
+        message: `${where}: the pinned scenario was left out: ${copy.message}`,
+      });
       return;
     }
     if (pins.length >= MAX_PINS || pins.some((p) => p.id === raw['id'])) {
@@ -95,7 +104,10 @@ function readStored(text: string): { stored: Stored; damage: Problem[] } | { unr
     highest = Math.max(highest, Number(raw['id'].slice(1)));
     pins.push({ id: raw['id'], pinnedAt: raw['pinnedAt'], scenario: copy.scenario });
   });
-  const nextId = typeof json['nextId'] === 'number' && Number.isSafeInteger(json['nextId']) && json['nextId'] > highest ? json['nextId'] : highest + 1;
+  const nextId =
+    typeof json['nextId'] === 'number' && Number.isSafeInteger(json['nextId']) && json['nextId'] > highest
+      ? json['nextId']
+      : highest + 1;
   return { stored: { nextId, pins }, damage };
 }
 
@@ -136,7 +148,11 @@ export function createPinBoard(storage: StorageLike | null, options: PinBoardOpt
       text = storage.getItem(key);
     } catch (error) {
       canWrite = false;
-      return [problem(`The pinned scenarios could not be read from this browser (${why(error)}); pins are kept only until the page closes.`)];
+      return [
+        problem(
+          `The pinned scenarios could not be read from this browser (${why(error)}); pins are kept only until the page closes.`,
+        ),
+      ];
     }
     if (text === null) {
       memory = { nextId: Math.max(memory.nextId, 1), pins: canWrite ? [] : memory.pins };
@@ -163,12 +179,18 @@ export function createPinBoard(storage: StorageLike | null, options: PinBoardOpt
     if ('unreadable' in read) {
       memory = { nextId: 1, pins: [] };
       write();
-      return [problem(`The pinned scenarios could not be read (${read.unreadable}). They were kept as they were under browser storage key "${asideKey}".`)];
+      return [
+        problem(
+          `The pinned scenarios could not be read (${read.unreadable}). They were kept as they were under browser storage key "${asideKey}".`,
+        ),
+      ];
     }
     memory = read.stored;
     write();
     return [
-      problem(`Part of the pinned scenarios was damaged and left out; the list as it was is kept under browser storage key "${asideKey}".`),
+      problem(
+        `Part of the pinned scenarios was damaged and left out; the list as it was is kept under browser storage key "${asideKey}".`,
+      ),
       ...read.damage,
     ];
   }

@@ -55,7 +55,14 @@ function Text({
           </>
         ) : null}
       </label>
-      <input id={id} type="text" inputMode="decimal" value={form[field] as string} onChange={(e) => set(field, e.currentTarget.value)} {...wrong} />
+      <input
+        id={id}
+        type="text"
+        inputMode="decimal"
+        value={form[field] as string}
+        onChange={(e) => set(field, e.currentTarget.value)}
+        {...wrong}
+      />
     </div>
   );
 }
@@ -70,8 +77,10 @@ export function DesignStormView() {
   const [form, setForm] = useState<DesignForm>(START);
   const [loss, setLoss] = useState<'design' | 'workbench'>('design');
   const [said, setSaid] = useState<string | null>(null);
-  const set = (field: FormField | 'shape' | 'formula' | 'durationUnit' | 'intensityUnit' | 'scale', value: string | boolean): void =>
-    setForm((f) => ({ ...f, [field]: value }));
+  const set = (
+    field: FormField | 'shape' | 'formula' | 'durationUnit' | 'intensityUnit' | 'scale',
+    value: string | boolean,
+  ): void => setForm((f) => ({ ...f, [field]: value }));
   const units = useScenario((s) => s.units);
   const areaM2 = useScenario((s) => s.catchment.areaM2);
   const benchMethod = useDerived((d, s) => d.effectiveMethod(s));
@@ -104,13 +113,16 @@ export function DesignStormView() {
       : null;
   const messageId = 'design-form-problem';
   const badField = built.ok ? null : built.field;
-  const invalid = (field: FormField) => (!built.ok && built.field === field ? { 'aria-invalid': true, 'aria-describedby': messageId } : {});
+  const invalid = (field: FormField) =>
+    !built.ok && built.field === field ? { 'aria-invalid': true, 'aria-describedby': messageId } : {};
 
   const putOnBench = (): void => {
     if (!built.ok) return;
     const storm = toScenarioStorm(built.storm);
     actions.edit('Put the design storm on the workbench', (s) => withDesignStormOnWorkbench(s, storm, method));
-    setSaid('The design storm is on the workbench, with the design loss. Undo puts back what was there; the events are unchanged.');
+    setSaid(
+      'The design storm is on the workbench, with the design loss. Undo puts back what was there; the events are unchanged.',
+    );
   };
   const pin = (): void => {
     if (!built.ok) return;
@@ -138,7 +150,12 @@ export function DesignStormView() {
             ] as const
           ).map(([value, label]) => (
             <label key={value} className="design-form__choice">
-              <input type="radio" name="design-shape" checked={form.shape === value} onChange={() => set('shape', value)} />
+              <input
+                type="radio"
+                name="design-shape"
+                checked={form.shape === value}
+                onChange={() => set('shape', value)}
+              />
               {label}
             </label>
           ))}
@@ -177,14 +194,22 @@ export function DesignStormView() {
           <div className="design-form__row">
             <div className="design-form__field">
               <label htmlFor="design-duration-unit">Unit of t</label>
-              <select id="design-duration-unit" value={form.durationUnit} onChange={(e) => set('durationUnit', e.currentTarget.value)}>
+              <select
+                id="design-duration-unit"
+                value={form.durationUnit}
+                onChange={(e) => set('durationUnit', e.currentTarget.value)}
+              >
                 <option value="min">min</option>
                 <option value="h">h</option>
               </select>
             </div>
             <div className="design-form__field">
               <label htmlFor="design-intensity-unit">Unit of i</label>
-              <select id="design-intensity-unit" value={form.intensityUnit} onChange={(e) => set('intensityUnit', e.currentTarget.value)}>
+              <select
+                id="design-intensity-unit"
+                value={form.intensityUnit}
+                onChange={(e) => set('intensityUnit', e.currentTarget.value)}
+              >
                 <option value="mm/h">mm/h</option>
                 <option value="in/h">in/h</option>
               </select>
@@ -196,7 +221,9 @@ export function DesignStormView() {
         <div className="design-form__row">
           <Text form={form} field="durationMin" set={set} bad={badField} hint="(min)" />
           <Text form={form} field="stepMin" set={set} bad={badField} hint="(min)" />
-          {form.shape !== 'uniform' ? <Text form={form} field="peak" set={set} bad={badField} hint="(0 start – 1 end)" /> : null}
+          {form.shape !== 'uniform' ? (
+            <Text form={form} field="peak" set={set} bad={badField} hint="(0 start – 1 end)" />
+          ) : null}
         </div>
         <label className="design-form__choice">
           <input type="checkbox" checked={form.scale} onChange={(e) => set('scale', e.currentTarget.checked)} />
@@ -214,7 +241,11 @@ export function DesignStormView() {
         <h2 id="design-result-title">Design storm with the design loss</h2>
         <div className="design-form__field">
           <label htmlFor="design-loss">Loss to apply</label>
-          <select id="design-loss" value={loss} onChange={(e) => setLoss(e.currentTarget.value === 'workbench' ? 'workbench' : 'design')}>
+          <select
+            id="design-loss"
+            value={loss}
+            onChange={(e) => setLoss(e.currentTarget.value === 'workbench' ? 'workbench' : 'design')}
+          >
             <option value="design" disabled={!fromSet}>
               {designText ? `Design value from the events (${designText})` : 'Design value from the events (none yet)'}
             </option>
@@ -222,11 +253,17 @@ export function DesignStormView() {
           </select>
         </div>
         {loss === 'design' && !fromSet ? (
-          <p className="design-form__hint">No design value yet (fit events on the Event set view); the workbench's method is used.</p>
+          <p className="design-form__hint">
+            No design value yet (fit events on the Event set view); the workbench's method is used.
+          </p>
         ) : null}
         {built.ok ? (
           <>
-            <StormBars storm={built.storm} excessMm={result?.ok ? result.r.excessMm : null} description={built.description} />
+            <StormBars
+              storm={built.storm}
+              excessMm={result?.ok ? result.r.excessMm : null}
+              description={built.description}
+            />
             {result?.ok ? (
               <dl className="fit-all__summary" aria-label="Design storm totals">
                 <div>

@@ -3,7 +3,15 @@ import type { Storm } from '../../core';
 import { formatValue } from '../format';
 
 /** A small hyetograph of the design storm: each bar's rain, its excess part darker. */
-export function StormBars({ storm, excessMm, description }: { storm: Storm; excessMm: ArrayLike<number> | null; description: string }) {
+export function StormBars({
+  storm,
+  excessMm,
+  description,
+}: {
+  storm: Storm;
+  excessMm: ArrayLike<number> | null;
+  description: string;
+}) {
   const W = 420;
   const H = 160;
   const M = { top: 8, right: 8, bottom: 26, left: 44 };
@@ -21,8 +29,13 @@ export function StormBars({ storm, excessMm, description }: { storm: Storm; exce
       peakAt = k;
     }
   }
-  const x = scaleLinear().domain([0, total]).range([M.left, W - M.right]);
-  const y = scaleLinear().domain([0, peak || 1]).nice().range([H - M.bottom, M.top]);
+  const x = scaleLinear()
+    .domain([0, total])
+    .range([M.left, W - M.right]);
+  const y = scaleLinear()
+    .domain([0, peak || 1])
+    .nice()
+    .range([H - M.bottom, M.top]);
   const label = `${description}: ${n} bars, peak intensity ${formatValue(peak)} mm/h in bar ${peakAt + 1}.`;
   return (
     <figure className="design-bars">

@@ -71,12 +71,18 @@ export function parseIdfTable(text: string): { durations: number[]; intensities:
     const cells = line.includes(';') || line.includes('\t') ? line.split(/[;\t]/) : line.trim().split(/[\s,]+/);
     const parts = cells.map((c) => c.trim()).filter((c) => c !== '');
     if (parts.length !== 2) {
-      throw new FieldProblem('tableText', `IDF table, row ${k + 1}: needs two values, a duration and an intensity (found ${parts.length}).`);
+      throw new FieldProblem(
+        'tableText',
+        `IDF table, row ${k + 1}: needs two values, a duration and an intensity (found ${parts.length}).`,
+      );
     }
     parts.forEach((cell, col) => {
       const parsed = parseNumber(cell);
       if (!parsed.ok) {
-        throw new FieldProblem('tableText', `IDF table, row ${k + 1}, column ${col + 1} (${col === 0 ? 'duration' : 'intensity'}): ${parsed.message}`);
+        throw new FieldProblem(
+          'tableText',
+          `IDF table, row ${k + 1}, column ${col + 1} (${col === 0 ? 'duration' : 'intensity'}): ${parsed.message}`,
+        );
       }
       (col === 0 ? durations : intensities).push(parsed.value);
     });

@@ -1,4 +1,12 @@
-import { useActions, useScenario, withEventAdded, withEventMoved, withEventOnWorkbench, withEventRemoved, withEventRenamed } from '../../store';
+import {
+  useActions,
+  useScenario,
+  withEventAdded,
+  withEventMoved,
+  withEventOnWorkbench,
+  withEventRemoved,
+  withEventRenamed,
+} from '../../store';
 
 /**
  * The catchment's events: add the workbench's storm as an event, rename,
@@ -14,8 +22,8 @@ export function EventList() {
     <section className="panel events-list" aria-labelledby="events-list-title">
       <h2 id="events-list-title">Events of this catchment</h2>
       <p className="panel__intro">
-        Each event is a storm with the runoff it produced. Put an event on the workbench to change its bars, observed runoff or
-        streamflow record there; the event follows every change.
+        Each event is a storm with the runoff it produced. Put an event on the workbench to change its bars, observed
+        runoff or streamflow record there; the event follows every change.
       </p>
       {events.length === 0 ? <p className="events-list__empty">No events yet.</p> : null}
       <ol className="events-list__items">
@@ -23,7 +31,10 @@ export function EventList() {
           const label = event.name.trim() === '' ? `Event ${k + 1}` : event.name;
           const onBench = event.id === activeId;
           return (
-            <li key={event.id} className={onBench ? 'events-list__item events-list__item--active' : 'events-list__item'}>
+            <li
+              key={event.id}
+              className={onBench ? 'events-list__item events-list__item--active' : 'events-list__item'}
+            >
               <label className="visually-hidden" htmlFor={`event-name-${event.id}`}>
                 Name of event {k + 1}
               </label>
@@ -43,7 +54,9 @@ export function EventList() {
                 <button
                   type="button"
                   aria-label={`Put ${label} on the workbench`}
-                  onClick={() => actions.edit(`Put ${label} on the workbench`, (s) => withEventOnWorkbench(s, event.id))}
+                  onClick={() =>
+                    actions.edit(`Put ${label} on the workbench`, (s) => withEventOnWorkbench(s, event.id))
+                  }
                 >
                   To workbench
                 </button>
@@ -75,7 +88,11 @@ export function EventList() {
           );
         })}
       </ol>
-      <button type="button" className="button--primary" onClick={() => actions.edit('Add event', (s) => withEventAdded(s))}>
+      <button
+        type="button"
+        className="button--primary"
+        onClick={() => actions.edit('Add event', (s) => withEventAdded(s))}
+      >
         Add the workbench storm as an event
       </button>
     </section>

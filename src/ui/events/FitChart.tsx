@@ -32,8 +32,14 @@ export function FitChart({ rows, parameterLabel, unit, depthUnit, showValue, sho
   const design = designValue === null ? null : showValue(designValue);
   const xs = points.map((p) => p.x);
   const ys = points.map((p) => p.y).concat(design === null ? [] : [design]);
-  const x = scaleLinear().domain([0, Math.max(1, ...xs)]).nice().range([M.left, W - M.right]);
-  const y = scaleLinear().domain([Math.min(0, ...ys), Math.max(1e-9, ...ys)]).nice().range([H - M.bottom, M.top]);
+  const x = scaleLinear()
+    .domain([0, Math.max(1, ...xs)])
+    .nice()
+    .range([M.left, W - M.right]);
+  const y = scaleLinear()
+    .domain([Math.min(0, ...ys), Math.max(1e-9, ...ys)])
+    .nice()
+    .range([H - M.bottom, M.top]);
   const u = unit === '' ? '' : ` ${unit}`;
   const sorted = [...points].sort((p, q) => p.x - q.x);
   const first = sorted[0];
@@ -71,7 +77,11 @@ export function FitChart({ rows, parameterLabel, unit, depthUnit, showValue, sho
         <text className="axes__title" x={(M.left + W - M.right) / 2} y={H - 6} textAnchor="middle">
           Storm rainfall ({depthUnit})
         </text>
-        <text className="axes__title" transform={`translate(14,${(M.top + H - M.bottom) / 2}) rotate(-90)`} textAnchor="middle">
+        <text
+          className="axes__title"
+          transform={`translate(14,${(M.top + H - M.bottom) / 2}) rotate(-90)`}
+          textAnchor="middle"
+        >
           {parameterLabel}
           {u === '' ? '' : ` (${unit})`}
         </text>

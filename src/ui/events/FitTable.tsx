@@ -42,8 +42,8 @@ export function FitAll() {
       <h2 id="fit-all-title">Fit all events</h2>
       <div className="fit-all__controls">
         <p className="panel__intro">
-          {spec.label}, with the other parameters as set on the workbench. Each event is fitted on its own, exactly as the
-          workbench would fit it.
+          {spec.label}, with the other parameters as set on the workbench. Each event is fitted on its own, exactly as
+          the workbench would fit it.
         </p>
         <label htmlFor="fit-all-parameter">Parameter to fit</label>
         <select
@@ -156,7 +156,9 @@ export function FitAll() {
               type="radio"
               name="design-pick"
               checked={pick === p.value}
-              onChange={() => actions.edit(`Use the ${p.label.toLowerCase()} as design value`, (s) => withDesignPick(s, p.value))}
+              onChange={() =>
+                actions.edit(`Use the ${p.label.toLowerCase()} as design value`, (s) => withDesignPick(s, p.value))
+              }
             />
             {p.label}
           </label>
@@ -167,7 +169,9 @@ export function FitAll() {
             name="design-pick"
             checked={typeof pick === 'object'}
             onChange={() =>
-              actions.edit('Use a design value of your own', (s) => withDesignPick(s, { value: outcome.ok ? outcome.value : 0 }))
+              actions.edit('Use a design value of your own', (s) =>
+                withDesignPick(s, { value: outcome.ok ? outcome.value : 0 }),
+              )
             }
           />
           A value of my own
@@ -179,7 +183,11 @@ export function FitAll() {
           value={ownValue ?? (outcome.ok ? outcome.value : null)}
           toDisplay={showParam}
           fromDisplay={(v) => (param ? paramFromDisplay(param.unit, v, units) : v)}
-          onCommit={(si) => actions.edit('Set the design value', (s) => withDesignPick(s, { value: si }), { coalesceKey: 'design-value' })}
+          onCommit={(si) =>
+            actions.edit('Set the design value', (s) => withDesignPick(s, { value: si }), {
+              coalesceKey: 'design-value',
+            })
+          }
         />
       </fieldset>
       {outcome.ok ? (

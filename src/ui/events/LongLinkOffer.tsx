@@ -28,14 +28,16 @@ export function LongLinkOffer({
       <p>
         The link would be {grouped.format(chars)} characters long
         {events > 0 ? `, most of it the ${events} event${events === 1 ? '' : 's'} of the event set` : ''}: more than the{' '}
-        {grouped.format(PRACTICAL_LINK_CHARS)} that can be sent reliably. Save the scenario as a file and send the file instead;
-        it opens to exactly the same scenario.
+        {grouped.format(PRACTICAL_LINK_CHARS)} that can be sent reliably. Save the scenario as a file and send the file
+        instead; it opens to exactly the same scenario.
       </p>
       <p>
         <button
           type="button"
           className="button--primary"
-          onClick={() => saveFile(new Blob([scenarioToFileText(scenario)], { type: 'application/json' }), scenarioFileName(scenario))}
+          onClick={() =>
+            saveFile(new Blob([scenarioToFileText(scenario)], { type: 'application/json' }), scenarioFileName(scenario))
+          }
         >
           Save as file instead
         </button>{' '}

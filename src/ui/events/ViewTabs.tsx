@@ -16,7 +16,16 @@ export function ViewTabs({ views }: { views: readonly View[] }) {
   const tabs = useRef<(HTMLButtonElement | null)[]>([]);
   const move = (e: KeyboardEvent, k: number): void => {
     const n = views.length;
-    const to = e.key === 'ArrowRight' ? (k + 1) % n : e.key === 'ArrowLeft' ? (k - 1 + n) % n : e.key === 'Home' ? 0 : e.key === 'End' ? n - 1 : -1;
+    const to =
+      e.key === 'ArrowRight'
+        ? (k + 1) % n
+        : e.key === 'ArrowLeft'
+          ? (k - 1 + n) % n
+          : e.key === 'Home'
+            ? 0
+            : e.key === 'End'
+              ? n - 1
+              : -1;
     if (to < 0) return;
     e.preventDefault();
     const view = views[to];
@@ -29,41 +38,41 @@ export function ViewTabs({ views }: { views: readonly View[] }) {
       {/* In a landmark of its own, so nothing on the page sits outside one. */}
       <nav aria-label="Views" className="view-tabs">
         <div role="tablist" aria-label="Views" className="view-tabs__list">
-        {views.map((view, k) => (
-          <button
-            key={view.id}
-            ref={(el) => {
-              tabs.current[k] = el;
-            }}
-            type="button"
-            role="tab"
-            id={`tab-${view.id}`}
-            aria-controls={`view-${view.id}`}
-            aria-selected={current === view.id}
-            tabIndex={current === view.id ? 0 : -1}
-            className="view-tabs__tab"
-            onClick={() => setCurrent(view.id)}
-            onKeyDown={(e) => move(e, k)}
-          >
-            {view.label}
-          </button>
-        ))}
+          {views.map((view, k) => (
+            <button
+              key={view.id}
+              ref={(el) => {
+                tabs.current[k] = el;
+              }}
+              type="button"
+              role="tab"
+              id={`tab-${view.id}`}
+              aria-controls={`view-${view.id}`}
+              aria-selected={current === view.id}
+              tabIndex={current === view.id ? 0 : -1}
+              className="view-tabs__tab"
+              onClick={() => setCurrent(view.id)}
+              onKeyDown={(e) => move(e, k)}
+            >
+              {view.label}
+            </button>
+          ))}
         </div>
       </nav>
       {/* The views share the page's one main landmark, so every view's content is inside it. */}
       <main className="view-tabs__views">
-      {views.map((view) => (
-        <div
-          key={view.id}
-          role="tabpanel"
-          id={`view-${view.id}`}
-          aria-labelledby={`tab-${view.id}`}
-          hidden={current !== view.id}
-          className="view-tabs__panel"
-        >
-          {view.content}
-        </div>
-      ))}
+        {views.map((view) => (
+          <div
+            key={view.id}
+            role="tabpanel"
+            id={`view-${view.id}`}
+            aria-labelledby={`tab-${view.id}`}
+            hidden={current !== view.id}
+            className="view-tabs__panel"
+          >
+            {view.content}
+          </div>
+        ))}
       </main>
     </>
   );

@@ -35,12 +35,14 @@ export function eventTarget(event: SetEvent, areaM2: number): EventTarget {
       }
       return { ok: true, mm: sep.directDepthMm };
     } catch (error) {
-      if (isInputError(error)) return { ok: false, message: `The streamflow record cannot be separated: ${error.message}` };
+      if (isInputError(error))
+        return { ok: false, message: `The streamflow record cannot be separated: ${error.message}` };
       throw error;
     }
   }
   if (event.observed.as === 'depth') return { ok: true, mm: event.observed.value };
-  if (!(areaM2 > 0)) return { ok: false, message: 'Enter the catchment area to turn the observed volume into a depth.' };
+  if (!(areaM2 > 0))
+    return { ok: false, message: 'Enter the catchment area to turn the observed volume into a depth.' };
   return { ok: true, mm: depthFromVolumeMm(event.observed.value, areaM2) };
 }
 
@@ -77,7 +79,8 @@ export function fitAllEvents(s: Scenario, method: LossMethod): EventFits {
   const missing = new Map<string, string>();
   for (const event of s.eventSet.events) {
     const target = eventTarget(event, s.catchment.areaM2);
-    if (target.ok) calibratable.push({ id: event.id, name: event.name, storm: event.storm, observedExcessMm: target.mm });
+    if (target.ok)
+      calibratable.push({ id: event.id, name: event.name, storm: event.storm, observedExcessMm: target.mm });
     else missing.set(event.id, target.message);
   }
   const fits = fitEvents(calibratable, method, parameter);

@@ -7,4 +7,12 @@ export { FitAll } from './FitTable';
 export { FitChart } from './FitChart';
 export { ViewTabs, type View } from './ViewTabs';
 export { useEventFits } from './use-event-fits';
-export { designMethod, designOutcome, eventTarget, fitAllEvents, fittedParameter, type EventFits, type FitRow } from './event-fits';
+export {
+  designMethod,
+  designOutcome,
+  eventTarget,
+  fitAllEvents,
+  fittedParameter,
+  type EventFits,
+  type FitRow,
+} from './event-fits';

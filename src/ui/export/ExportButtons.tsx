@@ -55,7 +55,11 @@ export function ExportButtons() {
   const exportCsv = (): void => {
     const { scenario, results, base } = current();
     if (!results.ok) {
-      show({ tone: 'problem', title: 'No table was exported: the losses cannot be worked out.', body: <p>{results.message}</p> });
+      show({
+        tone: 'problem',
+        title: 'No table was exported: the losses cannot be worked out.',
+        body: <p>{results.message}</p>,
+      });
       return;
     }
     const text = barTableCsv({
@@ -75,7 +79,11 @@ export function ExportButtons() {
     if (!live) throw new Error('the chart is not on screen');
     const { scenario, results, base } = current();
     return {
-      svg: standaloneSvg(live, { heading: chartHeading(scenario, results.method), caution: CAUTION_TEXT, legend: chartLegend(results.method) }),
+      svg: standaloneSvg(live, {
+        heading: chartHeading(scenario, results.method),
+        caution: CAUTION_TEXT,
+        legend: chartLegend(results.method),
+      }),
       base,
     };
   };
@@ -99,7 +107,10 @@ export function ExportButtons() {
       saveFile(png, name);
       show({ tone: 'done', title: `Exported ${name} (${svg.width * 2} × ${svg.height * 2} pixels).` });
     } catch (error) {
-      show({ tone: 'problem', title: `The chart picture was not exported: ${why(error)}. The SVG export works in any browser.` });
+      show({
+        tone: 'problem',
+        title: `The chart picture was not exported: ${why(error)}. The SVG export works in any browser.`,
+      });
     }
   };
 

@@ -67,7 +67,8 @@ function ReportBody() {
           </dd>
           <dt>Catchment</dt>
           <dd>
-            {catchment.name === '' ? 'Unnamed' : catchment.name}, {catchment.areaM2 > 0 ? show('area', catchment.areaM2) : 'area not given'}
+            {catchment.name === '' ? 'Unnamed' : catchment.name},{' '}
+            {catchment.areaM2 > 0 ? show('area', catchment.areaM2) : 'area not given'}
           </dd>
           <dt>Loss method</dt>
           <dd>
@@ -76,7 +77,9 @@ function ReportBody() {
           <dt>Observed runoff</dt>
           <dd>
             {observedText}
-            {observed !== null && observedParam ? `; fitting ${observedParam.label}${observed.locked ? ', kept matched' : ''}` : ''}
+            {observed !== null && observedParam
+              ? `; fitting ${observedParam.label}${observed.locked ? ', kept matched' : ''}`
+              : ''}
           </dd>
           {scenario.notes.trim() !== '' ? (
             <>
@@ -142,8 +145,8 @@ function ReportBody() {
         </table>
       </section>
       <p className="report__foot">
-        Losses and excess computed by Raincut’s core; method source: {spec.source.replace(/\.$/, '')}. The per-bar table is in the CSV
-        export.
+        Losses and excess computed by Raincut’s core; method source: {spec.source.replace(/\.$/, '')}. The per-bar table
+        is in the CSV export.
       </p>
     </>
   );

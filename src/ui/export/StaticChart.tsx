@@ -36,7 +36,9 @@ export function StaticChart({ frame, storm, lossMm, lineMmH, label, className }:
       <Axes frame={frame} />
       <RainLayer frame={frame} storm={storm} />
       {lossMm ? <LossLayer frame={frame} storm={storm} lossMm={lossMm} partMm={null} /> : null}
-      {lineY !== null ? <line className="static-chart__line" x1={plot.left} x2={plot.right} y1={lineY} y2={lineY} /> : null}
+      {lineY !== null ? (
+        <line className="static-chart__line" x1={plot.left} x2={plot.right} y1={lineY} y2={lineY} />
+      ) : null}
     </svg>
   );
 }

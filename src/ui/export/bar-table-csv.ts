@@ -55,7 +55,11 @@ function clockText(ms: number): string {
 }
 
 /** "Loss rate φ = 8 mm/h; …" for the method's numeric parameters and choices, in display units. */
-export function methodParametersText(method: LossMethod, units: UnitSystem, format: (x: number) => string = formatValue): string {
+export function methodParametersText(
+  method: LossMethod,
+  units: UnitSystem,
+  format: (x: number) => string = formatValue,
+): string {
   const spec = methodSpec(method.kind);
   const values = method as unknown as Record<string, unknown>;
   const parts: string[] = [];
@@ -77,7 +81,8 @@ export function barTableHeader(scenario: Scenario): string[] {
   const depth = unitText(displayUnit('depth', scenario.units));
   const rate = unitText(displayUnit('rate', scenario.units));
   const head = ['Bar'];
-  if (scenario.storm.startIso !== undefined && wallClockMs(scenario.storm.startIso) !== null) head.push('Start (clock)');
+  if (scenario.storm.startIso !== undefined && wallClockMs(scenario.storm.startIso) !== null)
+    head.push('Start (clock)');
   head.push(
     'Start (h from storm start)',
     'Duration (h)',
@@ -106,14 +111,17 @@ export function barTableCsv({ scenario, method, result, volumeM3 }: BarTableInpu
     note(`Loss method: ${methodSpec(method.kind).label}; ${methodParametersText(method, units, noteNumber)}`),
   ];
   if (scenario.catchment.name !== '' || scenario.catchment.areaM2 > 0) {
-    const area = scenario.catchment.areaM2 > 0
-      ? `${noteNumber(toDisplay('area', scenario.catchment.areaM2, units))} ${unitText(displayUnit('area', units))}`
-      : 'area not given';
+    const area =
+      scenario.catchment.areaM2 > 0
+        ? `${noteNumber(toDisplay('area', scenario.catchment.areaM2, units))} ${unitText(displayUnit('area', units))}`
+        : 'area not given';
     lines.push(note(`Catchment: ${scenario.catchment.name === '' ? 'unnamed' : scenario.catchment.name}; ${area}`));
   }
   if (storm.startIso !== undefined) lines.push(note(`Storm start: ${storm.startIso}`));
   const volume =
-    volumeM3 === null ? '' : `; runoff volume ${noteNumber(toDisplay('volume', volumeM3, units))} ${unitText(displayUnit('volume', units))}`;
+    volumeM3 === null
+      ? ''
+      : `; runoff volume ${noteNumber(toDisplay('volume', volumeM3, units))} ${unitText(displayUnit('volume', units))}`;
   lines.push(
     note(
       `Totals: rainfall ${show(result.rainMm)}; loss ${show(result.totalLossMm)}; rainfall excess ${show(result.totalExcessMm)}` +

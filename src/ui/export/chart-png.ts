@@ -26,6 +26,9 @@ export async function svgToPng(svgText: string, width: number, height: number, s
     URL.revokeObjectURL(url);
   }
   return new Promise<Blob>((resolve, reject) => {
-    canvas.toBlob((blob) => (blob ? resolve(blob) : reject(new Error('the picture could not be encoded as PNG'))), 'image/png');
+    canvas.toBlob(
+      (blob) => (blob ? resolve(blob) : reject(new Error('the picture could not be encoded as PNG'))),
+      'image/png',
+    );
   });
 }

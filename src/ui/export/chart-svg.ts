@@ -23,12 +23,27 @@ const PAINT = [
   'visibility',
 ] as const;
 /** Text properties, copied onto text and the groups that hold it. */
-const TEXT = ['font-family', 'font-size', 'font-weight', 'font-style', 'text-anchor', 'dominant-baseline', 'font-variant-numeric'] as const;
+const TEXT = [
+  'font-family',
+  'font-size',
+  'font-weight',
+  'font-style',
+  'text-anchor',
+  'dominant-baseline',
+  'font-variant-numeric',
+] as const;
 const TEXT_ELEMENTS = new Set(['svg', 'g', 'text', 'tspan']);
 
 /** Attributes that only matter on the page (focus, roles, labels for the live chart, class hooks). */
 function isPageOnly(name: string): boolean {
-  return name === 'class' || name === 'role' || name === 'tabindex' || name === 'style' || name.startsWith('aria-') || name.startsWith('data-');
+  return (
+    name === 'class' ||
+    name === 'role' ||
+    name === 'tabindex' ||
+    name === 'style' ||
+    name.startsWith('aria-') ||
+    name.startsWith('data-')
+  );
 }
 
 function inlineStyle(source: Element, target: Element, view: Window): void {
@@ -36,7 +51,10 @@ function inlineStyle(source: Element, target: Element, view: Window): void {
   const parts: string[] = [];
   const take = (prop: string): void => {
     // Browsers resolve url(#id) to the page's address; a file must point at its own ids.
-    const value = computed.getPropertyValue(prop).trim().replace(/url\((["']?)[^"')]*?(#[^"')]+)\1\)/g, 'url($2)');
+    const value = computed
+      .getPropertyValue(prop)
+      .trim()
+      .replace(/url\((["']?)[^"')]*?(#[^"')]+)\1\)/g, 'url($2)');
     if (value !== '') parts.push(`${prop}:${value}`);
   };
   PAINT.forEach(take);
@@ -100,9 +118,17 @@ function legendItems(live: SVGSVGElement, entries: readonly LegendEntry[], view:
     const shape = live.querySelector(entry.selector);
     if (!shape) continue;
     const style = view.getComputedStyle(shape);
-    const paint = style.getPropertyValue(entry.kind === 'fill' ? 'fill' : 'stroke').trim().replace(/url\((["']?)[^"')]*?(#[^"')]+)\1\)/g, 'url($2)');
+    const paint = style
+      .getPropertyValue(entry.kind === 'fill' ? 'fill' : 'stroke')
+      .trim()
+      .replace(/url\((["']?)[^"')]*?(#[^"')]+)\1\)/g, 'url($2)');
     const dash = style.getPropertyValue('stroke-dasharray').trim();
-    items.push({ label: entry.label, kind: entry.kind, paint: paint || '#000', dash: dash === '' || dash === 'none' ? null : dash });
+    items.push({
+      label: entry.label,
+      kind: entry.kind,
+      paint: paint || '#000',
+      dash: dash === '' || dash === 'none' ? null : dash,
+    });
   }
   return items;
 }
@@ -190,7 +216,10 @@ export function standaloneSvg(live: SVGSVGElement, options: StandaloneOptions): 
         mark.setAttribute('x2', String(x + 18));
         mark.setAttribute('y1', String(y - 4));
         mark.setAttribute('y2', String(y - 4));
-        mark.setAttribute('style', `stroke:${item.paint};stroke-width:2.5${item.dash ? `;stroke-dasharray:${item.dash}` : ''}`);
+        mark.setAttribute(
+          'style',
+          `stroke:${item.paint};stroke-width:2.5${item.dash ? `;stroke-dasharray:${item.dash}` : ''}`,
+        );
       }
       foot.appendChild(mark);
       const gap = item.kind === 'fill' ? 19 : 24;

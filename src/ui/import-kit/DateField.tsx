@@ -1,7 +1,15 @@
 import { useId, useState } from 'react';
 
 /** A YYYY-MM-DD field that stores only a well-formed date (or none when emptied); bad text stays with its reason. */
-export function DateField({ value, hint, onChange }: { value: string | null; hint: string; onChange: (date: string | null) => void }) {
+export function DateField({
+  value,
+  hint,
+  onChange,
+}: {
+  value: string | null;
+  hint: string;
+  onChange: (date: string | null) => void;
+}) {
   const id = useId();
   const [draft, setDraft] = useState<{ text: string; message: string } | null>(null);
   const text = draft?.text ?? value ?? '';

@@ -64,7 +64,10 @@ export interface ImportDialogProps<S extends SeriesSettings, R> {
   readonly onUse: (imported: R, fileName: string | null) => string | null;
 }
 
-const inWords = (problems: readonly ImportProblem[], words: Readonly<Record<string, string>> | undefined): readonly ImportProblem[] =>
+const inWords = (
+  problems: readonly ImportProblem[],
+  words: Readonly<Record<string, string>> | undefined,
+): readonly ImportProblem[] =>
   words ? problems.map((p) => (words[p.field] ? { ...p, field: words[p.field] as string } : p)) : problems;
 
 /**
@@ -72,7 +75,14 @@ const inWords = (problems: readonly ImportProblem[], words: Readonly<Record<stri
  * only then use it (one undoable edit). What is on screen is untouched until
  * then; cancelling changes nothing.
  */
-export function ImportDialog<S extends SeriesSettings, R>({ kind, initial, onClose, renderPreview, keepText, onUse }: ImportDialogProps<S, R>) {
+export function ImportDialog<S extends SeriesSettings, R>({
+  kind,
+  initial,
+  onClose,
+  renderPreview,
+  keepText,
+  onUse,
+}: ImportDialogProps<S, R>) {
   const { words, guess, preview: previewOf, apply, Settings } = kind;
   const id = useId();
   const titleId = `${id}-title`;
@@ -92,7 +102,10 @@ export function ImportDialog<S extends SeriesSettings, R>({ kind, initial, onClo
   const empty = shownText.trim() === '';
   const guessed = useMemo(() => guess(shownText), [guess, shownText]);
   const settings: S = useMemo(() => ({ ...guessed, ...corrections }), [guessed, corrections]);
-  const preview = useMemo(() => (empty ? null : previewOf(shownText, settings)), [previewOf, empty, shownText, settings]);
+  const preview = useMemo(
+    () => (empty ? null : previewOf(shownText, settings)),
+    [previewOf, empty, shownText, settings],
+  );
   const imported = useMemo(
     () => (preview !== null && preview.problems.length === 0 ? apply(shownText, settings) : null),
     [apply, preview, shownText, settings],
@@ -111,7 +124,13 @@ export function ImportDialog<S extends SeriesSettings, R>({ kind, initial, onClo
   };
 
   return (
-    <Modal labelledBy={titleId} describedBy={`${id}-intro`} onClose={cancel} initialFocus={textRef} className={kind.className}>
+    <Modal
+      labelledBy={titleId}
+      describedBy={`${id}-intro`}
+      onClose={cancel}
+      initialFocus={textRef}
+      className={kind.className}
+    >
       <div className="paste__head">
         <h2 id={titleId}>{words.title}</h2>
         <p id={`${id}-intro`} className="paste__intro">
@@ -165,7 +184,9 @@ export function ImportDialog<S extends SeriesSettings, R>({ kind, initial, onClo
               {empty ? 'Nothing pasted yet.' : stale || preview === null ? 'Reading…' : preview.summary}
             </p>
             {imported !== null && !stale ? renderPreview(imported) : null}
-            {preview && preview.problems.length > 0 ? <ProblemTable problems={inWords(preview.problems, kind.problemWords)} /> : null}
+            {preview && preview.problems.length > 0 ? (
+              <ProblemTable problems={inWords(preview.problems, kind.problemWords)} />
+            ) : null}
           </section>
           {!empty ? (
             <section className="paste__settings" aria-labelledby={`${id}-settings`}>

@@ -17,11 +17,21 @@ export interface OpenFileButtonProps {
 }
 
 /** A button that opens the browser's file chooser through a hidden file input. */
-export function OpenFileButton({ children, inputLabel, accept = TEXT_FILE_TYPES, opensDialog = false, onFile }: OpenFileButtonProps) {
+export function OpenFileButton({
+  children,
+  inputLabel,
+  accept = TEXT_FILE_TYPES,
+  opensDialog = false,
+  onFile,
+}: OpenFileButtonProps) {
   const inputRef = useRef<HTMLInputElement | null>(null);
   return (
     <>
-      <button type="button" onClick={() => inputRef.current?.click()} aria-haspopup={opensDialog ? 'dialog' : undefined}>
+      <button
+        type="button"
+        onClick={() => inputRef.current?.click()}
+        aria-haspopup={opensDialog ? 'dialog' : undefined}
+      >
         {children}
       </button>
       <input

@@ -34,9 +34,7 @@ export function ProblemTable({ problems }: { problems: readonly ImportProblem[] 
   return (
     <div className="problems">
       <table className="problems__table">
-        <caption>
-          {problems.length === 1 ? '1 problem to fix' : `${problems.length} problems to fix`}
-        </caption>
+        <caption>{problems.length === 1 ? '1 problem to fix' : `${problems.length} problems to fix`}</caption>
         <thead>
           <tr>
             <th scope="col">Line</th>

@@ -18,7 +18,12 @@ export function Select({
   return (
     <div className="field guess">
       <label htmlFor={id}>{label}</label>
-      <select id={id} value={value} onChange={(e) => onChange(e.currentTarget.value)} aria-describedby={hint ? `${id}-hint` : undefined}>
+      <select
+        id={id}
+        value={value}
+        onChange={(e) => onChange(e.currentTarget.value)}
+        aria-describedby={hint ? `${id}-hint` : undefined}
+      >
         {children}
       </select>
       {hint ? (

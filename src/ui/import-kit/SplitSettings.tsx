@@ -15,19 +15,31 @@ export function SplitSettings({
   return (
     <fieldset className="guesses__group">
       <legend>How the text splits</legend>
-      <Select label="Separator" value={s.separator} onChange={(v) => onChange({ separator: v as SeriesSettings['separator'] })}>
+      <Select
+        label="Separator"
+        value={s.separator}
+        onChange={(v) => onChange({ separator: v as SeriesSettings['separator'] })}
+      >
         <option value="tab">Tab</option>
         <option value="comma">Comma</option>
         <option value="semicolon">Semicolon</option>
         <option value="none">None (one value a line)</option>
       </Select>
-      <Select label="Decimal mark" value={s.decimal} onChange={(v) => onChange({ decimal: v as SeriesSettings['decimal'] })}>
+      <Select
+        label="Decimal mark"
+        value={s.decimal}
+        onChange={(v) => onChange({ decimal: v as SeriesSettings['decimal'] })}
+      >
         <option value="point">Point (2.5)</option>
         <option value="comma">Comma (2,5)</option>
       </Select>
       <div className="field guess guess--check">
         <label className="switch">
-          <input type="checkbox" checked={s.hasHeader} onChange={(e) => onChange({ hasHeader: e.currentTarget.checked })} />
+          <input
+            type="checkbox"
+            checked={s.hasHeader}
+            onChange={(e) => onChange({ hasHeader: e.currentTarget.checked })}
+          />
           First line holds column names
         </label>
       </div>

@@ -37,7 +37,17 @@ export interface TimeSettingsProps {
  * Where the times are and how to read them: the time column, their kind or
  * the fixed step, and the date controls the first data line calls for.
  */
-export function TimeSettings({ settings: s, header, columns, rows, idPrefix, words, numberKind, onChange, children }: TimeSettingsProps) {
+export function TimeSettings({
+  settings: s,
+  header,
+  columns,
+  rows,
+  idPrefix,
+  words,
+  numberKind,
+  onChange,
+  children,
+}: TimeSettingsProps) {
   const hasTimes = s.timeColumn !== null && s.timeKind !== 'none';
   const need = dateNeeds(s, rows);
 
@@ -69,7 +79,11 @@ export function TimeSettings({ settings: s, header, columns, rows, idPrefix, wor
         <ColumnOptions columns={columns} header={header} />
       </Select>
       {hasTimes ? (
-        <Select label="Times are" value={s.timeKind} onChange={(v) => onChange({ timeKind: v as SeriesSettings['timeKind'] })}>
+        <Select
+          label="Times are"
+          value={s.timeKind}
+          onChange={(v) => onChange({ timeKind: v as SeriesSettings['timeKind'] })}
+        >
           <option value="clock">Clock times or dates</option>
           <option value="elapsed-min">Minutes from the start</option>
           <option value="elapsed-h">Hours from the start</option>
@@ -97,13 +111,21 @@ export function TimeSettings({ settings: s, header, columns, rows, idPrefix, wor
         </Select>
       ) : null}
       {need.dateOrder ? (
-        <Select label="Dates are written" value={s.dateOrder} onChange={(v) => onChange({ dateOrder: v as SeriesSettings['dateOrder'] })}>
+        <Select
+          label="Dates are written"
+          value={s.dateOrder}
+          onChange={(v) => onChange({ dateOrder: v as SeriesSettings['dateOrder'] })}
+        >
           <option value="day-month">Day first (31/12/2024)</option>
           <option value="month-day">Month first (12/31/2024)</option>
         </Select>
       ) : null}
       {need.firstDate ? (
-        <DateField value={s.dateForTimesOfDay} hint={words.firstDateHint} onChange={(d) => onChange({ dateForTimesOfDay: d })} />
+        <DateField
+          value={s.dateForTimesOfDay}
+          hint={words.firstDateHint}
+          onChange={(d) => onChange({ dateForTimesOfDay: d })}
+        />
       ) : null}
     </fieldset>
   );

@@ -3,7 +3,9 @@
  * Never throws: a file that is too large, unreadable or not text gives a
  * message naming it.
  */
-export type FileText = { readonly ok: true; readonly text: string; readonly name: string } | { readonly ok: false; readonly message: string };
+export type FileText =
+  | { readonly ok: true; readonly text: string; readonly name: string }
+  | { readonly ok: false; readonly message: string };
 
 /** Larger files are refused before reading: a rainfall record of a million lines is about 30 MB. */
 export const MAX_FILE_BYTES = 50 * 1024 * 1024;
@@ -24,13 +26,19 @@ export async function readTextFile(file: File, what = 'the rainfall'): Promise<F
   const name = file.name || 'the file';
   if (file.size > MAX_FILE_BYTES) {
     const mb = (file.size / (1024 * 1024)).toFixed(1);
-    return { ok: false, message: `${name} is ${mb} MB; files up to ${MAX_FILE_BYTES / (1024 * 1024)} MB can be read. Open a shorter record.` };
+    return {
+      ok: false,
+      message: `${name} is ${mb} MB; files up to ${MAX_FILE_BYTES / (1024 * 1024)} MB can be read. Open a shorter record.`,
+    };
   }
   let text: string;
   try {
     text = await readAsText(file);
   } catch (error) {
-    return { ok: false, message: `${name} could not be read (${error instanceof Error ? error.message : String(error)}).` };
+    return {
+      ok: false,
+      message: `${name} could not be read (${error instanceof Error ? error.message : String(error)}).`,
+    };
   }
   if (text.includes('\u0000')) {
     return { ok: false, message: `${name} is not a text file; save ${what} as .csv or .txt and open that.` };

@@ -40,7 +40,15 @@ interface Drag {
  * update per frame, the whole drag one undo step; release keeps it, a pointer
  * cancel or Escape puts it back. Keys step the value when no drag runs.
  */
-export function useDragHandle({ axis, gesture, disabled = false, grabOffsetPx, valueAt, apply, stepKey }: DragHandleOptions): DragHandleHandlers {
+export function useDragHandle({
+  axis,
+  gesture,
+  disabled = false,
+  grabOffsetPx,
+  valueAt,
+  apply,
+  stepKey,
+}: DragHandleOptions): DragHandleHandlers {
   const actions = useActions();
   const drag = useRef<Drag | null>(null);
 

@@ -5,7 +5,9 @@ import type { WorkbenchActions } from '../../store';
 function inTextField(target: EventTarget | null): boolean {
   if (!(target instanceof HTMLElement)) return false;
   if (target.isContentEditable || target instanceof HTMLTextAreaElement) return true;
-  return target instanceof HTMLInputElement && ['text', 'search', 'number', 'email', 'url', 'tel', ''].includes(target.type);
+  return (
+    target instanceof HTMLInputElement && ['text', 'search', 'number', 'email', 'url', 'tel', ''].includes(target.type)
+  );
 }
 
 /**

@@ -6,7 +6,9 @@ import {
   depthFromVolumeMm,
   methodSpec,
   runoffVolumeM3,
-  type UnitSystem, type VolumeUnit } from '../../core';
+  type UnitSystem,
+  type VolumeUnit,
+} from '../../core';
 import type { Scenario } from '../../scenario/types';
 import { useActions, useDerived, useScenario } from '../../store';
 import { NumberField } from '../fields/NumberField';

@@ -151,9 +151,7 @@ export function MethodPanel() {
         <button type="button" onClick={actions.resetMethodDefaults}>
           Use default values
         </button>
-        <p className="method__source">
-          Source: {spec.source}
-        </p>
+        <p className="method__source">Source: {spec.source}</p>
       </div>
     </section>
   );

@@ -39,7 +39,9 @@ export function SoilPresets() {
         id="soil-saturation"
         label="Initial effective saturation"
         value={saturation}
-        check={(v) => (v < 0 || v > 1 ? 'Initial effective saturation must be between 0 (dry) and 1 (saturated).' : null)}
+        check={(v) =>
+          v < 0 || v > 1 ? 'Initial effective saturation must be between 0 (dry) and 1 (saturated).' : null
+        }
         onCommit={setSaturation}
         hint="0 as dry as the soil gets, 1 saturated."
       />

@@ -47,7 +47,10 @@ export function BaseflowParamField({ id, param, value, onSet, hint, note }: Base
       // The core's bounds count samples from 0; the field counts them from 1, so it says so itself.
       checkShown={
         param.unit === 'sample'
-          ? (n) => (Number.isInteger(n) && n >= 1 ? null : `${param.label} must be a whole sample number, 1 or more (got ${n}).`)
+          ? (n) =>
+              Number.isInteger(n) && n >= 1
+                ? null
+                : `${param.label} must be a whole sample number, 1 or more (got ${n}).`
           : undefined
       }
       onCommit={onSet}

@@ -31,7 +31,17 @@ export interface EndPointHandleProps {
  * ends). The discharge under it comes from the core; the handle only says
  * when.
  */
-export function EndPointHandle({ frame, paramKey, label, endTimeH, endM3s, bounds, clock, system, automatic }: EndPointHandleProps) {
+export function EndPointHandle({
+  frame,
+  paramKey,
+  label,
+  endTimeH,
+  endM3s,
+  bounds,
+  clock,
+  system,
+  automatic,
+}: EndPointHandleProps) {
   const actions = useActions();
   const { x, y, plot, offsetH } = frame;
   const cx = x(endTimeH + offsetH);
@@ -40,7 +50,11 @@ export function EndPointHandle({ frame, paramKey, label, endTimeH, endM3s, bound
 
   const setEnd = (tH: number, coalesceKey?: string): void => {
     try {
-      actions.edit(`Move ${label.toLowerCase()}`, (s) => withBaseflowParam(s, paramKey, tH), coalesceKey ? { coalesceKey } : {});
+      actions.edit(
+        `Move ${label.toLowerCase()}`,
+        (s) => withBaseflowParam(s, paramKey, tH),
+        coalesceKey ? { coalesceKey } : {},
+      );
     } catch (error) {
       // The bounds keep the handle where the core accepts it; anything else is a bug to see.
       if (!isInputError(error)) throw error;

@@ -1,5 +1,12 @@
 import { memo, useMemo } from 'react';
-import { baseflowMethodSpec, dischargeAtH, findPeakIndex, type BaseflowResult, type StraightLineBaseflow, type UnitSystem } from '../../core';
+import {
+  baseflowMethodSpec,
+  dischargeAtH,
+  findPeakIndex,
+  type BaseflowResult,
+  type StraightLineBaseflow,
+  type UnitSystem,
+} from '../../core';
 import type { Streamflow } from '../../scenario/types';
 import { useDerived, useScenario, type Separation } from '../../store';
 import { Axes } from '../chart/Axes';
@@ -18,12 +25,23 @@ export const HYDROGRAPH_HEIGHT = 280;
 
 /** The record's discharge line: depends on the record and the frame only, so moving the end point never redraws it. */
 const DischargeLayer = memo(function DischargeLayer({ flow, frame }: { flow: Streamflow; frame: HydrographFrame }) {
-  const d = useMemo(() => seriesPath(flow.timesH, flow.dischargeM3s, frame.offsetH, frame.x, frame.y), [flow.timesH, flow.dischargeM3s, frame]);
+  const d = useMemo(
+    () => seriesPath(flow.timesH, flow.dischargeM3s, frame.offsetH, frame.x, frame.y),
+    [flow.timesH, flow.dischargeM3s, frame],
+  );
   return <path className="hydro__discharge" d={d} data-layer="discharge" />;
 });
 
 /** The core's separation: the shaded direct runoff and the baseflow line over its window. */
-function SeparationLayer({ flow, frame, result }: { flow: Streamflow; frame: HydrographFrame; result: BaseflowResult }) {
+function SeparationLayer({
+  flow,
+  frame,
+  result,
+}: {
+  flow: Streamflow;
+  frame: HydrographFrame;
+  result: BaseflowResult;
+}) {
   const { fill, line } = useMemo(() => {
     const w = { startIndex: result.riseIndex, endTimeH: result.endTimeH, endM3s: endDischarge(flow, result) };
     return {
@@ -72,7 +90,9 @@ function summaryOf(flow: Streamflow, sep: Separation | null, clock: RecordClock,
     `at ${momentText(clock, flow.timesH[peakAt] as number)}`;
   if (!sep) return `${head}.`;
   const label = baseflowMethodSpec(sep.method.kind).label.toLowerCase();
-  return sep.ok ? `${head}; baseflow separated by ${label}, shaded direct runoff above it.` : `${head}; baseflow not separated.`;
+  return sep.ok
+    ? `${head}; baseflow separated by ${label}, shaded direct runoff above it.`
+    : `${head}; baseflow not separated.`;
 }
 
 /** The chart itself, mounted with the record so it measures its own width. */
@@ -92,7 +112,10 @@ function HydrographPlot({ flow }: { flow: Streamflow }) {
   );
   const clock = recordClock(flow.startIso, storm.startIso, offsetH);
   const method = flow.baseflow;
-  const endParam = method.kind === 'straight-line' ? baseflowMethodSpec('straight-line').params.find((p) => p.key === 'endTimeH') : undefined;
+  const endParam =
+    method.kind === 'straight-line'
+      ? baseflowMethodSpec('straight-line').params.find((p) => p.key === 'endTimeH')
+      : undefined;
   const handle =
     method.kind === 'straight-line' && endParam
       ? placeEndHandle(flow, method as StraightLineBaseflow, separation?.ok ? separation.result : null)
@@ -101,7 +124,13 @@ function HydrographPlot({ flow }: { flow: Streamflow }) {
   return (
     <>
       <div className="chart__box" ref={boxRef}>
-        <svg className="chart__svg" width={width} height={HYDROGRAPH_HEIGHT} role="group" aria-labelledby="hydrograph-title">
+        <svg
+          className="chart__svg"
+          width={width}
+          height={HYDROGRAPH_HEIGHT}
+          role="group"
+          aria-labelledby="hydrograph-title"
+        >
           <Axes frame={frame} />
           <g role="img" aria-label={summaryOf(flow, separation, clock, units)}>
             {separation?.ok ? <SeparationLayer flow={flow} frame={frame} result={separation.result} /> : null}
@@ -141,7 +170,9 @@ function HydrographPlot({ flow }: { flow: Streamflow }) {
 export function HydrographChart() {
   const flow = useScenario((s) => s.streamflow);
   const endLabel =
-    flow?.baseflow.kind === 'straight-line' ? baseflowMethodSpec('straight-line').params.find((p) => p.key === 'endTimeH')?.label : undefined;
+    flow?.baseflow.kind === 'straight-line'
+      ? baseflowMethodSpec('straight-line').params.find((p) => p.key === 'endTimeH')?.label
+      : undefined;
   return (
     <figure className="chart hydro" aria-labelledby="hydrograph-title">
       <figcaption className="chart__head hydro__head">

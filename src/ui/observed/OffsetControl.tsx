@@ -44,10 +44,16 @@ export function OffsetControl() {
         value={stored}
         toDisplay={(h) => h * PER_HOUR[unit]}
         fromDisplay={(v) => v / PER_HOUR[unit]}
-        onCommit={(h) => actions.edit('Line up the record', (s) => withRecordOffsetH(s, h), { coalesceKey: 'record-offset' })}
+        onCommit={(h) =>
+          actions.edit('Line up the record', (s) => withRecordOffsetH(s, h), { coalesceKey: 'record-offset' })
+        }
         hint={`The rainfall and the record do not both have clock times, so line them up here: the first sample is ${offsetWords(stored)}. Negative when the record starts first.`}
         after={
-          <select aria-label="Offset unit" value={unit} onChange={(e) => setUnit(e.currentTarget.value === 'min' ? 'min' : 'h')}>
+          <select
+            aria-label="Offset unit"
+            value={unit}
+            onChange={(e) => setUnit(e.currentTarget.value === 'min' ? 'min' : 'h')}
+          >
             <option value="h">h</option>
             <option value="min">min</option>
           </select>

@@ -70,7 +70,9 @@ function ParamFields({ flow, spec }: { flow: Streamflow; spec: BaseflowMethodSpe
             hint={hintOf(param)}
             note={note}
             onSet={(v) =>
-              actions.edit(`Set ${param.label.toLowerCase()}`, (s) => withBaseflowParam(s, param.key, v), { coalesceKey: `baseflow:${param.key}` })
+              actions.edit(`Set ${param.label.toLowerCase()}`, (s) => withBaseflowParam(s, param.key, v), {
+                coalesceKey: `baseflow:${param.key}`,
+              })
             }
           />
         );
@@ -98,7 +100,9 @@ function RecessionEnd({ automatic }: { automatic: boolean }) {
         aria-pressed={automatic}
         aria-describedby="recession-days"
         disabled={days === null}
-        onClick={() => actions.edit('End at N = A^0.2 days after the peak', (s) => withBaseflowParam(s, 'endTimeH', undefined))}
+        onClick={() =>
+          actions.edit('End at N = A^0.2 days after the peak', (s) => withBaseflowParam(s, 'endTimeH', undefined))
+        }
       >
         End at N = A^0.2 days after the peak
       </button>
@@ -118,7 +122,8 @@ interface Tile {
 
 function tilesOf(sep: Separation | null, units: UnitSystem, clock: RecordClock): Tile[] {
   const r = sep?.ok ? sep.result : null;
-  const show = (q: 'depth' | 'volume', si: number): string => `${formatValue(toDisplay(q, si, units))} ${unitText(displayUnit(q, units))}`;
+  const show = (q: 'depth' | 'volume', si: number): string =>
+    `${formatValue(toDisplay(q, si, units))} ${unitText(displayUnit(q, units))}`;
   const peakAt = r ? clockParts(clock, r.peakTimeH) : null;
   return [
     { id: 'direct-volume', label: 'Direct runoff volume', value: r ? show('volume', r.directVolumeM3) : '—' },
@@ -128,13 +133,22 @@ function tilesOf(sep: Separation | null, units: UnitSystem, clock: RecordClock):
       value: r && r.directDepthMm !== undefined ? show('depth', r.directDepthMm) : '—',
       note: r && r.directDepthMm === undefined ? 'needs the catchment area' : undefined,
     },
-    { id: 'bfi', label: 'Baseflow index', value: r ? formatValue(r.baseflowIndex) : '—', note: r ? 'baseflow share of the record’s volume' : undefined },
+    {
+      id: 'bfi',
+      label: 'Baseflow index',
+      value: r ? formatValue(r.baseflowIndex) : '—',
+      note: r ? 'baseflow share of the record’s volume' : undefined,
+    },
     { id: 'peak', label: 'Peak discharge', value: r ? dischargeText(r.peakM3s, units) : '—' },
     {
       id: 'peak-time',
       label: 'Time of peak',
       value: r ? (peakAt ? peakAt.time : hoursText(r.peakTimeH)) : '—',
-      note: r ? (peakAt ? `${peakAt.date}, ${hoursText(r.peakTimeH)} after the first sample` : 'after the first sample') : undefined,
+      note: r
+        ? peakAt
+          ? `${peakAt.date}, ${hoursText(r.peakTimeH)} after the first sample`
+          : 'after the first sample'
+        : undefined,
     },
   ];
 }
@@ -151,14 +165,18 @@ function UseAsObserved() {
   const target = useDerived((d, s) => d.target(s));
   const fit = useDerived((d, s) => d.fit(s));
   const units = useScenario((s) => s.units);
-  const depthText = depthMm === null ? null : `${formatValue(toDisplay('depth', depthMm, units))} ${unitText(displayUnit('depth', units))}`;
+  const depthText =
+    depthMm === null
+      ? null
+      : `${formatValue(toDisplay('depth', depthMm, units))} ${unitText(displayUnit('depth', units))}`;
 
   const toggle = (): void => {
     const s = store.getState().scenario;
     const sep = store.derived.separation(s);
     const mm = sep?.ok ? sep.result.directDepthMm : undefined;
-    actions.edit(linked ? 'Stop using the separated depth as observed runoff' : 'Use separated depth as observed runoff', (doc) =>
-      withSeparationAsObserved(doc, !linked, mm),
+    actions.edit(
+      linked ? 'Stop using the separated depth as observed runoff' : 'Use separated depth as observed runoff',
+      (doc) => withSeparationAsObserved(doc, !linked, mm),
     );
   };
 
@@ -226,7 +244,10 @@ export function SeparationPanel() {
               aria-describedby="baseflow-summary"
               onChange={(e) => {
                 const kind = e.currentTarget.value;
-                if (isBaseflowKind(kind)) actions.edit(`Separate by ${BASEFLOW_METHODS[kind].label.toLowerCase()}`, (s) => withBaseflowKind(s, kind));
+                if (isBaseflowKind(kind))
+                  actions.edit(`Separate by ${BASEFLOW_METHODS[kind].label.toLowerCase()}`, (s) =>
+                    withBaseflowKind(s, kind),
+                  );
               }}
             >
               {BASEFLOW_KINDS.map((kind) => (
@@ -240,7 +261,9 @@ export function SeparationPanel() {
             </p>
           </div>
           <ParamFields flow={flow} spec={spec} />
-          {flow.baseflow.kind === 'straight-line' ? <RecessionEnd automatic={valueOf(flow.baseflow, 'endTimeH') === undefined} /> : null}
+          {flow.baseflow.kind === 'straight-line' ? (
+            <RecessionEnd automatic={valueOf(flow.baseflow, 'endTimeH') === undefined} />
+          ) : null}
           <div className="method__foot">
             <button type="button" onClick={() => actions.edit('Use default baseflow values', withBaseflowDefaults)}>
               Use default values
@@ -260,7 +283,9 @@ export function SeparationPanel() {
               </div>
             ))}
           </dl>
-          {separation && !separation.ok ? <p className="results__error">No results until the separation works (see under the hydrograph).</p> : null}
+          {separation && !separation.ok ? (
+            <p className="results__error">No results until the separation works (see under the hydrograph).</p>
+          ) : null}
           <UseAsObserved />
         </div>
       </div>

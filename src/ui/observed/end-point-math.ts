@@ -84,7 +84,9 @@ export function placeEndHandle(
   const peakIndex = separated?.peakIndex ?? findPeakIndex(dischargeM3s);
   const riseIndex =
     separated?.riseIndex ??
-    (method.riseIndex !== undefined && method.riseIndex <= n - 1 ? method.riseIndex : findStartOfRise(dischargeM3s, peakIndex));
+    (method.riseIndex !== undefined && method.riseIndex <= n - 1
+      ? method.riseIndex
+      : findStartOfRise(dischargeM3s, peakIndex));
   const wide = endPointBounds(timesH, riseIndex, peakIndex);
   const wanted = separated?.endTimeH ?? method.endTimeH ?? wide.maxH;
   const riseH = timesH[riseIndex] as number;

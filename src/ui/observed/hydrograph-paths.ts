@@ -58,7 +58,13 @@ function thinner() {
 }
 
 /** The line through (times[k] + offset, values[k]) for every sample. */
-export function seriesPath(timesH: ArrayLike<number>, values: ArrayLike<number>, offsetH: number, x: Px, y: Px): string {
+export function seriesPath(
+  timesH: ArrayLike<number>,
+  values: ArrayLike<number>,
+  offsetH: number,
+  x: Px,
+  y: Px,
+): string {
   const t = thinner();
   for (let k = 0; k < timesH.length; k++) t.add(x((timesH[k] as number) + offsetH), y(values[k] as number));
   return t.end();
@@ -116,7 +122,8 @@ export function directRunoffPath(
   for (let k = w.startIndex; k <= last; k++) top.add(x((timesH[k] as number) + offsetH), y(dischargeM3s[k] as number));
   if (partial) top.add(x(w.endTimeH + offsetH), y(w.endM3s));
   const bottom = thinner();
-  for (let k = last; k >= w.startIndex; k--) bottom.add(x((timesH[k] as number) + offsetH), y(baseflowM3s[k] as number));
+  for (let k = last; k >= w.startIndex; k--)
+    bottom.add(x((timesH[k] as number) + offsetH), y(baseflowM3s[k] as number));
   const upper = top.end();
   const lower = bottom.end();
   if (upper === '' || lower === '') return '';

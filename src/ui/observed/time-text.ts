@@ -12,7 +12,11 @@ export interface RecordClock {
   readonly firstMs: number | null;
 }
 
-export function recordClock(recordStartIso: string | undefined, stormStartIso: string | undefined, offsetH: number): RecordClock {
+export function recordClock(
+  recordStartIso: string | undefined,
+  stormStartIso: string | undefined,
+  offsetH: number,
+): RecordClock {
   if (recordStartIso !== undefined) {
     const ms = wallClockMs(recordStartIso);
     if (ms !== null) return { firstMs: ms };

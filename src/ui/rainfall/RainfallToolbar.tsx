@@ -28,7 +28,8 @@ export function RainfallToolbar({ tools }: { tools?: ReactNode }) {
   const d = storm.durationsH;
   let uniform = n > 0;
   // Steps worked out from clock times differ in the last bits (10 min = 0.1666… h); to a part in 10⁹ they are one step.
-  for (let k = 1; k < n && uniform; k++) uniform = Math.abs((d[k] as number) - (d[0] as number)) <= 1e-9 * (d[0] as number);
+  for (let k = 1; k < n && uniform; k++)
+    uniform = Math.abs((d[k] as number) - (d[0] as number)) <= 1e-9 * (d[0] as number);
   const first = d[0];
   const bars =
     n === 0

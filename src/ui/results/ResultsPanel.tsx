@@ -57,7 +57,8 @@ export function ResultsPanel() {
   const results = useDerived((d, s) => d.results(s));
   const volumeM3 = useDerived((d, s) => d.runoffVolumeM3(s));
 
-  const show = (q: Quantity, si: number): string => `${formatValue(toDisplay(q, si, units))} ${unitText(displayUnit(q, units))}`;
+  const show = (q: Quantity, si: number): string =>
+    `${formatValue(toDisplay(q, si, units))} ${unitText(displayUnit(q, units))}`;
   const r = results.ok ? results.result : null;
   const rows: Row[] = [
     { id: 'rain', label: 'Rainfall depth', value: r ? show('depth', r.rainMm) : '—' },

@@ -34,7 +34,14 @@ function ManualCopy({ url }: { url: string }) {
   return (
     <div className="share-link__manual">
       <label htmlFor="share-link-text">Share link</label>
-      <input id="share-link-text" ref={ref} type="text" readOnly value={url} onFocus={(e) => e.currentTarget.select()} />
+      <input
+        id="share-link-text"
+        ref={ref}
+        type="text"
+        readOnly
+        value={url}
+        onFocus={(e) => e.currentTarget.select()}
+      />
     </div>
   );
 }
@@ -66,7 +73,14 @@ export function CopyLink() {
       show({
         tone: 'problem',
         title: 'This scenario is too large for a practical link.',
-        body: <LongLinkOffer chars={url.length} scenario={scenario} saveFile={saveFile} onCopyAnyway={() => void copy(true)} />,
+        body: (
+          <LongLinkOffer
+            chars={url.length}
+            scenario={scenario}
+            saveFile={saveFile}
+            onCopyAnyway={() => void copy(true)}
+          />
+        ),
       });
       return;
     }

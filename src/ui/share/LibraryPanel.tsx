@@ -92,7 +92,11 @@ export function LibraryPanel() {
       return;
     }
     const next = done(result.value);
-    setStatus(result.problems.length > 0 ? { kind: 'problem', text: 'Done, but the saved list needed repair.', problems: result.problems } : next);
+    setStatus(
+      result.problems.length > 0
+        ? { kind: 'problem', text: 'Done, but the saved list needed repair.', problems: result.problems }
+        : next,
+    );
   }
 
   if (!library) {
@@ -159,7 +163,10 @@ export function LibraryPanel() {
               type="button"
               className="share-button--small"
               onClick={() =>
-                run(library.restore(status.entry.id), (entry) => ({ kind: 'done', text: `Brought back ${quoted(entry.scenario.name)}.` }))
+                run(library.restore(status.entry.id), (entry) => ({
+                  kind: 'done',
+                  text: `Brought back ${quoted(entry.scenario.name)}.`,
+                }))
               }
             >
               Undo
@@ -185,14 +192,20 @@ export function LibraryPanel() {
           {listing.entries.map((entry) => {
             const name = entry.scenario.name;
             return (
-              <li key={entry.id} className={`library__entry${entry.id === currentId ? ' library__entry--current' : ''}`}>
+              <li
+                key={entry.id}
+                className={`library__entry${entry.id === currentId ? ' library__entry--current' : ''}`}
+              >
                 {renaming === entry.id ? (
                   <RenameForm
                     entry={entry}
                     onDone={(next) => {
                       setRenaming(null);
                       if (next === null) return;
-                      run(library.rename(entry.id, next), (renamed) => ({ kind: 'done', text: `Renamed to ${quoted(renamed.scenario.name)}.` }));
+                      run(library.rename(entry.id, next), (renamed) => ({
+                        kind: 'done',
+                        text: `Renamed to ${quoted(renamed.scenario.name)}.`,
+                      }));
                     }}
                   />
                 ) : (
@@ -211,19 +224,32 @@ export function LibraryPanel() {
                     onClick={() => {
                       actions.replaceScenario(entry.scenario, `Open ${quoted(name)} from the saved list`);
                       setCurrentId(entry.id);
-                      setStatus({ kind: 'done', text: `Opened ${quoted(name)}. Undo brings back the scenario you had before.` });
+                      setStatus({
+                        kind: 'done',
+                        text: `Opened ${quoted(name)}. Undo brings back the scenario you had before.`,
+                      });
                     }}
                   >
                     Open
                   </button>
-                  <button type="button" className="share-button--small" aria-label={`Rename ${name}`} onClick={() => setRenaming(entry.id)}>
+                  <button
+                    type="button"
+                    className="share-button--small"
+                    aria-label={`Rename ${name}`}
+                    onClick={() => setRenaming(entry.id)}
+                  >
                     Rename
                   </button>
                   <button
                     type="button"
                     className="share-button--small"
                     aria-label={`Duplicate ${name}`}
-                    onClick={() => run(library.duplicate(entry.id), (copy) => ({ kind: 'done', text: `Made ${quoted(copy.scenario.name)}.` }))}
+                    onClick={() =>
+                      run(library.duplicate(entry.id), (copy) => ({
+                        kind: 'done',
+                        text: `Made ${quoted(copy.scenario.name)}.`,
+                      }))
+                    }
                   >
                     Duplicate
                   </button>

@@ -24,8 +24,8 @@ export function LinkNotice() {
         <div className="link-notice__text">
           <h2 id="link-notice-title">Shared scenario: {quoted(state.name)}</h2>
           <p>
-            This scenario came in a link and is shown exactly as it was sent. {own} Nothing is saved until you choose, including
-            changes you make to the shared one.
+            This scenario came in a link and is shown exactly as it was sent. {own} Nothing is saved until you choose,
+            including changes you make to the shared one.
           </p>
           {state.canSave && state.ownName !== null ? (
             <p>Keeping it puts your own scenario in Saved scenarios first, so you can open it again.</p>
@@ -53,7 +53,8 @@ export function LinkNotice() {
       <div className="link-notice link-notice--problem" role="alert">
         <div className="link-notice__text">
           <p>
-            <strong>The shared link could not be opened.</strong> Nothing was changed: {quoted(state.ownName)} is on screen
+            <strong>The shared link could not be opened.</strong> Nothing was changed: {quoted(state.ownName)} is on
+            screen
             {state.ownSaved ? ' and your saved scenario is as it was.' : '.'}
           </p>
           <ProblemList problems={state.problems} label="What is wrong with the link" />

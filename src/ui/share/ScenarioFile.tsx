@@ -23,7 +23,11 @@ export function ScenarioFile() {
     const scenario = store.getState().scenario;
     const name = scenarioFileName(scenario);
     saveFile(new Blob([scenarioToFileText(scenario)], { type: 'application/json' }), name);
-    show({ tone: 'done', title: `Saved as ${name}.`, body: <p>Open it again with “Open scenario file…”, here or in any Raincut.</p> });
+    show({
+      tone: 'done',
+      title: `Saved as ${name}.`,
+      body: <p>Open it again with “Open scenario file…”, here or in any Raincut.</p>,
+    });
   };
 
   const open = async (file: File): Promise<void> => {
@@ -31,7 +35,11 @@ export function ScenarioFile() {
     const refuse = (body: ReactNode): void =>
       show({ tone: 'problem', title: `${name} was not opened; the scenario on screen is unchanged.`, body });
     if (file.size > MAX_FILE_CHARS) {
-      refuse(<p>It is {megabytes(file.size)}; a scenario file may be at most {megabytes(MAX_FILE_CHARS)}.</p>);
+      refuse(
+        <p>
+          It is {megabytes(file.size)}; a scenario file may be at most {megabytes(MAX_FILE_CHARS)}.
+        </p>,
+      );
       return;
     }
     let text: string;

@@ -28,7 +28,11 @@ export function BarMessageView({ message, onDismiss }: { message: BarMessage | n
   if (!message) return null;
   const problem = message.tone === 'problem';
   return (
-    <div className={`bar-message bar-message--${message.tone}`} role={problem ? 'alert' : 'status'} aria-label={MESSAGE_LABEL}>
+    <div
+      className={`bar-message bar-message--${message.tone}`}
+      role={problem ? 'alert' : 'status'}
+      aria-label={MESSAGE_LABEL}
+    >
       <div className="bar-message__text">
         <p>
           <strong>{message.title}</strong>
@@ -43,7 +47,13 @@ export function BarMessageView({ message, onDismiss }: { message: BarMessage | n
 }
 
 /** A list of problems as the scenario layer reports them (each message starts with its field path). */
-export function ProblemList({ problems, label }: { problems: readonly { path: string; message: string }[]; label: string }) {
+export function ProblemList({
+  problems,
+  label,
+}: {
+  problems: readonly { path: string; message: string }[];
+  label: string;
+}) {
   return (
     <ul className="bar-message__problems" aria-label={label}>
       {problems.map((p, i) => (

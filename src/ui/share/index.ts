@@ -7,4 +7,10 @@ export { LinkNotice } from './LinkNotice';
 export { CopyLink, linkLengthText, LONG_LINK_CHARS } from './CopyLink';
 export { ScenarioFile } from './ScenarioFile';
 export { LibraryPanel, LIBRARY_PANEL_ID } from './LibraryPanel';
-export { ScenarioServicesProvider, browserServices, browserStorage, useServices, type ScenarioServices } from './services';
+export {
+  ScenarioServicesProvider,
+  browserServices,
+  browserStorage,
+  useServices,
+  type ScenarioServices,
+} from './services';

@@ -56,7 +56,13 @@ interface Provided extends ScenarioServices {
 
 const ServicesContext = createContext<Provided | null>(null);
 
-export function ScenarioServicesProvider({ services, children }: { services?: ScenarioServices | undefined; children?: ReactNode }) {
+export function ScenarioServicesProvider({
+  services,
+  children,
+}: {
+  services?: ScenarioServices | undefined;
+  children?: ReactNode;
+}) {
   const value = useMemo<Provided>(() => {
     const base = services ?? browserServices();
     return {

@@ -1,4 +1,12 @@
-import { useEffect, useLayoutEffect, useRef, useState, type KeyboardEvent, type ReactNode, type RefObject } from 'react';
+import {
+  useEffect,
+  useLayoutEffect,
+  useRef,
+  useState,
+  type KeyboardEvent,
+  type ReactNode,
+  type RefObject,
+} from 'react';
 import { createPortal } from 'react-dom';
 
 const FOCUSABLE =
@@ -76,7 +84,9 @@ export function Modal({ labelledBy, describedBy, onClose, initialFocus, classNam
     if (e.key !== 'Tab') return;
     const box = boxRef.current;
     if (!box) return;
-    const items = Array.from(box.querySelectorAll<HTMLElement>(FOCUSABLE)).filter((el) => el.tabIndex >= 0 && !el.closest('[hidden]'));
+    const items = Array.from(box.querySelectorAll<HTMLElement>(FOCUSABLE)).filter(
+      (el) => el.tabIndex >= 0 && !el.closest('[hidden]'),
+    );
     const first = items[0];
     const last = items[items.length - 1];
     if (!first || !last) {

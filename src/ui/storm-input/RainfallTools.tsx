@@ -9,7 +9,11 @@ import { EMPTY_DRAFT, PasteDialog } from './paste/PasteDialog';
  */
 export function RainfallTools() {
   const { drawing, setDrawing, toolsOpen, setToolsOpen } = useStormInput();
-  const paste = useImportLauncher<RainImportSettings>({ empty: EMPTY_DRAFT, fileWhat: 'the rainfall', beforeOpen: () => setDrawing(false) });
+  const paste = useImportLauncher<RainImportSettings>({
+    empty: EMPTY_DRAFT,
+    fileWhat: 'the rainfall',
+    beforeOpen: () => setDrawing(false),
+  });
 
   return (
     <div className="storm-input__buttons" role="group" aria-label="Rainfall input">
@@ -19,10 +23,20 @@ export function RainfallTools() {
       <OpenFileButton inputLabel="Rainfall file to open" opensDialog onFile={paste.openFile}>
         Open rainfall file…
       </OpenFileButton>
-      <button type="button" aria-pressed={drawing} aria-controls={drawing ? DRAW_PANEL_ID : undefined} onClick={() => setDrawing(!drawing)}>
+      <button
+        type="button"
+        aria-pressed={drawing}
+        aria-controls={drawing ? DRAW_PANEL_ID : undefined}
+        onClick={() => setDrawing(!drawing)}
+      >
         Draw bars
       </button>
-      <button type="button" aria-expanded={toolsOpen} aria-controls={STORM_TOOLS_ID} onClick={() => setToolsOpen(!toolsOpen)}>
+      <button
+        type="button"
+        aria-expanded={toolsOpen}
+        aria-controls={STORM_TOOLS_ID}
+        onClick={() => setToolsOpen(!toolsOpen)}
+      >
         Storm tools
       </button>
       {paste.fileMessage ? (

@@ -85,7 +85,10 @@ export function readBarTime(clock: BarClock, text: string, nearH: number): TimeT
   const { date, hasTime, msOfDay, zoneMinutes } = read.value;
   if (!hasTime) return { ok: false, message: `“${t}” has a date but no time of day.` };
   if (zoneMinutes !== null) {
-    return { ok: false, message: `“${t}” gives a time zone; bar times are read on the storm’s own clock, so leave the zone out.` };
+    return {
+      ok: false,
+      message: `“${t}” gives a time zone; bar times are read on the storm’s own clock, so leave the zone out.`,
+    };
   }
   let dayMs: number;
   if (date === null) {
@@ -117,7 +120,10 @@ export function readStartText(text: string): { ok: true; iso: string } | { ok: f
   const t = text.trim();
   if (t === '') return { ok: false, message: 'Enter a date and time, for example 2024-05-01 09:50.' };
   if (!/^\d{4}-\d{1,2}-\d{1,2}/.test(t)) {
-    return { ok: false, message: `“${t}” is not a date and time; write it as YYYY-MM-DD HH:MM, for example 2024-05-01 09:50.` };
+    return {
+      ok: false,
+      message: `“${t}” is not a date and time; write it as YYYY-MM-DD HH:MM, for example 2024-05-01 09:50.`,
+    };
   }
   const read = parseClock(t, 'day-month');
   if (!read.ok) return { ok: false, message: `“${t}”: ${read.reason.charAt(0).toUpperCase()}${read.reason.slice(1)}` };

@@ -12,7 +12,10 @@ describe('constant-discharge separation', () => {
 
   it('gives the area of a triangle over constant baseflow exactly, on regular steps', () => {
     const times = [0, 1, 2, 3, 4, 5, 6, 7, 8, 9, 10, 11, 12, 13];
-    const result = separateBaseflow(triangleOver(times, 2, 5, 11, 9, () => 3), constant);
+    const result = separateBaseflow(
+      triangleOver(times, 2, 5, 11, 9, () => 3),
+      constant,
+    );
     expectClose(result.directVolumeM3, triangleM3);
     expect(result.riseIndex).toBe(2);
     expect(result.endTimeH).toBe(11);
@@ -21,7 +24,10 @@ describe('constant-discharge separation', () => {
 
   it('gives the area of a triangle over constant baseflow exactly, on irregular steps', () => {
     const times = [0, 0.7, 2, 2.3, 3.9, 5, 5.25, 7.1, 8, 10.6, 11, 13.5];
-    const result = separateBaseflow(triangleOver(times, 2, 5, 11, 9, () => 3), constant);
+    const result = separateBaseflow(
+      triangleOver(times, 2, 5, 11, 9, () => 3),
+      constant,
+    );
     expectClose(result.directVolumeM3, triangleM3);
     expect(result.riseIndex).toBe(2);
     expect(result.endTimeH).toBe(11);
@@ -98,4 +104,3 @@ describe('constant-discharge separation', () => {
     );
   });
 });
-

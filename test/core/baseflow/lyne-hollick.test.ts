@@ -18,7 +18,10 @@ describe('Lyne & Hollick filter', () => {
         fc.double({ min: 0, max: 0.999, noNaN: true }),
         fc.integer({ min: 1, max: 9 }),
         (n, q, alpha, passes) => {
-          const h = { timesH: Float64Array.from({ length: n }, (_, k) => k), dischargeM3s: new Float64Array(n).fill(q) };
+          const h = {
+            timesH: Float64Array.from({ length: n }, (_, k) => k),
+            dischargeM3s: new Float64Array(n).fill(q),
+          };
           const result = separateBaseflow(h, lyneHollick(alpha, passes));
           expect(Array.from(result.baseflowM3s)).toEqual(Array.from(h.dischargeM3s));
           expect(result.directVolumeM3).toBe(0);

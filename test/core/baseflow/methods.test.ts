@@ -86,7 +86,9 @@ describe('the table of baseflow methods', () => {
 
 describe('validateBaseflowMethod', () => {
   it('rejects an unknown kind or a missing method', () => {
-    expect(inputErrorOf(() => validateBaseflowMethod({ kind: 'nope' } as unknown as BaseflowMethod)).field).toBe('kind');
+    expect(inputErrorOf(() => validateBaseflowMethod({ kind: 'nope' } as unknown as BaseflowMethod)).field).toBe(
+      'kind',
+    );
     expect(inputErrorOf(() => validateBaseflowMethod(null as unknown as BaseflowMethod)).field).toBe('method');
   });
 

@@ -81,7 +81,10 @@ describe('separateBaseflow', () => {
   });
 
   it('has a baseflow index of 0 for a record with no flow', () => {
-    const r = separateBaseflow({ timesH: [0, 1, 2], dischargeM3s: [0, 0, 0] }, { kind: 'eckhardt', a: 0.98, bfiMax: 0.8 });
+    const r = separateBaseflow(
+      { timesH: [0, 1, 2], dischargeM3s: [0, 0, 0] },
+      { kind: 'eckhardt', a: 0.98, bfiMax: 0.8 },
+    );
     expect([r.totalVolumeM3, r.directVolumeM3, r.baseflowIndex]).toEqual([0, 0, 0]);
   });
 

@@ -75,9 +75,15 @@ describe('curve number from an observed runoff (Hawkins 1993 closed form)', () =
 
   it('returns CN 100 when all rain ran off, and keeps the given CN for a dry storm', () => {
     const storm = { durationsH: [1, 2], depthsMm: [10, 15] };
-    expect(calibrate(storm, { kind: 'curve-number', cn: 60, iaRatio: 0.2 }, 'cn', 25)).toMatchObject({ ok: true, value: 100 });
+    expect(calibrate(storm, { kind: 'curve-number', cn: 60, iaRatio: 0.2 }, 'cn', 25)).toMatchObject({
+      ok: true,
+      value: 100,
+    });
     const dry = { durationsH: [1, 2], depthsMm: [0, 0] };
-    expect(calibrate(dry, { kind: 'curve-number', cn: 60, iaRatio: 0.05 }, 'cn', 0)).toMatchObject({ ok: true, value: 60 });
+    expect(calibrate(dry, { kind: 'curve-number', cn: 60, iaRatio: 0.05 }, 'cn', 0)).toMatchObject({
+      ok: true,
+      value: 60,
+    });
   });
 
   it('is a stable formula: no cancellation for runoff close to the rain or to zero', () => {

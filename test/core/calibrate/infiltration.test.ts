@@ -41,8 +41,20 @@ const CASES: readonly Case[] = [
   { name: 'Green–Ampt K', method: greenAmptBase, key: 'ksMmH', low: 0.05, high: 60 },
   { name: 'Green–Ampt ψ', method: greenAmptBase, key: 'suctionMm', low: 0, high: 400 },
   { name: 'Green–Ampt Δθ', method: greenAmptBase, key: 'moistureDeficit', low: 0, high: 1 },
-  { name: 'curve number, Iₐ = 0.2 S', method: { kind: 'curve-number', cn: 75, iaRatio: 0.2 }, key: 'cn', low: 20, high: 100 },
-  { name: 'curve number, Iₐ = 0.05 S', method: { kind: 'curve-number', cn: 75, iaRatio: 0.05 }, key: 'cn', low: 20, high: 100 },
+  {
+    name: 'curve number, Iₐ = 0.2 S',
+    method: { kind: 'curve-number', cn: 75, iaRatio: 0.2 },
+    key: 'cn',
+    low: 20,
+    high: 100,
+  },
+  {
+    name: 'curve number, Iₐ = 0.05 S',
+    method: { kind: 'curve-number', cn: 75, iaRatio: 0.05 },
+    key: 'cn',
+    low: 20,
+    high: 100,
+  },
 ];
 
 describe('calibration of every infiltration parameter', () => {
@@ -53,44 +65,48 @@ describe('calibration of every infiltration parameter', () => {
     }
   });
 
-  it.each(CASES)('round-trips $name on random storms: the fitted value is within 1e-9 of an exact answer, and of the true value where runoff responds', (c) => {
-    fc.assert(
-      fc.property(stormArb(30), fc.double({ min: c.low, max: c.high, noNaN: true }), (storm, truth) => {
-        const truthMethod = withValue(c.method, c.key, truth);
-        // Horton's f₀ ≥ f_c: keep the drawn pair valid.
-        if (truthMethod.kind === 'horton' && truthMethod.f0MmH < truthMethod.fcMmH) return;
-        const target = excessOf(storm, truthMethod);
-        const rain = computeLosses(storm, c.method).rainMm;
-        const r = calibrate(storm, c.method, c.key, target);
-        expect(r.ok).toBe(true);
-        if (!r.ok) return;
-        const nudged = (value: number, factor: number): number | undefined => {
-          try {
-            return excessOf(storm, withValue(c.method, c.key, value * factor));
-          } catch {
-            return undefined; // the nudge left the valid range (f₀ < f_c, Δθ > 1, CN > 100)
+  it.each(CASES)(
+    'round-trips $name on random storms: the fitted value is within 1e-9 of an exact answer, and of the true value where runoff responds',
+    (c) => {
+      fc.assert(
+        fc.property(stormArb(30), fc.double({ min: c.low, max: c.high, noNaN: true }), (storm, truth) => {
+          const truthMethod = withValue(c.method, c.key, truth);
+          // Horton's f₀ ≥ f_c: keep the drawn pair valid.
+          if (truthMethod.kind === 'horton' && truthMethod.f0MmH < truthMethod.fcMmH) return;
+          const target = excessOf(storm, truthMethod);
+          const rain = computeLosses(storm, c.method).rainMm;
+          const r = calibrate(storm, c.method, c.key, target);
+          expect(r.ok).toBe(true);
+          if (!r.ok) return;
+          const nudged = (value: number, factor: number): number | undefined => {
+            try {
+              return excessOf(storm, withValue(c.method, c.key, value * factor));
+            } catch {
+              return undefined; // the nudge left the valid range (f₀ < f_c, Δθ > 1, CN > 100)
+            }
+          };
+          // The fitted value is within 2e-9 of itself of an exact answer: the target
+          // lies between the runoffs of value·(1 ± 2e-9), to rounding of the rain.
+          const fitted = excessOf(storm, r.method);
+          const around = [fitted, nudged(r.value, 1 - 2e-9) ?? fitted, nudged(r.value, 1 + 2e-9) ?? fitted];
+          const slack = 1e-12 * Math.max(rain, 1);
+          expect(target).toBeGreaterThanOrEqual(Math.min(...around) - slack);
+          expect(target).toBeLessThanOrEqual(Math.max(...around) + slack);
+          expect(Math.abs(fitted - target)).toBeLessThanOrEqual(1e-6 * target + slack);
+          // Where runoff changes measurably on both sides of the true value (not on
+          // a plateau, where many values fit), the value itself comes back.
+          const up = nudged(truth, 1 + 1e-6);
+          const down = nudged(truth, 1 - 1e-6);
+          const moves = (e: number | undefined): boolean =>
+            e !== undefined && Math.abs(e - target) > 1e-7 * Math.max(target, 1e-3);
+          if (truth > 0 && moves(up) && moves(down)) {
+            expect(Math.abs(r.value - truth)).toBeLessThanOrEqual(1e-9 * truth);
           }
-        };
-        // The fitted value is within 2e-9 of itself of an exact answer: the target
-        // lies between the runoffs of value·(1 ± 2e-9), to rounding of the rain.
-        const fitted = excessOf(storm, r.method);
-        const around = [fitted, nudged(r.value, 1 - 2e-9) ?? fitted, nudged(r.value, 1 + 2e-9) ?? fitted];
-        const slack = 1e-12 * Math.max(rain, 1);
-        expect(target).toBeGreaterThanOrEqual(Math.min(...around) - slack);
-        expect(target).toBeLessThanOrEqual(Math.max(...around) + slack);
-        expect(Math.abs(fitted - target)).toBeLessThanOrEqual(1e-6 * target + slack);
-        // Where runoff changes measurably on both sides of the true value (not on
-        // a plateau, where many values fit), the value itself comes back.
-        const up = nudged(truth, 1 + 1e-6);
-        const down = nudged(truth, 1 - 1e-6);
-        const moves = (e: number | undefined): boolean => e !== undefined && Math.abs(e - target) > 1e-7 * Math.max(target, 1e-3);
-        if (truth > 0 && moves(up) && moves(down)) {
-          expect(Math.abs(r.value - truth)).toBeLessThanOrEqual(1e-9 * truth);
-        }
-      }),
-      { numRuns: 120 },
-    );
-  });
+        }),
+        { numRuns: 120 },
+      );
+    },
+  );
 
   it('keeps the other parameters as they were', () => {
     const storm = { durationsH: [0.5, 0.25, 1], depthsMm: [10, 20, 6] };
@@ -118,7 +134,9 @@ describe('out-of-reach targets say which bound was reached and what runoff it gi
     expect(r).toMatchObject({ ok: false, reason: 'bound-reached', bound: 'max', boundValue: HORTON_K_CEILING_PER_H });
     if (r.ok) return;
     expect(r.boundExcessMm).toBeCloseTo(atTop, 12);
-    expect(r.message).toMatch(/^No decay constant k greater than 0 1\/h gives .* mm of runoff: the highest value \(1000 1\/h\) gives .* mm\.$/);
+    expect(r.message).toMatch(
+      /^No decay constant k greater than 0 1\/h gives .* mm of runoff: the highest value \(1000 1\/h\) gives .* mm\.$/,
+    );
   });
 
   it('Horton f_c: runoff below what f_c = f₀ gives stops at the top of its range, f₀', () => {
@@ -139,7 +157,9 @@ describe('out-of-reach targets say which bound was reached and what runoff it gi
     expect(r).toMatchObject({ ok: false, reason: 'bound-reached', bound: 'min', boundValue: 0 });
     if (r.ok) return;
     expect(r.boundExcessMm).toBeCloseTo(atZero, 12);
-    expect(r.message).toMatch(/^No wetting-front suction head ψ at least 0 mm gives .* mm of runoff: the lowest value \(0 mm\) gives/);
+    expect(r.message).toMatch(
+      /^No wetting-front suction head ψ at least 0 mm gives .* mm of runoff: the lowest value \(0 mm\) gives/,
+    );
   });
 
   it('Green–Ampt Δθ: runoff above what a saturated soil gives stops at Δθ = 0 and names the symbol as written', () => {

@@ -105,7 +105,10 @@ describe('exact φ-index calibration', () => {
 
   it('is linear-time friendly: sorted and reverse-sorted storms of 20,000 bars give the bisection answer', () => {
     const n = 20000;
-    const up = { durationsH: Array.from({ length: n }, (_, k) => 0.1 + (k % 7) * 0.05), depthsMm: Array.from({ length: n }, (_, k) => k / 100) };
+    const up = {
+      durationsH: Array.from({ length: n }, (_, k) => 0.1 + (k % 7) * 0.05),
+      depthsMm: Array.from({ length: n }, (_, k) => k / 100),
+    };
     const down = { durationsH: [...up.durationsH].reverse(), depthsMm: [...up.depthsMm].reverse() };
     for (const s of [up, down]) {
       const target = 0.4 * totalDepthMm(s);
@@ -140,21 +143,24 @@ describe('the three routes to the exact φ on long storms', () => {
     [20000, 3, false],
     [50000, 11, true],
     [40000, 99, false],
-  ] as const)('%i bars (seed %i, discrete %s): sampled, bucket and plain selection agree and reproduce the target', (n, seed, discrete) => {
-    const s = longStorm(n, seed, discrete);
-    const rain = totalDepthMm(s);
-    for (const share of [0, 0.001, 0.05, 0.3, 0.7, 0.999, 1]) {
-      const target = share * rain;
-      const a = exactPhi(s.durationsH, s.depthsMm, target);
-      const b = exactPhiByBuckets(s.durationsH, s.depthsMm, target);
-      const c = exactPhiBySelection(s.durationsH, s.depthsMm, target);
-      const peak = peakIntensityMmH(s);
-      expect(Math.abs(a - c)).toBeLessThanOrEqual(1e-9 * c + 1e-12 * peak);
-      expect(Math.abs(b - c)).toBeLessThanOrEqual(1e-9 * c + 1e-12 * peak);
-      const back = computeLosses(s, { kind: 'constant', rateMmH: a }).totalExcessMm;
-      expect(Math.abs(back - target)).toBeLessThanOrEqual(1e-9 * rain);
-    }
-  });
+  ] as const)(
+    '%i bars (seed %i, discrete %s): sampled, bucket and plain selection agree and reproduce the target',
+    (n, seed, discrete) => {
+      const s = longStorm(n, seed, discrete);
+      const rain = totalDepthMm(s);
+      for (const share of [0, 0.001, 0.05, 0.3, 0.7, 0.999, 1]) {
+        const target = share * rain;
+        const a = exactPhi(s.durationsH, s.depthsMm, target);
+        const b = exactPhiByBuckets(s.durationsH, s.depthsMm, target);
+        const c = exactPhiBySelection(s.durationsH, s.depthsMm, target);
+        const peak = peakIntensityMmH(s);
+        expect(Math.abs(a - c)).toBeLessThanOrEqual(1e-9 * c + 1e-12 * peak);
+        expect(Math.abs(b - c)).toBeLessThanOrEqual(1e-9 * c + 1e-12 * peak);
+        const back = computeLosses(s, { kind: 'constant', rateMmH: a }).totalExcessMm;
+        expect(Math.abs(back - target)).toBeLessThanOrEqual(1e-9 * rain);
+      }
+    },
+  );
 
   it('a bracket that misses φ is refused, so the caller falls back', () => {
     const s = longStorm(20000, 5, false);

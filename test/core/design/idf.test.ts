@@ -1,6 +1,14 @@
 import { describe, expect, test } from 'vitest';
 import fc from 'fast-check';
-import { InputError, idfDepthMm, idfIntensityMmH, idfRangeH, validateIdf, type Idf, type IdfTable } from '../../../src/core';
+import {
+  InputError,
+  idfDepthMm,
+  idfIntensityMmH,
+  idfRangeH,
+  validateIdf,
+  type Idf,
+  type IdfTable,
+} from '../../../src/core';
 import { expectClose, thrown } from './close';
 
 // Coefficients in this file are invented for the tests unless a source is named.
@@ -99,7 +107,13 @@ describe('IDF tables', () => {
   });
 
   test('a table in hours and in/h converts both', () => {
-    const idf: IdfTable = { kind: 'table', durations: [1, 4], intensities: [2, 1], durationUnit: 'h', intensityUnit: 'in/h' };
+    const idf: IdfTable = {
+      kind: 'table',
+      durations: [1, 4],
+      intensities: [2, 1],
+      durationUnit: 'h',
+      intensityUnit: 'in/h',
+    };
     // 2 h is the log midpoint: √(2 · 1) in/h.
     expectClose(idfIntensityMmH(idf, 2), Math.SQRT2 * 25.4);
   });
@@ -123,7 +137,13 @@ describe('IDF tables', () => {
 
 describe('IDF validation names the bad field', () => {
   const good: Idf = { kind: 'a/(t+b)^c', a: 1000, b: 10, c: 0.8, durationUnit: 'min', intensityUnit: 'mm/h' };
-  const goodTable: IdfTable = { kind: 'table', durations: [10, 60], intensities: [100, 30], durationUnit: 'min', intensityUnit: 'mm/h' };
+  const goodTable: IdfTable = {
+    kind: 'table',
+    durations: [10, 60],
+    intensities: [100, 30],
+    durationUnit: 'min',
+    intensityUnit: 'mm/h',
+  };
   const bad = (patch: Record<string, unknown>, base: Idf = good): Idf => ({ ...base, ...patch }) as unknown as Idf;
 
   test('good relations pass', () => {
@@ -145,11 +165,13 @@ describe('IDF validation names the bad field', () => {
     [{ c: 1, b: 0 }, 'b'],
   ])('formula %j is refused on %s', (patch, field) => {
     expect(fieldOf(() => validateIdf(bad(patch)))).toBe(field);
-    expect(fieldOf(() => validateIdf(bad({ ...patch, kind: (patch as { kind?: string }).kind ?? 'a/(t^c+b)' })))).toBe(field);
+    expect(fieldOf(() => validateIdf(bad({ ...patch, kind: (patch as { kind?: string }).kind ?? 'a/(t^c+b)' })))).toBe(
+      field,
+    );
   });
 
   test.each([
-    [{ durations: [10] , intensities: [100] }, 'durations', undefined],
+    [{ durations: [10], intensities: [100] }, 'durations', undefined],
     [{ intensities: [100, 30, 20] }, 'intensities', undefined],
     [{ durations: [0, 60] }, 'durations', 0],
     [{ durations: [10, 10] }, 'durations', 1],
@@ -168,7 +190,9 @@ describe('IDF validation names the bad field', () => {
 
   test('a table whose intensity falls exactly as 1/t (same depth at every row) is refused', () => {
     // 100 mm/h · 10 min = 50 mm/h · 20 min: the rain would stop after 10 min.
-    expect(fieldOf(() => validateIdf(bad({ durations: [10, 20], intensities: [100, 50] }, goodTable)))).toBe('intensities');
+    expect(fieldOf(() => validateIdf(bad({ durations: [10, 20], intensities: [100, 50] }, goodTable)))).toBe(
+      'intensities',
+    );
   });
 
   test('a missing relation is refused', () => {

@@ -31,7 +31,9 @@ describe('scaling a storm to a chosen depth', () => {
   test('any storm scaled to any depth has that total and the same shape', () => {
     fc.assert(
       fc.property(
-        fc.array(fc.double({ min: 0, max: 200, noNaN: true }), { minLength: 1, maxLength: 40 }).filter((p) => p.some((x) => x > 0)),
+        fc
+          .array(fc.double({ min: 0, max: 200, noNaN: true }), { minLength: 1, maxLength: 40 })
+          .filter((p) => p.some((x) => x > 0)),
         fc.double({ min: 0, max: 1000, noNaN: true }),
         (depths, target) => {
           const s: Storm = { durationsH: depths.map(() => 0.25), depthsMm: depths };

@@ -1,6 +1,13 @@
 import { describe, expect, test } from 'vitest';
 import fc from 'fast-check';
-import { InputError, applyDesignValue, defaultMethod, fitEvents, type CatchmentEvent, type EventRunoff } from '../../../src/core';
+import {
+  InputError,
+  applyDesignValue,
+  defaultMethod,
+  fitEvents,
+  type CatchmentEvent,
+  type EventRunoff,
+} from '../../../src/core';
 import { expectClose, thrown } from '../design/close';
 
 // Invented events, each one bar of 1 h: with φ the runoff is rain − φ.
@@ -67,8 +74,15 @@ describe('applying a design value to every event', () => {
   test('the other parameters of the method are kept', () => {
     // IL 5 mm, CL set to 1 mm/h on a 2 h storm of 10 mm/h: 20 − 5 − 1·1.5 = 13.5 mm
     // (IL is used up after 0.5 h; the continuing rate applies to the remaining 1.5 h).
-    const event: CatchmentEvent = { id: 'il', name: 'il', storm: { durationsH: [2], depthsMm: [20] }, observedExcessMm: 12 };
-    const row = okRow(applyDesignValue([event], { kind: 'initial-continuing', initialMm: 5, rateMmH: 9 }, 'rateMmH', 1)[0]);
+    const event: CatchmentEvent = {
+      id: 'il',
+      name: 'il',
+      storm: { durationsH: [2], depthsMm: [20] },
+      observedExcessMm: 12,
+    };
+    const row = okRow(
+      applyDesignValue([event], { kind: 'initial-continuing', initialMm: 5, rateMmH: 9 }, 'rateMmH', 1)[0],
+    );
     expectClose(row.runoffMm, 13.5);
   });
 

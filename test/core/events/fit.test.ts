@@ -1,6 +1,13 @@
 import { describe, expect, test } from 'vitest';
 import fc from 'fast-check';
-import { InputError, calibrate, defaultMethod, fitEvents, type CatchmentEvent, type LossMethod } from '../../../src/core';
+import {
+  InputError,
+  calibrate,
+  defaultMethod,
+  fitEvents,
+  type CatchmentEvent,
+  type LossMethod,
+} from '../../../src/core';
 import { thrown } from '../design/close';
 
 // All events in this file are invented.
@@ -71,20 +78,24 @@ describe('fitting every event of a catchment', () => {
       { method: { kind: 'initial-continuing', initialMm: 5, rateMmH: 2 }, parameter: 'initialMm' },
     ];
     fc.assert(
-      fc.property(fc.array(event, { minLength: 1, maxLength: 8 }), fc.constantFrom(...fitted), (drawn, { method, parameter }) => {
-        const events: CatchmentEvent[] = drawn.map((e, k) => {
-          const rain = e.storm.depthsMm.reduce((s, p) => s + p, 0);
-          return { id: `e${k}`, name: `Event ${k + 1}`, storm: e.storm, observedExcessMm: e.fraction * rain };
-        });
-        const rows = fitEvents(events, method, parameter);
-        expect(rows).toHaveLength(events.length);
-        events.forEach((e, k) => {
-          const alone = calibrate(e.storm, method, parameter, e.observedExcessMm);
-          const row = rows[k];
-          expect(row?.result).toEqual(alone);
-          if (alone.ok && row?.result.ok) expect(Object.is(row.result.value, alone.value)).toBe(true);
-        });
-      }),
+      fc.property(
+        fc.array(event, { minLength: 1, maxLength: 8 }),
+        fc.constantFrom(...fitted),
+        (drawn, { method, parameter }) => {
+          const events: CatchmentEvent[] = drawn.map((e, k) => {
+            const rain = e.storm.depthsMm.reduce((s, p) => s + p, 0);
+            return { id: `e${k}`, name: `Event ${k + 1}`, storm: e.storm, observedExcessMm: e.fraction * rain };
+          });
+          const rows = fitEvents(events, method, parameter);
+          expect(rows).toHaveLength(events.length);
+          events.forEach((e, k) => {
+            const alone = calibrate(e.storm, method, parameter, e.observedExcessMm);
+            const row = rows[k];
+            expect(row?.result).toEqual(alone);
+            if (alone.ok && row?.result.ok) expect(Object.is(row.result.value, alone.value)).toBe(true);
+          });
+        },
+      ),
       { numRuns: 60 },
     );
   });

@@ -1,5 +1,12 @@
 import { describe, expect, test } from 'vitest';
-import { InputError, defaultMethod, fitEvents, pickDesignValue, summariseFits, type CatchmentEvent } from '../../../src/core';
+import {
+  InputError,
+  defaultMethod,
+  fitEvents,
+  pickDesignValue,
+  summariseFits,
+  type CatchmentEvent,
+} from '../../../src/core';
 import { thrown } from '../design/close';
 
 // Invented events, each one bar of 1 h, so φ = rain − observed by hand.
@@ -13,7 +20,13 @@ const fitsOf = (events: CatchmentEvent[]) => fitEvents(events, defaultMethod('co
 
 describe('summary of fitted values', () => {
   // φ = 2, 5, 3, (none: 12 mm observed from 10 mm of rain), 10 mm/h.
-  const fits = fitsOf([oneBar('a', 10, 8), oneBar('b', 10, 5), oneBar('c', 10, 7), oneBar('d', 10, 12), oneBar('e', 20, 10)]);
+  const fits = fitsOf([
+    oneBar('a', 10, 8),
+    oneBar('b', 10, 5),
+    oneBar('c', 10, 7),
+    oneBar('d', 10, 12),
+    oneBar('e', 20, 10),
+  ]);
 
   test('counts only events with an answer, and says how many have none', () => {
     const s = summariseFits(fits);
@@ -34,7 +47,14 @@ describe('summary of fitted values', () => {
   });
 
   test('one event: every statistic is its value', () => {
-    expect(summariseFits(fitsOf([oneBar('a', 10, 8)]))).toEqual({ count: 1, withoutAnswer: 0, mean: 2, median: 2, min: 2, max: 2 });
+    expect(summariseFits(fitsOf([oneBar('a', 10, 8)]))).toEqual({
+      count: 1,
+      withoutAnswer: 0,
+      mean: 2,
+      median: 2,
+      min: 2,
+      max: 2,
+    });
   });
 
   test('no event with an answer: count 0 and no statistics', () => {

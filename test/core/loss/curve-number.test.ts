@@ -56,12 +56,18 @@ describe('curve number runoff', () => {
 
   it('loses everything until the initial abstraction 0.2 S is filled', () => {
     const s = curveNumberRetentionMm(60); // 169.33 mm, Iₐ = 33.87 mm
-    const r = computeLosses({ durationsH: [1, 1], depthsMm: [0.2 * s - 1, 0.999] }, { kind: 'curve-number', cn: 60, iaRatio: 0.2 });
+    const r = computeLosses(
+      { durationsH: [1, 1], depthsMm: [0.2 * s - 1, 0.999] },
+      { kind: 'curve-number', cn: 60, iaRatio: 0.2 },
+    );
     expect(r.totalExcessMm).toBe(0);
   });
 
   it('runs off every drop at CN 100', () => {
-    const r = computeLosses({ durationsH: [1, 0.5], depthsMm: [3, 7] }, { kind: 'curve-number', cn: 100, iaRatio: 0.2 });
+    const r = computeLosses(
+      { durationsH: [1, 0.5], depthsMm: [3, 7] },
+      { kind: 'curve-number', cn: 100, iaRatio: 0.2 },
+    );
     expect(Array.from(r.excessMm)).toEqual([3, 7]);
   });
 

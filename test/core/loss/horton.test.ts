@@ -130,7 +130,10 @@ describe('Horton with time compression (capacity follows infiltrated depth)', ()
     const tauP = Math.log(52 / 12) / 3;
     const fp = 8 * tauP + 40 / 3;
     const tp = fp / 20;
-    const r = computeLosses({ durationsH: [tp * 0.999, 3 - tp * 0.999], depthsMm: [20 * tp * 0.999, 20 * (3 - tp * 0.999)] }, horton(true));
+    const r = computeLosses(
+      { durationsH: [tp * 0.999, 3 - tp * 0.999], depthsMm: [20 * tp * 0.999, 20 * (3 - tp * 0.999)] },
+      horton(true),
+    );
     expect(r.excessMm[0]).toBe(0);
     expectClose(r.totalLossMm, hortonCumulativeMm(60, 8, 3, tauP + 3 - tp), 1e-12);
   });

@@ -82,11 +82,15 @@ describe('Horton, Green–Ampt and curve number', () => {
 
   it('give exactly zero excess for a dry storm', () => {
     fc.assert(
-      fc.property(fc.array(fc.double({ min: 0.01, max: 5, noNaN: true }), { minLength: 1, maxLength: 20 }), every, (durationsH, method) => {
-        const r = computeLosses({ durationsH, depthsMm: durationsH.map(() => 0) }, method);
-        expect(r.totalExcessMm).toBe(0);
-        expect(r.totalLossMm).toBe(0);
-      }),
+      fc.property(
+        fc.array(fc.double({ min: 0.01, max: 5, noNaN: true }), { minLength: 1, maxLength: 20 }),
+        every,
+        (durationsH, method) => {
+          const r = computeLosses({ durationsH, depthsMm: durationsH.map(() => 0) }, method);
+          expect(r.totalExcessMm).toBe(0);
+          expect(r.totalLossMm).toBe(0);
+        },
+      ),
       { numRuns: 100 },
     );
   });

@@ -23,7 +23,9 @@ describe('every loss method', () => {
           expect(Math.abs(p - l - e)).toBeLessThanOrEqual(1e-9 * Math.max(p, 1e-300));
         }
         const totalRain = storm.depthsMm.reduce((a, b) => a + b, 0);
-        expect(Math.abs(totalRain - r.totalLossMm - r.totalExcessMm)).toBeLessThanOrEqual(1e-9 * Math.max(totalRain, 1e-9));
+        expect(Math.abs(totalRain - r.totalLossMm - r.totalExcessMm)).toBeLessThanOrEqual(
+          1e-9 * Math.max(totalRain, 1e-9),
+        );
         expect(r.runoffFraction).toBeGreaterThanOrEqual(0);
         expect(r.runoffFraction).toBeLessThanOrEqual(1 + 1e-12);
       }),
@@ -40,7 +42,9 @@ describe('every loss method', () => {
         }),
         ({ storm, method }) => {
           const r = computeLosses(storm, method);
-          expect([r.rainMm, r.totalLossMm, r.totalExcessMm, r.runoffFraction, r.peakExcessMmH].every(Number.isFinite)).toBe(true);
+          expect(
+            [r.rainMm, r.totalLossMm, r.totalExcessMm, r.runoffFraction, r.peakExcessMmH].every(Number.isFinite),
+          ).toBe(true);
           expect(r.totalExcessMm).toBe(0);
         },
       ),
@@ -73,14 +77,19 @@ describe('constant, initial–continuing and proportional losses', () => {
 
   it('give less excess for a higher loss parameter (monotone response)', () => {
     fc.assert(
-      fc.property(stormArb(), fc.double({ min: 0, max: 50, noNaN: true }), fc.double({ min: 0, max: 50, noNaN: true }), (storm, a, b) => {
-        const [lo, hi] = a < b ? [a, b] : [b, a];
-        const e = (rate: number): number => computeLosses(storm, { kind: 'constant', rateMmH: rate }).totalExcessMm;
-        expect(e(hi)).toBeLessThanOrEqual(e(lo) + 1e-12);
-        const il = (mm: number): number =>
-          computeLosses(storm, { kind: 'initial-continuing', initialMm: mm, rateMmH: 1 }).totalExcessMm;
-        expect(il(hi)).toBeLessThanOrEqual(il(lo) + 1e-9);
-      }),
+      fc.property(
+        stormArb(),
+        fc.double({ min: 0, max: 50, noNaN: true }),
+        fc.double({ min: 0, max: 50, noNaN: true }),
+        (storm, a, b) => {
+          const [lo, hi] = a < b ? [a, b] : [b, a];
+          const e = (rate: number): number => computeLosses(storm, { kind: 'constant', rateMmH: rate }).totalExcessMm;
+          expect(e(hi)).toBeLessThanOrEqual(e(lo) + 1e-12);
+          const il = (mm: number): number =>
+            computeLosses(storm, { kind: 'initial-continuing', initialMm: mm, rateMmH: 1 }).totalExcessMm;
+          expect(il(hi)).toBeLessThanOrEqual(il(lo) + 1e-9);
+        },
+      ),
     );
   });
 });

@@ -1,7 +1,11 @@
 import { describe, expect, it } from 'vitest';
 import { barsPath } from '../../../src/ui/chart/bar-path';
 
-const subpaths = (d: string): string[] => d.split('M').filter(Boolean).map((p) => `M${p}`);
+const subpaths = (d: string): string[] =>
+  d
+    .split('M')
+    .filter(Boolean)
+    .map((p) => `M${p}`);
 
 describe('bars as one path', () => {
   it('a wide bar is a closed rectangle from the baseline to its top, with a hairline gap', () => {

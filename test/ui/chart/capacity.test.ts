@@ -8,7 +8,10 @@ const frame = chartFrame(storm, 800, 300, 'si');
 
 /** The path's points, px (d3-shape writes them to three decimals). */
 const points = (d: string | null): [number, number][] =>
-  (d ?? '').replace(/^M/, '').split('L').map((p) => p.split(',').map(Number) as [number, number]);
+  (d ?? '')
+    .replace(/^M/, '')
+    .split('L')
+    .map((p) => p.split(',').map(Number) as [number, number]);
 
 describe('capacity curves through the storm', () => {
   it('Horton from the storm start follows the core’s capacity at clock time', () => {

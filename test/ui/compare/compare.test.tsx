@@ -66,7 +66,9 @@ describe('comparing pinned scenarios', () => {
       actions.setName('Changed after pinning');
     });
     expect(text(row('Rainfall depth')[0])).toBe(mm(20));
-    expect(within(table()).getByRole('columnheader', { name: '1 Four bars Constant loss rate (φ-index)' })).toBeInTheDocument();
+    expect(
+      within(table()).getByRole('columnheader', { name: '1 Four bars Constant loss rate (φ-index)' }),
+    ).toBeInTheDocument();
   });
 
   it('draws the small charts on one scale: the same time and intensity axes for every pin', async () => {
@@ -101,7 +103,9 @@ describe('comparing pinned scenarios', () => {
     for (let i = 0; i < 4; i++) await pin(user);
     expect(screen.getByText('4 of 4 pinned')).toBeInTheDocument();
     await pin(user);
-    expect(screen.getByRole('alert', { name: MESSAGE })).toHaveTextContent('4 scenarios are pinned already; unpin one to pin another.');
+    expect(screen.getByRole('alert', { name: MESSAGE })).toHaveTextContent(
+      '4 scenarios are pinned already; unpin one to pin another.',
+    );
     const unpins = screen.getAllByRole('button', { name: 'Unpin Four bars' });
     await user.click(unpins[0] as HTMLElement);
     expect(screen.getByText('3 of 4 pinned')).toBeInTheDocument();
@@ -115,17 +119,23 @@ describe('comparing pinned scenarios', () => {
     await pin(first.user);
     cleanup();
     const again = renderTools({ storage, fallback: { ...FOUR_BARS, units: 'si' } as Scenario });
-    expect(within(table()).getByRole('columnheader', { name: `1 ${SHARED.name} Horton infiltration` })).toBeInTheDocument();
+    expect(
+      within(table()).getByRole('columnheader', { name: `1 ${SHARED.name} Horton infiltration` }),
+    ).toBeInTheDocument();
     // The pin was made in US units; it is shown in the screen's SI units.
     expect(text(row('Rainfall depth')[0])).toBe(mm(30.8));
     void again;
   });
 
   it('damaged pins in the browser are set aside and reported, and pinning still works', async () => {
-    const storage = memoryStorage({ [PINS_KEY]: '{"$format":"raincut-pins","version":1,"pins":[{"id":"p1","pinnedAt":"x","scenario":{"version":2}}]}' });
+    const storage = memoryStorage({
+      [PINS_KEY]: '{"$format":"raincut-pins","version":1,"pins":[{"id":"p1","pinnedAt":"x","scenario":{"version":2}}]}',
+    });
     const { user } = renderTools({ storage });
     const alert = screen.getByRole('alert');
-    expect(alert).toHaveTextContent(/Part of the pinned scenarios was damaged and left out; the list as it was is kept under browser storage key "raincut\.pins\.damaged\./);
+    expect(alert).toHaveTextContent(
+      /Part of the pinned scenarios was damaged and left out; the list as it was is kept under browser storage key "raincut\.pins\.damaged\./,
+    );
     expect(alert).toHaveTextContent('pins[0]: the pinned scenario was left out');
     const aside = [...storage.data.keys()].find((k) => k.startsWith(`${PINS_KEY}.damaged.`));
     expect(aside).toBeDefined();

@@ -38,13 +38,18 @@ describe('the pin board', () => {
   it(`holds at most ${MAX_PINS}`, () => {
     const board = createPinBoard(memoryStorage(), { now: NOW });
     for (let i = 0; i < MAX_PINS; i++) expect(board.pin(FOUR_BARS).ok).toBe(true);
-    expect(board.pin(FOUR_BARS)).toEqual({ ok: false, message: `${MAX_PINS} scenarios are pinned already; unpin one to pin another.` });
+    expect(board.pin(FOUR_BARS)).toEqual({
+      ok: false,
+      message: `${MAX_PINS} scenarios are pinned already; unpin one to pin another.`,
+    });
   });
 
   it('a list that is not JSON is set aside as it was and a fresh one started', () => {
     const storage = memoryStorage({ [PINS_KEY]: '{"$format":"raincut-pins",' });
     const board = createPinBoard(storage, { now: NOW });
-    expect(board.getState().problems[0]?.message).toMatch(/^The pinned scenarios could not be read \(it is not valid JSON/);
+    expect(board.getState().problems[0]?.message).toMatch(
+      /^The pinned scenarios could not be read \(it is not valid JSON/,
+    );
     expect(storage.data.get(`${PINS_KEY}.damaged.2026-03-01T10:00:00.000Z`)).toBe('{"$format":"raincut-pins",');
     expect(board.pin(FOUR_BARS).ok).toBe(true);
   });

@@ -37,18 +37,24 @@ describe('the design storm view', () => {
     expect(total('Rainfall depth')).toBe(`${formatValue(r.rainMm)} mm`);
     expect(total('Excess depth')).toBe(`${formatValue(r.totalExcessMm)} mm`);
     expect(total('Runoff fraction')).toBe(`${formatValue(r.runoffFraction * 100)} %`);
-    expect(screen.getByRole('combobox', { name: 'Loss to apply' })).toHaveDisplayValue(/Design value from the events \(Loss rate φ 12 mm\/h\)/);
+    expect(screen.getByRole('combobox', { name: 'Loss to apply' })).toHaveDisplayValue(
+      /Design value from the events \(Loss rate φ 12 mm\/h\)/,
+    );
   });
 
   it('names the field in its messages and keeps what was typed', async () => {
     const { user } = await openDesign();
     const c = await retype(user, 'c', '1.5');
-    expect(screen.getByRole('alert')).toHaveTextContent(/^c: The IDF exponent c must be greater than 0 and at most 1 \(got 1.5\)/);
+    expect(screen.getByRole('alert')).toHaveTextContent(
+      /^c: The IDF exponent c must be greater than 0 and at most 1 \(got 1.5\)/,
+    );
     expect(c).toHaveAttribute('aria-invalid', 'true');
     expect(c).toHaveValue('1.5');
     await retype(user, 'c', '0.75');
     await retype(user, 'Time step (min)', '7');
-    expect(screen.getByRole('alert')).toHaveTextContent(/^Time step: The storm duration \(2 h\) is not a whole number of time steps/);
+    expect(screen.getByRole('alert')).toHaveTextContent(
+      /^Time step: The storm duration \(2 h\) is not a whole number of time steps/,
+    );
     await retype(user, 'Time step (min)', '');
     expect(screen.getByRole('alert')).toHaveTextContent('Time step: Enter a number.');
   });
@@ -59,7 +65,9 @@ describe('the design storm view', () => {
     const table = screen.getByRole('textbox', { name: 'IDF table' });
     await user.clear(table);
     await user.type(table, '10 90{enter}30 5x{enter}120 20');
-    expect(screen.getByRole('alert')).toHaveTextContent('IDF table, row 2, column 2 (intensity): “5x” is not a number.');
+    expect(screen.getByRole('alert')).toHaveTextContent(
+      'IDF table, row 2, column 2 (intensity): “5x” is not a number.',
+    );
     expect(table).toHaveValue('10 90\n30 5x\n120 20');
     await user.clear(table);
     await user.type(table, '10 90{enter}30 52{enter}60 33{enter}120 20');
@@ -77,7 +85,9 @@ describe('the design storm view', () => {
     expect(total('Rainfall depth')).toBe('45 mm');
     // No events in FOUR_BARS: the workbench's method (φ = 8 mm/h) is applied, and says so.
     expect(screen.getByText(/No design value yet/)).toBeInTheDocument();
-    expect(total('Excess depth')).toBe(`${formatValue(computeLosses(storm, { kind: 'constant', rateMmH: 8 }).totalExcessMm)} mm`);
+    expect(total('Excess depth')).toBe(
+      `${formatValue(computeLosses(storm, { kind: 'constant', rateMmH: 8 }).totalExcessMm)} mm`,
+    );
     await user.click(screen.getByRole('button', { name: 'Put the design storm on the workbench' }));
     expect(scenario().storm.depthsMm).toHaveLength(12);
     expect(scenario().storm.depthsMm.reduce((a, b) => a + b, 0)).toBeCloseTo(45, 9);

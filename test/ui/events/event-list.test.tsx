@@ -4,8 +4,10 @@ import { describe, expect, it } from 'vitest';
 import { renderWorkbench } from '../render';
 import { FOUR_BARS } from '../store/fixtures';
 
-const openEvents = async (user: ReturnType<typeof renderWorkbench>['user']) => user.click(screen.getByRole('tab', { name: 'Event set' }));
-const names = (scenario: ReturnType<ReturnType<typeof renderWorkbench>['scenario']>) => scenario.eventSet.events.map((e) => e.name);
+const openEvents = async (user: ReturnType<typeof renderWorkbench>['user']) =>
+  user.click(screen.getByRole('tab', { name: 'Event set' }));
+const names = (scenario: ReturnType<ReturnType<typeof renderWorkbench>['scenario']>) =>
+  scenario.eventSet.events.map((e) => e.name);
 
 describe('the event list', () => {
   it('opens on the workbench; the event set is a tab of its own', async () => {

@@ -25,13 +25,17 @@ describe('fit all events', () => {
     expect(rowOf(table, 'Small \\(invented\\)')).toHaveTextContent('Small (invented)20 mm4 mm20 %12 mm/h');
     expect(rowOf(table, 'Middle \\(invented\\)')).toHaveTextContent('8 mm40 %8 mm/h');
     expect(rowOf(table, 'Dry \\(invented\\)')).toHaveTextContent('2 mm10 %16 mm/h');
-    for (const [mm, phi] of [[4, 12], [8, 8], [2, 16]] as const) {
+    for (const [mm, phi] of [
+      [4, 12],
+      [8, 8],
+      [2, 16],
+    ] as const) {
       const alone = calibrate(FOUR_EVENTS.storm, FOUR_EVENTS.method, 'rateMmH', mm);
       expect(alone.ok && alone.value).toBeCloseTo(phi, 9);
     }
   });
 
-  it('marks the event without an answer and says why, in calibrate\'s words', async () => {
+  it("marks the event without an answer and says why, in calibrate's words", async () => {
     await openFits();
     const table = screen.getByRole('table', { name: 'Fitted loss rate φ for each event' });
     const wet = rowOf(table, 'Too wet \\(invented\\)');
@@ -58,7 +62,7 @@ describe('fit all events', () => {
     expect(within(figure).getByRole('img')).toHaveAccessibleName(/the design value 12 mm\/h is dashed/);
   });
 
-  it('shows each event\'s runoff and error with the median, and new errors when the smallest is picked', async () => {
+  it("shows each event's runoff and error with the median, and new errors when the smallest is picked", async () => {
     const { user, scenario } = await openFits();
     const table = screen.getByRole('table', { name: "Each event's runoff with the design value" });
     // φ = 12: only the 20 mm/h bar runs off, (20 − 12) × 0.5 = 4 mm.
@@ -74,7 +78,7 @@ describe('fit all events', () => {
     expect(screen.getByRole('status')).toHaveTextContent('Design loss rate φ: 8 mm/h');
   });
 
-  it('takes a design value of the user\'s own, and keeps bad text with a message', async () => {
+  it("takes a design value of the user's own, and keeps bad text with a message", async () => {
     const { user, scenario } = await openFits();
     const own = screen.getByRole('textbox', { name: /Own design value/ });
     await user.clear(own);

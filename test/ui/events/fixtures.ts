@@ -22,7 +22,12 @@ const event = (id: string, name: string, mm: number): SetEvent => ({
 export const FOUR_EVENTS: Scenario = {
   ...FOUR_BARS,
   eventSet: {
-    events: [event('e1', 'Small (invented)', 4), event('e2', 'Middle (invented)', 8), event('e3', 'Dry (invented)', 2), event('e4', 'Too wet (invented)', 25)],
+    events: [
+      event('e1', 'Small (invented)', 4),
+      event('e2', 'Middle (invented)', 8),
+      event('e3', 'Dry (invented)', 2),
+      event('e4', 'Too wet (invented)', 25),
+    ],
     activeId: null,
     parameter: null,
     designPick: 'median',

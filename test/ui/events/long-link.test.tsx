@@ -13,7 +13,12 @@ import { memoryStorage } from '../store/fixtures';
 function renderWith(scenario: ReturnType<typeof withSet>) {
   const writeText = vi.fn(async (_text: string) => {});
   const saveFile = vi.fn((_blob: Blob, _name: string) => {});
-  const services = browserServices({ storage: memoryStorage(), clipboard: { writeText }, saveFile, pageAddress: () => 'https://example.invalid/raincut/' });
+  const services = browserServices({
+    storage: memoryStorage(),
+    clipboard: { writeText },
+    saveFile,
+    pageAddress: () => 'https://example.invalid/raincut/',
+  });
   render(<App store={createWorkbenchStore(scenario)} services={services} />);
   return { writeText, saveFile, user: userEvent.setup() };
 }
@@ -26,7 +31,9 @@ describe('Copy link with a large event set', () => {
     const { writeText, saveFile, user } = renderWith(scenario);
     await user.click(screen.getByRole('button', { name: 'Copy link' }));
     expect(writeText).not.toHaveBeenCalled();
-    expect(screen.getByText(/most of it the 10 events of the event set: more than the 8,000 that can be sent reliably/)).toBeInTheDocument();
+    expect(
+      screen.getByText(/most of it the 10 events of the event set: more than the 8,000 that can be sent reliably/),
+    ).toBeInTheDocument();
     await user.click(screen.getByRole('button', { name: 'Save as file instead' }));
     expect(saveFile).toHaveBeenCalledTimes(1);
     await user.click(screen.getByRole('button', { name: 'Copy the long link anyway' }));

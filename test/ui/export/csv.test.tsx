@@ -64,8 +64,12 @@ describe('bar table CSV', () => {
     expect(rows.map((r) => Number(r['Loss (mm)']))).toEqual([...core.lossMm]);
     expect(rows.map((r) => Number(r['Rainfall excess (mm)']))).toEqual([...core.excessMm]);
     expect(rows.map((r) => Number(r['Rainfall intensity (mm/h)']))).toEqual([4, 12, 20, 4]);
-    expect(rows.map((r) => Number(r['Start (h from storm start)']))).toEqual([...barEdgesH(FOUR_BARS.storm).slice(0, 4)]);
-    expect(screen.getByRole('status', { name: MESSAGE })).toHaveTextContent('Exported four-bars-bars.csv: 4 bars with loss and excess.');
+    expect(rows.map((r) => Number(r['Start (h from storm start)']))).toEqual([
+      ...barEdgesH(FOUR_BARS.storm).slice(0, 4),
+    ]);
+    expect(screen.getByRole('status', { name: MESSAGE })).toHaveTextContent(
+      'Exported four-bars-bars.csv: 4 bars with loss and excess.',
+    );
   });
 
   it('in US units the depths are inches, exactly the stored millimetres converted, with a clock column for a storm with a start', async () => {
@@ -90,14 +94,20 @@ describe('bar table CSV', () => {
       '2026-02-12 23:45',
       '2026-02-13 00:15',
     ]);
-    expect(rows.map((r) => Number(r['Rainfall depth (in)']))).toEqual(SHARED.storm.depthsMm.map((mm) => convertDepth(mm, 'mm', 'in')));
+    expect(rows.map((r) => Number(r['Rainfall depth (in)']))).toEqual(
+      SHARED.storm.depthsMm.map((mm) => convertDepth(mm, 'mm', 'in')),
+    );
     // Back to millimetres: the same bars, to the last few bits of a double.
     rows.forEach((r, k) => {
       const mm = convertDepth(Number(r['Rainfall depth (in)']), 'in', 'mm');
-      expect(Math.abs(mm - (SHARED.storm.depthsMm[k] as number))).toBeLessThanOrEqual(1e-12 * (SHARED.storm.depthsMm[k] as number));
+      expect(Math.abs(mm - (SHARED.storm.depthsMm[k] as number))).toBeLessThanOrEqual(
+        1e-12 * (SHARED.storm.depthsMm[k] as number),
+      );
     });
     const core = computeLosses(SHARED.storm, SHARED.method);
-    expect(rows.map((r) => Number(r['Rainfall excess (in)']))).toEqual([...core.excessMm].map((mm) => convertDepth(mm, 'mm', 'in')));
+    expect(rows.map((r) => Number(r['Rainfall excess (in)']))).toEqual(
+      [...core.excessMm].map((mm) => convertDepth(mm, 'mm', 'in')),
+    );
   });
 
   it('while kept matched, the table is computed with the fitted value the screen shows', async () => {
@@ -140,12 +150,17 @@ describe('bar table CSV', () => {
     // A hand-made bad parameter in the document (as an old file might carry) is refused by the core, not by the export.
     act(() =>
       view.store.setState((s) => {
-        const scenario = { ...s.scenario, method: { kind: 'green-ampt' as const, ksMmH: -1, suctionMm: 100, moistureDeficit: 0.3 } };
+        const scenario = {
+          ...s.scenario,
+          method: { kind: 'green-ampt' as const, ksMmH: -1, suctionMm: 100, moistureDeficit: 0.3 },
+        };
         return { scenario, history: { ...s.history, present: scenario } };
       }),
     );
     await view.user.click(screen.getByRole('button', { name: 'Export CSV' }));
-    expect(screen.getByRole('alert', { name: MESSAGE })).toHaveTextContent('No table was exported: the losses cannot be worked out.');
+    expect(screen.getByRole('alert', { name: MESSAGE })).toHaveTextContent(
+      'No table was exported: the losses cannot be worked out.',
+    );
     expect(view.saved).toEqual([]);
   });
 });

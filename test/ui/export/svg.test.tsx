@@ -34,7 +34,8 @@ describe('chart SVG', () => {
 
     // The page's class, role and focus hooks are gone; the chart's shapes are all there.
     for (const el of Array.from(root.querySelectorAll('*'))) {
-      for (const attr of ['class', 'role', 'tabindex', 'aria-label', 'aria-hidden', 'data-layer']) expect(el.hasAttribute(attr)).toBe(false);
+      for (const attr of ['class', 'role', 'tabindex', 'aria-label', 'aria-hidden', 'data-layer'])
+        expect(el.hasAttribute(attr)).toBe(false);
     }
     const live = document.querySelector('svg.chart__svg');
     expect(root.querySelectorAll('path')).toHaveLength(live?.querySelectorAll('path').length ?? -1);
@@ -61,7 +62,8 @@ describe('chart SVG', () => {
     expect(doc.querySelectorAll('pattern line')).toHaveLength(1);
     // The file has its own legend, in the method's words.
     const texts = Array.from(doc.querySelectorAll('text')).map((t) => t.textContent);
-    for (const label of ['Rainfall excess', 'Loss', 'Initial loss', 'Continuing loss rate']) expect(texts).toContain(label);
+    for (const label of ['Rainfall excess', 'Loss', 'Initial loss', 'Continuing loss rate'])
+      expect(texts).toContain(label);
     // The live chart's line group (three lines and its tag) is copied as drawn.
     expect(doc.querySelectorAll('line').length).toBeGreaterThan(3);
   });
@@ -70,7 +72,9 @@ describe('chart SVG', () => {
     const view = renderTools({ fallback: FOUR_BARS });
     document.querySelector('svg.chart__svg')?.classList.remove('chart__svg');
     await view.user.click(screen.getByRole('button', { name: 'Export SVG' }));
-    expect(screen.getByRole('alert', { name: MESSAGE })).toHaveTextContent('The chart was not exported: the chart is not on screen.');
+    expect(screen.getByRole('alert', { name: MESSAGE })).toHaveTextContent(
+      'The chart was not exported: the chart is not on screen.',
+    );
     expect(view.saved).toEqual([]);
   });
 

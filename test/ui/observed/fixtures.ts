@@ -16,7 +16,10 @@ export const TRIANGLE = {
 export const TRIANGLE_DIRECT_M3 = 0.5 * 6 * 3600 * 1.25;
 
 /** The same record as a gauge export might give it, pasted as text: elapsed hours and m³/s. */
-export const TRIANGLE_TEXT = ['Hours\tQ (m3/s)', ...TRIANGLE.timesH.map((t, k) => `${t}\t${TRIANGLE.dischargeM3s[k]}`)].join('\n');
+export const TRIANGLE_TEXT = [
+  'Hours\tQ (m3/s)',
+  ...TRIANGLE.timesH.map((t, k) => `${t}\t${TRIANGLE.dischargeM3s[k]}`),
+].join('\n');
 
 /** FOUR_BARS with the triangle record under a straight-line separation ending at 7 h. */
 export const WITH_TRIANGLE: Scenario = {

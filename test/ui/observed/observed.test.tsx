@@ -32,7 +32,15 @@ const mm = (v: number): string => `${formatValue(v)} mm`;
 
 // jsdom lays nothing out: the chart keeps its fallback width and the svg sits at x = 0,
 // so a pointer's clientX is the chart's own x. FOUR_BARS rains for 2 h; the record runs 12 h.
-const frame = hydrographFrame(FOUR_BARS.storm, 1.75, 0, 880, HYDROGRAPH_HEIGHT, 'si', sharedTimeSpanH(2, { firstH: 0, lastH: 12 }));
+const frame = hydrographFrame(
+  FOUR_BARS.storm,
+  1.75,
+  0,
+  880,
+  HYDROGRAPH_HEIGHT,
+  'si',
+  sharedTimeSpanH(2, { firstH: 0, lastH: 12 }),
+);
 
 async function pasteRecord(user: ReturnType<typeof renderWorkbench>['user'], text: string) {
   await user.click(screen.getByRole('button', { name: 'Paste streamflow…' }));
@@ -66,12 +74,18 @@ describe('bringing a streamflow record in', () => {
     const { user, scenario } = renderWorkbench(WITH_TRIANGLE);
     const bad = 'Time\tQ (m3/s)\n14:00\t0.5\n14:15\tabc\n14:30\t-4\n14:20\t2\n14:45\t1';
     const dialog = await pasteRecord(user, bad);
-    await waitFor(() => expect(within(dialog).getByRole('status')).toHaveTextContent(/3 problems to fix before importing\.$/));
+    await waitFor(() =>
+      expect(within(dialog).getByRole('status')).toHaveTextContent(/3 problems to fix before importing\.$/),
+    );
     const table = within(dialog).getByRole('table', { name: '3 problems to fix' });
     const rows = within(table)
       .getAllByRole('row')
       .slice(1)
-      .map((r) => within(r).getAllByRole('cell').map((c) => c.textContent));
+      .map((r) =>
+        within(r)
+          .getAllByRole('cell')
+          .map((c) => c.textContent),
+      );
     expect(rows.map((r) => r.slice(0, 4))).toEqual([
       ['3', '2', 'discharge', 'abc'],
       ['4', '2', 'discharge', '-4'],
@@ -101,7 +115,9 @@ describe('bringing a streamflow record in', () => {
     await user.selectOptions(within(again).getByLabelText('Times are'), 'elapsed-min');
     await user.selectOptions(within(again).getByLabelText('Discharge unit'), 'ft3/s');
     await user.click(within(again).getByRole('button', { name: 'Use this record' }));
-    expect(flowOf(scenario()).dischargeM3s).toEqual([500, 1250, 2000, 800].map((q) => convertDischarge(q, 'ft3/s', 'm3/s')));
+    expect(flowOf(scenario()).dischargeM3s).toEqual(
+      [500, 1250, 2000, 800].map((q) => convertDischarge(q, 'ft3/s', 'm3/s')),
+    );
   });
 
   it('opens a record from a file into the same preview', async () => {
@@ -116,7 +132,10 @@ describe('bringing a streamflow record in', () => {
 
   it('says why a file cannot be read and opens nothing', async () => {
     const { user, scenario } = renderWorkbench();
-    await user.upload(screen.getByLabelText('Streamflow file to open'), new File(['\u0000\u0001'], 'logger.txt', { type: 'text/plain' }));
+    await user.upload(
+      screen.getByLabelText('Streamflow file to open'),
+      new File(['\u0000\u0001'], 'logger.txt', { type: 'text/plain' }),
+    );
     expect(await screen.findByRole('alert')).toHaveTextContent(
       'logger.txt is not a text file; save the streamflow record as .csv or .txt and open that.',
     );
@@ -140,11 +159,14 @@ describe('separating baseflow', () => {
   it('the method picker and its fields come from the method table, and each method keeps its values', async () => {
     const { user, scenario } = renderWorkbench(WITH_TRIANGLE);
     const picker = screen.getByLabelText('Baseflow method');
-    expect(within(picker).getAllByRole('option').map((o) => o.textContent)).toEqual(
-      Object.values(BASEFLOW_METHODS).map((m) => m.label),
-    );
+    expect(
+      within(picker)
+        .getAllByRole('option')
+        .map((o) => o.textContent),
+    ).toEqual(Object.values(BASEFLOW_METHODS).map((m) => m.label));
     await user.selectOptions(picker, 'lyne-hollick');
-    for (const p of BASEFLOW_METHODS['lyne-hollick'].params) expect(screen.getByLabelText(new RegExp(`^${p.label}`))).toBeInTheDocument();
+    for (const p of BASEFLOW_METHODS['lyne-hollick'].params)
+      expect(screen.getByLabelText(new RegExp(`^${p.label}`))).toBeInTheDocument();
     expect(screen.getByLabelText(/^Filter parameter α/)).toHaveValue('0.925');
     expect(screen.getByLabelText(/^Passes/)).toHaveValue('3');
     expect(screen.queryByRole('slider', { name: 'End of direct runoff' })).not.toBeInTheDocument();
@@ -152,7 +174,9 @@ describe('separating baseflow', () => {
     expect(screen.getByLabelText('Direct runoff volume')).toHaveTextContent(m3(filtered.directVolumeM3));
     await user.clear(screen.getByLabelText(/^Passes/));
     await user.type(screen.getByLabelText(/^Passes/), '1');
-    expect(screen.getByLabelText('Direct runoff volume')).toHaveTextContent(m3(separate({ kind: 'lyne-hollick', alpha: 0.925, passes: 1 }).directVolumeM3));
+    expect(screen.getByLabelText('Direct runoff volume')).toHaveTextContent(
+      m3(separate({ kind: 'lyne-hollick', alpha: 0.925, passes: 1 }).directVolumeM3),
+    );
     await user.selectOptions(picker, 'straight-line');
     expect(flowOf(scenario()).baseflow).toEqual({ kind: 'straight-line', endTimeH: 7 });
     await user.selectOptions(picker, 'lyne-hollick');
@@ -169,11 +193,15 @@ describe('separating baseflow', () => {
     expect(end).toHaveAccessibleDescription(expect.stringContaining('“7x” is not a number.'));
     await user.clear(end);
     await user.type(end, '20');
-    expect(end).toHaveAccessibleDescription(expect.stringContaining('The end point (20 h) is after the last sample of the record (12 h).'));
+    expect(end).toHaveAccessibleDescription(
+      expect.stringContaining('The end point (20 h) is after the last sample of the record (12 h).'),
+    );
     expect(flowOf(scenario()).baseflow).toEqual({ kind: 'straight-line', endTimeH: 2 });
     const rise = screen.getByLabelText(/^Start of rise/);
     await user.type(rise, '0');
-    expect(rise).toHaveAccessibleDescription(expect.stringContaining('Start of rise must be a whole sample number, 1 or more (got 0).'));
+    expect(rise).toHaveAccessibleDescription(
+      expect.stringContaining('Start of rise must be a whole sample number, 1 or more (got 0).'),
+    );
   });
 
   it('counts the start of rise from 1, as the paste does', async () => {
@@ -181,8 +209,12 @@ describe('separating baseflow', () => {
     const rise = screen.getByLabelText(/^Start of rise/);
     await user.type(rise, '3');
     expect(flowOf(scenario()).baseflow).toEqual({ kind: 'straight-line', endTimeH: 7, riseIndex: 2 });
-    expect(rise).toHaveAccessibleDescription(expect.stringContaining('Sample 3 is at 2 h after the first sample, 1.125 m³/s.'));
-    expect(screen.getByLabelText('Direct runoff volume')).toHaveTextContent(m3(separate({ kind: 'straight-line', endTimeH: 7, riseIndex: 2 }).directVolumeM3));
+    expect(rise).toHaveAccessibleDescription(
+      expect.stringContaining('Sample 3 is at 2 h after the first sample, 1.125 m³/s.'),
+    );
+    expect(screen.getByLabelText('Direct runoff volume')).toHaveTextContent(
+      m3(separate({ kind: 'straight-line', endTimeH: 7, riseIndex: 2 }).directVolumeM3),
+    );
   });
 });
 
@@ -262,7 +294,9 @@ describe('the end point', () => {
     expect(flowOf(scenario()).baseflow).toEqual({ kind: 'straight-line' });
     expect(button).toHaveAttribute('aria-pressed', 'true');
     // For 1 km² N is 0.83 days, past the end of a 12-hour record: the core's message, and a handle to drag instead.
-    expect(screen.getByRole('alert')).toHaveTextContent(/^Baseflow cannot be separated: N = A\^0\.2 = 0\.827 days puts the end point at 22\.84 h/);
+    expect(screen.getByRole('alert')).toHaveTextContent(
+      /^Baseflow cannot be separated: N = A\^0\.2 = 0\.827 days puts the end point at 22\.84 h/,
+    );
     expect(screen.getByLabelText('Direct runoff volume')).toHaveTextContent('—');
     const handle = screen.getByRole('slider', { name: 'End of direct runoff' });
     expect(handle).toHaveAttribute('aria-valuenow', '12');
@@ -293,7 +327,9 @@ describe('use as observed runoff', () => {
     expect(screen.getByLabelText(/^Observed runoff/)).toHaveValue(formatField(half));
     const fit = calibrate(FOUR_BARS.storm, FOUR_BARS.method, 'rateMmH', half);
     expect(fit.ok).toBe(true);
-    expect(screen.getByRole('textbox', { name: /^Loss rate φ/ })).toHaveValue(formatField(fit.ok ? (fit.method as { rateMmH: number }).rateMmH : NaN));
+    expect(screen.getByRole('textbox', { name: /^Loss rate φ/ })).toHaveValue(
+      formatField(fit.ok ? (fit.method as { rateMmH: number }).rateMmH : NaN),
+    );
   });
 
   it('typing an observed runoff takes Matching back; pressing again keeps the depth shown', async () => {
@@ -332,9 +368,15 @@ describe('units and lining up', () => {
     const { user } = renderWorkbench(WITH_TRIANGLE);
     await user.click(screen.getByRole('radio', { name: 'US customary' }));
     const r = separate({ kind: 'straight-line', endTimeH: 7 });
-    expect(screen.getByLabelText('Direct runoff volume')).toHaveTextContent(`${formatValue(convertVolume(r.directVolumeM3, 'm3', 'acre-ft'))} acre-ft`);
-    expect(screen.getByLabelText('Direct runoff depth')).toHaveTextContent(`${formatValue((r.directDepthMm as number) / 25.4)} in`);
-    expect(screen.getByLabelText('Peak discharge')).toHaveTextContent(`${formatValue(convertDischarge(1.75, 'm3/s', 'ft3/s'))} ft³/s`);
+    expect(screen.getByLabelText('Direct runoff volume')).toHaveTextContent(
+      `${formatValue(convertVolume(r.directVolumeM3, 'm3', 'acre-ft'))} acre-ft`,
+    );
+    expect(screen.getByLabelText('Direct runoff depth')).toHaveTextContent(
+      `${formatValue((r.directDepthMm as number) / 25.4)} in`,
+    );
+    expect(screen.getByLabelText('Peak discharge')).toHaveTextContent(
+      `${formatValue(convertDischarge(1.75, 'm3/s', 'ft3/s'))} ft³/s`,
+    );
     expect(screen.getByRole('group', { name: 'Hydrograph' })).toHaveTextContent('Discharge (ft³/s)');
   });
 
@@ -346,7 +388,9 @@ describe('units and lining up', () => {
     expect(flowOf(scenario()).offsetH).toBe(-1.5);
     await user.selectOptions(screen.getByLabelText('Offset unit'), 'min');
     expect(screen.getByLabelText(/^Record start after storm start/)).toHaveValue('-90');
-    expect(screen.getByLabelText(/^Record start after storm start/)).toHaveAccessibleDescription(expect.stringContaining('1 h 30 min before the storm start'));
+    expect(screen.getByLabelText(/^Record start after storm start/)).toHaveAccessibleDescription(
+      expect.stringContaining('1 h 30 min before the storm start'),
+    );
     await user.clear(screen.getByLabelText(/^Record start after storm start/));
     await user.type(screen.getByLabelText(/^Record start after storm start/), '45');
     expect(flowOf(scenario()).offsetH).toBe(0.75);
@@ -360,7 +404,9 @@ describe('units and lining up', () => {
     };
     renderWorkbench(clocked);
     expect(screen.queryByLabelText(/^Record start after storm start/)).not.toBeInTheDocument();
-    expect(screen.getByText(/Lined up by clock time: the record’s first sample is 1 h before the storm start\./)).toBeInTheDocument();
+    expect(
+      screen.getByText(/Lined up by clock time: the record’s first sample is 1 h before the storm start\./),
+    ).toBeInTheDocument();
     expect(screen.getByLabelText('Time of peak')).toHaveTextContent('17:00 (14 Jul 2026, 3 h after the first sample)');
     expect(screen.getByRole('slider', { name: 'End of direct runoff' })).toHaveAttribute(
       'aria-valuetext',

@@ -92,7 +92,9 @@ describe('streamflow edits', () => {
     const store = createWorkbenchStore(big);
     const sep = store.derived.separation(big);
     expect(sep?.ok).toBe(false);
-    expect(sep && !sep.ok && sep.message).toMatch(/^N = A\^0\.2 = .* days puts the end point at .* h, after the last sample/);
+    expect(sep && !sep.ok && sep.message).toMatch(
+      /^N = A\^0\.2 = .* days puts the end point at .* h, after the last sample/,
+    );
   });
 
   it('switching methods remembers each one’s parameters', () => {
@@ -136,7 +138,12 @@ describe('the separated depth as the observed runoff', () => {
     actions.setAreaM2(2e6);
     expect(derived.target(store.getState().scenario)).toEqual({ ok: true, mm: (core.directDepthMm as number) / 2 });
     const rate = (derived.effectiveMethod(store.getState().scenario) as { rateMmH: number }).rateMmH;
-    const fit = calibrate(store.getState().scenario.storm, FOUR_BARS.method, 'rateMmH', (core.directDepthMm as number) / 2);
+    const fit = calibrate(
+      store.getState().scenario.storm,
+      FOUR_BARS.method,
+      'rateMmH',
+      (core.directDepthMm as number) / 2,
+    );
     expect(fit.ok && rate).toBe(fit.ok ? (fit.method as { rateMmH: number }).rateMmH : null);
     // The typed-in value is never rewritten while the link lasts.
     expect(store.getState().scenario.observed?.value).toBe(0);
@@ -148,7 +155,11 @@ describe('the separated depth as the observed runoff', () => {
       ok: false,
       message: 'Enter the catchment area to turn the separated direct runoff into a depth over the catchment.',
     });
-    const auto = withSeparationAsObserved(withAreaM2(withBaseflowParam(WITH_TRIANGLE, 'endTimeH', undefined), 0), true, 0);
+    const auto = withSeparationAsObserved(
+      withAreaM2(withBaseflowParam(WITH_TRIANGLE, 'endTimeH', undefined), 0),
+      true,
+      0,
+    );
     const t = createWorkbenchStore(auto).derived.target(auto);
     expect(t).toEqual({
       ok: false,
@@ -192,7 +203,11 @@ describe('the separated depth as the observed runoff', () => {
 
 describe('lining the record up with the storm', () => {
   it('uses the clocks when both have one, compared as written unless both name a zone', () => {
-    expect(alignRecord('2026-07-14T15:00', '2026-07-14T13:45:00', 9)).toEqual({ offsetH: -1.25, source: 'clocks', note: null });
+    expect(alignRecord('2026-07-14T15:00', '2026-07-14T13:45:00', 9)).toEqual({
+      offsetH: -1.25,
+      source: 'clocks',
+      note: null,
+    });
     expect(alignRecord('2026-07-14T15:00Z', '2026-07-15T01:00+10:00', 0).offsetH).toBe(0);
     const one = alignRecord('2026-07-14T15:00', '2026-07-14T16:00Z', 0);
     expect(one.offsetH).toBe(1);

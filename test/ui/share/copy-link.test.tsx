@@ -88,7 +88,11 @@ describe('Copy link', () => {
   });
 
   it('the length note warns when a link is long enough for mail programs to cut', () => {
-    expect(linkLengthText(535)).toBe('The link is 535 characters long and holds the whole scenario; nothing is sent to a server.');
-    expect(linkLengthText(LONG_LINK_CHARS + 1)).toMatch(/^The link is 2,001 characters long .* cut links longer than about 2,000 characters/);
+    expect(linkLengthText(535)).toBe(
+      'The link is 535 characters long and holds the whole scenario; nothing is sent to a server.',
+    );
+    expect(linkLengthText(LONG_LINK_CHARS + 1)).toMatch(
+      /^The link is 2,001 characters long .* cut links longer than about 2,000 characters/,
+    );
   });
 });

@@ -5,7 +5,10 @@ import { LIBRARY_KEY, createScenarioLibrary } from '../../../src/scenario';
 import { FOUR_BARS, memoryStorage } from '../store/fixtures';
 import { NOW, SHARED, renderTools } from './render-tools';
 
-const names = (storage: ReturnType<typeof memoryStorage>) => createScenarioLibrary(storage).list().entries.map((e) => e.scenario.name);
+const names = (storage: ReturnType<typeof memoryStorage>) =>
+  createScenarioLibrary(storage)
+    .list()
+    .entries.map((e) => e.scenario.name);
 
 async function openPanel(user: ReturnType<typeof renderTools>['user']) {
   const toggle = screen.getByRole('button', { name: 'Saved scenarios' });
@@ -73,7 +76,9 @@ describe('the saved list in this browser', () => {
     const panel = await openPanel(user);
     await user.click(within(panel).getByRole('button', { name: `Open ${SHARED.name}` }));
     expect(scenario()).toEqual(SHARED);
-    expect(within(panel).getByRole('status')).toHaveTextContent(`Opened “${SHARED.name}”. Undo brings back the scenario you had before.`);
+    expect(within(panel).getByRole('status')).toHaveTextContent(
+      `Opened “${SHARED.name}”. Undo brings back the scenario you had before.`,
+    );
 
     actions.setBarDepth(0, 9.75);
     await user.click(within(panel).getByRole('button', { name: `Update “${SHARED.name}”` }));
@@ -90,7 +95,9 @@ describe('the saved list in this browser', () => {
     const storage = memoryStorage({ [LIBRARY_KEY]: '{"$format":"raincut-library","version":1,"entries":[{"id":"s1"' });
     const { user } = renderTools({ storage });
     const panel = await openPanel(user);
-    expect(within(panel).getByRole('alert')).toHaveTextContent(/The saved list of scenarios was damaged and could not be read\. It is kept as it was under browser storage key "raincut\.library\.damaged\./);
+    expect(within(panel).getByRole('alert')).toHaveTextContent(
+      /The saved list of scenarios was damaged and could not be read\. It is kept as it was under browser storage key "raincut\.library\.damaged\./,
+    );
     const aside = [...storage.data.keys()].find((k) => k.startsWith(`${LIBRARY_KEY}.damaged.`));
     expect(aside && storage.data.get(aside)).toBe('{"$format":"raincut-library","version":1,"entries":[{"id":"s1"');
     await user.click(within(panel).getByRole('button', { name: 'Save current scenario to list' }));

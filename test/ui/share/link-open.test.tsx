@@ -45,14 +45,23 @@ describe('opening a share link', () => {
 
   it('Keep puts the user’s own scenario in the saved list first, then saves the shared one as current', async () => {
     const { storage, own } = usedBrowser();
-    const { user, scenario, calls, actions, link } = renderTools({ storage, fragment: `#${encodeScenarioLink(SHARED)}` });
+    const { user, scenario, calls, actions, link } = renderTools({
+      storage,
+      fragment: `#${encodeScenarioLink(SHARED)}`,
+    });
     act(() => actions.setBarDepth(1, 5.5));
     await user.click(screen.getByRole('button', { name: 'Keep the shared scenario' }));
     expect(JSON.parse(storage.data.get(STORAGE_KEY) as string)).toEqual(scenario());
     expect(scenario().storm.depthsMm[1]).toBe(5.5);
-    const listed = createScenarioLibrary(storage).list().entries.map((e) => e.scenario);
+    const listed = createScenarioLibrary(storage)
+      .list()
+      .entries.map((e) => e.scenario);
     expect(listed).toEqual([own]);
-    expect(screen.getByText(/is now your current scenario in this browser\. Your previous scenario “My own work” is in Saved scenarios\./)).toBeInTheDocument();
+    expect(
+      screen.getByText(
+        /is now your current scenario in this browser\. Your previous scenario “My own work” is in Saved scenarios\./,
+      ),
+    ).toBeInTheDocument();
     expect(calls.clearFragment).toBe(1);
     // From now on edits are saved as usual.
     act(() => actions.setName('Kept and edited'));
@@ -69,33 +78,50 @@ describe('opening a share link', () => {
     expect(storage.data.get(STORAGE_KEY)).toBe(text);
     expect(storage.data.has(LIBRARY_KEY)).toBe(false);
     expect(screen.getByRole('button', { name: 'Undo' })).toBeDisabled();
-    expect(screen.getByText(`Back to “My own work”. The shared scenario “${SHARED.name}” was not saved.`)).toBeInTheDocument();
+    expect(
+      screen.getByText(`Back to “My own work”. The shared scenario “${SHARED.name}” was not saved.`),
+    ).toBeInTheDocument();
     expect(calls.clearFragment).toBe(1);
   });
 
   it('in a browser with nothing saved, says so, and keeping simply saves the shared scenario', async () => {
     const storage = memoryStorage();
     const { user } = renderTools({ storage, fragment: encodeScenarioLink(SHARED) });
-    expect(screen.getByRole('region', { name: /^Shared scenario/ })).toHaveTextContent('Nothing is saved in this browser yet');
+    expect(screen.getByRole('region', { name: /^Shared scenario/ })).toHaveTextContent(
+      'Nothing is saved in this browser yet',
+    );
     await user.click(screen.getByRole('button', { name: 'Keep the shared scenario' }));
     expect(JSON.parse(storage.data.get(STORAGE_KEY) as string)).toEqual(SHARED);
     expect(storage.data.has(LIBRARY_KEY)).toBe(false);
   });
 
   const link = encodeScenarioLink(SHARED);
-  const tampered = encodeScenarioLink({ ...SHARED, storm: { ...SHARED.storm, depthsMm: [1, -4, 2, 2, 2, 2] } } as Scenario);
+  const tampered = encodeScenarioLink({
+    ...SHARED,
+    storm: { ...SHARED.storm, depthsMm: [1, -4, 2, 2, 2, 2] },
+  } as Scenario);
   it.each([
     ['a link with one character changed', damaged(link), 'its check sum does not match'],
     ['a truncated link', link.slice(0, Math.floor(link.length * 0.6)), 'The link is damaged'],
-    ['a link over the length limit', `rc1.${'A'.repeat(MAX_LINK_CHARS + 10)}`, `a scenario link may have at most ${MAX_LINK_CHARS}`],
-    ['a tampered link (correct check sum, impossible rain)', tampered, 'storm.depthsMm[1] (bar 2): must be a number ≥ 0'],
+    [
+      'a link over the length limit',
+      `rc1.${'A'.repeat(MAX_LINK_CHARS + 10)}`,
+      `a scenario link may have at most ${MAX_LINK_CHARS}`,
+    ],
+    [
+      'a tampered link (correct check sum, impossible rain)',
+      tampered,
+      'storm.depthsMm[1] (bar 2): must be a number ≥ 0',
+    ],
     ['a fragment that is not a scenario link', 'section-3', 'This is not a Raincut scenario link'],
   ])('%s says what was wrong and keeps the saved scenario', (_kind, fragment, why) => {
     const { storage, own, text } = usedBrowser();
     const { scenario, link: session, actions } = renderTools({ storage, fragment: `#${fragment}` });
     const alert = screen.getByRole('alert');
     expect(alert).toHaveTextContent('The shared link could not be opened.');
-    expect(alert).toHaveTextContent('Nothing was changed: “My own work” is on screen and your saved scenario is as it was.');
+    expect(alert).toHaveTextContent(
+      'Nothing was changed: “My own work” is on screen and your saved scenario is as it was.',
+    );
     expect(within(alert).getByRole('list', { name: 'What is wrong with the link' })).toHaveTextContent(why);
     expect(scenario()).toEqual(own);
     expect(storage.data.get(STORAGE_KEY)).toBe(text);
@@ -144,13 +170,17 @@ describe('opening a share link', () => {
     const { scenario } = renderTools({ storage, fragment: `#${encodeScenarioLink(own)}` });
     expect(scenario()).toEqual(own);
     expect(screen.queryByRole('region', { name: /^Shared scenario/ })).toBeNull();
-    expect(screen.getByText('The link holds “My own work” exactly as it is already saved in this browser.')).toBeInTheDocument();
+    expect(
+      screen.getByText('The link holds “My own work” exactly as it is already saved in this browser.'),
+    ).toBeInTheDocument();
   });
 
   it('where the browser cannot save, keeping only ends the question and says to save a file', async () => {
     const { user } = renderTools({ storage: null, fragment: `#${encodeScenarioLink(SHARED)}` });
     expect(screen.getByRole('region', { name: /^Shared scenario/ })).toHaveTextContent('This browser cannot save here');
     await user.click(screen.getByRole('button', { name: 'Keep the shared scenario' }));
-    expect(screen.getByText(/this browser does not allow saving here: save it as a file to keep it/)).toBeInTheDocument();
+    expect(
+      screen.getByText(/this browser does not allow saving here: save it as a file to keep it/),
+    ).toBeInTheDocument();
   });
 });

@@ -19,13 +19,17 @@ describe('scenario files', () => {
     expect(text).toContain(CAUTION_TEXT);
     const back = scenarioFromFileText(text);
     expect(back.ok && back.scenario).toEqual(SHARED);
-    expect(screen.getByRole('status', { name: MESSAGE })).toHaveTextContent('Saved as shared-larkspur-lane-culvert-12-feb-storm-invented.json.');
+    expect(screen.getByRole('status', { name: MESSAGE })).toHaveTextContent(
+      'Saved as shared-larkspur-lane-culvert-12-feb-storm-invented.json.',
+    );
   });
 
   it('a good file opens as one undoable step', async () => {
     const { user, scenario } = renderTools();
     await user.upload(screen.getByLabelText('Scenario file to open'), jsonFile(scenarioToFileText(SHARED)));
-    expect(await screen.findByRole('status', { name: MESSAGE })).toHaveTextContent(`Opened “${SHARED.name}” from colleague.json.`);
+    expect(await screen.findByRole('status', { name: MESSAGE })).toHaveTextContent(
+      `Opened “${SHARED.name}” from colleague.json.`,
+    );
     expect(scenario()).toEqual(SHARED);
     await user.click(screen.getByRole('button', { name: 'Undo' }));
     expect(scenario()).toEqual(FOUR_BARS);
@@ -38,11 +42,16 @@ describe('scenario files', () => {
     doc.storm.depthsMm[3] = -2;
     doc.method.kPerH = 0;
     doc.colour = 'blue';
-    await user.upload(screen.getByLabelText('Scenario file to open'), jsonFile(JSON.stringify(doc, null, 2), 'edited by hand.json'));
+    await user.upload(
+      screen.getByLabelText('Scenario file to open'),
+      jsonFile(JSON.stringify(doc, null, 2), 'edited by hand.json'),
+    );
     const alert = await screen.findByRole('alert', { name: MESSAGE });
     expect(alert).toHaveTextContent('edited by hand.json was not opened; the scenario on screen is unchanged.');
     const list = within(alert).getByRole('list', { name: 'Problems in edited by hand.json' });
-    const items = within(list).getAllByRole('listitem').map((li) => li.getAttribute('data-path'));
+    const items = within(list)
+      .getAllByRole('listitem')
+      .map((li) => li.getAttribute('data-path'));
     expect(items).toEqual(expect.arrayContaining(['storm.depthsMm[3]', 'method.kPerH', 'colour']));
     expect(list).toHaveTextContent('storm.depthsMm[3] (bar 4): must be a number ≥ 0');
     expect(scenario()).toEqual(FOUR_BARS);
@@ -62,7 +71,9 @@ describe('scenario files', () => {
   it('a JSON file of something else says it is not a scenario file', async () => {
     const { user, scenario } = renderTools();
     await user.upload(screen.getByLabelText('Scenario file to open'), jsonFile('{"rows": [1, 2, 3]}', 'other.json'));
-    expect(await screen.findByRole('alert', { name: MESSAGE })).toHaveTextContent('$format: is missing, so this JSON file is not a Raincut scenario');
+    expect(await screen.findByRole('alert', { name: MESSAGE })).toHaveTextContent(
+      '$format: is missing, so this JSON file is not a Raincut scenario',
+    );
     expect(scenario()).toEqual(FOUR_BARS);
   });
 });

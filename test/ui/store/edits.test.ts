@@ -59,7 +59,11 @@ describe('scenario edits', () => {
   });
 
   it('a whole storm from typed arrays is stored as plain lists, checked by the core', () => {
-    const s = withStorm(FOUR_BARS, { durationsH: new Float64Array([1, 1]), depthsMm: new Float64Array([3, 4]), startIso: '2026-01-02T03:04' });
+    const s = withStorm(FOUR_BARS, {
+      durationsH: new Float64Array([1, 1]),
+      depthsMm: new Float64Array([3, 4]),
+      startIso: '2026-01-02T03:04',
+    });
     expect(s.storm).toEqual({ durationsH: [1, 1], depthsMm: [3, 4], startIso: '2026-01-02T03:04' });
     expect(Array.isArray(s.storm.depthsMm)).toBe(true);
     expect(catchError(() => withStorm(FOUR_BARS, { durationsH: [1], depthsMm: [1, 2] })).field).toBe('depthsMm');
@@ -86,7 +90,11 @@ describe('scenario edits', () => {
     const icTuned = withParam(ic, 'initialMm', 4);
     const back = withMethodKind(icTuned, 'constant');
     expect(back.method).toEqual({ kind: 'constant', rateMmH: 6.5 });
-    expect(withMethodKind(back, 'initial-continuing').method).toEqual({ kind: 'initial-continuing', initialMm: 4, rateMmH: 2.5 });
+    expect(withMethodKind(back, 'initial-continuing').method).toEqual({
+      kind: 'initial-continuing',
+      initialMm: 4,
+      rateMmH: 2.5,
+    });
   });
 
   it('switching method moves the fitted parameter to one the new method has', () => {
@@ -103,7 +111,12 @@ describe('scenario edits', () => {
   });
 
   it('observed runoff is checked: finite, not negative, a parameter the method has', () => {
-    expect(withObserved(FOUR_BARS, { value: 3 }).observed).toEqual({ as: 'depth', value: 3, parameter: 'rateMmH', locked: false });
+    expect(withObserved(FOUR_BARS, { value: 3 }).observed).toEqual({
+      as: 'depth',
+      value: 3,
+      parameter: 'rateMmH',
+      locked: false,
+    });
     expect(catchError(() => withObserved(FOUR_BARS, { value: -1 })).field).toBe('observed.value');
     expect(catchError(() => withObserved(FOUR_BARS, { parameter: 'coefficient' })).field).toBe('observed.parameter');
     expect(withObserved(FOUR_BARS, null)).toBe(FOUR_BARS);

@@ -1,5 +1,14 @@
 import { describe, expect, it } from 'vitest';
-import { COALESCE_WINDOW_MS, HISTORY_LIMIT, createHistory, record, redo, redoLabel, undo, undoLabel } from '../../../src/store/history';
+import {
+  COALESCE_WINDOW_MS,
+  HISTORY_LIMIT,
+  createHistory,
+  record,
+  redo,
+  redoLabel,
+  undo,
+  undoLabel,
+} from '../../../src/store/history';
 
 describe('history', () => {
   it('an edit can be undone and redone, and says what it was', () => {

@@ -67,7 +67,10 @@ describe('restoring the saved scenario', () => {
       [{ ...FOUR_BARS, method: { kind: 'constant', rateMmH: -1 } }, /^method.rateMmH: Loss rate φ/],
       [{ ...FOUR_BARS, methodMemory: { magic: {} } }, /^methodMemory.magic: /],
       [{ ...FOUR_BARS, catchment: { name: 'x', areaM2: -5 } }, /^catchment.areaM2: /],
-      [{ ...FOUR_BARS, observed: { as: 'depth', value: 1, parameter: 'rateMmH', locked: 'yes' } }, /^observed.locked: /],
+      [
+        { ...FOUR_BARS, observed: { as: 'depth', value: 1, parameter: 'rateMmH', locked: 'yes' } },
+        /^observed.locked: /,
+      ],
       [{ ...FOUR_BARS, storm: { durationsH: [1], depthsMm: ['3'] } }, /^storm.depthsMm\[0\] \(bar 1\)/],
     ];
     for (const [value, message] of cases) {

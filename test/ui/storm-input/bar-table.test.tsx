@@ -31,7 +31,9 @@ describe('the bar table', () => {
   it('lists every bar with its start, duration, depth and the core’s loss and excess', () => {
     renderWorkbench();
     expect(grid()).toHaveAttribute('aria-rowcount', '5');
-    const headers = within(grid()).getAllByRole('columnheader').map((h) => h.textContent);
+    const headers = within(grid())
+      .getAllByRole('columnheader')
+      .map((h) => h.textContent);
     expect(headers).toEqual([
       'Bar',
       'Start (h:mm from start)',

@@ -120,7 +120,12 @@ describe('drawing bars on the chart', () => {
     // And it can be drawn on straight away.
     const empty = chartFrame(scenario().storm, 880, CHART_HEIGHT, 'si');
     const area = screen.getByRole('application', { name: /^Drawing area/ });
-    fireEvent.pointerDown(area, { pointerId: 1, button: 0, clientX: (empty.edgesPx[0] as number) + 5, clientY: empty.y(4) });
+    fireEvent.pointerDown(area, {
+      pointerId: 1,
+      button: 0,
+      clientX: (empty.edgesPx[0] as number) + 5,
+      clientY: empty.y(4),
+    });
     fireEvent.pointerUp(area, { pointerId: 1, clientX: (empty.edgesPx[0] as number) + 5, clientY: empty.y(4) });
     expect(scenario().storm.depthsMm[0]).toBe(1);
   });

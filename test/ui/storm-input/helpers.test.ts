@@ -2,7 +2,15 @@ import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
 import { barEdgesH, type Storm } from '../../../src/core';
 import { chartFrame } from '../../../src/ui/chart/frame';
-import { barClock, barTimeText, elapsedText, readBarTime, readStartText, shiftStartIso, startFieldText } from '../../../src/ui/storm-input/bar-times';
+import {
+  barClock,
+  barTimeText,
+  elapsedText,
+  readBarTime,
+  readStartText,
+  shiftStartIso,
+  startFieldText,
+} from '../../../src/ui/storm-input/bar-times';
 import { barAt, paintSegment, rateAtPointer } from '../../../src/ui/storm-input/draw/draw-math';
 import { readCell } from '../../../src/ui/storm-input/table/cell-edit';
 import { moveCell, scrollToShow, visibleRows } from '../../../src/ui/storm-input/table/grid-nav';
@@ -48,7 +56,10 @@ describe('bar times', () => {
   });
 
   it('refuse text that is not a time, saying how to write one', () => {
-    expect(readBarTime(barClock(undefined, 2), '1:75', 0)).toEqual({ ok: false, message: '“1:75” has 75 minutes; minutes run from 0 to 59.' });
+    expect(readBarTime(barClock(undefined, 2), '1:75', 0)).toEqual({
+      ok: false,
+      message: '“1:75” has 75 minutes; minutes run from 0 to 59.',
+    });
     expect(readBarTime(barClock(undefined, 2), 'soon', 0).ok).toBe(false);
     const clocked = readBarTime(barClock(storm.startIso, 2), '25:00', 0);
     expect(clocked.ok).toBe(false);
@@ -82,7 +93,10 @@ describe('reading a typed cell of the bar table', () => {
   });
 
   it('a bad depth or duration is refused with a message naming the bar', () => {
-    expect(readCell(elapsed, 1, 'depth', 'lots', 'si', clock)).toEqual({ ok: false, message: 'Bar 2 depth: “lots” is not a number.' });
+    expect(readCell(elapsed, 1, 'depth', 'lots', 'si', clock)).toEqual({
+      ok: false,
+      message: 'Bar 2 depth: “lots” is not a number.',
+    });
     expect(readCell(elapsed, 0, 'depth', '-1', 'si', clock)).toEqual({
       ok: false,
       message: 'Bar 1 depth: rainfall depth cannot be negative (got -1 mm).',
@@ -94,7 +108,11 @@ describe('reading a typed cell of the bar table', () => {
   });
 
   it('a duration is typed in minutes', () => {
-    expect(readCell(elapsed, 2, 'duration', '45', 'si', clock)).toEqual({ ok: true, kind: 'duration', durationH: 0.75 });
+    expect(readCell(elapsed, 2, 'duration', '45', 'si', clock)).toEqual({
+      ok: true,
+      kind: 'duration',
+      durationH: 0.75,
+    });
   });
 
   it('a new start moves the boundary with the bar before, as one named edit', () => {
@@ -110,7 +128,8 @@ describe('reading a typed cell of the bar table', () => {
     const edit = readCell(elapsed, 1, 'start', '1:10', 'si', clock);
     expect(edit).toEqual({
       ok: false,
-      message: 'Bar 2 start: must fall after bar 1 starts (0:00) and before bar 2 ends (1:00); change durations to move the later bars.',
+      message:
+        'Bar 2 start: must fall after bar 1 starts (0:00) and before bar 2 ends (1:00); change durations to move the later bars.',
     });
   });
 

@@ -43,7 +43,9 @@ describe('pasting rainfall', () => {
     expect(expected.ok).toBe(true);
     await waitFor(() => expect(within(dialog).getByText(expected.summary)).toBeInTheDocument());
     expect(expected.summary).toMatch(/^6 bars of 10 min from 10:00 .*depths in mm, total 13 mm/);
-    expect(within(dialog).getByRole('img', { name: /Sketch of the 6 bars read, highest intensity 30 mm\/h/ })).toBeInTheDocument();
+    expect(
+      within(dialog).getByRole('img', { name: /Sketch of the 6 bars read, highest intensity 30 mm\/h/ }),
+    ).toBeInTheDocument();
     const bars = within(dialog).getByRole('table', { name: 'Bars read' });
     const rows = within(bars).getAllByRole('row');
     expect(rows).toHaveLength(7);
@@ -64,7 +66,9 @@ describe('pasting rainfall', () => {
     expect(within(dialog).getByRole('combobox', { name: 'Unit' })).toHaveValue('mm');
 
     await user.selectOptions(within(dialog).getByRole('combobox', { name: 'Unit' }), 'in');
-    await waitFor(() => expect(within(dialog).getByText(/depths in in, total 13 in \(330\.2 mm\)/)).toBeInTheDocument());
+    await waitFor(() =>
+      expect(within(dialog).getByText(/depths in in, total 13 in \(330\.2 mm\)/)).toBeInTheDocument(),
+    );
 
     await user.selectOptions(within(dialog).getByRole('combobox', { name: 'Values are' }), 'intensity');
     expect(within(dialog).getByRole('combobox', { name: 'Unit' })).toHaveDisplayValue('in/h');
@@ -90,7 +94,9 @@ describe('pasting rainfall', () => {
     const step = within(dialog).getByRole('textbox', { name: 'Time step (min)' });
     await user.clear(step);
     await user.type(step, '5');
-    await waitFor(() => expect(within(dialog).getByText(/^4 bars of 5 min, depths in mm, total 10 mm/)).toBeInTheDocument());
+    await waitFor(() =>
+      expect(within(dialog).getByText(/^4 bars of 5 min, depths in mm, total 10 mm/)).toBeInTheDocument(),
+    );
     // A step that cannot be used is refused beside the field and the last good one stays in force.
     await user.clear(step);
     await user.type(step, '0');
@@ -155,8 +161,12 @@ describe('pasting rainfall', () => {
     expect(store.getState().history.past).toHaveLength(1);
     expect(store.getState().undoLabel).toBe('Paste rainfall');
     // Results come from the core for the new storm.
-    expect(screen.getByLabelText('Rainfall depth')).toHaveTextContent(mmText(coreTotals(storm, FOUR_BARS.method).rainMm));
-    expect(screen.getByLabelText('Excess depth')).toHaveTextContent(mmText(coreTotals(storm, FOUR_BARS.method).totalExcessMm));
+    expect(screen.getByLabelText('Rainfall depth')).toHaveTextContent(
+      mmText(coreTotals(storm, FOUR_BARS.method).rainMm),
+    );
+    expect(screen.getByLabelText('Excess depth')).toHaveTextContent(
+      mmText(coreTotals(storm, FOUR_BARS.method).totalExcessMm),
+    );
     // Focus is back on the button that opened the dialog.
     expect(screen.getByRole('button', { name: 'Paste rainfall…' })).toHaveFocus();
     await user.click(screen.getByRole('button', { name: 'Undo' }));
@@ -214,9 +224,13 @@ describe('pasting rainfall', () => {
     const file = new File(['minutes,depth mm\n0,1\n15,3\n30,2\n'], 'event-invented.csv', { type: 'text/csv' });
     await user.upload(screen.getByLabelText('Rainfall file to open'), file);
     const dialog = await screen.findByRole('dialog', { name: 'Paste rainfall' });
-    expect(within(dialog).getByRole('textbox', { name: 'Rainfall text' })).toHaveValue('minutes,depth mm\n0,1\n15,3\n30,2\n');
+    expect(within(dialog).getByRole('textbox', { name: 'Rainfall text' })).toHaveValue(
+      'minutes,depth mm\n0,1\n15,3\n30,2\n',
+    );
     expect(within(dialog).getByText('Read from event-invented.csv')).toBeInTheDocument();
-    await waitFor(() => expect(within(dialog).getByText(/^3 bars of 15 min, depths in mm, total 6 mm/)).toBeInTheDocument());
+    await waitFor(() =>
+      expect(within(dialog).getByText(/^3 bars of 15 min, depths in mm, total 6 mm/)).toBeInTheDocument(),
+    );
     await user.click(within(dialog).getByRole('button', { name: 'Use these bars' }));
     expect(scenario().storm.durationsH).toEqual([0.25, 0.25, 0.25]);
     expect(store.getState().undoLabel).toBe('Open rainfall file event-invented.csv');
@@ -227,10 +241,15 @@ describe('pasting rainfall', () => {
     const dialog = await openPaste(user);
     await pasteText(user, ONE_COLUMN);
     expect(within(dialog).getByRole('button', { name: 'Open a file…' })).toBeInTheDocument();
-    await user.upload(within(dialog).getByLabelText('Text file to read'), new File(['2\n4\n'], 'two-bars-invented.txt', { type: 'text/plain' }));
+    await user.upload(
+      within(dialog).getByLabelText('Text file to read'),
+      new File(['2\n4\n'], 'two-bars-invented.txt', { type: 'text/plain' }),
+    );
     expect(await within(dialog).findByText('Read from two-bars-invented.txt')).toBeInTheDocument();
     expect(within(dialog).getByRole('textbox', { name: 'Rainfall text' })).toHaveValue('2\n4\n');
-    await waitFor(() => expect(within(dialog).getByText(/^2 bars of 1 h, depths in mm, total 6 mm/)).toBeInTheDocument());
+    await waitFor(() =>
+      expect(within(dialog).getByText(/^2 bars of 1 h, depths in mm, total 6 mm/)).toBeInTheDocument(),
+    );
   });
 
   it('a file that is not text is refused with its name, and the storm is kept', async () => {
@@ -238,7 +257,9 @@ describe('pasting rainfall', () => {
     // A spreadsheet saved under a text name: zip bytes with NULs in them.
     const file = new File([new Uint8Array([0x50, 0x4b, 0x03, 0x04, 0x00, 0x00])], 'rain.txt', { type: 'text/plain' });
     await user.upload(screen.getByLabelText('Rainfall file to open'), file);
-    expect(await screen.findByRole('alert')).toHaveTextContent('rain.txt is not a text file; save the rainfall as .csv or .txt and open that.');
+    expect(await screen.findByRole('alert')).toHaveTextContent(
+      'rain.txt is not a text file; save the rainfall as .csv or .txt and open that.',
+    );
     expect(screen.queryByRole('dialog')).toBeNull();
     expect(scenario().storm).toBe(FOUR_BARS.storm);
   });

@@ -27,7 +27,9 @@ describe('storm tools', () => {
     await user.click(within(tools).getByRole('button', { name: 'Scale bars' }));
     expect(scenario().storm.depthsMm).toEqual([3, 9, 15, 3]);
     expect(store.getState().undoLabel).toBe('Scale storm by 1.5');
-    expect(within(tools).getByRole('status')).toHaveTextContent('Every bar multiplied by 1.5: the storm now holds 30 mm.');
+    expect(within(tools).getByRole('status')).toHaveTextContent(
+      'Every bar multiplied by 1.5: the storm now holds 30 mm.',
+    );
   });
 
   it('a factor that is not a number is refused beside its field and the storm is kept', async () => {
@@ -123,7 +125,9 @@ describe('storm tools', () => {
     const { user, scenario } = renderWorkbench({ ...FOUR_BARS, storm: { durationsH: [], depthsMm: [] } });
     const tools = await openTools(user);
     await user.click(within(tools).getByRole('button', { name: 'Scale bars' }));
-    expect(within(tools).getByRole('textbox', { name: 'Scale factor' })).toHaveAccessibleDescription('The storm has no bars yet.');
+    expect(within(tools).getByRole('textbox', { name: 'Scale factor' })).toHaveAccessibleDescription(
+      'The storm has no bars yet.',
+    );
     expect(within(tools).getByRole('button', { name: 'Clear storm' })).toBeDisabled();
     expect(scenario().storm).toEqual({ durationsH: [], depthsMm: [] });
   });

@@ -1,4 +1,10 @@
-import { applyFlowImport, guessFlowSettings, previewFlowImport, type FlowImportSettings, type FlowRecord } from '../../../io';
+import {
+  applyFlowImport,
+  guessFlowSettings,
+  previewFlowImport,
+  type FlowImportSettings,
+  type FlowRecord,
+} from '../../../io';
 import { isInputError } from '../../../core';
 import { useActions, useScenario, withStreamflowRecord } from '../../../store';
 import { ImportDialog, type ImportDraft, type ImportKind } from '../../import-kit';
@@ -76,7 +82,9 @@ export function FlowPasteDialog({ initial, onClose }: FlowPasteDialogProps) {
       keepText={currentText}
       onUse={(record, fileName) => {
         try {
-          actions.edit(fileName ? `Open streamflow file ${fileName}` : 'Paste streamflow', (s) => withStreamflowRecord(s, record));
+          actions.edit(fileName ? `Open streamflow file ${fileName}` : 'Paste streamflow', (s) =>
+            withStreamflowRecord(s, record),
+          );
         } catch (error) {
           // The import layer checks what the core checks; should they ever differ, say so and keep the dialog.
           if (!isInputError(error)) throw error;

@@ -22,7 +22,9 @@ export function FlowPreview({ record, units }: { record: FlowRecord; units: Unit
       .domain([timesH[0] as number, (timesH[n - 1] as number) > (timesH[0] as number) ? (timesH[n - 1] as number) : 1])
       .range([SKETCH_PAD.left, SKETCH_WIDTH - SKETCH_PAD.right]);
     const top = dischargeM3s[findPeakIndex(dischargeM3s)] as number;
-    const y = scaleLinear().domain([0, top > 0 ? top : 1]).range([SKETCH_HEIGHT - SKETCH_PAD.bottom, SKETCH_PAD.top]);
+    const y = scaleLinear()
+      .domain([0, top > 0 ? top : 1])
+      .range([SKETCH_HEIGHT - SKETCH_PAD.bottom, SKETCH_PAD.top]);
     return seriesPath(timesH, dischargeM3s, 0, x, y);
   }, [timesH, dischargeM3s, n]);
   const clock = recordClock(record.startIso, undefined, 0);

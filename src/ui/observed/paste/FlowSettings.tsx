@@ -1,5 +1,13 @@
 import type { FlowImportSettings } from '../../../io';
-import { ColumnOptions, columnNumbers, Select, SplitSettings, TimeSettings, type SettingsPanelProps, type TimeWords } from '../../import-kit';
+import {
+  ColumnOptions,
+  columnNumbers,
+  Select,
+  SplitSettings,
+  TimeSettings,
+  type SettingsPanelProps,
+  type TimeWords,
+} from '../../import-kit';
 
 /** A correction of the streamflow import's guesses. */
 export type FlowSettingsPatch = Partial<FlowImportSettings>;
@@ -16,21 +24,44 @@ const FLOW_TIME_WORDS: TimeWords = {
  * text splits, where the times and discharges are, the discharge unit.
  * Controls that do not apply to the present choice are left out.
  */
-export function FlowSettings({ settings: s, header, columnCount, rows, onChange }: SettingsPanelProps<FlowImportSettings>) {
+export function FlowSettings({
+  settings: s,
+  header,
+  columnCount,
+  rows,
+  onChange,
+}: SettingsPanelProps<FlowImportSettings>) {
   const columns = columnNumbers(s, columnCount);
 
   return (
     <div className="guesses">
       <SplitSettings settings={s} idPrefix="flow-paste" onChange={onChange} />
 
-      <TimeSettings settings={s} header={header} columns={columns} rows={rows} idPrefix="flow-paste" words={FLOW_TIME_WORDS} numberKind="elapsed-h" onChange={onChange} />
+      <TimeSettings
+        settings={s}
+        header={header}
+        columns={columns}
+        rows={rows}
+        idPrefix="flow-paste"
+        words={FLOW_TIME_WORDS}
+        numberKind="elapsed-h"
+        onChange={onChange}
+      />
 
       <fieldset className="guesses__group">
         <legend>Discharge</legend>
-        <Select label="Discharge column" value={String(s.valueColumn)} onChange={(v) => onChange({ valueColumn: Number(v) })}>
+        <Select
+          label="Discharge column"
+          value={String(s.valueColumn)}
+          onChange={(v) => onChange({ valueColumn: Number(v) })}
+        >
           <ColumnOptions columns={columns.filter((c) => c !== s.timeColumn)} header={header} />
         </Select>
-        <Select label="Discharge unit" value={s.unit} onChange={(v) => onChange({ unit: v as FlowImportSettings['unit'] })}>
+        <Select
+          label="Discharge unit"
+          value={s.unit}
+          onChange={(v) => onChange({ unit: v as FlowImportSettings['unit'] })}
+        >
           <option value="m3/s">m³/s</option>
           <option value="L/s">L/s</option>
           <option value="ft3/s">ft³/s</option>

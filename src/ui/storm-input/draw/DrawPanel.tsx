@@ -47,7 +47,9 @@ export function DrawPanel() {
     try {
       const fresh = emptyStorm(step.value / 60, count.value, storm.startIso);
       actions.setStorm(fresh, 'New empty storm');
-      setStatus(`${count.value} dry bars of ${formatValue(step.value)} min, ready to draw on. Undo brings back the storm before.`);
+      setStatus(
+        `${count.value} dry bars of ${formatValue(step.value)} min, ready to draw on. Undo brings back the storm before.`,
+      );
     } catch (error) {
       if (!isInputError(error)) throw error;
       if (error.field === 'count') setCountMessage(error.message);
@@ -72,7 +74,14 @@ export function DrawPanel() {
           <h3 id="new-storm-title" className="draw-panel__form-title">
             New empty storm
           </h3>
-          <ToolField id="new-storm-step" label="Bar duration" unit="min" text={stepText} onText={setStepText} message={stepMessage} />
+          <ToolField
+            id="new-storm-step"
+            label="Bar duration"
+            unit="min"
+            text={stepText}
+            onText={setStepText}
+            message={stepMessage}
+          />
           <ToolField
             id="new-storm-count"
             label="Number of bars"

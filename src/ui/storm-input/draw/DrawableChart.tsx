@@ -177,7 +177,11 @@ function DrawLayer({ wrapRef }: { wrapRef: RefObject<HTMLDivElement | null> }) {
     if (e.currentTarget.hasPointerCapture?.(e.pointerId)) e.currentTarget.releasePointerCapture(e.pointerId);
     const changed = keep && s.depthsMm.some((v, k) => v !== s.before[k]);
     if (changed) {
-      const drawn = { durationsH: s.durationsH, depthsMm: s.depthsMm, ...(storm.startIso === undefined ? {} : { startIso: storm.startIso }) };
+      const drawn = {
+        durationsH: s.durationsH,
+        depthsMm: s.depthsMm,
+        ...(storm.startIso === undefined ? {} : { startIso: storm.startIso }),
+      };
       actions.setStorm(drawn, 'Draw bars');
     }
     setVersion((v) => v + 1);
@@ -186,7 +190,9 @@ function DrawLayer({ wrapRef }: { wrapRef: RefObject<HTMLDivElement | null> }) {
   const s = stroke.current;
   const shown = s ? s.frame : frame;
   const at = s ? s.box : box;
-  const preview = s ? barsPath(s.frame.edgesPx, barTopsPx(s.frame, s.depthsMm, s.durationsH), s.frame.plot.bottom) : null;
+  const preview = s
+    ? barsPath(s.frame.edgesPx, barTopsPx(s.frame, s.depthsMm, s.durationsH), s.frame.plot.bottom)
+    : null;
 
   return (
     <div
@@ -228,7 +234,12 @@ function DrawLayer({ wrapRef }: { wrapRef: RefObject<HTMLDivElement | null> }) {
             </>
           ) : null}
           {n === 0 ? (
-            <text className="draw-layer__empty" x={(shown.plot.left + shown.plot.right) / 2} y={shown.plot.top + 28} textAnchor="middle">
+            <text
+              className="draw-layer__empty"
+              x={(shown.plot.left + shown.plot.right) / 2}
+              y={shown.plot.top + 28}
+              textAnchor="middle"
+            >
               Start a new empty storm to draw on
             </text>
           ) : null}

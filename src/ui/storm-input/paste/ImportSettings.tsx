@@ -1,5 +1,13 @@
 import type { RainImportSettings } from '../../../io';
-import { ColumnOptions, columnNumbers, Select, SplitSettings, TimeSettings, type SettingsPanelProps, type TimeWords } from '../../import-kit';
+import {
+  ColumnOptions,
+  columnNumbers,
+  Select,
+  SplitSettings,
+  TimeSettings,
+  type SettingsPanelProps,
+  type TimeWords,
+} from '../../import-kit';
 
 /** A change to the import settings as the user corrects a guess. */
 export type SettingsPatch = Partial<RainImportSettings>;
@@ -16,7 +24,13 @@ const RAIN_TIME_WORDS: TimeWords = {
  * how the text splits, where the times and values are, what the values mean.
  * Controls that do not apply to the present choice are left out.
  */
-export function ImportSettings({ settings: s, header, columnCount, rows, onChange }: SettingsPanelProps<RainImportSettings>) {
+export function ImportSettings({
+  settings: s,
+  header,
+  columnCount,
+  rows,
+  onChange,
+}: SettingsPanelProps<RainImportSettings>) {
   const columns = columnNumbers(s, columnCount);
   const hasTimes = s.timeColumn !== null && s.timeKind !== 'none';
   const rateUnit = s.valueKind === 'intensity';
@@ -25,7 +39,16 @@ export function ImportSettings({ settings: s, header, columnCount, rows, onChang
     <div className="guesses">
       <SplitSettings settings={s} idPrefix="paste" onChange={onChange} />
 
-      <TimeSettings settings={s} header={header} columns={columns} rows={rows} idPrefix="paste" words={RAIN_TIME_WORDS} numberKind="elapsed-min" onChange={onChange}>
+      <TimeSettings
+        settings={s}
+        header={header}
+        columns={columns}
+        rows={rows}
+        idPrefix="paste"
+        words={RAIN_TIME_WORDS}
+        numberKind="elapsed-min"
+        onChange={onChange}
+      >
         {hasTimes && s.valueKind !== 'cumulative' ? (
           <Select
             label="Each time marks"
@@ -41,10 +64,18 @@ export function ImportSettings({ settings: s, header, columnCount, rows, onChang
 
       <fieldset className="guesses__group">
         <legend>Rainfall values</legend>
-        <Select label="Rainfall column" value={String(s.valueColumn)} onChange={(v) => onChange({ valueColumn: Number(v) })}>
+        <Select
+          label="Rainfall column"
+          value={String(s.valueColumn)}
+          onChange={(v) => onChange({ valueColumn: Number(v) })}
+        >
           <ColumnOptions columns={columns.filter((c) => c !== s.timeColumn)} header={header} />
         </Select>
-        <Select label="Values are" value={s.valueKind} onChange={(v) => onChange({ valueKind: v as RainImportSettings['valueKind'] })}>
+        <Select
+          label="Values are"
+          value={s.valueKind}
+          onChange={(v) => onChange({ valueKind: v as RainImportSettings['valueKind'] })}
+        >
           <option value="depth">Depth in each bar</option>
           <option value="intensity">Intensity (depth per hour)</option>
           <option value="cumulative">Cumulative depth</option>

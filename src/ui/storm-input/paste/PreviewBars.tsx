@@ -16,9 +16,13 @@ export function PreviewBars({ storm, units }: { storm: Storm; units: UnitSystem 
   const n = storm.depthsMm.length;
   const path = useMemo(() => {
     const edges = barEdgesH(storm);
-    const x = scaleLinear().domain([0, totalDurationH(storm) || 1]).range([SKETCH_PAD.left, SKETCH_WIDTH - SKETCH_PAD.right]);
+    const x = scaleLinear()
+      .domain([0, totalDurationH(storm) || 1])
+      .range([SKETCH_PAD.left, SKETCH_WIDTH - SKETCH_PAD.right]);
     const peak = peakIntensityMmH(storm);
-    const y = scaleLinear().domain([0, peak > 0 ? peak : 1]).range([SKETCH_HEIGHT - SKETCH_PAD.bottom, SKETCH_PAD.top]);
+    const y = scaleLinear()
+      .domain([0, peak > 0 ? peak : 1])
+      .range([SKETCH_HEIGHT - SKETCH_PAD.bottom, SKETCH_PAD.top]);
     const edgesPx = new Float64Array(edges.length);
     for (let k = 0; k < edges.length; k++) edgesPx[k] = x(edges[k] as number);
     const tops = new Float64Array(n);

@@ -81,7 +81,12 @@ function BarRow({
   let note: Draft | undefined;
   for (const d of drafts.values()) note ??= d;
   return (
-    <div className={`bars__row${activeCol >= 0 ? ' bars__row--active' : ''}`} role="row" aria-rowindex={row + 2} style={{ top: row * ROW_PX }}>
+    <div
+      className={`bars__row${activeCol >= 0 ? ' bars__row--active' : ''}`}
+      role="row"
+      aria-rowindex={row + 2}
+      style={{ top: row * ROW_PX }}
+    >
       {COLUMNS.map((key, col) => {
         const draft = drafts.get(col);
         const editable = isEditable(key);
@@ -118,7 +123,14 @@ function BarRow({
           </div>
         );
       })}
-      <div role="gridcell" aria-colindex={NOTE_COLUMN} aria-readonly className="bars__cell bars__note" id={noteId} title={note?.message}>
+      <div
+        role="gridcell"
+        aria-colindex={NOTE_COLUMN}
+        aria-readonly
+        className="bars__cell bars__note"
+        id={noteId}
+        title={note?.message}
+      >
         {note?.message ?? ''}
       </div>
     </div>
@@ -232,7 +244,9 @@ export function BarTable() {
   useLayoutEffect(() => {
     if (!focusPending.current || editing) return;
     focusPending.current = false;
-    gridRef.current?.querySelector<HTMLElement>(`[data-cell="${draftKey(at.row, at.col)}"]`)?.focus({ preventScroll: true });
+    gridRef.current
+      ?.querySelector<HTMLElement>(`[data-cell="${draftKey(at.row, at.col)}"]`)
+      ?.focus({ preventScroll: true });
   });
 
   const page = Math.max(1, Math.floor(viewportPx / ROW_PX) - 1);
@@ -412,7 +426,12 @@ export function BarTable() {
           {selected}
         </p>
         <div className="bars__actions" role="group" aria-label="Bars">
-          <button type="button" onClick={() => actions.insertBar(at.row)} disabled={n === 0} title="A dry bar before the selected one">
+          <button
+            type="button"
+            onClick={() => actions.insertBar(at.row)}
+            disabled={n === 0}
+            title="A dry bar before the selected one"
+          >
             Insert bar
           </button>
           <button type="button" onClick={() => actions.insertBar(n)} title="A dry bar after the last one">
@@ -432,7 +451,8 @@ export function BarTable() {
         </div>
       </div>
       <p className="bars__help" id="bars-help">
-        Arrow keys move; Enter or typing edits; Enter applies. Duration in minutes; depth in {unitText(displayUnit('depth', units))}.
+        Arrow keys move; Enter or typing edits; Enter applies. Duration in minutes; depth in{' '}
+        {unitText(displayUnit('depth', units))}.
       </p>
       <div
         ref={gridRef}

@@ -44,7 +44,11 @@ export function readCell(
     const parsed = parseNumber(text);
     if (!parsed.ok) return bad(k, column, numberMessage(parsed.message));
     if (parsed.value < 0) {
-      return bad(k, column, `rainfall depth cannot be negative (got ${text.trim()} ${unitText(displayUnit('depth', system))}).`);
+      return bad(
+        k,
+        column,
+        `rainfall depth cannot be negative (got ${text.trim()} ${unitText(displayUnit('depth', system))}).`,
+      );
     }
     return { ok: true, kind: 'depth', depthMm: fromDisplay('depth', parsed.value, system) };
   }
@@ -63,7 +67,11 @@ export function readCell(
   if (Math.abs(startH - nowH) * 3_600_000 < 0.5) return { ok: true, kind: 'none' };
   if (k === 0) {
     if (clock.startMs === null || storm.startIso === undefined) {
-      return bad(k, column, 'the first bar starts the storm, at 0:00. To put the storm on a clock, set its start in Storm tools.');
+      return bad(
+        k,
+        column,
+        'the first bar starts the storm, at 0:00. To put the storm on a clock, set its start in Storm tools.',
+      );
     }
     const iso = shiftStartIso(storm.startIso, startH);
     if (iso === null) return bad(k, column, `the storm start "${storm.startIso}" cannot be read.`);

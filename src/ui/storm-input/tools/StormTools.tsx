@@ -103,7 +103,10 @@ export function StormTools() {
       const m = next.depthsMm.length;
       actions.setStorm(next, `Resample to ${formatValue(parsed.value)}-min bars`);
       const last = next.durationsH[m - 1] as number;
-      const shorter = m > 1 && Math.abs(last - parsed.value / 60) > 1e-9 ? `; the last bar is ${formatDuration(last)}, to the end of the storm` : '';
+      const shorter =
+        m > 1 && Math.abs(last - parsed.value / 60) > 1e-9
+          ? `; the last bar is ${formatDuration(last)}, to the end of the storm`
+          : '';
       return `Now ${m} bar${m === 1 ? '' : 's'} of ${formatDuration(next.durationsH[0] as number)}${shorter}; ${totalText(next)} kept.`;
     });
   };
@@ -155,7 +158,13 @@ export function StormTools() {
       </p>
       <div className="storm-tools__grid">
         <form className="tool" onSubmit={onScale} aria-label="Scale by a factor">
-          <ToolField id="tool-factor" label="Scale factor" text={factor} onText={setFactor} message={messages.factor ?? null} />
+          <ToolField
+            id="tool-factor"
+            label="Scale factor"
+            text={factor}
+            onText={setFactor}
+            message={messages.factor ?? null}
+          />
           <button type="submit">Scale bars</button>
         </form>
         <form className="tool" onSubmit={onTotal} aria-label="Set the total depth">

@@ -19,9 +19,27 @@ export interface ToolFieldProps {
  * nothing as you type: the tool's button applies it, and a value it refuses
  * stays in the field with the reason beside it.
  */
-export function ToolField({ id, label, unit, text, onText, message, hint, placeholder, inputMode = 'decimal' }: ToolFieldProps) {
+export function ToolField({
+  id,
+  label,
+  unit,
+  text,
+  onText,
+  message,
+  hint,
+  placeholder,
+  inputMode = 'decimal',
+}: ToolFieldProps) {
   return (
-    <FieldFrame id={id} label={label} unit={unit} className="tool-field" bad={Boolean(message)} hint={hint} message={message}>
+    <FieldFrame
+      id={id}
+      label={label}
+      unit={unit}
+      className="tool-field"
+      bad={Boolean(message)}
+      hint={hint}
+      message={message}
+    >
       <input
         id={id}
         type="text"
