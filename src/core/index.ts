@@ -55,3 +55,5 @@ export * from './baseflow';
 export * from './design';
 export * from './events';
 export * from './storm-tools';
+// Runoff hydrograph: the transform of rainfall excess (issue 13).
+export * from './transform';
