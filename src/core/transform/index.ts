@@ -29,3 +29,15 @@ export { lagFromTimeOfConcentration, nrcsTimeToPeakH } from './lag';
 export { logGamma, gammaP, gammaQ } from './gamma';
 export { convolve, convolveDirect, convolveFft } from './convolve';
 export { fft, fftPlan, nextPowerOfTwo, type FftPlan } from './fft';
+export { compareHydrographs, nashSutcliffe, type HydrographComparison } from './compare';
+export {
+  fitTransform,
+  peakTimeBetweenSamples,
+  TRANSFORM_OBJECTIVES,
+  type TransformObjective,
+  type ObservedDirectRunoff,
+  type TransformFitOptions,
+  type TransformFitResult,
+  type TransformFitFailure,
+} from './fit';
+export { brentMinimize, type MinimizeOptions } from './brent-min';
