@@ -57,3 +57,5 @@ export * from './events';
 export * from './storm-tools';
 // Runoff hydrograph: the transform of rainfall excess (issue 13).
 export * from './transform';
+// Long records split into events (issue 14).
+export * from './record';
