@@ -59,3 +59,5 @@ export * from './storm-tools';
 export * from './transform';
 // Long records split into events (issue 14).
 export * from './record';
+// How sure a loss fit is: the fit at the ends of the observed runoff's uncertainty, and the curve it sits on (issue 13).
+export * from './uncertainty';
