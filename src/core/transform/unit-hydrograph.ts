@@ -1,3 +1,4 @@
+import { InputError } from '../errors';
 import { monotoneCubic } from './pchip';
 import { responseArray } from './tail';
 import type { UnitHydrographTransform } from './types';
@@ -59,6 +60,13 @@ export function unitHydrographWeights(uh: UnitHydrographTransform, stepH: number
   knotsH.push(holdH);
   const between = monotoneCubic(knotsH, knotsH.map(summed));
   const held = summed(holdH);
+  if (!(held > 0)) {
+    throw new InputError(
+      'ordinatesM3sPerMm',
+      `The unit hydrograph gives no runoff in its first ${holdH} h (its span less its duration), where its ` +
+        'S-curve must rise; check the duration and the ordinates.',
+    );
+  }
   const sCurve = (tH: number): number => (tH < 0 ? 0 : tH >= holdH ? held : between(tH));
   const count = Math.ceil(holdH / stepH) + 1;
   const w = responseArray(count, stepH, holdH + stepH);

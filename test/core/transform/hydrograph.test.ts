@@ -278,6 +278,12 @@ describe('input checks', () => {
       'ordinatesM3sPerMm',
       /span 2 h/,
     );
+    // Runoff only after T − D: its S-curve would never rise before it levels off.
+    expectInputError(
+      () => runoffHydrograph(excess, { ...uh, durationH: 2, ordinatesM3sPerMm: [0, 0, 0, 5, 0] }, AREA),
+      'ordinatesM3sPerMm',
+      /no runoff in its first 2 h/,
+    );
   });
 
   it('asks for a longer step instead of building an enormous hydrograph', () => {
