@@ -145,7 +145,7 @@ export function fitTransform(
   objective: TransformObjective,
   options: TransformFitOptions = {},
 ): TransformFitResult {
-  const observedHydrograph: Hydrograph = { timesH: observed?.timesH, dischargeM3s: observed?.directM3s };
+  const observedHydrograph = { timesH: observed?.timesH, dischargeM3s: observed?.directM3s } as Hydrograph;
   const stepOption = options?.stepH === undefined ? {} : { stepH: options.stepH };
   let param: TransformParam | undefined;
   try {
@@ -176,9 +176,28 @@ export function fitTransform(
           : `${spec.label} has no parameter "${parameter}" to fit; it has ${fittable.join(', ')}.`,
     };
   }
-  const fitParam = param;
-  const fitRange = param.fit;
-  const obs = observedHydrograph as { timesH: ArrayLike<number>; dischargeM3s: ArrayLike<number> };
+  try {
+    return solveFit(excess, transform, param, areaM2, observedHydrograph, objective, options ?? {}, stepOption);
+  } catch (error) {
+    // A value in the range that the transform cannot take at this step (a
+    // response too long for it) is bad input too.
+    if (isInputError(error)) return { ok: false, reason: 'invalid-input', message: error.message };
+    throw error;
+  }
+}
+
+/** The fit itself, on validated input (see fitTransform). */
+function solveFit(
+  excess: Excess,
+  transform: Transform,
+  param: TransformParam,
+  areaM2: number,
+  obs: Hydrograph,
+  objective: TransformObjective,
+  options: TransformFitOptions,
+  stepOption: { stepH?: number },
+): TransformFitResult {
+  const fitRange = param.fit as NonNullable<TransformParam['fit']>;
   const observedPeak = obs.dischargeM3s[findPeakIndex(obs.dischargeM3s)] as number;
   if (!(observedPeak > 0)) {
     return {
@@ -198,22 +217,20 @@ export function fitTransform(
       const recordEndH = obs.timesH[obs.timesH.length - 1] as number;
       hi = Math.min(hi, 2 * Math.max(stormH, recordEndH, 1));
     }
-    if (!(hi > lo)) hi = lo * 10;
+    if (!(hi > lo)) hi = Math.min(param.max, lo * 10);
   }
   lo = Math.log(lo);
   hi = Math.log(hi);
 
-  const withValue = (value: number): Transform => ({ ...transform, [fitParam.key]: value }) as Transform;
+  const withValue = (value: number): Transform => ({ ...transform, [param.key]: value }) as Transform;
   const hydrographAt = (y: number): RunoffHydrograph =>
     runoffHydrograph(excess, withValue(Math.exp(y)), areaM2, stepOption);
   const unitText = param.unit === 'h' ? ' h' : '';
   const label = param.label.toLowerCase();
-  const succeed = (y: number, achieved: number): TransformFitResult => {
+  const succeed = (y: number, hydrograph: RunoffHydrograph, achieved: number): TransformFitResult => {
+    const comparison = compareClean(asSeries(hydrograph), obs);
     const value = Math.exp(y);
-    const fitted = withValue(value);
-    const hydrograph = runoffHydrograph(excess, fitted, areaM2, stepOption);
-    const comparison = compareClean({ timesH: hydrograph.timesH, dischargeM3s: hydrograph.dischargeM3s }, obs);
-    return { ok: true, value, transform: fitted, objective, achieved, hydrograph, comparison };
+    return { ok: true, value, transform: withValue(value), objective, achieved, hydrograph, comparison };
   };
 
   if (objective === 'nse') {
@@ -257,21 +274,17 @@ export function fitTransform(
           `(${fmt(value)}${unitText}, efficiency ${nse.toFixed(3)}); widen the search range or check the record.`,
       };
     }
-    return succeed(yBest, nse);
+    return succeed(yBest, hydrographAt(yBest), nse);
   }
 
   const target = objective === 'peak' ? observedPeak : (obs.timesH[findPeakIndex(obs.dischargeM3s)] as number);
-  const measure =
-    objective === 'peak'
-      ? (y: number): number => hydrographAt(y).peakM3s
-      : (y: number): number => peakTimeBetweenSamples(hydrographAt(y));
+  const measureOf = (h: RunoffHydrograph): number => (objective === 'peak' ? h.peakM3s : peakTimeBetweenSamples(h));
   const what = objective === 'peak' ? 'a peak of' : 'the peak at';
-  const targetText = objective === 'peak' ? `${fmt(target)} m³/s` : `${fmt(target)} h`;
-  const solved = solveMonotone(measure, lo, hi, target);
+  const show = (v: number): string => (objective === 'peak' ? `${fmt(v)} m³/s` : `${fmt(v)} h`);
+  const solved = solveMonotone((y) => measureOf(hydrographAt(y)), lo, hi, target);
   if (!solved.ok) {
     const value = Math.exp(solved.x);
     const end = solved.side === 'min' ? 'smallest' : 'largest';
-    const gives = objective === 'peak' ? `a peak of ${fmt(solved.g)} m³/s` : `the peak at ${fmt(solved.g)} h`;
     return {
       ok: false,
       reason: 'bound-reached',
@@ -279,17 +292,17 @@ export function fitTransform(
       boundValue: value,
       boundAchieved: solved.g,
       message:
-        `No ${label} from ${fmt(Math.exp(lo))} to ${fmt(Math.exp(hi))}${unitText} gives ${what} ${targetText}: ` +
-        `the ${end} ${label} (${fmt(value)}${unitText}) gives ${gives}.`,
+        `No ${label} from ${fmt(Math.exp(lo))} to ${fmt(Math.exp(hi))}${unitText} gives ${what} ${show(target)}: ` +
+        `the ${end} ${label} (${fmt(value)}${unitText}) gives ${what} ${show(solved.g)}.`,
     };
   }
   const y = solved.x;
-  // Tolerance on the match: the solver's own, or a tenth of a step for the
-  // time of peak (the between-samples time jumps a little when the highest
-  // sample moves to its neighbour).
-  const achieved = measure(y);
-  const stepH = hydrographStep(hydrographAt(y));
-  const tol = objective === 'peak' ? 1e-6 * target : 0.1 * stepH;
+  const hydrograph = hydrographAt(y);
+  const achieved = measureOf(hydrograph);
+  // Tolerance on the match: the solver's own for the peak; a tenth of a step
+  // for the time of peak (the between-samples time jumps a little when the
+  // highest sample moves to its neighbour).
+  const tol = objective === 'peak' ? 1e-6 * target : 0.1 * hydrographStep(hydrograph);
   if (Math.abs(achieved - target) > tol) {
     const value = Math.exp(y);
     return {
@@ -298,12 +311,11 @@ export function fitTransform(
       boundValue: value,
       boundAchieved: achieved,
       message:
-        `No ${label} gives ${what} ${targetText}: at ${fmt(value)}${unitText} the computed peak jumps from one ` +
-        `burst of the storm to another, over it (it comes no closer than ` +
-        `${objective === 'peak' ? `${fmt(achieved)} m³/s` : `${fmt(achieved)} h`}).`,
+        `No ${label} gives ${what} ${show(target)}: at ${fmt(value)}${unitText} the computed peak jumps from one ` +
+        `burst of the storm to another, over it (it comes no closer than ${show(achieved)}).`,
     };
   }
-  return succeed(y, achieved);
+  return succeed(y, hydrograph, achieved);
 }
 
 function asSeries(h: RunoffHydrograph): Hydrograph {

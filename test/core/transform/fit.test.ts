@@ -119,6 +119,13 @@ describe('fitTransform says when there is no answer', () => {
     });
   });
 
+  it('for a range the transform cannot take at this step, without throwing', () => {
+    // At a lag of 500 h a 0.0001 h step needs a response of 1.3e7 steps.
+    const r = fitTransform(excess, tri, 'lagH', AREA, observed, 'peak', { stepH: 1e-4, minValue: 500, maxValue: 1000 });
+    expect(r).toMatchObject({ ok: false, reason: 'invalid-input' });
+    if (!r.ok) expect(r.message).toMatch(/output step of at least/);
+  });
+
   it('for a record that never rises', () => {
     const r = fitTransform(excess, tri, 'lagH', AREA, { timesH: [0, 5], directM3s: [0, 0] }, 'peak');
     expect(r).toMatchObject({ ok: false, reason: 'invalid-target' });
