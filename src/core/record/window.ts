@@ -50,6 +50,13 @@ export function eventStorm(storm: Storm, event: RecordEvent): Storm {
     : { durationsH, depthsMm, startIso: shiftIso(storm.startIso, startH) };
 }
 
+export interface FlowWindowOptions {
+  /** How long after the event's last bar the window runs, h (the recession to keep). */
+  readonly afterH: number;
+  /** Where the record's hour 0 falls on the rainfall record's clock, h (default 0: the same start). */
+  readonly offsetH?: number;
+}
+
 export interface FlowWindow {
   /** First and last sample of the record taken (0-based, inclusive). */
   readonly firstSample: number;
@@ -73,22 +80,23 @@ function lastAtOrBefore(timesH: ArrayLike<number>, tH: number): number {
 
 /**
  * The part of a streamflow record that belongs to an event, from the event's
- * start to `afterH` hours after its last bar ends, ready for baseflow
+ * start to `options.afterH` hours after its last bar ends, ready for baseflow
  * separation against the event's storm (`eventStorm`). The record's times are
- * h from the rainfall record's start plus `offsetH` (a record that starts
- * later than the rain has a positive offset). Whole samples are taken, from
- * the last one at or before the window's start to the first one at or after
- * its end, so the window is covered without inventing samples; the returned
- * times are h from the event's start. Throws an InputError naming the field
- * when the record does not reach the window or leaves fewer than two samples.
+ * h on its own clock, whose hour 0 falls `options.offsetH` h after the
+ * rainfall record's start (a record that starts later than the rain has a
+ * positive offset). Whole samples are taken, from the last one at or before
+ * the window's start to the first one at or after its end, so the window is
+ * covered without inventing samples; the returned times are h from the
+ * event's start. Throws an InputError naming the field when the record does
+ * not reach the window or leaves fewer than two samples.
  */
 export function eventFlowWindow(
   storm: Storm,
   event: RecordEvent,
   record: Hydrograph,
-  afterH: number,
-  offsetH = 0,
+  options: FlowWindowOptions,
 ): FlowWindow {
+  const { afterH, offsetH = 0 } = options ?? ({} as FlowWindowOptions);
   if (typeof afterH !== 'number' || !Number.isFinite(afterH) || afterH < 0) {
     throw new InputError(
       'afterH',

@@ -55,7 +55,7 @@ describe('eventStorm and eventSpanH', () => {
 describe('eventFlowWindow', () => {
   it('takes the record from the event start to the stated time after its end, timed from the event start', () => {
     // Event 6–9 h, 12 h after: samples at 6…21 h, times 0…15 h from the event start.
-    const w = eventFlowWindow(record, first!, flow, 12);
+    const w = eventFlowWindow(record, first!, flow, { afterH: 12 });
     expect([w.firstSample, w.lastSample]).toEqual([6, 21]);
     expect(Array.from(w.timesH)).toEqual(Array.from({ length: 16 }, (_, i) => i));
     expect(Array.from(w.dischargeM3s)).toEqual(flow.dischargeM3s.slice(6, 22));
@@ -67,13 +67,13 @@ describe('eventFlowWindow', () => {
       timesH: flow.timesH.filter((t) => t % 2 === 0),
       dischargeM3s: flow.dischargeM3s.filter((_, i) => i % 2 === 0),
     };
-    const w = eventFlowWindow(record, first!, coarse, 12);
+    const w = eventFlowWindow(record, first!, coarse, { afterH: 12 });
     expect(w.timesH[0]).toBe(0);
     expect(w.timesH[w.timesH.length - 1]).toBe(16);
     // A record whose clock starts 1 h after the rain's: the window is 5–20 h on its
     // clock, covered by its samples at 4…20 h (5…21 h on the rain's), so it starts
     // 1 h before the event and ends 15 h after the event's start.
-    const later = eventFlowWindow(record, first!, coarse, 12, 1);
+    const later = eventFlowWindow(record, first!, coarse, { afterH: 12, offsetH: 1 });
     expect([later.firstSample, later.lastSample]).toEqual([2, 10]);
     expect(later.timesH[0]).toBe(-1);
     expect(later.timesH[later.timesH.length - 1]).toBe(15);
@@ -81,11 +81,11 @@ describe('eventFlowWindow', () => {
 
   it('names what is wrong when the record does not reach the event', () => {
     const short = { timesH: [0, 1, 2], dischargeM3s: [1, 1, 1] };
-    expectInputError(() => eventFlowWindow(record, second!, short, 12), 'timesH', /does not reach/);
-    expectInputError(() => eventFlowWindow(record, first!, flow, -1), 'afterH', /zero or more/);
-    expectInputError(() => eventFlowWindow(record, first!, flow, 1, NaN), 'offsetH', /offset/);
+    expectInputError(() => eventFlowWindow(record, second!, short, { afterH: 12 }), 'timesH', /does not reach/);
+    expectInputError(() => eventFlowWindow(record, first!, flow, { afterH: -1 }), 'afterH', /zero or more/);
+    expectInputError(() => eventFlowWindow(record, first!, flow, { afterH: 1, offsetH: NaN }), 'offsetH', /offset/);
     expectInputError(
-      () => eventFlowWindow(record, first!, { timesH: [0, 2], dischargeM3s: [1] }, 1),
+      () => eventFlowWindow(record, first!, { timesH: [0, 2], dischargeM3s: [1] }, { afterH: 1 }),
       'dischargeM3s',
       /match/,
     );
