@@ -55,3 +55,9 @@ export * from './baseflow';
 export * from './design';
 export * from './events';
 export * from './storm-tools';
+// Runoff hydrograph: the transform of rainfall excess (issue 13).
+export * from './transform';
+// Long records split into events (issue 14).
+export * from './record';
+// How sure a loss fit is: the fit at the ends of the observed runoff's uncertainty, and the curve it sits on (issue 13).
+export * from './uncertainty';

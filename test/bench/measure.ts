@@ -75,13 +75,18 @@ export function printTable(title: string): void {
   results.length = 0;
 }
 
-/** Deterministic pseudo-random storm: n bars, durations 5–15 min, gamma-ish depths. */
-export function syntheticStorm(n: number, seed = 1): { durationsH: number[]; depthsMm: number[] } {
+/** A deterministic uniform [0, 1) generator (a 32-bit linear congruential one: Numerical Recipes' constants). */
+export function seededRandom(seed: number): () => number {
   let s = seed >>> 0 || 1;
-  const rand = (): number => {
+  return (): number => {
     s = (Math.imul(s, 1664525) + 1013904223) >>> 0;
     return s / 4294967296;
   };
+}
+
+/** Deterministic pseudo-random storm: n bars, durations 5–15 min, gamma-ish depths. */
+export function syntheticStorm(n: number, seed = 1): { durationsH: number[]; depthsMm: number[] } {
+  const rand = seededRandom(seed);
   // Packed arrays built by push, as the store's arrays are (not holey).
   const durationsH: number[] = [];
   const depthsMm: number[] = [];

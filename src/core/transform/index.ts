@@ -1,0 +1,43 @@
+// From rainfall excess to a direct runoff hydrograph (issue 13). Pure
+// functions; no React, no DOM. Re-exported from src/core/index.ts.
+export type {
+  Transform,
+  TransformKind,
+  TransformOf,
+  NrcsDimensionlessTransform,
+  NashTransform,
+  TriangularTransform,
+  UnitHydrographTransform,
+  Excess,
+  RunoffHydrograph,
+} from './types';
+export { TRANSFORMS, TRANSFORM_KINDS, isTransformKind, type TransformParam, type TransformSpec } from './transforms';
+export { validateTransform, validateExcess } from './validate';
+export { runoffHydrograph, MAX_HYDROGRAPH_SAMPLES, type RunoffHydrographOptions } from './hydrograph';
+export { unitResponse } from './response';
+export { unitHydrographVolumeMm } from './uh-volume';
+export {
+  NRCS_DIMENSIONLESS_UH,
+  NRCS_PEAK_RATE_FACTOR,
+  peakRateFactorSi,
+  dimensionlessArea,
+  gammaShapeForPeakRateFactor,
+} from './nrcs';
+export { TRIANGULAR_BASE_OVER_TP } from './triangular';
+export { nashIuh, nashSCurve } from './nash';
+export { lagFromTimeOfConcentration, nrcsTimeToPeakH } from './lag';
+export { logGamma, gammaP, gammaQ } from './gamma';
+export { convolve, convolveDirect, convolveFft } from './convolve';
+export { fft, fftPlan, nextPowerOfTwo, type FftPlan } from './fft';
+export { compareHydrographs, nashSutcliffe, type HydrographComparison } from './compare';
+export {
+  fitTransform,
+  peakTimeBetweenSamples,
+  TRANSFORM_OBJECTIVES,
+  type TransformObjective,
+  type ObservedDirectRunoff,
+  type TransformFitOptions,
+  type TransformFitResult,
+  type TransformFitFailure,
+} from './fit';
+export { brentMinimize, type MinimizeOptions } from './brent-min';

@@ -1,0 +1,171 @@
+import { nashWeights } from './nash';
+import { NRCS_PEAK_RATE_FACTOR, nrcsWeights } from './nrcs';
+import { triangularWeights } from './triangular';
+import type { TransformKind, TransformOf } from './types';
+import { unitHydrographWeights } from './unit-hydrograph';
+
+/** A numeric parameter of a transform, with its unit and physical bounds. */
+export interface TransformParam<K extends TransformKind = TransformKind> {
+  readonly key: Exclude<keyof TransformOf<K>, 'kind'> & string;
+  readonly label: string;
+  /** 'h' for times; 'US' for the peak rate factor (cfs per mi²·in/h); '-' for none. */
+  readonly unit: 'h' | 'US' | '-';
+  readonly min: number;
+  readonly max: number;
+  /** True when `min` itself is not allowed. */
+  readonly minExclusive?: boolean;
+  /** May be left out (the default is said in `help`). */
+  readonly optional?: boolean;
+  /** Can be fitted to an observed hydrograph by `fitTransform`; then its search range. */
+  readonly fit?: { readonly searchMin: number; readonly searchMax: number };
+  readonly step: number;
+  readonly help: string;
+}
+
+/** Everything the core and a screen need to know about one transform. */
+export interface TransformSpec<K extends TransformKind = TransformKind> {
+  readonly kind: K;
+  readonly label: string;
+  readonly summary: string;
+  /** The published source of the equations. */
+  readonly source: string;
+  readonly params: readonly TransformParam<K>[];
+  readonly defaults: TransformOf<K>;
+  /**
+   * The unit response for an output step Δ: weights w_j ≥ 0 proportional to
+   * the discharge at the instant j·Δ after the start of 1 mm of excess spread
+   * evenly over [0, Δ] (the Δ-hour unit hydrograph). Rescaled to sum to 1 by
+   * the caller, which makes the volume exact.
+   */
+  readonly weights: (transform: TransformOf<K>, stepH: number) => Float64Array;
+}
+
+const LAG_HELP =
+  'Time from the centre of the excess to the peak of the unit hydrograph; 0.6 × the time of concentration (NEH-630 ch. 15).';
+
+const lagParam = {
+  key: 'lagH',
+  label: 'Lag',
+  unit: 'h',
+  min: 0,
+  max: 1000,
+  minExclusive: true,
+  fit: { searchMin: 0.01, searchMax: 1000 },
+  step: 0.05,
+  help: LAG_HELP,
+} as const;
+
+/**
+ * The one table of transforms, in the order a picker shows them. Validation,
+ * fitting and a screen's fields are all read from it.
+ */
+export const TRANSFORMS: { readonly [K in TransformKind]: TransformSpec<K> } = {
+  'nrcs-dimensionless': {
+    kind: 'nrcs-dimensionless',
+    label: 'NRCS dimensionless unit hydrograph',
+    summary: 'The curvilinear unit hydrograph of the published ratio table; Tp = D/2 + lag.',
+    source: 'USDA NRCS (2007) National Engineering Handbook Part 630, ch. 16, Table 16-1',
+    params: [
+      lagParam,
+      {
+        key: 'peakRateFactor',
+        label: 'Peak rate factor',
+        unit: 'US',
+        min: 100,
+        max: 1000,
+        optional: true,
+        step: 1,
+        help:
+          '484 (the default) gives the published table; other values a gamma-shaped hydrograph with the same volume ' +
+          '(flatter below 484, steeper above).',
+      },
+    ],
+    defaults: { kind: 'nrcs-dimensionless', lagH: 1 },
+    weights: (t, stepH) => nrcsWeights(t.lagH, t.peakRateFactor, stepH),
+  },
+  triangular: {
+    kind: 'triangular',
+    label: 'NRCS triangular unit hydrograph',
+    summary: 'Straight rise to the peak at Tp = D/2 + lag, straight fall to 8/3·Tp.',
+    source: 'USDA NRCS (2007) National Engineering Handbook Part 630, ch. 16',
+    params: [lagParam],
+    defaults: { kind: 'triangular', lagH: 1 },
+    weights: (t, stepH) => triangularWeights(t.lagH, stepH),
+  },
+  nash: {
+    kind: 'nash',
+    label: 'Nash cascade',
+    summary: 'n equal linear reservoirs in series; the unit hydrograph is gamma-shaped, peaking at (n − 1)·k.',
+    source: 'Nash (1957) The form of the instantaneous unit hydrograph, IASH Publ. 45',
+    params: [
+      {
+        key: 'n',
+        label: 'Number of reservoirs n',
+        unit: '-',
+        min: 0,
+        max: 100,
+        minExclusive: true,
+        fit: { searchMin: 0.5, searchMax: 50 },
+        step: 0.1,
+        help: 'Need not be a whole number; larger n gives a more peaked, more delayed hydrograph.',
+      },
+      {
+        key: 'kH',
+        label: 'Storage constant k',
+        unit: 'h',
+        min: 0,
+        max: 1000,
+        minExclusive: true,
+        fit: { searchMin: 0.01, searchMax: 1000 },
+        step: 0.05,
+        help: 'Storage over outflow of each reservoir; the mean delay of the cascade is n·k.',
+      },
+    ],
+    defaults: { kind: 'nash', n: 3, kH: 0.5 },
+    weights: (t, stepH) => nashWeights(t.n, t.kH, stepH),
+  },
+  'unit-hydrograph': {
+    kind: 'unit-hydrograph',
+    label: 'Unit hydrograph of my own',
+    summary: 'Ordinates of a unit hydrograph of a stated duration, converted to the output step by the S-curve.',
+    source: 'S-curve method: Chow, Maidment & Mays (1988) Applied Hydrology, §7.6',
+    params: [
+      {
+        key: 'durationH',
+        label: 'Duration of the unit excess',
+        unit: 'h',
+        min: 0,
+        max: Infinity,
+        minExclusive: true,
+        step: 0.25,
+        help: 'The time over which the 1 mm of excess fell.',
+      },
+      {
+        key: 'stepH',
+        label: 'Time between ordinates',
+        unit: 'h',
+        min: 0,
+        max: Infinity,
+        minExclusive: true,
+        step: 0.25,
+        help: 'The first ordinate is at the start of the excess.',
+      },
+    ],
+    defaults: {
+      kind: 'unit-hydrograph',
+      durationH: 1,
+      stepH: 1,
+      // Invented: a smooth 1-hour unit hydrograph for a 1 km² catchment; it holds
+      // 0.278 m³/s·h = 1000.8 m³ = 1.0008 mm over 1 km².
+      ordinatesM3sPerMm: [0, 0.05, 0.09, 0.06, 0.035, 0.02, 0.0118, 0.0062, 0.0033, 0.0012, 0.0005, 0],
+    },
+    weights: unitHydrographWeights,
+  },
+};
+
+/** Transform kinds in the order a picker shows them. */
+export const TRANSFORM_KINDS = Object.keys(TRANSFORMS) as TransformKind[];
+
+export function isTransformKind(kind: unknown): kind is TransformKind {
+  return typeof kind === 'string' && Object.prototype.hasOwnProperty.call(TRANSFORMS, kind);
+}
