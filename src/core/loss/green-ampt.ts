@@ -1,5 +1,7 @@
 import { peakIntensityMmH, totalDepthMm, type Storm } from '../storm';
-import type { ComputeFn, GreenAmptLoss, MethodSpec } from './types';
+import { halfRecoveryText, recoveryRateParam, recoveryRatePerH, recoverySwitch } from './recovery';
+import { sampleCapacity } from './sample-capacity';
+import type { CapacityFn, ComputeFn, GreenAmptLoss, MethodSpec } from './types';
 
 /**
  * Green–Ampt infiltration under variable rainfall.
@@ -15,8 +17,9 @@ import type { ComputeFn, GreenAmptLoss, MethodSpec } from './types';
  *   F₂ − F₁ − ψΔθ·ln((F₂ + ψΔθ)/(F₁ + ψΔθ)) = K·Δt
  * (Chow, Maidment & Mays 1988, §4.4, the Green–Ampt equation from a known
  * starting depth F₁). Each bar is solved exactly in this way, so the result
- * does not depend on how the rain is cut into bars. Dry bars do not
- * redistribute soil water (no recovery term).
+ * does not depend on how the rain is cut into bars. Dry bars leave F as it
+ * is unless recovery is on (see recovery.ts), when the wetted zone drains
+ * and F decays, F·e^(−k_r Δt).
  */
 
 /**
@@ -125,45 +128,100 @@ export function greenAmptPondingDepthMm(
   return intensityMmH > ksMmH ? (ksMmH * suctionMm * moistureDeficit) / (intensityMmH - ksMmH) : Infinity;
 }
 
-export const computeGreenAmpt: ComputeFn<'green-ampt'> = (durationsH, depthsMm, method, lossOut, excessOut) => {
-  const k = method.ksMmH;
+/** A Green–Ampt method's numbers, worked out once per call. */
+interface GreenAmptConstants {
+  readonly k: number;
+  /** ψΔθ, mm. */
+  readonly m: number;
+  /** K·ψΔθ, mm²/h. */
+  readonly km: number;
+  /** Recovery rate in dry bars, 1/h; 0 when off. */
+  readonly kr: number;
+}
+
+function constants(method: GreenAmptLoss): GreenAmptConstants {
   const m = method.suctionMm * method.moistureDeficit;
-  const km = k * m;
+  return { k: method.ksMmH, m, km: method.ksMmH * m, kr: recoveryRatePerH(method) };
+}
+
+/** The cumulative infiltration F, mm, that sets the capacity. */
+interface DepthState {
+  depth: number;
+  /** Hours of dry spell not yet drained from F (one exponential per spell: they multiply). */
+  dryH: number;
+}
+
+function drain(c: GreenAmptConstants, st: DepthState): void {
+  st.depth *= Math.exp(-c.kr * st.dryH);
+  st.dryH = 0;
+}
+
+/** One bar: updates F and returns the bar's loss, mm. */
+function greenAmptBar(c: GreenAmptConstants, st: DepthState, p: number, dt: number): number {
+  if (p === 0) {
+    // With recovery the wetted zone drains, F·e^(−k_r Δt) (see recovery.ts).
+    if (c.kr > 0) st.dryH += dt;
+    return 0;
+  }
+  if (st.dryH > 0) drain(c, st);
+  const k = c.k;
+  const i = p / dt;
+  if (i <= k) {
+    // Rain at or below K never ponds.
+    st.depth += p;
+    return p;
+  }
+  const pondDepth = c.km / (i - k); // Mein & Larson (1973)
+  if (st.depth + p <= pondDepth) {
+    st.depth += p;
+    return p;
+  }
+  let before = 0;
+  let pondedH = dt;
+  if (st.depth < pondDepth) {
+    // Ponding starts inside the bar, t_p = (F_p − F)/i after its start.
+    before = pondDepth - st.depth;
+    pondedH = dt - before / i;
+    st.depth = pondDepth;
+  }
+  const ponded = pondedH > 0 ? greenAmptPondedIncrementMm(k, c.m, st.depth, pondedH) : 0;
+  st.depth += ponded;
+  const loss = before + ponded;
+  return loss > p ? p : loss;
+}
+
+export const computeGreenAmpt: ComputeFn<'green-ampt'> = (durationsH, depthsMm, method, lossOut, excessOut) => {
+  const c = constants(method);
+  const st: DepthState = { depth: 0, dryH: 0 };
   const n = depthsMm.length;
-  let depth = 0; // cumulative infiltration F, mm
   for (let j = 0; j < n; j++) {
     const p = depthsMm[j] as number;
-    const dt = durationsH[j] as number;
-    const i = p / dt;
-    if (i <= k) {
-      // Rain at or below K never ponds (and a dry bar has nothing to lose).
-      lossOut[j] = p;
-      excessOut[j] = 0;
-      depth += p;
-      continue;
-    }
-    const pondDepth = km / (i - k); // Mein & Larson (1973)
-    if (depth + p <= pondDepth) {
-      lossOut[j] = p;
-      excessOut[j] = 0;
-      depth += p;
-      continue;
-    }
-    let before = 0;
-    let pondedH = dt;
-    if (depth < pondDepth) {
-      // Ponding starts inside the bar, t_p = (F_p − F)/i after its start.
-      before = pondDepth - depth;
-      pondedH = dt - before / i;
-      depth = pondDepth;
-    }
-    const ponded = pondedH > 0 ? greenAmptPondedIncrementMm(k, m, depth, pondedH) : 0;
-    depth += ponded;
-    let loss = before + ponded;
-    if (loss > p) loss = p;
+    const loss = greenAmptBar(c, st, p, durationsH[j] as number);
     lossOut[j] = loss;
     excessOut[j] = p - loss;
   }
+};
+
+/**
+ * Green–Ampt capacity through the storm, f = K(1 + ψΔθ/F) at the depth F(t)
+ * reached at each time, from the same bar steps as the losses (Green & Ampt
+ * 1911). Infinite on dry soil (F = 0) when ψΔθ > 0.
+ */
+export const greenAmptCapacity: CapacityFn<'green-ampt'> = (durationsH, depthsMm, method, timesH, out) => {
+  const c = constants(method);
+  sampleCapacity<DepthState>(
+    durationsH,
+    depthsMm,
+    timesH,
+    out,
+    { depth: 0, dryH: 0 },
+    (st) => ({ ...st }),
+    (st, p, dt) => greenAmptBar(c, st, p, dt),
+    (st) => {
+      if (st.dryH > 0) drain(c, st);
+      return c.m === 0 ? c.k : st.depth > 0 ? c.k * (1 + c.m / st.depth) : Infinity;
+    },
+  );
 };
 
 /**
@@ -216,8 +274,38 @@ export const greenAmptSpec: MethodSpec<'green-ampt'> = {
       step: 0.01,
       help: 'Soil water the soil can still take up, (1 − initial effective saturation) × effective porosity.',
     },
+    recoveryRateParam<'green-ampt'>(
+      'How fast the infiltrated depth that sets the capacity drains away while no rain falls: F falls by 63 % in 1/k_r hours. ' +
+        '0.05 /h (about 70 % gone in a day) is a rule of thumb, no source.',
+    ),
+  ],
+  choices: [
+    recoverySwitch<'green-ampt'>(
+      'Off: a dry spell leaves the wetting front as the rain left it, so the next burst meets the same wet soil. ' +
+        'On: the infiltrated depth drains away in every bar with no rain, F = F_w·e^(−k_r t), so capacity climbs back towards that of dry soil ' +
+        '(a one-parameter stand-in for the redistribution modelled by Smith, Corradini & Melone 1993 and Ogden & Saghafian 1997; from memory).',
+    ),
   ],
   // Loam with initial effective saturation 0.3 (Rawls, Brakensiek & Miller 1983; see soils.ts).
-  defaults: { kind: 'green-ampt', ksMmH: 3.4, suctionMm: 88.9, moistureDeficit: 0.3038 },
+  defaults: {
+    kind: 'green-ampt',
+    ksMmH: 3.4,
+    suctionMm: 88.9,
+    moistureDeficit: 0.3038,
+    recovers: false,
+    recoveryPerH: 0.05,
+  },
+  dryBars: (method) => {
+    if (method.recovers === true) {
+      const half = halfRecoveryText(method);
+      return (
+        'A dry bar loses nothing, and the infiltrated depth drains away' +
+        (half ? ` (half of it ${half})` : '') +
+        ', so the next burst meets drier soil with a higher capacity.'
+      );
+    }
+    return 'A dry bar loses nothing and leaves the infiltrated depth, and so the capacity, where the rain left it.';
+  },
   compute: computeGreenAmpt,
+  capacity: greenAmptCapacity,
 };
