@@ -94,9 +94,7 @@ export function validateMethod(method: LossMethod): void {
     if (v === undefined && choice.omitted !== undefined) continue;
     if (!choice.choices.some((c) => c.value === v)) {
       const allowed = choice.choices.map((c) => JSON.stringify(c.value)).join(' or ');
-      // A switch's label is a statement ("Capacity recovers in dry spells"): quote it.
-      const name = choice.display === 'switch' ? `"${choice.label}"` : choice.label;
-      throw new InputError(choice.key, `${name} must be ${allowed} (got ${JSON.stringify(v)}).`);
+      throw new InputError(choice.key, `${choice.label} must be ${allowed} (got ${JSON.stringify(v)}).`);
     }
   }
   spec.validateExtra?.(method as never);
