@@ -82,7 +82,7 @@ export const separateLyneHollick: SeparateFn<'lyne-hollick'> = (timesH, discharg
 export const LYNE_HOLLICK_CONVENTIONS =
   'Each pass starts with no quickflow (all baseflow) at its first sample. Quickflow is held between 0 and the flow at every step, and the held value is carried on, so 0 ≤ baseflow ≤ flow. ' +
   'Passes alternate: forward, backward, forward… (an even count ends on a backward pass). ' +
-  'Without warm-up the record is filtered as it is, so one that starts or ends on a recession is taken as all baseflow there; ' +
+  'Without warm-up the first sample of each pass is taken as all baseflow, and a record that starts on a recession stays all baseflow down it; ' +
   'with warm-up, samples are mirrored about each end first, and dropped after the passes.';
 
 export const lyneHollickSpec: BaseflowMethodSpec<'lyne-hollick'> = {
