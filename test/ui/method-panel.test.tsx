@@ -53,7 +53,7 @@ describe('the loss-method panel', () => {
       }
       expect(document.getElementById('method-dry-bars')).toHaveTextContent(spec.dryBars(defaults as never));
     }
-  });
+  }, 20_000); // six method panels rendered and read in turn
 
   it('Horton’s “Capacity recovers in dry spells” is off by default; on, it shows the recovery rate and changes the losses and the dry-bar help', async () => {
     const storm = { durationsH: [0.5, 2, 0.5], depthsMm: [40, 0, 40] };

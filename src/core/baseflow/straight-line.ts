@@ -54,7 +54,7 @@ export const separateStraightLine: SeparateFn<'straight-line'> = (timesH, discha
     if (ruleH > lastTimeH) {
       endTimeH = lastTimeH;
       notice =
-        `N = A^0.2 = ${days.toFixed(3)} days puts the end at ${ruleH.toFixed(2)} h, after the record's last sample ` +
+        `N = A^0.2 = ${days.toFixed(3)} days puts the end ${ruleH.toFixed(2)} h after the first sample, past the record's last sample ` +
         `(${+lastTimeH.toFixed(2)} h), so the line ends at the last sample instead. Drag the end point or type an end time to choose another.`;
     }
   }

@@ -106,7 +106,7 @@ describe('straight-line separation', () => {
     const result = separateBaseflow(h, { kind: 'straight-line' }, { areaM2: 100 * MI2 });
     expect(result.endTimeH).toBe(3);
     expect(result.notice).toMatch(
-      /^N = A\^0\.2 = 2\.512 days puts the end at 61\.29 h, after the record's last sample \(3 h\), so the line ends at the last sample instead\./,
+      /^N = A\^0\.2 = 2\.512 days puts the end 61\.29 h after the first sample, past the record's last sample \(3 h\), so the line ends at the last sample instead\./,
     );
     // The same as an end point given at the last sample: line from (0, 1) to (3, 1), the triangle above it.
     const given = separateBaseflow(h, { kind: 'straight-line', endTimeH: 3 });

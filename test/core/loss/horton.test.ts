@@ -136,7 +136,7 @@ describe('Horton by time since the rain began (ponding: false)', () => {
   });
 });
 
-describe('Horton with capacity recovery in dry spells', () => {
+describe('Horton with capacity recovery in dry spells (f₀ − f = (f₀ − f_w)·e^(−k_r t): Bedient, Huber & Vieux, Hydrology and Floodplain Analysis; from memory)', () => {
   const recovering = (ponding: boolean, recoveryPerH = 0.5): HortonLoss => ({
     ...horton(ponding),
     recovers: true,

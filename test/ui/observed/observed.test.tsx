@@ -299,7 +299,9 @@ describe('the end point', () => {
     // For 1 km² N is 0.83 days, past the end of a 12-hour record: the line ends at
     // the last sample, the screen says so, and the handle is there to drag instead.
     expect(
-      screen.getByText(/^N = A\^0\.2 = 0\.827 days puts the end at 22\.84 h, after the record's last sample \(12 h\)/),
+      screen.getByText(
+        /^N = A\^0\.2 = 0\.827 days puts the end 22\.84 h after the first sample, past the record's last sample \(12 h\)/,
+      ),
     ).toHaveAttribute('role', 'status');
     expect(screen.queryByRole('alert')).not.toBeInTheDocument();
     const fallback = separate({ kind: 'straight-line' });
