@@ -151,60 +151,73 @@ interface DepthState {
   dryH: number;
 }
 
-function drain(c: GreenAmptConstants, st: DepthState): void {
-  st.depth *= Math.exp(-c.kr * st.dryH);
-  st.dryH = 0;
-}
-
-/** One bar: updates F and returns the bar's loss, mm. */
-function greenAmptBar(c: GreenAmptConstants, st: DepthState, p: number, dt: number): number {
-  if (p === 0) {
-    // With recovery the wetted zone drains, F·e^(−k_r Δt) (see recovery.ts).
-    if (c.kr > 0) st.dryH += dt;
-    return 0;
+/**
+ * Bars `from` to `to` from the state given (updated at the end), losses
+ * written to the outputs when given (the capacity sampler runs without them).
+ * A plain loop over local variables: this runs on every drag frame.
+ */
+function runGreenAmpt(
+  c: GreenAmptConstants,
+  st: DepthState,
+  durationsH: ArrayLike<number>,
+  depthsMm: ArrayLike<number>,
+  from: number,
+  to: number,
+  lossOut: Float64Array | null,
+  excessOut: Float64Array | null,
+): void {
+  const { k, m, km, kr } = c;
+  let depth = st.depth;
+  let dryH = st.dryH;
+  for (let j = from; j < to; j++) {
+    const p = depthsMm[j] as number;
+    const dt = durationsH[j] as number;
+    let loss = p;
+    if (p === 0) {
+      // With recovery the wetted zone drains, F·e^(−k_r Δt) (see recovery.ts).
+      if (kr > 0) dryH += dt;
+    } else {
+      if (dryH > 0) {
+        depth *= Math.exp(-kr * dryH);
+        dryH = 0;
+      }
+      const i = p / dt;
+      // Rain at or below K never ponds; below F_p = Kψ∆θ/(i − K) (Mein & Larson 1973) all soaks in.
+      if (i <= k || depth + p <= km / (i - k)) {
+        depth += p;
+      } else {
+        const pondDepth = km / (i - k);
+        let before = 0;
+        let pondedH = dt;
+        if (depth < pondDepth) {
+          // Ponding starts inside the bar, t_p = (F_p − F)/i after its start.
+          before = pondDepth - depth;
+          pondedH = dt - before / i;
+          depth = pondDepth;
+        }
+        const ponded = pondedH > 0 ? greenAmptPondedIncrementMm(k, m, depth, pondedH) : 0;
+        depth += ponded;
+        loss = before + ponded;
+        if (loss > p) loss = p;
+      }
+    }
+    if (lossOut !== null && excessOut !== null) {
+      lossOut[j] = loss;
+      excessOut[j] = p - loss;
+    }
   }
-  if (st.dryH > 0) drain(c, st);
-  const k = c.k;
-  const i = p / dt;
-  if (i <= k) {
-    // Rain at or below K never ponds.
-    st.depth += p;
-    return p;
-  }
-  const pondDepth = c.km / (i - k); // Mein & Larson (1973)
-  if (st.depth + p <= pondDepth) {
-    st.depth += p;
-    return p;
-  }
-  let before = 0;
-  let pondedH = dt;
-  if (st.depth < pondDepth) {
-    // Ponding starts inside the bar, t_p = (F_p − F)/i after its start.
-    before = pondDepth - st.depth;
-    pondedH = dt - before / i;
-    st.depth = pondDepth;
-  }
-  const ponded = pondedH > 0 ? greenAmptPondedIncrementMm(k, c.m, st.depth, pondedH) : 0;
-  st.depth += ponded;
-  const loss = before + ponded;
-  return loss > p ? p : loss;
+  st.depth = depth;
+  st.dryH = dryH;
 }
 
 export const computeGreenAmpt: ComputeFn<'green-ampt'> = (durationsH, depthsMm, method, lossOut, excessOut) => {
-  const c = constants(method);
   const st: DepthState = { depth: 0, dryH: 0 };
-  const n = depthsMm.length;
-  for (let j = 0; j < n; j++) {
-    const p = depthsMm[j] as number;
-    const loss = greenAmptBar(c, st, p, durationsH[j] as number);
-    lossOut[j] = loss;
-    excessOut[j] = p - loss;
-  }
+  runGreenAmpt(constants(method), st, durationsH, depthsMm, 0, depthsMm.length, lossOut, excessOut);
 };
 
 /**
  * Green–Ampt capacity through the storm, f = K(1 + ψΔθ/F) at the depth F(t)
- * reached at each time, from the same bar steps as the losses (Green & Ampt
+ * reached at each time, from the same bar loop as the losses (Green & Ampt
  * 1911). Infinite on dry soil (F = 0) when ψΔθ > 0.
  */
 export const greenAmptCapacity: CapacityFn<'green-ampt'> = (durationsH, depthsMm, method, timesH, out) => {
@@ -216,10 +229,10 @@ export const greenAmptCapacity: CapacityFn<'green-ampt'> = (durationsH, depthsMm
     out,
     { depth: 0, dryH: 0 },
     (st) => ({ ...st }),
-    (st, p, dt) => greenAmptBar(c, st, p, dt),
+    (st, d, p, from, to) => runGreenAmpt(c, st, d, p, from, to, null, null),
     (st) => {
-      if (st.dryH > 0) drain(c, st);
-      return c.m === 0 ? c.k : st.depth > 0 ? c.k * (1 + c.m / st.depth) : Infinity;
+      const depth = st.depth * (st.dryH > 0 ? Math.exp(-c.kr * st.dryH) : 1);
+      return c.m === 0 ? c.k : depth > 0 ? c.k * (1 + c.m / depth) : Infinity;
     },
   );
 };

@@ -71,9 +71,10 @@ interface ClockState {
 }
 
 /**
- * One bar of the clock reading: updates the state and returns the bar's loss,
- * ∫ min(i, f(τ)) dτ over the bar, mm. With D_a, D_b the decay at the bar's
- * ends (D_b = D_a·e^(−kΔt)):
+ * Bars `from` to `to` of the clock reading, from the state given (updated at
+ * the end). Each bar loses ∫ min(i, f(τ)) dτ over the bar, mm, written to the
+ * outputs when given (the capacity sampler runs without them). With D_a, D_b
+ * the decay at the bar's ends (D_b = D_a·e^(−kΔt)):
  * - i ≥ f(τ_a): capacity is below the rain throughout, L = ∫ f dτ
  *   = f_c·Δt + (f₀ − f_c)/k·(D_a − D_b) (Horton 1940);
  * - i ≤ f(τ_b): capacity is above the rain throughout, L = P;
@@ -81,38 +82,60 @@ interface ClockState {
  *   s = ln(D_a/D_c)/k; rain below capacity soaks in before it and the
  *   capacity curve from f = i applies after it, over r = Δt − s:
  *   L = i·s + f_c·r + (i − f_c)(1 − e^(−kr))/k.
+ * A plain loop over local variables: this runs on every drag frame.
  */
-function clockBar(c: HortonConstants, st: ClockState, p: number, dt: number): number {
-  if (p === 0) {
-    // Before the first drop the clock has not started; after it, time runs on
-    // or (with recovery) capacity grows back: 1 − D shrinks by e^(−k_r Δt).
-    if (st.started) {
-      if (c.kr > 0) st.decay -= (1 - st.decay) * Math.expm1(-c.kr * dt);
-      else if (st.decay > 0) st.decay *= Math.exp(-c.k * dt);
+function runClock(
+  c: HortonConstants,
+  st: ClockState,
+  durationsH: ArrayLike<number>,
+  depthsMm: ArrayLike<number>,
+  from: number,
+  to: number,
+  lossOut: Float64Array | null,
+  excessOut: Float64Array | null,
+): void {
+  const { fc, span, a, k, kr } = c;
+  let decay = st.decay;
+  let started = st.started;
+  for (let j = from; j < to; j++) {
+    const p = depthsMm[j] as number;
+    const dt = durationsH[j] as number;
+    let loss = 0;
+    if (p === 0) {
+      // Before the first drop the clock has not started; after it, time runs on
+      // or (with recovery) capacity grows back: 1 − D shrinks by e^(−k_r Δt).
+      if (started) {
+        if (kr > 0) decay -= (1 - decay) * Math.expm1(-kr * dt);
+        else if (decay > 0) decay *= Math.exp(-k * dt);
+      }
+    } else {
+      started = true;
+      const da = decay;
+      // Once D has underflowed to zero it stays there: skip the exponential.
+      const fall = da > 0 ? da * Math.expm1(-k * dt) : 0; // D_b − D_a (≤ 0)
+      decay = da + fall;
+      const i = p / dt;
+      if (i >= fc + span * da) {
+        loss = fc * dt - a * fall;
+      } else if (i <= fc + span * decay) {
+        loss = p;
+      } else {
+        // Here f_c < i < f₀ and D_b < D_c < D_a.
+        let s = Math.log((da * span) / (i - fc)) / k;
+        if (s < 0) s = 0;
+        else if (s > dt) s = dt;
+        const r = dt - s;
+        loss = i * s + fc * r - ((i - fc) * Math.expm1(-k * r)) / k;
+      }
+      if (loss > p) loss = p;
     }
-    return 0;
+    if (lossOut !== null && excessOut !== null) {
+      lossOut[j] = loss;
+      excessOut[j] = p - loss;
+    }
   }
-  st.started = true;
-  const da = st.decay;
-  // Once D has underflowed to zero it stays there: skip the exponential.
-  const fall = da > 0 ? da * Math.expm1(-c.k * dt) : 0; // D_b − D_a (≤ 0)
-  const db = da + fall;
-  st.decay = db;
-  const i = p / dt;
-  let loss: number;
-  if (i >= c.fc + c.span * da) {
-    loss = c.fc * dt - c.a * fall;
-  } else if (i <= c.fc + c.span * db) {
-    return p;
-  } else {
-    // Here f_c < i < f₀ and D_b < D_c < D_a.
-    let s = Math.log((da * c.span) / (i - c.fc)) / c.k;
-    if (s < 0) s = 0;
-    else if (s > dt) s = dt;
-    const r = dt - s;
-    loss = i * s + c.fc * r - ((i - c.fc) * Math.expm1(-c.k * r)) / c.k;
-  }
-  return loss > p ? p : loss;
+  st.decay = decay;
+  st.started = started;
 }
 
 const computeByClock = (
@@ -122,15 +145,8 @@ const computeByClock = (
   lossOut: Float64Array,
   excessOut: Float64Array,
 ): void => {
-  const c = constants(method);
   const st: ClockState = { decay: 1, started: false };
-  const n = depthsMm.length;
-  for (let j = 0; j < n; j++) {
-    const p = depthsMm[j] as number;
-    const loss = clockBar(c, st, p, durationsH[j] as number);
-    lossOut[j] = loss;
-    excessOut[j] = p - loss;
-  }
+  runClock(constants(method), st, durationsH, depthsMm, 0, depthsMm.length, lossOut, excessOut);
 };
 
 /** Time compression: the infiltrated depth F, and where it stands on the curve. */
@@ -201,93 +217,140 @@ function settle(c: HortonConstants, st: DepthState): void {
   st.decay = Math.exp(-k * tau);
 }
 
-/** D = e^(−kτ) where the curve has taken in the state's depth. */
-function decayOf(c: HortonConstants, st: DepthState): number {
-  if (!st.onCurve) settle(c, st);
-  return st.decay;
-}
-
 /**
- * A dry bar with recovery, by infiltrated depth: capacity regains f₀ as in
- * recovery.ts, 1 − D shrinking by e^(−k_r Δt), and F moves back to the depth
- * the curve holds at the new D, F = f_c·τ + (f₀ − f_c)(1 − D)/k with
- * τ = −ln(D)/k (Horton 1940).
+ * Applies the recovery of the pending dry hours, by infiltrated depth:
+ * capacity regains f₀ as in recovery.ts, 1 − D shrinking by e^(−k_r Δt), and
+ * F moves back to the depth the curve holds at the new D,
+ * F = f_c·τ + (f₀ − f_c)(1 − D)/k with τ = −ln(D)/k (Horton 1940).
  */
 function recoverDepth(c: HortonConstants, st: DepthState): void {
   const dt = st.dryH;
   st.dryH = 0;
   if (st.depth === 0) return;
-  const lost = (1 - decayOf(c, st)) * Math.exp(-c.kr * dt); // 1 − D after the bar
+  if (!st.onCurve) settle(c, st);
+  const lost = (1 - st.decay) * Math.exp(-c.kr * dt); // 1 − D after the spell
   const tau = -Math.log1p(-lost) / c.k;
   st.decay = 1 - lost;
   st.tau = tau;
   st.depth = c.fc * tau + c.a * lost;
 }
 
-/** One bar by infiltrated depth: updates the state and returns the bar's loss, mm. */
-function depthBar(c: HortonConstants, st: DepthState, p: number, dt: number): number {
-  const { f0, fc, span, a, k } = c;
-  if (p === 0) {
-    if (c.kr > 0) st.dryH += dt;
-    return 0;
-  }
-  if (st.dryH > 0) recoverDepth(c, st);
-  const i = p / dt;
-  if (i <= fc) {
-    // Capacity never falls below f_c: all rain soaks in.
-    st.depth += p;
-    st.onCurve = false;
-    return p;
-  }
-  // Is the bar ponded from its start (capacity already at or below i)?
-  let pondedAtStart: boolean;
-  if (st.onCurve) pondedAtStart = fc + span * st.decay <= i;
-  // Off the curve, a cheap sufficient test first: −ln x ≤ 1/x − 1 bounds the
-  // depth F_p at which capacity falls to i by (f_0 − i)·i / (k(i − f_c)).
-  else pondedAtStart = st.depth * k * (i - fc) >= (f0 - i) * i;
-  let pondDepth = st.depth; // F at which capacity equals i
-  let pondDecay = st.decay; // e^(−kτ) there
-  let pondTau = st.tau; // and τ
-  if (!pondedAtStart) {
-    // Here f_c < i < f_0. f(τ_p) = i gives e^(−kτ_p) = (i − f_c)/(f_0 − f_c),
-    // and then F(τ_p) = f_c·τ_p + (f_0 − i)/k.
-    pondDecay = (i - fc) / span;
-    pondTau = -Math.log(pondDecay) / k;
-    pondDepth = fc * pondTau + (f0 - i) / k;
-    if (st.depth + p <= pondDepth) {
-      // Capacity stays above i through the bar: all rain soaks in.
-      st.depth += p;
-      st.onCurve = false;
-      return p;
+/**
+ * Bars `from` to `to` by infiltrated depth (time compression), from the state
+ * given (updated at the end); losses written to the outputs when given. A
+ * plain loop over local variables, as it runs on every drag frame; the rare
+ * solves (settle, recovery) go through the state.
+ */
+function runDepth(
+  c: HortonConstants,
+  st: DepthState,
+  durationsH: ArrayLike<number>,
+  depthsMm: ArrayLike<number>,
+  from: number,
+  to: number,
+  lossOut: Float64Array | null,
+  excessOut: Float64Array | null,
+): void {
+  const { f0, fc, span, a, k, kr } = c;
+  let depth = st.depth;
+  let decay = st.decay;
+  let tau = st.tau;
+  let onCurve = st.onCurve;
+  let dryH = st.dryH;
+  for (let j = from; j < to; j++) {
+    const p = depthsMm[j] as number;
+    const dt = durationsH[j] as number;
+    let loss = p;
+    if (p === 0) {
+      if (kr > 0) dryH += dt;
+    } else {
+      if (dryH > 0) {
+        st.depth = depth;
+        st.decay = decay;
+        st.tau = tau;
+        st.onCurve = onCurve;
+        st.dryH = dryH;
+        recoverDepth(c, st);
+        depth = st.depth;
+        decay = st.decay;
+        tau = st.tau;
+        onCurve = true;
+        dryH = 0;
+      }
+      const i = p / dt;
+      if (i <= fc) {
+        // Capacity never falls below f_c: all rain soaks in.
+        depth += p;
+        onCurve = false;
+      } else {
+        // Is the bar ponded from its start (capacity already at or below i)?
+        let pondedAtStart: boolean;
+        if (onCurve) pondedAtStart = fc + span * decay <= i;
+        // Off the curve, a cheap sufficient test first: −ln x ≤ 1/x − 1 bounds the
+        // depth F_p at which capacity falls to i by (f_0 − i)·i / (k(i − f_c)).
+        else pondedAtStart = depth * k * (i - fc) >= (f0 - i) * i;
+        let pondDepth = depth; // F at which capacity equals i
+        let pondDecay = decay; // e^(−kτ) there
+        let pondTau = tau; // and τ
+        let soaks = false;
+        if (!pondedAtStart) {
+          // Here f_c < i < f_0. f(τ_p) = i gives e^(−kτ_p) = (i − f_c)/(f_0 − f_c),
+          // and then F(τ_p) = f_c·τ_p + (f_0 − i)/k.
+          pondDecay = (i - fc) / span;
+          pondTau = -Math.log(pondDecay) / k;
+          pondDepth = fc * pondTau + (f0 - i) / k;
+          // Capacity stays above i through the bar: all rain soaks in.
+          soaks = depth + p <= pondDepth;
+          if (!soaks) pondedAtStart = depth >= pondDepth;
+        }
+        if (soaks) {
+          depth += p;
+          onCurve = false;
+        } else {
+          let before = 0; // rain soaked in before ponding, mm
+          let pondedH = dt;
+          if (pondedAtStart) {
+            if (!onCurve) {
+              st.depth = depth;
+              st.decay = decay;
+              st.tau = tau;
+              settle(c, st);
+              decay = st.decay;
+              tau = st.tau;
+            }
+          } else {
+            before = pondDepth - depth;
+            pondedH = dt - before / i;
+            depth = pondDepth;
+            tau = pondTau;
+            decay = pondDecay;
+          }
+          // Ponded: τ advances with clock time, F(τ + Δ) − F(τ) = f_c·Δ + a·e^(−kτ)(1 − e^(−kΔ)).
+          let ponded = fc * pondedH;
+          if (decay > 0) {
+            // (Once e^(−kτ) has underflowed to zero the curve is f_c alone.)
+            const step = -Math.expm1(-k * pondedH);
+            ponded += a * decay * step;
+            decay -= decay * step;
+          }
+          tau += pondedH;
+          onCurve = true;
+          depth += ponded;
+          loss = before + ponded;
+          if (loss > p) loss = p;
+        }
+      }
     }
-    pondedAtStart = st.depth >= pondDepth;
+    if (lossOut !== null && excessOut !== null) {
+      lossOut[j] = loss;
+      excessOut[j] = p - loss;
+    }
   }
-  let before = 0; // rain soaked in before ponding, mm
-  let pondedH = dt;
-  let decay: number;
-  if (pondedAtStart) {
-    decay = decayOf(c, st);
-  } else {
-    before = pondDepth - st.depth;
-    pondedH = dt - before / i;
-    st.depth = pondDepth;
-    st.tau = pondTau;
-    decay = pondDecay;
-  }
-  // Ponded: τ advances with clock time, F(τ + Δ) − F(τ) = f_c·Δ + a·e^(−kτ)(1 − e^(−kΔ)).
-  let ponded = fc * pondedH;
-  if (decay > 0) {
-    // (Once e^(−kτ) has underflowed to zero the curve is f_c alone.)
-    const step = -Math.expm1(-k * pondedH);
-    ponded += a * decay * step;
-    decay -= decay * step;
-  }
+  st.depth = depth;
   st.decay = decay;
-  st.tau += pondedH;
-  st.onCurve = true;
-  st.depth += ponded;
-  const loss = before + ponded;
-  return loss > p ? p : loss;
+  st.tau = tau;
+  st.onCurve = onCurve;
+  st.dryH = dryH;
 }
 
 const computeTimeCompression = (
@@ -297,16 +360,9 @@ const computeTimeCompression = (
   lossOut: Float64Array,
   excessOut: Float64Array,
 ): void => {
-  const c = constants(method);
   // F = 0 is τ = 0, D = 1.
   const st: DepthState = { depth: 0, decay: 1, tau: 0, onCurve: true, dryH: 0 };
-  const n = depthsMm.length;
-  for (let j = 0; j < n; j++) {
-    const p = depthsMm[j] as number;
-    const loss = depthBar(c, st, p, durationsH[j] as number);
-    lossOut[j] = loss;
-    excessOut[j] = p - loss;
-  }
+  runDepth(constants(method), st, durationsH, depthsMm, 0, depthsMm.length, lossOut, excessOut);
 };
 
 export const computeHorton: ComputeFn<'horton'> = (durationsH, depthsMm, method, lossOut, excessOut) => {
@@ -315,7 +371,7 @@ export const computeHorton: ComputeFn<'horton'> = (durationsH, depthsMm, method,
 };
 
 /**
- * Horton capacity through the storm, from the same bar steps as the losses:
+ * Horton capacity through the storm, from the same bar loops as the losses:
  * f = f_c + (f₀ − f_c)·D for the state reached at each time (by the clock,
  * or from the infiltrated depth F(t) with time compression).
  */
@@ -329,10 +385,11 @@ export const hortonCapacity: CapacityFn<'horton'> = (durationsH, depthsMm, metho
       out,
       { depth: 0, decay: 1, tau: 0, onCurve: true, dryH: 0 },
       (st) => ({ ...st }),
-      (st, p, dt) => depthBar(c, st, p, dt),
+      (st, d, p, from, to) => runDepth(c, st, d, p, from, to, null, null),
       (st) => {
         if (st.dryH > 0) recoverDepth(c, st);
-        return c.fc + c.span * decayOf(c, st);
+        if (!st.onCurve) settle(c, st);
+        return c.fc + c.span * st.decay;
       },
     );
   } else {
@@ -343,7 +400,7 @@ export const hortonCapacity: CapacityFn<'horton'> = (durationsH, depthsMm, metho
       out,
       { decay: 1, started: false },
       (st) => ({ ...st }),
-      (st, p, dt) => clockBar(c, st, p, dt),
+      (st, d, p, from, to) => runClock(c, st, d, p, from, to, null, null),
       (st) => c.fc + c.span * st.decay,
     );
   }
@@ -385,7 +442,7 @@ export function hortonAbsorbingF0(storm: Storm, method: HortonLoss): number {
     for (let j = 0; j < depthsMm.length; j++) {
       const p = depthsMm[j] as number;
       const dt = durationsH[j] as number;
-      clockBar(c, st, p, dt);
+      runClock(c, st, durationsH, depthsMm, j, j + 1, null, null);
       const shortfall = p / dt - fc;
       if (p > 0 && shortfall > 0) need = Math.max(need, st.decay > 0 ? fc + shortfall / st.decay : Infinity);
     }
