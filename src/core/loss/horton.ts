@@ -171,14 +171,16 @@ interface DepthState {
 
 /**
  * Puts the state back on the curve: the τ where cumulative infiltration is F,
- * f_c·τ + a(1 − e^(−kτ)) = F (a = (f_0 − f_c)/k), and D = e^(−kτ). F(τ) is
- * increasing and concave, so Newton's method from a lower bound climbs
- * monotonically to the root and never overshoots. The start is Newton's first
- * step from the last point known on the curve (τ₀, D₀), which costs no
- * exponential, or the bounds F ≤ f_0·τ and F ≤ f_c·τ + a if larger. Newton's
- * error then squares each step, shrinking by about k·step²/2; once that is
- * below 1e-16 of τ the last step is the answer, and D follows from the last
- * exponential by its series (no further exp).
+ * g(τ) = f_c·τ + a(1 − e^(−kτ)) − F = 0 (a = (f_0 − f_c)/k), and D = e^(−kτ).
+ * The start comes from the last point known on the curve (τ₀, D₀), where
+ * g′ = f(τ₀) and g″ = −k²aD₀ are known without an exponential: the root of
+ * the quadratic Taylor model F₀ + f·Δ − k²aD₀Δ²/2 = F, error O(Δ³) (or the
+ * bounds F ≤ f_0·τ and F ≤ f_c·τ + a, if larger). Then Halley's method, whose
+ * error cubes each step: once a step is below 1e-5/k the next would be
+ * below 1e-15 of it, so that step is the answer, and D follows from the last
+ * exponential by its series (no further exp). Used where light rain has
+ * soaked in below capacity (F moved off the curve) and the curve is needed
+ * again: before ponding or a dry-spell recovery.
  */
 function settle(c: HortonConstants, st: DepthState): void {
   const { fc, a, k, f0 } = c;
@@ -192,8 +194,13 @@ function settle(c: HortonConstants, st: DepthState): void {
     return;
   }
   const d0 = st.decay;
-  const from = st.tau + (depth - fc * st.tau - a * (1 - d0)) / (fc + k * a * d0);
-  let tau = Math.max(from, depth / f0, (depth - a) / fc, 0);
+  const gap = depth - fc * st.tau - a * (1 - d0); // F − F(τ₀) ≥ 0
+  const slope = fc + k * a * d0; // f(τ₀)
+  const bend = k * k * a * d0; // −g″(τ₀)
+  const disc = slope * slope - 2 * bend * gap;
+  // Root of slope·Δ − bend·Δ²/2 = gap, written so that it never cancels; Newton's step without the bend otherwise.
+  const delta = disc > 0 ? (2 * gap) / (slope + Math.sqrt(disc)) : gap / slope;
+  let tau = Math.max(st.tau + delta, depth / f0, (depth - a) / fc, 0);
   // e^(−kτ) underflows to zero beyond kτ ≈ 745, whatever the exact τ.
   if (k * tau > 746) {
     st.decay = 0;
@@ -202,12 +209,16 @@ function settle(c: HortonConstants, st: DepthState): void {
   }
   for (let iter = 0; iter < 100; iter++) {
     const e = Math.exp(-k * tau);
-    const residual = depth - fc * tau - a * (1 - e);
-    const step = residual / (fc + k * a * e);
+    const r = depth - fc * tau - a * (1 - e); // −g
+    const g1 = fc + k * a * e; // g′ > 0
+    const g2 = -k * k * a * e; // g″ ≤ 0
+    // Halley: Δ = 2·r·g′ / (2g′² + r·g″); Newton's r/g′ if the bend would more than double the step.
+    const den = 2 * g1 * g1 + r * g2;
+    const step = den > g1 * g1 ? (2 * r * g1) / den : r / g1;
     tau += step;
     const x = k * step;
-    if (!(x * step > 1e-16 * tau) && x < 1e-4) {
-      // Converged: e^(−kτ) at the new τ is e·e^(−x), e^(−x) = 1 − x + x²/2 − x³/6 to 1e-17.
+    if (Math.abs(x) < 1e-5) {
+      // e^(−kτ) at the new τ is e·e^(−x), e^(−x) = 1 − x + x²/2 − x³/6 to 1e-21.
       st.tau = tau;
       st.decay = e * (1 - x * (1 - x * (0.5 - x / 6)));
       return;
