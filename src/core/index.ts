@@ -14,6 +14,9 @@ export type {
   ConstantLoss,
   InitialContinuingLoss,
   ProportionalLoss,
+  DrySpellRecovery,
+  RetentionConversion,
+  CapacityFn,
 } from './loss/types';
 export {
   METHODS,
@@ -24,7 +27,10 @@ export {
   defaultMethod,
   describeRange,
   validateMethod,
+  paramApplies,
 } from './loss/methods';
+export { infiltrationCapacity } from './loss/capacity';
+export { DEFAULT_RECOVERY_PER_H, RECOVERY_CEILING_PER_H } from './loss/recovery';
 export { computeLosses, computeLossesUnchecked, totalExcessMm, scratchBuffers, type LossBuffers } from './loss/compute';
 export { calibrate, type CalibrationResult, type CalibrationFailure } from './calibrate/calibrate';
 export { exactPhi } from './calibrate/phi';
@@ -39,7 +45,15 @@ export {
   greenAmptPondingDepthMm,
   greenAmptRateMmH,
 } from './loss/green-ampt';
-export { curveNumberRetentionMm, curveNumberRunoffMm, RETENTION_RATIO_005 } from './loss/curve-number';
+export {
+  curveNumberRetentionMm,
+  curveNumberRunoffMm,
+  retention005Mm,
+  retention02Mm,
+  RETENTION_RATIO_005,
+  RETENTION_POWER_005,
+  DEFAULT_RETENTION_CONVERSION,
+} from './loss/curve-number';
 export { curveNumberForCondition, type AntecedentCondition } from './loss/antecedent-condition';
 export { curveNumberFromRunoff } from './calibrate/curve-number';
 export {

@@ -6,7 +6,7 @@ import type { Scenario } from './types';
  * 10 minutes, 41.6 mm in all, over a 3.2 km² mixed rural–suburban catchment.
  */
 export const DEMO_SCENARIO: Scenario = {
-  version: 3,
+  version: 4,
   name: 'Demo: Fenmoor Brook storm (invented)',
   notes:
     'Invented example for trying the workbench: a made-up 3-hour summer storm over a made-up 3.2 km² catchment. ' +

@@ -1,7 +1,7 @@
 import { describeValue, problemAt, type Problem } from './problems';
 
 /** The scenario format version this build writes, and the newest it reads. */
-export const CURRENT_SCENARIO_VERSION = 3;
+export const CURRENT_SCENARIO_VERSION = 4;
 
 /** A scenario document of some version, before it is validated. */
 export type RawDocument = Readonly<Record<string, unknown>>;
@@ -60,12 +60,72 @@ const addEventSet: Migration = {
   }),
 };
 
+const isObject = (x: unknown): x is Readonly<Record<string, unknown>> =>
+  x !== null && typeof x === 'object' && !Array.isArray(x);
+
+/**
+ * A version 3 loss method with the settings version 4 added, each as the
+ * version 3 document computed it: no recovery in dry spells (Horton,
+ * Green–Ampt; the rate at its default so that turning recovery on starts
+ * from it), and for the curve number on the 0.05 basis the constant ratio
+ * S₀.₀₅ = 1.42 S₀.₂, the only conversion version 3 had. On the 0.2 basis the
+ * conversion is not used, and gets the new default, the power relation.
+ * Settings already there, and anything odd, are passed through for the
+ * schema to check.
+ */
+function methodToV4(method: unknown): unknown {
+  if (!isObject(method)) return method;
+  const kind = method['kind'];
+  const missing = (key: string): boolean => !Object.hasOwn(method, key);
+  if (kind === 'horton' || kind === 'green-ampt') {
+    return {
+      ...method,
+      ...(missing('recovers') ? { recovers: false } : {}),
+      ...(missing('recoveryPerH') ? { recoveryPerH: 0.05 } : {}),
+    };
+  }
+  if (kind === 'curve-number' && missing('conversion')) {
+    return { ...method, conversion: method['iaRatio'] === 0.05 ? 'ratio' : 'power' };
+  }
+  return method;
+}
+
+/**
+ * Version 3 → 4: the infiltration methods gain settings (issue 10): Horton
+ * and Green–Ampt `recovers` and `recoveryPerH` (capacity recovery in dry
+ * spells), the curve number `conversion` (how S converts to the 0.05 basis).
+ * `method` and every `methodMemory` entry get them with the values that
+ * compute what version 3 computed, so every old link and file opens to the
+ * same numbers. Horton by the clock (`ponding: false`) now loses the exact
+ * ∫ min(i, f) dt per bar from the first bar with rain; its numbers change
+ * where the old rule was wrong (inside a bar where capacity crosses the
+ * rain, and after dry bars before the rain), which is the fix, not a change
+ * of meaning. Baseflow methods gain only optional parameters and need nothing.
+ */
+const addInfiltrationSettings: Migration = {
+  from: 3,
+  to: 4,
+  summary:
+    'Adds `recovers` and `recoveryPerH` to Horton and Green–Ampt methods (false, 0.05) and `conversion` to curve-number methods ("ratio" on the 0.05 basis, as version 3 computed; "power" on the 0.2 basis, where it is not used), in `method` and every `methodMemory` entry.',
+  up: (doc) => {
+    const memory = doc['methodMemory'];
+    return {
+      ...doc,
+      version: 4,
+      method: methodToV4(doc['method']),
+      methodMemory: isObject(memory)
+        ? Object.fromEntries(Object.entries(memory).map(([key, entry]) => [key, methodToV4(entry)]))
+        : memory,
+    };
+  },
+};
+
 /**
  * The upgrade chain, oldest first. When the document changes (e.g. the
  * event set), bump CURRENT_SCENARIO_VERSION and append the next step
  * `{ from, to: from + 1, summary, up }`; never edit a released step.
  */
-export const MIGRATIONS: readonly Migration[] = [addStreamflow, addEventSet];
+export const MIGRATIONS: readonly Migration[] = [addStreamflow, addEventSet, addInfiltrationSettings];
 
 export type MigrationResult =
   | { readonly ok: true; readonly doc: RawDocument; readonly fromVersion: number }

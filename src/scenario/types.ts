@@ -138,4 +138,15 @@ export interface ScenarioV3 extends Omit<ScenarioV2, 'version'> {
   readonly eventSet: EventSet;
 }
 
-export type Scenario = ScenarioV3;
+/**
+ * Version 4: version 3 whose loss methods carry every setting of the core's
+ * method table, including those added for issue 10 (Horton and Green–Ampt
+ * `recovers`, `recoveryPerH`; curve number `conversion`). The shape of the
+ * document is unchanged; a version 3 document upgrades with the values that
+ * compute what it computed.
+ */
+export interface ScenarioV4 extends Omit<ScenarioV3, 'version'> {
+  readonly version: 4;
+}
+
+export type Scenario = ScenarioV4;

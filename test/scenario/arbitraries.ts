@@ -1,6 +1,6 @@
 import fc from 'fast-check';
 import { METHODS, METHOD_KINDS, validateMethod, type LossKind, type LossMethod, type MethodSpec } from '../../src/core';
-import type { Scenario } from '../../src/scenario';
+import { CURRENT_SCENARIO_VERSION, type Scenario } from '../../src/scenario';
 
 // -0 is read back as 0 (tested on its own), so generated documents avoid it.
 const unsignedZero = (x: number): number => (x === 0 ? 0 : x);
@@ -162,7 +162,7 @@ export const scenarioArb: fc.Arbitrary<Scenario> = fc
           }
         : null;
     return {
-      version: 3,
+      version: CURRENT_SCENARIO_VERSION,
       name: r.name,
       notes: r.notes,
       storm: r.start === undefined ? r.storm : { ...r.storm, startIso: r.start },

@@ -24,14 +24,14 @@ const messages = (r: ReturnType<typeof parseScenario>): string[] => (r.ok ? [] :
 
 describe('scenario version 3: the event set', () => {
   it('is the current version, reached by one step from version 2', () => {
-    expect(CURRENT_SCENARIO_VERSION).toBe(3);
+    expect(CURRENT_SCENARIO_VERSION).toBeGreaterThanOrEqual(3);
     expect(MIGRATIONS.map((m) => [m.from, m.to])).toContainEqual([2, 3]);
   });
 
   it('upgrades a version 2 document with an empty set and its storm left on the workbench, nothing else changed', () => {
     const v2 = versionTwo();
     const before = JSON.stringify(v2);
-    const migrated = migrate(v2);
+    const migrated = migrate(v2, MIGRATIONS, 3);
     expect(migrated).toEqual({
       ok: true,
       doc: { ...v2, version: 3, eventSet: { events: [], activeId: null, parameter: null, designPick: 'median' } },
@@ -44,7 +44,7 @@ describe('scenario version 3: the event set', () => {
   it('opens a version 2 file and a version 2 link to the same scenario', () => {
     const v2 = versionTwo();
     const file = scenarioToFileText(DEMO_SCENARIO)
-      .replace('"version": 3,', '"version": 2,')
+      .replace(`"version": ${CURRENT_SCENARIO_VERSION},`, '"version": 2,')
       .replace(/,\n\s*"eventSet": \{[\s\S]*?\n {2}\}/, '');
     expect(file).not.toContain('eventSet');
     expect(scenarioFromFileText(file)).toEqual({ ok: true, scenario: DEMO_SCENARIO });
@@ -106,11 +106,11 @@ describe('scenario version 3: the event set', () => {
 describe('share link length with an event set', () => {
   // Measured sizes, not timings: a change to the document or the link format
   // that makes these links longer fails here and is seen.
-  it('ten events of 100 bars at gauge resolution make a link of 2,107 characters, under the 8,000 kept practical', () => {
+  it('ten events of 100 bars at gauge resolution make a link of 2,108 characters, under the 8,000 kept practical', () => {
     const made = makeShareLink(withSet(inventedEvents(10, 100)));
     expect(made.ok).toBe(true);
     const length = made.ok ? made.fragment.length : 0;
-    expect(length).toBe(2107);
+    expect(length).toBe(2108);
   });
 
   it('ten events of 100 unrounded bars (scaled or design storms) make a link of 14,334 characters, over 8,000', () => {

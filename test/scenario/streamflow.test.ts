@@ -173,7 +173,7 @@ describe('scenario version 2: the streamflow record', () => {
     expect(
       messages(parseScenario(withFlow({ baseflow: { kind: 'eckhardt', a: 0.98, bfiMax: 0.8, beta: 1 } }))),
     ).toEqual([
-      'streamflow.baseflow.beta: is not a parameter of the "eckhardt" baseflow method (its parameters are a, bfiMax, stepH).',
+      'streamflow.baseflow.beta: is not a parameter of the "eckhardt" baseflow method (its parameters are a, bfiMax, stepH, warmUpSamples).',
     ]);
     expect(messages(parseScenario(withFlow({ baseflow: { kind: 'eckhardt', a: 1, bfiMax: 0.8 } })))).toEqual([
       'streamflow.baseflow.a: Recession constant a must be a number at least 0 and less than 1 (got 1).',

@@ -1,7 +1,14 @@
 // @vitest-environment jsdom
 import { screen, within } from '@testing-library/react';
 import { describe, expect, it } from 'vitest';
-import { METHOD_KINDS, METHODS, defaultMethod, greenAmptForTexture } from '../../src/core';
+import {
+  METHOD_KINDS,
+  METHODS,
+  defaultMethod,
+  greenAmptForTexture,
+  paramApplies,
+  type MethodSpec,
+} from '../../src/core';
 import { coreTotals, mmText, renderWorkbench } from './render';
 import { FOUR_BARS } from './store/fixtures';
 
@@ -22,21 +29,74 @@ describe('the loss-method panel', () => {
     expect(screen.getByRole('textbox', { name: 'Continuing loss rate (mm/h)' })).toHaveValue('2.5');
   });
 
-  it('every method the core lists renders its parameters and choices', async () => {
+  it('every method the core lists renders the parameters and choices that take part, and says what happens in dry bars', async () => {
     const { user } = renderWorkbench();
     for (const kind of METHOD_KINDS) {
       await user.selectOptions(screen.getByRole('combobox', { name: 'Loss method' }), kind);
-      const spec = METHODS[kind];
-      for (const p of spec.params)
-        expect(
-          screen.getByRole('textbox', { name: new RegExp(`^${p.label.replace(/[()]/g, '\\$&')}`) }),
-        ).toBeInTheDocument();
-      for (const c of spec.choices ?? []) {
-        const group = screen.getByRole('group', { name: c.label });
-        for (const option of c.choices)
-          expect(within(group).getByRole('radio', { name: option.label })).toBeInTheDocument();
+      const spec = METHODS[kind] as MethodSpec;
+      const defaults = defaultMethod(kind);
+      for (const p of spec.params) {
+        const field = screen.queryByRole('textbox', { name: new RegExp(`^${p.label.replace(/[()]/g, '\\$&')}`) });
+        if (paramApplies(p, defaults)) expect(field, p.label).toBeInTheDocument();
+        else expect(field, p.label).not.toBeInTheDocument();
       }
+      for (const c of spec.choices ?? []) {
+        if (!paramApplies(c, defaults)) {
+          expect(screen.queryByRole('group', { name: c.label })).not.toBeInTheDocument();
+        } else if (c.display === 'switch') {
+          expect(screen.getByRole('checkbox', { name: c.label })).not.toBeChecked();
+        } else {
+          const group = screen.getByRole('group', { name: c.label });
+          for (const option of c.choices)
+            expect(within(group).getByRole('radio', { name: option.label })).toBeInTheDocument();
+        }
+      }
+      expect(document.getElementById('method-dry-bars')).toHaveTextContent(spec.dryBars(defaults as never));
     }
+  }, 20_000); // six method panels rendered and read in turn
+
+  it('Horton’s “Capacity recovers in dry spells” is off by default; on, it shows the recovery rate and changes the losses and the dry-bar help', async () => {
+    const storm = { durationsH: [0.5, 2, 0.5], depthsMm: [40, 0, 40] };
+    const { user, scenario } = renderWorkbench({
+      ...FOUR_BARS,
+      storm,
+      method: { kind: 'horton', f0MmH: 60, fcMmH: 8, kPerH: 3, ponding: false, recovers: false, recoveryPerH: 0.5 },
+      observed: null,
+    });
+    const toggle = screen.getByRole('checkbox', { name: 'Capacity recovers in dry spells' });
+    expect(toggle).not.toBeChecked();
+    expect(screen.queryByRole('textbox', { name: /^Recovery rate k_r/ })).not.toBeInTheDocument();
+    expect(document.getElementById('method-dry-bars')).toHaveTextContent(/clock runs on through dry bars/);
+    await user.click(toggle);
+    expect(scenario().method).toMatchObject({ recovers: true, recoveryPerH: 0.5 });
+    expect(screen.getByRole('textbox', { name: /^Recovery rate k_r/ })).toHaveValue('0.5');
+    // ln 2 / 0.5 = 1.386 h: "half of what was lost in 1.4 h".
+    expect(document.getElementById('method-dry-bars')).toHaveTextContent(
+      /grow back towards f₀ \(half of what was lost in 1\.4 h\)/,
+    );
+    // The screen shows the core's losses with recovery: 8·0.5 + (52/3)·D₂·(1 − e^(−1.5)) in bar 3 (see the core tests).
+    expect(screen.getByLabelText('Loss depth')).toHaveTextContent(
+      mmText(coreTotals(storm, scenario().method).totalLossMm),
+    );
+    await user.click(toggle);
+    expect(scenario().method).toMatchObject({ recovers: false });
+    expect(screen.queryByRole('textbox', { name: /^Recovery rate k_r/ })).not.toBeInTheDocument();
+  });
+
+  it('the curve number offers the S conversion only on the 0.05 basis, with the power relation chosen by default', async () => {
+    const { user, scenario } = renderWorkbench({
+      ...FOUR_BARS,
+      method: { kind: 'curve-number', cn: 70, iaRatio: 0.2, conversion: 'power' },
+      observed: null,
+    });
+    expect(screen.queryByRole('group', { name: 'S for Iₐ = 0.05 S' })).not.toBeInTheDocument();
+    await user.click(
+      within(screen.getByRole('group', { name: 'Initial abstraction' })).getByRole('radio', { name: 'Iₐ = 0.05 S' }),
+    );
+    const group = screen.getByRole('group', { name: 'S for Iₐ = 0.05 S' });
+    expect(within(group).getByRole('radio', { name: /^S₀\.₀₅ = 1\.33 S₀\.₂\^1\.15/ })).toBeChecked();
+    await user.click(within(group).getByRole('radio', { name: 'S₀.₀₅ = 1.42 S₀.₂' }));
+    expect(scenario().method).toEqual({ kind: 'curve-number', cn: 70, iaRatio: 0.05, conversion: 'ratio' });
   });
 
   it('switching method keeps the storm and brings back each method’s last parameters', async () => {
@@ -119,7 +179,7 @@ describe('infiltration methods', () => {
       method: { kind: 'horton', f0MmH: 15, fcMmH: 3, kPerH: 1.5, ponding: true },
     });
     const group = screen.getByRole('group', { name: 'Capacity follows' });
-    await user.click(within(group).getByRole('radio', { name: 'time from storm start' }));
+    await user.click(within(group).getByRole('radio', { name: 'time since the rain began' }));
     expect(scenario().method).toEqual({ kind: 'horton', f0MmH: 15, fcMmH: 3, kPerH: 1.5, ponding: false });
     // Capacity over clock time is drawn through the storm.
     expect(document.querySelector('[data-layer="capacity"]')?.getAttribute('d')).toMatch(/^M/);

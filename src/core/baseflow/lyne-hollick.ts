@@ -1,4 +1,5 @@
 import type { BaseflowMethodSpec, SeparateFn } from './types';
+import { reflectPad } from './warm-up';
 
 /**
  * One pass of the Lyne & Hollick (1979) filter over `input`, written to
@@ -22,8 +23,13 @@ import type { BaseflowMethodSpec, SeparateFn } from './types';
  * against rounding.
  *
  * `stepH` undefined: α applies per sample, as published. Otherwise each step
- * uses α^(Δt/stepH), which keeps the filter's time constant fixed across
- * irregular steps (our generalisation, not in the sources).
+ * uses α^(Δt/stepH). With no input change the quickflow decays by α a step,
+ * f_k = α·f_{k−1}, as a recession does by its constant, so α scales with the
+ * step as a recession constant does (k_Δt = k_day^(Δt/1 day) for an
+ * exponential recession; Tallaksen 1995, J. Hydrol. 165, from memory): the
+ * filter then forgets at the same rate in hours on daily, hourly and
+ * irregular records. Published α values are for daily data, so the default
+ * stepH is 24 h (the scaling applied to α is our reading of that practice).
  */
 export function lyneHollickPass(
   timesH: ArrayLike<number>,
@@ -53,19 +59,31 @@ export function lyneHollickPass(
 
 /**
  * Lyne–Hollick separation: `passes` passes alternating forward, backward,
- * forward, …, each filtering the baseflow of the pass before.
+ * forward, …, each filtering the baseflow of the pass before. With
+ * `warmUpSamples`, the record is padded at both ends by reflection
+ * (warm-up.ts) before the passes and the padding dropped after them.
  */
 export const separateLyneHollick: SeparateFn<'lyne-hollick'> = (timesH, dischargeM3s, method) => {
   const n = dischargeM3s.length;
-  let current = new Float64Array(n);
-  let next = new Float64Array(n);
-  lyneHollickPass(timesH, dischargeM3s, current, method.alpha, method.stepH, true);
+  const padded = reflectPad(timesH, dischargeM3s, method.warmUpSamples ?? 0, true);
+  const size = padded.values.length;
+  let current = new Float64Array(size);
+  let next = new Float64Array(size);
+  lyneHollickPass(padded.timesH, padded.values, current, method.alpha, method.stepH, true);
   for (let p = 1; p < method.passes; p++) {
-    lyneHollickPass(timesH, current, next, method.alpha, method.stepH, p % 2 === 0);
+    lyneHollickPass(padded.timesH, current, next, method.alpha, method.stepH, p % 2 === 0);
     [current, next] = [next, current];
   }
-  return { lineM3s: current, startIndex: 0, endTimeH: timesH[n - 1] as number, endLineM3s: current[n - 1] as number };
+  const lineM3s = padded.offset === 0 && size === n ? current : current.slice(padded.offset, padded.offset + n);
+  return { lineM3s, startIndex: 0, endTimeH: timesH[n - 1] as number, endLineM3s: lineM3s[n - 1] as number };
 };
+
+/** The filter's conventions in words, for the screen and the README. */
+export const LYNE_HOLLICK_CONVENTIONS =
+  'Each pass starts with no quickflow (all baseflow) at its first sample. Quickflow is held between 0 and the flow at every step, and the held value is carried on, so 0 ≤ baseflow ≤ flow. ' +
+  'Passes alternate: forward, backward, forward… (an even count ends on a backward pass). ' +
+  'Without warm-up the first sample of each pass is taken as all baseflow, and a record that starts on a recession stays all baseflow down it; ' +
+  'with warm-up, samples are mirrored about each end first, and dropped after the passes.';
 
 export const lyneHollickSpec: BaseflowMethodSpec<'lyne-hollick'> = {
   kind: 'lyne-hollick',
@@ -73,7 +91,7 @@ export const lyneHollickSpec: BaseflowMethodSpec<'lyne-hollick'> = {
   summary:
     'A recursive digital filter takes the quick, high-frequency part of the record as direct runoff; more passes give a smoother baseflow.',
   source:
-    'Lyne & Hollick (1979), Hydrology and Water Resources Symposium, IEAust, Perth; as applied by Nathan & McMahon (1990), Water Resources Research 26(7).',
+    'Lyne & Hollick (1979), Hydrology and Water Resources Symposium, IEAust, Perth; as applied by Nathan & McMahon (1990), Water Resources Research 26(7); warm-up by reflection as in Ladson et al. (2013), Australian Journal of Water Resources 17(1).',
   params: [
     {
       key: 'alpha',
@@ -83,7 +101,7 @@ export const lyneHollickSpec: BaseflowMethodSpec<'lyne-hollick'> = {
       max: 1,
       maxExclusive: true,
       step: 0.005,
-      help: 'Higher α gives a smoother, lower baseflow. 0.925 is common practice (Nathan & McMahon 1990), for daily data.',
+      help: 'Higher α gives a smoother, lower baseflow. 0.925 is common practice for daily data (Nathan & McMahon 1990); it applies per time step below.',
     },
     {
       key: 'passes',
@@ -104,10 +122,27 @@ export const lyneHollickSpec: BaseflowMethodSpec<'lyne-hollick'> = {
       max: Infinity,
       optional: { auto: 'α applies to each sample step, as published' },
       step: 1,
-      help: 'Step α was chosen for (e.g. 24 h for daily α); each step then uses α^(Δt/step). Leave empty to apply α per sample.',
+      help:
+        'Step α was chosen for: 24 h for the published daily values, so a 15-minute record uses α^(0.25/24) per step and forgets at the same rate in hours. ' +
+        'Leave empty to apply α to each sample as it stands.',
+    },
+    {
+      key: 'warmUpSamples',
+      label: 'Warm-up (samples mirrored at each end)',
+      unit: 'samples',
+      min: 0,
+      max: Infinity,
+      integer: true,
+      optional: { auto: 'no warm-up: the filter starts at the first sample' },
+      step: 1,
+      help:
+        'Mirror this many samples about each end of the record before filtering, so the start-up guess fades before the record begins; 30 is the published practice for daily data (Ladson et al. 2013, from memory). ' +
+        'Matters most for a record that starts on a recession. Empty: none.',
     },
   ],
-  defaults: { kind: 'lyne-hollick', alpha: 0.925, passes: 3 },
+  // α for daily data, scaled to the record's step (stepH 24 h); no warm-up.
+  defaults: { kind: 'lyne-hollick', alpha: 0.925, passes: 3, stepH: 24 },
+  conventions: LYNE_HOLLICK_CONVENTIONS,
   needsArea: () => false,
   separate: separateLyneHollick,
 };

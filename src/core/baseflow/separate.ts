@@ -26,7 +26,7 @@ export function separateBaseflow(
   const n = dischargeM3s.length;
   const peakIndex = findPeakIndex(dischargeM3s);
   const spec = baseflowMethodSpec(method.kind) as BaseflowMethodSpec;
-  const { lineM3s, startIndex, endTimeH, endLineM3s } = spec.separate(timesH, dischargeM3s, method as never, {
+  const { lineM3s, startIndex, endTimeH, endLineM3s, notice } = spec.separate(timesH, dischargeM3s, method as never, {
     peakIndex,
     areaM2,
   });
@@ -58,6 +58,7 @@ export function separateBaseflow(
     peakIndex,
     riseIndex: startIndex,
     endTimeH,
+    ...(notice === undefined ? {} : { notice }),
   };
 }
 

@@ -19,6 +19,12 @@ export function recessionDays(areaM2: number): number {
  * (t_r, Q(t_r)) to an end point (t_e, Q(t_e)) on the recession, Q(t_e) by
  * linear interpolation. The end is given, or N = A^0.2 days after the peak
  * (Linsley, Kohler & Paulhus, Hydrology for Engineers, McGraw-Hill).
+ *
+ * N = A^0.2 is at least a day for catchments over 1 mi², longer than most
+ * event records are cut. When it falls after the record's last sample the
+ * line ends at the last sample instead, and the separation says so in its
+ * notice (a fallback of our own, common practice with a short record, no
+ * source): a screen must show a separation and say how it was made, not stop.
  */
 export const separateStraightLine: SeparateFn<'straight-line'> = (timesH, dischargeM3s, method, context) => {
   const n = dischargeM3s.length;
@@ -26,6 +32,7 @@ export const separateStraightLine: SeparateFn<'straight-line'> = (timesH, discha
   const riseTimeH = timesH[rise] as number;
   const lastTimeH = timesH[n - 1] as number;
   let endTimeH: number;
+  let notice: string | undefined;
   if (method.endTimeH !== undefined) {
     endTimeH = method.endTimeH;
     if (endTimeH > lastTimeH) {
@@ -42,12 +49,13 @@ export const separateStraightLine: SeparateFn<'straight-line'> = (timesH, discha
       );
     }
     const days = recessionDays(context.areaM2);
-    endTimeH = (timesH[context.peakIndex] as number) + 24 * days;
-    if (endTimeH > lastTimeH) {
-      throw new InputError(
-        'endTimeH',
-        `N = A^0.2 = ${days.toFixed(3)} days puts the end point at ${endTimeH.toFixed(2)} h, after the last sample of the record (${lastTimeH} h); give an end time or a longer record.`,
-      );
+    const ruleH = (timesH[context.peakIndex] as number) + 24 * days;
+    endTimeH = ruleH;
+    if (ruleH > lastTimeH) {
+      endTimeH = lastTimeH;
+      notice =
+        `N = A^0.2 = ${days.toFixed(3)} days puts the end ${ruleH.toFixed(2)} h after the first sample, past the record's last sample ` +
+        `(${+lastTimeH.toFixed(2)} h), so the line ends at the last sample instead. Drag the end point or type an end time to choose another.`;
     }
   }
   if (!(endTimeH > riseTimeH)) {
@@ -61,7 +69,7 @@ export const separateStraightLine: SeparateFn<'straight-line'> = (timesH, discha
   const slope = (endQ - riseQ) / (endTimeH - riseTimeH);
   const lineM3s = new Float64Array(n);
   for (let k = 0; k < n; k++) lineM3s[k] = riseQ + slope * ((timesH[k] as number) - riseTimeH);
-  return { lineM3s, startIndex: rise, endTimeH, endLineM3s: endQ };
+  return { lineM3s, startIndex: rise, endTimeH, endLineM3s: endQ, ...(notice === undefined ? {} : { notice }) };
 };
 
 export const straightLineSpec: BaseflowMethodSpec<'straight-line'> = {
@@ -78,9 +86,11 @@ export const straightLineSpec: BaseflowMethodSpec<'straight-line'> = {
       unit: 'h',
       min: -Infinity,
       max: Infinity,
-      optional: { auto: 'N = A^0.2 days after the peak (A in mi², needs the catchment area)' },
+      optional: {
+        auto: 'N = A^0.2 days after the peak (A in mi², needs the catchment area), or the last sample when that is after the record',
+      },
       step: 0.25,
-      help: 'Time where the line meets the recession; leave empty to use N = A^0.2 days after the peak.',
+      help: 'Time where the line meets the recession; leave empty to use N = A^0.2 days after the peak (the last sample when that falls after the record).',
     },
   ],
   defaults: { kind: 'straight-line' },

@@ -36,6 +36,8 @@ export interface LyneHollickBaseflow {
   readonly alpha: number;
   readonly passes: number;
   readonly stepH?: number | undefined;
+  /** Samples mirrored about each end before filtering (warm-up); absent: none. */
+  readonly warmUpSamples?: number | undefined;
 }
 
 /**
@@ -47,6 +49,8 @@ export interface EckhardtBaseflow {
   readonly a: number;
   readonly bfiMax: number;
   readonly stepH?: number | undefined;
+  /** Samples mirrored before the first before filtering (warm-up); absent: none. */
+  readonly warmUpSamples?: number | undefined;
 }
 
 /**
@@ -93,6 +97,12 @@ export interface BaseflowResult {
    */
   readonly riseIndex: number;
   readonly endTimeH: number;
+  /**
+   * A plain sentence when the method did something other than its rule says
+   * (an automatic end point that fell after the record, moved to the last
+   * sample); absent otherwise. Screens show it beside the results.
+   */
+  readonly notice?: string;
 }
 
 /**
@@ -108,6 +118,8 @@ export interface Separation {
   readonly startIndex: number;
   readonly endTimeH: number;
   readonly endLineM3s: number;
+  /** See BaseflowResult.notice. */
+  readonly notice?: string;
 }
 
 /** Facts about the record a method may need, worked out once. */
@@ -129,8 +141,8 @@ export type SeparateFn<K extends BaseflowKind> = (
   context: SeparationContext,
 ) => Separation;
 
-/** Units of baseflow parameters: hours, a 0-based sample index, dimensionless. */
-export type BaseflowParamUnit = 'h' | 'sample' | '-';
+/** Units of baseflow parameters: hours, a 0-based sample index, a number of samples, dimensionless. */
+export type BaseflowParamUnit = 'h' | 'sample' | 'samples' | '-';
 
 /** A numeric parameter of a baseflow method, with its unit, bounds and use. */
 export interface BaseflowParam<K extends BaseflowKind = BaseflowKind> {
@@ -163,6 +175,11 @@ export interface BaseflowMethodSpec<K extends BaseflowKind = BaseflowKind> {
   readonly source: string;
   readonly params: readonly BaseflowParam<K>[];
   readonly defaults: BaseflowMethodOf<K>;
+  /**
+   * The conventions the results depend on beyond the equations (the start
+   * value, clamping, pass directions, padding at the ends), in plain words.
+   */
+  readonly conventions?: string;
   /** True when these parameters need the catchment area to run. */
   readonly needsArea: (method: BaseflowMethodOf<K>) => boolean;
   readonly separate: SeparateFn<K>;

@@ -1,4 +1,5 @@
-import { RETENTION_RATIO_005 } from '../loss/curve-number';
+import { retention02Mm } from '../loss/curve-number';
+import type { RetentionConversion } from '../loss/types';
 
 /**
  * The curve number that turns a storm total of rain P into runoff Q, mm:
@@ -11,16 +12,22 @@ import { RETENTION_RATIO_005 } from '../loss/curve-number';
  * subtracts nearly equal numbers:
  *   S = 2P(P − Q) / (2λP + (1 − λ)Q + √(Q·(4λP + (1 − λ)²Q))).
  * Q = P gives S = 0 (CN 100); Q = 0 gives S = P/λ, the largest CN with no
- * runoff. S on the λ = 0.05 basis is converted back with S₀.₂ = S₀.₀₅/1.42.
+ * runoff. S on the λ = 0.05 basis is converted back to the λ = 0.2 basis by
+ * the inverse of the chosen conversion (see loss/curve-number.ts).
  * Needs P > 0 and 0 ≤ Q ≤ P.
  */
-export function curveNumberFromRunoff(rainMm: number, runoffMm: number, iaRatio: 0.2 | 0.05): number {
+export function curveNumberFromRunoff(
+  rainMm: number,
+  runoffMm: number,
+  iaRatio: 0.2 | 0.05,
+  conversion?: RetentionConversion,
+): number {
   const p = rainMm;
   const q = Math.min(Math.max(runoffMm, 0), p);
   const l = iaRatio;
   const root = Math.sqrt(q * (4 * l * p + (1 - l) * (1 - l) * q));
   const s = (2 * p * (p - q)) / (2 * l * p + (1 - l) * q + root);
-  const s02 = iaRatio === 0.05 ? s / RETENTION_RATIO_005 : s;
+  const s02 = iaRatio === 0.05 ? retention02Mm(s, conversion) : s;
   // S = 25400/CN − 254 mm, inverted.
   return 25400 / (s02 + 254);
 }

@@ -2,6 +2,7 @@ import type { Storm } from '../storm';
 import type { CurveNumberLoss, LossMethod } from '../loss/types';
 import { exactPhi } from './phi';
 import { curveNumberFromRunoff } from './curve-number';
+import { conversionOf } from '../loss/curve-number';
 
 /**
  * Closed-form or non-iterative calibrations, keyed "kind.parameter". Each takes
@@ -17,7 +18,7 @@ export const EXACT_CALIBRATORS: Readonly<Record<string, ExactCalibrator>> = {
   // The storm's total excess is Q(ΣP) whatever the bars, so the single-total
   // inversion (Hawkins 1993) is exact. A dry storm fits any CN: keep the given one.
   'curve-number.cn': (_storm, method, target, rain) => {
-    const { cn, iaRatio } = method as CurveNumberLoss;
-    return rain > 0 ? curveNumberFromRunoff(rain, target, iaRatio) : cn;
+    const cnMethod = method as CurveNumberLoss;
+    return rain > 0 ? curveNumberFromRunoff(rain, target, cnMethod.iaRatio, conversionOf(cnMethod)) : cnMethod.cn;
   },
 };

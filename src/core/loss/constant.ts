@@ -61,6 +61,7 @@ export const constantSpec: MethodSpec<'constant'> = {
     },
   ],
   defaults: { kind: 'constant', rateMmH: 5 },
+  dryBars: () => 'A dry bar loses nothing; the rate applies again in full to the next bar with rain.',
   compute: computeConstant,
   totalExcess: totalExcessConstant,
 };

@@ -1,4 +1,4 @@
-import type { ComputeFn, MethodSpec } from './types';
+import type { ComputeFn, CurveNumberLoss, MethodSpec, RetentionConversion } from './types';
 
 /**
  * NRCS curve number. Potential retention S = 25400/CN − 254 mm (the inch form
@@ -10,31 +10,77 @@ import type { ComputeFn, MethodSpec } from './types';
  * the storm total is Q(ΣP) whatever the bar pattern.
  *
  * `cn` is always given on the standard λ = 0.2 basis. With `iaRatio: 0.05`
- * the retention is converted, S₀.₀₅ = 1.42·S₀.₂, and I_a = 0.05·S₀.₀₅: the
- * factor fixed by the project's design notes after Hawkins et al. and
- * Woodward et al. (2003), who also fit S₀.₀₅ = 1.33·S₀.₂^1.15 with S in
- * inches (that power form from memory, not used here).
+ * the retention is converted to the λ = 0.05 basis and I_a = 0.05·S₀.₀₅, by
+ * one of the two published conversions:
+ * - 'power': S₀.₀₅ = 1.33·S₀.₂^1.15 with S in inches, fitted to rainfall–
+ *   runoff data of 307 catchments by Woodward et al. (2003), "Runoff curve
+ *   number method: examination of the initial abstraction ratio", World
+ *   Water & Environmental Resources Congress, ASCE; the conversion that
+ *   Hawkins, Ward, Woodward & Van Mullem (2009), Curve Number Hydrology:
+ *   State of the Practice (ASCE), the most recent state-of-practice review,
+ *   recommends with λ = 0.05. The default.
+ * - 'ratio': S₀.₀₅ = 1.42·S₀.₂, one constant ratio for every CN, the simpler
+ *   form reported with the same λ = 0.05 work (Woodward et al. 2003;
+ *   Hawkins et al. 2009).
+ * All four citations, the coefficients and which one the review recommends
+ * are from memory. The two agree at S₀.₂ = (1.42/1.33)^(1/0.15) = 1.547 in
+ * (CN 86.6); below that CN the power relation gives the larger S (less runoff).
  */
 
-/** S₀.₀₅ / S₀.₂ for the λ = 0.05 basis (see above). */
+/** S₀.₀₅ / S₀.₂ of the constant-ratio conversion. */
 export const RETENTION_RATIO_005 = 1.42;
 
-/** Potential retention S on the basis of `iaRatio`, mm (TR-55 eq. 2-4 in mm). */
-export function curveNumberRetentionMm(cn: number, iaRatio: 0.2 | 0.05 = 0.2): number {
+/** S₀.₀₅ = coefficient·S₀.₂^exponent, S in inches: the power-relation conversion. */
+export const RETENTION_POWER_005 = { coefficient: 1.33, exponent: 1.15 } as const;
+
+/** The conversion a method object that leaves it out gets. */
+export const DEFAULT_RETENTION_CONVERSION: RetentionConversion = 'power';
+
+const MM_PER_IN = 25.4;
+
+/** S on the λ = 0.05 basis from S on the λ = 0.2 basis, mm, by the chosen conversion. */
+export function retention005Mm(s02Mm: number, conversion: RetentionConversion = DEFAULT_RETENTION_CONVERSION): number {
+  if (conversion === 'ratio') return RETENTION_RATIO_005 * s02Mm;
+  const { coefficient, exponent } = RETENTION_POWER_005;
+  return MM_PER_IN * coefficient * Math.pow(s02Mm / MM_PER_IN, exponent);
+}
+
+/** The inverse of retention005Mm: S on the λ = 0.2 basis, mm. */
+export function retention02Mm(s005Mm: number, conversion: RetentionConversion = DEFAULT_RETENTION_CONVERSION): number {
+  if (conversion === 'ratio') return s005Mm / RETENTION_RATIO_005;
+  const { coefficient, exponent } = RETENTION_POWER_005;
+  return MM_PER_IN * Math.pow(s005Mm / MM_PER_IN / coefficient, 1 / exponent);
+}
+
+/** Potential retention S on the basis of `iaRatio`, mm (TR-55 eq. 2-4 in mm, then converted for λ = 0.05). */
+export function curveNumberRetentionMm(
+  cn: number,
+  iaRatio: 0.2 | 0.05 = 0.2,
+  conversion: RetentionConversion = DEFAULT_RETENTION_CONVERSION,
+): number {
   const s02 = 25400 / cn - 254;
-  return iaRatio === 0.05 ? RETENTION_RATIO_005 * s02 : s02;
+  return iaRatio === 0.05 ? retention005Mm(s02, conversion) : s02;
 }
 
 /** Cumulative runoff Q for cumulative rain P, mm (TR-55 eq. 2-3 with I_a = λS). */
-export function curveNumberRunoffMm(cn: number, iaRatio: 0.2 | 0.05, rainMm: number): number {
-  const s = curveNumberRetentionMm(cn, iaRatio);
+export function curveNumberRunoffMm(
+  cn: number,
+  iaRatio: 0.2 | 0.05,
+  rainMm: number,
+  conversion: RetentionConversion = DEFAULT_RETENTION_CONVERSION,
+): number {
+  const s = curveNumberRetentionMm(cn, iaRatio, conversion);
   const x = rainMm - iaRatio * s;
   return x > 0 ? (x * x) / (x + s) : 0;
 }
 
+/** The conversion in force for a method object. */
+export const conversionOf = (method: CurveNumberLoss): RetentionConversion =>
+  method.conversion ?? DEFAULT_RETENTION_CONVERSION;
+
 export const computeCurveNumber: ComputeFn<'curve-number'> = (_durationsH, depthsMm, method, lossOut, excessOut) => {
   const n = depthsMm.length;
-  const s = method.cn >= 100 ? 0 : curveNumberRetentionMm(method.cn, method.iaRatio);
+  const s = method.cn >= 100 ? 0 : curveNumberRetentionMm(method.cn, method.iaRatio, conversionOf(method));
   const s2 = s * s;
   let abstraction = method.iaRatio * s; // initial abstraction still to fill, mm
   let x = 0; // cumulative rain beyond I_a, mm
@@ -84,11 +130,28 @@ export const curveNumberSpec: MethodSpec<'curve-number'> = {
       label: 'Initial abstraction',
       choices: [
         { value: 0.2, label: 'Iₐ = 0.2 S (standard)' },
-        { value: 0.05, label: 'Iₐ = 0.05 S, with S₀.₀₅ = 1.42 S₀.₂' },
+        { value: 0.05, label: 'Iₐ = 0.05 S' },
       ],
-      help: 'Ratio of initial abstraction to potential retention.',
+      help:
+        'Ratio of initial abstraction to potential retention. The curve number is always entered on the 0.2 basis; ' +
+        'with 0.05 its retention S is converted to that basis.',
+    },
+    {
+      key: 'conversion',
+      label: 'S for Iₐ = 0.05 S',
+      choices: [
+        { value: 'power', label: 'S₀.₀₅ = 1.33 S₀.₂^1.15 (S in inches)' },
+        { value: 'ratio', label: 'S₀.₀₅ = 1.42 S₀.₂' },
+      ],
+      omitted: DEFAULT_RETENTION_CONVERSION,
+      activeWhen: (method) => method.iaRatio === 0.05,
+      help:
+        'Power relation: Woodward et al. (2003), the conversion the state-of-practice review of Hawkins et al. (2009) recommends, and the default here. ' +
+        'Constant ratio: the simpler single factor. They agree near CN 87; at low CN and large rain they differ by tens of mm of runoff. Sources from memory.',
     },
   ],
-  defaults: { kind: 'curve-number', cn: 75, iaRatio: 0.2 },
+  defaults: { kind: 'curve-number', cn: 75, iaRatio: 0.2, conversion: 'power' },
+  dryBars: () =>
+    'A dry bar adds no rain and so no runoff. The method works on the running total of rain, so a dry spell inside the storm restores neither the initial abstraction nor the retention.',
   compute: computeCurveNumber,
 };

@@ -1,5 +1,7 @@
 import { peakIntensityMmH, totalDepthMm, type Storm } from '../storm';
-import type { ComputeFn, GreenAmptLoss, MethodSpec } from './types';
+import { halfRecoveryText, recoveryRateParam, recoveryRatePerH, recoverySwitch } from './recovery';
+import { sampleCapacity } from './sample-capacity';
+import type { CapacityFn, ComputeFn, GreenAmptLoss, MethodSpec } from './types';
 
 /**
  * Green–Ampt infiltration under variable rainfall.
@@ -15,8 +17,9 @@ import type { ComputeFn, GreenAmptLoss, MethodSpec } from './types';
  *   F₂ − F₁ − ψΔθ·ln((F₂ + ψΔθ)/(F₁ + ψΔθ)) = K·Δt
  * (Chow, Maidment & Mays 1988, §4.4, the Green–Ampt equation from a known
  * starting depth F₁). Each bar is solved exactly in this way, so the result
- * does not depend on how the rain is cut into bars. Dry bars do not
- * redistribute soil water (no recovery term).
+ * does not depend on how the rain is cut into bars. Dry bars leave F as it
+ * is unless recovery is on (see recovery.ts), when the wetted zone drains
+ * and F decays, F·e^(−k_r Δt).
  */
 
 /**
@@ -125,45 +128,113 @@ export function greenAmptPondingDepthMm(
   return intensityMmH > ksMmH ? (ksMmH * suctionMm * moistureDeficit) / (intensityMmH - ksMmH) : Infinity;
 }
 
-export const computeGreenAmpt: ComputeFn<'green-ampt'> = (durationsH, depthsMm, method, lossOut, excessOut) => {
-  const k = method.ksMmH;
+/** A Green–Ampt method's numbers, worked out once per call. */
+interface GreenAmptConstants {
+  readonly k: number;
+  /** ψΔθ, mm. */
+  readonly m: number;
+  /** K·ψΔθ, mm²/h. */
+  readonly km: number;
+  /** Recovery rate in dry bars, 1/h; 0 when off. */
+  readonly kr: number;
+}
+
+function constants(method: GreenAmptLoss): GreenAmptConstants {
   const m = method.suctionMm * method.moistureDeficit;
-  const km = k * m;
-  const n = depthsMm.length;
-  let depth = 0; // cumulative infiltration F, mm
-  for (let j = 0; j < n; j++) {
+  return { k: method.ksMmH, m, km: method.ksMmH * m, kr: recoveryRatePerH(method) };
+}
+
+/** The cumulative infiltration F, mm, that sets the capacity. */
+interface DepthState {
+  depth: number;
+  /** Hours of dry spell not yet drained from F (one exponential per spell: they multiply). */
+  dryH: number;
+}
+
+/**
+ * Bars `from` to `to` from the state given (updated at the end), losses
+ * written to the outputs when given (the capacity sampler runs without them).
+ * A plain loop over local variables: this runs on every drag frame.
+ */
+function runGreenAmpt(
+  c: GreenAmptConstants,
+  st: DepthState,
+  durationsH: ArrayLike<number>,
+  depthsMm: ArrayLike<number>,
+  from: number,
+  to: number,
+  lossOut: Float64Array | null,
+  excessOut: Float64Array | null,
+): void {
+  const { k, m, km, kr } = c;
+  let depth = st.depth;
+  let dryH = st.dryH;
+  for (let j = from; j < to; j++) {
     const p = depthsMm[j] as number;
     const dt = durationsH[j] as number;
-    const i = p / dt;
-    if (i <= k) {
-      // Rain at or below K never ponds (and a dry bar has nothing to lose).
-      lossOut[j] = p;
-      excessOut[j] = 0;
-      depth += p;
-      continue;
+    let loss = p;
+    if (p === 0) {
+      // With recovery the wetted zone drains, F·e^(−k_r Δt) (see recovery.ts).
+      if (kr > 0) dryH += dt;
+    } else {
+      if (dryH > 0) {
+        depth *= Math.exp(-kr * dryH);
+        dryH = 0;
+      }
+      const i = p / dt;
+      // Rain at or below K never ponds; below F_p = Kψ∆θ/(i − K) (Mein & Larson 1973) all soaks in.
+      if (i <= k || depth + p <= km / (i - k)) {
+        depth += p;
+      } else {
+        const pondDepth = km / (i - k);
+        let before = 0;
+        let pondedH = dt;
+        if (depth < pondDepth) {
+          // Ponding starts inside the bar, t_p = (F_p − F)/i after its start.
+          before = pondDepth - depth;
+          pondedH = dt - before / i;
+          depth = pondDepth;
+        }
+        const ponded = pondedH > 0 ? greenAmptPondedIncrementMm(k, m, depth, pondedH) : 0;
+        depth += ponded;
+        loss = before + ponded;
+        if (loss > p) loss = p;
+      }
     }
-    const pondDepth = km / (i - k); // Mein & Larson (1973)
-    if (depth + p <= pondDepth) {
-      lossOut[j] = p;
-      excessOut[j] = 0;
-      depth += p;
-      continue;
+    if (lossOut !== null && excessOut !== null) {
+      lossOut[j] = loss;
+      excessOut[j] = p - loss;
     }
-    let before = 0;
-    let pondedH = dt;
-    if (depth < pondDepth) {
-      // Ponding starts inside the bar, t_p = (F_p − F)/i after its start.
-      before = pondDepth - depth;
-      pondedH = dt - before / i;
-      depth = pondDepth;
-    }
-    const ponded = pondedH > 0 ? greenAmptPondedIncrementMm(k, m, depth, pondedH) : 0;
-    depth += ponded;
-    let loss = before + ponded;
-    if (loss > p) loss = p;
-    lossOut[j] = loss;
-    excessOut[j] = p - loss;
   }
+  st.depth = depth;
+  st.dryH = dryH;
+}
+
+export const computeGreenAmpt: ComputeFn<'green-ampt'> = (durationsH, depthsMm, method, lossOut, excessOut) => {
+  const st: DepthState = { depth: 0, dryH: 0 };
+  runGreenAmpt(constants(method), st, durationsH, depthsMm, 0, depthsMm.length, lossOut, excessOut);
+};
+
+/**
+ * Green–Ampt capacity through the storm, f = K(1 + ψΔθ/F) at the depth F(t)
+ * reached at each time, from the same bar loop as the losses (Green & Ampt
+ * 1911). Infinite on dry soil (F = 0) when ψΔθ > 0.
+ */
+export const greenAmptCapacity: CapacityFn<'green-ampt'> = (durationsH, depthsMm, method, timesH, out) => {
+  const c = constants(method);
+  sampleCapacity<DepthState>(
+    durationsH,
+    depthsMm,
+    timesH,
+    out,
+    { depth: 0, dryH: 0 },
+    (st) => ({ ...st }),
+    (st, d, p, from, to) => runGreenAmpt(c, st, d, p, from, to, null, null),
+    (st) => {
+      const depth = st.depth * (st.dryH > 0 ? Math.exp(-c.kr * st.dryH) : 1);
+      return c.m === 0 ? c.k : depth > 0 ? c.k * (1 + c.m / depth) : Infinity;
+    },
+  );
 };
 
 /**
@@ -216,8 +287,38 @@ export const greenAmptSpec: MethodSpec<'green-ampt'> = {
       step: 0.01,
       help: 'Soil water the soil can still take up, (1 − initial effective saturation) × effective porosity.',
     },
+    recoveryRateParam<'green-ampt'>(
+      'How fast the infiltrated depth that sets the capacity drains away while no rain falls: F falls by 63 % in 1/k_r hours. ' +
+        '0.05 /h (about 70 % gone in a day) is a rule of thumb, no source.',
+    ),
+  ],
+  choices: [
+    recoverySwitch<'green-ampt'>(
+      'Off: a dry spell leaves the wetting front as the rain left it, so the next burst meets the same wet soil. ' +
+        'On: the infiltrated depth drains away in every bar with no rain, F = F_w·e^(−k_r t), so capacity climbs back towards that of dry soil ' +
+        '(a one-parameter stand-in for the redistribution modelled by Smith, Corradini & Melone 1993 and Ogden & Saghafian 1997; from memory).',
+    ),
   ],
   // Loam with initial effective saturation 0.3 (Rawls, Brakensiek & Miller 1983; see soils.ts).
-  defaults: { kind: 'green-ampt', ksMmH: 3.4, suctionMm: 88.9, moistureDeficit: 0.3038 },
+  defaults: {
+    kind: 'green-ampt',
+    ksMmH: 3.4,
+    suctionMm: 88.9,
+    moistureDeficit: 0.3038,
+    recovers: false,
+    recoveryPerH: 0.05,
+  },
+  dryBars: (method) => {
+    if (method.recovers === true) {
+      const half = halfRecoveryText(method);
+      return (
+        'A dry bar loses nothing, and the infiltrated depth drains away' +
+        (half ? ` (half of it ${half})` : '') +
+        ', so the next burst meets drier soil with a higher capacity.'
+      );
+    }
+    return 'A dry bar loses nothing and leaves the infiltrated depth, and so the capacity, where the rain left it.';
+  },
   compute: computeGreenAmpt,
+  capacity: greenAmptCapacity,
 };

@@ -76,5 +76,7 @@ export const initialContinuingSpec: MethodSpec<'initial-continuing'> = {
     },
   ],
   defaults: { kind: 'initial-continuing', initialMm: 10, rateMmH: 2.5 },
+  dryBars: () =>
+    'A dry bar loses nothing. The initial loss is filled once per storm and does not refill in dry spells: after a long gap, treat the next burst as a storm of its own.',
   compute: computeInitialContinuing,
 };

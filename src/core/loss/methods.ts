@@ -44,6 +44,17 @@ export function defaultMethod<K extends LossKind>(kind: K): MethodOf<K> {
   return { ...methodSpec(kind).defaults };
 }
 
+/**
+ * Whether a parameter or setting takes part under the method's other
+ * settings (the recovery rate only while capacity recovers).
+ */
+export function paramApplies<K extends LossKind>(
+  param: Pick<NumericParam<K>, 'activeWhen'>,
+  method: MethodOf<K>,
+): boolean {
+  return param.activeWhen ? param.activeWhen(method) : true;
+}
+
 /** Describes the allowed range of a parameter in words, e.g. "between 0 and 1". */
 export function describeRange(param: NumericParam): string {
   const low = param.minExclusive ? `greater than ${param.min}` : `at least ${param.min}`;
@@ -64,6 +75,8 @@ export function validateMethod(method: LossMethod): void {
   const values = method as unknown as Record<string, unknown>;
   for (const param of spec.params) {
     const v = values[param.key];
+    // Added after callers were written: leaving it out means its stated value.
+    if (v === undefined && param.omitted !== undefined) continue;
     const unit = param.unit === '-' ? '' : ` ${param.unit}`;
     if (typeof v !== 'number' || !Number.isFinite(v)) {
       throw new InputError(
@@ -78,6 +91,7 @@ export function validateMethod(method: LossMethod): void {
   }
   for (const choice of spec.choices ?? []) {
     const v = values[choice.key];
+    if (v === undefined && choice.omitted !== undefined) continue;
     if (!choice.choices.some((c) => c.value === v)) {
       const allowed = choice.choices.map((c) => JSON.stringify(c.value)).join(' or ');
       throw new InputError(choice.key, `${choice.label} must be ${allowed} (got ${JSON.stringify(v)}).`);

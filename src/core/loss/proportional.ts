@@ -32,5 +32,6 @@ export const proportionalSpec: MethodSpec<'proportional'> = {
     },
   ],
   defaults: { kind: 'proportional', coefficient: 0.4 },
+  dryBars: () => 'A dry bar has nothing to lose; the coefficient applies to each bar on its own.',
   compute: computeProportional,
 };

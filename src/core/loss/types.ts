@@ -17,11 +17,22 @@ export interface ProportionalLoss {
   readonly coefficient: number;
 }
 /**
+ * Capacity recovery in dry spells, shared by the infiltration methods whose
+ * capacity falls as the soil wets (Horton, Green–Ampt). Both fields may be
+ * left out by callers written before they existed: no recovery then.
+ */
+export interface DrySpellRecovery {
+  /** Capacity recovers during bars with no rain (off when absent). */
+  readonly recovers?: boolean;
+  /** Recovery rate k_r, 1/h (DEFAULT_RECOVERY_PER_H when absent); read only while `recovers`. */
+  readonly recoveryPerH?: number;
+}
+/**
  * Horton infiltration capacity f(t) = f_c + (f_0 − f_c)·e^(−k t). `ponding`
- * false: t is time from the storm start; true: capacity follows cumulative
+ * false: t is time since the rain began; true: capacity follows cumulative
  * infiltration (time compression).
  */
-export interface HortonLoss {
+export interface HortonLoss extends DrySpellRecovery {
   readonly kind: 'horton';
   readonly f0MmH: number;
   readonly fcMmH: number;
@@ -29,17 +40,26 @@ export interface HortonLoss {
   readonly ponding: boolean;
 }
 /** Green–Ampt: saturated conductivity, wetting-front suction head, moisture deficit Δθ. */
-export interface GreenAmptLoss {
+export interface GreenAmptLoss extends DrySpellRecovery {
   readonly kind: 'green-ampt';
   readonly ksMmH: number;
   readonly suctionMm: number;
   readonly moistureDeficit: number;
 }
-/** NRCS curve number on the λ = 0.2 basis; `iaRatio` 0.05 converts S to that basis. */
+/**
+ * How S on the λ = 0.2 basis converts to the λ = 0.05 basis: 'power',
+ * S₀.₀₅ = 1.33·S₀.₂^1.15 with S in inches, or 'ratio', S₀.₀₅ = 1.42·S₀.₂.
+ */
+export type RetentionConversion = 'power' | 'ratio';
+/**
+ * NRCS curve number on the λ = 0.2 basis; `iaRatio` 0.05 converts S to that
+ * basis by `conversion` ('power' when absent).
+ */
 export interface CurveNumberLoss {
   readonly kind: 'curve-number';
   readonly cn: number;
   readonly iaRatio: 0.2 | 0.05;
+  readonly conversion?: RetentionConversion;
 }
 
 /**
@@ -89,6 +109,17 @@ export interface NumericParam<K extends LossKind = LossKind> {
    */
   readonly searchMin?: (storm: Storm, method: MethodOf<K>) => number;
   readonly help: string;
+  /**
+   * The value the core uses when a method object leaves this parameter out
+   * (it was added after callers were written). Absent: the parameter is required.
+   */
+  readonly omitted?: number;
+  /**
+   * Whether the parameter takes part under the method's other settings (the
+   * recovery rate only while capacity recovers). Absent: always. Screens
+   * hide, and exports leave out, a parameter that takes no part.
+   */
+  readonly activeWhen?: (method: MethodOf<K>) => boolean;
 }
 
 /** A non-numeric setting of a method (a switch or a choice). */
@@ -97,6 +128,15 @@ export interface ChoiceParam<K extends LossKind = LossKind> {
   readonly label: string;
   readonly choices: readonly { readonly value: boolean | number | string; readonly label: string }[];
   readonly help: string;
+  /** As for NumericParam: the value used when a method object leaves this out. */
+  readonly omitted?: boolean | number | string;
+  /** As for NumericParam: whether this setting takes part under the others. */
+  readonly activeWhen?: (method: MethodOf<K>) => boolean;
+  /**
+   * 'switch': a yes/no setting shown as one checkbox labelled `label`
+   * (choices must be true and false). Absent: one option per choice.
+   */
+  readonly display?: 'switch';
 }
 
 /**
@@ -145,6 +185,8 @@ export interface MethodSpec<K extends LossKind = LossKind> {
   readonly params: readonly NumericParam<K>[];
   readonly choices?: readonly ChoiceParam<K>[];
   readonly defaults: MethodOf<K>;
+  /** What happens in a bar with no rain under these settings, in a plain sentence or two. */
+  readonly dryBars: (method: MethodOf<K>) => string;
   readonly compute: ComputeFn<K>;
   /** Cross-parameter checks beyond each parameter's own range (throws InputError). */
   readonly validateExtra?: (method: MethodOf<K>) => void;
@@ -154,4 +196,23 @@ export interface MethodSpec<K extends LossKind = LossKind> {
    * test in test/core/loss/total-excess.test.ts holds every method to it).
    */
   readonly totalExcess?: TotalExcessFn<K>;
+  /**
+   * Optional: the infiltration capacity through the storm, for methods whose
+   * loss follows a capacity curve. See CapacityFn.
+   */
+  readonly capacity?: CapacityFn<K>;
 }
+
+/**
+ * Infiltration capacity, mm/h, at each of `timesH` (hours from the storm
+ * start, non-decreasing, within the storm), written to `out`: the state the
+ * method has reached at that moment, read as a rate. Inputs are clean.
+ * Infinity where the capacity is unbounded (Green–Ampt on dry soil).
+ */
+export type CapacityFn<K extends LossKind> = (
+  durationsH: ArrayLike<number>,
+  depthsMm: ArrayLike<number>,
+  method: MethodOf<K>,
+  timesH: ArrayLike<number>,
+  out: Float64Array,
+) => void;

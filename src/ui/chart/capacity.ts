@@ -1,7 +1,7 @@
 import { line } from 'd3-shape';
 import {
-  greenAmptRateMmH,
-  hortonCapacityMmH,
+  barEdgesH,
+  infiltrationCapacity,
   totalDurationH,
   type LossKind,
   type LossMethod,
@@ -11,12 +11,14 @@ import type { ChartFrame } from './frame';
 
 /**
  * Infiltration capacity through the storm, for the methods whose loss is a
- * capacity curve rather than a constant rate. Every value comes from the
- * core's own capacity functions; this file only decides where to sample them.
+ * capacity curve rather than a constant rate (Horton in both readings,
+ * Green–Ampt). Every value comes from the core's `infiltrationCapacity`, the
+ * state of the same bar steps that give the losses (recovery in dry spells
+ * included); this file only decides where to sample it.
  */
 export interface CapacityCurve {
   readonly label: string;
-  /** Path through the plot, or null when the core does not expose this variant's capacity. */
+  /** Path through the plot, or null when the core has no capacity for this method. */
   readonly path: (frame: ChartFrame, storm: Storm, method: LossMethod, lossMm: Float64Array) => string | null;
 }
 
@@ -31,56 +33,39 @@ function toPath(frame: ChartFrame, tH: ArrayLike<number>, rateMmH: ArrayLike<num
   return line()(points) ?? '';
 }
 
-const horton: CapacityCurve = {
+/**
+ * Times to sample, h from the storm start: every 2 px across the storm, and
+ * every bar edge while bars are wider than that (capacity bends there: rain
+ * starts, stops or changes), merged in order.
+ */
+export function capacitySampleTimes(frame: ChartFrame, storm: Storm): Float64Array {
+  const durationH = totalDurationH(storm);
+  const widthPx = Math.max(1, frame.x(durationH) - frame.x(0));
+  const samples = Math.max(2, Math.ceil(widthPx / 2));
+  const edges = storm.depthsMm.length <= samples ? barEdgesH(storm) : new Float64Array(0);
+  const out = new Float64Array(samples + 1 + edges.length);
+  let i = 0;
+  let e = 0;
+  for (let q = 0; q <= samples; q++) {
+    const t = (durationH * q) / samples;
+    while (e < edges.length && (edges[e] as number) < t) out[i++] = edges[e++] as number;
+    out[i++] = t;
+  }
+  while (e < edges.length) out[i++] = edges[e++] as number;
+  return out.subarray(0, i);
+}
+
+const coreCurve = (kind: LossKind): CapacityCurve => ({
   label: 'Infiltration capacity',
   path: (frame, storm, method) => {
-    if (method.kind !== 'horton') return null;
-    // With time compression the capacity follows the infiltrated depth, which
-    // the core does not expose as a function of time: nothing is drawn.
-    if (method.ponding) return null;
-    // Capacity follows clock time: f(t) = hortonCapacityMmH(t), sampled every 2 px.
-    const durationH = totalDurationH(storm);
-    const samples = Math.max(2, Math.ceil((frame.plot.right - frame.plot.left) / 2));
-    const tH = new Float64Array(samples + 1);
-    const rate = new Float64Array(samples + 1);
-    for (let i = 0; i <= samples; i++) {
-      tH[i] = (durationH * i) / samples;
-      rate[i] = hortonCapacityMmH(method.f0MmH, method.fcMmH, method.kPerH, tH[i] as number);
-    }
-    return toPath(frame, tH, rate);
+    if (method.kind !== kind || storm.depthsMm.length === 0) return null;
+    const tH = capacitySampleTimes(frame, storm);
+    const rate = infiltrationCapacity(storm, method, tH);
+    return rate ? toPath(frame, tH, rate) : null;
   },
-};
-
-const greenAmpt: CapacityCurve = {
-  label: 'Infiltration capacity (at bar ends)',
-  path: (frame, storm, method, lossMm) => {
-    if (method.kind !== 'green-ampt') return null;
-    // Capacity at each bar end from the depth infiltrated so far (the core's
-    // per-bar loss, all of which infiltrates in this method).
-    const n = lossMm.length;
-    const every = Math.max(1, Math.floor(n / Math.max(1, frame.plot.right - frame.plot.left)));
-    const count = Math.floor(n / every) + 1;
-    const tH = new Float64Array(count);
-    const rate = new Float64Array(count);
-    let t = 0;
-    let f = 0;
-    let j = 0;
-    for (let k = 0; k <= n; k++) {
-      if (k % every === 0 && j < count) {
-        tH[j] = t;
-        rate[j] = greenAmptRateMmH(method.ksMmH, method.suctionMm, method.moistureDeficit, f);
-        j++;
-      }
-      if (k < n) {
-        t += storm.durationsH[k] as number;
-        f += lossMm[k] as number;
-      }
-    }
-    return toPath(frame, tH.subarray(0, j), rate.subarray(0, j));
-  },
-};
+});
 
 export const CAPACITY_CURVES: Partial<Record<LossKind, CapacityCurve>> = {
-  horton,
-  'green-ampt': greenAmpt,
+  horton: coreCurve('horton'),
+  'green-ampt': coreCurve('green-ampt'),
 };

@@ -1,4 +1,4 @@
-import { methodSpec } from '../../core';
+import { methodSpec, paramApplies } from '../../core';
 import { useActions, useScenario, withDesignPick, withEventParameter } from '../../store';
 import { NumberField } from '../fields/NumberField';
 import { formatPercent, formatValue } from '../format';
@@ -54,11 +54,13 @@ export function FitAll() {
             actions.edit('Choose the parameter fitted for every event', (s) => withEventParameter(s, key));
           }}
         >
-          {spec.params.map((p) => (
-            <option key={p.key} value={p.key}>
-              {p.label}
-            </option>
-          ))}
+          {spec.params
+            .filter((p) => p.key === fits.parameter || paramApplies(p, fits.method))
+            .map((p) => (
+              <option key={p.key} value={p.key}>
+                {p.label}
+              </option>
+            ))}
         </select>
       </div>
 

@@ -1,4 +1,4 @@
-import { barEdgesH, methodSpec, type LossMethod, type LossResult, type UnitSystem } from '../../core';
+import { barEdgesH, methodSpec, paramApplies, type LossMethod, type LossResult, type UnitSystem } from '../../core';
 import { CAUTION_TEXT } from '../../scenario';
 import type { Scenario } from '../../scenario/types';
 import { wallClockMs } from '../chart/clock';
@@ -63,13 +63,15 @@ export function methodParametersText(
   const spec = methodSpec(method.kind);
   const values = method as unknown as Record<string, unknown>;
   const parts: string[] = [];
+  // Only what takes part under the other settings (no recovery rate while recovery is off).
   for (const p of spec.params) {
     const v = values[p.key];
-    if (typeof v !== 'number') continue;
+    if (typeof v !== 'number' || !paramApplies(p, method)) continue;
     const unit = paramUnitText(p.unit, units);
     parts.push(`${p.label} = ${format(paramToDisplay(p.unit, v, units))}${unit ? ` ${unit}` : ''}`);
   }
   for (const c of spec.choices ?? []) {
+    if (!paramApplies(c, method)) continue;
     const chosen = c.choices.find((o) => o.value === values[c.key]);
     if (chosen) parts.push(`${c.label}: ${chosen.label}`);
   }

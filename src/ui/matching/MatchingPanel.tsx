@@ -5,6 +5,7 @@ import {
   convertVolume,
   depthFromVolumeMm,
   methodSpec,
+  paramApplies,
   runoffVolumeM3,
   type UnitSystem,
   type VolumeUnit,
@@ -37,7 +38,8 @@ const DEFAULT_VOLUME_UNIT: Record<UnitSystem, VolumeUnit> = { si: 'm3', us: 'acr
 export function MatchingPanel() {
   const observed = useScenario((s) => s.observed);
   const units = useScenario((s) => s.units);
-  const kind = useScenario((s) => s.method.kind);
+  const method = useScenario((s) => s.method);
+  const kind = method.kind;
   const areaM2 = useScenario((s) => s.catchment.areaM2);
   const target = useDerived((d, s) => d.target(s));
   const fit = useDerived((d, s) => d.fit(s));
@@ -142,11 +144,13 @@ export function MatchingPanel() {
           value={parameter}
           onChange={(e) => actions.setObserved({ parameter: e.currentTarget.value })}
         >
-          {spec.params.map((p) => (
-            <option key={p.key} value={p.key}>
-              {p.label}
-            </option>
-          ))}
+          {spec.params
+            .filter((p) => p.key === parameter || paramApplies(p, method))
+            .map((p) => (
+              <option key={p.key} value={p.key}>
+                {p.label}
+              </option>
+            ))}
         </select>
       </div>
       <div className="matching__actions">

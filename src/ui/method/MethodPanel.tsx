@@ -4,6 +4,7 @@ import {
   isInputError,
   isLossKind,
   methodSpec,
+  paramApplies,
   validateMethod,
   type ChoiceParam,
   type LossMethod,
@@ -60,6 +61,26 @@ function ChoiceField({ choice, method }: { choice: ChoiceParam; method: LossMeth
   const value = valueOf(method, choice.key);
   const id = `choice-${choice.key}`;
   const index = choice.choices.findIndex((c) => c.value === value);
+  if (choice.display === 'switch') {
+    // A yes/no setting whose label says what "yes" means: one checkbox.
+    return (
+      <div className="field choice choice--switch">
+        <label className="choice__option">
+          <input
+            type="checkbox"
+            id={id}
+            checked={value === true}
+            aria-describedby={`${id}-hint`}
+            onChange={(e) => actions.setParam(choice.key, e.currentTarget.checked)}
+          />
+          <span>{choice.label}</span>
+        </label>
+        <p className="field__hint" id={`${id}-hint`}>
+          {choice.help}
+        </p>
+      </div>
+    );
+  }
   if (choice.choices.length <= MAX_RADIOS) {
     return (
       <fieldset className="field choice" aria-describedby={`${id}-hint`}>
@@ -139,14 +160,28 @@ export function MethodPanel() {
         </p>
       </div>
       <div className="method__params" key={method.kind}>
-        {spec.params.map((param) => (
-          <ParamField key={param.key} param={param} method={method} stored={stored} />
-        ))}
-        {(spec.choices ?? []).map((choice) => (
-          <ChoiceField key={choice.key} choice={choice} method={method} />
-        ))}
+        {/* Parameters that always apply, then the settings, then what a setting switches on (the recovery rate under its switch). */}
+        {spec.params
+          .filter((param) => !param.activeWhen)
+          .map((param) => (
+            <ParamField key={param.key} param={param} method={method} stored={stored} />
+          ))}
+        {(spec.choices ?? [])
+          .filter((choice) => paramApplies(choice, method))
+          .map((choice) => (
+            <ChoiceField key={choice.key} choice={choice} method={method} />
+          ))}
+        {spec.params
+          .filter((param) => param.activeWhen && paramApplies(param, method))
+          .map((param) => (
+            <ParamField key={param.key} param={param} method={method} stored={stored} />
+          ))}
         {method.kind === 'green-ampt' ? <SoilPresets /> : null}
       </div>
+      <p className="method__dry" id="method-dry-bars">
+        <span className="method__dry-label">In dry bars: </span>
+        {spec.dryBars(method as never)}
+      </p>
       <div className="method__foot">
         <button type="button" onClick={actions.resetMethodDefaults}>
           Use default values

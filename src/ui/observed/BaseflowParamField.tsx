@@ -21,7 +21,7 @@ const shown = (param: BaseflowParam, v: number): number => (param.unit === 'samp
 const stored = (param: BaseflowParam, v: number): number => (param.unit === 'sample' ? v - 1 : v);
 
 export function paramUnitWords(param: BaseflowParam): string {
-  return param.unit === 'h' ? 'h' : param.unit === 'sample' ? 'sample no.' : '';
+  return param.unit === 'h' ? 'h' : param.unit === 'sample' ? 'sample no.' : param.unit === 'samples' ? 'samples' : '';
 }
 
 /**

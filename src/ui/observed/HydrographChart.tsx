@@ -157,6 +157,11 @@ function HydrographPlot({ flow }: { flow: Streamflow }) {
           Baseflow cannot be separated: {separation.message}
         </p>
       ) : null}
+      {separation?.ok && separation.result.notice ? (
+        <p className="chart__notice" role="status">
+          {separation.result.notice}
+        </p>
+      ) : null}
     </>
   );
 }

@@ -261,6 +261,12 @@ export function SeparationPanel() {
             </p>
           </div>
           <ParamFields flow={flow} spec={spec} />
+          {spec.conventions ? (
+            <p className="field__hint separation__conventions" id="baseflow-conventions">
+              <span className="separation__conventions-label">How the filter runs: </span>
+              {spec.conventions}
+            </p>
+          ) : null}
           {flow.baseflow.kind === 'straight-line' ? (
             <RecessionEnd automatic={valueOf(flow.baseflow, 'endTimeH') === undefined} />
           ) : null}

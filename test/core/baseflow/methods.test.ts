@@ -45,9 +45,9 @@ describe('the table of baseflow methods', () => {
     }
   });
 
-  it('uses the common-practice filter defaults: α = 0.925 with 3 passes; a = 0.98, BFImax = 0.80', () => {
-    expect(defaultBaseflowMethod('lyne-hollick')).toEqual({ kind: 'lyne-hollick', alpha: 0.925, passes: 3 });
-    expect(defaultBaseflowMethod('eckhardt')).toEqual({ kind: 'eckhardt', a: 0.98, bfiMax: 0.8 });
+  it('uses the common-practice daily filter defaults, scaled to the record’s step: α = 0.925 with 3 passes; a = 0.98, BFImax = 0.80; each per 24 h', () => {
+    expect(defaultBaseflowMethod('lyne-hollick')).toEqual({ kind: 'lyne-hollick', alpha: 0.925, passes: 3, stepH: 24 });
+    expect(defaultBaseflowMethod('eckhardt')).toEqual({ kind: 'eckhardt', a: 0.98, bfiMax: 0.8, stepH: 24 });
   });
 
   it('runs every method with its defaults on a daily-scale flood', () => {

@@ -100,11 +100,21 @@ describe('straight-line separation', () => {
     expect(inputErrorOf(() => separateBaseflow(h, late)).field).toBe('endTimeH');
   });
 
-  it('says so when N = A^0.2 days runs past the end of the record', () => {
+  it('ends at the last sample when N = A^0.2 days runs past the end of the record, and says so', () => {
+    // 100 mi²: N = 100^0.2 = 2.512 days, 60.3 h after the 1 h peak; the record ends at 3 h.
     const h = { timesH: [0, 1, 2, 3], dischargeM3s: [1, 5, 3, 1] };
-    const error = inputErrorOf(() => separateBaseflow(h, { kind: 'straight-line' }, { areaM2: 100 * MI2 }));
-    expect(error.field).toBe('endTimeH');
-    expect(error.message).toMatch(/2\.512 days/);
+    const result = separateBaseflow(h, { kind: 'straight-line' }, { areaM2: 100 * MI2 });
+    expect(result.endTimeH).toBe(3);
+    expect(result.notice).toMatch(
+      /^N = A\^0\.2 = 2\.512 days puts the end 61\.29 h after the first sample, past the record's last sample \(3 h\), so the line ends at the last sample instead\./,
+    );
+    // The same as an end point given at the last sample: line from (0, 1) to (3, 1), the triangle above it.
+    const given = separateBaseflow(h, { kind: 'straight-line', endTimeH: 3 });
+    expect(result.directVolumeM3).toBe(given.directVolumeM3);
+    expect(given.notice).toBeUndefined();
+    // Inside the record: no notice.
+    const small = separateBaseflow(h, { kind: 'straight-line' }, { areaM2: 1e-9 * MI2 });
+    expect(small.notice).toBeUndefined();
   });
 
   it('matches a fine numerical integral of the flow above the line on any record', () => {

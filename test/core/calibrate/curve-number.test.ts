@@ -9,14 +9,15 @@ import {
   curveNumberRetentionMm,
   solveMonotone,
   type CurveNumberLoss,
+  type RetentionConversion,
   type Storm,
 } from '../../../src/core';
 import { stormArb } from '../../helpers/arbitraries';
 import { expectClose } from '../../helpers/tolerance';
 
 const IN = 25.4;
-const excess = (storm: Storm, cn: number, iaRatio: 0.2 | 0.05): number =>
-  computeLosses(storm, { kind: 'curve-number', cn, iaRatio }).totalExcessMm;
+const excess = (storm: Storm, cn: number, iaRatio: 0.2 | 0.05, conversion: RetentionConversion = 'power'): number =>
+  computeLosses(storm, { kind: 'curve-number', cn, iaRatio, conversion }).totalExcessMm;
 
 describe('curve number from an observed runoff (Hawkins 1993 closed form)', () => {
   it('gives S = 5[P + 2Q − √(4Q² + 5PQ)] for λ = 0.2: P = 5 in, Q = 2 in → CN 69.54', () => {
@@ -32,19 +33,20 @@ describe('curve number from an observed runoff (Hawkins 1993 closed form)', () =
     expectClose(r.excessMm, 2 * IN, 1e-12);
   });
 
-  it('agrees with Brent’s method on random storms and targets, for both Iₐ ratios (to 1e-9 relative)', () => {
+  it('agrees with Brent’s method on random storms and targets, for both Iₐ ratios and both S conversions (to 1e-9 relative)', () => {
     fc.assert(
       fc.property(
         stormArb(40),
         fc.double({ min: 20, max: 100, noNaN: true }),
         fc.constantFrom(0.2 as const, 0.05 as const),
-        (storm, truth, iaRatio) => {
-          const target = excess(storm, truth, iaRatio);
+        fc.constantFrom('power' as const, 'ratio' as const),
+        (storm, truth, iaRatio, conversion) => {
+          const target = excess(storm, truth, iaRatio, conversion);
           const rain = storm.depthsMm.reduce((a, b) => a + b, 0);
           if (!(target > 1e-9 * rain)) return; // zero runoff: a plateau, see below
-          const closed = calibrate(storm, { kind: 'curve-number', cn: 50, iaRatio }, 'cn', target);
+          const closed = calibrate(storm, { kind: 'curve-number', cn: 50, iaRatio, conversion }, 'cn', target);
           // The generic path: Brent on the same bounds calibrate uses for other parameters.
-          const brent = solveMonotone((cn) => excess(storm, cn, iaRatio), 1e-9, 100, target);
+          const brent = solveMonotone((cn) => excess(storm, cn, iaRatio, conversion), 1e-9, 100, target);
           expect(closed.ok && brent.ok).toBe(true);
           if (!closed.ok || !brent.ok) return;
           expect(Math.abs(closed.value - truth)).toBeLessThanOrEqual(1e-9 * truth);
@@ -90,10 +92,12 @@ describe('curve number from an observed runoff (Hawkins 1993 closed form)', () =
     const p = 100;
     for (const q of [1e-12, 1e-6, 1, 50, 99.999999, 100 - 1e-10]) {
       for (const iaRatio of [0.2, 0.05] as const) {
-        const cn = curveNumberFromRunoff(p, q, iaRatio);
-        const m: CurveNumberLoss = { kind: 'curve-number', cn, iaRatio };
-        const back = computeLosses({ durationsH: [1], depthsMm: [p] }, m).totalExcessMm;
-        expect(Math.abs(back - q)).toBeLessThanOrEqual(1e-12 * p);
+        for (const conversion of ['power', 'ratio'] as const) {
+          const cn = curveNumberFromRunoff(p, q, iaRatio, conversion);
+          const m: CurveNumberLoss = { kind: 'curve-number', cn, iaRatio, conversion };
+          const back = computeLosses({ durationsH: [1], depthsMm: [p] }, m).totalExcessMm;
+          expect(Math.abs(back - q)).toBeLessThanOrEqual(1e-12 * p);
+        }
       }
     }
   });

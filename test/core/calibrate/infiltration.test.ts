@@ -38,7 +38,31 @@ const CASES: readonly Case[] = [
       { name: `Horton k (${mode})`, method: hortonBase(ponding), key: 'kPerH', low: 0.02, high: 50 },
     ];
   }),
+  // With capacity recovering in dry spells (stormArb's storms have dry bars).
+  ...[true, false].flatMap((ponding): Case[] => {
+    const mode = ponding ? 'time compression' : 'by the clock';
+    const method: LossMethod = { ...hortonBase(ponding), recovers: true, recoveryPerH: 0.3 } as LossMethod;
+    return [
+      { name: `Horton f₀ with recovery (${mode})`, method, key: 'f0MmH', low: 10, high: 400 },
+      { name: `Horton k with recovery (${mode})`, method, key: 'kPerH', low: 0.02, high: 50 },
+      { name: `Horton k_r (${mode})`, method, key: 'recoveryPerH', low: 0.01, high: 20 },
+    ];
+  }),
   { name: 'Green–Ampt K', method: greenAmptBase, key: 'ksMmH', low: 0.05, high: 60 },
+  {
+    name: 'Green–Ampt K with recovery',
+    method: { ...greenAmptBase, recovers: true, recoveryPerH: 0.3 } as LossMethod,
+    key: 'ksMmH',
+    low: 0.05,
+    high: 60,
+  },
+  {
+    name: 'Green–Ampt k_r',
+    method: { ...greenAmptBase, recovers: true, recoveryPerH: 0.3 } as LossMethod,
+    key: 'recoveryPerH',
+    low: 0.01,
+    high: 20,
+  },
   { name: 'Green–Ampt ψ', method: greenAmptBase, key: 'suctionMm', low: 0, high: 400 },
   { name: 'Green–Ampt Δθ', method: greenAmptBase, key: 'moistureDeficit', low: 0, high: 1 },
   {
@@ -49,8 +73,15 @@ const CASES: readonly Case[] = [
     high: 100,
   },
   {
-    name: 'curve number, Iₐ = 0.05 S',
-    method: { kind: 'curve-number', cn: 75, iaRatio: 0.05 },
+    name: 'curve number, Iₐ = 0.05 S, power relation',
+    method: { kind: 'curve-number', cn: 75, iaRatio: 0.05, conversion: 'power' },
+    key: 'cn',
+    low: 20,
+    high: 100,
+  },
+  {
+    name: 'curve number, Iₐ = 0.05 S, constant ratio',
+    method: { kind: 'curve-number', cn: 75, iaRatio: 0.05, conversion: 'ratio' },
     key: 'cn',
     low: 20,
     high: 100,

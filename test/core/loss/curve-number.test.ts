@@ -1,5 +1,11 @@
 import { describe, expect, it } from 'vitest';
-import { computeLosses, curveNumberRetentionMm, curveNumberRunoffMm, validateMethod } from '../../../src/core';
+import {
+  computeLosses,
+  curveNumberRetentionMm,
+  curveNumberRunoffMm,
+  validateMethod,
+  type LossMethod,
+} from '../../../src/core';
 import { readFixtureCsv } from '../../helpers/fixture-csv';
 import { expectClose } from '../../helpers/tolerance';
 import { expectInputError } from '../../helpers/input-error';
@@ -71,12 +77,49 @@ describe('curve number runoff', () => {
     expect(Array.from(r.excessMm)).toEqual([3, 7]);
   });
 
-  it('on the 0.05 basis uses S₀.₀₅ = 1.42·S₀.₂ and Iₐ = 0.05·S₀.₀₅', () => {
+  it('on the 0.05 basis by the constant ratio uses S₀.₀₅ = 1.42·S₀.₂ and Iₐ = 0.05·S₀.₀₅ (Woodward et al. 2003, from memory)', () => {
     // Hand computation from those equations: CN 80 → S₀.₂ = 63.5 mm,
     // S₀.₀₅ = 90.17 mm, Iₐ = 4.5085 mm; P = 50 mm → Q = 45.4915²/(45.4915 + 90.17).
-    expectClose(curveNumberRetentionMm(80, 0.05), 90.17, 1e-13);
-    const r = computeLosses({ durationsH: [3], depthsMm: [50] }, { kind: 'curve-number', cn: 80, iaRatio: 0.05 });
+    expectClose(curveNumberRetentionMm(80, 0.05, 'ratio'), 90.17, 1e-13);
+    const r = computeLosses(
+      { durationsH: [3], depthsMm: [50] },
+      { kind: 'curve-number', cn: 80, iaRatio: 0.05, conversion: 'ratio' },
+    );
     expectClose(r.totalExcessMm, (45.4915 * 45.4915) / (45.4915 + 90.17), 1e-12);
+  });
+
+  it('on the 0.05 basis by the power relation uses S₀.₀₅ = 1.33·S₀.₂^1.15, S in inches (Woodward et al. 2003; Hawkins et al. 2009; from memory)', () => {
+    // By hand: CN 60 → S₀.₂ = 1000/60 − 10 = 6.6667 in; 6.6667^1.15 = e^(1.15·1.897120)
+    // = 8.861251; S₀.₀₅ = 1.33·8.861251 = 11.785464 in = 299.35079 mm, Iₐ = 14.967540 mm.
+    // P = 200 mm: x = P − Iₐ = 185.032460, Q = x²/(x + S) = 34237.01/484.38325 = 70.68166 mm.
+    const power: LossMethod = { kind: 'curve-number', cn: 60, iaRatio: 0.05, conversion: 'power' };
+    expectClose(curveNumberRetentionMm(60, 0.05, 'power'), 25.4 * 1.33 * Math.pow(1000 / 60 - 10, 1.15), 1e-13);
+    expectClose(curveNumberRetentionMm(60, 0.05, 'power'), 299.35079, 1e-7);
+    const r = computeLosses({ durationsH: [6], depthsMm: [200] }, power);
+    expectClose(r.totalExcessMm, 70.68166, 1e-6);
+    // The same storm by the constant ratio: S₀.₀₅ = 1.42·169.3333 = 240.4533 mm, Iₐ = 12.022667 mm,
+    // x = 187.977333, Q = 35335.48/428.43067 = 82.47654 mm: 11.8 mm more runoff.
+    const ratio = computeLosses({ durationsH: [6], depthsMm: [200] }, { ...power, conversion: 'ratio' } as LossMethod);
+    expectClose(ratio.totalExcessMm, 82.47654, 1e-6);
+  });
+
+  it('uses the power relation when the conversion is left out, and ignores the conversion on the 0.2 basis', () => {
+    const storm = { durationsH: [6], depthsMm: [120] };
+    const left = computeLosses(storm, { kind: 'curve-number', cn: 65, iaRatio: 0.05 });
+    const power = computeLosses(storm, { kind: 'curve-number', cn: 65, iaRatio: 0.05, conversion: 'power' });
+    expect(left.totalExcessMm).toBe(power.totalExcessMm);
+    const a = computeLosses(storm, { kind: 'curve-number', cn: 65, iaRatio: 0.2, conversion: 'power' });
+    const b = computeLosses(storm, { kind: 'curve-number', cn: 65, iaRatio: 0.2, conversion: 'ratio' });
+    expect(a.totalExcessMm).toBe(b.totalExcessMm);
+  });
+
+  it('gives the same S by both conversions where they cross, S₀.₂ = (1.42/1.33)^(1/0.15) = 1.547 in (CN 86.6)', () => {
+    // 1.33·S^1.15 = 1.42·S ⇔ S^0.15 = 1.42/1.33 ⇔ S = 1.0676692^6.6667
+    // = e^(6.6667·0.0654770) = e^0.436513 = 1.54731 in, CN = 1000/11.54731 = 86.60.
+    const s02In = Math.pow(1.42 / 1.33, 1 / 0.15);
+    expectClose(s02In, 1.54731, 1e-5);
+    const cn = 1000 / (s02In + 10);
+    expectClose(curveNumberRetentionMm(cn, 0.05, 'power'), curveNumberRetentionMm(cn, 0.05, 'ratio'), 1e-12);
   });
 
   it('on the 0.05 basis makes runoff from rain that the 0.2 basis fully abstracts', () => {
@@ -105,6 +148,7 @@ describe('curve number input checks', () => {
     [{ kind: 'curve-number', cn: 101, iaRatio: 0.2 }, 'cn', /got 101/],
     [{ kind: 'curve-number', cn: Number.NaN, iaRatio: 0.2 }, 'cn', /finite number/],
     [{ kind: 'curve-number', cn: 70, iaRatio: 0.1 }, 'iaRatio', /0\.2 or 0\.05/],
+    [{ kind: 'curve-number', cn: 70, iaRatio: 0.05, conversion: 'linear' }, 'conversion', /"power" or "ratio"/],
   ])('rejects %o naming the field', (method, field, message) => {
     expectInputError(() => validateMethod(method as never), field, message);
   });

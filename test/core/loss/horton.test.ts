@@ -6,6 +6,7 @@ import {
   hortonCumulativeMm,
   validateMethod,
   type HortonLoss,
+  type Storm,
 } from '../../../src/core';
 import { stormArb } from '../../helpers/arbitraries';
 import { expectClose } from '../../helpers/tolerance';
@@ -47,7 +48,7 @@ function rk4TimeCompression(m: HortonLoss, durationsH: number[], depthsMm: numbe
   return losses;
 }
 
-describe('Horton, capacity from storm start', () => {
+describe('Horton by time since the rain began (ponding: false)', () => {
   it('loses the closed-form cumulative infiltration F(t) = f_c t + (f₀ − f_c)(1 − e^(−kt))/k when rain always exceeds capacity (Horton 1940)', () => {
     const m = horton(false);
     const durationsH = [0.1, 0.35, 0.05, 0.5, 1.25];
@@ -63,58 +64,137 @@ describe('Horton, capacity from storm start', () => {
     }
   });
 
-  it('loses a whole bar whose rain is below the capacity integrated over it', () => {
-    const m = horton(false);
-    // Bar 2 (0.5–1.5 h): ∫f dt = 8 + (52/3)(e^(−1.5) − e^(−4.5)) = 11.67 mm > 10 mm.
-    const r = computeLosses({ durationsH: [0.5, 1], depthsMm: [40, 10] }, m);
-    expect(r.lossMm[1]).toBe(10);
+  // 60 mm in 2 h (i = 30 mm/h), f₀ = 100, f_c = 10 mm/h, k = 4 /h, worked by hand
+  // from L = ∫₀² min(30, f(t)) dt with f(t) = 10 + 90e^(−4t) (Horton 1940):
+  //   crossing f(t_c) = 30: e^(−4 t_c) = 20/90 = 2/9, t_c = ln(4.5)/4 = 0.376019 h;
+  //   before it all rain soaks in: 30·t_c;
+  //   after it the curve from f = 30: 10·(2 − t_c) + (30 − 10)/4·(1 − e^(−4(2 − t_c))),
+  //   with e^(−4(2 − t_c)) = e^(−8)·e^(4 t_c) = 4.5·e^(−8);
+  //   L = 30 t_c + 20 − 10 t_c + 5 − 22.5 e^(−8) = 25 + 5 ln 4.5 − 22.5 e^(−8) = 32.512839 mm,
+  //   excess = 60 − L = 35 − 5 ln 4.5 + 22.5 e^(−8) = 27.487161 mm.
+  // (The old per-bar rule min(P, ∫f dt) gave 17.5 mm for one bar, 27.0 mm for
+  // four half-hour bars and 27.5 mm for 2,000 bars.)
+  const WORKED_EXCESS_MM = 35 - 5 * Math.log(4.5) + 22.5 * Math.exp(-8); // 27.48716092524643
+  const worked: HortonLoss = { kind: 'horton', f0MmH: 100, fcMmH: 10, kPerH: 4, ponding: false };
+  const cut = (bars: number): Storm => ({
+    durationsH: Array(bars).fill(2 / bars) as number[],
+    depthsMm: Array(bars).fill(60 / bars) as number[],
+  });
+
+  it('gives 35 − 5 ln 4.5 + 22.5 e^(−8) = 27.4872 mm of excess for 60 mm in one 2-hour bar (worked by hand)', () => {
+    expect(WORKED_EXCESS_MM).toBeCloseTo(27.487160925, 8);
+    expectClose(computeLosses(cut(1), worked).totalExcessMm, WORKED_EXCESS_MM, 1e-13);
+  });
+
+  it.each([2, 4, 7, 2000])('gives the same 27.4872 mm when the 2 hours are cut into %i bars', (bars) => {
+    expectClose(computeLosses(cut(bars), worked).totalExcessMm, WORKED_EXCESS_MM, 1e-11);
+  });
+
+  it('starts the clock at the first bar with rain: dry bars before it leave the capacity at f₀', () => {
+    // 30 mm in 0.5 h (60 mm/h ≥ f₀ = 60) after two dry hours loses the whole
+    // curve from τ = 0: 8·0.5 + (52/3)(1 − e^(−1.5)) = 17.465744 mm (Horton 1940).
+    const r = computeLosses({ durationsH: [1.5, 0.5, 0.5], depthsMm: [0, 0, 30] }, horton(false));
+    expectClose(r.lossMm[2] as number, 8 * 0.5 + (52 / 3) * (1 - Math.exp(-1.5)), 1e-13);
+    expectClose(r.lossMm[2] as number, 17.46574389076055, 1e-13);
+  });
+
+  it('lets the clock run on through dry bars once the rain has begun (without recovery)', () => {
+    // 80 mm/h bars at 0–0.5 h and 1.5–2 h: the second loses ∫ f over τ = 1.5…2,
+    // 8·0.5 + (52/3)(e^(−4.5) − e^(−6)) = 4.149591 mm.
+    const r = computeLosses({ durationsH: [0.5, 1, 0.5], depthsMm: [40, 0, 40] }, horton(false));
+    expectClose(r.lossMm[2] as number, 8 * 0.5 + (52 / 3) * (Math.exp(-4.5) - Math.exp(-6)), 1e-13);
+  });
+
+  it('loses all of a bar whose rain stays below the capacity at its end', () => {
+    // Bar 2 (0.5–1.5 h) rains 5 mm/h, below f_c = 8 mm/h: nothing runs off.
+    const r = computeLosses({ durationsH: [0.5, 1], depthsMm: [40, 5] }, horton(false));
+    expect(r.lossMm[1]).toBe(5);
     expectClose(r.lossMm[0] as number, 8 * 0.5 + (52 / 3) * (1 - Math.exp(-1.5)), 1e-14);
   });
 
-  it('lets capacity fall during dry bars, unlike time compression', () => {
-    const storm = { durationsH: [2, 0.5], depthsMm: [0, 30] };
-    const plain = computeLosses(storm, horton(false));
-    const compressed = computeLosses(storm, horton(true));
-    expectClose(plain.lossMm[1] as number, 8 * 0.5 + (52 / 3) * (Math.exp(-6) - Math.exp(-7.5)), 1e-13);
-    expectClose(compressed.lossMm[1] as number, hortonCumulativeMm(60, 8, 3, 0.5), 1e-13);
+  it('loses ∫ min(i, f) dt inside a bar where the capacity crosses the rain (checked against fine numerical integration)', () => {
+    // Independent reference: the midpoint rule on min(i, f(t)) with 200,000 steps
+    // per bar, the crossing kink costing at most one step's error.
+    const m = horton(false, 90, 5, 2.5);
+    const storm = { durationsH: [0.25, 0.75, 0.4, 1.6], depthsMm: [3, 30, 0, 20] };
+    const r = computeLosses(storm, m);
+    let t0 = 0;
+    let started = false;
+    for (let j = 0; j < 4; j++) {
+      const d = storm.durationsH[j] as number;
+      const i = (storm.depthsMm[j] as number) / d;
+      if (i > 0) started = true;
+      const steps = 200_000;
+      let sum = 0;
+      for (let q = 0; q < steps; q++) {
+        const tau = t0 + ((q + 0.5) * d) / steps;
+        sum += Math.min(i, 5 + 85 * Math.exp(-2.5 * tau));
+      }
+      expect(Math.abs((r.lossMm[j] as number) - (sum * d) / steps)).toBeLessThanOrEqual(1e-6);
+      if (started) t0 += d;
+    }
+  });
+});
+
+describe('Horton with capacity recovery in dry spells (f₀ − f = (f₀ − f_w)·e^(−k_r t): Bedient, Huber & Vieux, Hydrology and Floodplain Analysis; from memory)', () => {
+  const recovering = (ponding: boolean, recoveryPerH = 0.5): HortonLoss => ({
+    ...horton(ponding),
+    recovers: true,
+    recoveryPerH,
   });
 
-  it('changes under splitting a bar by at most half the difference of the halves’ capacities (stated tolerance)', () => {
-    // Splitting bar [t_a, t_b] with capacities C₁ ≥ C₂ of its halves changes that
-    // bar's loss from min(P, C₁ + C₂) to min(P/2, C₁) + min(P/2, C₂): never up,
-    // and down by at most (C₁ − C₂)/2 = (f₀ − f_c)/(2k)·e^(−k t_a)(1 − e^(−kΔt/2))².
-    fc.assert(
-      fc.property(
-        stormArb(30),
-        fc.double({ min: 0, max: 40, noNaN: true }),
-        fc.double({ min: 0, max: 200, noNaN: true }),
-        fc.double({ min: 0.01, max: 20, noNaN: true }),
-        fc.nat(),
-        (storm, fcMmH, extra, kPerH, pick) => {
-          const m = horton(false, fcMmH + extra, fcMmH, kPerH);
-          const j = pick % storm.depthsMm.length;
-          const d = storm.durationsH[j] as number;
-          let ta = 0;
-          for (let q = 0; q < j; q++) ta += storm.durationsH[q] as number;
-          const split = {
-            durationsH: storm.durationsH.flatMap((x, q) => (q === j ? [x / 2, x / 2] : [x])),
-            depthsMm: storm.depthsMm.flatMap((x, q) => (q === j ? [x / 2, x / 2] : [x])),
-          };
-          const whole = computeLosses(storm, m).totalLossMm;
-          const halves = computeLosses(split, m).totalLossMm;
-          const bound = (extra / (2 * kPerH)) * Math.exp(-kPerH * ta) * (1 - Math.exp((-kPerH * d) / 2)) ** 2;
-          const slack = 1e-12 * Math.max(1, whole);
-          expect(halves).toBeLessThanOrEqual(whole + slack);
-          expect(whole - halves).toBeLessThanOrEqual(bound + slack);
-        },
-      ),
-      { numRuns: 300 },
-    );
+  it('by the clock, regains f₀ − f by e^(−k_r t) over a dry spell and falls again from there', () => {
+    // After 0.5 h at 80 mm/h: D₁ = e^(−1.5). Two dry hours at k_r = 0.5 /h:
+    // 1 − D₂ = (1 − e^(−1.5))·e^(−1), D₂ = 0.714206. The next 80 mm/h bar then loses
+    // the curve from D₂: 8·0.5 + (52/3)·D₂·(1 − e^(−1.5)) = 13.617309 mm.
+    const storm = { durationsH: [0.5, 2, 0.5], depthsMm: [40, 0, 40] };
+    const d2 = 1 - (1 - Math.exp(-1.5)) * Math.exp(-1);
+    const expected = 8 * 0.5 + (52 / 3) * d2 * (1 - Math.exp(-1.5));
+    expect(expected).toBeCloseTo(13.617309122, 8);
+    expectClose(computeLosses(storm, recovering(false)).lossMm[2] as number, expected, 1e-13);
+  });
+
+  it('by infiltrated depth, gives the same as by the clock when every wet bar is above f₀', () => {
+    // Both readings then ride the curve; recovery moves both to the same D₂.
+    const storm = { durationsH: [0.5, 2, 0.5], depthsMm: [40, 0, 40] };
+    const byDepth = computeLosses(storm, recovering(true));
+    const byClock = computeLosses(storm, recovering(false));
+    for (let j = 0; j < 3; j++) expectClose(byDepth.lossMm[j] as number, byClock.lossMm[j] as number, 1e-13);
+  });
+
+  it('by infiltrated depth, moves F back to the depth the curve holds at the recovered capacity', () => {
+    // After the dry spell the soil holds F₂ = 8τ₂ + (52/3)(1 − D₂), τ₂ = −ln(D₂)/3.
+    // A storm that soaks in exactly F₂ at 2 mm/h (below f_c: no move along the
+    // curve, all infiltrates) and then meets the same 30 mm/h bar must lose the same.
+    const d2 = 1 - (1 - Math.exp(-1.5)) * Math.exp(-1);
+    const f2 = (8 * -Math.log(d2)) / 3 + (52 / 3) * (1 - d2);
+    const recovered = computeLosses({ durationsH: [0.5, 2, 0.5], depthsMm: [40, 0, 15] }, recovering(true));
+    const refilled = computeLosses({ durationsH: [f2 / 2, 0.5], depthsMm: [f2, 15] }, horton(true));
+    expectClose(recovered.lossMm[2] as number, refilled.lossMm[1] as number, 1e-12);
+  });
+
+  it('recovers fully after a long dry spell, and not at all with the option off', () => {
+    for (const ponding of [false, true]) {
+      const storm = { durationsH: [1, 200, 0.5], depthsMm: [80, 0, 40] };
+      const fresh = computeLosses({ durationsH: [0.5], depthsMm: [40] }, horton(ponding));
+      expectClose(computeLosses(storm, recovering(ponding)).lossMm[2] as number, fresh.lossMm[0] as number, 1e-12);
+      const off = computeLosses(storm, { ...recovering(ponding), recovers: false });
+      expect(off.lossMm[2] as number).toBeLessThan((fresh.lossMm[0] as number) - 1);
+    }
+  });
+
+  it('ignores the recovery rate while the option is off (the same as leaving both out)', () => {
+    const storm = { durationsH: [0.5, 2, 0.5], depthsMm: [40, 0, 40] };
+    for (const ponding of [false, true]) {
+      const plain = computeLosses(storm, horton(ponding));
+      const off = computeLosses(storm, { ...horton(ponding), recovers: false, recoveryPerH: 3 });
+      expect(Array.from(off.lossMm)).toEqual(Array.from(plain.lossMm));
+    }
   });
 });
 
 describe('Horton with time compression (capacity follows infiltrated depth)', () => {
-  it('equals the storm-start form when rain always exceeds capacity', () => {
+  it('equals the clock form when rain always exceeds capacity', () => {
     const durationsH = [0.2, 0.05, 0.75, 0.4, 2];
     const depthsMm = [16, 5, 50, 30, 140]; // 80, 100, 67, 75, 70 mm/h: all above f₀ = 60 mm/h
     const plain = computeLosses({ durationsH, depthsMm }, horton(false));
@@ -204,6 +284,9 @@ describe('Horton input checks', () => {
     [{ ...horton(true), kPerH: 0 }, 'kPerH', /greater than 0 1\/h/],
     [{ ...horton(true), f0MmH: Number.POSITIVE_INFINITY }, 'f0MmH', /finite number/],
     [{ ...horton(true), ponding: 'yes' }, 'ponding', /true or false/],
+    [{ ...horton(true), recovers: 'yes' }, 'recovers', /true or false/],
+    [{ ...horton(true), recovers: true, recoveryPerH: -0.1 }, 'recoveryPerH', /at least 0 1\/h/],
+    [{ ...horton(true), recoveryPerH: Number.NaN }, 'recoveryPerH', /finite number/],
   ])('rejects a bad method naming %#', (method, field, message) => {
     expectInputError(() => validateMethod(method as never), field, message);
   });

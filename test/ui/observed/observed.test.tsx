@@ -51,6 +51,8 @@ async function pasteRecord(user: ReturnType<typeof renderWorkbench>['user'], tex
   return dialog;
 }
 
+const escapeRegExp = (text: string): string => text.replace(/[.*+?^${}()|[\]\\]/g, '\\$&');
+
 describe('bringing a streamflow record in', () => {
   it('paste shows what was understood, and "Use this record" puts it under the hyetograph as one undo step', async () => {
     const { user, scenario, store } = renderWorkbench();
@@ -166,21 +168,22 @@ describe('separating baseflow', () => {
     ).toEqual(Object.values(BASEFLOW_METHODS).map((m) => m.label));
     await user.selectOptions(picker, 'lyne-hollick');
     for (const p of BASEFLOW_METHODS['lyne-hollick'].params)
-      expect(screen.getByLabelText(new RegExp(`^${p.label}`))).toBeInTheDocument();
+      expect(screen.getByLabelText(new RegExp(`^${escapeRegExp(p.label)}`))).toBeInTheDocument();
     expect(screen.getByLabelText(/^Filter parameter α/)).toHaveValue('0.925');
     expect(screen.getByLabelText(/^Passes/)).toHaveValue('3');
+    expect(screen.getByLabelText(/^Time step of α/)).toHaveValue('24');
     expect(screen.queryByRole('slider', { name: 'End of direct runoff' })).not.toBeInTheDocument();
-    const filtered = separate({ kind: 'lyne-hollick', alpha: 0.925, passes: 3 });
+    const filtered = separate({ kind: 'lyne-hollick', alpha: 0.925, passes: 3, stepH: 24 });
     expect(screen.getByLabelText('Direct runoff volume')).toHaveTextContent(m3(filtered.directVolumeM3));
     await user.clear(screen.getByLabelText(/^Passes/));
     await user.type(screen.getByLabelText(/^Passes/), '1');
     expect(screen.getByLabelText('Direct runoff volume')).toHaveTextContent(
-      m3(separate({ kind: 'lyne-hollick', alpha: 0.925, passes: 1 }).directVolumeM3),
+      m3(separate({ kind: 'lyne-hollick', alpha: 0.925, passes: 1, stepH: 24 }).directVolumeM3),
     );
     await user.selectOptions(picker, 'straight-line');
     expect(flowOf(scenario()).baseflow).toEqual({ kind: 'straight-line', endTimeH: 7 });
     await user.selectOptions(picker, 'lyne-hollick');
-    expect(flowOf(scenario()).baseflow).toEqual({ kind: 'lyne-hollick', alpha: 0.925, passes: 1 });
+    expect(flowOf(scenario()).baseflow).toEqual({ kind: 'lyne-hollick', alpha: 0.925, passes: 1, stepH: 24 });
   });
 
   it('a bad parameter keeps what was typed, says why, and changes nothing', async () => {
@@ -285,7 +288,7 @@ describe('the end point', () => {
     expect(scenario()).toBe(WITH_TRIANGLE);
   });
 
-  it('"End at N = A^0.2 days after the peak" uses the area, and says plainly when that falls past the record', async () => {
+  it('"End at N = A^0.2 days after the peak" uses the area, and when that falls past the record ends at the last sample and says so', async () => {
     const { user, scenario, actions } = renderWorkbench(WITH_TRIANGLE);
     const button = screen.getByRole('button', { name: 'End at N = A^0.2 days after the peak' });
     const days = recessionDays(AREA_M2);
@@ -293,11 +296,17 @@ describe('the end point', () => {
     await user.click(button);
     expect(flowOf(scenario()).baseflow).toEqual({ kind: 'straight-line' });
     expect(button).toHaveAttribute('aria-pressed', 'true');
-    // For 1 km² N is 0.83 days, past the end of a 12-hour record: the core's message, and a handle to drag instead.
-    expect(screen.getByRole('alert')).toHaveTextContent(
-      /^Baseflow cannot be separated: N = A\^0\.2 = 0\.827 days puts the end point at 22\.84 h/,
-    );
-    expect(screen.getByLabelText('Direct runoff volume')).toHaveTextContent('—');
+    // For 1 km² N is 0.83 days, past the end of a 12-hour record: the line ends at
+    // the last sample, the screen says so, and the handle is there to drag instead.
+    expect(
+      screen.getByText(
+        /^N = A\^0\.2 = 0\.827 days puts the end 22\.84 h after the first sample, past the record's last sample \(12 h\)/,
+      ),
+    ).toHaveAttribute('role', 'status');
+    expect(screen.queryByRole('alert')).not.toBeInTheDocument();
+    const fallback = separate({ kind: 'straight-line' });
+    expect(fallback.endTimeH).toBe(12);
+    expect(screen.getByLabelText('Direct runoff volume')).toHaveTextContent(m3(fallback.directVolumeM3));
     const handle = screen.getByRole('slider', { name: 'End of direct runoff' });
     expect(handle).toHaveAttribute('aria-valuenow', '12');
     // A small enough catchment brings the end inside the record.

@@ -87,13 +87,16 @@ describe('streamflow edits', () => {
     );
   });
 
-  it('an automatic end point past the record is kept (it waits for a longer record or a smaller area) but reported by the separation', () => {
+  it('an automatic end point past the record is kept (it waits for a longer record or a smaller area), and the separation ends at the last sample meanwhile and says so', () => {
     const big = withAreaM2(withBaseflowParam(WITH_TRIANGLE, 'endTimeH', undefined), 500e6);
+    expect(flow(big).baseflow).toEqual({ kind: 'straight-line' });
     const store = createWorkbenchStore(big);
     const sep = store.derived.separation(big);
-    expect(sep?.ok).toBe(false);
-    expect(sep && !sep.ok && sep.message).toMatch(
-      /^N = A\^0\.2 = .* days puts the end point at .* h, after the last sample/,
+    expect(sep?.ok).toBe(true);
+    if (!sep?.ok) return;
+    expect(sep.result.endTimeH).toBe(12);
+    expect(sep.result.notice).toMatch(
+      /^N = A\^0\.2 = .* days puts the end .* h after the first sample, past the record's last sample \(12 h\)/,
     );
   });
 
@@ -101,7 +104,12 @@ describe('streamflow edits', () => {
     const eck = withBaseflowParam(withBaseflowKind(WITH_TRIANGLE, 'eckhardt'), 'bfiMax', 0.5);
     const back = withBaseflowKind(eck, 'straight-line');
     expect(flow(back).baseflow).toEqual({ kind: 'straight-line', endTimeH: 7 });
-    expect(flow(withBaseflowKind(back, 'eckhardt')).baseflow).toEqual({ kind: 'eckhardt', a: 0.98, bfiMax: 0.5 });
+    expect(flow(withBaseflowKind(back, 'eckhardt')).baseflow).toEqual({
+      kind: 'eckhardt',
+      a: 0.98,
+      bfiMax: 0.5,
+      stepH: 24,
+    });
   });
 
   it('the offset must be a finite number of hours', () => {
