@@ -8,7 +8,8 @@ import {
   type CatchmentEvent,
   type EventRunoff,
 } from '../../../src/core';
-import { expectClose, thrown } from '../design/close';
+import { expectClose } from '../../helpers/tolerance';
+import { thrown } from '../../helpers/thrown';
 
 // Invented events, each one bar of 1 h: with φ the runoff is rain − φ.
 const oneBar = (id: string, rainMm: number, observedExcessMm: number): CatchmentEvent => ({
