@@ -11,5 +11,8 @@ export default defineConfig({
     include: ['test/**/*.test.{ts,tsx}'],
     environment: 'node',
     setupFiles: ['test/setup.ts'],
+    // No test is timed (speed is for the benchmarks); property tests over storms
+    // of hundreds of bars need room on a busy shared machine.
+    testTimeout: 30_000,
   },
 });

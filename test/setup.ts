@@ -4,11 +4,16 @@ import fc from 'fast-check';
 import { afterEach } from 'vitest';
 
 // Property tests draw a fresh random seed on every local run, so they keep
-// looking for new counterexamples. CI (CI=true) pins the seed, or takes one
-// from FC_SEED, so a landing is judged on a reproducible run; a failure prints
-// the seed and the counterexample either way.
+// looking for new counterexamples. .ci/run pins the seed explicitly with
+// FC_SEED (and CI=true without it falls back to the same seed), so a landing
+// is judged on a reproducible run; a failure prints the seed and the
+// counterexample either way. FC_SEED=… npm test replays a seed locally.
 const pinned = process.env.FC_SEED ?? (process.env.CI ? '20261201' : undefined);
-if (pinned !== undefined) fc.configureGlobal({ seed: Number(pinned) });
+if (pinned !== undefined) {
+  const seed = Number(pinned);
+  if (!Number.isSafeInteger(seed)) throw new Error(`FC_SEED must be an integer seed, got "${pinned}".`);
+  fc.configureGlobal({ seed });
+}
 
 if (typeof document !== 'undefined') {
   await import('@testing-library/jest-dom/vitest');

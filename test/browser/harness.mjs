@@ -2,7 +2,12 @@
 // Debian's chromium through playwright-core (never a downloaded browser) and
 // runs every test/browser/*.spec.mjs. A spec exports
 //   export const tests = [{ name, run: async ({ browser, baseUrl, newPage }) => {} }]
-// A test fails by throwing. Prints one line per test and "N passed, N failed".
+// A test fails by throwing, and also when any page it opened (in the context
+// it was given or in one it made) throws an uncaught error or logs a
+// console.error: the runner collects those with watchErrors() below, so no
+// spec has to. A test that provokes an error on purpose names it in
+// `expectErrors: [/pattern/, …]`; each pattern must then be seen at least once.
+// Prints one line per test and "N passed, N failed".
 import { createServer } from 'node:http';
 import { readFile, stat } from 'node:fs/promises';
 import { extname, join, normalize, resolve } from 'node:path';
@@ -73,4 +78,46 @@ export async function launchBrowser() {
     args: CHROMIUM_FLAGS,
   });
   return { browser, close: () => browser.close() };
+}
+
+/**
+ * Collects what pages report going wrong: uncaught exceptions ("pageerror")
+ * and console.error messages. watchBrowser wraps a browser so every context
+ * and page made from it is watched; watchContext watches every page of a
+ * context, the ones it has and the ones it opens later.
+ */
+export function watchErrors() {
+  const errors = [];
+  const watchPage = (page) => {
+    page.on('pageerror', (error) => errors.push(`uncaught page error: ${error.message}`));
+    page.on('console', (message) => {
+      if (message.type() === 'error') errors.push(`console.error: ${message.text()}`);
+    });
+    return page;
+  };
+  const watchContext = (context) => {
+    for (const page of context.pages()) watchPage(page);
+    context.on('page', watchPage);
+    return context;
+  };
+  const watchBrowser = (browser) =>
+    new Proxy(browser, {
+      get(target, key) {
+        if (key === 'newContext') return async (...args) => watchContext(await target.newContext(...args));
+        if (key === 'newPage') return async (...args) => watchPage(await target.newPage(...args));
+        const value = Reflect.get(target, key, target);
+        return typeof value === 'function' ? value.bind(target) : value;
+      },
+    });
+  return { errors, watchPage, watchContext, watchBrowser };
+}
+
+/**
+ * The errors a test did not expect, and the expected ones that never came:
+ * each pattern in `expected` takes every error it matches and must match one.
+ */
+export function unexpectedErrors(errors, expected = []) {
+  const left = errors.filter((e) => !expected.some((pattern) => pattern.test(e)));
+  const missing = expected.filter((pattern) => !errors.some((e) => pattern.test(e)));
+  return [...left, ...missing.map((pattern) => `an error the test expects never came: ${pattern}`)];
 }

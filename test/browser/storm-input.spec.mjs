@@ -1,9 +1,10 @@
 // Getting rainfall in, in Debian's chromium against the built app: paste a
 // storm into the preview and use it, edit a bar in the table, draw a stroke
 // with the mouse, and check every shown number against the project's own core
-// computing the same thing (loaded from source, never copied numbers). Also
-// axe-core with the dialog, tools and drawing open, and a narrow window.
-import { AXE, check, loadSourceModules } from './support.mjs';
+// computing the same thing (loaded from source); the pasted storm's results
+// are also checked against values worked by hand. Also axe-core with the
+// dialog, tools and drawing open, and a narrow window.
+import { AXE, check, checkShown, loadSourceModules } from './support.mjs';
 
 /** Source modules to check the page against (see support.mjs). */
 const loadModules = () =>
@@ -71,7 +72,7 @@ async function axeViolations(page) {
 
 export const tests = [
   {
-    name: 'a pasted storm is previewed, used as one undo step, and the results are the core’s',
+    name: 'a pasted storm is previewed, used as one undo step, and its results are the ones worked by hand and the core’s',
     async run({ baseUrl, newPage }) {
       const mods = await loadModules();
       try {
@@ -99,6 +100,18 @@ export const tests = [
         scenario.storm.durationsH.forEach((d, k) => check(Math.abs(d - 1 / 6) < 1e-12, `bar ${k + 1} lasts ${d} h`));
         const r = await checkResults(page, mods, scenario);
         check(Math.abs(r.rainMm - 31.4) < 1e-9, `the core reads ${r.rainMm} mm`);
+        // By hand, with the demo's φ = 8 mm/h kept: each 10-min bar loses 8/6 = 1.3333 mm,
+        // so the 8 bars of 1.4 mm and more run off: 1.4 + 2.8 + 4.6 + 7.2 + 5.4 + 3.6
+        // + 2.4 + 1.6 = 29.0 mm, less 8 × 1.3333 = 10.6667 mm: excess 18.3333 mm; loss
+        // 31.4 − 18.3333 = 13.0667 mm; on the demo's 3.2 km², runoff volume
+        // 18.3333 mm × 3200 m³/mm = 58,666.7 m³; fraction 18.3333/31.4 = 58.386 %;
+        // peak excess 7.2 × 6 − 8 = 35.2 mm/h.
+        checkShown(await shown(page, 'Rainfall depth'), 31.4, 'mm', 'Rainfall depth');
+        checkShown(await shown(page, 'Excess depth'), 18.3333333, 'mm', 'Excess depth');
+        checkShown(await shown(page, 'Loss depth'), 13.0666667, 'mm', 'Loss depth');
+        checkShown(await shown(page, 'Runoff volume'), 58666.667, 'm³', 'Runoff volume');
+        checkShown(await shown(page, 'Runoff fraction'), 58.386412, '%', 'Runoff fraction');
+        checkShown(await shown(page, 'Peak excess intensity'), 35.2, 'mm/h', 'Peak excess intensity');
         const undo = page.getByRole('button', { name: 'Undo' });
         check(
           (await undo.getAttribute('title')) === 'Undo: Paste rainfall (Ctrl+Z)',
@@ -133,6 +146,12 @@ export const tests = [
         check(scenario.storm.depthsMm[5] === 9.5, `bar 6 holds ${scenario.storm.depthsMm[5]} mm`);
         check(await cell(7, 4).evaluate((el) => el === document.activeElement), 'Enter did not move to the next bar');
         await checkResults(page, mods, scenario);
+        // By hand: bar 6 goes from 3.8 to 9.5 mm, so the demo's 41.6 mm becomes 47.3 mm;
+        // at φ = 8 mm/h (8/6 = 1.3333 mm a bar) the demo's excess of 35.2 − 10 × 1.3333 =
+        // 21.8667 mm grows by the 5.7 mm added: 27.5667 mm; bar 6 alone: 9.5 − 1.3333 = 8.1667 mm.
+        checkShown(await shown(page, 'Rainfall depth'), 47.3, 'mm', 'Rainfall depth');
+        checkShown(await shown(page, 'Excess depth'), 27.5666667, 'mm', 'Excess depth');
+        checkShown(await cell(6, 7).textContent(), 8.1666667, '', 'Bar 6 excess');
         const r = mods.core.computeLosses(scenario.storm, scenario.method);
         check(
           (await cell(6, 7).textContent()) === mods.format.formatValue(r.excessMm[5]),

@@ -36,3 +36,22 @@ export async function loadSourceModules(paths) {
 export function loadSource() {
   return loadSourceModules({ core: '/src/core/index.ts', format: '/src/ui/format.ts' });
 }
+
+/**
+ * Checks a number on screen against a value worked by hand (never one the
+ * app's own core or formatter computed): the text must read as `exact`
+ * rounded to the digits it shows (within half a unit of its last digit),
+ * with at least three significant digits, followed by `unit`. Group
+ * separators are ignored, so the check holds the number, not the layout.
+ */
+export function checkShown(text, exact, unit, what) {
+  const m = /^([-−]?)([\d,\u00a0\u2009\u202f]+)(?:\.(\d+))?[\s\u00a0\u2009\u202f]*(.*)$/.exec(String(text).trim());
+  check(m, `${what}: "${text}" is not a number`);
+  const [, sign, whole, fraction = '', shownUnit] = m;
+  const digits = whole.replace(/[^\d]/g, '') + fraction;
+  const value = Number(`${sign ? '-' : ''}${digits.slice(0, digits.length - fraction.length)}.${fraction || '0'}`);
+  const half = 0.5 * 10 ** -fraction.length;
+  check(Math.abs(value - exact) <= half * (1 + 1e-9), `${what}: shown "${text}", worked by hand ${exact} ${unit}`);
+  check(digits.replace(/^0+/, '').length >= 3 || value === 0, `${what}: "${text}" shows too few digits`);
+  check(shownUnit === unit, `${what}: shown in "${shownUnit}", expected "${unit}"`);
+}

@@ -2,10 +2,12 @@ import fc from 'fast-check';
 import { METHODS, validateMethod, type LossMethod, type Storm } from '../../src/core';
 
 /**
- * Random storms with unequal bar durations (1 min to 3 h), dry bars, spikes and
- * tiny depths, as gauge data has.
+ * Random storms of 1 to `maxBars` bars (hundreds by default) with unequal bar
+ * durations (1 min to 3 h), dry bars, spikes and tiny depths, as gauge data
+ * has. The size is explicit: fast-check's default size keeps arrays near a
+ * dozen elements whatever their maxLength (arbitraries.test.ts checks the reach).
  */
-export function stormArb(maxBars = 60): fc.Arbitrary<{ durationsH: number[]; depthsMm: number[] }> {
+export function stormArb(maxBars = 300): fc.Arbitrary<{ durationsH: number[]; depthsMm: number[] }> {
   const bar = fc.record({
     durationH: fc.double({ min: 1 / 60, max: 3, noNaN: true }),
     depthMm: fc.oneof(
@@ -16,7 +18,7 @@ export function stormArb(maxBars = 60): fc.Arbitrary<{ durationsH: number[]; dep
       fc.double({ min: 1e-6, max: 80, noNaN: true }),
     ),
   });
-  return fc.array(bar, { minLength: 1, maxLength: maxBars }).map((bars) => ({
+  return fc.array(bar, { minLength: 1, maxLength: maxBars, size: 'max' }).map((bars) => ({
     durationsH: bars.map((b) => b.durationH),
     depthsMm: bars.map((b) => b.depthMm),
   }));

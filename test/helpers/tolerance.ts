@@ -1,8 +1,11 @@
 import { expect } from 'vitest';
 
 /**
- * |actual − expected| ≤ max(rel·|expected|, abs). Float comparisons in tests go
- * through this so the tolerance is stated where it is used.
+ * The one tolerance rule of the tests: |actual − expected| ≤ max(rel·|expected|, abs).
+ * Every float comparison in test/core goes through this (or expectAllClose),
+ * with the tolerance stated at the call when it is not the default 1e-12; `rel`
+ * bounds the error of a computation, `abs` the floor for expected values near
+ * zero, and (…, 0, h) states a printed table's half-unit of rounding h.
  */
 export function expectClose(actual: number, expected: number, rel = 1e-12, abs = 1e-12): void {
   const tol = Math.max(rel * Math.abs(expected), abs);

@@ -1,6 +1,32 @@
 import fc from 'fast-check';
-import { METHODS, METHOD_KINDS, validateMethod, type LossKind, type LossMethod, type MethodSpec } from '../../src/core';
+import {
+  BASEFLOW_KINDS,
+  BASEFLOW_METHODS,
+  METHODS,
+  METHOD_KINDS,
+  validateBaseflowMethod,
+  validateMethod,
+  type BaseflowKind,
+  type BaseflowMethod,
+  type BaseflowMethodSpec,
+  type LossKind,
+  type LossMethod,
+  type MethodSpec,
+} from '../../src/core';
 import { CURRENT_SCENARIO_VERSION, type Scenario } from '../../src/scenario';
+import type { Streamflow } from '../../src/scenario/types';
+import { baseflowRecordProblem } from '../../src/scenario/baseflow-check';
+
+// Sizes are explicit (size: 'max'): fast-check's default size keeps arrays
+// and strings near a dozen elements whatever their maxLength, so without it
+// a "300-bar" storm never passed 10 bars. test/scenario/arbitraries.test.ts
+// checks that each generator reaches its maximum.
+/** Most bars in a generated storm. */
+export const MAX_BARS = 300;
+/** Most samples in a generated streamflow record. */
+export const MAX_SAMPLES = 300;
+/** Most events in a generated event set. */
+export const MAX_SET_EVENTS = 3;
 
 // -0 is read back as 0 (tested on its own), so generated documents avoid it.
 const unsignedZero = (x: number): number => (x === 0 ? 0 : x);
@@ -35,7 +61,7 @@ export const stormArb = fc
   .record({
     uniform: fc.boolean(),
     step: stepH,
-    bars: fc.array(fc.record({ durationH: stepH, depthMm }), { maxLength: 300 }),
+    bars: fc.array(fc.record({ durationH: stepH, depthMm }), { maxLength: MAX_BARS, size: 'max' }),
   })
   .map(({ uniform, step, bars }) => ({
     durationsH: bars.map((b) => (uniform ? step : b.durationH)),
@@ -107,8 +133,111 @@ const methodMemoryArb = fc.subarray([...METHOD_KINDS]).chain((kinds) =>
   }),
 );
 
-/** Text of any code points, lone surrogates included. */
-const textArb = (maxLength: number) => fc.string({ unit: 'binary', maxLength });
+/** Text of any code points, lone surrogates included, of any length up to `maxLength`. */
+const textArb = (maxLength: number) => fc.string({ unit: 'binary', maxLength, size: 'max' });
+
+/** A value for one baseflow parameter inside its bounds (times and sample indices inside the record). */
+function baseflowParamValue(
+  param: BaseflowMethodSpec['params'][number],
+  lastTimeH: number,
+  samples: number,
+): fc.Arbitrary<number> {
+  if (param.unit === 'sample') return fc.integer({ min: 0, max: samples - 1 });
+  // A count with no upper bound (warm-up samples) is drawn up to a little past the record's length.
+  if (param.integer) return fc.integer({ min: param.min, max: Number.isFinite(param.max) ? param.max : samples + 5 });
+  const min = Number.isFinite(param.min) ? param.min : 0;
+  const max = param.unit === 'h' && param.key === 'endTimeH' ? lastTimeH : Number.isFinite(param.max) ? param.max : 48;
+  return fc
+    .double({
+      min,
+      max,
+      noNaN: true,
+      minExcluded: param.minExclusive === true,
+      maxExcluded: param.maxExclusive === true,
+    })
+    .map(unsignedZero);
+}
+
+/**
+ * A valid baseflow method of the given kind for a record, read from the
+ * core's table: optional parameters sometimes left out, each one inside its
+ * bounds, and only methods the schema finds fit for this record.
+ */
+function baseflowOfKindArb(
+  kind: BaseflowKind,
+  record: { timesH: readonly number[]; dischargeM3s: readonly number[] },
+): fc.Arbitrary<BaseflowMethod> {
+  const spec = BASEFLOW_METHODS[kind] as BaseflowMethodSpec;
+  const last = record.timesH[record.timesH.length - 1] as number;
+  const fields: Record<string, fc.Arbitrary<number | undefined>> = {};
+  for (const param of spec.params) {
+    const value = baseflowParamValue(param, last, record.timesH.length);
+    fields[param.key] = param.optional ? fc.option(value, { nil: undefined }) : value;
+  }
+  return fc
+    .record(fields)
+    .map((values) => {
+      const method: Record<string, unknown> = { kind };
+      for (const [key, value] of Object.entries(values)) if (value !== undefined) method[key] = value;
+      return method as unknown as BaseflowMethod;
+    })
+    .filter((method) => {
+      try {
+        validateBaseflowMethod(method);
+        return baseflowRecordProblem(record, method) === null;
+      } catch {
+        return false;
+      }
+    });
+}
+
+/**
+ * A streamflow record of 2 to MAX_SAMPLES samples (steps as gauges log them
+ * or any length from 1 min to a day; discharge 0, small or large), its
+ * clock, offset, separation method, method memory and link to the observed
+ * runoff (only where `canLink`).
+ */
+export const streamflowArb = (canLink: boolean): fc.Arbitrary<Streamflow> =>
+  fc
+    .record({
+      uniform: fc.boolean(),
+      step: fc.constantFrom(5 / 60, 0.25, 1),
+      samples: fc.array(
+        fc.record({
+          stepH: fc.double({ min: 1 / 60, max: 24, noNaN: true }),
+          q: fc.oneof(
+            fc.constant(0),
+            fc.integer({ min: 0, max: 5000 }).map((n) => n / 100),
+            fc.double({ min: 0, max: 5000, noNaN: true }).map(unsignedZero),
+          ),
+        }),
+        { minLength: 2, maxLength: MAX_SAMPLES, size: 'max' },
+      ),
+      start: fc.option(startIsoArb, { nil: undefined }),
+      offsetH: fc.double({ min: -48, max: 48, noNaN: true }).map(unsignedZero),
+      linked: fc.boolean(),
+    })
+    .chain(({ uniform, step, samples, start, offsetH, linked }) => {
+      const timesH: number[] = [0];
+      for (const s of samples.slice(1)) timesH.push((timesH[timesH.length - 1] as number) + (uniform ? step : s.stepH));
+      const record = { timesH, dischargeM3s: samples.map((s) => s.q) };
+      const memory = fc.subarray([...BASEFLOW_KINDS]).chain((kinds) =>
+        fc.tuple(...kinds.map((kind) => baseflowOfKindArb(kind, record))).map((methods) => {
+          const out: Partial<Record<BaseflowKind, BaseflowMethod>> = {};
+          for (const method of methods) out[method.kind] = method;
+          return out;
+        }),
+      );
+      const method = fc.constantFrom(...BASEFLOW_KINDS).chain((kind) => baseflowOfKindArb(kind, record));
+      return fc.tuple(method, memory).map(([baseflow, baseflowMemory]): Streamflow => ({
+        ...record,
+        ...(start === undefined ? {} : { startIso: start }),
+        offsetH,
+        baseflow,
+        baseflowMemory,
+        useAsObserved: canLink && linked,
+      }));
+    });
 
 export const scenarioArb: fc.Arbitrary<Scenario> = fc
   .record({
@@ -130,7 +259,9 @@ export const scenarioArb: fc.Arbitrary<Scenario> = fc
       }),
       { nil: null },
     ),
-    // Version 3: a few events of the catchment, each with its own storm and observed runoff.
+    // Version 2: the workbench's streamflow record (linked to the observed runoff only where there is one).
+    streamflow: fc.option(streamflowArb(true), { nil: null, freq: 2 }),
+    // Version 3: a few events of the catchment, each with its own storm, observed runoff and record.
     events: fc.array(
       fc.record({
         name: textArb(30),
@@ -142,9 +273,13 @@ export const scenarioArb: fc.Arbitrary<Scenario> = fc
           }),
           { nil: null },
         ),
+        streamflow: fc.option(streamflowArb(false), { nil: null, freq: 3 }),
       }),
-      { maxLength: 3 },
+      { maxLength: MAX_SET_EVENTS, size: 'max' },
     ),
+    // The event on the workbench (an index into the events), or none.
+    active: fc.option(fc.nat(), { nil: null }),
+    setParameter: fc.option(fc.nat(), { nil: null }),
     designPick: fc.oneof(
       fc.constantFrom('median' as const, 'mean' as const, 'min' as const, 'max' as const),
       fc.record({ value: fc.double({ min: -1e6, max: 1e6, noNaN: true }).map(unsignedZero) }),
@@ -161,29 +296,46 @@ export const scenarioArb: fc.Arbitrary<Scenario> = fc
             locked: r.observed.locked,
           }
         : null;
+    // A record linked to the observed runoff needs an observed runoff.
+    const streamflow = r.streamflow && {
+      ...r.streamflow,
+      useAsObserved: r.streamflow.useAsObserved && observed !== null,
+    };
+    const events = r.events.map((e, k) => ({
+      id: `e${k + 1}`,
+      name: e.name,
+      storm: e.storm,
+      observed: e.observed ? { as: e.observed.as, value: e.observed.value } : null,
+      streamflow: e.streamflow,
+    }));
+    const storm = r.start === undefined ? r.storm : { ...r.storm, startIso: r.start };
+    // The active event holds the workbench's data, as the store keeps it (see EventSet in types.ts).
+    const activeIndex = r.active === null || events.length === 0 ? null : r.active % events.length;
+    if (activeIndex !== null) {
+      events[activeIndex] = {
+        ...(events[activeIndex] as (typeof events)[number]),
+        storm,
+        observed: observed && { as: observed.as, value: observed.value },
+        streamflow,
+      };
+    }
     return {
       version: CURRENT_SCENARIO_VERSION,
       name: r.name,
       notes: r.notes,
-      storm: r.start === undefined ? r.storm : { ...r.storm, startIso: r.start },
+      storm,
       catchment: { name: r.catchmentName, areaM2: r.areaM2 },
       units: r.units,
       method: r.method,
       methodMemory: r.methodMemory,
       observed,
-      streamflow: null,
+      streamflow,
       eventSet: {
         // Plain literals: fast-check's records are not plain objects, and the round trip is checked strictly.
-        events: r.events.map((e, k) => ({
-          id: `e${k + 1}`,
-          name: e.name,
-          storm: e.storm,
-          observed: e.observed ? { as: e.observed.as, value: e.observed.value } : null,
-          streamflow: null,
-        })),
-        // The active event is left out here: the store keeps it equal to the workbench, which a random document is not.
-        activeId: null,
-        parameter: null,
+        events,
+        activeId: activeIndex === null ? null : `e${activeIndex + 1}`,
+        parameter:
+          r.setParameter === null || params.length === 0 ? null : (params[r.setParameter % params.length] ?? null),
         designPick: typeof r.designPick === 'string' ? r.designPick : { value: r.designPick.value },
       },
     } satisfies Scenario;

@@ -4,12 +4,14 @@ import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
 import { DEMO_SCENARIO, FILE_FORMAT_TAG, scenarioFromFileText, scenarioToFileText } from '../../src/scenario';
 import { gaugeStorm24h, scenarioArb } from './arbitraries';
-import { expectContract, seeded } from './fuzz-helpers';
+import { SCENARIO_FIELDS, expectContract, pathName, pickFieldPath, seeded, withField } from './fuzz-helpers';
 
+// The corpus holds every part of the document: notes, a streamflow record, an event set with records.
+const sampled = fc.sample(scenarioArb, { numRuns: 20, seed: 777 });
 const corpus: string[] = [
   scenarioToFileText(DEMO_SCENARIO),
   scenarioToFileText({ ...DEMO_SCENARIO, storm: gaugeStorm24h(9) }),
-  ...fc.sample(scenarioArb, { numRuns: 20, seed: 777 }).map(scenarioToFileText),
+  ...sampled.map(scenarioToFileText),
 ];
 
 const PIECES = [
@@ -90,31 +92,31 @@ describe('the file reader under fuzzing never throws and always says why it refu
     expect(tally.ok).toBe(0);
   });
 
-  it('survives one field of a valid file replaced by any JSON value', () => {
+  it('starts from files that carry every part of a scenario', () => {
+    expect(sampled.some((s) => s.notes.length > 100)).toBe(true);
+    expect(sampled.some((s) => s.streamflow !== null && s.streamflow.useAsObserved)).toBe(true);
+    expect(sampled.some((s) => s.eventSet.activeId !== null)).toBe(true);
+    expect(sampled.some((s) => s.eventSet.events.some((e) => e.streamflow !== null))).toBe(true);
+    expect(Math.max(...sampled.map((s) => s.storm.depthsMm.length))).toBeGreaterThan(200);
+  });
+
+  it('survives one field of a valid file, at any depth, replaced by any JSON value', () => {
     const tally = { ok: 0, refused: 0 };
+    const reached = new Set<string>();
+    const docs = corpus.map((text) => JSON.parse(text) as unknown);
     fc.assert(
-      fc.property(
-        fc.constantFrom(...corpus.slice(0, 6)),
-        fc.constantFrom(
-          'version',
-          'name',
-          'storm',
-          'catchment',
-          'units',
-          'method',
-          'methodMemory',
-          'observed',
-          'caution',
-          'other',
-        ),
-        fc.jsonValue({ maxDepth: 3 }),
-        (text, field, value) => {
-          expectContract(scenarioFromFileText, JSON.stringify({ ...JSON.parse(text), [field]: value }), tally);
-        },
-      ),
-      { numRuns: 2_000, seed: 25 },
+      fc.property(fc.nat({ max: docs.length - 1 }), fc.nat(), fc.jsonValue({ maxDepth: 3 }), (which, pick, value) => {
+        const doc = docs[which] as Record<string, unknown>;
+        // The file's own fields ($format, caution) are fields too.
+        const path = pickFieldPath(doc, pick);
+        reached.add(pathName(path));
+        expectContract(scenarioFromFileText, JSON.stringify(withField(doc, path, value)), tally);
+      }),
+      { numRuns: 3_000, seed: 25 },
     );
-    expect(tally.refused).toBeGreaterThan(1_500);
+    expect(SCENARIO_FIELDS.filter((name) => !reached.has(name))).toEqual([]);
+    expect(['$format', 'caution'].filter((name) => !reached.has(name))).toEqual([]);
+    expect(tally.refused).toBeGreaterThan(2_000);
   });
 
   it('survives very deep nesting and very long lists', () => {

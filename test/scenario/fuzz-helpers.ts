@@ -79,3 +79,67 @@ export function zeroBomb(copies: number): Uint8Array {
   code(0, 7); // end of block (256)
   return out.subarray(0, Math.ceil(bit / 8));
 }
+
+export type FieldPath = readonly (string | number)[];
+
+/**
+ * Paths to the fields of a JSON document, at every depth: each key of an
+ * object, and of a list the list itself and its first and last entries (a
+ * storm of 300 bars would otherwise crowd out every other field).
+ */
+export function fieldPaths(doc: unknown, at: FieldPath = []): FieldPath[] {
+  if (Array.isArray(doc)) {
+    const ends = doc.length > 1 ? [0, doc.length - 1] : doc.length === 1 ? [0] : [];
+    return ends.flatMap((k) => [[...at, k], ...fieldPaths(doc[k], [...at, k])]);
+  }
+  if (doc !== null && typeof doc === 'object') {
+    return Object.entries(doc).flatMap(([key, value]) => [[...at, key], ...fieldPaths(value, [...at, key])]);
+  }
+  return [];
+}
+
+/** A copy of `doc` with the field at `path` set to `value`. */
+export function withField(doc: unknown, path: FieldPath, value: unknown): unknown {
+  const copy = structuredClone(doc) as Record<string | number, unknown>;
+  let node = copy;
+  for (const key of path.slice(0, -1)) node = node[key] as Record<string | number, unknown>;
+  node[path[path.length - 1] as string | number] = value;
+  return copy;
+}
+
+/**
+ * One path of the document, picked so that each field name is as likely as
+ * any other (a list's entries share one name), from a number drawn by the fuzzer.
+ */
+export function pickFieldPath(doc: unknown, pick: number): FieldPath {
+  const byName = new Map<string, FieldPath[]>();
+  for (const path of [...fieldPaths(doc), ['extra']]) {
+    const name = pathName(path);
+    byName.set(name, [...(byName.get(name) ?? []), path]);
+  }
+  const groups = [...byName.values()];
+  const group = groups[pick % groups.length] as FieldPath[];
+  return group[Math.floor(pick / groups.length) % group.length] as FieldPath;
+}
+
+/** A path's name with list positions as "#": "eventSet.events.#.streamflow". */
+export const pathName = (path: FieldPath): string => path.map((k) => (typeof k === 'number' ? '#' : k)).join('.');
+
+/**
+ * The field names a fuzzer must reach in a scenario document: every field of
+ * the document, of its storm, catchment, observed runoff, streamflow record
+ * and event set, and of an event with its own storm, runoff and record.
+ */
+export const SCENARIO_FIELDS: readonly string[] = [
+  ...['version', 'name', 'notes', 'storm', 'catchment', 'units', 'method', 'methodMemory', 'observed'],
+  ...['streamflow', 'eventSet'],
+  ...['durationsH', 'depthsMm', 'startIso'].map((k) => `storm.${k}`),
+  ...['name', 'areaM2'].map((k) => `catchment.${k}`),
+  'method.kind',
+  ...['as', 'value', 'parameter', 'locked'].map((k) => `observed.${k}`),
+  ...['timesH', 'dischargeM3s', 'offsetH', 'baseflow', 'baseflowMemory', 'useAsObserved'].map((k) => `streamflow.${k}`),
+  ...['startIso', 'baseflow.kind'].map((k) => `streamflow.${k}`),
+  ...['events', 'activeId', 'parameter', 'designPick'].map((k) => `eventSet.${k}`),
+  ...['id', 'name', 'storm', 'observed', 'streamflow'].map((k) => `eventSet.events.#.${k}`),
+  ...['storm.depthsMm', 'streamflow.timesH', 'streamflow.baseflow'].map((k) => `eventSet.events.#.${k}`),
+];

@@ -188,7 +188,7 @@ describe('the saved-scenario list', () => {
       }),
       { numRuns: 150, seed: 32 },
     );
-  });
+  }, 60_000); // documents of hundreds of bars, records and events: generous on a busy machine
 
   it('does not undo changes made in another tab', () => {
     const storage = new MemoryStorage();

@@ -8,12 +8,24 @@ import { DEMO_SCENARIO, LINK_PREFIX, decodeScenarioLink, encodeScenarioLink, typ
 import { decodeBase64Url, encodeBase64Url } from '../../src/scenario/base64url';
 import { crc32 } from '../../src/scenario/crc32';
 import { gaugeStorm24h, scenarioArb } from './arbitraries';
-import { BASE64URL, expectContract, seeded, zeroBomb } from './fuzz-helpers';
+import {
+  BASE64URL,
+  SCENARIO_FIELDS,
+  expectContract,
+  pathName,
+  pickFieldPath,
+  seeded,
+  withField,
+  zeroBomb,
+} from './fuzz-helpers';
+
+// The corpus holds every part of the document: notes, a streamflow record, an event set with records.
+const sampled = fc.sample(scenarioArb, { numRuns: 30, seed: 424242 });
 
 const corpus: string[] = [
   encodeScenarioLink(DEMO_SCENARIO),
   encodeScenarioLink({ ...DEMO_SCENARIO, storm: gaugeStorm24h(5) } satisfies Scenario),
-  ...fc.sample(scenarioArb, { numRuns: 30, seed: 424242 }).map(encodeScenarioLink),
+  ...sampled.map(encodeScenarioLink),
 ];
 
 const bytesOf = (link: string): Uint8Array => {
@@ -43,6 +55,14 @@ function varint(n: number): number[] {
 // Generous time limits: the suite runs on shared, busy machines; the counts
 // are what make it thorough, not speed.
 describe('the link reader under fuzzing never throws and always says why it refuses', { timeout: 60_000 }, () => {
+  it('starts from links that carry every part of a scenario', () => {
+    expect(sampled.some((s) => s.notes.length > 100)).toBe(true);
+    expect(sampled.some((s) => s.streamflow !== null && s.streamflow.useAsObserved)).toBe(true);
+    expect(sampled.some((s) => s.eventSet.activeId !== null)).toBe(true);
+    expect(sampled.some((s) => s.eventSet.events.some((e) => e.streamflow !== null))).toBe(true);
+    expect(Math.max(...sampled.map((s) => s.storm.depthsMm.length))).toBeGreaterThan(200);
+  });
+
   it('survives characters changed, added, removed and moved in real links', () => {
     const random = seeded(1);
     const pick = <T>(list: readonly T[]): T => list[Math.floor(random() * list.length)] as T;
@@ -171,29 +191,19 @@ describe('the link reader under fuzzing never throws and always says why it refu
       ),
       { numRuns: 2_000, seed: 6 },
     );
-    // Documents that are almost right: one field of a valid scenario replaced.
+    // Documents that are almost right: one field of a valid scenario, at any depth, replaced
+    // (or one added), so every field of the document reaches the schema damaged.
+    const reached = new Set<string>();
     fc.assert(
-      fc.property(
-        scenarioArb,
-        fc.constantFrom(
-          'version',
-          'name',
-          'storm',
-          'catchment',
-          'units',
-          'method',
-          'methodMemory',
-          'observed',
-          'extra',
-        ),
-        fc.jsonValue({ maxDepth: 2 }),
-        (scenario, field, value) => {
-          expectContract(decodeScenarioLink, seal(JSON.stringify({ ...scenario, [field]: value })), tally);
-        },
-      ),
-      { numRuns: 600, seed: 7 },
+      fc.property(scenarioArb, fc.nat(), fc.jsonValue({ maxDepth: 2 }), (scenario, pick, value) => {
+        const path = pickFieldPath(scenario, pick);
+        reached.add(pathName(path));
+        expectContract(decodeScenarioLink, seal(JSON.stringify(withField(scenario, path, value))), tally);
+      }),
+      { numRuns: 1_200, seed: 7 },
     );
-    expect(tally.refused).toBeGreaterThan(2_400);
+    expect(SCENARIO_FIELDS.filter((name) => !reached.has(name))).toEqual([]);
+    expect(tally.refused).toBeGreaterThan(2_800);
   });
 
   it('refuses deflate bombs of every claimed size up to the limit', () => {
@@ -204,7 +214,16 @@ describe('the link reader under fuzzing never throws and always says why it refu
       const packed = new Uint8Array(head.length + bomb.length);
       packed.set(head);
       packed.set(bomb, head.length);
-      expectContract(decodeScenarioLink, resealed(packed), tally);
+      const link = resealed(packed);
+      expectContract(decodeScenarioLink, link, tally);
+      // Refused for the bomb itself: it unpacks past the size it claims, and inflating stopped there.
+      const result = decodeScenarioLink(link);
+      expect(result.ok).toBe(false);
+      if (!result.ok) {
+        expect(result.problems.map((p) => p.message)).toEqual([
+          expect.stringMatching(/^The link is damaged: it unpacks to more than the .+ it says it holds\./),
+        ]);
+      }
     }
     expect(tally.refused).toBe(5);
   });

@@ -1,7 +1,8 @@
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
 import { separateBaseflow } from '../../../src/core/baseflow';
-import { expectClose, fineVolumeAbove, hydrographs, inputErrorOf, triangleOver } from './helpers';
+import { fineVolumeAbove, hydrographs, inputErrorOf, triangleOver } from './helpers';
+import { expectClose } from '../../helpers/tolerance';
 
 const constant = { kind: 'constant' } as const;
 

@@ -8,7 +8,7 @@
 import { describe, expect, it } from 'vitest';
 import { separateBaseflow } from '../../../src/core/baseflow';
 import { reflectPad } from '../../../src/core/baseflow/warm-up';
-import { expectClose } from './helpers';
+import { expectClose } from '../../helpers/tolerance';
 
 const RECEDING = { timesH: [0, 1, 2, 3, 4], dischargeM3s: [4, 2, 1, 3, 1] };
 const baseflow = (method: Parameters<typeof separateBaseflow>[1]): number[] =>

@@ -1,15 +1,6 @@
 import fc from 'fast-check';
-import { expect } from 'vitest';
 import { isInputError, type InputError } from '../../../src/core/errors';
 import type { Hydrograph } from '../../../src/core/baseflow/types';
-
-/** Asserts |actual − expected| ≤ tol · max(1, |expected|). */
-export function expectClose(actual: number, expected: number, tol = 1e-12): void {
-  const scale = Math.max(1, Math.abs(expected));
-  expect(Math.abs(actual - expected), `${actual} should be within ${tol} of ${expected}`).toBeLessThanOrEqual(
-    tol * scale,
-  );
-}
 
 /** Runs `fn`, expecting it to throw an InputError, and returns that error. */
 export function inputErrorOf(fn: () => unknown): InputError {

@@ -1,7 +1,7 @@
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
 import { positivePartStep, recordVolumeM3, volumeAboveLineM3 } from '../../../src/core/baseflow/volume';
-import { expectClose } from './helpers';
+import { expectClose } from '../../helpers/tolerance';
 
 /** Midpoint rule with many slices: an independent check of the exact formula. */
 function bruteForcePositivePart(d0: number, d1: number, dt: number, slices = 20000): number {

@@ -21,9 +21,10 @@ interface Case {
   readonly name: string;
   readonly method: LossMethod;
   readonly key: string;
-  /** Range the true value is drawn from. */
+  /** Range the true value is drawn from: evenly, or evenly in its logarithm (a rate constant). */
   readonly low: number;
   readonly high: number;
+  readonly log?: boolean;
 }
 
 const hortonBase = (ponding: boolean): LossMethod => ({ kind: 'horton', f0MmH: 75, fcMmH: 10, kPerH: 4, ponding });
@@ -35,7 +36,7 @@ const CASES: readonly Case[] = [
     return [
       { name: `Horton f₀ (${mode})`, method: hortonBase(ponding), key: 'f0MmH', low: 10, high: 400 },
       { name: `Horton f_c (${mode})`, method: hortonBase(ponding), key: 'fcMmH', low: 0, high: 75 },
-      { name: `Horton k (${mode})`, method: hortonBase(ponding), key: 'kPerH', low: 0.02, high: 50 },
+      { name: `Horton k (${mode})`, method: hortonBase(ponding), key: 'kPerH', low: 0.02, high: 50, log: true },
     ];
   }),
   // With capacity recovering in dry spells (stormArb's storms have dry bars).
@@ -45,7 +46,7 @@ const CASES: readonly Case[] = [
     return [
       { name: `Horton f₀ with recovery (${mode})`, method, key: 'f0MmH', low: 10, high: 400 },
       { name: `Horton k with recovery (${mode})`, method, key: 'kPerH', low: 0.02, high: 50 },
-      { name: `Horton k_r (${mode})`, method, key: 'recoveryPerH', low: 0.01, high: 20 },
+      { name: `Horton k_r (${mode})`, method, key: 'recoveryPerH', low: 0.01, high: 20, log: true },
     ];
   }),
   { name: 'Green–Ampt K', method: greenAmptBase, key: 'ksMmH', low: 0.05, high: 60 },
@@ -57,8 +58,18 @@ const CASES: readonly Case[] = [
     high: 60,
   },
   {
+    // A sandy loam (Rawls, Brakensiek & Miller 1983: K 10.9 mm/h, ψ 110.1 mm, θe 0.412):
+    // on the clay-loam-like base the capacity after a burst is near K whatever k_r, so
+    // the runoff barely answers to it.
     name: 'Green–Ampt k_r',
-    method: { ...greenAmptBase, recovers: true, recoveryPerH: 0.3 } as LossMethod,
+    method: {
+      kind: 'green-ampt',
+      ksMmH: 10.9,
+      suctionMm: 110.1,
+      moistureDeficit: 0.4,
+      recovers: true,
+      recoveryPerH: 0.3,
+    } as LossMethod,
     key: 'recoveryPerH',
     low: 0.01,
     high: 20,
@@ -88,6 +99,57 @@ const CASES: readonly Case[] = [
   },
 ];
 
+/**
+ * Storms that pond (INVENTED): 1 to 20 bars of 1 to 30 min at 5 to 300 mm/h,
+ * with dry bars between, so rain outruns the capacities drawn above for part
+ * of the storm and the runoff answers to each parameter. stormArb's
+ * gauge-like storms (half the draws) mostly stay below f₀ or Iₐ, where many
+ * values give the same runoff and no true value can come back; short storms
+ * keep the early capacity (f₀, k) from being swamped by hours of f_c.
+ */
+const pondingStormArb = fc
+  .array(
+    fc.record({
+      durationH: fc.double({ min: 1 / 60, max: 0.5, noNaN: true }),
+      rateMmH: fc.oneof(fc.constant(0), fc.double({ min: 5, max: 300, noNaN: true })),
+    }),
+    { minLength: 1, maxLength: 20, size: 'max' },
+  )
+  .map((bars) => ({ durationsH: bars.map((b) => b.durationH), depthsMm: bars.map((b) => b.rateMmH * b.durationH) }));
+
+/**
+ * Storms in bursts with a recovery rate to find (INVENTED): two ponding bursts
+ * with one dry spell of T = 15 min to 8 h between them, and a true k_r of
+ * c/T with c from 0.5 to 2, so the capacity is part way back when the second
+ * burst starts (recovered share 1 − e^(−c), 39 % to 86 %). Drawn apart, most
+ * pairs had the soil either fully back or hardly moved after the spell, and
+ * k_r then barely changes the runoff: no true value can come back.
+ */
+const recoveryDraws = (low: number, high: number): fc.Arbitrary<[Storm, number]> =>
+  fc
+    .record({
+      first: pondingStormArb.filter((s) => s.depthsMm.some((d) => d > 0)),
+      second: pondingStormArb.filter((s) => s.depthsMm.some((d) => d > 0)),
+      dryH: fc.double({ min: 0.25, max: 8, noNaN: true }),
+      c: fc.double({ min: 0.5, max: 2, noNaN: true }),
+    })
+    .map(({ first, second, dryH, c }): [Storm, number] => [
+      {
+        durationsH: [...first.durationsH, dryH, ...second.durationsH],
+        depthsMm: [...first.depthsMm, 0, ...second.depthsMm],
+      },
+      Math.min(high, Math.max(low, c / dryH)),
+    ]);
+
+/**
+ * A value spread evenly over [low, high]. fc.double spreads its draws evenly
+ * over the doubles themselves, so most land within a few binades of `low`
+ * (f_c = 1e-200 mm/h): runoff does not answer to those and no true value
+ * could come back.
+ */
+const linearIn = (low: number, high: number): fc.Arbitrary<number> =>
+  fc.integer({ min: 0, max: 2 ** 30 }).map((n) => low + ((high - low) * n) / 2 ** 30);
+
 describe('calibration of every infiltration parameter', () => {
   it('covers every numeric parameter of Horton, Green–Ampt and curve number', () => {
     for (const kind of ['horton', 'green-ampt', 'curve-number'] as const) {
@@ -99,43 +161,59 @@ describe('calibration of every infiltration parameter', () => {
   it.each(CASES)(
     'round-trips $name on random storms: the fitted value is within 1e-9 of an exact answer, and of the true value where runoff responds',
     (c) => {
+      let checked = 0;
+      let trueValueBack = 0;
       fc.assert(
-        fc.property(stormArb(30), fc.double({ min: c.low, max: c.high, noNaN: true }), (storm, truth) => {
-          const truthMethod = withValue(c.method, c.key, truth);
-          // Horton's f₀ ≥ f_c: keep the drawn pair valid.
-          if (truthMethod.kind === 'horton' && truthMethod.f0MmH < truthMethod.fcMmH) return;
-          const target = excessOf(storm, truthMethod);
-          const rain = computeLosses(storm, c.method).rainMm;
-          const r = calibrate(storm, c.method, c.key, target);
-          expect(r.ok).toBe(true);
-          if (!r.ok) return;
-          const nudged = (value: number, factor: number): number | undefined => {
-            try {
-              return excessOf(storm, withValue(c.method, c.key, value * factor));
-            } catch {
-              return undefined; // the nudge left the valid range (f₀ < f_c, Δθ > 1, CN > 100)
+        fc.property(
+          c.key === 'recoveryPerH'
+            ? recoveryDraws(c.low, c.high)
+            : fc.tuple(
+                fc.oneof(pondingStormArb, stormArb(30)),
+                c.log ? linearIn(Math.log(c.low), Math.log(c.high)).map(Math.exp) : linearIn(c.low, c.high),
+              ),
+          ([storm, truth]) => {
+            const truthMethod = withValue(c.method, c.key, truth);
+            // Horton's f₀ ≥ f_c: keep the drawn pair valid.
+            fc.pre(!(truthMethod.kind === 'horton' && truthMethod.f0MmH < truthMethod.fcMmH));
+            const target = excessOf(storm, truthMethod);
+            const rain = computeLosses(storm, c.method).rainMm;
+            const r = calibrate(storm, c.method, c.key, target);
+            expect(r.ok).toBe(true);
+            if (!r.ok) return;
+            const nudged = (value: number, factor: number): number | undefined => {
+              try {
+                return excessOf(storm, withValue(c.method, c.key, value * factor));
+              } catch {
+                return undefined; // the nudge left the valid range (f₀ < f_c, Δθ > 1, CN > 100)
+              }
+            };
+            // The fitted value is within 2e-9 of itself of an exact answer: the target
+            // lies between the runoffs of value·(1 ± 2e-9), to rounding of the rain.
+            const fitted = excessOf(storm, r.method);
+            const around = [fitted, nudged(r.value, 1 - 2e-9) ?? fitted, nudged(r.value, 1 + 2e-9) ?? fitted];
+            const slack = 1e-12 * Math.max(rain, 1);
+            expect(target).toBeGreaterThanOrEqual(Math.min(...around) - slack);
+            expect(target).toBeLessThanOrEqual(Math.max(...around) + slack);
+            expect(Math.abs(fitted - target)).toBeLessThanOrEqual(1e-6 * target + slack);
+            // Where runoff changes measurably on both sides of the true value (not on
+            // a plateau, where many values fit), the value itself comes back.
+            const up = nudged(truth, 1 + 1e-6);
+            const down = nudged(truth, 1 - 1e-6);
+            const moves = (e: number | undefined): boolean =>
+              e !== undefined && Math.abs(e - target) > 1e-7 * Math.max(target, 1e-3);
+            checked++;
+            if (truth > 0 && moves(up) && moves(down)) {
+              expect(Math.abs(r.value - truth)).toBeLessThanOrEqual(1e-9 * truth);
+              trueValueBack++;
             }
-          };
-          // The fitted value is within 2e-9 of itself of an exact answer: the target
-          // lies between the runoffs of value·(1 ± 2e-9), to rounding of the rain.
-          const fitted = excessOf(storm, r.method);
-          const around = [fitted, nudged(r.value, 1 - 2e-9) ?? fitted, nudged(r.value, 1 + 2e-9) ?? fitted];
-          const slack = 1e-12 * Math.max(rain, 1);
-          expect(target).toBeGreaterThanOrEqual(Math.min(...around) - slack);
-          expect(target).toBeLessThanOrEqual(Math.max(...around) + slack);
-          expect(Math.abs(fitted - target)).toBeLessThanOrEqual(1e-6 * target + slack);
-          // Where runoff changes measurably on both sides of the true value (not on
-          // a plateau, where many values fit), the value itself comes back.
-          const up = nudged(truth, 1 + 1e-6);
-          const down = nudged(truth, 1 - 1e-6);
-          const moves = (e: number | undefined): boolean =>
-            e !== undefined && Math.abs(e - target) > 1e-7 * Math.max(target, 1e-3);
-          if (truth > 0 && moves(up) && moves(down)) {
-            expect(Math.abs(r.value - truth)).toBeLessThanOrEqual(1e-9 * truth);
-          }
-        }),
-        { numRuns: 120 },
+          },
+        ),
+        { numRuns: 200 },
       );
+      // Every draw reaches the fit check, and enough reach the true-value check
+      // (measured: 26 to 95 of 200 over four seeds, the fewest for Horton k).
+      expect(checked).toBeGreaterThanOrEqual(190);
+      expect(trueValueBack).toBeGreaterThanOrEqual(15);
     },
   );
 

@@ -11,7 +11,8 @@ import {
   type IdfTable,
   type Storm,
 } from '../../../src/core';
-import { expectClose, thrown } from './close';
+import { expectClose } from '../../helpers/tolerance';
+import { thrown } from '../../helpers/thrown';
 
 /** Largest depth held by any run of j consecutive bars. */
 function maxRunDepth(storm: Storm, j: number): number {

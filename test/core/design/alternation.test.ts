@@ -1,7 +1,7 @@
 import { describe, expect, test } from 'vitest';
 import fc from 'fast-check';
 import { InputError, alternatingPositions } from '../../../src/core';
-import { thrown } from './close';
+import { thrown } from '../../helpers/thrown';
 
 describe('alternating block positions', () => {
   test('an odd number of bars puts the peak in the middle bar, then right, then left', () => {

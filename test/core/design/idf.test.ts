@@ -9,7 +9,8 @@ import {
   type Idf,
   type IdfTable,
 } from '../../../src/core';
-import { expectClose, thrown } from './close';
+import { expectClose } from '../../helpers/tolerance';
+import { thrown } from '../../helpers/thrown';
 
 // Coefficients in this file are invented for the tests unless a source is named.
 

@@ -1,7 +1,8 @@
 import { describe, expect, test } from 'vitest';
 import fc from 'fast-check';
 import { InputError, scaleStormToDepth, totalDepthMm, type Storm } from '../../../src/core';
-import { expectClose, thrown } from './close';
+import { expectClose } from '../../helpers/tolerance';
+import { thrown } from '../../helpers/thrown';
 
 // Invented storm: 4 bars, 30 min then 1 h bars, 20 mm in all.
 const storm: Storm = { durationsH: [0.5, 0.5, 1, 1], depthsMm: [2, 8, 6, 4], startIso: '2026-01-10T12:00:00Z' };

@@ -1,6 +1,7 @@
 import { describe, expect, test } from 'vitest';
 import { InputError, peakIntensityMmH, totalDepthMm, uniformStorm } from '../../../src/core';
-import { expectClose, thrown } from './close';
+import { expectClose } from '../../helpers/tolerance';
+import { thrown } from '../../helpers/thrown';
 
 describe('uniform storm', () => {
   test('40 mm over 2 h in 15-minute steps is 8 bars of 5 mm at 20 mm/h', () => {

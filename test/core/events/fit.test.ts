@@ -8,7 +8,7 @@ import {
   type CatchmentEvent,
   type LossMethod,
 } from '../../../src/core';
-import { thrown } from '../design/close';
+import { thrown } from '../../helpers/thrown';
 
 // All events in this file are invented.
 const bar = (depthMm: number, durationH = 1) => ({ durationsH: [durationH], depthsMm: [depthMm] });

@@ -7,7 +7,7 @@ import {
   summariseFits,
   type CatchmentEvent,
 } from '../../../src/core';
-import { thrown } from '../design/close';
+import { thrown } from '../../helpers/thrown';
 
 // Invented events, each one bar of 1 h, so φ = rain − observed by hand.
 const oneBar = (id: string, rainMm: number, observedExcessMm: number): CatchmentEvent => ({

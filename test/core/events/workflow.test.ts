@@ -9,7 +9,7 @@ import {
   type CatchmentEvent,
   type Idf,
 } from '../../../src/core';
-import { expectClose } from '../design/close';
+import { expectClose } from '../../helpers/tolerance';
 
 test('three events fitted, the median picked and applied to a design storm, end to end in the core', () => {
   // Invented catchment: three events in 1-hour bars, φ by hand from the bars above it.
