@@ -1,6 +1,10 @@
 import type { SeriesSettings } from '../../io';
 import { NumberField } from '../fields/NumberField';
 import { Select } from './Select';
+import { formatCount } from '../format';
+
+/** More lines than a file the dialog reads can hold (50 MB of one-character lines is 25 million). */
+const MAX_SKIP_LINES = 30_000_000;
 
 /** How the text splits: separator, decimal mark, header line, lines to skip. */
 export function SplitSettings({
@@ -47,7 +51,11 @@ export function SplitSettings({
         id={`${idPrefix}-skip-lines`}
         label="Lines to skip at the top"
         value={s.skipLines}
-        check={(v) => (Number.isInteger(v) && v >= 0 ? null : 'Enter a whole number of lines, 0 or more.')}
+        check={(v) =>
+          Number.isInteger(v) && v >= 0 && v <= MAX_SKIP_LINES
+            ? null
+            : `Enter a whole number of lines, 0 to ${formatCount(MAX_SKIP_LINES)}.`
+        }
         onCommit={(v) => onChange({ skipLines: v })}
       />
     </fieldset>

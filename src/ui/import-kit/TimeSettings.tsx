@@ -94,6 +94,7 @@ export function TimeSettings({
           label="Time step"
           unit="min"
           value={s.stepMinutesIfNoTime}
+          plausible={{ quantity: 'barDuration', siPerValue: 1 / 60 }}
           check={(v) => (v > 0 ? null : 'The time step must be more than 0 minutes.')}
           onCommit={(v) => onChange({ stepMinutesIfNoTime: v })}
           hint={words.stepHint}

@@ -1,0 +1,38 @@
+import { quoteTyped } from '../../io/number-format';
+import { breachMessage, checkPlausible, type PlausibleQuantity } from '../../io/plausible';
+import { formatValue } from '../format';
+import { parseNumber, type Parsed } from '../parse-number';
+
+/** What a typed number stands for, so it can be checked against its plausible range. */
+export interface TypedQuantity {
+  readonly quantity: PlausibleQuantity;
+  /** The typed number (as shown) in SI; the identity when the field shows SI. */
+  readonly toSI?: (shown: number) => number;
+  /** An SI value as shown; the inverse of toSI. */
+  readonly fromSI?: (si: number) => number;
+  /** The unit the field shows, e.g. "mm" or "min" ('' for none). */
+  readonly unit?: string;
+}
+
+const same = (x: number): number => x;
+
+/**
+ * The one way a typed number is read anywhere on screen: the reader's number
+ * format (parse-number), then the quantity's plausible range
+ * (src/io/plausible.ts), refused with a message that quotes what was typed
+ * and states the bound in the field's own unit. The value comes back as typed
+ * (display units).
+ */
+export function readTyped(text: string, what?: TypedQuantity): Parsed {
+  const parsed = parseNumber(text);
+  if (!parsed.ok || what === undefined) return parsed;
+  const toSI = what.toSI ?? same;
+  const fromSI = what.fromSI ?? same;
+  const breach = checkPlausible(what.quantity, toSI(parsed.value));
+  if (breach === null) return parsed;
+  const unit = what.unit ? ` ${what.unit}` : '';
+  return {
+    ok: false,
+    message: breachMessage(breach, `${quoteTyped(text)}${unit}`, `${formatValue(fromSI(breach.limit))}${unit}`),
+  };
+}
