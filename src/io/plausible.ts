@@ -167,6 +167,24 @@ export function breachMessage(breach: Breach, typed: string, limitText: string):
 }
 
 /**
+ * The first bar of a storm, or its total, outside the plausible depth (bar
+ * is -1 for the total), or null when every depth can be rain. A storm made
+ * by a tool (scaled, drawn, designed) is checked with it before it is used.
+ */
+export function checkStormDepths(storm: Storm): { readonly bar: number; readonly breach: Breach } | null {
+  let total = 0;
+  const n = storm.depthsMm.length;
+  for (let k = 0; k < n; k++) {
+    const depthMm = storm.depthsMm[k] as number;
+    const breach = checkPlausible('depth', depthMm);
+    if (breach) return { bar: k, breach };
+    total += depthMm;
+  }
+  const breach = checkPlausible('depth', total);
+  return breach ? { bar: -1, breach } : null;
+}
+
+/**
  * The world-record envelope of rainfall depth against duration,
  * P ≈ 422·D^0.475 (P in mm, D in hours), drawn above the world's greatest
  * observed point rainfalls (Jennings 1950; the constants from memory). It

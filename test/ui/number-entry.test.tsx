@@ -213,3 +213,93 @@ describe('matching reads as applied only when it is', () => {
     expect(store.getState().history.past).toHaveLength(1);
   });
 });
+
+describe('storm tools, drawing and design storms read numbers the one way, within what they can mean', () => {
+  async function openTools(user: ReturnType<typeof renderWorkbench>['user']) {
+    await user.click(screen.getByRole('button', { name: 'Storm tools' }));
+    return screen.getByRole('region', { name: 'Storm tools' });
+  }
+  async function fill(user: ReturnType<typeof renderWorkbench>['user'], field: HTMLElement, text: string) {
+    await user.clear(field);
+    await user.type(field, text);
+  }
+
+  it('a scale factor that would give a bar of 10³⁰⁰ mm is refused, and the storm is kept', async () => {
+    const { user, scenario } = renderWorkbench();
+    const tools = await openTools(user);
+    const factor = within(tools).getByRole('textbox', { name: 'Scale factor' });
+    await fill(user, factor, '1e300');
+    await user.click(within(tools).getByRole('button', { name: 'Scale bars' }));
+    expect(scenario().storm).toBe(FOUR_BARS.storm);
+    // Bar 1 holds 2 mm: ×10³⁰⁰ is 2e300 mm.
+    expect(factor).toHaveAccessibleDescription(
+      /^Bar 1 would hold 2e300 mm, which is more than a rainfall or runoff depth can be \(at most 30,000 mm\)/,
+    );
+    expectNoWildNumbers();
+  });
+
+  it('a total depth of "99,999,999" mm is refused, quoted; "1,000" is a thousand millimetres', async () => {
+    const { user, scenario } = renderWorkbench();
+    const tools = await openTools(user);
+    const total = within(tools).getByRole('textbox', { name: 'Total depth (mm)' });
+    await fill(user, total, '99,999,999');
+    await user.click(within(tools).getByRole('button', { name: 'Set total depth' }));
+    expect(scenario().storm).toBe(FOUR_BARS.storm);
+    expect(total).toHaveAccessibleDescription(/“99,999,999” mm is more than a rainfall or runoff depth can be/);
+    await fill(user, total, '1,000');
+    await user.click(within(tools).getByRole('button', { name: 'Set total depth' }));
+    // 20 mm scaled to 1,000 mm: every bar × 50 → 100, 300, 500, 100 mm.
+    expect(scenario().storm.depthsMm).toEqual([100, 300, 500, 100]);
+  });
+
+  it('a resampling step of a year and more is refused in the field’s own unit', async () => {
+    const { user, scenario } = renderWorkbench();
+    const tools = await openTools(user);
+    const step = within(tools).getByRole('textbox', { name: 'New time step (min)' });
+    await fill(user, step, '1e9');
+    await user.click(within(tools).getByRole('button', { name: 'Resample' }));
+    expect(scenario().storm).toBe(FOUR_BARS.storm);
+    // A year of 366 days is 527,040 min.
+    expect(step).toHaveAccessibleDescription(
+      /“1e9” min is more than a bar or time step can be \(at most 527,040 min\)/,
+    );
+  });
+
+  it('a new empty storm of "1,500" bars has fifteen hundred bars; a bar duration of 10³⁰⁰ min is refused', async () => {
+    const { user, scenario } = renderWorkbench();
+    await user.click(screen.getByRole('button', { name: 'Draw bars' }));
+    const panel = screen.getByRole('region', { name: 'Drawing bars' });
+    const count = within(panel).getByRole('textbox', { name: 'Number of bars' });
+    const step = within(panel).getByRole('textbox', { name: 'Bar duration (min)' });
+    await fill(user, count, '1,500');
+    await fill(user, step, '1e300');
+    await user.click(within(panel).getByRole('button', { name: 'Start a new empty storm' }));
+    expect(scenario().storm).toBe(FOUR_BARS.storm);
+    expect(step).toHaveAccessibleDescription(/^“1e300” min is more than a bar or time step can be/);
+    await fill(user, step, '5');
+    await user.click(within(panel).getByRole('button', { name: 'Start a new empty storm' }));
+    expect(scenario().storm.depthsMm).toHaveLength(1500);
+    expect(within(panel).getByRole('status')).toHaveTextContent('1,500 dry bars of 5 min');
+  });
+});
+
+describe('the design storm form reads numbers the one way', () => {
+  it('a uniform storm of "1,000" mm holds a thousand millimetres; 10³⁰⁰ mm is refused by name', async () => {
+    const { user } = renderWorkbench();
+    await user.click(screen.getByRole('tab', { name: 'Design storm' }));
+    await user.click(screen.getByRole('radio', { name: 'Uniform depth' }));
+    const depth = screen.getByRole('textbox', { name: 'Storm depth (mm)' });
+    await user.clear(depth);
+    await user.type(depth, '1e300');
+    expect(screen.getByRole('alert')).toHaveTextContent(
+      /^Storm depth: “1e300” mm is more than a rainfall or runoff depth can be \(at most 30,000 mm\)/,
+    );
+    await user.clear(depth);
+    await user.type(depth, '1,000');
+    const totals = screen.getByLabelText('Design storm totals');
+    expect(within(totals).getByText('Rainfall depth', { selector: 'dt' }).nextElementSibling).toHaveTextContent(
+      '1,000 mm',
+    );
+    expectNoWildNumbers();
+  }, 20_000);
+});

@@ -1,7 +1,9 @@
+import { totalDepthMm, type Storm, type UnitSystem } from '../../core';
 import { quoteTyped } from '../../io/number-format';
-import { breachMessage, checkPlausible, type PlausibleQuantity } from '../../io/plausible';
+import { breachMessage, checkPlausible, checkStormDepths, type PlausibleQuantity } from '../../io/plausible';
 import { formatValue } from '../format';
 import { parseNumber, type Parsed } from '../parse-number';
+import { displayUnit, toDisplay, unitText } from '../units';
 
 /** What a typed number stands for, so it can be checked against its plausible range. */
 export interface TypedQuantity {
@@ -35,4 +37,18 @@ export function readTyped(text: string, what?: TypedQuantity): Parsed {
     ok: false,
     message: breachMessage(breach, `${quoteTyped(text)}${unit}`, `${formatValue(fromSI(breach.limit))}${unit}`),
   };
+}
+
+/**
+ * Why a storm made by a tool (scaled, designed) cannot be used: a bar, or
+ * the whole storm, holding more than a rainfall depth can be. Null when it can.
+ */
+export function stormDepthRefusal(storm: Storm, system: UnitSystem): string | null {
+  const found = checkStormDepths(storm);
+  if (found === null) return null;
+  const depth = (mm: number): string =>
+    `${formatValue(toDisplay('depth', mm, system))} ${unitText(displayUnit('depth', system))}`;
+  const what = found.bar < 0 ? 'The storm would hold' : `Bar ${found.bar + 1} would hold`;
+  const mm = found.bar < 0 ? totalDepthMm(storm) : (storm.depthsMm[found.bar] as number);
+  return breachMessage(found.breach, `${what} ${depth(mm)}, which`, depth(found.breach.limit));
 }
