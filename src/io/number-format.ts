@@ -134,15 +134,28 @@ export function quoteTyped(text: string): string {
 
 const escape = (ch: string): string => ch.replace(/[.*+?^${}()|[\]\\]/g, '\\$&');
 
-/** The pattern of a number under a format, capturing sign, whole part, fraction and exponent. */
-function patternOf(format: NumberFormat): RegExp {
-  const g = format.group === ' ' ? `[${SPACES}]` : escape(format.group);
-  const d = escape(format.decimal);
-  const whole = `(\\d+|\\d{1,3}(?:${g}\\d{3})+)`;
+/**
+ * The pattern of a number with this decimal mark and digit grouping (null:
+ * none), capturing sign, whole part, fraction, bare fraction and exponent.
+ * Digits may always be written ungrouped; groups are of three digits.
+ * Shared by typed fields and by pasted cells (src/io/numbers.ts).
+ */
+export function numberPattern(decimal: '.' | ',', group: ',' | '.' | ' ' | null): RegExp {
+  const d = escape(decimal);
+  const g = group === null ? null : group === ' ' ? `[${SPACES}]` : escape(group);
+  const whole = g === null ? '(\\d+)' : `(\\d+|\\d{1,3}(?:${g}\\d{3})+)`;
   return new RegExp(`^([+-]?)(?:${whole}(?:${d}(\\d*))?|${d}(\\d+))(?:[eE]([+-]?\\d+))?$`);
 }
 
-const PATTERNS = new Map<NumberFormatId, RegExp>(NUMBER_FORMATS.map((f) => [f.id, patternOf(f)]));
+/** The number a match of numberPattern stands for (may be ±Infinity when it is too large; -0 comes back as 0). */
+export function matchedValue(m: RegExpExecArray): number {
+  const [, sign = '', whole, fraction, bare, exponent] = m;
+  const digits = whole === undefined ? `0.${bare ?? ''}` : `${whole.replace(/\D/g, '')}.${fraction ?? ''}`;
+  const value = Number(`${sign}${digits.replace(/\.$/, '')}${exponent === undefined ? '' : `e${exponent}`}`);
+  return Object.is(value, -0) ? 0 : value;
+}
+
+const PATTERNS = new Map<NumberFormatId, RegExp>(NUMBER_FORMATS.map((f) => [f.id, numberPattern(f.decimal, f.group)]));
 
 const WORDS = { '.': 'point', ',': 'comma' } as const;
 
@@ -183,9 +196,7 @@ export function readNumber(text: string, format: NumberFormat): NumberReading {
   if (t === '') return { ok: false, message: 'Enter a number.' };
   const m = (PATTERNS.get(format.id) as RegExp).exec(t);
   if (!m) return { ok: false, message: refusal(t, format) };
-  const [, sign = '', whole, fraction, bare, exponent] = m;
-  const digits = whole === undefined ? `0.${bare ?? ''}` : `${whole.replace(/\D/g, '')}.${fraction ?? ''}`;
-  const value = Number(`${sign}${digits.replace(/\.$/, '')}${exponent === undefined ? '' : `e${exponent}`}`);
+  const value = matchedValue(m);
   if (!Number.isFinite(value)) return { ok: false, message: `${quoteTyped(t)} is too large to be a number here.` };
-  return { ok: true, value: Object.is(value, -0) ? 0 : value };
+  return { ok: true, value };
 }

@@ -167,21 +167,19 @@ export function breachMessage(breach: Breach, typed: string, limitText: string):
 }
 
 /**
- * The first bar of a storm, or its total, outside the plausible depth (bar
- * is -1 for the total), or null when every depth can be rain. A storm made
- * by a tool (scaled, drawn, designed) is checked with it before it is used.
+ * The first bar of a storm holding more than a rainfall depth can be, or
+ * null when every bar can be rain. A storm made by a tool (scaled, drawn,
+ * designed) or read from text is checked with it before it is used. The
+ * total is not bounded: a gauge record of many years holds more than any
+ * one storm.
  */
 export function checkStormDepths(storm: Storm): { readonly bar: number; readonly breach: Breach } | null {
-  let total = 0;
   const n = storm.depthsMm.length;
   for (let k = 0; k < n; k++) {
-    const depthMm = storm.depthsMm[k] as number;
-    const breach = checkPlausible('depth', depthMm);
+    const breach = checkPlausible('depth', storm.depthsMm[k] as number);
     if (breach) return { bar: k, breach };
-    total += depthMm;
   }
-  const breach = checkPlausible('depth', total);
-  return breach ? { bar: -1, breach } : null;
+  return null;
 }
 
 /**

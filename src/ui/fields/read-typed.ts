@@ -1,4 +1,4 @@
-import { totalDepthMm, type Storm, type UnitSystem } from '../../core';
+import type { Storm, UnitSystem } from '../../core';
 import { quoteTyped } from '../../io/number-format';
 import { breachMessage, checkPlausible, checkStormDepths, type PlausibleQuantity } from '../../io/plausible';
 import { formatValue } from '../format';
@@ -48,7 +48,6 @@ export function stormDepthRefusal(storm: Storm, system: UnitSystem): string | nu
   if (found === null) return null;
   const depth = (mm: number): string =>
     `${formatValue(toDisplay('depth', mm, system))} ${unitText(displayUnit('depth', system))}`;
-  const what = found.bar < 0 ? 'The storm would hold' : `Bar ${found.bar + 1} would hold`;
-  const mm = found.bar < 0 ? totalDepthMm(storm) : (storm.depthsMm[found.bar] as number);
-  return breachMessage(found.breach, `${what} ${depth(mm)}, which`, depth(found.breach.limit));
+  const mm = storm.depthsMm[found.bar] as number;
+  return breachMessage(found.breach, `Bar ${found.bar + 1} would hold ${depth(mm)}, which`, depth(found.breach.limit));
 }
