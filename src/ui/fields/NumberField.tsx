@@ -3,7 +3,8 @@ import { isInputError } from '../../core';
 import type { PlausibleQuantity } from '../../io/plausible';
 import { formatForField, formatValue } from '../format';
 import { FieldFrame, fieldDescribedBy } from './FieldFrame';
-import { readTyped } from './read-typed';
+import { implausible } from './read-typed';
+import { parseNumber } from '../parse-number';
 
 /** How a field's edits reach the undo history: one typing session (focus to blur) is one step. */
 export interface FieldEdit {
@@ -198,22 +199,24 @@ export function NumberField({
       else store(session, typed, 'empty', () => empty.store(edit));
       return;
     }
-    const range = typeof plausible === 'string' ? { quantity: plausible, siPerValue: 1 } : plausible;
-    const parsed = readTyped(
-      typed,
-      range && {
-        quantity: range.quantity,
-        toSI: (v) => fromDisplay(v) * range.siPerValue,
-        fromSI: (si) => toDisplay(si / range.siPerValue),
-        unit: valueUnit,
-      },
-    );
+    const parsed = parseNumber(typed);
     if (!parsed.ok) return refuse(session, typed, parsed.message);
     const refused = checkShown?.(parsed.value) ?? null;
     if (refused) return refuse(session, typed, refused);
     const si = fromDisplay(parsed.value);
+    // The field's own rule first (its words are the most specific), then what the quantity can mean at all.
     const problem = check?.(si) ?? null;
     if (problem) return refuse(session, typed, problem);
+    const range = typeof plausible === 'string' ? { quantity: plausible, siPerValue: 1 } : plausible;
+    const beyond =
+      range &&
+      implausible(typed, parsed.value, {
+        quantity: range.quantity,
+        toSI: (v) => fromDisplay(v) * range.siPerValue,
+        fromSI: (s) => toDisplay(s / range.siPerValue),
+        unit: valueUnit,
+      });
+    if (beyond) return refuse(session, typed, beyond);
     store(session, typed, si, () => onCommit(si, edit));
   };
 

@@ -28,15 +28,18 @@ const same = (x: number): number => x;
 export function readTyped(text: string, what?: TypedQuantity): Parsed {
   const parsed = parseNumber(text);
   if (!parsed.ok || what === undefined) return parsed;
+  const refused = implausible(text, parsed.value, what);
+  return refused === null ? parsed : { ok: false, message: refused };
+}
+
+/** Why a typed number (as shown) is beyond what its quantity can mean, quoting the text; null when it is not. */
+export function implausible(text: string, shown: number, what: TypedQuantity): string | null {
   const toSI = what.toSI ?? same;
   const fromSI = what.fromSI ?? same;
-  const breach = checkPlausible(what.quantity, toSI(parsed.value));
-  if (breach === null) return parsed;
+  const breach = checkPlausible(what.quantity, toSI(shown));
+  if (breach === null) return null;
   const unit = what.unit ? ` ${what.unit}` : '';
-  return {
-    ok: false,
-    message: breachMessage(breach, `${quoteTyped(text)}${unit}`, `${formatValue(fromSI(breach.limit))}${unit}`),
-  };
+  return breachMessage(breach, `${quoteTyped(text)}${unit}`, `${formatValue(fromSI(breach.limit))}${unit}`);
 }
 
 /**
