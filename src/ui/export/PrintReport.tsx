@@ -8,7 +8,7 @@ import { LINE_PARAM } from '../chart/line-params';
 import { formatWallDate, formatWallTime, wallClockMs } from '../chart/clock';
 import { totalsOf } from '../compare/totals';
 import { fittedCellText } from '../matching/fit-words';
-import { formatPercent, formatValue } from '../format';
+import { formatCount, formatPercent, formatValue } from '../format';
 import { displayUnit, toDisplay, unitText, type Quantity } from '../units';
 import { useServices } from '../share/services';
 import { methodParametersText } from './bar-table-csv';
@@ -63,7 +63,8 @@ function ReportBody() {
         <dl>
           <dt>Storm</dt>
           <dd>
-            {n} bar{n === 1 ? '' : 's'}, {show('depth', totals.rainMm)} in {formatValue(totalDurationH(storm))} h
+            {formatCount(n)} bar{n === 1 ? '' : 's'}, {show('depth', totals.rainMm)} in{' '}
+            {formatValue(totalDurationH(storm))} h
             {startMs === null ? '' : `, from ${formatWallDate(startMs)} ${formatWallTime(startMs)}`}
           </dd>
           <dt>Catchment</dt>

@@ -2,7 +2,7 @@ import type { ReactNode } from 'react';
 import { totalDepthMm, totalDurationH } from '../../core';
 import { useScenario } from '../../store';
 import { wallClockMs, formatWallDate, formatWallTime } from '../chart/clock';
-import { formatValue } from '../format';
+import { formatCount, formatValue } from '../format';
 import { displayUnit, toDisplay, unitText } from '../units';
 
 /** "10 min", "1 h", "1 h 30 min" for a bar duration in hours. */
@@ -12,7 +12,7 @@ export function formatDuration(hours: number): string {
   if (minutes < 60) return `${formatValue(minutes)} min`;
   const whole = Math.floor(minutes / 60);
   const rest = Math.round((minutes - whole * 60) * 1000) / 1000;
-  return rest === 0 ? `${formatValue(whole)} h` : `${formatValue(whole)} h ${formatValue(rest)} min`;
+  return rest === 0 ? `${formatCount(whole)} h` : `${formatCount(whole)} h ${formatValue(rest)} min`;
 }
 
 /**
@@ -35,8 +35,8 @@ export function RainfallToolbar({ tools }: { tools?: ReactNode }) {
     n === 0
       ? 'No bars'
       : uniform && first !== undefined
-        ? `${n} bar${n === 1 ? '' : 's'} of ${formatDuration(first)}`
-        : `${n} bars of mixed durations`;
+        ? `${formatCount(n)} bar${n === 1 ? '' : 's'} of ${formatDuration(first)}`
+        : `${formatCount(n)} bars of mixed durations`;
   const depth = `${formatValue(toDisplay('depth', totalDepthMm(storm), units))} ${unitText(displayUnit('depth', units))}`;
   const start = storm.startIso === undefined ? null : wallClockMs(storm.startIso);
   const when = start === null ? '' : `, from ${formatWallDate(start)} ${formatWallTime(start)}`;

@@ -3,7 +3,7 @@ import { isInputError, scaleStormToDepth, totalDepthMm, type Storm } from '../..
 import { resampleStorm, scaleStormByFactor } from '../../../core/storm-tools';
 import { useActions, useScenario } from '../../../store';
 import { formatDuration } from '../../rainfall/RainfallToolbar';
-import { formatForField, formatValue } from '../../format';
+import { formatCount, formatForField, formatValue } from '../../format';
 import { readTyped, stormDepthRefusal } from '../../fields/read-typed';
 import { parseNumber } from '../../parse-number';
 import { displayUnit, fromDisplay, toDisplay, unitText } from '../../units';
@@ -118,7 +118,7 @@ export function StormTools() {
         m > 1 && Math.abs(last - parsed.value / 60) > 1e-9
           ? `; the last bar is ${formatDuration(last)}, to the end of the storm`
           : '';
-      return `Now ${m} bar${m === 1 ? '' : 's'} of ${formatDuration(next.durationsH[0] as number)}${shorter}; ${totalText(next)} kept.`;
+      return `Now ${formatCount(m)} bar${m === 1 ? '' : 's'} of ${formatDuration(next.durationsH[0] as number)}${shorter}; ${totalText(next)} kept.`;
     });
   };
 
@@ -147,7 +147,7 @@ export function StormTools() {
       return;
     }
     actions.setStorm({ durationsH: [], depthsMm: [] }, 'Clear storm');
-    setStatus(`All ${n} bars removed. Undo brings them back.`);
+    setStatus(`All ${formatCount(n)} bars removed. Undo brings them back.`);
   };
 
   return (
