@@ -303,3 +303,23 @@ describe('the design storm form reads numbers the one way', () => {
     expectNoWildNumbers();
   }, 20_000);
 });
+
+describe('rain beyond the world’s records is flagged in plain words above the chart', () => {
+  it('500 mm typed into a 30-min bar is applied, and the Rainfall region says it passes the records', async () => {
+    const { user, scenario } = renderWorkbench();
+    const rainfall = screen.getByRole('region', { name: 'Rainfall' });
+    expect(within(rainfall).queryByRole('note')).toBeNull();
+    const table = screen.getByRole('grid', { name: 'Bar table' });
+    const depth = within(table)
+      .getAllByRole('gridcell')
+      .filter((c) => c.getAttribute('aria-colindex') === '4')[2];
+    if (!depth) throw new Error('no depth cell for bar 3');
+    await user.click(depth);
+    await user.keyboard('500{Enter}');
+    expect(scenario().storm.depthsMm).toEqual([2, 6, 500, 2]);
+    // 30 min: 422 × 0.5^0.475 = 422 × e^(−0.475 × 0.693147) = 422 × 0.719461 = 303.6 mm (Jennings 1950, from memory).
+    expect(within(rainfall).getByRole('note')).toHaveTextContent(
+      'Bar 3 holds 500 mm in 30 min, more than the world’s greatest recorded rainfalls (about 303.6 mm in 30 min; Jennings 1950, from memory). Check the unit and the bar durations.',
+    );
+  });
+});

@@ -61,7 +61,7 @@ export function TimeSettings({
     let timeKind = s.timeKind;
     if (timeKind === 'none') {
       const cell = rows.find((r) => r.cells.length > 0)?.cells[c - 1] ?? '';
-      timeKind = Number.isNaN(parseCell(cell, s.decimal)) ? 'clock' : numberKind;
+      timeKind = Number.isNaN(parseCell(cell, s.decimal, s.grouping)) ? 'clock' : numberKind;
     }
     const patch: Partial<SeriesSettings> = { timeColumn: c, timeKind };
     if (c === s.valueColumn) {
