@@ -357,7 +357,7 @@ function successSummary(
     const b = beyond.first;
     const others = beyond.count > 1 ? ` (and ${plural(beyond.count - 1, 'other bar', undefined, format)})` : '';
     notes.push(
-      `check the unit and the step: bar ${formatCount(b.bar + 1, format)}${others} holds ${formatAmount(b.depthMm, format)} mm in ${formatDuration(b.durationH, format)}, more than the world's greatest recorded rainfalls (about ${formatAmount(b.recordMm, format)} mm in that time; Jennings 1950, from memory)`,
+      `check the unit and the step: bar ${formatCount(b.bar + 1, format)}${others} holds ${formatAmount(b.depthMm, format)} mm in ${formatDuration(b.durationH, format)}, more than the world’s greatest recorded rainfalls (about ${formatAmount(b.recordMm, format)} mm in that time; Jennings 1950, from memory)`,
     );
   }
   return `${parts.join(', ')}${notes.length > 0 ? `; ${notes.join('; ')}` : ''}.`;

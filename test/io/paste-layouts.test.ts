@@ -155,7 +155,7 @@ describe('values beyond what a bar can hold are refused where they were read', (
     const result = applyRainImport(text, guessRainSettings(text, { stepMinutes: 10 }));
     expect(result.ok).toBe(true);
     expect(result.summary).toMatch(
-      /check the unit and the step: bar 2 holds 300 mm in 10 min, more than the world's greatest recorded rainfalls \(about 180\.2 mm in that time/,
+      /check the unit and the step: bar 2 holds 300 mm in 10 min, more than the world’s greatest recorded rainfalls \(about 180\.2 mm in that time/,
     );
   });
 });

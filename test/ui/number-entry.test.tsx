@@ -5,7 +5,13 @@
 import { screen, within } from '@testing-library/react';
 import { afterEach, describe, expect, it } from 'vitest';
 import type { Scenario } from '../../src/scenario/types';
-import { chooseNumberFormat } from '../../src/ui/number-format';
+import {
+  NUMBER_FORMAT_KEY,
+  chooseNumberFormat,
+  currentNumberFormat,
+  formatForLanguage,
+  startNumberFormat,
+} from '../../src/ui/number-format';
 import { totalsOf } from '../../src/ui/compare/totals';
 import { renderWorkbench } from './render';
 import { FOUR_BARS } from './store/fixtures';
@@ -14,7 +20,10 @@ import { FOUR_BARS } from './store/fixtures';
 const CURVE_NUMBER: Scenario = { ...FOUR_BARS, method: { kind: 'curve-number', cn: 75, iaRatio: 0.2 } };
 const PROPORTIONAL: Scenario = { ...FOUR_BARS, method: { kind: 'proportional', coefficient: 0.4 } };
 
-afterEach(() => chooseNumberFormat('1,234.5'));
+afterEach(() => {
+  startNumberFormat({ storage: null, language: 'en-US' });
+  chooseNumberFormat('1,234.5');
+});
 
 /**
  * Every number on screen as text: no NaN, no Infinity, no long run of digits
@@ -321,5 +330,40 @@ describe('rain beyond the world’s records is flagged in plain words above the 
     expect(within(rainfall).getByRole('note')).toHaveTextContent(
       'Bar 3 holds 500 mm in 30 min, more than the world’s greatest recorded rainfalls (about 303.6 mm in 30 min; Jennings 1950, from memory). Check the unit and the bar durations.',
     );
+  });
+});
+
+describe('the number format is the reader’s, kept in this browser and never in the scenario', () => {
+  it('choosing 1 234,5 rewrites every number on screen and reads typed numbers that way', async () => {
+    const { user, scenario } = renderWorkbench();
+    const before = scenario();
+    // FOUR_BARS with φ = 8 mm/h: excess 6 − 4 + 10 − 4 = 8 mm over 1 km² = 8,000 m³.
+    expect(screen.getByLabelText('Runoff volume')).toHaveTextContent('8,000 m³');
+    await user.selectOptions(screen.getByRole('combobox', { name: 'Number format' }), '1 234,5');
+    expect(screen.getByLabelText('Runoff volume').textContent).toBe('8\u202f000 m³');
+    expect(screen.getByRole('combobox', { name: 'Number format' })).toHaveFocus();
+    const rate = screen.getByRole('textbox', { name: 'Loss rate φ (mm/h)' });
+    await user.clear(rate);
+    await user.type(rate, '7,5');
+    expect(scenario().method).toEqual({ kind: 'constant', rateMmH: 7.5 });
+    // The scenario itself carries no number format.
+    expect(Object.keys(scenario())).toEqual(Object.keys(before));
+  });
+
+  it('starts from the saved choice, else from the browser’s language', () => {
+    const saved = { data: new Map([[NUMBER_FORMAT_KEY, '1.234,5']]) };
+    const storage = {
+      getItem: (k: string) => saved.data.get(k) ?? null,
+      setItem: (k: string, v: string) => void saved.data.set(k, v),
+    };
+    startNumberFormat({ storage, language: 'en-US' });
+    expect(currentNumberFormat().id).toBe('1.234,5');
+    chooseNumberFormat('1 234.5');
+    expect(saved.data.get(NUMBER_FORMAT_KEY)).toBe('1 234.5');
+    startNumberFormat({ storage: null, language: 'de-DE' });
+    expect(currentNumberFormat().id).toBe('1.234,5');
+    expect(formatForLanguage('fr-FR').id).toBe('1 234,5');
+    expect(formatForLanguage('en-GB').id).toBe('1,234.5');
+    expect(formatForLanguage('not a language').id).toBe('1,234.5');
   });
 });

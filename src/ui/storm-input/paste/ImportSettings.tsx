@@ -78,10 +78,12 @@ export function ImportSettings({
                 : { valuesAlong: 'column' },
             )
           }
-          hint={along ? 'Each value on a line is one bar, line after line, without times.' : undefined}
+          hint={
+            along ? 'Each value on a line is one bar, line after line, without times (a spreadsheet row).' : undefined
+          }
         >
-          <option value="column">Down a column, one per line</option>
-          <option value="line">Along each line (a row copied)</option>
+          <option value="column">Down a column</option>
+          <option value="line">Along each line</option>
         </Select>
         {along ? null : (
           <Select
