@@ -9,6 +9,7 @@ import {
   checkStep,
   columnName,
   openSeries,
+  previewOf,
   type ImportHints,
   type Series,
   type SeriesSettings,
@@ -202,15 +203,7 @@ export function previewFlowImport(
   format: NumberFormat = DEFAULT_NUMBER_FORMAT,
 ): FlowImportPreview {
   const { result, series } = runFlowImport(text, settings, format);
-  const table = series?.table ?? null;
-  return {
-    settings,
-    summary: result.summary,
-    header: table?.header?.cells ?? null,
-    rows: table?.rows ?? [],
-    columnCount: table?.columnCount ?? 0,
-    problems: result.problems,
-  };
+  return previewOf(settings, result, series);
 }
 
 /** Guesses the settings and returns the preview they give. */

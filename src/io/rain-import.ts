@@ -10,6 +10,7 @@ import {
   checkStep,
   columnName,
   openSeries,
+  previewOf,
   type ImportHints,
   type Series,
   type SeriesSettings,
@@ -470,15 +471,7 @@ export function previewRainImport(
   format: NumberFormat = DEFAULT_NUMBER_FORMAT,
 ): RainImportPreview {
   const { result, series } = runRainImport(text, settings, format);
-  const table = series?.table ?? null;
-  return {
-    settings,
-    summary: result.summary,
-    header: table?.header?.cells ?? null,
-    rows: table?.rows ?? [],
-    columnCount: table?.columnCount ?? 0,
-    problems: result.problems,
-  };
+  return previewOf(settings, result, series);
 }
 
 /** Guesses the settings and returns the preview they give. */

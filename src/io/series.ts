@@ -1,7 +1,7 @@
 import { SEPARATORS, readTable, type Separator, type TextRow, type TextTable } from './table-text';
 import { GROUPINGS, notANumberReason, parseNumber, type DecimalMark, type Grouping } from './numbers';
 import type { NumberFormat } from './number-format';
-import { problem, type ProblemList } from './problems';
+import { problem, type ImportProblem, type ProblemList } from './problems';
 import {
   DATE_ORDERS,
   TIME_KINDS,
@@ -291,6 +291,23 @@ export function readSeries(text: string, s: SeriesSettings, field: string, probl
     times = { hours, origin: line.origin, firstTimeOfDayMs: line.firstTimeOfDayMs };
   }
   return { table, values, times };
+}
+
+/** What a paste dialog shows of one import run: the settings, its summary and problems, and the table as split. */
+export function previewOf<S extends SeriesSettings>(
+  settings: S,
+  result: { readonly summary: string; readonly problems: readonly ImportProblem[] },
+  series: Series | null,
+) {
+  const table = series?.table ?? null;
+  return {
+    settings,
+    summary: result.summary,
+    header: table?.header?.cells ?? null,
+    rows: table?.rows ?? [],
+    columnCount: table?.columnCount ?? 0,
+    problems: result.problems,
+  };
 }
 
 /** The header's name for a 1-based column, or ''. */
