@@ -6,6 +6,7 @@ import { startWorkbench } from './store/start';
 import { App } from './ui/App';
 import { ErrorBoundary } from './ui/layout/ErrorBoundary';
 import { browserServices } from './ui/share';
+import { startNumberFormat } from './ui/number-format';
 import './styles/app.css';
 
 /** The browser's storage, or null where it is switched off (reading `localStorage` can itself throw). */
@@ -19,6 +20,8 @@ function browserStorage(): StorageLike | null {
 }
 
 const storage = browserStorage();
+// The reader's number format (a browser preference, never part of the scenario).
+startNumberFormat({ storage, language: navigator.language });
 // The saved scenario, and a share link in the address shown over it unsaved until the user chooses (src/store/link-session.ts).
 const { store, link } = startWorkbench({
   storage,

@@ -1,20 +1,33 @@
-/** Short wording for import summaries: durations, amounts, steps. */
+import { DEFAULT_NUMBER_FORMAT, writeNumber, type NumberFormat } from './number-format';
 
-/** A number with at most `decimals` decimals and no trailing zeros: 41.6, 0.125, 12. */
-export function formatAmount(value: number, decimals = 2): string {
-  if (!Number.isFinite(value)) return String(value);
-  const text = Number(value.toFixed(decimals)).toString();
-  return text === '-0' ? '0' : text;
+/**
+ * Short wording for import summaries: durations, amounts, steps, counts,
+ * with numbers written the way the screen writes them (four significant
+ * figures, whole numbers from 1000, grouped in the reader's number format),
+ * so a preview and the workbench never disagree on how a number looks.
+ */
+
+const RESULT = { significant: 4, wholeFrom: 1000 } as const;
+
+/** An amount as the screen writes a result: 41.6, 0.125, 115,032. */
+export function formatAmount(value: number, format: NumberFormat = DEFAULT_NUMBER_FORMAT): string {
+  return writeNumber(value, format, RESULT);
 }
 
-/** A duration in hours as people say it: "30 s", "10 min", "2.5 min", "1 h", "1 h 30 min". */
-export function formatDuration(hours: number): string {
+/** A count, grouped: "50,000". */
+export function formatCount(n: number, format: NumberFormat = DEFAULT_NUMBER_FORMAT): string {
+  return writeNumber(Math.round(n), format, { significant: 15 });
+}
+
+/** A duration in hours as people say it: "30 s", "10 min", "2.5 min", "1 h", "1 h 30 min", "50,000 h". */
+export function formatDuration(hours: number, format: NumberFormat = DEFAULT_NUMBER_FORMAT): string {
   const minutes = Number((hours * 60).toFixed(6));
-  if (minutes < 1) return `${formatAmount(minutes * 60, 3)} s`;
-  if (minutes < 60) return `${formatAmount(minutes, 3)} min`;
+  if (minutes < 1) return `${formatAmount(minutes * 60, format)} s`;
+  if (minutes < 60) return `${formatAmount(minutes, format)} min`;
   const whole = Math.floor(minutes / 60);
   const rest = Number((minutes - whole * 60).toFixed(6));
-  return rest === 0 ? `${whole} h` : `${whole} h ${formatAmount(rest, 3)} min`;
+  const h = formatCount(whole, format);
+  return rest === 0 ? `${h} h` : `${h} h ${formatAmount(rest, format)} min`;
 }
 
 /** Smallest and largest of a list of durations. */
@@ -34,12 +47,12 @@ export function sameStep(a: number, b: number): boolean {
 }
 
 /** "10 min", or "5 min to 1 h (irregular steps)" when the steps differ. */
-export function describeSteps(durations: readonly number[]): string {
+export function describeSteps(durations: readonly number[], format: NumberFormat = DEFAULT_NUMBER_FORMAT): string {
   const { min, max } = durationRange(durations);
   if (durations.length === 0) return '';
-  if (sameStep(min, max)) return formatDuration(min);
-  const low = formatDuration(min);
-  const high = formatDuration(max);
+  if (sameStep(min, max)) return formatDuration(min, format);
+  const low = formatDuration(min, format);
+  const high = formatDuration(max, format);
   // "5 to 25 min" rather than "5 min to 25 min".
   const shortLow = low.endsWith(' min') && high.endsWith(' min') && !low.includes('h') ? low.slice(0, -4) : low;
   return `${shortLow} to ${high} (irregular steps)`;
@@ -56,4 +69,10 @@ export function formatIsoForPeople(iso: string): string {
   return iso.replace('T', ' ').replace(/(\d{2}:\d{2}):00(?=$|[Z+-])/, '$1');
 }
 
-export const plural = (n: number, one: string, many = `${one}s`): string => `${n} ${n === 1 ? one : many}`;
+/** "1 bar", "50,000 bars". */
+export const plural = (
+  n: number,
+  one: string,
+  many = `${one}s`,
+  format: NumberFormat = DEFAULT_NUMBER_FORMAT,
+): string => `${formatCount(n, format)} ${n === 1 ? one : many}`;

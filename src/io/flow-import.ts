@@ -1,8 +1,19 @@
 import { DISCHARGE_UNITS, UNIT_LABELS, type DischargeUnit } from '../core';
 import { describeSteps, formatAmount, isRegular, formatDuration, formatIsoForPeople, plural } from './describe';
+import { DEFAULT_NUMBER_FORMAT, type NumberFormat } from './number-format';
 import { guessLayout, pickValueColumn } from './layout-guess';
 import { problem, problemList, type ImportProblem, type ProblemList } from './problems';
-import { checkSeriesSettings, checkStep, columnName, openSeries, type Series, type SeriesSettings } from './series';
+import { numberStyleOf } from './numbers';
+import {
+  checkSeriesSettings,
+  checkStep,
+  columnName,
+  openSeries,
+  previewOf,
+  type ImportHints,
+  type Series,
+  type SeriesSettings,
+} from './series';
 import type { TextRow } from './table-text';
 import { formatTimeOfDay, isoAt } from './time-values';
 
@@ -50,8 +61,8 @@ export function flowUnitFromName(name: string): DischargeUnit | undefined {
 }
 
 /** Guesses every setting for a streamflow paste. */
-export function guessFlowSettings(text: string): FlowImportSettings {
-  const layout = guessLayout(text, isFlowName);
+export function guessFlowSettings(text: string, hints: ImportHints = {}): FlowImportSettings {
+  const layout = guessLayout(text, isFlowName, numberStyleOf(hints.numberFormat ?? DEFAULT_NUMBER_FORMAT));
   const valueColumn = pickValueColumn(layout, isFlowName);
   const name = columnName(layout.table, valueColumn);
   const step = /(\d+(?:[.,]\d+)?)\s*-?\s*min/i.exec(name);
@@ -65,6 +76,8 @@ export function guessFlowSettings(text: string): FlowImportSettings {
   return {
     separator: layout.separator,
     decimal: layout.decimal,
+    grouping: layout.grouping,
+    skipBlankLines: false,
     skipLines: layout.skipLines,
     hasHeader: layout.hasHeader,
     dateColumn: layout.dateColumn,
@@ -89,21 +102,21 @@ function unitLabel(unit: DischargeUnit): string {
   return UNIT_LABELS[unit] ?? unit;
 }
 
-function describeTimes(s: FlowImportSettings): string {
+function describeTimes(s: FlowImportSettings, format: NumberFormat): string {
   if (s.timeKind === 'none' || s.timeColumn === null)
-    return `without times, ${formatDuration(s.stepMinutesIfNoTime / 60)} apart`;
+    return `without times, ${formatDuration(s.stepMinutesIfNoTime / 60, format)} apart`;
   const kind =
     s.timeKind === 'clock' ? 'clock times' : s.timeKind === 'elapsed-min' ? 'elapsed minutes' : 'elapsed hours';
   return `with ${kind} in column ${s.timeColumn}`;
 }
 
-function failureSummary(series: Series | null, s: FlowImportSettings, count: number): string {
-  const text = `${plural(count, 'problem')} to fix before importing.`;
+function failureSummary(series: Series | null, s: FlowImportSettings, count: number, format: NumberFormat): string {
+  const text = `${plural(count, 'problem', undefined, format)} to fix before importing.`;
   if (series === null) return text.charAt(0).toUpperCase() + text.slice(1);
-  return `Read ${plural(series.table.rows.length, 'data line')} as discharge in ${unitLabel(s.unit)} ${describeTimes(s)}; ${text}`;
+  return `Read ${plural(series.table.rows.length, 'data line', undefined, format)} as discharge in ${unitLabel(s.unit)} ${describeTimes(s, format)}; ${text}`;
 }
 
-function successSummary(record: FlowRecord, series: Series, s: FlowImportSettings): string {
+function successSummary(record: FlowRecord, series: Series, s: FlowImportSettings, format: NumberFormat): string {
   const { timesH, dischargeM3s } = record;
   const n = timesH.length;
   const steps: number[] = [];
@@ -111,25 +124,27 @@ function successSummary(record: FlowRecord, series: Series, s: FlowImportSetting
   let peakAt = 0;
   for (let k = 1; k < n; k++) if ((dischargeM3s[k] as number) > (dischargeM3s[peakAt] as number)) peakAt = k;
   const spacing = isRegular(steps)
-    ? `every ${describeSteps(steps)}`
-    : `${describeSteps(steps).replace(' (irregular steps)', '')} apart (irregular steps)`;
-  let head = `${plural(n, 'sample')} ${spacing}`;
+    ? `every ${describeSteps(steps, format)}`
+    : `${describeSteps(steps, format).replace(' (irregular steps)', '')} apart (irregular steps)`;
+  let head = `${plural(n, 'sample', undefined, format)} ${spacing}`;
   if (record.startIso !== undefined) head += ` from ${formatIsoForPeople(record.startIso)}`;
   else if (series.times !== null && series.times.firstTimeOfDayMs !== null) {
     head += ` from ${formatTimeOfDay(series.times.firstTimeOfDayMs)} (time of day; no date given)`;
   }
-  head += `, spanning ${formatDuration(timesH[n - 1] as number)}`;
+  head += `, spanning ${formatDuration(timesH[n - 1] as number, format)}`;
   const peak = (dischargeM3s[peakAt] as number) / DISCHARGE_UNITS[s.unit];
   const peakRow = series.table.rows[peakAt];
   const parts = [
     head,
     `discharge in ${unitLabel(s.unit)}`,
-    `peak ${formatAmount(peak, 3)} ${unitLabel(s.unit)}${peakRow ? ` on line ${peakRow.line}` : ''}`,
+    `peak ${formatAmount(peak, format)} ${unitLabel(s.unit)}${peakRow ? ` on line ${peakRow.line}` : ''}`,
   ];
   const notes: string[] = [];
   if (series.times === null)
-    notes.push(`no times, so samples are ${formatDuration(s.stepMinutesIfNoTime / 60)} apart as set`);
-  if (s.skipLines > 0) notes.push(`${plural(s.skipLines, 'line')} skipped at the top`);
+    notes.push(`no times, so samples are ${formatDuration(s.stepMinutesIfNoTime / 60, format)} apart as set`);
+  if (s.skipLines > 0) notes.push(`${plural(s.skipLines, 'line', undefined, format)} skipped at the top`);
+  const blank = series.table.blankLinesSkipped;
+  if (blank > 0) notes.push(`${plural(blank, 'blank line', undefined, format)} inside the data skipped`);
   return `${parts.join(', ')}${notes.length > 0 ? `; ${notes.join('; ')}` : ''}.`;
 }
 
@@ -138,57 +153,64 @@ interface FlowRun {
   readonly series: Series | null;
 }
 
-function fail(series: Series | null, s: FlowImportSettings, problems: ProblemList): FlowRun {
+function fail(series: Series | null, s: FlowImportSettings, problems: ProblemList, format: NumberFormat): FlowRun {
   return {
-    result: { ok: false, summary: failureSummary(series, s, problems.count), problems: problems.list() },
+    result: { ok: false, summary: failureSummary(series, s, problems.count, format), problems: problems.list() },
     series,
   };
 }
 
-function runFlowImport(text: string, settings: FlowImportSettings): FlowRun {
+function runFlowImport(text: string, settings: FlowImportSettings, format: NumberFormat): FlowRun {
   const problems = problemList();
   const series = openSeries(text, settings, checkFlowSettings, () => 'discharge', problems);
-  if (series === null) return fail(null, settings, problems);
+  if (series === null) return fail(null, settings, problems, format);
   const n = series.table.rows.length;
   if (n === 0) problems.add(problem(0, 0, 'text', '', 'no data lines were found; paste times and discharges.'));
   else if (n === 1)
     problems.add(problem(0, 0, 'text', '', 'a streamflow record needs at least two samples; only one line was found.'));
-  if (problems.count > 0) return fail(series, settings, problems);
+  if (problems.count > 0) return fail(series, settings, problems, format);
 
   const factor = DISCHARGE_UNITS[settings.unit];
   const dischargeM3s = series.values.map((v) => v * factor);
   let timesH: number[];
   if (series.times === null) {
-    if (!checkStep(settings, problems)) return fail(series, settings, problems);
+    if (!checkStep(settings, problems)) return fail(series, settings, problems, format);
     const dt = settings.stepMinutesIfNoTime / 60;
     timesH = series.values.map((_, k) => k * dt);
   } else timesH = series.times.hours.slice();
   const origin = series.times?.origin ?? null;
   const record: FlowRecord =
     origin === null ? { timesH, dischargeM3s } : { timesH, dischargeM3s, startIso: isoAt(origin, 0) };
-  return { result: { ok: true, record, summary: successSummary(record, series, settings), problems: [] }, series };
-}
-
-/** Reads a streamflow record with the given settings. Never throws; bad input comes back as problems. */
-export function applyFlowImport(text: string, settings: FlowImportSettings): FlowImportResult {
-  return runFlowImport(text, settings).result;
-}
-
-/** The preview for given settings: the table as split, the summary and the problems. */
-export function previewFlowImport(text: string, settings: FlowImportSettings): FlowImportPreview {
-  const { result, series } = runFlowImport(text, settings);
-  const table = series?.table ?? null;
   return {
-    settings,
-    summary: result.summary,
-    header: table?.header?.cells ?? null,
-    rows: table?.rows ?? [],
-    columnCount: table?.columnCount ?? 0,
-    problems: result.problems,
+    result: { ok: true, record, summary: successSummary(record, series, settings, format), problems: [] },
+    series,
   };
 }
 
+/** Reads a streamflow record with the given settings. Never throws; bad input comes back as problems. */
+export function applyFlowImport(
+  text: string,
+  settings: FlowImportSettings,
+  format: NumberFormat = DEFAULT_NUMBER_FORMAT,
+): FlowImportResult {
+  return runFlowImport(text, settings, format).result;
+}
+
+/** The preview for given settings: the table as split, the summary and the problems. */
+export function previewFlowImport(
+  text: string,
+  settings: FlowImportSettings,
+  format: NumberFormat = DEFAULT_NUMBER_FORMAT,
+): FlowImportPreview {
+  const { result, series } = runFlowImport(text, settings, format);
+  return previewOf(settings, result, series);
+}
+
 /** Guesses the settings and returns the preview they give. */
-export function guessFlowImport(text: string): FlowImportPreview {
-  return previewFlowImport(text, guessFlowSettings(typeof text === 'string' ? text : ''));
+export function guessFlowImport(text: string, hints: ImportHints = {}): FlowImportPreview {
+  return previewFlowImport(
+    text,
+    guessFlowSettings(typeof text === 'string' ? text : '', hints),
+    hints.numberFormat ?? DEFAULT_NUMBER_FORMAT,
+  );
 }

@@ -2,7 +2,25 @@
 // with every guess an explicit setting and every bad cell a located problem.
 // Pure TypeScript: no React, no DOM.
 export { describeProblem, MAX_LISTED_PROBLEMS, type ImportProblem } from './problems';
-export { parseNumber, detectDecimal, type DecimalMark } from './numbers';
+export {
+  parseNumber,
+  detectDecimal,
+  detectNumberStyle,
+  numberStyleOf,
+  GROUPINGS,
+  type DecimalMark,
+  type Grouping,
+  type NumberStyle,
+} from './numbers';
+export {
+  NUMBER_FORMATS,
+  DEFAULT_NUMBER_FORMAT,
+  numberFormat,
+  readNumber,
+  writeNumber,
+  type NumberFormat,
+  type NumberFormatId,
+} from './number-format';
 export {
   detectSeparator,
   readTable,
@@ -27,7 +45,7 @@ export {
   type CalendarOrigin,
   type TimeLine,
 } from './time-values';
-export type { SeriesSettings } from './series';
+export type { SeriesSettings, ImportHints } from './series';
 export {
   guessRainImport,
   guessRainSettings,

@@ -1,4 +1,12 @@
-import { detectDecimal, isMissingCell, looksNumeric, parseNumber, type DecimalMark } from './numbers';
+import {
+  detectNumberStyle,
+  isMissingCell,
+  looksNumeric,
+  parseNumber,
+  type DecimalMark,
+  type Grouping,
+  type NumberStyle,
+} from './numbers';
 import { detectSeparator, readTable, splitRows, type Separator, type TextRow, type TextTable } from './table-text';
 import {
   guessDateOrder,
@@ -17,6 +25,9 @@ import {
 export interface LayoutGuess {
   readonly separator: Separator;
   readonly decimal: DecimalMark;
+  readonly grouping: Grouping;
+  /** 'line' when the values run along one line (a spreadsheet row copied), not down a column. */
+  readonly valuesAlong: 'column' | 'line';
   readonly skipLines: number;
   readonly hasHeader: boolean;
   /** The table as read with the guessed separator, skip and header. */
@@ -106,14 +117,14 @@ interface ColumnStats {
   cells: string[];
 }
 
-function columnStats(rows: readonly TextRow[], column: number, decimal: DecimalMark): ColumnStats {
+function columnStats(rows: readonly TextRow[], column: number, style: NumberStyle): ColumnStats {
   const stats: ColumnStats = { nonEmpty: 0, numeric: 0, clock: 0, dateOnly: 0, timeOfDay: 0, values: [], cells: [] };
   for (const row of rows) {
     const cell = row.cells[column] ?? '';
     if (cell === '' || isMissingCell(cell)) continue;
     stats.nonEmpty++;
     stats.cells.push(cell);
-    const v = parseNumber(cell, decimal);
+    const v = parseNumber(cell, style.decimal, style.grouping);
     stats.values.push(v);
     if (!Number.isNaN(v)) {
       stats.numeric++;
@@ -144,22 +155,39 @@ function rises(values: readonly number[]): boolean {
 }
 
 /**
- * Guesses separator, decimal mark, header, and the time and date columns.
- * `isValueName` tells whether a column name names the value being imported
- * (rain depth, discharge), so such a column is not taken for elapsed time.
+ * Guesses separator, decimal mark and grouping, header, and the time and
+ * date columns. `isValueName` tells whether a column name names the value
+ * being imported (rain depth, discharge), so such a column is not taken for
+ * elapsed time. `preferred` is the reader's own way of writing numbers: it
+ * settles what the text leaves open ("1,200": twelve hundred, or 1.2).
  */
-export function guessLayout(text: string, isValueName: (name: string) => boolean): LayoutGuess {
+export function guessLayout(
+  text: string,
+  isValueName: (name: string) => boolean,
+  preferred?: NumberStyle,
+): LayoutGuess {
   const separator = detectSeparator(text);
   const raw = splitRows(text, separator).rows;
   const sampleCells: string[] = [];
   for (const row of raw.slice(0, SAMPLE_ROWS)) sampleCells.push(...row.cells);
-  const decimal = detectDecimal(sampleCells, separator === 'comma');
+  const style = detectNumberStyle(sampleCells, separator === 'comma', preferred);
   const { skipLines, hasHeader } = guessHeader(raw);
   const table = readTable(text, { separator, skipLines, hasHeader });
   const sample = table.rows.filter((r) => r.cells.length > 0).slice(0, SAMPLE_ROWS);
   const name = (c: number): string => table.header?.cells[c] ?? '';
   const stats: ColumnStats[] = [];
-  for (let c = 0; c < table.columnCount; c++) stats.push(columnStats(sample, c, decimal));
+  for (let c = 0; c < table.columnCount; c++) stats.push(columnStats(sample, c, style));
+  // One line of numbers only (a spreadsheet row copied): the values run along it, one bar per cell.
+  // Mostly numbers is enough, so a slip in one cell is reported there rather than the row read as one bar.
+  const only = sample.length === 1 ? sample[0] : undefined;
+  let numbersAlong = 0;
+  let filledAlong = 0;
+  for (const cell of only?.cells ?? []) {
+    if (cell === '' || isMissingCell(cell)) continue;
+    filledAlong++;
+    if (!Number.isNaN(parseNumber(cell, style.decimal, style.grouping))) numbersAlong++;
+  }
+  const along = table.header === null && numbersAlong >= 2 && numbersAlong * 2 >= filledAlong;
 
   let dateColumn: number | null = null;
   let timeColumn: number | null = null;
@@ -184,7 +212,7 @@ export function guessLayout(text: string, isValueName: (name: string) => boolean
     const s = stats[c] as ColumnStats;
     return mostly(s.numeric, s) && !isIndex(c);
   };
-  if (timeColumn === null && stats.length >= 2) {
+  if (timeColumn === null && stats.length >= 2 && !along) {
     // Elapsed times: a rising column of numbers with another number column beside it to carry the values.
     const candidates: number[] = [];
     for (let c = 0; c < stats.length; c++) {
@@ -207,7 +235,9 @@ export function guessLayout(text: string, isValueName: (name: string) => boolean
   const dateOrder = guessDateOrder(clockCells);
   return {
     separator,
-    decimal,
+    decimal: style.decimal,
+    grouping: style.grouping,
+    valuesAlong: along ? 'line' : 'column',
     skipLines,
     hasHeader,
     table,

@@ -1,9 +1,20 @@
 import { DEPTH_UNITS, RATE_UNITS, isInputError, validateStorm, type Storm } from '../core';
-import { describeSteps, formatAmount, formatDuration, formatIsoForPeople, plural } from './describe';
+import { describeSteps, formatAmount, formatCount, formatDuration, formatIsoForPeople, plural } from './describe';
+import { DEFAULT_NUMBER_FORMAT, type NumberFormat } from './number-format';
+import { breachMessage, checkPlausible, stormBeyondRecords } from './plausible';
 import { guessLayout, pickValueColumn } from './layout-guess';
-import { parseNumber } from './numbers';
+import { numberStyleOf, parseNumber } from './numbers';
 import { problem, problemList, type ImportProblem, type ProblemList } from './problems';
-import { checkSeriesSettings, checkStep, columnName, openSeries, type Series, type SeriesSettings } from './series';
+import {
+  checkSeriesSettings,
+  checkStep,
+  columnName,
+  openSeries,
+  previewOf,
+  type ImportHints,
+  type Series,
+  type SeriesSettings,
+} from './series';
 import type { TextRow } from './table-text';
 import { formatTimeOfDay, isoAt, parseClock } from './time-values';
 
@@ -102,6 +113,11 @@ export function rainHintsFromName(name: string): { kind?: RainValueKind; unit?: 
   return hints;
 }
 
+/** The value cell a row holds: its one cell when read along a line, else the value column's. */
+function valueCell(row: TextRow, s: RainImportSettings): string {
+  return (row.column !== undefined ? row.cells[0] : row.cells[s.valueColumn - 1]) ?? '';
+}
+
 /** Readings that only ever rise over several lines are most likely a gauge's cumulative record. */
 function looksCumulative(values: readonly number[]): boolean {
   const finite = values.filter((v) => !Number.isNaN(v));
@@ -111,19 +127,19 @@ function looksCumulative(values: readonly number[]): boolean {
 }
 
 /** Guesses every setting for a rainfall paste. */
-export function guessRainSettings(text: string): RainImportSettings {
-  const layout = guessLayout(text, isRainName);
+export function guessRainSettings(text: string, hints: ImportHints = {}): RainImportSettings {
+  const layout = guessLayout(text, isRainName, numberStyleOf(hints.numberFormat ?? DEFAULT_NUMBER_FORMAT));
   const valueColumn = pickValueColumn(layout, isRainName);
-  const hints = rainHintsFromName(columnName(layout.table, valueColumn));
+  const named = rainHintsFromName(columnName(layout.table, valueColumn));
   const sample = layout.table.rows.slice(0, 500);
-  const values = sample.map((r) => parseNumber(r.cells[valueColumn - 1] ?? '', layout.decimal));
-  const valueKind: RainValueKind = hints.kind ?? (looksCumulative(values) ? 'cumulative' : 'depth');
+  const values = sample.map((r) => parseNumber(r.cells[valueColumn - 1] ?? '', layout.decimal, layout.grouping));
+  const valueKind: RainValueKind = named.kind ?? (looksCumulative(values) ? 'cumulative' : 'depth');
   const hasTimes = layout.timeColumn !== null;
   let timeMarks: TimeMarks = 'end';
   const firstRow = sample.find((r) => r.cells.length > 0);
   const firstTimeCell = layout.timeColumn === null ? '' : (firstRow?.cells[layout.timeColumn - 1] ?? '');
   if (layout.timeKind === 'elapsed-min' || layout.timeKind === 'elapsed-h') {
-    if (parseNumber(firstTimeCell, layout.decimal) === 0) timeMarks = 'start';
+    if (parseNumber(firstTimeCell, layout.decimal, layout.grouping) === 0) timeMarks = 'start';
   } else if (layout.timeKind === 'clock' && layout.dateColumn === null) {
     // A daily record stamped with dates alone gives each day's rain under that day's date.
     const first = parseClock(firstTimeCell, layout.dateOrder);
@@ -131,9 +147,13 @@ export function guessRainSettings(text: string): RainImportSettings {
   }
   const firstValue = values.find((v) => !Number.isNaN(v));
   const cumulativeFrom: CumulativeFrom = hasTimes || firstValue === 0 ? 'first-value' : 'zero';
+  const screenStep = hints.stepMinutes !== undefined && hints.stepMinutes > 0 && Number.isFinite(hints.stepMinutes);
   return {
     separator: layout.separator,
     decimal: layout.decimal,
+    grouping: layout.grouping,
+    valuesAlong: layout.valuesAlong,
+    skipBlankLines: false,
     skipLines: layout.skipLines,
     hasHeader: layout.hasHeader,
     dateColumn: layout.dateColumn,
@@ -142,9 +162,14 @@ export function guessRainSettings(text: string): RainImportSettings {
     timeKind: layout.timeKind,
     dateOrder: layout.dateOrder,
     dateForTimesOfDay: null,
-    stepMinutesIfNoTime: hints.stepMinutes !== undefined && hints.stepMinutes > 0 ? hints.stepMinutes : 60,
+    stepMinutesIfNoTime:
+      named.stepMinutes !== undefined && named.stepMinutes > 0
+        ? named.stepMinutes
+        : screenStep
+          ? (hints.stepMinutes as number)
+          : 60,
     valueKind,
-    unit: hints.unit ?? 'mm',
+    unit: named.unit ?? 'mm',
     timeMarks,
     cumulativeFrom,
   };
@@ -170,12 +195,12 @@ function checkCumulative(series: Series, s: RainImportSettings, problems: Proble
   series.table.rows.forEach((row, i) => {
     const v = series.values[i] as number;
     if (Number.isNaN(v)) return;
-    const cell = row.cells[s.valueColumn - 1] ?? '';
+    const cell = valueCell(row, s);
     if (prev !== null && v < prev.value) {
       problems.add(
         problem(
           row.line,
-          s.valueColumn,
+          row.column ?? s.valueColumn,
           'cumulative depth',
           cell,
           `the cumulative depth falls from ${prev.cell} on line ${prev.line}; cumulative readings cannot decrease (a gauge reset or a typing slip?).`,
@@ -260,9 +285,10 @@ function buildBars(
   return { durationsH, depthsMm, startOffsetH };
 }
 
-function describeTimes(s: RainImportSettings): string {
+function describeTimes(s: RainImportSettings, format: NumberFormat): string {
+  const along = s.valuesAlong === 'line' ? 'along each line, ' : '';
   if (s.timeKind === 'none' || s.timeColumn === null)
-    return `without times, at ${formatDuration(s.stepMinutesIfNoTime / 60)} steps`;
+    return `${along}without times, at ${formatDuration(s.stepMinutesIfNoTime / 60, format)} steps`;
   const kind =
     s.timeKind === 'clock' ? 'clock times' : s.timeKind === 'elapsed-min' ? 'elapsed minutes' : 'elapsed hours';
   return `with ${kind} in column ${s.timeColumn}`;
@@ -276,21 +302,27 @@ function kindPlural(kind: RainValueKind): string {
   return kind === 'depth' ? 'depths' : kind === 'intensity' ? 'intensities' : 'cumulative depths';
 }
 
-function failureSummary(series: Series | null, s: RainImportSettings, count: number): string {
+function failureSummary(series: Series | null, s: RainImportSettings, count: number, format: NumberFormat): string {
   const lines =
     series === null
       ? ''
-      : `Read ${plural(series.table.rows.length, 'data line')} as ${kindPlural(s.valueKind)} in ${unitWords(s)} ${describeTimes(s)}; `;
-  const text = `${plural(count, 'problem')} to fix before importing.`;
+      : `Read ${plural(series.table.rows.length, s.valuesAlong === 'line' ? 'value' : 'data line', undefined, format)} as ${kindPlural(s.valueKind)} in ${unitWords(s)} ${describeTimes(s, format)}; `;
+  const text = `${plural(count, 'problem', undefined, format)} to fix before importing.`;
   return lines === '' ? text.charAt(0).toUpperCase() + text.slice(1) : lines + text;
 }
 
-function successSummary(storm: ImportedStorm, startOffsetH: number, series: Series, s: RainImportSettings): string {
+function successSummary(
+  storm: ImportedStorm,
+  startOffsetH: number,
+  series: Series,
+  s: RainImportSettings,
+  format: NumberFormat,
+): string {
   const n = storm.durationsH.length;
   let total = 0;
   for (const p of storm.depthsMm) total += p;
   const parts: string[] = [];
-  let head = `${plural(n, 'bar')} of ${describeSteps(storm.durationsH)}`;
+  let head = `${plural(n, 'bar', undefined, format)} of ${describeSteps(storm.durationsH, format)}`;
   if (storm.startIso !== undefined) head += ` from ${formatIsoForPeople(storm.startIso)}`;
   else if (series.times !== null && series.times.firstTimeOfDayMs !== null) {
     const dayMs = 24 * 3_600_000;
@@ -301,24 +333,71 @@ function successSummary(storm: ImportedStorm, startOffsetH: number, series: Seri
   parts.push(`${kindPlural(s.valueKind)} in ${unitWords(s)}`);
   parts.push(
     s.unit === 'in'
-      ? `total ${formatAmount(total / DEPTH_UNITS.in, 3)} in (${formatAmount(total)} mm)`
-      : `total ${formatAmount(total)} mm`,
+      ? `total ${formatAmount(total / DEPTH_UNITS.in, format)} in (${formatAmount(total, format)} mm)`
+      : `total ${formatAmount(total, format)} mm`,
   );
   const notes: string[] = [];
   if (series.times !== null) {
     if (s.valueKind !== 'cumulative') notes.push(`time stamps mark the ${s.timeMarks} of each bar`);
   } else {
-    notes.push(`no times, so bars are ${formatDuration(s.stepMinutesIfNoTime / 60)} apart as set`);
+    const along = s.valuesAlong === 'line' ? 'values read along each line; ' : '';
+    notes.push(`${along}no times, so bars are ${formatDuration(s.stepMinutesIfNoTime / 60, format)} apart as set`);
   }
   if (s.valueKind === 'cumulative') {
     const first = series.table.rows[0];
     if (s.cumulativeFrom === 'zero') notes.push('counted from zero');
     else if (first !== undefined && series.values[0] !== 0) {
-      notes.push(`counted from the first reading, ${first.cells[s.valueColumn - 1] ?? ''} on line ${first.line}`);
+      notes.push(`counted from the first reading, ${valueCell(first, s)} on line ${first.line}`);
     }
   }
-  if (s.skipLines > 0) notes.push(`${plural(s.skipLines, 'line')} skipped at the top`);
+  if (s.skipLines > 0) notes.push(`${plural(s.skipLines, 'line', undefined, format)} skipped at the top`);
+  const blank = series.table.blankLinesSkipped;
+  if (blank > 0) notes.push(`${plural(blank, 'blank line', undefined, format)} inside the data skipped`);
+  const beyond = stormBeyondRecords(storm);
+  if (beyond.first !== null) {
+    const b = beyond.first;
+    const others = beyond.count > 1 ? ` (and ${plural(beyond.count - 1, 'other bar', undefined, format)})` : '';
+    notes.push(
+      `check the unit and the step: bar ${formatCount(b.bar + 1, format)}${others} holds ${formatAmount(b.depthMm, format)} mm in ${formatDuration(b.durationH, format)}, more than the world’s greatest recorded rainfalls (about ${formatAmount(b.recordMm, format)} mm in that time; Jennings 1950, from memory)`,
+    );
+  }
   return `${parts.join(', ')}${notes.length > 0 ? `; ${notes.join('; ')}` : ''}.`;
+}
+
+/**
+ * Bars holding more than any rainfall depth can be (src/io/plausible.ts)
+ * are refused where they were read: the line and column of the value (for
+ * cumulative readings, of the reading that ends the bar).
+ */
+function checkBarDepths(
+  bars: Bars,
+  series: Series,
+  s: RainImportSettings,
+  problems: ProblemList,
+  format: NumberFormat,
+): void {
+  const fromFirst = s.valueKind === 'cumulative' && s.cumulativeFrom === 'first-value';
+  for (let k = 0; k < bars.depthsMm.length; k++) {
+    const depthMm = bars.depthsMm[k] as number;
+    const breach = checkPlausible('depth', depthMm);
+    if (breach === null) continue;
+    const row = series.table.rows[fromFirst ? k + 1 : k];
+    const column = row?.column ?? s.valueColumn;
+    const cell = row === undefined ? '' : valueCell(row, s);
+    problems.add(
+      problem(
+        row?.line ?? 0,
+        column,
+        VALUE_KIND_WORDS[s.valueKind],
+        cell,
+        breachMessage(
+          breach,
+          `the bar read here holds ${formatAmount(depthMm, format)} mm, which`,
+          `${formatAmount(breach.limit, format)} mm`,
+        ),
+      ),
+    );
+  }
 }
 
 interface RainRun {
@@ -327,25 +406,27 @@ interface RainRun {
   readonly series: Series | null;
 }
 
-function fail(series: Series | null, s: RainImportSettings, problems: ProblemList): RainRun {
+function fail(series: Series | null, s: RainImportSettings, problems: ProblemList, format: NumberFormat): RainRun {
   return {
-    result: { ok: false, summary: failureSummary(series, s, problems.count), problems: problems.list() },
+    result: { ok: false, summary: failureSummary(series, s, problems.count, format), problems: problems.list() },
     series,
   };
 }
 
-function runRainImport(text: string, settings: RainImportSettings): RainRun {
+function runRainImport(text: string, settings: RainImportSettings, format: NumberFormat): RainRun {
   const problems = problemList();
   const series = openSeries(text, settings, checkRainSettings, (s) => VALUE_KIND_WORDS[s.valueKind], problems);
-  if (series === null) return fail(null, settings, problems);
+  if (series === null) return fail(null, settings, problems, format);
   if (series.table.rows.length === 0) {
     problems.add(problem(0, 0, 'text', '', 'no data lines were found; paste a column of values, or times and values.'));
   }
   if (settings.valueKind === 'cumulative') checkCumulative(series, settings, problems);
-  if (problems.count > 0) return fail(series, settings, problems);
+  if (problems.count > 0) return fail(series, settings, problems, format);
 
   const bars = buildBars(series.values, series.times?.hours ?? null, settings, problems);
-  if (bars === null) return fail(series, settings, problems);
+  if (bars === null) return fail(series, settings, problems, format);
+  checkBarDepths(bars, series, settings, problems, format);
+  if (problems.count > 0) return fail(series, settings, problems, format);
   const origin = series.times?.origin ?? null;
   const storm: ImportedStorm =
     origin === null
@@ -357,10 +438,15 @@ function runRainImport(text: string, settings: RainImportSettings): RainRun {
   } catch (error) {
     const reason = isInputError(error) ? error.message : String(error);
     problems.add(problem(0, 0, 'text', '', `the storm read from the text is not valid: ${reason}`));
-    return fail(series, settings, problems);
+    return fail(series, settings, problems, format);
   }
   return {
-    result: { ok: true, storm, summary: successSummary(storm, bars.startOffsetH, series, settings), problems: [] },
+    result: {
+      ok: true,
+      storm,
+      summary: successSummary(storm, bars.startOffsetH, series, settings, format),
+      problems: [],
+    },
     series,
   };
 }
@@ -370,25 +456,29 @@ function runRainImport(text: string, settings: RainImportSettings): RainRun {
  * bad line, cell or setting is returned as a problem, and nothing is
  * imported unless there are none.
  */
-export function applyRainImport(text: string, settings: RainImportSettings): RainImportResult {
-  return runRainImport(text, settings).result;
+export function applyRainImport(
+  text: string,
+  settings: RainImportSettings,
+  format: NumberFormat = DEFAULT_NUMBER_FORMAT,
+): RainImportResult {
+  return runRainImport(text, settings, format).result;
 }
 
 /** The preview for given settings: the table as split, the summary and the problems. */
-export function previewRainImport(text: string, settings: RainImportSettings): RainImportPreview {
-  const { result, series } = runRainImport(text, settings);
-  const table = series?.table ?? null;
-  return {
-    settings,
-    summary: result.summary,
-    header: table?.header?.cells ?? null,
-    rows: table?.rows ?? [],
-    columnCount: table?.columnCount ?? 0,
-    problems: result.problems,
-  };
+export function previewRainImport(
+  text: string,
+  settings: RainImportSettings,
+  format: NumberFormat = DEFAULT_NUMBER_FORMAT,
+): RainImportPreview {
+  const { result, series } = runRainImport(text, settings, format);
+  return previewOf(settings, result, series);
 }
 
 /** Guesses the settings and returns the preview they give. */
-export function guessRainImport(text: string): RainImportPreview {
-  return previewRainImport(text, guessRainSettings(typeof text === 'string' ? text : ''));
+export function guessRainImport(text: string, hints: ImportHints = {}): RainImportPreview {
+  return previewRainImport(
+    text,
+    guessRainSettings(typeof text === 'string' ? text : '', hints),
+    hints.numberFormat ?? DEFAULT_NUMBER_FORMAT,
+  );
 }

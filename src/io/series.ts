@@ -1,6 +1,7 @@
-import { SEPARATORS, readTable, type Separator, type TextTable } from './table-text';
-import { notANumberReason, parseNumber, type DecimalMark } from './numbers';
-import { problem, type ProblemList } from './problems';
+import { SEPARATORS, readTable, type Separator, type TextRow, type TextTable } from './table-text';
+import { GROUPINGS, notANumberReason, parseNumber, type DecimalMark, type Grouping } from './numbers';
+import type { NumberFormat } from './number-format';
+import { problem, type ImportProblem, type ProblemList } from './problems';
 import {
   DATE_ORDERS,
   TIME_KINDS,
@@ -20,6 +21,16 @@ import {
 export interface SeriesSettings {
   readonly separator: Separator;
   readonly decimal: DecimalMark;
+  /** What separates thousands in the numbers (default none); never the decimal mark. */
+  readonly grouping?: Grouping | undefined;
+  /**
+   * 'line': the values run along each line, cell after cell, line after
+   * line (a spreadsheet row copied), without times; 'column' (the default):
+   * one value per line, in the value column.
+   */
+  readonly valuesAlong?: 'column' | 'line' | undefined;
+  /** Leave out empty lines between data lines, counting them, rather than report each as a missing value. */
+  readonly skipBlankLines?: boolean | undefined;
   /** Lines at the top of the text to ignore before the header or the data. */
   readonly skipLines: number;
   /** The first non-empty line after the skipped ones holds column names. */
@@ -35,6 +46,14 @@ export interface SeriesSettings {
   readonly dateForTimesOfDay: string | null;
   /** Step between values when there are no times (and the single bar's length when only one time is given), minutes. */
   readonly stepMinutesIfNoTime: number;
+}
+
+/** What the screen knows that the text may not say: how the reader writes numbers, and the storm's present step. */
+export interface ImportHints {
+  /** The reader's number format: settles "1,200" (twelve hundred, or 1.2) when the text leaves it open. */
+  readonly numberFormat?: NumberFormat | undefined;
+  /** The step, minutes, taken when neither the times nor a column name give one (the storm on screen's). */
+  readonly stepMinutes?: number | undefined;
 }
 
 /** A column of values, with their times, read off the table. Arrays follow `table.rows`. */
@@ -63,6 +82,20 @@ export function checkSeriesSettings(s: SeriesSettings, problems: ProblemList): v
   }
   if (s.decimal !== 'point' && s.decimal !== 'comma') {
     problems.add(problem(0, 0, 'decimal', String(s.decimal), 'must be point or comma.'));
+  }
+  const grouping = s.grouping ?? 'none';
+  if (!GROUPINGS.includes(grouping)) {
+    problems.add(problem(0, 0, 'grouping', String(grouping), 'must be none, comma, point or space.'));
+  } else if ((grouping === 'comma' && s.decimal === 'comma') || (grouping === 'point' && s.decimal === 'point')) {
+    problems.add(
+      problem(0, 0, 'grouping', grouping, `the thousands separator cannot also be the decimal mark (a ${grouping}).`),
+    );
+  }
+  if (s.valuesAlong !== undefined && s.valuesAlong !== 'column' && s.valuesAlong !== 'line') {
+    problems.add(problem(0, 0, 'valuesAlong', String(s.valuesAlong), 'must be column or line.'));
+  }
+  if (s.skipBlankLines !== undefined && typeof s.skipBlankLines !== 'boolean') {
+    problems.add(problem(0, 0, 'skipBlankLines', String(s.skipBlankLines), 'must be true or false.'));
   }
   if (!isWholeAtLeast(s.skipLines, 0)) {
     problems.add(problem(0, 0, 'skipLines', String(s.skipLines), 'must be a whole number of lines, 0 or more.'));
@@ -128,7 +161,31 @@ export function checkSeriesSettings(s: SeriesSettings, problems: ProblemList): v
       );
     }
   }
+  if (s.valuesAlong === 'line' && s.timeKind !== 'none') {
+    problems.add(
+      problem(0, 0, 'valuesAlong', 'line', 'values that run along a line have no times; choose no time column.'),
+    );
+  }
   if (s.timeKind === 'none') checkStep(s, problems);
+}
+
+/**
+ * The rows of values read along each line: one row per cell, in reading
+ * order, each naming the column it came from. Empty cells at the ends of a
+ * line (a trailing separator) are left out; empty cells between values stay
+ * and are reported as missing.
+ */
+function valuesAlongLines(table: TextTable): TextTable {
+  const rows: TextRow[] = [];
+  for (const row of table.rows) {
+    let end = row.cells.length;
+    while (end > 0 && row.cells[end - 1] === '') end--;
+    let start = 0;
+    while (start < end && row.cells[start] === '') start++;
+    if (end === 0) rows.push(row);
+    for (let c = start; c < end; c++) rows.push({ line: row.line, cells: [row.cells[c] as string], column: c + 1 });
+  }
+  return { ...table, rows, columnCount: Math.min(1, table.columnCount) };
 }
 
 /** The step setting must be a positive, finite number of minutes wherever it is used. */
@@ -151,7 +208,10 @@ function capitalised(field: string): string {
  * line, column and field. Assumes the settings passed checkSeriesSettings.
  */
 export function readSeries(text: string, s: SeriesSettings, field: string, problems: ProblemList): Series {
-  const table = readTable(text, s);
+  const split = readTable(text, s);
+  const along = s.valuesAlong === 'line';
+  const table = along ? valuesAlongLines(split) : split;
+  const grouping = s.grouping ?? 'none';
   for (const p of table.problems) problems.add(p);
   const { rows, columnCount } = table;
   const columnExists = (key: string, c: number | null): boolean => {
@@ -167,7 +227,7 @@ export function readSeries(text: string, s: SeriesSettings, field: string, probl
     );
     return false;
   };
-  const valueThere = columnExists('valueColumn', s.valueColumn);
+  const valueThere = along || columnExists('valueColumn', s.valueColumn);
   const useTimes = s.timeKind !== 'none' && s.timeColumn !== null;
   const timeThere = useTimes && columnExists('timeColumn', s.timeColumn);
   const dateThere = useTimes && columnExists('dateColumn', s.dateColumn);
@@ -176,7 +236,7 @@ export function readSeries(text: string, s: SeriesSettings, field: string, probl
   const sources: TimeSource[] = [];
   const sourceRow: number[] = [];
   for (let i = 0; i < rows.length; i++) {
-    const { line, cells } = rows[i]!;
+    const { line, cells, column: along = null } = rows[i]!;
     if (cells.length === 0) {
       problems.add(
         problem(
@@ -184,21 +244,22 @@ export function readSeries(text: string, s: SeriesSettings, field: string, probl
           0,
           'line',
           '',
-          `the line is empty, so its ${field} is missing; remove the line or fill in the value.`,
+          `the line is empty, so its ${field} is missing; remove the line, fill in the value, or skip blank lines.`,
         ),
       );
       continue;
     }
     if (valueThere) {
-      const cell = cells[s.valueColumn - 1];
+      const column = along ?? s.valueColumn;
+      const cell = along === null ? cells[s.valueColumn - 1] : cells[0];
       if (cell === undefined || cell === '') {
         const only = cell === undefined ? ` (the line has ${cells.length} column${cells.length === 1 ? '' : 's'})` : '';
-        problems.add(problem(line, s.valueColumn, field, '', `the ${field} is missing${only}.`));
+        problems.add(problem(line, column, field, '', `the ${field} is missing${only}.`));
       } else {
-        const v = parseNumber(cell, s.decimal);
-        if (Number.isNaN(v)) problems.add(problem(line, s.valueColumn, field, cell, notANumberReason(cell, s.decimal)));
-        else if (v < 0)
-          problems.add(problem(line, s.valueColumn, field, cell, `${capitalised(field)} cannot be negative.`));
+        const v = parseNumber(cell, s.decimal, grouping);
+        if (Number.isNaN(v))
+          problems.add(problem(line, column, field, cell, notANumberReason(cell, s.decimal, grouping)));
+        else if (v < 0) problems.add(problem(line, column, field, cell, `${capitalised(field)} cannot be negative.`));
         else values[i] = v;
       }
     }
@@ -217,6 +278,7 @@ export function readSeries(text: string, s: SeriesSettings, field: string, probl
       {
         kind: s.timeKind as Exclude<TimeKind, 'none'>,
         decimal: s.decimal,
+        grouping,
         dateOrder: s.dateOrder,
         dateForTimesOfDay: dateForTimesOfDay !== null && dateForTimesOfDay.ok ? dateForTimesOfDay.value : null,
         column: s.timeColumn as number,
@@ -229,6 +291,23 @@ export function readSeries(text: string, s: SeriesSettings, field: string, probl
     times = { hours, origin: line.origin, firstTimeOfDayMs: line.firstTimeOfDayMs };
   }
   return { table, values, times };
+}
+
+/** What a paste dialog shows of one import run: the settings, its summary and problems, and the table as split. */
+export function previewOf<S extends SeriesSettings>(
+  settings: S,
+  result: { readonly summary: string; readonly problems: readonly ImportProblem[] },
+  series: Series | null,
+) {
+  const table = series?.table ?? null;
+  return {
+    settings,
+    summary: result.summary,
+    header: table?.header?.cells ?? null,
+    rows: table?.rows ?? [],
+    columnCount: table?.columnCount ?? 0,
+    problems: result.problems,
+  };
 }
 
 /** The header's name for a 1-based column, or ''. */

@@ -9,10 +9,16 @@ import { problem, type ImportProblem } from './problems';
  * lines at the ends trimmed.
  */
 
-/** How cells are separated on a line. 'none' reads each line as one cell (a single column). */
-export type Separator = 'tab' | 'comma' | 'semicolon' | 'none';
+/**
+ * How cells are separated on a line. 'space' splits at runs of spaces (and
+ * tabs); 'fixed' cuts every line at the same character positions, found
+ * from where the data lines all have blanks, so an empty cell in an aligned
+ * table stays empty instead of moving the next value left. 'none' reads
+ * each line as one cell (a single column).
+ */
+export type Separator = 'tab' | 'comma' | 'semicolon' | 'space' | 'fixed' | 'none';
 
-export const SEPARATORS: readonly Separator[] = ['tab', 'comma', 'semicolon', 'none'];
+export const SEPARATORS: readonly Separator[] = ['tab', 'comma', 'semicolon', 'space', 'fixed', 'none'];
 
 const SEPARATOR_CHAR = { tab: '\t', comma: ',', semicolon: ';' } as const;
 
@@ -21,6 +27,8 @@ export interface TextRow {
   readonly line: number;
   /** Trimmed cells; an empty array for an empty line. */
   readonly cells: readonly string[];
+  /** For a value read along a line: the column its one cell came from (problems name it). */
+  readonly column?: number;
 }
 
 export interface TableOptions {
@@ -29,6 +37,8 @@ export interface TableOptions {
   readonly skipLines: number;
   /** The first non-empty line after the skipped ones holds column names. */
   readonly hasHeader: boolean;
+  /** Leave out empty lines between data lines (they are counted, not read as missing values). */
+  readonly skipBlankLines?: boolean | undefined;
 }
 
 export interface TextTable {
@@ -42,6 +52,8 @@ export interface TextTable {
   readonly rows: readonly TextRow[];
   /** Largest number of cells on any data row. */
   readonly columnCount: number;
+  /** Empty lines between data lines that were left out (skipBlankLines). */
+  readonly blankLinesSkipped: number;
   /** Broken quoting, by line. */
   readonly problems: readonly ImportProblem[];
 }
@@ -111,16 +123,85 @@ function splitWithPapa(text: string, delimiter: string): { rows: TextRow[]; prob
   return { rows, problems };
 }
 
+/** Each line split at runs of spaces and tabs. */
+function splitSpaces(text: string): { rows: TextRow[]; problems: ImportProblem[] } {
+  const lines = text.split('\n');
+  const rows: TextRow[] = [];
+  for (let i = 0; i < lines.length; i++) {
+    const t = (lines[i] as string).trim();
+    rows.push({ line: i + 1, cells: t === '' ? [] : t.split(/[ \t]+/) });
+  }
+  return { rows, problems: [] };
+}
+
+/** A token a data line holds: a number, a time or date, or a missing marker. */
+const DATA_TOKEN = /^(?:[+-]?[\d.,:/T+-]*\d[\d.,:/T+-]*|-+|na|n\/a|nan)$/i;
+
+/**
+ * Where the columns of an aligned table are: the runs of characters that
+ * are not blank on every data line (lines below `skipLines` whose tokens are
+ * all numbers, times or missing markers; every non-empty line when there
+ * are none). Each column also takes the blanks to its left, since numbers
+ * in such tables stand right-aligned under their names.
+ */
+export function fixedColumns(lines: readonly string[], skipLines = 0): { start: number; end: number }[] {
+  const body = lines.slice(skipLines).filter((l) => l.trim() !== '');
+  const data = body.filter((l) =>
+    l
+      .trim()
+      .split(/\s+/)
+      .every((t) => DATA_TOKEN.test(t)),
+  );
+  const use = data.length > 0 ? data : body;
+  let width = 0;
+  for (const l of use) if (l.length > width) width = l.length;
+  const filled = new Uint8Array(width);
+  for (const l of use) for (let i = 0; i < l.length; i++) if (l[i] !== ' ' && l[i] !== '\t') filled[i] = 1;
+  const columns: { start: number; end: number }[] = [];
+  let start = 0;
+  for (let i = 0; i < width; i++) {
+    if (filled[i] && (i + 1 === width || !filled[i + 1])) {
+      columns.push({ start, end: i + 1 });
+      start = i + 1;
+    }
+  }
+  return columns;
+}
+
+/** Each line cut at the columns of the aligned table; the last column runs to the end of the line. */
+function splitFixed(text: string, skipLines: number): { rows: TextRow[]; problems: ImportProblem[] } {
+  const lines = text.split('\n');
+  const columns = fixedColumns(lines, skipLines);
+  const rows: TextRow[] = [];
+  for (let i = 0; i < lines.length; i++) {
+    const line = lines[i] as string;
+    if (line.trim() === '' || columns.length === 0) {
+      rows.push({ line: i + 1, cells: line.trim() === '' ? [] : [line.trim()] });
+      continue;
+    }
+    const cells = columns.map((c, k) => line.slice(c.start, k === columns.length - 1 ? undefined : c.end).trim());
+    while (cells.length > 0 && cells[cells.length - 1] === '') cells.pop();
+    rows.push({ line: i + 1, cells });
+  }
+  return { rows, problems: [] };
+}
+
 /** Splits the whole text into rows, with line numbers, before any header or skipping. */
-export function splitRows(text: string, separator: Separator): { rows: TextRow[]; problems: ImportProblem[] } {
+export function splitRows(
+  text: string,
+  separator: Separator,
+  skipLines = 0,
+): { rows: TextRow[]; problems: ImportProblem[] } {
   const norm = normaliseText(text);
   if (separator === 'none') return splitSingleColumn(norm);
+  if (separator === 'space') return splitSpaces(norm);
+  if (separator === 'fixed') return splitFixed(norm, skipLines);
   return splitWithPapa(norm, SEPARATOR_CHAR[separator]);
 }
 
 /** Splits pasted text into a header and data rows, as the options say. */
 export function readTable(text: string, options: TableOptions): TextTable {
-  const { rows: all, problems } = splitRows(text, options.separator);
+  const { rows: all, problems } = splitRows(text, options.separator, options.skipLines);
   let start = 0;
   while (start < all.length && (all[start] as TextRow).line <= options.skipLines) start++;
   while (start < all.length && (all[start] as TextRow).cells.length === 0) start++;
@@ -132,10 +213,16 @@ export function readTable(text: string, options: TableOptions): TextTable {
   }
   let end = all.length;
   while (end > start && (all[end - 1] as TextRow).cells.length === 0) end--;
-  const rows = all.slice(start, end);
+  let rows = all.slice(start, end);
+  let blankLinesSkipped = 0;
+  if (options.skipBlankLines === true) {
+    const kept = rows.filter((r) => r.cells.length > 0);
+    blankLinesSkipped = rows.length - kept.length;
+    rows = kept;
+  }
   let columnCount = 0;
   for (const row of rows) if (row.cells.length > columnCount) columnCount = row.cells.length;
-  return { header, rows, columnCount, problems };
+  return { header, rows, columnCount, blankLinesSkipped, problems };
 }
 
 /** Counts of each separator character on a line, outside quoted cells. */
@@ -157,29 +244,45 @@ function countOutsideQuotes(line: string): { tab: number; semicolon: number; com
 }
 
 const SINGLE_DECIMAL_COMMA = /^[+-]?\d+,(\d+)$/;
+/** A number with commas between groups of three digits: "1,200", "12,345.6", "1,234,567". */
+const COMMA_GROUPED = /^[+-]?[1-9]\d{0,2}(?:,\d{3})+(?:\.\d+)?$/;
 
 /**
- * True when comma-bearing lines look like one column of decimal-comma numbers
- * ("0,4", "12,75") rather than two columns. Each such line must be one number
- * with one comma, and either some fraction has a leading zero ("2,05"), which
- * a separate integer column would not, or the parts before the commas do not
- * rise steadily as a time column would.
+ * True when the commas on comma-bearing lines stand inside numbers rather
+ * than between columns: every token (split at spaces) that holds a comma is
+ * a number grouped in thousands ("1,200", "3,500": never a time column and
+ * a value), or one decimal-comma number ("0,4", "12,75"). For lines of one
+ * decimal-comma number each, either some fraction has a leading zero
+ * ("2,05"), which a separate integer column would not, or the parts before
+ * the commas do not rise steadily as a time column would.
  */
-function looksLikeDecimalCommaColumn(lines: readonly string[]): boolean {
+function commasInsideNumbers(lines: readonly string[]): boolean {
   const lefts: number[] = [];
   let leadingZeroFraction = false;
+  let grouped = false;
+  let decimalTokens = 0;
   for (const raw of lines) {
     const line = raw.trim();
     // Lines that do not start like a number (a header, a title) say nothing about the data.
     if (!line.includes(',') || !/^[+-]?\d/.test(line)) continue;
-    const m = SINGLE_DECIMAL_COMMA.exec(line);
-    if (!m) return false;
-    const fraction = m[1] as string;
-    if (fraction.length > 1 && fraction.startsWith('0')) leadingZeroFraction = true;
-    lefts.push(Number(line.slice(0, line.indexOf(','))));
+    const tokens = line.split(/\s+/);
+    for (const token of tokens) {
+      if (!token.includes(',')) continue;
+      if (COMMA_GROUPED.test(token)) {
+        grouped = true;
+        continue;
+      }
+      const m = SINGLE_DECIMAL_COMMA.exec(token);
+      if (!m) return false;
+      decimalTokens++;
+      const fraction = m[1] as string;
+      if (fraction.length > 1 && fraction.startsWith('0')) leadingZeroFraction = true;
+      if (tokens.length === 1) lefts.push(Number(token.slice(0, token.indexOf(','))));
+    }
   }
-  if (lefts.length === 0) return false;
-  if (leadingZeroFraction) return true;
+  if (decimalTokens === 0) return grouped;
+  // Two columns need at least two lines to show a rising first column; one number alone is one number.
+  if (leadingZeroFraction || lefts.length < decimalTokens || lefts.length < 2) return true;
   for (let i = 1; i < lefts.length; i++) if (!((lefts[i] as number) > (lefts[i - 1] as number))) return true;
   return false;
 }
@@ -187,11 +290,37 @@ function looksLikeDecimalCommaColumn(lines: readonly string[]): boolean {
 /** Lines looked at when guessing; enough to see the pattern, bounded for very long records. */
 const GUESS_LINES = 2000;
 
+/** True when a line holds two or more tokens separated by spaces. */
+const SPACED = /\S[ \t]+\S/;
+
+/**
+ * Spaces or an aligned table: 'fixed' when the data lines split at spaces
+ * into different numbers of cells (an empty cell in an aligned table) but
+ * share blank columns; 'space' otherwise.
+ */
+function spaceOrFixed(lines: readonly string[]): Separator {
+  const data = lines.filter((l) =>
+    l
+      .trim()
+      .split(/\s+/)
+      .every((t) => /\d/.test(t) || /^(?:-+|na|n\/a)$/i.test(t)),
+  );
+  let fewest = Infinity;
+  let most = 0;
+  for (const l of data) {
+    const n = l.trim().split(/\s+/).length;
+    if (n < fewest) fewest = n;
+    if (n > most) most = n;
+  }
+  return most > fewest && fixedColumns(data).length >= most ? 'fixed' : 'space';
+}
+
 /**
  * The separator most lines use. Priority when several appear: tab (a
  * spreadsheet copy), then semicolon (a CSV written where the comma is the
- * decimal mark), then comma. A separator counts when at least half the
- * non-empty lines have it.
+ * decimal mark), then comma, then spaces (a text table or a row copied as
+ * text). A separator counts when at least half the non-empty lines have it.
+ * Commas that stand inside numbers ("1,200", "0,4") do not count as one.
  */
 export function detectSeparator(text: string): Separator {
   const lines = normaliseText(text)
@@ -202,15 +331,18 @@ export function detectSeparator(text: string): Separator {
   let tab = 0;
   let semicolon = 0;
   let comma = 0;
+  let spaced = 0;
   for (const line of lines) {
     const c = countOutsideQuotes(line);
     if (c.tab > 0) tab++;
     if (c.semicolon > 0) semicolon++;
     if (c.comma > 0) comma++;
+    if (SPACED.test(line.trim())) spaced++;
   }
   const half = lines.length / 2;
   if (tab >= half) return 'tab';
   if (semicolon >= half) return 'semicolon';
-  if (comma >= half) return looksLikeDecimalCommaColumn(lines) ? 'none' : 'comma';
+  if (comma >= half && !commasInsideNumbers(lines)) return 'comma';
+  if (spaced >= half) return spaceOrFixed(lines);
   return 'none';
 }

@@ -1,5 +1,5 @@
 import { formatDuration } from './describe';
-import { notANumberReason, parseNumber, type DecimalMark } from './numbers';
+import { notANumberReason, parseNumber, type DecimalMark, type Grouping } from './numbers';
 import { problem, type ProblemList } from './problems';
 
 /**
@@ -241,6 +241,8 @@ export interface TimeSource {
 export interface TimeReadOptions {
   readonly kind: Exclude<TimeKind, 'none'>;
   readonly decimal: DecimalMark;
+  /** Thousands separator of elapsed times ("1,440" minutes); default none. */
+  readonly grouping?: Grouping;
   readonly dateOrder: DateOrder;
   /** Date of the first time when the times are times of day with no date; null leaves them off the calendar. */
   readonly dateForTimesOfDay: CalendarDate | null;
@@ -273,7 +275,7 @@ function describeTimeKind(kind: Exclude<TimeKind, 'none'>): string {
 function readInstant(source: TimeSource, options: TimeReadOptions, problems: ProblemList): Instant | null {
   const { line, cell } = source;
   if (options.kind !== 'clock') {
-    const v = parseNumber(cell, options.decimal);
+    const v = parseNumber(cell, options.decimal, options.grouping);
     if (Number.isNaN(v)) {
       const expected = `expected elapsed ${describeTimeKind(options.kind)}`;
       const reason =
@@ -281,7 +283,7 @@ function readInstant(source: TimeSource, options: TimeReadOptions, problems: Pro
           ? `${expected}; the time is missing.`
           : looksLikeClock(cell)
             ? `${expected}, but this is a clock time; set the time kind to clock.`
-            : `${expected}; ${notANumberReason(cell, options.decimal)}`;
+            : `${expected}; ${notANumberReason(cell, options.decimal, options.grouping)}`;
       problems.add(problem(line, options.column, 'time', cell, reason));
       return null;
     }
@@ -328,7 +330,7 @@ function readInstant(source: TimeSource, options: TimeReadOptions, problems: Pro
   }
   const c = parseClock(cell, options.dateOrder);
   if (!c.ok) {
-    const numeric = !Number.isNaN(parseNumber(cell, options.decimal));
+    const numeric = !Number.isNaN(parseNumber(cell, options.decimal, options.grouping));
     const hint = numeric ? ' It is a plain number: set the time kind to elapsed minutes or hours.' : '';
     problems.add(problem(line, options.column, 'time', cell, `${c.reason}${hint}`));
     return null;

@@ -53,6 +53,12 @@ export interface Derived {
   effectiveMethod(s: Scenario): LossMethod;
   /** True while the effective method's fitted parameter follows the observed runoff. */
   isMatched(s: Scenario): boolean;
+  /**
+   * True when the core's answer is the value in use: the effective method's
+   * parameter to fit equals the fit (after "Fit", or while kept matched).
+   * Until then the answer is only a proposal ("Fit would set …").
+   */
+  fitInUse(s: Scenario): boolean;
   results(s: Scenario): Results;
   /** Runoff volume, m³, or null when the catchment area is not known. */
   runoffVolumeM3(s: Scenario): number | null;
@@ -159,6 +165,12 @@ export function createDerived(): Derived {
     fit: fitOf,
     effectiveMethod,
     isMatched: (s) => Boolean(s.observed?.locked && fitOf(s)?.ok),
+    fitInUse: (s) => {
+      const f = fitOf(s);
+      const key = s.observed?.parameter;
+      if (!f?.ok || key === undefined) return false;
+      return (effectiveMethod(s) as unknown as Record<string, unknown>)[key] === f.value;
+    },
     results: resultsOf,
     runoffVolumeM3: (s) => {
       const r = resultsOf(s);

@@ -35,6 +35,11 @@ export function createHistory<T>(present: T): History<T> {
 export interface RecordOptions {
   /** Merge with the previous edit if it had the same key and was recent. */
   readonly coalesceKey?: string;
+  /**
+   * The key names one typing session (a field from focus to blur): its edits
+   * merge however long apart, so the session is one undo step.
+   */
+  readonly session?: boolean;
   readonly nowMs: number;
 }
 
@@ -50,13 +55,25 @@ export function record<T>(history: History<T>, next: T, label: string, options: 
     key === history.lastKey &&
     history.past.length > 0 &&
     history.future.length === 0 &&
-    options.nowMs - history.lastAtMs <= COALESCE_WINDOW_MS;
+    (options.session === true || options.nowMs - history.lastAtMs <= COALESCE_WINDOW_MS);
   if (merge) {
     return { ...history, present: next, lastAtMs: options.nowMs };
   }
   const past = [...history.past, { doc: history.present, label }];
   if (past.length > HISTORY_LIMIT) past.splice(0, past.length - HISTORY_LIMIT);
   return { past, present: next, future: [], lastKey: key, lastAtMs: options.nowMs };
+}
+
+/**
+ * Takes back the last step when it was recorded under `key` and nothing was
+ * undone since: the present goes back to the document before that step, as
+ * if it had never been made (a typing session whose text turned out not to
+ * apply). Any other history is returned unchanged.
+ */
+export function withdraw<T>(history: History<T>, key: string): History<T> {
+  const last = history.past[history.past.length - 1];
+  if (!last || history.lastKey !== key || history.future.length > 0) return history;
+  return { past: history.past.slice(0, -1), present: last.doc, future: [], lastKey: null, lastAtMs: 0 };
 }
 
 /** Replaces the present without recording (a frame of a drag in progress). */

@@ -29,7 +29,17 @@ import {
   type Observed,
 } from './edits';
 import { withActiveEventSynced } from './event-edits';
-import { createHistory, record, redo, redoLabel, replacePresent, undo, undoLabel, type History } from './history';
+import {
+  createHistory,
+  record,
+  redo,
+  redoLabel,
+  replacePresent,
+  undo,
+  undoLabel,
+  withdraw,
+  type History,
+} from './history';
 
 /** Problems with the browser's saved copy, shown on screen until dismissed. */
 export type StorageNotice =
@@ -40,6 +50,8 @@ export type StorageNotice =
 export interface EditOptions {
   /** Successive edits with the same key in quick succession are one undo step. */
   readonly coalesceKey?: string;
+  /** The key names a typing session: its edits are one undo step however long apart (see history.ts). */
+  readonly session?: boolean;
 }
 
 export interface WorkbenchActions {
@@ -86,6 +98,11 @@ export interface WorkbenchActions {
 
   undo(): void;
   redo(): void;
+  /**
+   * Takes back the last step if it was recorded under this coalescing key
+   * (a typing session whose text no longer applies); true when it did.
+   */
+  withdraw(coalesceKey: string): boolean;
 
   setNotice(notice: StorageNotice | null): void;
 }
@@ -133,7 +150,9 @@ export function createWorkbenchStore(initial: Scenario, options: CreateStoreOpti
       if (gesture) commit(replacePresent(history, next));
       else {
         const recordOptions =
-          opts.coalesceKey === undefined ? { nowMs: now() } : { nowMs: now(), coalesceKey: opts.coalesceKey };
+          opts.coalesceKey === undefined
+            ? { nowMs: now() }
+            : { nowMs: now(), coalesceKey: opts.coalesceKey, session: opts.session === true };
         commit(record(history, next, label, recordOptions));
       }
     };
@@ -238,6 +257,15 @@ export function createWorkbenchStore(initial: Scenario, options: CreateStoreOpti
       redo: () => {
         if (get().gesture) actions.endGesture();
         commit(redo(get().history));
+      },
+
+      withdraw: (key) => {
+        const { history, gesture } = get();
+        if (gesture) return false;
+        const back = withdraw(history, key);
+        if (back === history) return false;
+        commit(back);
+        return true;
       },
 
       setNotice: (notice) => set({ notice }),

@@ -1,4 +1,4 @@
-import type { ReactNode } from 'react';
+import { Fragment, type ReactNode } from 'react';
 import { StoreProvider, useActions, type WorkbenchStore } from '../store';
 import { Hyetograph } from './chart/Hyetograph';
 import { useUndoShortcuts } from './keyboard/useUndoShortcuts';
@@ -16,6 +16,7 @@ import { PrintReport } from './export';
 import { LinkNotice, ScenarioBar, ScenarioServicesProvider, type ScenarioServices } from './share';
 import { EventsView, ViewTabs } from './events';
 import { DesignStormView } from './design-storm';
+import { useNumberFormat } from './number-format';
 
 export interface AppProps {
   readonly store: WorkbenchStore;
@@ -27,6 +28,9 @@ export interface AppProps {
 
 function Workbench({ rainfallTools }: { rainfallTools?: ReactNode }) {
   useUndoShortcuts(useActions());
+  // Every number in the views is written in the reader's number format: a new format draws the views afresh
+  // (text typed under the old one is dropped rather than read under the new), while the header and tabs stay.
+  const format = useNumberFormat().id;
   return (
     <div className="app">
       <Header />
@@ -39,7 +43,7 @@ function Workbench({ rainfallTools }: { rainfallTools?: ReactNode }) {
             id: 'workbench',
             label: 'Workbench',
             content: (
-              <div className="bench">
+              <div className="bench" key={format}>
                 <StorageNoticeBar />
                 <LinkNotice />
                 <div className="bench__main">
@@ -63,8 +67,24 @@ function Workbench({ rainfallTools }: { rainfallTools?: ReactNode }) {
               </div>
             ),
           },
-          { id: 'events', label: 'Event set', content: <EventsView /> },
-          { id: 'design', label: 'Design storm', content: <DesignStormView /> },
+          {
+            id: 'events',
+            label: 'Event set',
+            content: (
+              <Fragment key={format}>
+                <EventsView />
+              </Fragment>
+            ),
+          },
+          {
+            id: 'design',
+            label: 'Design storm',
+            content: (
+              <Fragment key={format}>
+                <DesignStormView />
+              </Fragment>
+            ),
+          },
         ]}
       />
       <PrintReport />

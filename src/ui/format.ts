@@ -1,21 +1,30 @@
+import { writeNumber } from '../io/number-format';
+import { currentNumberFormat } from './number-format/preference';
+
 /**
- * Number formatting for the screen. Results show four significant figures
- * (whole numbers from 1000 up, with grouping); editable fields show up to six
- * significant figures without grouping, so the text can be typed back.
+ * Number formatting for the screen, in the reader's number format (see
+ * src/ui/number-format). Results show four significant figures (whole
+ * numbers from 1000 up); editable fields show up to six. Both group
+ * thousands the same way, so whatever the screen shows can be typed back
+ * (src/ui/parse-number.ts reads it). Nothing here ever writes "NaN",
+ * "Infinity" or a long run of digits: "—" for no number, an exponent for
+ * the very large and very small.
  */
-const sig4 = new Intl.NumberFormat('en-US', { maximumSignificantDigits: 4 });
-const whole = new Intl.NumberFormat('en-US', { maximumFractionDigits: 0 });
+const RESULT = { significant: 4, wholeFrom: 1000 } as const;
+const FIELD = { significant: 6 } as const;
 
 export function formatValue(x: number): string {
-  if (!Number.isFinite(x)) return '—';
-  if (Object.is(x, -0)) return '0';
-  return Math.abs(x) >= 1000 ? whole.format(x) : sig4.format(x);
+  return writeNumber(x, currentNumberFormat(), RESULT);
 }
 
 export function formatForField(x: number): string {
   if (!Number.isFinite(x)) return '';
-  if (x === 0) return '0';
-  return String(Number(x.toPrecision(6)));
+  return writeNumber(x, currentNumberFormat(), FIELD);
+}
+
+/** A whole count as the screen writes it: "50,000 bars". */
+export function formatCount(n: number): string {
+  return writeNumber(Math.round(n), currentNumberFormat(), { significant: 15 });
 }
 
 /** A fraction as a percentage, e.g. 0.3125 → "31.25 %". */

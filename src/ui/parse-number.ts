@@ -1,31 +1,14 @@
-/**
- * Reads a number typed by a person: surrounding spaces ignored, a decimal
- * point or a decimal comma (not both), an optional exponent. Anything else is
- * refused with a message that quotes what was typed.
- */
-export type Parsed = { readonly ok: true; readonly value: number } | { readonly ok: false; readonly message: string };
+import { readNumber, type NumberReading } from '../io/number-format';
+import { currentNumberFormat } from './number-format/preference';
 
-const NUMBER = /^[+-]?(\d+\.?\d*|\.\d+)([eE][+-]?\d+)?$/;
+/**
+ * Reads a number a person typed into any field, in the reader's number
+ * format: the one reader matched to the screen's formatter (src/ui/format.ts),
+ * so "45,000" is forty-five thousand where the screen writes 45,000. Text it
+ * cannot read exactly is refused with a message quoting it, never half-read.
+ */
+export type Parsed = NumberReading;
 
 export function parseNumber(text: string): Parsed {
-  const t = text.trim();
-  if (t === '') return { ok: false, message: 'Enter a number.' };
-  const hasComma = t.includes(',');
-  if (hasComma && t.includes('.')) {
-    return {
-      ok: false,
-      message: `“${t}” mixes a decimal point and a comma; write it with one decimal mark and no thousands separators.`,
-    };
-  }
-  if ((t.match(/,/g) ?? []).length > 1) {
-    return {
-      ok: false,
-      message: `“${t}” has more than one comma; write it with one decimal mark and no thousands separators.`,
-    };
-  }
-  const normal = hasComma ? t.replace(',', '.') : t;
-  if (!NUMBER.test(normal)) return { ok: false, message: `“${t}” is not a number.` };
-  const value = Number(normal);
-  if (!Number.isFinite(value)) return { ok: false, message: `“${t}” is too large.` };
-  return { ok: true, value };
+  return readNumber(text, currentNumberFormat());
 }

@@ -10,6 +10,7 @@ import {
   type UnitSystem,
   type VolumeUnit,
 } from '../core';
+import type { PlausibleQuantity } from '../io/plausible';
 
 /**
  * Conversion at the screen's edge: the store holds SI, the screen shows the
@@ -76,6 +77,14 @@ export function paramToDisplay(unit: ParamUnit | string, valueSI: number, system
 export function paramFromDisplay(unit: ParamUnit | string, value: number, system: UnitSystem): number {
   const q = paramQuantity(unit);
   return q ? fromDisplay(q, value, system) : value;
+}
+
+/** The plausible range (src/io/plausible.ts) a parameter's unit falls under, or undefined when the core's bounds say it all. */
+export function paramPlausible(unit: ParamUnit | string): PlausibleQuantity | undefined {
+  if (unit === 'mm/h') return 'rate';
+  if (unit === 'mm') return 'depth';
+  if (unit === '1/h') return 'decay';
+  return undefined;
 }
 
 /** Area units offered in the catchment-area field, per system (the display unit first). */

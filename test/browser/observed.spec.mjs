@@ -197,7 +197,7 @@ export const tests = [
         check(rate !== rateBefore, `the matched loss rate did not change (${rate} mm/h)`);
         const answer = (await page.locator('#fit-answer').textContent()) ?? '';
         check(
-          answer.startsWith(`Matched: Loss rate φ ${mods.format.formatValue(want.rateMmH)} mm/h`),
+          answer.startsWith(`Matched: loss rate φ is ${mods.format.formatValue(want.rateMmH)} mm/h`),
           `Matching says "${answer}"`,
         );
         const undo = await page.getByRole('button', { name: 'Undo' }).getAttribute('title');

@@ -140,7 +140,8 @@ export const tests = [
         const grid = page.getByRole('grid', { name: 'Bar table' });
         const cell = (bar, col) => grid.locator(`[role="row"][aria-rowindex="${bar + 1}"] [aria-colindex="${col}"]`);
         await cell(6, 4).click();
-        await page.keyboard.type('9,5');
+        // Typed in the browser's number format (1,234.5 for an English browser): a decimal point.
+        await page.keyboard.type('9.5');
         await page.keyboard.press('Enter');
         const scenario = JSON.parse(await saved(page, before));
         check(scenario.storm.depthsMm[5] === 9.5, `bar 6 holds ${scenario.storm.depthsMm[5]} mm`);

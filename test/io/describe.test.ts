@@ -1,5 +1,13 @@
 import { describe, expect, it } from 'vitest';
-import { describeSteps, formatAmount, formatDuration, formatIsoForPeople, isRegular } from '../../src/io/describe';
+import {
+  describeSteps,
+  formatAmount,
+  formatDuration,
+  formatIsoForPeople,
+  isRegular,
+  plural,
+} from '../../src/io/describe';
+import { numberFormat } from '../../src/io/number-format';
 
 describe('formatDuration', () => {
   it('says durations the way people do', () => {
@@ -30,7 +38,12 @@ describe('formatAmount and formatIsoForPeople', () => {
   it('drops trailing zeros and seconds that are zero', () => {
     expect(formatAmount(41.6)).toBe('41.6');
     expect(formatAmount(41.604)).toBe('41.6');
-    expect(formatAmount(-0.001)).toBe('0');
+    expect(formatAmount(-0)).toBe('0');
+    // As the screen writes a result: whole and grouped from 1000 (115,031.7 rounds to 115,032).
+    expect(formatAmount(115_031.7)).toBe('115,032');
+    expect(formatAmount(115_031.7, numberFormat('1 234,5'))).toBe('115\u202f032');
+    expect(formatDuration(50_000)).toBe('50,000 h');
+    expect(plural(50_000, 'bar')).toBe('50,000 bars');
     expect(formatIsoForPeople('2024-05-01T10:00:00')).toBe('2024-05-01 10:00');
     expect(formatIsoForPeople('2024-05-01T10:00:30Z')).toBe('2024-05-01 10:00:30Z');
     expect(formatIsoForPeople('2024-05-01T10:00:00+10:00')).toBe('2024-05-01 10:00+10:00');

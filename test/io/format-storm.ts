@@ -51,7 +51,14 @@ export interface Paste {
   readonly startIso: string | undefined;
 }
 
-const SEPARATOR_CHAR: Record<Separator, string> = { tab: '\t', comma: ',', semicolon: ';', none: '' };
+const SEPARATOR_CHAR: Record<Separator, string> = {
+  tab: '\t',
+  comma: ',',
+  semicolon: ';',
+  space: ' ',
+  fixed: ' ',
+  none: '',
+};
 const MM_PER_UNIT = { mm: 1, in: 25.4 } as const;
 const EPOCH_2000 = Date.UTC(2000, 0, 1);
 

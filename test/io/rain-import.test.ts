@@ -346,7 +346,7 @@ describe('applyRainImport reports every bad input by line and column', () => {
         column: 0,
         field: 'line',
         value: '',
-        reason: 'the line is empty, so its depth is missing; remove the line or fill in the value.',
+        reason: 'the line is empty, so its depth is missing; remove the line, fill in the value, or skip blank lines.',
       },
     ]);
   });
@@ -358,7 +358,7 @@ describe('applyRainImport reports every bad input by line and column', () => {
         column: 0,
         field: 'line',
         value: '',
-        reason: 'the line is empty, so its depth is missing; remove the line or fill in the value.',
+        reason: 'the line is empty, so its depth is missing; remove the line, fill in the value, or skip blank lines.',
       },
     ]);
   });

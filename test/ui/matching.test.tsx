@@ -19,7 +19,7 @@ describe('matching an observed runoff', () => {
       expected.value,
     );
     expect(screen.getByLabelText('Excess depth')).toHaveTextContent(mmText(4.5));
-    expect(screen.getByText(/^Answer: Loss rate φ/)).toBeInTheDocument();
+    expect(screen.getByText(/^Fitted: loss rate φ is /)).toBeInTheDocument();
   });
 
   it('with no answer the core’s reason stands next to the observed runoff, and Fit is off', async () => {
@@ -55,7 +55,9 @@ describe('matching an observed runoff', () => {
     const observed = screen.getByRole('textbox', { name: 'Observed runoff (mm)' });
     await user.type(observed, '-3');
     expect(observed).toHaveValue('-3');
-    expect(observed).toHaveAccessibleDescription(/must be a finite number, zero or more \(got -3\)/);
+    expect(observed).toHaveAccessibleDescription(
+      '“-3” mm: a rainfall or runoff depth cannot be negative. Not applied.',
+    );
     expect(scenario().observed).toBeNull();
   });
 

@@ -136,8 +136,9 @@ describe('the loss-method panel', () => {
     expect(c).toHaveValue('1.5');
     expect(c).toHaveAttribute('aria-invalid', 'true');
     expect(c).toHaveAccessibleDescription(/Runoff coefficient must be between 0 and 1 \(got 1\.5\)/);
-    // The store keeps the last good value, and leaving the field keeps the text.
-    expect(scenario().method).toEqual({ kind: 'proportional', coefficient: 1 });
+    // The store keeps the value from before the typing (never the "1" typed on the way), and leaving the field keeps the text.
+    expect(scenario().method).toEqual({ kind: 'proportional', coefficient: 0.5 });
+    expect(c).toHaveAccessibleDescription(/Not applied; still 0\.5\.$/);
     await user.tab();
     expect(c).toHaveValue('1.5');
     await user.clear(c);
@@ -151,8 +152,10 @@ describe('the loss-method panel', () => {
     const rate = screen.getByRole('textbox', { name: 'Loss rate φ (mm/h)' });
     await user.clear(rate);
     await user.type(rate, '5x');
-    expect(rate).toHaveAccessibleDescription(/“5x” is not a number/);
-    expect(scenario().method).toEqual({ kind: 'constant', rateMmH: 5 });
+    expect(rate).toHaveAccessibleDescription(
+      /“5x” is not a plain number; leave out any unit or word\. Not applied; still 8 mm\/h\./,
+    );
+    expect(scenario().method).toEqual({ kind: 'constant', rateMmH: 8 });
   });
 
   it('Escape puts back the stored value', async () => {

@@ -1,25 +1,34 @@
-import { describe, expect, it } from 'vitest';
+import { afterEach, describe, expect, it } from 'vitest';
 import { formatForField, formatPercent, formatValue } from '../../src/ui/format';
+import { chooseNumberFormat } from '../../src/ui/number-format';
 import { parseNumber } from '../../src/ui/parse-number';
 import { formatDuration } from '../../src/ui/rainfall/RainfallToolbar';
 
-describe('reading typed numbers', () => {
-  it('accepts a decimal point or a decimal comma, spaces and exponents', () => {
+describe('reading typed numbers (in the reader’s number format; 1,234.5 unless chosen)', () => {
+  afterEach(() => chooseNumberFormat('1,234.5'));
+
+  it('accepts a decimal point, thousands separators, spaces and exponents', () => {
     expect(parseNumber(' 12.5 ')).toEqual({ ok: true, value: 12.5 });
-    expect(parseNumber('12,5')).toEqual({ ok: true, value: 12.5 });
+    expect(parseNumber('45,000')).toEqual({ ok: true, value: 45_000 });
     expect(parseNumber('.5')).toEqual({ ok: true, value: 0.5 });
     expect(parseNumber('3.')).toEqual({ ok: true, value: 3 });
     expect(parseNumber('-2')).toEqual({ ok: true, value: -2 });
     expect(parseNumber('1e3')).toEqual({ ok: true, value: 1000 });
   });
+  it('reads a decimal comma once the format has one', () => {
+    chooseNumberFormat('1 234,5');
+    expect(parseNumber('12,5')).toEqual({ ok: true, value: 12.5 });
+    expect(parseNumber('45 000')).toEqual({ ok: true, value: 45_000 });
+    expect(parseNumber('12.5').ok).toBe(false);
+  });
   it('refuses anything else, quoting it', () => {
     expect(parseNumber('')).toEqual({ ok: false, message: 'Enter a number.' });
     expect(parseNumber('abc')).toEqual({ ok: false, message: '“abc” is not a number.' });
-    expect(parseNumber('1,234.5').ok).toBe(false);
+    expect(parseNumber('12,5').ok).toBe(false);
     expect(parseNumber('1,2,3').ok).toBe(false);
     expect(parseNumber('12 mm').ok).toBe(false);
     expect(parseNumber('Infinity').ok).toBe(false);
-    expect(parseNumber('1e999')).toEqual({ ok: false, message: '“1e999” is too large.' });
+    expect(parseNumber('1e999')).toEqual({ ok: false, message: '“1e999” is too large to be a number here.' });
   });
 });
 
@@ -37,7 +46,10 @@ describe('formatting', () => {
     expect(formatForField(8)).toBe('8');
     expect(formatForField(14.6612345)).toBe('14.6612');
     expect(formatForField(0.1968503937)).toBe('0.19685');
-    expect(parseNumber(formatForField(123456.7)).ok).toBe(true);
+    expect(formatForField(123456.7)).toBe('123,457');
+    expect(parseNumber(formatForField(123456.7))).toEqual({ ok: true, value: 123_457 });
+    expect(formatValue(1e300)).toBe('1e300');
+    expect(formatForField(Number.POSITIVE_INFINITY)).toBe('');
   });
   it('durations read in minutes and hours', () => {
     expect(formatDuration(10 / 60)).toBe('10 min');

@@ -2,7 +2,7 @@ import { useMemo } from 'react';
 import { computeLosses, methodSpec, totalDepthMm, type LossMethod } from '../../core';
 import type { Scenario } from '../../scenario/types';
 import { useDerived, useScenario } from '../../store';
-import { formatValue } from '../format';
+import { formatCount, formatValue } from '../format';
 import { displayUnit, toDisplay, unitText } from '../units';
 import { Axes } from './Axes';
 import { CAPACITY_CURVES } from './capacity';
@@ -60,10 +60,10 @@ export function Hyetograph() {
 
   const depthUnit = unitText(displayUnit('depth', units));
   const summary = results.ok
-    ? `${n} bars, ${formatValue(toDisplay('depth', results.result.rainMm, units))} ${depthUnit} of rain: ` +
+    ? `${formatCount(n)} bars, ${formatValue(toDisplay('depth', results.result.rainMm, units))} ${depthUnit} of rain: ` +
       `${formatValue(toDisplay('depth', results.result.totalLossMm, units))} ${depthUnit} lost, ` +
       `${formatValue(toDisplay('depth', results.result.totalExcessMm, units))} ${depthUnit} excess.`
-    : `${n} bars, ${formatValue(toDisplay('depth', totalDepthMm(storm), units))} ${depthUnit} of rain.`;
+    : `${formatCount(n)} bars, ${formatValue(toDisplay('depth', totalDepthMm(storm), units))} ${depthUnit} of rain.`;
 
   return (
     <figure className="chart" aria-labelledby="chart-title">

@@ -8,6 +8,7 @@ import { StaticChart } from '../export/StaticChart';
 import { formatPercent, formatValue } from '../format';
 import { useServices, usePins } from '../share/services';
 import { displayUnit, paramToDisplay, paramUnitText, toDisplay, unitText, type Quantity } from '../units';
+import { fittedCellText } from '../matching/fit-words';
 import { commonFrames } from './common-frame';
 import { difference, type Difference } from './difference';
 import { MAX_PINS, type Pin } from './pins';
@@ -54,10 +55,8 @@ function rows(units: UnitSystem): Row[] {
       id: 'fitted',
       label: 'Fitted parameter',
       cell: (t) => {
-        if (!t.fitted) return { text: `— (${t.fitNote ?? 'none'})`, value: null };
-        const v = paramToDisplay(t.fitted.param.unit, t.fitted.value, units);
-        const unit = paramUnitText(t.fitted.param.unit, units);
-        return { text: `${t.fitted.param.label} ${formatValue(v)}${unit ? ` ${unit}` : ''}`, value: v };
+        const text = fittedCellText(t, units);
+        return { text, value: t.fitted ? paramToDisplay(t.fitted.param.unit, t.fitted.value, units) : null };
       },
       unit: '',
       key: (t) => t.fitted?.param.key ?? '',

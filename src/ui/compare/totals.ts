@@ -15,8 +15,14 @@ export interface Totals {
   readonly volumeM3: number | null;
   readonly fraction: number | null;
   readonly peakExcessMmH: number | null;
-  /** The parameter fitted to the observed runoff and its value, or null with the reason in `fitNote`. */
+  /**
+   * The parameter fitted to the observed runoff and its value, only while
+   * that value is the one in use (after "Fit", or kept matched); otherwise
+   * null with the reason in `fitNote`.
+   */
   readonly fitted: { readonly param: NumericParam; readonly value: number } | null;
+  /** The core's answer when it is not in use: what "Fit" would set. */
+  readonly proposed: { readonly param: NumericParam; readonly value: number } | null;
   readonly fitNote: string | null;
   /** The core's message when the losses cannot be worked out. */
   readonly error: string | null;
@@ -29,14 +35,19 @@ export function totalsOf(scenario: Scenario, derived: Derived): Totals {
   const spec = methodSpec(scenario.method.kind);
   const param = spec.params.find((p) => p.key === scenario.observed?.parameter);
   let fitted: Totals['fitted'] = null;
+  let proposed: Totals['proposed'] = null;
   let fitNote: string | null = null;
   if (scenario.observed === null) fitNote = 'no observed runoff to fit';
   else if (fit === null) {
     const target = derived.target(scenario);
     fitNote = target && !target.ok ? target.message : 'nothing to fit';
   } else if (!fit.ok) fitNote = fit.message;
-  else if (param) fitted = { param, value: fit.value };
-  else fitNote = 'the fitted parameter is not one of this method';
+  else if (!param) fitNote = 'the fitted parameter is not one of this method';
+  else if (derived.fitInUse(scenario)) fitted = { param, value: fit.value };
+  else {
+    proposed = { param, value: fit.value };
+    fitNote = 'not in use: Fit has not been pressed';
+  }
   return {
     rainMm: r ? r.rainMm : null,
     lossMm: r ? r.totalLossMm : null,
@@ -45,6 +56,7 @@ export function totalsOf(scenario: Scenario, derived: Derived): Totals {
     fraction: r ? r.runoffFraction : null,
     peakExcessMmH: r ? r.peakExcessMmH : null,
     fitted,
+    proposed,
     fitNote,
     error: results.ok ? null : results.message,
   };

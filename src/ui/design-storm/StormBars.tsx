@@ -1,6 +1,6 @@
 import { scaleLinear } from 'd3-scale';
 import type { Storm } from '../../core';
-import { formatValue } from '../format';
+import { formatCount, formatValue } from '../format';
 
 /** A small hyetograph of the design storm: each bar's rain, its excess part darker. */
 export function StormBars({
@@ -36,7 +36,7 @@ export function StormBars({
     .domain([0, peak || 1])
     .nice()
     .range([H - M.bottom, M.top]);
-  const label = `${description}: ${n} bars, peak intensity ${formatValue(peak)} mm/h in bar ${peakAt + 1}.`;
+  const label = `${description}: ${formatCount(n)} bars, peak intensity ${formatValue(peak)} mm/h in bar ${peakAt + 1}.`;
   return (
     <figure className="design-bars">
       <svg viewBox={`0 0 ${W} ${H}`} width="100%" role="img" aria-label={label}>

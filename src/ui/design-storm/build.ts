@@ -8,6 +8,8 @@ import {
   type RateUnit,
   type Storm,
 } from '../../core';
+import { readTyped, stormDepthRefusal, type TypedQuantity } from '../fields/read-typed';
+import { currentNumberFormat } from '../number-format/preference';
 import { parseNumber } from '../parse-number';
 
 /** What the design storm form holds: text as typed, so nothing typed is ever lost. */
@@ -55,25 +57,45 @@ class FieldProblem extends Error {
   }
 }
 
+const MINUTES = { toSI: (min: number) => min / 60, fromSI: (h: number) => h * 60, unit: 'min' } as const;
+
+/** The plausible range each field's number falls in (src/io/plausible.ts); the core bounds the rest (a, b, c, peak). */
+const RANGES: Partial<Record<FormField, TypedQuantity>> = {
+  depthMm: { quantity: 'depth', unit: 'mm' },
+  scaleMm: { quantity: 'depth', unit: 'mm' },
+  durationMin: { quantity: 'stormDuration', ...MINUTES },
+  stepMin: { quantity: 'barDuration', ...MINUTES },
+};
+
 function num(form: DesignForm, field: FormField): number {
-  const parsed = parseNumber(form[field] as string);
+  const parsed = readTyped(form[field] as string, RANGES[field]);
   if (!parsed.ok) throw new FieldProblem(field, `${FIELD_LABELS[field]}: ${parsed.message}`);
   return parsed.value;
 }
 
-/** Reads "duration intensity" rows (space, tab, semicolon or comma between; a decimal comma with a semicolon or tab). */
+/**
+ * Reads "duration intensity" rows: a tab or a semicolon between the two
+ * values, or else spaces (and a comma too, when the number format uses no
+ * comma). Numbers are read in the reader's number format, so "1,440" under
+ * 1,234.5 is a day in minutes; where the format groups with a space, put a
+ * tab or a semicolon between the values.
+ */
 export function parseIdfTable(text: string): { durations: number[]; intensities: number[] } {
   const durations: number[] = [];
   const intensities: number[] = [];
+  const format = currentNumberFormat();
+  const commaFree = format.decimal !== ',' && format.group !== ',';
+  const between = commaFree ? /[\s,]+/ : /\s+/;
   const lines = text.split(/\r?\n/);
   lines.forEach((line, k) => {
     if (line.trim() === '') return;
-    const cells = line.includes(';') || line.includes('\t') ? line.split(/[;\t]/) : line.trim().split(/[\s,]+/);
+    const cells = line.includes(';') || line.includes('\t') ? line.split(/[;\t]/) : line.trim().split(between);
     const parts = cells.map((c) => c.trim()).filter((c) => c !== '');
     if (parts.length !== 2) {
       throw new FieldProblem(
         'tableText',
-        `IDF table, row ${k + 1}: needs two values, a duration and an intensity (found ${parts.length}).`,
+        `IDF table, row ${k + 1}: needs two values, a duration and an intensity (found ${parts.length})` +
+          (format.group === ' ' ? '; with spaces inside numbers, put a tab or a semicolon between the two.' : '.'),
       );
     }
     parts.forEach((cell, col) => {
@@ -125,6 +147,13 @@ export function buildDesignStorm(form: DesignForm): Built {
           : { kind: form.formula, ...units, a: num(form, 'a'), b: num(form, 'b'), c: num(form, 'c') };
       storm = alternatingBlockStorm({ idf, durationH, stepH, peakFraction: num(form, 'peak') });
       description = `Alternating block storm, ${form.durationMin} min in ${form.stepMin} min steps, from the IDF ${form.shape === 'table' ? 'table' : form.formula}`;
+    }
+    const tooDeep = stormDepthRefusal(storm, 'si');
+    if (tooDeep) {
+      throw new FieldProblem(
+        form.shape === 'uniform' ? 'depthMm' : form.shape === 'table' ? 'tableText' : 'a',
+        tooDeep,
+      );
     }
     if (form.scale) {
       const to = num(form, 'scaleMm');

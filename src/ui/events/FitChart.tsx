@@ -1,5 +1,5 @@
 import { scaleLinear } from 'd3-scale';
-import { formatValue } from '../format';
+import { formatCount, formatValue } from '../format';
 import type { FitRow } from './event-fits';
 
 export interface FitChartProps {
@@ -49,7 +49,7 @@ export function FitChart({ rows, parameterLabel, unit, depthUnit, showValue, sho
       ? `No event has a fitted ${parameterLabel.toLowerCase()} to plot.`
       : points.length === 1 || !first || !last
         ? `One event: ${parameterLabel} ${formatValue(points[0]?.y ?? NaN)}${u} at ${formatValue(points[0]?.x ?? NaN)} ${depthUnit} of rain.`
-        : `${points.length} events, from ${formatValue(first.x)} to ${formatValue(last.x)} ${depthUnit} of rain. ` +
+        : `${formatCount(points.length)} events, from ${formatValue(first.x)} to ${formatValue(last.x)} ${depthUnit} of rain. ` +
           `${parameterLabel} is ${formatValue(first.y)}${u} for the smallest storm and ${formatValue(last.y)}${u} for the largest; ` +
           `${points.length > 1 ? `it ranges from ${formatValue(Math.min(...points.map((p) => p.y)))} to ${formatValue(Math.max(...points.map((p) => p.y)))}${u}` : ''}` +
           (design === null ? '.' : `; the design value ${formatValue(design)}${u} is dashed.`);

@@ -2,7 +2,15 @@ import { methodSpec, paramApplies } from '../../core';
 import { useActions, useScenario, withDesignPick, withEventParameter } from '../../store';
 import { NumberField } from '../fields/NumberField';
 import { formatPercent, formatValue } from '../format';
-import { displayUnit, paramFromDisplay, paramToDisplay, paramUnitText, toDisplay, unitText } from '../units';
+import {
+  displayUnit,
+  paramFromDisplay,
+  paramPlausible,
+  paramToDisplay,
+  paramUnitText,
+  toDisplay,
+  unitText,
+} from '../units';
 import { FitChart } from './FitChart';
 import { useEventFits } from './use-event-fits';
 
@@ -185,11 +193,9 @@ export function FitAll() {
           value={ownValue ?? (outcome.ok ? outcome.value : null)}
           toDisplay={showParam}
           fromDisplay={(v) => (param ? paramFromDisplay(param.unit, v, units) : v)}
-          onCommit={(si) =>
-            actions.edit('Set the design value', (s) => withDesignPick(s, { value: si }), {
-              coalesceKey: 'design-value',
-            })
-          }
+          plausible={param ? paramPlausible(param.unit) : undefined}
+          onCommit={(si, edit) => actions.edit('Set the design value', (s) => withDesignPick(s, { value: si }), edit)}
+          history={actions}
         />
       </fieldset>
       {outcome.ok ? (

@@ -1,5 +1,6 @@
 import { scenarioFileName, scenarioToFileText } from '../../scenario';
 import type { Scenario } from '../../scenario/types';
+import { formatCount } from '../format';
 
 /**
  * Above this many characters a link is not practical to send: mail and chat
@@ -7,8 +8,6 @@ import type { Scenario } from '../../scenario/types';
  * Ten events of 100 unrounded bars make about 14,000 (test/scenario/event-set.test.ts).
  */
 export const PRACTICAL_LINK_CHARS = 8000;
-
-const grouped = new Intl.NumberFormat('en-US');
 
 /** Why a link this long should be a file, and a button that saves the file instead. */
 export function LongLinkOffer({
@@ -26,9 +25,9 @@ export function LongLinkOffer({
   return (
     <>
       <p>
-        The link would be {grouped.format(chars)} characters long
+        The link would be {formatCount(chars)} characters long
         {events > 0 ? `, most of it the ${events} event${events === 1 ? '' : 's'} of the event set` : ''}: more than the{' '}
-        {grouped.format(PRACTICAL_LINK_CHARS)} that can be sent reliably. Save the scenario as a file and send the file
+        {formatCount(PRACTICAL_LINK_CHARS)} that can be sent reliably. Save the scenario as a file and send the file
         instead; it opens to exactly the same scenario.
       </p>
       <p>

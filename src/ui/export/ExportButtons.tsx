@@ -9,6 +9,7 @@ import { svgToPng } from './chart-png';
 import { CAPACITY_CURVES } from '../chart/capacity';
 import { LINE_PARAM, LOSS_PARTS } from '../chart/line-params';
 import { standaloneSvg, type LegendEntry } from './chart-svg';
+import { formatCount } from '../format';
 
 /** The workbench's live chart: the hyetograph's SVG (src/ui/chart/Hyetograph.tsx). */
 export function liveChartSvg(doc: Document = document): SVGSVGElement | null {
@@ -71,7 +72,7 @@ export function ExportButtons() {
     const name = exportFileName(base, 'bars', 'csv');
     saveFile(new Blob([text], { type: 'text/csv;charset=utf-8' }), name);
     const n = scenario.storm.depthsMm.length;
-    show({ tone: 'done', title: `Exported ${name}: ${n} bar${n === 1 ? '' : 's'} with loss and excess.` });
+    show({ tone: 'done', title: `Exported ${name}: ${formatCount(n)} bar${n === 1 ? '' : 's'} with loss and excess.` });
   };
 
   const chart = () => {

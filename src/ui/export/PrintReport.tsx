@@ -7,8 +7,9 @@ import { chartFrame } from '../chart/frame';
 import { LINE_PARAM } from '../chart/line-params';
 import { formatWallDate, formatWallTime, wallClockMs } from '../chart/clock';
 import { totalsOf } from '../compare/totals';
-import { formatPercent, formatValue } from '../format';
-import { displayUnit, paramToDisplay, paramUnitText, toDisplay, unitText, type Quantity } from '../units';
+import { fittedCellText } from '../matching/fit-words';
+import { formatCount, formatPercent, formatValue } from '../format';
+import { displayUnit, toDisplay, unitText, type Quantity } from '../units';
 import { useServices } from '../share/services';
 import { methodParametersText } from './bar-table-csv';
 import { StaticChart } from './StaticChart';
@@ -62,7 +63,8 @@ function ReportBody() {
         <dl>
           <dt>Storm</dt>
           <dd>
-            {n} bar{n === 1 ? '' : 's'}, {show('depth', totals.rainMm)} in {formatValue(totalDurationH(storm))} h
+            {formatCount(n)} bar{n === 1 ? '' : 's'}, {show('depth', totals.rainMm)} in{' '}
+            {formatValue(totalDurationH(storm))} h
             {startMs === null ? '' : `, from ${formatWallDate(startMs)} ${formatWallTime(startMs)}`}
           </dd>
           <dt>Catchment</dt>
@@ -135,11 +137,7 @@ function ReportBody() {
             </tr>
             <tr>
               <th scope="row">Fitted parameter</th>
-              <td>
-                {totals.fitted
-                  ? `${totals.fitted.param.label} ${formatValue(paramToDisplay(totals.fitted.param.unit, totals.fitted.value, units))} ${paramUnitText(totals.fitted.param.unit, units)}`.trim()
-                  : `— (${totals.fitNote ?? 'none'})`}
-              </td>
+              <td>{fittedCellText(totals, units)}</td>
             </tr>
           </tbody>
         </table>

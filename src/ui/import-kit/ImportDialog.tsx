@@ -6,7 +6,7 @@ import { ProblemTable } from './ProblemTable';
 import type { SettingsPanelProps } from './settings-panel';
 import { useTextFile } from './use-text-file';
 
-/** What an import dialog holds: kept when it is cancelled, so reopening shows the same text and corrections. */
+/** What an import dialog opens on: empty for a paste, a file's text for an opened file. */
 export interface ImportDraft<Patch> {
   readonly text: string;
   /** The file the text came from, or null for pasted text. */
@@ -54,8 +54,8 @@ export interface ImportKind<S extends SeriesSettings, R> {
 export interface ImportDialogProps<S extends SeriesSettings, R> {
   readonly kind: ImportKind<S, R>;
   readonly initial: ImportDraft<Partial<S>>;
-  /** Called on cancel with what to keep, and on accept with null. */
-  readonly onClose: (keep: ImportDraft<Partial<S>> | null) => void;
+  /** Called on cancel and after a successful use; nothing of the dialog is kept. */
+  readonly onClose: () => void;
   /** The preview of what the text became. */
   readonly renderPreview: (imported: R) => ReactNode;
   /** What accepting does to what is on screen, and how to undo it. */
@@ -73,7 +73,7 @@ const inWords = (
 /**
  * Paste or open a record, see what was understood, correct any guess, and
  * only then use it (one undoable edit). What is on screen is untouched until
- * then; cancelling changes nothing.
+ * then; cancelling changes nothing and keeps nothing for the next opening.
  */
 export function ImportDialog<S extends SeriesSettings, R>({
   kind,
@@ -112,7 +112,7 @@ export function ImportDialog<S extends SeriesSettings, R>({
   );
 
   const correct = (patch: Partial<S>): void => setCorrections((c) => ({ ...c, ...patch }));
-  const cancel = (): void => onClose({ text, fileName, corrections });
+  const cancel = (): void => onClose();
   const accept = (): void => {
     if (imported === null || stale) return;
     const refused = onUse(imported, fileName);
@@ -120,7 +120,7 @@ export function ImportDialog<S extends SeriesSettings, R>({
       file.setMessage(refused);
       return;
     }
-    onClose(null);
+    onClose();
   };
 
   return (

@@ -1,4 +1,5 @@
 import type { ReactNode } from 'react';
+import { formatCount } from '../format';
 
 /** The sketch's drawing box, in its own pixels (stretched to the width shown). */
 export const SKETCH_WIDTH = 560;
@@ -50,7 +51,7 @@ export function PreviewSketch({ label, pathClassName, path, caption, count, head
       <table className="paste-preview__table">
         <caption>
           {caption}
-          {count > listed ? ` (first ${listed} of ${count})` : ''}
+          {count > listed ? ` (first ${listed} of ${formatCount(count)})` : ''}
         </caption>
         <thead>
           <tr>{headings}</tr>

@@ -1,9 +1,13 @@
 import type { ImportProblem } from '../../io';
+import { formatCount } from '../format';
 
 /** Plain words for the settings keys a problem may name (row 0: a setting, not a line of the text). */
 const SETTING_NAMES: Readonly<Record<string, string>> = {
   separator: 'Separator',
   decimal: 'Decimal mark',
+  grouping: 'Thousands separator',
+  valuesAlong: 'Values run',
+  skipBlankLines: 'Skip blank lines inside the data',
   skipLines: 'Lines to skip at the top',
   hasHeader: 'First line holds column names',
   dateColumn: 'Date column',
@@ -34,7 +38,9 @@ export function ProblemTable({ problems }: { problems: readonly ImportProblem[] 
   return (
     <div className="problems">
       <table className="problems__table">
-        <caption>{problems.length === 1 ? '1 problem to fix' : `${problems.length} problems to fix`}</caption>
+        <caption>
+          {problems.length === 1 ? '1 problem to fix' : `${formatCount(problems.length)} problems to fix`}
+        </caption>
         <thead>
           <tr>
             <th scope="col">Line</th>

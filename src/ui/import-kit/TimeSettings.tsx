@@ -61,7 +61,7 @@ export function TimeSettings({
     let timeKind = s.timeKind;
     if (timeKind === 'none') {
       const cell = rows.find((r) => r.cells.length > 0)?.cells[c - 1] ?? '';
-      timeKind = Number.isNaN(parseCell(cell, s.decimal)) ? 'clock' : numberKind;
+      timeKind = Number.isNaN(parseCell(cell, s.decimal, s.grouping)) ? 'clock' : numberKind;
     }
     const patch: Partial<SeriesSettings> = { timeColumn: c, timeKind };
     if (c === s.valueColumn) {
@@ -94,6 +94,7 @@ export function TimeSettings({
           label="Time step"
           unit="min"
           value={s.stepMinutesIfNoTime}
+          plausible={{ quantity: 'barDuration', siPerValue: 1 / 60 }}
           check={(v) => (v > 0 ? null : 'The time step must be more than 0 minutes.')}
           onCommit={(v) => onChange({ stepMinutesIfNoTime: v })}
           hint={words.stepHint}

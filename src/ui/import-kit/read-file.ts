@@ -1,3 +1,5 @@
+import { formatValue } from '../format';
+
 /**
  * Reads a chosen rainfall or streamflow file as text for the paste preview.
  * Never throws: a file that is too large, unreadable or not text gives a
@@ -25,7 +27,7 @@ export async function readAsText(file: Blob): Promise<string> {
 export async function readTextFile(file: File, what = 'the rainfall'): Promise<FileText> {
   const name = file.name || 'the file';
   if (file.size > MAX_FILE_BYTES) {
-    const mb = (file.size / (1024 * 1024)).toFixed(1);
+    const mb = formatValue(file.size / (1024 * 1024));
     return {
       ok: false,
       message: `${name} is ${mb} MB; files up to ${MAX_FILE_BYTES / (1024 * 1024)} MB can be read. Open a shorter record.`,

@@ -5,18 +5,18 @@ import { useTextFile } from './use-text-file';
 export interface ImportLauncher<S> {
   /** The draft the dialog opened with, or null while it is closed. */
   readonly dialog: ImportDraft<Partial<S>> | null;
-  /** Opens the dialog on what was kept from the last time it was cancelled. */
+  /** Opens the dialog empty. */
   readonly openPaste: () => void;
   /** Reads a chosen file and opens the dialog on its text. */
   readonly openFile: (file: File) => Promise<void>;
   /** Why the last file was refused, or null. */
   readonly fileMessage: string | null;
-  /** The dialog's onClose: keeps the draft on cancel, forgets it on accept. */
-  readonly close: (keep: ImportDraft<Partial<S>> | null) => void;
+  /** The dialog's onClose, cancelled or used alike: nothing of it is kept. */
+  readonly close: () => void;
 }
 
 export interface ImportLauncherOptions<S> {
-  /** The draft of a first paste, and of the next one after a record is used. */
+  /** The draft every paste opens on. */
   readonly empty: ImportDraft<Partial<S>>;
   /** Names the record in file messages ("the rainfall"). */
   readonly fileWhat: string;
@@ -25,12 +25,13 @@ export interface ImportLauncherOptions<S> {
 }
 
 /**
- * The buttons that lead to an import dialog ("Paste …", "Open … file…"):
- * which draft the dialog opens on, and what is kept when it is cancelled.
+ * The buttons that lead to an import dialog ("Paste …", "Open … file…") and
+ * which draft the dialog opens on. A cancelled paste leaves nothing behind:
+ * the next opening is empty, so text and corrections of an abandoned paste
+ * are never applied to the next one by surprise.
  */
 export function useImportLauncher<S>({ empty, fileWhat, beforeOpen }: ImportLauncherOptions<S>): ImportLauncher<S> {
   const [dialog, setDialog] = useState<ImportDraft<Partial<S>> | null>(null);
-  const [kept, setKept] = useState(empty);
 
   const file = useTextFile(fileWhat, (text, name) => openWith({ text, fileName: name, corrections: {} }));
 
@@ -42,12 +43,9 @@ export function useImportLauncher<S>({ empty, fileWhat, beforeOpen }: ImportLaun
 
   return {
     dialog,
-    openPaste: () => openWith(kept),
+    openPaste: () => openWith(empty),
     openFile: file.open,
     fileMessage: file.message,
-    close: (keep) => {
-      setKept(keep ?? empty);
-      setDialog(null);
-    },
+    close: () => setDialog(null),
   };
 }

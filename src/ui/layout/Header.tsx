@@ -1,12 +1,13 @@
 import type { UnitSystem } from '../../core';
 import { useActions, useScenario, useWorkbench } from '../../store';
+import { NumberFormatPicker } from '../number-format';
 
 const SYSTEMS: readonly { value: UnitSystem; label: string; hint: string }[] = [
   { value: 'si', label: 'SI', hint: 'mm, mm/h, ha, m³' },
   { value: 'us', label: 'US customary', hint: 'in, in/h, acres, acre-ft' },
 ];
 
-/** Top bar: the scenario's name, the unit switch, undo and redo. */
+/** Top bar: the scenario's name, the unit switch, the number format, undo and redo. */
 export function Header() {
   const name = useScenario((s) => s.name);
   const units = useScenario((s) => s.units);
@@ -48,6 +49,7 @@ export function Header() {
           Every value on screen converts; stored values stay exact.
         </span>
       </fieldset>
+      <NumberFormatPicker />
       <div className="top__history" role="group" aria-label="History">
         <button
           type="button"

@@ -1,4 +1,4 @@
-import { useState } from 'react';
+import { useCallback, useState } from 'react';
 import {
   UNIT_LABELS,
   VOLUME_UNITS,
@@ -14,7 +14,8 @@ import type { Scenario } from '../../scenario/types';
 import { useActions, useDerived, useScenario } from '../../store';
 import { NumberField } from '../fields/NumberField';
 import { formatValue } from '../format';
-import { VOLUME_CHOICES, displayUnit, fromDisplay, paramToDisplay, paramUnitText, toDisplay, unitText } from '../units';
+import { VOLUME_CHOICES, displayUnit, fromDisplay, toDisplay, unitText } from '../units';
+import { labelInSentence, paramAmount } from './fit-words';
 
 /**
  * The observed value when the user switches between depth and volume: the
@@ -33,7 +34,9 @@ const DEFAULT_VOLUME_UNIT: Record<UnitSystem, VolumeUnit> = { si: 'm3', us: 'acr
 /**
  * Matching an observed runoff: the observed depth or volume, the parameter to
  * fit, "Fit" (the core's exact calibration) and "Keep matched". When the core
- * finds no answer its message stands next to the observed runoff.
+ * finds no answer its message stands next to the observed runoff. The answer
+ * reads as a proposal ("Fit would set …") until it is the value in use, and
+ * goes away while the observed runoff typed is not applied (Fit is off then).
  */
 export function MatchingPanel() {
   const observed = useScenario((s) => s.observed);
@@ -44,10 +47,14 @@ export function MatchingPanel() {
   const target = useDerived((d, s) => d.target(s));
   const fit = useDerived((d, s) => d.fit(s));
   const matched = useDerived((d, s) => d.isMatched(s));
+  const inUse = useDerived((d, s) => d.fitInUse(s));
   // While the streamflow record is the observed runoff, the field shows its separated depth (derived, never stored).
   const fromRecord = useDerived((d, s) => d.observedFromSeparation(s));
   const actions = useActions();
   const [volumeUnitBySystem, setVolumeUnitBySystem] = useState(DEFAULT_VOLUME_UNIT);
+  // False while the text in the observed-runoff field is refused: the store still holds the last good value.
+  const [observedApplied, setObservedApplied] = useState(true);
+  const onObservedApplied = useCallback((applied: boolean) => setObservedApplied(applied), []);
   const volumeUnit = volumeUnitBySystem[units];
 
   const spec = methodSpec(kind);
@@ -58,13 +65,17 @@ export function MatchingPanel() {
   const param = spec.params.find((p) => p.key === parameter);
   const depthUnit = unitText(displayUnit('depth', units));
 
-  const problem = target && !target.ok ? target.message : fit && !fit.ok ? fit.message : null;
-  const answer =
-    fit?.ok && param
-      ? `${param.label} ${formatValue(paramToDisplay(param.unit, fit.value, units))}${
-          paramUnitText(param.unit, units) ? ` ${paramUnitText(param.unit, units)}` : ''
-        } gives the observed ${formatValue(toDisplay('depth', fit.excessMm, units))} ${depthUnit} of runoff.`
-      : null;
+  const problem = !observedApplied ? null : target && !target.ok ? target.message : fit && !fit.ok ? fit.message : null;
+  let answer: string | null = null;
+  if (!observedApplied) answer = 'The observed runoff typed is not applied, so there is nothing to fit until it is.';
+  else if (fit?.ok && param) {
+    const name = labelInSentence(param.label);
+    const amount = paramAmount(param, fit.value, units);
+    const giving = `giving the observed ${formatValue(toDisplay('depth', fit.excessMm, units))} ${depthUnit} of runoff.`;
+    answer = !inUse
+      ? `Fit would set ${name} to ${amount}, ${giving}`
+      : `${matched ? 'Matched' : 'Fitted'}: ${name} is ${amount}, ${giving}`;
+  }
 
   return (
     <section className="panel matching" aria-labelledby="matching-title">
@@ -94,7 +105,10 @@ export function MatchingPanel() {
           value={shown?.value ?? null}
           toDisplay={(mm) => toDisplay('depth', mm, units)}
           fromDisplay={(v) => fromDisplay('depth', v, units)}
-          onCommit={(mm) => actions.setObserved({ as: 'depth', value: mm, parameter }, { coalesceKey: 'observed' })}
+          plausible="depth"
+          onCommit={(mm, edit) => actions.setObserved({ as: 'depth', value: mm, parameter }, edit)}
+          history={actions}
+          onApplied={onObservedApplied}
           note={problem}
           hint={
             fromRecord
@@ -110,7 +124,11 @@ export function MatchingPanel() {
           value={observed?.value ?? null}
           toDisplay={(m3) => convertVolume(m3, 'm3', volumeUnit)}
           fromDisplay={(v) => convertVolume(v, volumeUnit, 'm3')}
-          onCommit={(m3) => actions.setObserved({ as: 'volume', value: m3, parameter }, { coalesceKey: 'observed' })}
+          shownUnit={unitText(volumeUnit)}
+          plausible="volume"
+          onCommit={(m3, edit) => actions.setObserved({ as: 'volume', value: m3, parameter }, edit)}
+          history={actions}
+          onApplied={onObservedApplied}
           note={problem}
           hint={
             target?.ok
@@ -158,7 +176,7 @@ export function MatchingPanel() {
           type="button"
           className="button--primary"
           onClick={() => actions.fitObserved()}
-          disabled={!fit?.ok || matched}
+          disabled={!observedApplied || !fit?.ok || inUse}
           aria-describedby="fit-answer"
         >
           Fit
@@ -181,7 +199,7 @@ export function MatchingPanel() {
         {areaM2 > 0 || as === 'depth' ? null : ' An observed volume needs the catchment area.'}
       </p>
       <p className="matching__answer" id="fit-answer" aria-live="polite">
-        {answer ? (matched ? `Matched: ${answer}` : `Answer: ${answer}`) : null}
+        {answer}
       </p>
     </section>
   );

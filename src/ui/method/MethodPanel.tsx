@@ -13,7 +13,7 @@ import {
 } from '../../core';
 import { useActions, useDerived, useScenario } from '../../store';
 import { NumberField } from '../fields/NumberField';
-import { paramFromDisplay, paramToDisplay, paramUnitText } from '../units';
+import { paramFromDisplay, paramPlausible, paramToDisplay, paramUnitText } from '../units';
 import { SoilPresets } from './SoilPresets';
 
 const valueOf = (method: LossMethod, key: string): unknown => (method as unknown as Record<string, unknown>)[key];
@@ -44,8 +44,10 @@ function ParamField({ param, method, stored }: { param: NumericParam; method: Lo
       value={typeof value === 'number' ? value : null}
       toDisplay={(si) => paramToDisplay(param.unit, si, units)}
       fromDisplay={(v) => paramFromDisplay(param.unit, v, units)}
+      plausible={paramPlausible(param.unit)}
       check={(si) => coreProblem(stored, param.key, si)}
-      onCommit={(si) => actions.setParam(param.key, si, { coalesceKey: `param:${param.key}` })}
+      onCommit={(si, edit) => actions.setParam(param.key, si, edit)}
+      history={actions}
       readOnly={locked}
       hint={param.help}
       note={locked ? 'Kept matched to the observed runoff (see Matching).' : null}

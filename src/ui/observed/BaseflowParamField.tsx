@@ -1,5 +1,5 @@
 import { describeBaseflowRange, type BaseflowParam } from '../../core';
-import { NumberField } from '../fields/NumberField';
+import { NumberField, type FieldEdit, type FieldHistory } from '../fields/NumberField';
 
 export interface BaseflowParamFieldProps {
   readonly id: string;
@@ -7,7 +7,9 @@ export interface BaseflowParamFieldProps {
   /** The stored value in the core's unit; undefined when the parameter is automatic. */
   readonly value: number | undefined;
   /** Stores a value, or undefined for automatic; an InputError thrown here is shown as the field's message. */
-  readonly onSet: (value: number | undefined) => void;
+  readonly onSet: (value: number | undefined, edit?: FieldEdit) => void;
+  /** Where the edits are recorded (see NumberField). */
+  readonly history?: FieldHistory;
   readonly hint: string;
   /** Extra words about the present value (where a sample lies, say). */
   readonly note?: string | null;
@@ -30,7 +32,7 @@ export function paramUnitWords(param: BaseflowParam): string {
  * number fields (it is one), text that cannot be stored stays with its reason
  * beside it, and the store keeps its last good value.
  */
-export function BaseflowParamField({ id, param, value, onSet, hint, note }: BaseflowParamFieldProps) {
+export function BaseflowParamField({ id, param, value, onSet, history, hint, note }: BaseflowParamFieldProps) {
   return (
     <NumberField
       id={id}
@@ -41,7 +43,7 @@ export function BaseflowParamField({ id, param, value, onSet, hint, note }: Base
       fromDisplay={(v) => stored(param, v)}
       empty={
         param.optional
-          ? { store: () => onSet(undefined) }
+          ? { store: (edit) => onSet(undefined, edit) }
           : { message: `Enter ${param.label.toLowerCase()}: ${describeBaseflowRange(param)}.` }
       }
       // The core's bounds count samples from 0; the field counts them from 1, so it says so itself.
@@ -53,7 +55,10 @@ export function BaseflowParamField({ id, param, value, onSet, hint, note }: Base
                 : `${param.label} must be a whole sample number, 1 or more (got ${n}).`
           : undefined
       }
+      // Times far outside any event record are refused before the core measures them against this one.
+      plausible={param.unit === 'h' ? 'offset' : undefined}
       onCommit={onSet}
+      history={history}
       placeholder={param.optional ? 'automatic' : undefined}
       hint={
         <>

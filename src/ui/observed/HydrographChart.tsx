@@ -20,6 +20,7 @@ import { baseflowPath, directRunoffPath, seriesPath } from './hydrograph-paths';
 import { OffsetControl } from './OffsetControl';
 import { StreamflowButtons } from './StreamflowButtons';
 import { hoursText, momentText, recordClock, type RecordClock } from './time-text';
+import { formatCount } from '../format';
 
 export const HYDROGRAPH_HEIGHT = 280;
 
@@ -86,7 +87,7 @@ function summaryOf(flow: Streamflow, sep: Separation | null, clock: RecordClock,
   const span = (flow.timesH[n - 1] as number) - (flow.timesH[0] as number);
   const peakAt = sep?.ok ? sep.result.peakIndex : findPeakIndex(flow.dischargeM3s);
   const head =
-    `Hydrograph: ${n} samples over ${hoursText(span)}, peak ${dischargeText(flow.dischargeM3s[peakAt] as number, units)} ` +
+    `Hydrograph: ${formatCount(n)} samples over ${hoursText(span)}, peak ${dischargeText(flow.dischargeM3s[peakAt] as number, units)} ` +
     `at ${momentText(clock, flow.timesH[peakAt] as number)}`;
   if (!sep) return `${head}.`;
   const label = baseflowMethodSpec(sep.method.kind).label.toLowerCase();

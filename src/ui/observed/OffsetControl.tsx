@@ -44,9 +44,9 @@ export function OffsetControl() {
         value={stored}
         toDisplay={(h) => h * PER_HOUR[unit]}
         fromDisplay={(v) => v / PER_HOUR[unit]}
-        onCommit={(h) =>
-          actions.edit('Line up the record', (s) => withRecordOffsetH(s, h), { coalesceKey: 'record-offset' })
-        }
+        plausible="offset"
+        onCommit={(h, edit) => actions.edit('Line up the record', (s) => withRecordOffsetH(s, h), edit)}
+        history={actions}
         hint={`The rainfall and the record do not both have clock times, so line them up here: the first sample is ${offsetWords(stored)}. Negative when the record starts first.`}
         after={
           <select

@@ -69,10 +69,13 @@ function ParamFields({ flow, spec }: { flow: Streamflow; spec: BaseflowMethodSpe
             value={value}
             hint={hintOf(param)}
             note={note}
-            onSet={(v) =>
-              actions.edit(`Set ${param.label.toLowerCase()}`, (s) => withBaseflowParam(s, param.key, v), {
-                coalesceKey: `baseflow:${param.key}`,
-              })
+            history={actions}
+            onSet={(v, edit) =>
+              actions.edit(
+                `Set ${param.label.toLowerCase()}`,
+                (s) => withBaseflowParam(s, param.key, v),
+                edit ?? { coalesceKey: `baseflow:${param.key}` },
+              )
             }
           />
         );

@@ -1,8 +1,9 @@
-import type { ReactNode } from 'react';
-import { totalDepthMm, totalDurationH } from '../../core';
+import { useMemo, type ReactNode } from 'react';
+import { totalDepthMm, totalDurationH, type Storm, type UnitSystem } from '../../core';
+import { stormBeyondRecords } from '../../io/plausible';
 import { useScenario } from '../../store';
 import { wallClockMs, formatWallDate, formatWallTime } from '../chart/clock';
-import { formatValue } from '../format';
+import { formatCount, formatValue } from '../format';
 import { displayUnit, toDisplay, unitText } from '../units';
 
 /** "10 min", "1 h", "1 h 30 min" for a bar duration in hours. */
@@ -12,7 +13,31 @@ export function formatDuration(hours: number): string {
   if (minutes < 60) return `${formatValue(minutes)} min`;
   const whole = Math.floor(minutes / 60);
   const rest = Math.round((minutes - whole * 60) * 1000) / 1000;
-  return rest === 0 ? `${formatValue(whole)} h` : `${formatValue(whole)} h ${formatValue(rest)} min`;
+  return rest === 0 ? `${formatCount(whole)} h` : `${formatCount(whole)} h ${formatValue(rest)} min`;
+}
+
+/**
+ * A storm holding more rain in some bar than has ever been recorded over
+ * that bar's duration is possible to type, never seen in a real storm: said
+ * in plain words above the chart (a unit or a step slipped, most likely),
+ * without refusing it.
+ */
+function RecordWarning({ storm, units }: { storm: Storm; units: UnitSystem }) {
+  const beyond = useMemo(() => stormBeyondRecords(storm), [storm]);
+  const b = beyond.first;
+  if (b === null) return null;
+  const unit = unitText(displayUnit('depth', units));
+  const depth = (mm: number): string => `${formatValue(toDisplay('depth', mm, units))} ${unit}`;
+  const others =
+    beyond.count > 1 ? ` (and ${formatCount(beyond.count - 1)} other bar${beyond.count > 2 ? 's' : ''})` : '';
+  const d = formatDuration(b.durationH);
+  return (
+    <p className="rainfall__warning" role="note">
+      Bar {formatCount(b.bar + 1)}
+      {others} holds {depth(b.depthMm)} in {d}, more than the world’s greatest recorded rainfalls (about{' '}
+      {depth(b.recordMm)} in {d}; Jennings 1950, from memory). Check the unit and the bar durations.
+    </p>
+  );
 }
 
 /**
@@ -35,8 +60,8 @@ export function RainfallToolbar({ tools }: { tools?: ReactNode }) {
     n === 0
       ? 'No bars'
       : uniform && first !== undefined
-        ? `${n} bar${n === 1 ? '' : 's'} of ${formatDuration(first)}`
-        : `${n} bars of mixed durations`;
+        ? `${formatCount(n)} bar${n === 1 ? '' : 's'} of ${formatDuration(first)}`
+        : `${formatCount(n)} bars of mixed durations`;
   const depth = `${formatValue(toDisplay('depth', totalDepthMm(storm), units))} ${unitText(displayUnit('depth', units))}`;
   const start = storm.startIso === undefined ? null : wallClockMs(storm.startIso);
   const when = start === null ? '' : `, from ${formatWallDate(start)} ${formatWallTime(start)}`;
@@ -47,6 +72,7 @@ export function RainfallToolbar({ tools }: { tools?: ReactNode }) {
         {bars}, {depth} in {formatDuration(totalDurationH(storm))}
         {when}
       </p>
+      <RecordWarning storm={storm} units={units} />
       {tools ? <div className="rainfall__tools">{tools}</div> : null}
     </section>
   );

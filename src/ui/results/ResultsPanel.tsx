@@ -16,6 +16,10 @@ interface Row {
 export function AreaField() {
   const areaM2 = useScenario((s) => s.catchment.areaM2);
   const units = useScenario((s) => s.units);
+  // While "Keep matched" follows an observed volume (or a separated record), the fit needs an area: 0 is not applied.
+  const fitNeedsArea = useScenario((s) =>
+    Boolean(s.observed?.locked && (s.observed.as === 'volume' || s.streamflow?.useAsObserved)),
+  );
   const actions = useActions();
   const [unitBySystem, setUnitBySystem] = useState<Record<UnitSystem, AreaUnit>>({ si: 'ha', us: 'acre' });
   const unit = unitBySystem[units];
@@ -26,8 +30,15 @@ export function AreaField() {
       value={areaM2}
       toDisplay={(m2) => convertArea(m2, 'm2', unit)}
       fromDisplay={(v) => convertArea(v, unit, 'm2')}
-      check={(m2) => (m2 < 0 ? 'The catchment area cannot be negative.' : null)}
-      onCommit={(m2) => actions.setAreaM2(m2, { coalesceKey: 'area' })}
+      shownUnit={UNIT_LABELS[unit] ?? unit}
+      plausible="area"
+      check={(m2) =>
+        fitNeedsArea && !(m2 > 0)
+          ? 'The observed runoff is a volume kept matched, which needs an area greater than 0 to become a depth.'
+          : null
+      }
+      onCommit={(m2, edit) => actions.setAreaM2(m2, edit)}
+      history={actions}
       hint={areaM2 > 0 ? null : 'Needed for the runoff volume and for an observed volume.'}
       after={
         <select

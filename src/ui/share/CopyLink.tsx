@@ -4,17 +4,16 @@ import { useWorkbenchStore } from '../../store';
 import { ProblemList, useBarMessage } from './bar-message';
 import { useServices } from './services';
 import { LongLinkOffer, PRACTICAL_LINK_CHARS } from '../events/LongLinkOffer';
+import { formatCount } from '../format';
 
 /** Mail and chat programs are known to cut or wrap links past about this length. */
 export const LONG_LINK_CHARS = 2000;
 
-const grouped = new Intl.NumberFormat('en-US');
-
 /** "535 characters", with advice when the link is long enough to be cut on the way. */
 export function linkLengthText(chars: number): string {
-  const base = `The link is ${grouped.format(chars)} characters long and holds the whole scenario; nothing is sent to a server.`;
+  const base = `The link is ${formatCount(chars)} characters long and holds the whole scenario; nothing is sent to a server.`;
   return chars > LONG_LINK_CHARS
-    ? `${base} Some mail programs cut links longer than about ${grouped.format(LONG_LINK_CHARS)} characters: if it does not open for your colleague, send the scenario as a file.`
+    ? `${base} Some mail programs cut links longer than about ${formatCount(LONG_LINK_CHARS)} characters: if it does not open for your colleague, send the scenario as a file.`
     : base;
 }
 

@@ -3,6 +3,7 @@ import { methodSpec } from '../../core';
 import type { DeletedEntry, LibraryEntry, LibraryListing, LibraryResult, Problem } from '../../scenario';
 import { useActions, useWorkbenchStore } from '../../store';
 import { useServices } from './services';
+import { formatCount } from '../format';
 
 export const LIBRARY_PANEL_ID = 'saved-scenarios';
 
@@ -16,7 +17,7 @@ function savedAtText(iso: string): string {
 
 function summary(entry: LibraryEntry): string {
   const n = entry.scenario.storm.depthsMm.length;
-  return `${n} bar${n === 1 ? '' : 's'} · ${methodSpec(entry.scenario.method.kind).label}`;
+  return `${formatCount(n)} bar${n === 1 ? '' : 's'} · ${methodSpec(entry.scenario.method.kind).label}`;
 }
 
 type Status =

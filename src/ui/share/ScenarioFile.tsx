@@ -4,8 +4,9 @@ import { useActions, useWorkbenchStore } from '../../store';
 import { OpenFileButton, readAsText } from '../import-kit';
 import { ProblemList, useBarMessage } from './bar-message';
 import { useServices } from './services';
+import { formatValue } from '../format';
 
-const megabytes = (bytes: number): string => `${(bytes / (1024 * 1024)).toFixed(1)} MB`;
+const megabytes = (bytes: number): string => `${formatValue(bytes / (1024 * 1024))} MB`;
 
 /**
  * "Save as file" writes the scenario as a readable .json file (with the

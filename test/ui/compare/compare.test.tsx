@@ -86,7 +86,8 @@ describe('comparing pinned scenarios', () => {
   });
 
   it('a fitted value is compared only with the same parameter of the first pin', async () => {
-    const observed = { as: 'depth' as const, value: 6, parameter: 'rateMmH', locked: false };
+    // Kept matched, so each pin's fitted value is the one in use.
+    const observed = { as: 'depth' as const, value: 6, parameter: 'rateMmH', locked: true };
     const { user, actions } = renderTools({ fallback: { ...FOUR_BARS, observed } });
     await pin(user);
     act(() => actions.setObserved({ value: 8 }));

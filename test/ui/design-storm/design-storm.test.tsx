@@ -66,7 +66,7 @@ describe('the design storm view', () => {
     await user.clear(table);
     await user.type(table, '10 90{enter}30 5x{enter}120 20');
     expect(screen.getByRole('alert')).toHaveTextContent(
-      'IDF table, row 2, column 2 (intensity): “5x” is not a number.',
+      'IDF table, row 2, column 2 (intensity): “5x” is not a plain number; leave out any unit or word.',
     );
     expect(table).toHaveValue('10 90\n30 5x\n120 20');
     await user.clear(table);

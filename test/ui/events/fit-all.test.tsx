@@ -84,10 +84,11 @@ describe('fit all events', () => {
     await user.clear(own);
     await user.type(own, '10');
     expect(scenario().eventSet.designPick).toEqual({ value: 10 });
+    await user.tab();
     // One keystroke replacing the whole text, so no good value is typed on the way.
     await user.type(own, 'O', { initialSelectionStart: 0, initialSelectionEnd: 2 });
     expect(own).toHaveValue('O');
-    expect(screen.getByText('“O” is not a number.')).toBeInTheDocument();
+    expect(screen.getByText('“O” is not a number. Not applied; still 10 mm/h.')).toBeInTheDocument();
     expect(scenario().eventSet.designPick).toEqual({ value: 10 });
   });
 });

@@ -98,8 +98,9 @@ describe('bringing a streamflow record in', () => {
     expect(within(dialog).getByRole('button', { name: 'Use this record' })).toBeDisabled();
     await user.click(within(dialog).getByRole('button', { name: 'Cancel' }));
     expect(scenario()).toBe(WITH_TRIANGLE);
+    // A cancelled paste leaves nothing behind for the next opening.
     await user.click(screen.getByRole('button', { name: 'Paste streamflow…' }));
-    expect(screen.getByLabelText('Streamflow text')).toHaveValue(bad);
+    expect(screen.getByLabelText('Streamflow text')).toHaveValue('');
   });
 
   it('reads the unit a column names and lets a wrong guess be corrected, converting exactly', async () => {
@@ -193,13 +194,16 @@ describe('separating baseflow', () => {
     await user.clear(end);
     await user.type(end, '7x');
     expect(end).toHaveValue('7x');
-    expect(end).toHaveAccessibleDescription(expect.stringContaining('“7x” is not a number.'));
+    expect(end).toHaveAccessibleDescription(
+      expect.stringContaining('“7x” is not a plain number; leave out any unit or word. Not applied; still 7 h.'),
+    );
     await user.clear(end);
     await user.type(end, '20');
     expect(end).toHaveAccessibleDescription(
       expect.stringContaining('The end point (20 h) is after the last sample of the record (12 h).'),
     );
-    expect(flowOf(scenario()).baseflow).toEqual({ kind: 'straight-line', endTimeH: 2 });
+    // Not applied: the end stays where it was before the typing (7 h), never the "2" typed on the way to "20".
+    expect(flowOf(scenario()).baseflow).toEqual({ kind: 'straight-line', endTimeH: 7 });
     const rise = screen.getByLabelText(/^Start of rise/);
     await user.type(rise, '0');
     expect(rise).toHaveAccessibleDescription(

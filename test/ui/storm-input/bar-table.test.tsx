@@ -124,7 +124,7 @@ describe('the bar table', () => {
     const { user, scenario } = renderWorkbench();
     await user.click(cell(2, 'depth'));
     await user.keyboard('-3{Enter}');
-    expect(cell(2, 'note')).toHaveTextContent('Bar 2 depth: rainfall depth cannot be negative (got -3 mm).');
+    expect(cell(2, 'note')).toHaveTextContent('Bar 2 depth: “-3” mm: a rainfall or runoff depth cannot be negative.');
     await user.keyboard('{Escape}');
     expect(screen.queryByRole('textbox', { name: 'Bar 2 depth' })).toBeNull();
     expect(cell(2, 'depth')).toHaveTextContent('6');

@@ -89,7 +89,9 @@ describe('reading a typed cell of the bar table', () => {
 
   it('a depth is read in the screen’s unit and stored in mm', () => {
     expect(readCell(elapsed, 1, 'depth', '0.5', 'us', clock)).toEqual({ ok: true, kind: 'depth', depthMm: 12.7 });
-    expect(readCell(elapsed, 1, 'depth', '7,5', 'si', clock)).toEqual({ ok: true, kind: 'depth', depthMm: 7.5 });
+    // In the default number format (1,234.5) a comma groups thousands: "7,500" is 7,500 mm, "7,5" is refused.
+    expect(readCell(elapsed, 1, 'depth', '7,500', 'si', clock)).toEqual({ ok: true, kind: 'depth', depthMm: 7500 });
+    expect(readCell(elapsed, 1, 'depth', '7,5', 'si', clock).ok).toBe(false);
   });
 
   it('a bad depth or duration is refused with a message naming the bar', () => {
@@ -99,11 +101,13 @@ describe('reading a typed cell of the bar table', () => {
     });
     expect(readCell(elapsed, 0, 'depth', '-1', 'si', clock)).toEqual({
       ok: false,
-      message: 'Bar 1 depth: rainfall depth cannot be negative (got -1 mm).',
+      message: 'Bar 1 depth: “-1” mm: a rainfall or runoff depth cannot be negative.',
     });
     expect(readCell(elapsed, 2, 'duration', '0', 'si', clock)).toEqual({
       ok: false,
-      message: 'Bar 3 duration: a bar must last more than 0 min (got 0 min).',
+      // A second is 1/60 min = 0.01667 min to four figures.
+      message:
+        'Bar 3 duration: “0” min is less than a bar or time step can be (at least 0.01667 min): no rain gauge resolves less than a second (common practice, no source).',
     });
   });
 

@@ -97,10 +97,13 @@ describe('pasting rainfall', () => {
     await waitFor(() =>
       expect(within(dialog).getByText(/^4 bars of 5 min, depths in mm, total 10 mm/)).toBeInTheDocument(),
     );
+    await user.tab();
     // A step that cannot be used is refused beside the field and the last good one stays in force.
     await user.clear(step);
     await user.type(step, '0');
-    expect(within(dialog).getByText('The time step must be more than 0 minutes.')).toBeInTheDocument();
+    expect(
+      within(dialog).getByText('The time step must be more than 0 minutes. Not applied; still 5 min.'),
+    ).toBeInTheDocument();
     expect(within(dialog).getByText(/^4 bars of 5 min/)).toBeInTheDocument();
   });
 
@@ -173,7 +176,7 @@ describe('pasting rainfall', () => {
     expect(scenario().storm).toBe(before);
   });
 
-  it('Cancel and Escape change nothing, and the text is still there on reopening', async () => {
+  it('Cancel and Escape change nothing and leave nothing behind for the next opening', async () => {
     const { user, scenario, store } = renderWorkbench();
     let dialog = await openPaste(user);
     await pasteText(user, ONE_COLUMN);
@@ -183,7 +186,7 @@ describe('pasting rainfall', () => {
     expect(store.getState().history.past).toHaveLength(0);
 
     dialog = await openPaste(user);
-    expect(within(dialog).getByRole('textbox', { name: 'Rainfall text' })).toHaveValue(ONE_COLUMN);
+    expect(within(dialog).getByRole('textbox', { name: 'Rainfall text' })).toHaveValue('');
     await user.keyboard('{Escape}');
     expect(screen.queryByRole('dialog')).toBeNull();
     expect(scenario().storm).toBe(FOUR_BARS.storm);
@@ -248,7 +251,8 @@ describe('pasting rainfall', () => {
     expect(await within(dialog).findByText('Read from two-bars-invented.txt')).toBeInTheDocument();
     expect(within(dialog).getByRole('textbox', { name: 'Rainfall text' })).toHaveValue('2\n4\n');
     await waitFor(() =>
-      expect(within(dialog).getByText(/^2 bars of 1 h, depths in mm, total 6 mm/)).toBeInTheDocument(),
+      // Without times, bars take the storm on screen's step (FOUR_BARS: 30 min).
+      expect(within(dialog).getByText(/^2 bars of 30 min, depths in mm, total 6 mm/)).toBeInTheDocument(),
     );
   });
 

@@ -80,12 +80,27 @@ describe('storm tools', () => {
   });
 
   it('a step that would make too many bars is refused with the core’s reason', async () => {
+    // Invented: one bar of 300 h. A step of 0.017 min (1.02 s) would make 300 × 60 / 0.017 = 1,058,824 bars.
+    const long = { ...FOUR_BARS, storm: { durationsH: [300], depthsMm: [50] } };
+    const { user, scenario } = renderWorkbench(long);
+    const tools = await openTools(user);
+    const field = within(tools).getByRole('textbox', { name: 'New time step (min)' });
+    await fill(user, field, '0.017');
+    await user.click(within(tools).getByRole('button', { name: 'Resample' }));
+    expect(field).toHaveAccessibleDescription(/makes more than 1000000 bars/);
+    expect(scenario().storm).toBe(long.storm);
+  });
+
+  it('a step shorter than a second is refused before the core is asked', async () => {
     const { user, scenario } = renderWorkbench();
     const tools = await openTools(user);
     const field = within(tools).getByRole('textbox', { name: 'New time step (min)' });
     await fill(user, field, '0.0001');
     await user.click(within(tools).getByRole('button', { name: 'Resample' }));
-    expect(field).toHaveAccessibleDescription(/makes more than 1000000 bars/);
+    // One second is 1/60 min = 0.01667 min to four figures.
+    expect(field).toHaveAccessibleDescription(
+      /“0\.0001” min is less than a bar or time step can be \(at least 0\.01667 min\)/,
+    );
     expect(scenario().storm).toBe(FOUR_BARS.storm);
   });
 

@@ -7,19 +7,21 @@ import {
 } from '../../../io';
 import { isInputError } from '../../../core';
 import { useActions, useScenario, withStreamflowRecord } from '../../../store';
+import { formatCount } from '../../format';
 import { ImportDialog, type ImportDraft, type ImportKind } from '../../import-kit';
+import { currentNumberFormat } from '../../number-format';
 import { dischargeText } from '../discharge';
 import { hoursText } from '../time-text';
 import { FlowPreview } from './FlowPreview';
 import { FlowSettings, type FlowSettingsPatch } from './FlowSettings';
 
-/** What the dialog holds: kept when it is cancelled, so reopening shows the same text and corrections. */
+/** What the dialog opens on (a file's text, or nothing). */
 export type FlowDraft = ImportDraft<FlowSettingsPatch>;
 
 export const EMPTY_FLOW_DRAFT: FlowDraft = { text: '', fileName: null, corrections: {} };
 
 function recordOf(text: string, settings: FlowImportSettings): FlowRecord | null {
-  const result = applyFlowImport(text, settings);
+  const result = applyFlowImport(text, settings, currentNumberFormat());
   return result.ok ? result.record : null;
 }
 
@@ -35,8 +37,9 @@ const FLOW_KIND: ImportKind<FlowImportSettings, FlowRecord> = {
     acceptLabel: 'Use this record',
   },
   className: 'paste flow-paste',
-  guess: guessFlowSettings,
-  preview: previewFlowImport,
+  // Read in the reader's number format at call time (the views redraw when it changes).
+  guess: (text) => guessFlowSettings(text, { numberFormat: currentNumberFormat() }),
+  preview: (text, settings) => previewFlowImport(text, settings, currentNumberFormat()),
   apply: recordOf,
   Settings: FlowSettings,
   // The shared problem table names settings as the rainfall paste calls them; these read as this paste's own controls.
@@ -48,8 +51,8 @@ const FLOW_KIND: ImportKind<FlowImportSettings, FlowRecord> = {
 
 export interface FlowPasteDialogProps {
   readonly initial: FlowDraft;
-  /** Called on cancel with what to keep, and on accept with null. */
-  readonly onClose: (keep: FlowDraft | null) => void;
+  /** Called on cancel and after the record is used. */
+  readonly onClose: () => void;
 }
 
 /**
@@ -69,7 +72,7 @@ export function FlowPasteDialog({ initial, onClose }: FlowPasteDialogProps) {
         const span = (current.timesH[n - 1] as number) - (current.timesH[0] as number);
         let peak = 0;
         for (const q of current.dischargeM3s) if (q > peak) peak = q;
-        return `Replaces the record now on screen (${n} samples over ${hoursText(span)}, peak ${dischargeText(peak, units)}); Undo brings it back.`;
+        return `Replaces the record now on screen (${formatCount(n)} samples over ${hoursText(span)}, peak ${dischargeText(peak, units)}); Undo brings it back.`;
       })()
     : 'Adds the record under the hyetograph; Undo takes it away.';
 

@@ -2,7 +2,7 @@ import { useMemo } from 'react';
 import { scaleLinear } from 'd3-scale';
 import { findPeakIndex, type UnitSystem } from '../../../core';
 import type { FlowRecord } from '../../../io';
-import { formatValue } from '../../format';
+import { formatCount, formatValue } from '../../format';
 import { LISTED, PreviewSketch, SKETCH_HEIGHT, SKETCH_PAD, SKETCH_WIDTH } from '../../import-kit';
 import { dischargeText, dischargeToDisplay, dischargeUnitText } from '../discharge';
 import { seriesPath } from '../hydrograph-paths';
@@ -33,7 +33,7 @@ export function FlowPreview({ record, units }: { record: FlowRecord; units: Unit
 
   return (
     <PreviewSketch
-      label={`Sketch of the ${n} samples read, peak ${peakText}`}
+      label={`Sketch of the ${formatCount(n)} samples read, peak ${peakText}`}
       pathClassName="flow-preview__line"
       path={path}
       caption="Samples read"

@@ -5,8 +5,8 @@ import { useActions, useScenario } from '../../../store';
 import { fineStep } from '../../chart/drag-math';
 import { chartFrame } from '../../chart/frame';
 import { CHART_HEIGHT } from '../../chart/Hyetograph';
-import { formatForField, formatValue } from '../../format';
-import { parseNumber } from '../../parse-number';
+import { formatCount, formatForField, formatValue } from '../../format';
+import { readTyped } from '../../fields/read-typed';
 import { displayUnit, unitText } from '../../units';
 import { DRAW_PANEL_ID, useStormInput } from '../context';
 import { ToolField } from '../tools/ToolField';
@@ -22,7 +22,7 @@ export function DrawPanel() {
   const units = useScenario((s) => s.units);
   const n = storm.depthsMm.length;
   const [stepText, setStepText] = useState(() => formatForField((storm.durationsH[0] ?? 10 / 60) * 60));
-  const [countText, setCountText] = useState(() => String(n > 0 ? n : 18));
+  const [countText, setCountText] = useState(() => formatCount(n > 0 ? n : 18));
   const [stepMessage, setStepMessage] = useState<string | null>(null);
   const [countMessage, setCountMessage] = useState<string | null>(null);
   const [status, setStatus] = useState('');
@@ -33,12 +33,17 @@ export function DrawPanel() {
 
   const create = (e: FormEvent): void => {
     e.preventDefault();
-    const step = parseNumber(stepText);
-    const count = parseNumber(countText);
-    const stepBad = !step.ok ? step.message : step.value > 0 ? null : 'The bar duration must be more than 0 minutes.';
+    const step = readTyped(stepText, {
+      quantity: 'barDuration',
+      toSI: (v) => v / 60,
+      fromSI: (h) => h * 60,
+      unit: 'min',
+    });
+    const count = readTyped(countText, { quantity: 'barCount' });
+    const stepBad = step.ok ? null : step.message;
     const countBad = !count.ok
       ? count.message
-      : Number.isInteger(count.value) && count.value >= 1
+      : Number.isInteger(count.value)
         ? null
         : 'The number of bars must be a whole number, 1 or more.';
     setStepMessage(stepBad);
@@ -48,7 +53,7 @@ export function DrawPanel() {
       const fresh = emptyStorm(step.value / 60, count.value, storm.startIso);
       actions.setStorm(fresh, 'New empty storm');
       setStatus(
-        `${count.value} dry bars of ${formatValue(step.value)} min, ready to draw on. Undo brings back the storm before.`,
+        `${formatCount(count.value)} dry bars of ${formatValue(step.value)} min, ready to draw on. Undo brings back the storm before.`,
       );
     } catch (error) {
       if (!isInputError(error)) throw error;

@@ -34,6 +34,10 @@ export function ImportSettings({
   const columns = columnNumbers(s, columnCount);
   const hasTimes = s.timeColumn !== null && s.timeKind !== 'none';
   const rateUnit = s.valueKind === 'intensity';
+  const along = s.valuesAlong === 'line';
+  // Choosing a time column means one value per line again.
+  const change = (patch: SettingsPatch): void =>
+    onChange(along && patch.timeColumn != null ? { ...patch, valuesAlong: 'column' } : patch);
 
   return (
     <div className="guesses">
@@ -47,7 +51,7 @@ export function ImportSettings({
         idPrefix="paste"
         words={RAIN_TIME_WORDS}
         numberKind="elapsed-min"
-        onChange={onChange}
+        onChange={change}
       >
         {hasTimes && s.valueKind !== 'cumulative' ? (
           <Select
@@ -65,12 +69,31 @@ export function ImportSettings({
       <fieldset className="guesses__group">
         <legend>Rainfall values</legend>
         <Select
-          label="Rainfall column"
-          value={String(s.valueColumn)}
-          onChange={(v) => onChange({ valueColumn: Number(v) })}
+          label="Values run"
+          value={along ? 'line' : 'column'}
+          onChange={(v) =>
+            onChange(
+              v === 'line'
+                ? { valuesAlong: 'line', timeColumn: null, timeKind: 'none', dateColumn: null }
+                : { valuesAlong: 'column' },
+            )
+          }
+          hint={
+            along ? 'Each value on a line is one bar, line after line, without times (a spreadsheet row).' : undefined
+          }
         >
-          <ColumnOptions columns={columns.filter((c) => c !== s.timeColumn)} header={header} />
+          <option value="column">Down a column</option>
+          <option value="line">Along each line</option>
         </Select>
+        {along ? null : (
+          <Select
+            label="Rainfall column"
+            value={String(s.valueColumn)}
+            onChange={(v) => onChange({ valueColumn: Number(v) })}
+          >
+            <ColumnOptions columns={columns.filter((c) => c !== s.timeColumn)} header={header} />
+          </Select>
+        )}
         <Select
           label="Values are"
           value={s.valueKind}

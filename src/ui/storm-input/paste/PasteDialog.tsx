@@ -2,22 +2,23 @@ import { useMemo } from 'react';
 import { totalDepthMm } from '../../../core';
 import { applyRainImport, previewRainImport, type ImportedStorm, type RainImportSettings } from '../../../io';
 import { useActions, useScenario } from '../../../store';
-import { formatValue } from '../../format';
+import { formatCount, formatValue } from '../../format';
+import { currentNumberFormat } from '../../number-format';
 import { ImportDialog, type ImportDraft, type ImportKind, type ImportWords } from '../../import-kit';
 import { displayUnit, toDisplay, unitText } from '../../units';
 import { guessForScreen } from './guess';
 import { ImportSettings, type SettingsPatch } from './ImportSettings';
 import { PreviewBars } from './PreviewBars';
 
-/** What the dialog holds: kept when it is cancelled, so reopening shows the same text and corrections. */
+/** What the dialog opens on (a file's text, or nothing). */
 export type PasteDraft = ImportDraft<SettingsPatch>;
 
 export const EMPTY_DRAFT: PasteDraft = { text: '', fileName: null, corrections: {} };
 
 export interface PasteDialogProps {
   readonly initial: PasteDraft;
-  /** Called on cancel with what to keep, and on accept with null. */
-  readonly onClose: (keep: PasteDraft | null) => void;
+  /** Called on cancel and after the bars are used. */
+  readonly onClose: () => void;
 }
 
 const RAIN_WORDS: ImportWords = {
@@ -32,7 +33,7 @@ const RAIN_WORDS: ImportWords = {
 };
 
 function stormOf(text: string, settings: RainImportSettings): ImportedStorm | null {
-  const result = applyRainImport(text, settings);
+  const result = applyRainImport(text, settings, currentNumberFormat());
   return result.ok ? result.storm : null;
 }
 
@@ -45,22 +46,26 @@ export function PasteDialog({ initial, onClose }: PasteDialogProps) {
   const actions = useActions();
   const storm = useScenario((s) => s.storm);
   const units = useScenario((s) => s.units);
-  // The guesses follow the screen's units (see guessForScreen), so the kind changes with them.
-  const kind: ImportKind<RainImportSettings, ImportedStorm> = useMemo(
-    () => ({
+  // Without times in the text, bars are guessed to be as long as the storm's on screen.
+  const stepMinutes = useScenario((s) =>
+    s.storm.durationsH.length > 0 ? (s.storm.durationsH[0] as number) * 60 : undefined,
+  );
+  // The guesses follow the screen's units, number format and step (see guessForScreen), so the kind changes with them.
+  const kind: ImportKind<RainImportSettings, ImportedStorm> = useMemo(() => {
+    const format = currentNumberFormat();
+    return {
       words: RAIN_WORDS,
       className: 'paste',
-      guess: (text) => guessForScreen(text, units),
-      preview: previewRainImport,
+      guess: (text) => guessForScreen(text, units, { numberFormat: format, stepMinutes }),
+      preview: (text, settings) => previewRainImport(text, settings, format),
       apply: stormOf,
       Settings: ImportSettings,
-    }),
-    [units],
-  );
+    };
+  }, [units, stepMinutes]);
 
   const depthUnit = displayUnit('depth', units);
   const current = storm.depthsMm.length;
-  const currentText = `${current} bar${current === 1 ? '' : 's'}, ${formatValue(toDisplay('depth', totalDepthMm(storm), units))} ${unitText(depthUnit)}`;
+  const currentText = `${formatCount(current)} bar${current === 1 ? '' : 's'}, ${formatValue(toDisplay('depth', totalDepthMm(storm), units))} ${unitText(depthUnit)}`;
 
   return (
     <ImportDialog

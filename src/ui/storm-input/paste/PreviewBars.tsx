@@ -3,7 +3,7 @@ import { scaleLinear } from 'd3-scale';
 import { barEdgesH, peakIntensityMmH, totalDurationH, type Storm, type UnitSystem } from '../../../core';
 import { barsPath } from '../../chart/bar-path';
 import { formatDuration } from '../../rainfall/RainfallToolbar';
-import { formatValue } from '../../format';
+import { formatCount, formatValue } from '../../format';
 import { LISTED, PreviewSketch, SKETCH_HEIGHT, SKETCH_PAD, SKETCH_WIDTH } from '../../import-kit';
 import { displayUnit, toDisplay, unitText } from '../../units';
 import { barClock, barTimeText } from '../bar-times';
@@ -39,7 +39,7 @@ export function PreviewBars({ storm, units }: { storm: Storm; units: UnitSystem 
 
   return (
     <PreviewSketch
-      label={`Sketch of the ${n} bars read, highest intensity ${peakText}`}
+      label={`Sketch of the ${formatCount(n)} bars read, highest intensity ${peakText}`}
       pathClassName="paste-preview__bars"
       path={path}
       caption="Bars read"

@@ -1,17 +1,24 @@
 import type { UnitSystem } from '../../../core';
-import { guessRainSettings, rainHintsFromName, readTable, type RainImportSettings } from '../../../io';
+import {
+  guessRainSettings,
+  rainHintsFromName,
+  readTable,
+  type ImportHints,
+  type RainImportSettings,
+} from '../../../io';
 
 /** Lines past the skipped ones read to find the header: it is the first non-empty one. */
 const HEAD_LINES = 50;
 
 /**
- * The import layer's guesses, with one addition from the screen: when nothing
- * in the text names the unit (no "mm" or "in" in the value column's name),
- * the values are taken to be in the unit the screen shows, inches on a US
- * customary screen. It is a guess like the others, shown and correctable.
+ * The import layer's guesses, with what the screen knows (`hints`: the
+ * reader's number format, the storm's present step) and one addition: when
+ * nothing in the text names the unit (no "mm" or "in" in the value column's
+ * name), the values are taken to be in the unit the screen shows, inches on
+ * a US customary screen. It is a guess like the others, shown and correctable.
  */
-export function guessForScreen(text: string, units: UnitSystem): RainImportSettings {
-  const guessed = guessRainSettings(text);
+export function guessForScreen(text: string, units: UnitSystem, hints: ImportHints = {}): RainImportSettings {
+  const guessed = guessRainSettings(text, hints);
   if (units !== 'us' || guessed.unit === 'in') return guessed;
   let named = false;
   if (guessed.hasHeader) {

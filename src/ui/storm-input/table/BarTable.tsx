@@ -1,7 +1,7 @@
 import { useEffect, useLayoutEffect, useMemo, useRef, useState, type KeyboardEvent } from 'react';
 import { barEdgesH, isInputError, totalDurationH, type UnitSystem } from '../../../core';
 import { useActions, useDerived, useScenario } from '../../../store';
-import { formatForField, formatValue } from '../../format';
+import { formatCount, formatForField, formatValue } from '../../format';
 import { displayUnit, toDisplay, unitText } from '../../units';
 import { barClock, barTimeText } from '../bar-times';
 import { readCell, type EditableColumn } from './cell-edit';
@@ -415,7 +415,10 @@ export function BarTable() {
     draftsByRow.get(r)?.set(c, d);
   }
 
-  const selected = n === 0 ? 'No bars yet: add one, paste rainfall or draw.' : `Bar ${at.row + 1} of ${n} selected.`;
+  const selected =
+    n === 0
+      ? 'No bars yet: add one, paste rainfall or draw.'
+      : `Bar ${formatCount(at.row + 1)} of ${formatCount(n)} selected.`;
   const bodyHeight = Math.max(1, Math.min(n, FALLBACK_VIEW_ROWS)) * ROW_PX;
 
   return (

@@ -1,7 +1,7 @@
 import { barEdgesH, type Storm, type UnitSystem } from '../../../core';
 import { withBarStartH } from '../../../core/storm-tools';
-import { parseNumber } from '../../parse-number';
-import { displayUnit, fromDisplay, unitText } from '../../units';
+import { readTyped } from '../../fields/read-typed';
+import { displayUnit, fromDisplay, toDisplay, unitText } from '../../units';
 import { barTimeText, readBarTime, shiftStartIso, type BarClock } from '../bar-times';
 
 /** The editable columns of the bar table. */
@@ -41,21 +41,24 @@ export function readCell(
   clock: BarClock,
 ): CellEdit {
   if (column === 'depth') {
-    const parsed = parseNumber(text);
+    const unit = unitText(displayUnit('depth', system));
+    const parsed = readTyped(text, {
+      quantity: 'depth',
+      toSI: (v) => fromDisplay('depth', v, system),
+      fromSI: (mm) => toDisplay('depth', mm, system),
+      unit,
+    });
     if (!parsed.ok) return bad(k, column, numberMessage(parsed.message));
-    if (parsed.value < 0) {
-      return bad(
-        k,
-        column,
-        `rainfall depth cannot be negative (got ${text.trim()} ${unitText(displayUnit('depth', system))}).`,
-      );
-    }
     return { ok: true, kind: 'depth', depthMm: fromDisplay('depth', parsed.value, system) };
   }
   if (column === 'duration') {
-    const parsed = parseNumber(text);
+    const parsed = readTyped(text, {
+      quantity: 'barDuration',
+      toSI: (v) => v / 60,
+      fromSI: (h) => h * 60,
+      unit: 'min',
+    });
     if (!parsed.ok) return bad(k, column, numberMessage(parsed.message));
-    if (!(parsed.value > 0)) return bad(k, column, `a bar must last more than 0 min (got ${text.trim()} min).`);
     return { ok: true, kind: 'duration', durationH: parsed.value / 60 };
   }
   const edges = barEdgesH(storm);

@@ -3,7 +3,8 @@ import { isInputError, scaleStormToDepth, totalDepthMm, type Storm } from '../..
 import { resampleStorm, scaleStormByFactor } from '../../../core/storm-tools';
 import { useActions, useScenario } from '../../../store';
 import { formatDuration } from '../../rainfall/RainfallToolbar';
-import { formatForField, formatValue } from '../../format';
+import { formatCount, formatForField, formatValue } from '../../format';
+import { readTyped, stormDepthRefusal } from '../../fields/read-typed';
 import { parseNumber } from '../../parse-number';
 import { displayUnit, fromDisplay, toDisplay, unitText } from '../../units';
 import { readStartText, startFieldText } from '../bar-times';
@@ -72,8 +73,10 @@ export function StormTools() {
     if (!parsed.ok) return fail('factor', parsed.message);
     if (parsed.value < 0) return fail('factor', 'The factor cannot be negative.');
     if (!needBars('factor')) return;
+    const next = scaleStormByFactor(storm, parsed.value);
+    const tooDeep = stormDepthRefusal(next, units);
+    if (tooDeep) return fail('factor', tooDeep);
     attempt('factor', () => {
-      const next = scaleStormByFactor(storm, parsed.value);
       actions.setStorm(next, `Scale storm by ${formatValue(parsed.value)}`);
       return `Every bar multiplied by ${formatValue(parsed.value)}: the storm now holds ${totalText(next)}.`;
     });
@@ -81,9 +84,13 @@ export function StormTools() {
 
   const onTotal = (e: FormEvent): void => {
     e.preventDefault();
-    const parsed = parseNumber(total);
+    const parsed = readTyped(total, {
+      quantity: 'depth',
+      toSI: (v) => fromDisplay('depth', v, units),
+      fromSI: (mm) => toDisplay('depth', mm, units),
+      unit: depthUnit,
+    });
     if (!parsed.ok) return fail('total', parsed.message);
-    if (parsed.value < 0) return fail('total', 'The total depth cannot be negative.');
     if (!needBars('total')) return;
     attempt('total', () => {
       const next = scaleStormToDepth(storm, fromDisplay('depth', parsed.value, units));
@@ -94,9 +101,13 @@ export function StormTools() {
 
   const onResample = (e: FormEvent): void => {
     e.preventDefault();
-    const parsed = parseNumber(step);
+    const parsed = readTyped(step, {
+      quantity: 'barDuration',
+      toSI: (v) => v / 60,
+      fromSI: (h) => h * 60,
+      unit: 'min',
+    });
     if (!parsed.ok) return fail('step', parsed.message);
-    if (!(parsed.value > 0)) return fail('step', 'The time step must be more than 0 minutes.');
     if (!needBars('step')) return;
     attempt('step', () => {
       const next = resampleStorm(storm, parsed.value / 60);
@@ -107,7 +118,7 @@ export function StormTools() {
         m > 1 && Math.abs(last - parsed.value / 60) > 1e-9
           ? `; the last bar is ${formatDuration(last)}, to the end of the storm`
           : '';
-      return `Now ${m} bar${m === 1 ? '' : 's'} of ${formatDuration(next.durationsH[0] as number)}${shorter}; ${totalText(next)} kept.`;
+      return `Now ${formatCount(m)} bar${m === 1 ? '' : 's'} of ${formatDuration(next.durationsH[0] as number)}${shorter}; ${totalText(next)} kept.`;
     });
   };
 
@@ -136,7 +147,7 @@ export function StormTools() {
       return;
     }
     actions.setStorm({ durationsH: [], depthsMm: [] }, 'Clear storm');
-    setStatus(`All ${n} bars removed. Undo brings them back.`);
+    setStatus(`All ${formatCount(n)} bars removed. Undo brings them back.`);
   };
 
   return (

@@ -1,0 +1,33 @@
+import type { NumericParam, UnitSystem } from '../../core';
+import type { Totals } from '../compare/totals';
+import { formatValue } from '../format';
+import { paramToDisplay, paramUnitText } from '../units';
+
+/**
+ * How a fitted parameter is written wherever it appears (the matching
+ * panel, the printed report, the compare table), so that a value is called
+ * fitted only where it is in use, and a proposal always reads as one.
+ */
+
+/** A label inside a sentence: "loss rate φ", but "CN" and "K" keep their capitals ("curve number CN"). */
+export function labelInSentence(label: string): string {
+  const second = label.charAt(1);
+  return second !== '' && second === second.toLowerCase() && second !== second.toUpperCase()
+    ? label.charAt(0).toLowerCase() + label.slice(1)
+    : label;
+}
+
+/** "11.5 mm/h", "72": a parameter value as the screen shows it, with its unit. */
+export function paramAmount(param: NumericParam, si: number, units: UnitSystem): string {
+  const unit = paramUnitText(param.unit, units);
+  return `${formatValue(paramToDisplay(param.unit, si, units))}${unit ? ` ${unit}` : ''}`;
+}
+
+/** The "Fitted parameter" cell of the report and the compare table. */
+export function fittedCellText(t: Totals, units: UnitSystem): string {
+  if (t.fitted) return `${t.fitted.param.label} ${paramAmount(t.fitted.param, t.fitted.value, units)}`;
+  if (t.proposed) {
+    return `— (not in use; Fit would set ${labelInSentence(t.proposed.param.label)} to ${paramAmount(t.proposed.param, t.proposed.value, units)})`;
+  }
+  return `— (${t.fitNote ?? 'none'})`;
+}
