@@ -139,7 +139,7 @@ export const tests = [
       check(Math.abs(rate - 8.16) <= 1e-9 * 8.16, `the matched loss rate is ${rate} mm/h, by hand 8.16 mm/h`);
       checkShown(await shown(page, 'Excess depth'), 21.6, 'mm', 'Excess depth at the matched rate');
       const answer = (await page.locator('#fit-answer').textContent()) ?? '';
-      check(/^Matched: Loss rate φ 8\.16 mm\/h/.test(answer), `Matching says "${answer}"`);
+      check(/^Matched: loss rate φ is 8\.16 mm\/h/.test(answer), `Matching says "${answer}"`);
     },
   },
   {
