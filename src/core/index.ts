@@ -55,3 +55,6 @@ export * from './baseflow';
 export * from './design';
 export * from './events';
 export * from './storm-tools';
+// Limits of time: how long a record may span, how short a bar may be, which years a start clock may name.
+export * from './time-limits';
+export { wallClockMs, wallClockParts, hoursBetweenClocks, namesZone, type WallClockParts } from './wall-clock';

@@ -1,4 +1,12 @@
 import { InputError } from './errors';
+import {
+  MAX_RECORD_H,
+  MAX_RECORD_YEARS,
+  clockYearProblem,
+  describeHours,
+  isBarDurationH,
+  stepProblem,
+} from './time-limits';
 
 /**
  * A storm: an ordered list of bars, each with a duration (h, > 0) and a
@@ -30,13 +38,18 @@ export function validateStorm(storm: Storm): void {
       `The storm has ${n} bar durations but ${depthsMm.length} bar depths; they must match one to one.`,
     );
   }
+  let endH = 0;
   for (let k = 0; k < n; k++) {
     const d = durationsH[k] as number;
-    // `!(d > 0)` also catches NaN; the second test catches +Infinity.
-    if (!(d > 0) || d === Infinity || typeof d !== 'number') {
+    // Limits of time (one second to 500 years): see time-limits.ts.
+    if (!isBarDurationH(d)) {
+      throw new InputError('durationsH', stepProblem(`Bar ${k + 1}: duration`, d) ?? `Bar ${k + 1}: bad duration.`, k);
+    }
+    endH += d;
+    if (endH > MAX_RECORD_H) {
       throw new InputError(
         'durationsH',
-        `Bar ${k + 1}: duration must be a finite number of hours greater than zero (got ${String(d)}).`,
+        `Bar ${k + 1}: the storm would run ${describeHours(endH)} from its start; a record spans at most ${MAX_RECORD_YEARS} years.`,
         k,
       );
     }
@@ -49,8 +62,13 @@ export function validateStorm(storm: Storm): void {
       );
     }
   }
-  if (storm.startIso !== undefined && Number.isNaN(Date.parse(storm.startIso))) {
-    throw new InputError('startIso', `The storm start "${storm.startIso}" is not an ISO 8601 date-time.`);
+  const start = storm.startIso;
+  if (start !== undefined) {
+    if (typeof start !== 'string' || Number.isNaN(Date.parse(start))) {
+      throw new InputError('startIso', `The storm start "${String(start)}" is not an ISO 8601 date-time.`);
+    }
+    const year = clockYearProblem('The storm start', start);
+    if (year !== null) throw new InputError('startIso', year);
   }
 }
 

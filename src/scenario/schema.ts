@@ -1,7 +1,15 @@
 import * as v from 'valibot';
 import {
+  FIRST_CLOCK_YEAR,
+  LAST_CLOCK_YEAR,
+  MAX_RECORD_YEARS,
+  clockYearProblem,
+  describeHours,
+  hoursBetweenClocks,
+  isBarDurationH,
   isBaseflowKind,
   isInputError,
+  isSpanH,
   isLossKind,
   validateBaseflowMethod,
   validateHydrograph,
@@ -146,15 +154,31 @@ function fields<const E extends v.ObjectEntries>(entries: E, what: string) {
   return v.pipe(v.custom<Record<string, unknown>>(isRecord, message), v.object(entries, message));
 }
 
-const StormEntries = {
-  durationsH: barList('durations in hours', 'a number > 0 (bar duration, hours)', positive),
-  depthsMm: barList('rain depths in mm', 'a number ≥ 0 (rain depth, mm)', nonNegative),
-  startIso: v.exactOptional(
+/**
+ * An optional start clock: an ISO 8601 date-time in the years a start may
+ * have (core/time-limits.ts), or left out.
+ */
+function startClock() {
+  return v.exactOptional(
     v.pipe(
       v.string(must('text: an ISO 8601 date-time such as "2026-07-14T15:00", or left out')),
       v.check(isIsoDateTime, must('an ISO 8601 date-time such as "2026-07-14T15:00" or "2026-07-14T15:00:00Z"')),
+      v.check(
+        (iso) => clockYearProblem('', iso) === null,
+        must(`a date-time in the years ${FIRST_CLOCK_YEAR} to ${LAST_CLOCK_YEAR}`),
+      ),
     ),
+  );
+}
+
+const StormEntries = {
+  durationsH: barList(
+    'durations in hours',
+    `a number of hours from 1 second (0.000278) to ${MAX_RECORD_YEARS} years (bar duration)`,
+    isBarDurationH,
   ),
+  depthsMm: barList('rain depths in mm', 'a number ≥ 0 (rain depth, mm)', nonNegative),
+  startIso: startClock(),
 };
 
 const CatchmentEntries = {
@@ -289,15 +313,17 @@ const BaseflowSchema = methodSchema(readBaseflowMethod);
 const BaseflowMemorySchema = methodMemorySchema(readBaseflowMethod, isBaseflowKind, 'baseflow');
 
 const StreamflowEntries = {
-  timesH: sampleList('sample times in hours', 'a finite number (hours after the first sample)', finite),
-  dischargeM3s: sampleList('discharges in m³/s', 'a number ≥ 0 (discharge, m³/s)', nonNegative),
-  startIso: v.exactOptional(
-    v.pipe(
-      v.string(must('text: an ISO 8601 date-time such as "2026-07-14T15:00", or left out')),
-      v.check(isIsoDateTime, must('an ISO 8601 date-time such as "2026-07-14T15:00" or "2026-07-14T15:00:00Z"')),
-    ),
+  timesH: sampleList(
+    'sample times in hours',
+    `a number of hours after the first sample, within ${MAX_RECORD_YEARS} years of it`,
+    isSpanH,
   ),
-  offsetH: numberField('a finite number of hours (from the storm start to the first sample)', finite),
+  dischargeM3s: sampleList('discharges in m³/s', 'a number ≥ 0 (discharge, m³/s)', nonNegative),
+  startIso: startClock(),
+  offsetH: numberField(
+    `a number of hours from the storm start to the first sample, within ${MAX_RECORD_YEARS} years either way`,
+    isSpanH,
+  ),
   baseflow: BaseflowSchema,
   baseflowMemory: BaseflowMemorySchema,
   useAsObserved: v.boolean(must('true or false')),
@@ -330,6 +356,19 @@ function checkStreamflow(
       ['streamflow', 'useAsObserved'],
       'is true, but there is no observed runoff to follow the separation (observed is null); set observed or make this false.',
     );
+  }
+  const stormStart = (doc['storm'] as { startIso?: unknown } | null | undefined)?.startIso;
+  const recordStart = (flow as { startIso?: unknown }).startIso;
+  if (typeof stormStart === 'string' && typeof recordStart === 'string') {
+    // The two clocks line the record up with the storm: that offset is held to a record's span too.
+    const between = hoursBetweenClocks(stormStart, recordStart);
+    if (between !== null && !isSpanH(between.hours)) {
+      add(
+        ['streamflow', 'startIso'],
+        `starts ${describeHours(Math.abs(between.hours))} ${between.hours < 0 ? 'before' : 'after'} the storm start; ` +
+          `a record lies within ${MAX_RECORD_YEARS} years of its storm.`,
+      );
+    }
   }
   if (!Array.isArray(timesH) || !Array.isArray(dischargeM3s)) return;
   if (timesH.length !== dischargeM3s.length) {

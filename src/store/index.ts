@@ -20,7 +20,8 @@ export {
   withoutStreamflow,
   type RecordInput,
 } from './streamflow-edits';
-export { alignRecord, hoursBetweenClocks, type Alignment, type AlignmentSource } from './alignment';
+export { hoursBetweenClocks } from '../core';
+export { alignRecord, type Alignment, type AlignmentSource } from './alignment';
 export type { Bar, Observed } from './edits';
 export { readScenario, readScenarioJson, type ReadResult } from './read-scenario';
 export {

@@ -1,11 +1,13 @@
 import { InputError } from '../errors';
+import { MAX_RECORD_H, MAX_RECORD_YEARS, describeHours, isBelowMinStep, isSpanH } from '../time-limits';
 import type { Hydrograph } from './types';
 
 /**
  * Throws an InputError naming the first bad sample (0-based `index`, shown
  * 1-based in the message) and its field. Runs once per call at the core's edge
  * so the methods can assume clean data: at least two samples (a volume needs
- * one step), finite strictly increasing times, finite discharge ≥ 0.
+ * one step), finite strictly increasing times at least a second apart and
+ * spanning at most 500 years (core/time-limits.ts), finite discharge ≥ 0.
  */
 export function validateHydrograph(hydrograph: Hydrograph): void {
   if (!hydrograph || typeof hydrograph !== 'object') {
@@ -33,12 +35,34 @@ export function validateHydrograph(hydrograph: Hydrograph): void {
     if (typeof t !== 'number' || !Number.isFinite(t)) {
       throw new InputError('timesH', `Sample ${k + 1}: time must be a finite number of hours (got ${String(t)}).`, k);
     }
+    // Limits of time (a record spans at most 500 years, samples at least a second apart): see time-limits.ts.
+    if (!isSpanH(t)) {
+      throw new InputError(
+        'timesH',
+        `Sample ${k + 1}: time ${describeHours(t)} is further from the first sample than a record spans (at most ${MAX_RECORD_YEARS} years).`,
+        k,
+      );
+    }
     if (k > 0) {
       const before = timesH[k - 1] as number;
       if (!(t > before)) {
         throw new InputError(
           'timesH',
           `Sample ${k + 1}: time ${t} h must be later than the time of sample ${k} (${before} h); times must strictly increase.`,
+          k,
+        );
+      }
+      if (isBelowMinStep(t - before)) {
+        throw new InputError(
+          'timesH',
+          `Sample ${k + 1}: it comes ${describeHours(t - before)} after sample ${k}; samples are at least 1 second apart.`,
+          k,
+        );
+      }
+      if (t - (timesH[0] as number) > MAX_RECORD_H) {
+        throw new InputError(
+          'timesH',
+          `Sample ${k + 1}: the record would run ${describeHours(t - (timesH[0] as number))} from its first sample; a record spans at most ${MAX_RECORD_YEARS} years.`,
           k,
         );
       }

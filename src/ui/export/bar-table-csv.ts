@@ -1,7 +1,7 @@
 import { barEdgesH, methodSpec, type LossMethod, type LossResult, type UnitSystem } from '../../core';
 import { CAUTION_TEXT } from '../../scenario';
 import type { Scenario } from '../../scenario/types';
-import { wallClockMs } from '../chart/clock';
+import { formatClockText, wallClockMs } from '../chart/clock';
 import { formatValue } from '../format';
 import { displayUnit, paramToDisplay, paramUnitText, toDisplay, unitText } from '../units';
 
@@ -40,19 +40,6 @@ function noteNumber(x: number): string {
 
 /** A note line: "#", then the text on one line (line breaks in names would end the note early). */
 const note = (text: string): string => `# ${text.replace(/[\r\n]+/g, ' ')}`;
-
-const pad = (n: number, width = 2): string => String(n).padStart(width, '0');
-
-/** Wall-clock text "2026-07-14 15:10" (with seconds when not whole minutes) of a time on the storm's axis. */
-function clockText(ms: number): string {
-  const d = new Date(Math.round(ms));
-  const s = d.getUTCSeconds() + d.getUTCMilliseconds() / 1000;
-  const seconds = s === 0 ? '' : `:${s < 10 ? '0' : ''}${Number(s.toFixed(3))}`;
-  return (
-    `${pad(d.getUTCFullYear(), 4)}-${pad(d.getUTCMonth() + 1)}-${pad(d.getUTCDate())} ` +
-    `${pad(d.getUTCHours())}:${pad(d.getUTCMinutes())}${seconds}`
-  );
-}
 
 /** "Loss rate φ = 8 mm/h; …" for the method's numeric parameters and choices, in display units. */
 export function methodParametersText(
@@ -138,7 +125,7 @@ export function barTableCsv({ scenario, method, result, volumeM3 }: BarTableInpu
     const durationH = storm.durationsH[k] as number;
     const startH = edges[k] as number;
     const row = [String(k + 1)];
-    if (startMs !== null) row.push(clockText(startMs + startH * 3_600_000));
+    if (startMs !== null) row.push(formatClockText(startMs + startH * 3_600_000, true));
     row.push(
       String(startH),
       String(durationH),

@@ -79,13 +79,14 @@ describe('storm tools', () => {
     expect(scenario().storm).toBe(FOUR_BARS.storm);
   });
 
-  it('a step that would make too many bars is refused with the core’s reason', async () => {
+  it('a step under a second (a unit slip) is refused with the core’s reason', async () => {
     const { user, scenario } = renderWorkbench();
     const tools = await openTools(user);
     const field = within(tools).getByRole('textbox', { name: 'New time step (min)' });
+    // 0.0001 min = 0.006 s.
     await fill(user, field, '0.0001');
     await user.click(within(tools).getByRole('button', { name: 'Resample' }));
-    expect(field).toHaveAccessibleDescription(/makes more than 1000000 bars/);
+    expect(field).toHaveAccessibleDescription(/The time step must be at least 1 second \(got 0\.006 s\)/);
     expect(scenario().storm).toBe(FOUR_BARS.storm);
   });
 

@@ -1,4 +1,4 @@
-import { barEdgesH, type Storm, type UnitSystem } from '../../../core';
+import { MAX_RECORD_H, MAX_RECORD_YEARS, barEdgesH, isBarDurationH, type Storm, type UnitSystem } from '../../../core';
 import { withBarStartH } from '../../../core/storm-tools';
 import { parseNumber } from '../../parse-number';
 import { displayUnit, fromDisplay, unitText } from '../../units';
@@ -15,6 +15,8 @@ export type CellEdit =
   | { readonly ok: true; readonly kind: 'start'; readonly startIso: string }
   | { readonly ok: true; readonly kind: 'none' }
   | { readonly ok: false; readonly message: string };
+
+const MAX_RECORD_MIN_TEXT = (MAX_RECORD_H * 60).toLocaleString('en-US');
 
 const NAMES: Record<EditableColumn, string> = { start: 'start', duration: 'duration', depth: 'depth' };
 
@@ -56,6 +58,14 @@ export function readCell(
     const parsed = parseNumber(text);
     if (!parsed.ok) return bad(k, column, numberMessage(parsed.message));
     if (!(parsed.value > 0)) return bad(k, column, `a bar must last more than 0 min (got ${text.trim()} min).`);
+    // The core's limits of time (core/time-limits.ts), said in the minutes that were typed.
+    if (!isBarDurationH(parsed.value / 60)) {
+      return bad(
+        k,
+        column,
+        `a bar lasts from 1 second (0.0167 min) to ${MAX_RECORD_YEARS} years (${MAX_RECORD_MIN_TEXT} min); got ${text.trim()} min.`,
+      );
+    }
     return { ok: true, kind: 'duration', durationH: parsed.value / 60 };
   }
   const edges = barEdgesH(storm);
