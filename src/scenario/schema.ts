@@ -33,6 +33,7 @@ import {
   type Problem,
   type ScenarioResult,
 } from './problems';
+import { MAX_NAME_LENGTH, MAX_NOTES_LENGTH, tooLongText } from './text-limits';
 import type { Scenario } from './types';
 
 /**
@@ -99,6 +100,12 @@ function numberField(rule: string, test: (x: number) => boolean) {
 }
 
 const text = () => v.string(must('text'));
+/** Text of at most `max` characters (src/scenario/text-limits.ts). */
+const cappedText = (max: number) =>
+  v.pipe(
+    v.string(must('text')),
+    v.maxLength(max, (issue) => tooLongText((issue.input as string).length, max)),
+  );
 const nonNegative = (x: number): boolean => Number.isFinite(x) && x >= 0;
 const positive = (x: number): boolean => Number.isFinite(x) && x > 0;
 
@@ -182,7 +189,7 @@ const StormEntries = {
 };
 
 const CatchmentEntries = {
-  name: text(),
+  name: cappedText(MAX_NAME_LENGTH),
   areaM2: numberField('a number ≥ 0 (catchment area, m²; 0 when not known)', nonNegative),
 };
 
@@ -415,7 +422,7 @@ const EventObservedEntries = {
 
 const EventEntries = {
   id: v.pipe(text(), v.nonEmpty(must('a non-empty id'))),
-  name: text(),
+  name: cappedText(MAX_NAME_LENGTH),
   storm: fields(StormEntries, 'an object with durationsH and depthsMm'),
   observed: v.nullable(fields(EventObservedEntries, 'an object with as and value, or null')),
   streamflow: v.nullable(
@@ -516,8 +523,8 @@ function checkEventSet(
 
 const DocumentEntries = {
   version: v.literal(CURRENT_SCENARIO_VERSION, must(`${CURRENT_SCENARIO_VERSION}`)),
-  name: text(),
-  notes: text(),
+  name: cappedText(MAX_NAME_LENGTH),
+  notes: cappedText(MAX_NOTES_LENGTH),
   storm: fields(StormEntries, 'an object with durationsH and depthsMm'),
   catchment: fields(CatchmentEntries, 'an object with name and areaM2'),
   units: v.picklist(['si', 'us'], must('"si" or "us"')),

@@ -16,6 +16,7 @@ import {
   type Storm,
   type UnitSystem,
 } from '../core';
+import { MAX_NAME_LENGTH, textLengthProblem } from '../scenario/text-limits';
 import type { Scenario } from '../scenario/types';
 import { checkRecordNearStorm } from './alignment';
 
@@ -38,7 +39,10 @@ export interface Bar {
 
 export function withName(s: Scenario, name: string): Scenario {
   if (typeof name !== 'string') throw new InputError('name', 'The scenario name must be text.');
-  return name === s.name ? s : { ...s, name };
+  if (name === s.name) return s;
+  const tooLong = textLengthProblem('The scenario name', name, MAX_NAME_LENGTH);
+  if (tooLong !== null) throw new InputError('name', tooLong);
+  return { ...s, name };
 }
 
 export function withUnits(s: Scenario, units: UnitSystem): Scenario {
