@@ -386,7 +386,11 @@ function checkStreamflow(
     return;
   }
   // The per-sample lists are checked above; only a clean record goes to the core.
-  if (!timesH.every((t) => typeof t === 'number') || !dischargeM3s.every((q) => typeof q === 'number')) return;
+  if (
+    !timesH.every((t) => typeof t === 'number' && isSpanH(t)) ||
+    !dischargeM3s.every((q) => typeof q === 'number' && nonNegative(q))
+  )
+    return;
   const record = { timesH: timesH as number[], dischargeM3s: dischargeM3s as number[] };
   try {
     validateHydrograph(record);
