@@ -29,6 +29,8 @@ export {
   persistStore,
   STORAGE_KEY,
   SET_ASIDE_PREFIX,
+  setAsideSaved,
+  type SetAsideResult,
   type Loaded,
   type Persistence,
   type StorageLike,

@@ -2,6 +2,8 @@ import { useCallback, useEffect, useState, type FormEvent, type KeyboardEvent } 
 import { methodSpec } from '../../core';
 import type { DeletedEntry, LibraryEntry, LibraryListing, LibraryResult, Problem } from '../../scenario';
 import { useActions, useWorkbenchStore } from '../../store';
+import { listSetAside, type SetAsideCopy } from '../../store/set-aside';
+import { SetAsideCopies } from './SetAsideCopies';
 import { useServices } from './services';
 
 export const LIBRARY_PANEL_ID = 'saved-scenarios';
@@ -64,16 +66,22 @@ function RenameForm({ entry, onDone }: { entry: LibraryEntry; onDone: (name: str
  * and delete, with Undo for a deletion.
  */
 export function LibraryPanel() {
-  const { library, link } = useServices();
+  const { library, link, storage, saveFile } = useServices();
   const store = useWorkbenchStore();
   const actions = useActions();
   const [listing, setListing] = useState<LibraryListing>(() => library?.list() ?? EMPTY);
+  const readAside = useCallback((): SetAsideCopy[] => (storage ? listSetAside(storage).copies : []), [storage]);
+  const [aside, setAside] = useState<SetAsideCopy[]>(readAside);
   const [status, setStatus] = useState<Status | null>(null);
   const [renaming, setRenaming] = useState<string | null>(null);
   /** The entry the scenario on screen was opened from or saved as, offered for "Update". */
   const [currentId, setCurrentId] = useState<string | null>(null);
 
-  const refresh = useCallback(() => setListing(library?.list() ?? EMPTY), [library]);
+  const refresh = useCallback(() => {
+    // Reading the list may itself set damaged data aside, so the copies are read after it.
+    setListing(library?.list() ?? EMPTY);
+    setAside(readAside());
+  }, [library, readAside]);
   useEffect(() => {
     // Another tab, or keeping a shared link, may change the list.
     window.addEventListener('storage', refresh);
@@ -272,6 +280,10 @@ export function LibraryPanel() {
           })}
         </ul>
       )}
+
+      {storage ? (
+        <SetAsideCopies copies={aside} storage={storage} library={library} saveFile={saveFile} onChanged={refresh} />
+      ) : null}
     </section>
   );
 }
