@@ -187,7 +187,8 @@ function parseStored(text: string): Parsed {
   else damage.push(problem(`The list of set-aside keys was damaged (got ${describeValue(setAside)}).`));
 
   // Ids are never reused, so the counter must pass every id seen.
-  const highest = Math.max(0, ...[...seen].map((id) => Number(id.slice(1))));
+  let highest = 0;
+  for (const id of seen) highest = Math.max(highest, Number(id.slice(1)));
   const nextId = json['nextId'];
   if (typeof nextId === 'number' && Number.isSafeInteger(nextId) && nextId > highest) state.nextId = nextId;
   else {

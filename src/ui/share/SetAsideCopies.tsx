@@ -77,7 +77,7 @@ export function SetAsideCopies({ copies, storage, library, saveFile, onChanged }
     for (const scenario of scenarios) {
       const result = library.save(scenario);
       if (result.ok) saved.push(`“${result.value.scenario.name}”`);
-      else failed.push(...result.problems.map((p) => p.message));
+      else for (const p of result.problems) failed.push(p.message);
     }
     onChanged();
     if (saved.length === 0) {
