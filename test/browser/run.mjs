@@ -2,6 +2,7 @@
 import { readdir } from 'node:fs/promises';
 import { join } from 'node:path';
 import { pathToFileURL } from 'node:url';
+import { watchCsp } from './csp.mjs';
 import { launchBrowser, serveDist } from './harness.mjs';
 
 const filter = process.argv[2] ?? '';
@@ -16,6 +17,7 @@ try {
     const mod = await import(pathToFileURL(join(dir, spec)).href);
     for (const t of mod.tests ?? []) {
       const context = await browser.newContext({ viewport: { width: 1400, height: 900 } });
+      const csp = await watchCsp(context);
       const newPage = async () => {
         const page = await context.newPage();
         page.on('pageerror', (e) => console.error(`  page error in "${t.name}": ${e.message}`));
@@ -23,7 +25,8 @@ try {
       };
       const started = performance.now();
       try {
-        await t.run({ browser, context, baseUrl: server.baseUrl, newPage, launchBrowser });
+        await t.run({ browser, context, baseUrl: server.baseUrl, newPage, launchBrowser, csp });
+        csp.check();
         passed++;
         console.log(`  ok   ${spec} › ${t.name} (${Math.round(performance.now() - started)} ms)`);
       } catch (error) {

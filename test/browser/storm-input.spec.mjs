@@ -3,7 +3,7 @@
 // with the mouse, and check every shown number against the project's own core
 // computing the same thing (loaded from source, never copied numbers). Also
 // axe-core with the dialog, tools and drawing open, and a narrow window.
-import { AXE, check, loadSourceModules } from './support.mjs';
+import { addAxe, check, loadSourceModules } from './support.mjs';
 
 /** Source modules to check the page against (see support.mjs). */
 const loadModules = () =>
@@ -62,7 +62,7 @@ async function checkResults(page, mods, scenario) {
 }
 
 async function axeViolations(page) {
-  if (!(await page.evaluate(() => 'axe' in window))) await page.addScriptTag({ path: AXE });
+  await addAxe(page);
   return page.evaluate(async () => {
     const result = await window.axe.run(document);
     return result.violations.map((v) => `${v.id}: ${v.help} (${v.nodes.map((n) => n.target.join(' ')).join(', ')})`);

@@ -2,7 +2,7 @@
 // line with the mouse and check every shown number against the core, reload and
 // keep the scenario, recover from damaged saved data, work from the keyboard,
 // and pass an axe-core check.
-import { AXE, check, loadSource } from './support.mjs';
+import { addAxe, check, loadSource } from './support.mjs';
 
 const text = async (page, label) =>
   ((await page.getByLabel(label, { exact: true }).first().textContent()) ?? '').trim();
@@ -141,7 +141,7 @@ export const tests = [
     async run({ baseUrl, newPage }) {
       const page = await newPage();
       await page.goto(baseUrl);
-      await page.addScriptTag({ path: AXE });
+      await addAxe(page);
       const run = () =>
         page.evaluate(async () => {
           const result = await window.axe.run(document);

@@ -73,7 +73,7 @@ describe('the CSV writer', () => {
   });
 });
 
-describe('the bar table CSV against injection', () => {
+describe('the bar table CSV against injection', { timeout: 30_000 }, () => {
   const HOSTILE: Scenario = {
     ...FOUR_BARS,
     name: 'x,=1+1',
