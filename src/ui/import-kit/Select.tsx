@@ -12,7 +12,7 @@ export function Select({
   value: string;
   onChange: (value: string) => void;
   children: ReactNode;
-  hint?: string;
+  hint?: string | undefined;
 }) {
   const id = useId();
   return (
