@@ -20,6 +20,9 @@ export function setAsideLabel(copy: SetAsideCopy): string {
     : `${WHAT[copy.kind]} set aside ${stampFormat.format(t)}`;
 }
 
+/** "saved scenario set aside Dec 4 …": the label inside a sentence (only its first letter lowered). */
+const lowerFirst = (text: string): string => text.charAt(0).toLowerCase() + text.slice(1);
+
 function sizeText(chars: number): string {
   return chars < 1024 ? `${chars} characters` : `${(chars / 1024).toFixed(1)} k characters`;
 }
@@ -83,7 +86,7 @@ export function SetAsideCopies({ copies, storage, library, saveFile, onChanged }
     if (saved.length === 0) {
       setStatus({
         kind: 'problem',
-        text: `Nothing in ${setAsideLabel(copy).toLowerCase()} can be opened by this version of Raincut; it is kept as it was. Download it to keep or repair it.`,
+        text: `Nothing in ${lowerFirst(setAsideLabel(copy))} can be opened by this version of Raincut; it is kept as it was. Download it to keep or repair it.`,
         details: failed,
       });
       return;
@@ -129,7 +132,7 @@ export function SetAsideCopies({ copies, storage, library, saveFile, onChanged }
       return;
     }
     onChanged();
-    setStatus({ kind: 'done', text: `Brought back ${setAsideLabel(copy).toLowerCase()}.` });
+    setStatus({ kind: 'done', text: `Brought back ${lowerFirst(setAsideLabel(copy))}.` });
   };
 
   if (copies.length === 0 && status === null) return null;
@@ -143,7 +146,7 @@ export function SetAsideCopies({ copies, storage, library, saveFile, onChanged }
         {status?.kind === 'done' ? <p>{status.text}</p> : null}
         {status?.kind === 'deleted' ? (
           <p>
-            Deleted {setAsideLabel(status.copy).toLowerCase()} —{' '}
+            Deleted {lowerFirst(setAsideLabel(status.copy))} —{' '}
             <button type="button" className="share-button--small" onClick={() => undoDelete(status.copy, status.kept)}>
               Undo
             </button>
