@@ -1,9 +1,9 @@
 import { InputError } from './errors';
 import {
+  LONGEST_SPAN_TEXT,
   MAX_RECORD_H,
-  MAX_RECORD_YEARS,
   clockYearProblem,
-  describeHours,
+  describeOver,
   isBarDurationH,
   stepProblem,
 } from './time-limits';
@@ -49,7 +49,7 @@ export function validateStorm(storm: Storm): void {
     if (endH > MAX_RECORD_H) {
       throw new InputError(
         'durationsH',
-        `Bar ${k + 1}: the storm would run ${describeHours(endH)} from its start; a record spans at most ${MAX_RECORD_YEARS} years.`,
+        `Bar ${k + 1}: the storm would run ${describeOver(endH)} from its start; a record spans at most ${LONGEST_SPAN_TEXT}.`,
         k,
       );
     }

@@ -71,8 +71,14 @@ export function describeHours(hours: number): string {
 const grouped = new Intl.NumberFormat('en-US', { maximumFractionDigits: 3 });
 const LONGEST = `${grouped.format(MAX_RECORD_H)} h`;
 
-/** A value past the longest span, as typed and in years: "16,666,666,667 h, 1.901e+6 years". */
-function describeOver(hours: number): string {
+/** The longest span in words: "500 years (4,383,000 h)". */
+export const LONGEST_SPAN_TEXT = `${MAX_RECORD_YEARS} years (${LONGEST})`;
+
+/**
+ * A value past the longest span, in hours and in years, so that one just
+ * past the limit does not read as "500 years": "4,383,001.5 h, 500 years".
+ */
+export function describeOver(hours: number): string {
   return `${grouped.format(hours)} h, ${describeHours(hours)}`;
 }
 

@@ -431,29 +431,16 @@ export function readTimes(sources: readonly TimeSource[], options: TimeReadOptio
       }
     }
     // The limits of time (core/time-limits.ts): steps of at least a second, a record of at most 500 years.
-    if (prev !== null && isBelowMinStep((ms - prev.ms) / MS_PER_HOUR)) {
-      problems.add(
-        problem(
-          line,
-          options.column,
-          'time',
-          cell,
-          `this time is only ${describeHours((ms - prev.ms) / MS_PER_HOUR)} after the time on line ${prev.line} ("${prev.cell}"); times are at least 1 second apart.`,
-        ),
-      );
-      continue;
-    }
+    const stepH = prev === null ? Infinity : (ms - prev.ms) / MS_PER_HOUR;
     const fromFirstH = (ms - first.ms) / MS_PER_HOUR;
-    if (!(Math.abs(fromFirstH) <= MAX_RECORD_H)) {
-      problems.add(
-        problem(
-          line,
-          options.column,
-          'time',
-          cell,
-          `this time is ${describeHours(fromFirstH)} after the first time; a record spans at most ${MAX_RECORD_YEARS} years.`,
-        ),
-      );
+    const past =
+      prev !== null && isBelowMinStep(stepH)
+        ? `this time is only ${describeHours(stepH)} after the time on line ${prev.line} ("${prev.cell}"); times are at least 1 second apart.`
+        : !(Math.abs(fromFirstH) <= MAX_RECORD_H)
+          ? `this time is ${describeHours(fromFirstH)} after the first time; a record spans at most ${MAX_RECORD_YEARS} years.`
+          : null;
+    if (past !== null) {
+      problems.add(problem(line, options.column, 'time', cell, past));
       continue;
     }
     hours[i] = fromFirstH;

@@ -1,11 +1,12 @@
 import {
   InputError,
   MAX_RECORD_H,
-  MAX_RECORD_YEARS,
+  LONGEST_SPAN_TEXT,
   checkStepH,
   clockYearProblem,
   defaultMethod,
   describeHours,
+  describeOver,
   totalDurationH,
   isLossKind,
   methodSpec,
@@ -106,8 +107,8 @@ function checkStormSpan(s: Scenario, k: number, durationH: number, replacing: bo
   if (totalH > MAX_RECORD_H) {
     throw new InputError(
       'durationsH',
-      `Bar ${k + 1}: with a duration of ${describeHours(durationH)} the storm would last ${describeHours(totalH)}; ` +
-        `a record spans at most ${MAX_RECORD_YEARS} years.`,
+      `Bar ${k + 1}: with a duration of ${describeHours(durationH)} the storm would last ${describeOver(totalH)}; ` +
+        `a record spans at most ${LONGEST_SPAN_TEXT}.`,
       k,
     );
   }

@@ -88,7 +88,7 @@ describe('a storm is held to the limits of time', () => {
     const e = expectInputError(
       () => validateStorm({ durationsH: [MAX_RECORD_H / 2, MAX_RECORD_H / 2, 1], depthsMm: [0, 0, 0] }),
       'durationsH',
-      /^Bar 3: the storm would run 500 years from its start; a record spans at most 500 years\.$/,
+      /^Bar 3: the storm would run 4,383,001 h, 500 years from its start; a record spans at most 500 years \(4,383,000 h\)\.$/,
     );
     expect(e.index).toBe(2);
   });
@@ -140,7 +140,7 @@ describe('a streamflow record is held to the limits of time', () => {
     expectInputError(
       () => validateHydrograph(flat([-MAX_RECORD_H / 2 - 1, MAX_RECORD_H / 2 + 1])),
       'timesH',
-      /^Sample 2: the record would run 500 years from its first sample/,
+      /^Sample 2: the record would run 4,383,002 h, 500 years from its first sample/,
     );
   });
 });

@@ -1,5 +1,13 @@
 import { InputError } from '../errors';
-import { MAX_RECORD_H, MAX_RECORD_YEARS, describeHours, isBelowMinStep, isSpanH } from '../time-limits';
+import {
+  LONGEST_SPAN_TEXT,
+  MAX_RECORD_H,
+  MAX_RECORD_YEARS,
+  describeHours,
+  describeOver,
+  isBelowMinStep,
+  isSpanH,
+} from '../time-limits';
 import type { Hydrograph } from './types';
 
 /**
@@ -62,7 +70,7 @@ export function validateHydrograph(hydrograph: Hydrograph): void {
       if (t - (timesH[0] as number) > MAX_RECORD_H) {
         throw new InputError(
           'timesH',
-          `Sample ${k + 1}: the record would run ${describeHours(t - (timesH[0] as number))} from its first sample; a record spans at most ${MAX_RECORD_YEARS} years.`,
+          `Sample ${k + 1}: the record would run ${describeOver(t - (timesH[0] as number))} from its first sample; a record spans at most ${LONGEST_SPAN_TEXT}.`,
           k,
         );
       }

@@ -3,6 +3,7 @@ import { methodSpec } from '../../core';
 import type { DeletedEntry, LibraryEntry, LibraryListing, LibraryResult, Problem } from '../../scenario';
 import { useActions, useWorkbenchStore } from '../../store';
 import { listSetAside, type SetAsideCopy } from '../../store/set-aside';
+import { ListProblems } from './ListProblems';
 import { SetAsideCopies } from './SetAsideCopies';
 import { useServices } from './services';
 
@@ -152,15 +153,7 @@ export function LibraryPanel() {
         </div>
       </div>
 
-      {listing.problems.length > 0 ? (
-        <div className="library__problems" role="alert">
-          <ul>
-            {listing.problems.map((p, i) => (
-              <li key={i}>{p.message}</li>
-            ))}
-          </ul>
-        </div>
-      ) : null}
+      {listing.problems.length > 0 ? <ListProblems details={listing.problems.map((p) => p.message)} /> : null}
 
       <div className="library__status" role="status">
         {status?.kind === 'done' ? <p>{status.text}</p> : null}
@@ -183,14 +176,7 @@ export function LibraryPanel() {
         ) : null}
       </div>
       {status?.kind === 'problem' ? (
-        <div className="library__problems" role="alert">
-          <p>{status.text}</p>
-          <ul>
-            {status.problems.map((p, i) => (
-              <li key={i}>{p.message}</li>
-            ))}
-          </ul>
-        </div>
+        <ListProblems text={status.text} details={status.problems.map((p) => p.message)} />
       ) : null}
 
       {listing.entries.length === 0 ? (

@@ -2,6 +2,7 @@ import { useState } from 'react';
 import type { ScenarioLibrary } from '../../scenario';
 import { recoverScenarios, type SetAsideCopy, type SetAsideKind } from '../../store/set-aside';
 import type { StorageLike } from '../../store';
+import { ListProblems } from './ListProblems';
 
 const WHAT: Readonly<Record<SetAsideKind, string>> = {
   scenario: 'Saved scenario',
@@ -32,6 +33,13 @@ function fileNameOf(copy: SetAsideCopy): string {
   const stamp = (copy.setAsideAt ?? copy.key).replace(/[^\w-]+/g, '-').replace(/-+$/, '');
   return `raincut-set-aside-${copy.kind}-${stamp}.json`;
 }
+
+type Verb = 'Restore' | 'Download' | 'Delete';
+const ACTIONS: readonly { readonly verb: Verb; readonly danger: boolean }[] = [
+  { verb: 'Restore', danger: false },
+  { verb: 'Download', danger: false },
+  { verb: 'Delete', danger: true },
+];
 
 export type SetAsideStatus =
   | { readonly kind: 'done'; readonly text: string }
@@ -135,6 +143,7 @@ export function SetAsideCopies({ copies, storage, library, saveFile, onChanged }
     setStatus({ kind: 'done', text: `Brought back ${lowerFirst(setAsideLabel(copy))}.` });
   };
 
+  const run: Record<Verb, (copy: SetAsideCopy) => void> = { Restore: restore, Download: download, Delete: remove };
   if (copies.length === 0 && status === null) return null;
   return (
     <section className="library__aside" aria-labelledby="set-aside-title">
@@ -153,18 +162,7 @@ export function SetAsideCopies({ copies, storage, library, saveFile, onChanged }
           </p>
         ) : null}
       </div>
-      {status?.kind === 'problem' ? (
-        <div className="library__problems" role="alert">
-          <p>{status.text}</p>
-          {status.details.length > 0 ? (
-            <ul>
-              {status.details.map((d, i) => (
-                <li key={i}>{d}</li>
-              ))}
-            </ul>
-          ) : null}
-        </div>
-      ) : null}
+      {status?.kind === 'problem' ? <ListProblems text={status.text} details={status.details} /> : null}
       {copies.length > 0 ? (
         <ul className="library__list" aria-label="Set-aside copies">
           {copies.map((copy) => {
@@ -178,30 +176,17 @@ export function SetAsideCopies({ copies, storage, library, saveFile, onChanged }
                   </span>
                 </div>
                 <div className="library__buttons" role="group" aria-label={`Actions for ${label}`}>
-                  <button
-                    type="button"
-                    className="share-button--small"
-                    aria-label={`Restore ${label}`}
-                    onClick={() => restore(copy)}
-                  >
-                    Restore
-                  </button>
-                  <button
-                    type="button"
-                    className="share-button--small"
-                    aria-label={`Download ${label}`}
-                    onClick={() => download(copy)}
-                  >
-                    Download
-                  </button>
-                  <button
-                    type="button"
-                    className="share-button--small share-button--danger"
-                    aria-label={`Delete ${label}`}
-                    onClick={() => remove(copy)}
-                  >
-                    Delete
-                  </button>
+                  {ACTIONS.map(({ verb, danger }) => (
+                    <button
+                      key={verb}
+                      type="button"
+                      className={danger ? 'share-button--small share-button--danger' : 'share-button--small'}
+                      aria-label={`${verb} ${label}`}
+                      onClick={() => run[verb](copy)}
+                    >
+                      {verb}
+                    </button>
+                  ))}
                 </div>
               </li>
             );
