@@ -4,7 +4,7 @@ import {
   MAX_RECORD_H,
   clockYearProblem,
   describeOver,
-  isBarDurationH,
+  SHORTEST_STEP_ACCEPTED_H,
   stepProblem,
 } from './time-limits';
 
@@ -38,21 +38,17 @@ export function validateStorm(storm: Storm): void {
       `The storm has ${n} bar durations but ${depthsMm.length} bar depths; they must match one to one.`,
     );
   }
-  let endH = 0;
+  // Limits of time (one second to 500 years, time-limits.ts), read once: no call per bar in the loop.
+  const shortest = SHORTEST_STEP_ACCEPTED_H;
+  const longest = MAX_RECORD_H;
+  let totalH = 0;
   for (let k = 0; k < n; k++) {
     const d = durationsH[k] as number;
-    // Limits of time (one second to 500 years): see time-limits.ts.
-    if (!isBarDurationH(d)) {
+    // `!(… && …)` is also true for NaN; typeof catches text that compares as a number.
+    if (!(d >= shortest && d <= longest) || typeof d !== 'number') {
       throw new InputError('durationsH', stepProblem(`Bar ${k + 1}: duration`, d) ?? `Bar ${k + 1}: bad duration.`, k);
     }
-    endH += d;
-    if (endH > MAX_RECORD_H) {
-      throw new InputError(
-        'durationsH',
-        `Bar ${k + 1}: the storm would run ${describeOver(endH)} from its start; a record spans at most ${LONGEST_SPAN_TEXT}.`,
-        k,
-      );
-    }
+    totalH += d;
     const p = depthsMm[k] as number;
     if (!(p >= 0) || p === Infinity || typeof p !== 'number') {
       throw new InputError(
@@ -61,6 +57,18 @@ export function validateStorm(storm: Storm): void {
         k,
       );
     }
+  }
+  // The whole storm within a record's span; only when it is not, a second pass finds the bar that passes it.
+  if (totalH > longest) {
+    let endH = 0;
+    let k = 0;
+    while (k < n - 1 && endH + (durationsH[k] as number) <= longest) endH += durationsH[k++] as number;
+    endH += durationsH[k] as number;
+    throw new InputError(
+      'durationsH',
+      `Bar ${k + 1}: the storm would run ${describeOver(endH)} from its start; a record spans at most ${LONGEST_SPAN_TEXT}.`,
+      k,
+    );
   }
   const start = storm.startIso;
   if (start !== undefined) {

@@ -82,9 +82,16 @@ export function describeOver(hours: number): string {
   return `${grouped.format(hours)} h, ${describeHours(hours)}`;
 }
 
+/**
+ * The shortest step accepted: one second less the rounding allowance. Loops
+ * over every bar compare with this (hoisted into a local) rather than call
+ * isBelowMinStep, so that no call is made per bar.
+ */
+export const SHORTEST_STEP_ACCEPTED_H = MIN_STEP_H - MIN_STEP_SLACK_H;
+
 /** True when `hours` is shorter than a bar or a step between samples may be (under one second, to rounding). */
 export function isBelowMinStep(hours: number): boolean {
-  return hours < MIN_STEP_H - MIN_STEP_SLACK_H;
+  return hours < SHORTEST_STEP_ACCEPTED_H;
 }
 
 /** True for a number of hours a bar may last (one second to 500 years). */

@@ -5,8 +5,7 @@ import {
   MAX_RECORD_YEARS,
   describeHours,
   describeOver,
-  isBelowMinStep,
-  isSpanH,
+  SHORTEST_STEP_ACCEPTED_H,
 } from '../time-limits';
 import type { Hydrograph } from './types';
 
@@ -38,13 +37,17 @@ export function validateHydrograph(hydrograph: Hydrograph): void {
   if (n < 2) {
     throw new InputError('timesH', `The streamflow record needs at least two samples to hold a volume (got ${n}).`);
   }
+  // Limits of time (a record spans at most 500 years, samples at least a second apart, time-limits.ts),
+  // read once: no call per sample in the loop.
+  const shortest = SHORTEST_STEP_ACCEPTED_H;
+  const longest = MAX_RECORD_H;
+  const first = timesH[0] as number;
   for (let k = 0; k < n; k++) {
     const t = timesH[k] as number;
     if (typeof t !== 'number' || !Number.isFinite(t)) {
       throw new InputError('timesH', `Sample ${k + 1}: time must be a finite number of hours (got ${String(t)}).`, k);
     }
-    // Limits of time (a record spans at most 500 years, samples at least a second apart): see time-limits.ts.
-    if (!isSpanH(t)) {
+    if (!(t <= longest && t >= -longest)) {
       throw new InputError(
         'timesH',
         `Sample ${k + 1}: time ${describeHours(t)} is further from the first sample than a record spans (at most ${MAX_RECORD_YEARS} years).`,
@@ -60,17 +63,17 @@ export function validateHydrograph(hydrograph: Hydrograph): void {
           k,
         );
       }
-      if (isBelowMinStep(t - before)) {
+      if (t - before < shortest) {
         throw new InputError(
           'timesH',
           `Sample ${k + 1}: it comes ${describeHours(t - before)} after sample ${k}; samples are at least 1 second apart.`,
           k,
         );
       }
-      if (t - (timesH[0] as number) > MAX_RECORD_H) {
+      if (t - first > longest) {
         throw new InputError(
           'timesH',
-          `Sample ${k + 1}: the record would run ${describeOver(t - (timesH[0] as number))} from its first sample; a record spans at most ${LONGEST_SPAN_TEXT}.`,
+          `Sample ${k + 1}: the record would run ${describeOver(t - first)} from its first sample; a record spans at most ${LONGEST_SPAN_TEXT}.`,
           k,
         );
       }
