@@ -6,7 +6,8 @@ import {
   clockYearProblem,
   describeHours,
   hoursBetweenClocks,
-  isBarDurationH,
+  MAX_RECORD_H,
+  SHORTEST_STEP_ACCEPTED_H,
   isBaseflowKind,
   isInputError,
   isSpanH,
@@ -107,7 +108,11 @@ const cappedText = (max: number) =>
     v.maxLength(max, (issue) => tooLongText((issue.input as string).length, max)),
   );
 const nonNegative = (x: number): boolean => Number.isFinite(x) && x >= 0;
-const positive = (x: number): boolean => Number.isFinite(x) && x > 0;
+// The limits of time (core/time-limits.ts) as local tests: these run once per bar or sample.
+const SHORTEST_H = SHORTEST_STEP_ACCEPTED_H;
+const LONGEST_H = MAX_RECORD_H;
+const barDuration = (x: number): boolean => x >= SHORTEST_H && x <= LONGEST_H;
+const withinSpan = (x: number): boolean => x >= -LONGEST_H && x <= LONGEST_H;
 
 /** Bad bars listed one by one per list; the rest are counted in one message. */
 export const LISTED_BARS = 10;
@@ -182,7 +187,7 @@ const StormEntries = {
   durationsH: barList(
     'durations in hours',
     `a number of hours from 1 second (0.000278) to ${MAX_RECORD_YEARS} years (bar duration)`,
-    isBarDurationH,
+    barDuration,
   ),
   depthsMm: barList('rain depths in mm', 'a number ≥ 0 (rain depth, mm)', nonNegative),
   startIso: startClock(),
@@ -323,7 +328,7 @@ const StreamflowEntries = {
   timesH: sampleList(
     'sample times in hours',
     `a number of hours after the first sample, within ${MAX_RECORD_YEARS} years of it`,
-    isSpanH,
+    withinSpan,
   ),
   dischargeM3s: sampleList('discharges in m³/s', 'a number ≥ 0 (discharge, m³/s)', nonNegative),
   startIso: startClock(),
@@ -387,7 +392,7 @@ function checkStreamflow(
   }
   // The per-sample lists are checked above; only a clean record goes to the core.
   if (
-    !timesH.every((t) => typeof t === 'number' && isSpanH(t)) ||
+    !timesH.every((t) => typeof t === 'number' && withinSpan(t)) ||
     !dischargeM3s.every((q) => typeof q === 'number' && nonNegative(q))
   )
     return;
