@@ -1,10 +1,12 @@
 import { StrictMode } from 'react';
 import { createRoot } from 'react-dom/client';
 import { DEMO_SCENARIO } from './scenario/demo';
-import { SET_ASIDE_PREFIX, STORAGE_KEY, type StorageLike } from './store';
+import { type StorageLike } from './store';
+import { SKIP_SAVED_KEY, createCrashRecovery } from './store/crash';
 import { startWorkbench } from './store/start';
 import { App } from './ui/App';
 import { ErrorBoundary } from './ui/layout/ErrorBoundary';
+import { downloadBlob } from './ui/export/download';
 import { browserServices } from './ui/share';
 import { startNumberFormat } from './ui/number-format';
 import './styles/app.css';
@@ -19,9 +21,27 @@ function browserStorage(): StorageLike | null {
   }
 }
 
+/** This tab's own storage (sessionStorage), or null. */
+function tabStorage(): Storage | null {
+  try {
+    return window.sessionStorage ?? null;
+  } catch {
+    return null;
+  }
+}
+
 const storage = browserStorage();
 // The reader's number format (a browser preference, never part of the scenario).
 startNumberFormat({ storage, language: navigator.language });
+const tab = tabStorage();
+/** Set on the error screen when the saved scenario stopped the screen and could not be set aside. */
+function takeSkipSaved(): boolean {
+  try {
+    return tab?.getItem(SKIP_SAVED_KEY) === '1';
+  } catch {
+    return false;
+  }
+}
 // The saved scenario, and a share link in the address shown over it unsaved until the user chooses (src/store/link-session.ts).
 const { store, link } = startWorkbench({
   storage,
@@ -30,6 +50,7 @@ const { store, link } = startWorkbench({
   nowIso: new Date().toISOString(),
   clearFragment: () =>
     window.history.replaceState(window.history.state, '', window.location.pathname + window.location.search),
+  skipSaved: takeSkipSaved(),
 });
 // Save a change made just before the page closes or reloads.
 window.addEventListener('pagehide', () => link.flush());
@@ -39,25 +60,16 @@ document.addEventListener('visibilitychange', () => {
 // A link pasted into the address of an open page changes only the fragment.
 window.addEventListener('hashchange', () => link.open(window.location.hash));
 const services = browserServices({ storage, link });
-
-/** After a crash: keep the saved scenario under a set-aside key, and reload on the demo. */
-function setAsideAndReload(): void {
-  try {
-    const saved = storage?.getItem(STORAGE_KEY);
-    if (storage && saved != null) {
-      storage.setItem(SET_ASIDE_PREFIX + new Date().toISOString(), saved);
-      storage.removeItem(STORAGE_KEY);
-    }
-  } finally {
-    window.location.reload();
-  }
-}
+// After a crash: what was saved, and a way out that loses nothing (src/store/crash.ts).
+const recovery = createCrashRecovery({ store, link, storage, now: () => new Date(), tabStorage: tab });
+const downloadSaved = (text: string): void =>
+  downloadBlob(new Blob([text], { type: 'application/json' }), 'raincut-saved-scenario.json');
 
 const root = document.getElementById('root');
 if (!root) throw new Error('index.html has no #root element');
 createRoot(root).render(
   <StrictMode>
-    <ErrorBoundary onSetAside={setAsideAndReload}>
+    <ErrorBoundary recovery={recovery} download={downloadSaved}>
       <App store={store} services={services} />
     </ErrorBoundary>
   </StrictMode>,

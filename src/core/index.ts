@@ -75,3 +75,6 @@ export * from './transform';
 export * from './record';
 // How sure a loss fit is: the fit at the ends of the observed runoff's uncertainty, and the curve it sits on (issue 13).
 export * from './uncertainty';
+// Limits of time: how long a record may span, how short a bar may be, which years a start clock may name.
+export * from './time-limits';
+export { wallClockMs, wallClockParts, hoursBetweenClocks, namesZone, type WallClockParts } from './wall-clock';

@@ -1,5 +1,6 @@
 import { InputError } from './errors';
 import { barEdgesH, totalDurationH, validateStorm, type Storm } from './storm';
+import { MAX_RECORD_H, MAX_RECORD_YEARS, checkStepH, describeHours, isBelowMinStep } from './time-limits';
 
 /**
  * Whole-storm edits behind the workbench's storm tools: resampling to another
@@ -22,19 +23,17 @@ function keepStart(storm: Storm): { startIso?: string } {
   return storm.startIso === undefined ? {} : { startIso: storm.startIso };
 }
 
+/** A step from one second to 500 years (core/time-limits.ts). */
 function checkStep(stepH: number): void {
-  if (typeof stepH !== 'number' || !Number.isFinite(stepH) || !(stepH > 0)) {
-    throw new InputError(
-      'stepH',
-      `The time step must be a finite number of hours greater than zero (got ${String(stepH)}).`,
-    );
-  }
+  checkStepH('stepH', 'The time step', stepH);
 }
 
 /**
  * The storm redistributed onto bars of `stepH` hours from its start, with the
  * total depth kept. The last bar is shorter when the storm's duration is not a
- * whole number of steps (the storm keeps its length; no dry time is added).
+ * whole number of steps (the storm keeps its length; no dry time is added); a
+ * remainder shorter than a second joins the last whole step instead, since
+ * no bar lasts less than a second.
  *
  * Derivation: a hyetograph bar stands for rain falling at a constant
  * intensity over the bar (intensity = depth / duration; that is what the bar
@@ -69,7 +68,9 @@ export function resampleStorm(storm: Storm, stepH: number): Storm {
   // (3 h in steps of 10/60 h is 18 bars of 10 min, not 17 and a sliver).
   const nearest = Math.round(steps);
   const divides = nearest >= 1 && Math.abs(steps - nearest) <= STEP_REL_TOL * steps;
-  const m = divides ? nearest : Math.floor(steps) + 1;
+  let m = divides ? nearest : Math.floor(steps) + 1;
+  // A remainder under a second joins the bar before it: no bar lasts less than a second (core/time-limits.ts).
+  if (!divides && m > 1 && isBelowMinStep(totalH - (m - 1) * stepH)) m--;
 
   const durationsH = new Float64Array(m).fill(stepH);
   if (!divides) durationsH[m - 1] = m === 1 ? totalH : totalH - (m - 1) * stepH;
@@ -138,6 +139,12 @@ export function emptyStorm(stepH: number, count: number, startIso?: string): Sto
       `The number of bars must be a whole number from 1 to ${MAX_TOOL_BARS} (got ${String(count)}).`,
     );
   }
+  if (stepH * count > MAX_RECORD_H) {
+    throw new InputError(
+      'count',
+      `${count} bars of ${describeHours(stepH)} would last ${describeHours(stepH * count)}; a storm spans at most ${MAX_RECORD_YEARS} years.`,
+    );
+  }
   const storm: Storm = {
     durationsH: new Float64Array(count).fill(stepH),
     depthsMm: new Float64Array(count),
@@ -173,6 +180,13 @@ export function withBarStartH(storm: Storm, k: number, startH: number): Storm {
     throw new InputError(
       'durationsH',
       `Bar ${k + 1} must start after bar ${k} starts (${String(lo)} h) and before it itself ends (${String(hi)} h); got ${String(startH)} h.`,
+      k,
+    );
+  }
+  if (isBelowMinStep(startH - lo) || isBelowMinStep(hi - startH)) {
+    throw new InputError(
+      'durationsH',
+      `Bar ${isBelowMinStep(startH - lo) ? k : k + 1} would last less than a second with bar ${k + 1} starting at ${String(startH)} h; a bar lasts at least 1 second.`,
       k,
     );
   }

@@ -1,4 +1,12 @@
 import { InputError } from './errors';
+import {
+  LONGEST_SPAN_TEXT,
+  MAX_RECORD_H,
+  clockYearProblem,
+  describeOver,
+  SHORTEST_STEP_ACCEPTED_H,
+  stepProblem,
+} from './time-limits';
 
 /**
  * A storm: an ordered list of bars, each with a duration (h, > 0) and a
@@ -30,16 +38,17 @@ export function validateStorm(storm: Storm): void {
       `The storm has ${n} bar durations but ${depthsMm.length} bar depths; they must match one to one.`,
     );
   }
+  // Limits of time (one second to 500 years, time-limits.ts), read once: no call per bar in the loop.
+  const shortest = SHORTEST_STEP_ACCEPTED_H;
+  const longest = MAX_RECORD_H;
+  let totalH = 0;
   for (let k = 0; k < n; k++) {
     const d = durationsH[k] as number;
-    // `!(d > 0)` also catches NaN; the second test catches +Infinity.
-    if (!(d > 0) || d === Infinity || typeof d !== 'number') {
-      throw new InputError(
-        'durationsH',
-        `Bar ${k + 1}: duration must be a finite number of hours greater than zero (got ${String(d)}).`,
-        k,
-      );
+    // `!(… && …)` is also true for NaN; typeof catches text that compares as a number.
+    if (!(d >= shortest && d <= longest) || typeof d !== 'number') {
+      throw new InputError('durationsH', stepProblem(`Bar ${k + 1}: duration`, d) ?? `Bar ${k + 1}: bad duration.`, k);
     }
+    totalH += d;
     const p = depthsMm[k] as number;
     if (!(p >= 0) || p === Infinity || typeof p !== 'number') {
       throw new InputError(
@@ -49,8 +58,25 @@ export function validateStorm(storm: Storm): void {
       );
     }
   }
-  if (storm.startIso !== undefined && Number.isNaN(Date.parse(storm.startIso))) {
-    throw new InputError('startIso', `The storm start "${storm.startIso}" is not an ISO 8601 date-time.`);
+  // The whole storm within a record's span; only when it is not, a second pass finds the bar that passes it.
+  if (totalH > longest) {
+    let endH = 0;
+    let k = 0;
+    while (k < n - 1 && endH + (durationsH[k] as number) <= longest) endH += durationsH[k++] as number;
+    endH += durationsH[k] as number;
+    throw new InputError(
+      'durationsH',
+      `Bar ${k + 1}: the storm would run ${describeOver(endH)} from its start; a record spans at most ${LONGEST_SPAN_TEXT}.`,
+      k,
+    );
+  }
+  const start = storm.startIso;
+  if (start !== undefined) {
+    if (typeof start !== 'string' || Number.isNaN(Date.parse(start))) {
+      throw new InputError('startIso', `The storm start "${String(start)}" is not an ISO 8601 date-time.`);
+    }
+    const year = clockYearProblem('The storm start', start);
+    if (year !== null) throw new InputError('startIso', year);
   }
 }
 

@@ -169,7 +169,8 @@ export function guessLayout(
   const separator = detectSeparator(text);
   const raw = splitRows(text, separator).rows;
   const sampleCells: string[] = [];
-  for (const row of raw.slice(0, SAMPLE_ROWS)) sampleCells.push(...row.cells);
+  // One cell at a time: `push(...cells)` overflows the call stack on a line of ~10⁵ cells.
+  for (const row of raw.slice(0, SAMPLE_ROWS)) for (const cell of row.cells) sampleCells.push(cell);
   const style = detectNumberStyle(sampleCells, separator === 'comma', preferred);
   const { skipLines, hasHeader } = guessHeader(raw);
   const table = readTable(text, { separator, skipLines, hasHeader });
@@ -200,11 +201,11 @@ export function guessLayout(
       dateColumn = c + 1;
       timeColumn = c + 2;
       timeKind = 'clock';
-      clockCells.push(...s.cells);
+      for (const cell of s.cells) clockCells.push(cell);
     } else if (mostly(s.clock, s)) {
       timeColumn = c + 1;
       timeKind = 'clock';
-      clockCells.push(...s.cells);
+      for (const cell of s.cells) clockCells.push(cell);
     }
   }
   const isIndex = (c: number): boolean => INDEX_NAME.test(name(c));

@@ -1,3 +1,4 @@
+import { FIRST_CLOCK_YEAR, LAST_CLOCK_YEAR, MAX_RECORD_H, MAX_RECORD_YEARS, isBarDurationH } from '../core';
 import { SEPARATORS, readTable, type Separator, type TextRow, type TextTable } from './table-text';
 import { GROUPINGS, notANumberReason, parseNumber, type DecimalMark, type Grouping } from './numbers';
 import type { NumberFormat } from './number-format';
@@ -159,6 +160,16 @@ export function checkSeriesSettings(s: SeriesSettings, problems: ProblemList): v
           d === null ? 'must be a date or none.' : d.reason,
         ),
       );
+    } else if (d.value.year < FIRST_CLOCK_YEAR || d.value.year > LAST_CLOCK_YEAR) {
+      problems.add(
+        problem(
+          0,
+          0,
+          'dateForTimesOfDay',
+          String(s.dateForTimesOfDay),
+          `a record starts in the years ${FIRST_CLOCK_YEAR} to ${LAST_CLOCK_YEAR} (got the year ${d.value.year}).`,
+        ),
+      );
     }
   }
   if (s.valuesAlong === 'line' && s.timeKind !== 'none') {
@@ -191,10 +202,12 @@ function valuesAlongLines(table: TextTable): TextTable {
 /** The step setting must be a positive, finite number of minutes wherever it is used. */
 export function checkStep(s: SeriesSettings, problems: ProblemList): boolean {
   const v = s.stepMinutesIfNoTime;
-  if (typeof v === 'number' && v > 0 && Number.isFinite(v)) return true;
-  problems.add(
-    problem(0, 0, 'stepMinutesIfNoTime', String(v), 'the time step must be a number of minutes greater than zero.'),
-  );
+  if (typeof v === 'number' && isBarDurationH(v / 60)) return true;
+  const reason =
+    typeof v === 'number' && v > 0 && Number.isFinite(v)
+      ? `the time step must be from 1 second (0.0167 min) to ${MAX_RECORD_YEARS} years (${(MAX_RECORD_H * 60).toLocaleString('en-US')} min).`
+      : 'the time step must be a number of minutes greater than zero.';
+  problems.add(problem(0, 0, 'stepMinutesIfNoTime', String(v), reason));
   return false;
 }
 

@@ -1,3 +1,12 @@
+import {
+  FIRST_CLOCK_YEAR,
+  LAST_CLOCK_YEAR,
+  MAX_RECORD_H,
+  MAX_RECORD_YEARS,
+  describeHours,
+  isBelowMinStep,
+  wallClockParts,
+} from '../core';
 import { formatDuration } from './describe';
 import { notANumberReason, parseNumber, type DecimalMark, type Grouping } from './numbers';
 import { problem, type ProblemList } from './problems';
@@ -361,8 +370,23 @@ export function readTimes(sources: readonly TimeSource[], options: TimeReadOptio
     const instant = readInstant(source, options, problems);
     if (instant === null) continue;
     const { line, cell } = source;
-    if (first === null) first = instant;
-    else if (instant.dated !== first.dated) {
+    if (first === null) {
+      // The record's start clock falls in the years a start may have (core/time-limits.ts).
+      const year = instant.dated ? wallClockParts(instant.ms + (instant.zoneMinutes ?? 0) * 60_000)?.year : undefined;
+      if (year !== undefined && (year < FIRST_CLOCK_YEAR || year > LAST_CLOCK_YEAR)) {
+        problems.add(
+          problem(
+            line,
+            options.dateColumn ?? options.column,
+            options.dateColumn === null ? 'time' : 'date',
+            options.dateColumn === null ? cell : (source.dateCell ?? ''),
+            `the first time is in the year ${year}; a record starts in the years ${FIRST_CLOCK_YEAR} to ${LAST_CLOCK_YEAR} (check the year).`,
+          ),
+        );
+        return { hours, origin: null, firstTimeOfDayMs: null };
+      }
+      first = instant;
+    } else if (instant.dated !== first.dated) {
       problems.add(
         problem(
           line,
@@ -408,7 +432,20 @@ export function readTimes(sources: readonly TimeSource[], options: TimeReadOptio
         continue;
       }
     }
-    hours[i] = (ms - first.ms) / MS_PER_HOUR;
+    // The limits of time (core/time-limits.ts): steps of at least a second, a record of at most 500 years.
+    const stepH = prev === null ? Infinity : (ms - prev.ms) / MS_PER_HOUR;
+    const fromFirstH = (ms - first.ms) / MS_PER_HOUR;
+    const past =
+      prev !== null && isBelowMinStep(stepH)
+        ? `this time is only ${describeHours(stepH)} after the time on line ${prev.line} ("${prev.cell}"); times are at least 1 second apart.`
+        : !(Math.abs(fromFirstH) <= MAX_RECORD_H)
+          ? `this time is ${describeHours(fromFirstH)} after the first time; a record spans at most ${MAX_RECORD_YEARS} years.`
+          : null;
+    if (past !== null) {
+      problems.add(problem(line, options.column, 'time', cell, past));
+      continue;
+    }
+    hours[i] = fromFirstH;
     prev = { ms, line, cell };
   }
   let origin: CalendarOrigin | null = null;

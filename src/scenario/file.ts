@@ -88,7 +88,7 @@ function read(raw: string): ScenarioResult {
     problems.push(problemAt(['caution'], `must be text (got ${describeValue(caution)}).`));
   }
   const result = parseScenario(doc);
-  if (!result.ok) problems.push(...result.problems);
+  if (!result.ok) for (const p of result.problems) problems.push(p);
   return problems.length === 0 && result.ok ? result : failure(problems);
 }
 

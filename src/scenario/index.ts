@@ -25,6 +25,7 @@ export {
 } from './link';
 export { scenarioToFileText, scenarioFromFileText, scenarioFileName, FILE_FORMAT_TAG, MAX_FILE_CHARS } from './file';
 export { CAUTION_TEXT } from './caution';
+export { MAX_NAME_LENGTH, MAX_NOTES_LENGTH, textLengthProblem } from './text-limits';
 export { DEMO_SCENARIO } from './demo';
 export {
   createScenarioLibrary,

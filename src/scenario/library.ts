@@ -1,6 +1,9 @@
 import { capProblems, describeValue, problem, type Problem } from './problems';
 import { parseScenario } from './schema';
+import { MAX_NAME_LENGTH } from './text-limits';
 import type { Scenario } from './types';
+
+export { MAX_NAME_LENGTH };
 
 /**
  * The part of the Web Storage interface the library uses: `localStorage` in
@@ -69,7 +72,6 @@ export const LIBRARY_FORMAT_TAG = 'raincut-library';
 export const LIBRARY_VERSION = 1;
 /** Deleted scenarios kept for undo; older deletions are dropped for good. */
 export const MAX_DELETED = 20;
-export const MAX_NAME_LENGTH = 200;
 
 interface State {
   nextId: number;
@@ -185,7 +187,8 @@ function parseStored(text: string): Parsed {
   else damage.push(problem(`The list of set-aside keys was damaged (got ${describeValue(setAside)}).`));
 
   // Ids are never reused, so the counter must pass every id seen.
-  const highest = Math.max(0, ...[...seen].map((id) => Number(id.slice(1))));
+  let highest = 0;
+  for (const id of seen) highest = Math.max(highest, Number(id.slice(1)));
   const nextId = json['nextId'];
   if (typeof nextId === 'number' && Number.isSafeInteger(nextId) && nextId > highest) state.nextId = nextId;
   else {
@@ -330,8 +333,10 @@ export function createScenarioLibrary(storage: StorageLike, options: LibraryOpti
   function copyName(state: State, name: string): string {
     const names = new Set(state.entries.map((e) => e.scenario.name));
     const base = name.replace(/ \(copy( \d+)?\)$/, '');
-    let candidate = `${base} (copy)`;
-    for (let n = 2; names.has(candidate); n++) candidate = `${base} (copy ${n})`;
+    // The copy's name keeps within the cap: the original's is shortened to make room for the suffix.
+    const named = (suffix: string): string => `${base.slice(0, MAX_NAME_LENGTH - suffix.length)}${suffix}`;
+    let candidate = named(' (copy)');
+    for (let n = 2; names.has(candidate); n++) candidate = named(` (copy ${n})`);
     return candidate;
   }
 

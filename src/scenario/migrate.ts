@@ -157,7 +157,7 @@ export function migrate(
         'Open the scenario in an up-to-date Raincut.',
     );
   }
-  const oldest = chain.length > 0 ? Math.min(...chain.map((step) => step.from)) : current;
+  const oldest = chain.reduce((low, step) => Math.min(low, step.from), current);
   let version = start;
   let out = doc;
   while (version < current) {

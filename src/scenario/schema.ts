@@ -1,7 +1,16 @@
 import * as v from 'valibot';
 import {
+  FIRST_CLOCK_YEAR,
+  LAST_CLOCK_YEAR,
+  MAX_RECORD_YEARS,
+  clockYearProblem,
+  describeHours,
+  hoursBetweenClocks,
+  MAX_RECORD_H,
+  SHORTEST_STEP_ACCEPTED_H,
   isBaseflowKind,
   isInputError,
+  isSpanH,
   isLossKind,
   validateBaseflowMethod,
   validateHydrograph,
@@ -25,6 +34,7 @@ import {
   type Problem,
   type ScenarioResult,
 } from './problems';
+import { MAX_NAME_LENGTH, MAX_NOTES_LENGTH, tooLongText } from './text-limits';
 import type { Scenario } from './types';
 
 /**
@@ -91,8 +101,18 @@ function numberField(rule: string, test: (x: number) => boolean) {
 }
 
 const text = () => v.string(must('text'));
+/** Text of at most `max` characters (src/scenario/text-limits.ts). */
+const cappedText = (max: number) =>
+  v.pipe(
+    v.string(must('text')),
+    v.maxLength(max, (issue) => tooLongText((issue.input as string).length, max)),
+  );
 const nonNegative = (x: number): boolean => Number.isFinite(x) && x >= 0;
-const positive = (x: number): boolean => Number.isFinite(x) && x > 0;
+// The limits of time (core/time-limits.ts) as local tests: these run once per bar or sample.
+const SHORTEST_H = SHORTEST_STEP_ACCEPTED_H;
+const LONGEST_H = MAX_RECORD_H;
+const barDuration = (x: number): boolean => x >= SHORTEST_H && x <= LONGEST_H;
+const withinSpan = (x: number): boolean => x >= -LONGEST_H && x <= LONGEST_H;
 
 /** Bad bars listed one by one per list; the rest are counted in one message. */
 export const LISTED_BARS = 10;
@@ -146,19 +166,35 @@ function fields<const E extends v.ObjectEntries>(entries: E, what: string) {
   return v.pipe(v.custom<Record<string, unknown>>(isRecord, message), v.object(entries, message));
 }
 
-const StormEntries = {
-  durationsH: barList('durations in hours', 'a number > 0 (bar duration, hours)', positive),
-  depthsMm: barList('rain depths in mm', 'a number ≥ 0 (rain depth, mm)', nonNegative),
-  startIso: v.exactOptional(
+/**
+ * An optional start clock: an ISO 8601 date-time in the years a start may
+ * have (core/time-limits.ts), or left out.
+ */
+function startClock() {
+  return v.exactOptional(
     v.pipe(
       v.string(must('text: an ISO 8601 date-time such as "2026-07-14T15:00", or left out')),
       v.check(isIsoDateTime, must('an ISO 8601 date-time such as "2026-07-14T15:00" or "2026-07-14T15:00:00Z"')),
+      v.check(
+        (iso) => clockYearProblem('', iso) === null,
+        must(`a date-time in the years ${FIRST_CLOCK_YEAR} to ${LAST_CLOCK_YEAR}`),
+      ),
     ),
+  );
+}
+
+const StormEntries = {
+  durationsH: barList(
+    'durations in hours',
+    `a number of hours from 1 second (0.000278) to ${MAX_RECORD_YEARS} years (bar duration)`,
+    barDuration,
   ),
+  depthsMm: barList('rain depths in mm', 'a number ≥ 0 (rain depth, mm)', nonNegative),
+  startIso: startClock(),
 };
 
 const CatchmentEntries = {
-  name: text(),
+  name: cappedText(MAX_NAME_LENGTH),
   areaM2: numberField('a number ≥ 0 (catchment area, m²; 0 when not known)', nonNegative),
 };
 
@@ -289,15 +325,17 @@ const BaseflowSchema = methodSchema(readBaseflowMethod);
 const BaseflowMemorySchema = methodMemorySchema(readBaseflowMethod, isBaseflowKind, 'baseflow');
 
 const StreamflowEntries = {
-  timesH: sampleList('sample times in hours', 'a finite number (hours after the first sample)', finite),
-  dischargeM3s: sampleList('discharges in m³/s', 'a number ≥ 0 (discharge, m³/s)', nonNegative),
-  startIso: v.exactOptional(
-    v.pipe(
-      v.string(must('text: an ISO 8601 date-time such as "2026-07-14T15:00", or left out')),
-      v.check(isIsoDateTime, must('an ISO 8601 date-time such as "2026-07-14T15:00" or "2026-07-14T15:00:00Z"')),
-    ),
+  timesH: sampleList(
+    'sample times in hours',
+    `a number of hours after the first sample, within ${MAX_RECORD_YEARS} years of it`,
+    withinSpan,
   ),
-  offsetH: numberField('a finite number of hours (from the storm start to the first sample)', finite),
+  dischargeM3s: sampleList('discharges in m³/s', 'a number ≥ 0 (discharge, m³/s)', nonNegative),
+  startIso: startClock(),
+  offsetH: numberField(
+    `a number of hours from the storm start to the first sample, within ${MAX_RECORD_YEARS} years either way`,
+    isSpanH,
+  ),
   baseflow: BaseflowSchema,
   baseflowMemory: BaseflowMemorySchema,
   useAsObserved: v.boolean(must('true or false')),
@@ -331,6 +369,19 @@ function checkStreamflow(
       'is true, but there is no observed runoff to follow the separation (observed is null); set observed or make this false.',
     );
   }
+  const stormStart = (doc['storm'] as { startIso?: unknown } | null | undefined)?.startIso;
+  const recordStart = (flow as { startIso?: unknown }).startIso;
+  if (typeof stormStart === 'string' && typeof recordStart === 'string') {
+    // The two clocks line the record up with the storm: that offset is held to a record's span too.
+    const between = hoursBetweenClocks(stormStart, recordStart);
+    if (between !== null && !isSpanH(between.hours)) {
+      add(
+        ['streamflow', 'startIso'],
+        `starts ${describeHours(Math.abs(between.hours))} ${between.hours < 0 ? 'before' : 'after'} the storm start; ` +
+          `a record lies within ${MAX_RECORD_YEARS} years of its storm.`,
+      );
+    }
+  }
   if (!Array.isArray(timesH) || !Array.isArray(dischargeM3s)) return;
   if (timesH.length !== dischargeM3s.length) {
     add(
@@ -340,7 +391,11 @@ function checkStreamflow(
     return;
   }
   // The per-sample lists are checked above; only a clean record goes to the core.
-  if (!timesH.every((t) => typeof t === 'number') || !dischargeM3s.every((q) => typeof q === 'number')) return;
+  if (
+    !timesH.every((t) => typeof t === 'number' && withinSpan(t)) ||
+    !dischargeM3s.every((q) => typeof q === 'number' && nonNegative(q))
+  )
+    return;
   const record = { timesH: timesH as number[], dischargeM3s: dischargeM3s as number[] };
   try {
     validateHydrograph(record);
@@ -376,7 +431,7 @@ const EventObservedEntries = {
 
 const EventEntries = {
   id: v.pipe(text(), v.nonEmpty(must('a non-empty id'))),
-  name: text(),
+  name: cappedText(MAX_NAME_LENGTH),
   storm: fields(StormEntries, 'an object with durationsH and depthsMm'),
   observed: v.nullable(fields(EventObservedEntries, 'an object with as and value, or null')),
   streamflow: v.nullable(
@@ -477,8 +532,8 @@ function checkEventSet(
 
 const DocumentEntries = {
   version: v.literal(CURRENT_SCENARIO_VERSION, must(`${CURRENT_SCENARIO_VERSION}`)),
-  name: text(),
-  notes: text(),
+  name: cappedText(MAX_NAME_LENGTH),
+  notes: cappedText(MAX_NOTES_LENGTH),
   storm: fields(StormEntries, 'an object with durationsH and depthsMm'),
   catchment: fields(CatchmentEntries, 'an object with name and areaM2'),
   units: v.picklist(['si', 'us'], must('"si" or "us"')),

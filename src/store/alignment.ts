@@ -1,3 +1,6 @@
+import { InputError, MAX_RECORD_YEARS, describeHours, hoursBetweenClocks, isSpanH, namesZone } from '../core';
+import type { Scenario } from '../scenario/types';
+
 /**
  * How the streamflow record lines up with the storm on one time axis: the
  * hours from the start of the storm to the record's first sample.
@@ -19,31 +22,6 @@ export interface Alignment {
   readonly note: string | null;
 }
 
-const WALL = /^(\d{4})-(\d{2})-(\d{2})T(\d{2}):(\d{2})(?::(\d{2})(\.\d+)?)?/;
-const ZONE = /(?:Z|[+-]\d{2}:\d{2})$/;
-
-/** Milliseconds of the clock reading as written (zone ignored), on a UTC axis. */
-function wallMs(iso: string): number | null {
-  const m = WALL.exec(iso);
-  if (!m) return null;
-  const n = (i: number): number => (m[i] === undefined ? 0 : Number(m[i]));
-  const ms = m[7] === undefined ? 0 : Math.round(Number(m[7]) * 1000);
-  const t = Date.UTC(n(1), n(2) - 1, n(3), n(4), n(5), n(6), ms);
-  return Number.isNaN(t) ? null : t;
-}
-
-/** Hours from `fromIso` to `toIso`, or null when either is not a readable date-time. */
-export function hoursBetweenClocks(
-  fromIso: string,
-  toIso: string,
-): { readonly hours: number; readonly asWritten: boolean } | null {
-  const zoned = ZONE.test(fromIso) && ZONE.test(toIso);
-  const a = zoned ? Date.parse(fromIso) : wallMs(fromIso);
-  const b = zoned ? Date.parse(toIso) : wallMs(toIso);
-  if (a === null || b === null || Number.isNaN(a) || Number.isNaN(b)) return null;
-  return { hours: (b - a) / 3.6e6, asWritten: !zoned };
-}
-
 export function alignRecord(
   stormStartIso: string | undefined,
   recordStartIso: string | undefined,
@@ -52,7 +30,7 @@ export function alignRecord(
   if (stormStartIso !== undefined && recordStartIso !== undefined) {
     const between = hoursBetweenClocks(stormStartIso, recordStartIso);
     if (between !== null) {
-      const oneZone = between.asWritten && (ZONE.test(stormStartIso) || ZONE.test(recordStartIso));
+      const oneZone = between.asWritten && (namesZone(stormStartIso) || namesZone(recordStartIso));
       return {
         offsetH: between.hours,
         source: 'clocks',
@@ -63,4 +41,22 @@ export function alignRecord(
     }
   }
   return { offsetH: storedOffsetH, source: 'offset', note: null };
+}
+
+/**
+ * Throws an InputError naming `startIso` when the scenario's storm and
+ * record clocks put the record further from the storm than a record spans
+ * (core/time-limits.ts); the schema refuses such a document, so no edit may
+ * make one.
+ */
+export function checkRecordNearStorm(s: Scenario): void {
+  const flow = s.streamflow;
+  if (!flow || s.storm.startIso === undefined || flow.startIso === undefined) return;
+  const between = hoursBetweenClocks(s.storm.startIso, flow.startIso);
+  if (between === null || isSpanH(between.hours)) return;
+  throw new InputError(
+    'startIso',
+    `The streamflow record starts ${describeHours(Math.abs(between.hours))} ${between.hours < 0 ? 'before' : 'after'} the storm start; ` +
+      `a record lies within ${MAX_RECORD_YEARS} years of its storm. Check the two start times.`,
+  );
 }

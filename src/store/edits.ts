@@ -1,6 +1,13 @@
 import {
   InputError,
+  MAX_RECORD_H,
+  LONGEST_SPAN_TEXT,
+  checkStepH,
+  clockYearProblem,
   defaultMethod,
+  describeHours,
+  describeOver,
+  totalDurationH,
   isLossKind,
   methodSpec,
   validateMethod,
@@ -10,7 +17,9 @@ import {
   type Storm,
   type UnitSystem,
 } from '../core';
+import { MAX_NAME_LENGTH, textLengthProblem } from '../scenario/text-limits';
 import type { Scenario } from '../scenario/types';
+import { checkRecordNearStorm } from './alignment';
 
 /**
  * Pure edits of the scenario document. Each returns a new Scenario sharing
@@ -31,7 +40,10 @@ export interface Bar {
 
 export function withName(s: Scenario, name: string): Scenario {
   if (typeof name !== 'string') throw new InputError('name', 'The scenario name must be text.');
-  return name === s.name ? s : { ...s, name };
+  if (name === s.name) return s;
+  const tooLong = textLengthProblem('The scenario name', name, MAX_NAME_LENGTH);
+  if (tooLong !== null) throw new InputError('name', tooLong);
+  return { ...s, name };
 }
 
 export function withUnits(s: Scenario, units: UnitSystem): Scenario {
@@ -60,7 +72,9 @@ export function toScenarioStorm(storm: Storm): ScenarioStorm {
 }
 
 export function withStorm(s: Scenario, storm: Storm): Scenario {
-  return { ...s, storm: toScenarioStorm(storm) };
+  const next = { ...s, storm: toScenarioStorm(storm) };
+  checkRecordNearStorm(next);
+  return next;
 }
 
 function checkIndex(s: Scenario, k: number, field: string, allowEnd = false): void {
@@ -82,11 +96,19 @@ function checkDepth(k: number, depthMm: number): void {
   }
 }
 
+/** One second to 500 years (core/time-limits.ts). */
 function checkDuration(k: number, durationH: number): void {
-  if (typeof durationH !== 'number' || !Number.isFinite(durationH) || !(durationH > 0)) {
+  checkStepH('durationsH', `Bar ${k + 1}: duration`, durationH, k);
+}
+
+/** The storm's length after bar k's duration becomes `durationH` (or a bar of it is inserted), held to a record's span. */
+function checkStormSpan(s: Scenario, k: number, durationH: number, replacing: boolean): void {
+  const totalH = totalDurationH(s.storm) - (replacing ? (s.storm.durationsH[k] as number) : 0) + durationH;
+  if (totalH > MAX_RECORD_H) {
     throw new InputError(
       'durationsH',
-      `Bar ${k + 1}: duration must be a finite number of hours greater than zero (got ${String(durationH)}).`,
+      `Bar ${k + 1}: with a duration of ${describeHours(durationH)} the storm would last ${describeOver(totalH)}; ` +
+        `a record spans at most ${LONGEST_SPAN_TEXT}.`,
       k,
     );
   }
@@ -105,6 +127,7 @@ export function withBarDuration(s: Scenario, k: number, durationH: number): Scen
   checkIndex(s, k, 'durationsH');
   checkDuration(k, durationH);
   if (s.storm.durationsH[k] === durationH) return s;
+  checkStormSpan(s, k, durationH, true);
   const durationsH = s.storm.durationsH.slice();
   durationsH[k] = durationH;
   return { ...s, storm: { ...s.storm, durationsH } };
@@ -121,6 +144,7 @@ export function withBarInserted(s: Scenario, k: number, bar?: Bar): Scenario {
   const depthMm = bar?.depthMm ?? 0;
   checkDuration(k, durationH);
   checkDepth(k, depthMm);
+  checkStormSpan(s, k, durationH, false);
   const durationsH = d.slice();
   const depthsMm = p.slice();
   durationsH.splice(k, 0, durationH);
@@ -145,7 +169,11 @@ export function withStartIso(s: Scenario, startIso: string | undefined): Scenari
   if (typeof startIso !== 'string' || Number.isNaN(Date.parse(startIso))) {
     throw new InputError('startIso', `The storm start "${String(startIso)}" is not an ISO 8601 date-time.`);
   }
-  return { ...s, storm: { ...rest, startIso } };
+  const year = clockYearProblem('The storm start', startIso);
+  if (year !== null) throw new InputError('startIso', year);
+  const next = { ...s, storm: { ...rest, startIso } };
+  checkRecordNearStorm(next);
+  return next;
 }
 
 /**

@@ -1,4 +1,5 @@
 import { InputError, methodSpec } from '../core';
+import { MAX_NAME_LENGTH, textLengthProblem } from '../scenario/text-limits';
 import type { DesignPickDoc, Scenario, SetEvent } from '../scenario/types';
 
 /**
@@ -74,6 +75,8 @@ export function withEventRenamed(s: Scenario, id: string, name: string): Scenari
   const k = indexOf(s, id);
   const event = s.eventSet.events[k] as SetEvent;
   if (event.name === name) return s;
+  const tooLong = textLengthProblem(`The name of event ${k + 1}`, name, MAX_NAME_LENGTH);
+  if (tooLong !== null) throw new InputError('name', tooLong);
   const events = s.eventSet.events.slice();
   events[k] = { ...event, name };
   return { ...s, eventSet: { ...s.eventSet, events } };

@@ -20,7 +20,8 @@ export {
   withoutStreamflow,
   type RecordInput,
 } from './streamflow-edits';
-export { alignRecord, hoursBetweenClocks, type Alignment, type AlignmentSource } from './alignment';
+export { hoursBetweenClocks } from '../core';
+export { alignRecord, type Alignment, type AlignmentSource } from './alignment';
 export type { Bar, Observed } from './edits';
 export { readScenario, readScenarioJson, type ReadResult } from './read-scenario';
 export {
@@ -28,6 +29,8 @@ export {
   persistStore,
   STORAGE_KEY,
   SET_ASIDE_PREFIX,
+  setAsideSaved,
+  type SetAsideResult,
   type Loaded,
   type Persistence,
   type StorageLike,

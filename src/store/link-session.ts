@@ -49,6 +49,12 @@ export interface LinkSession extends Pick<StoreApi<LinkState>, 'getState' | 'sub
   dismiss(): void;
   /** Writes a pending change now (page hide). */
   flush(): void;
+  /**
+   * After the screen broke: stops saving without writing the pending change
+   * (the one that broke it), and takes a shared link out of the address so
+   * that a reload opens the user's own scenario instead of the link again.
+   */
+  halt(): void;
 }
 
 export interface LinkSessionOptions {
@@ -118,6 +124,8 @@ export function createLinkSession(options: LinkSessionOptions): LinkSession {
         );
         return;
       }
+      // A link that cannot be read is taken out of the address: reloading must not refuse it again.
+      clearFragment();
       state.setState(
         {
           kind: 'refused',
@@ -245,5 +253,10 @@ export function createLinkSession(options: LinkSessionOptions): LinkSession {
       if (state.getState().kind !== 'shared') state.setState({ kind: 'none' }, true);
     },
     flush: () => persistence?.flush(),
+    halt: () => {
+      persistence?.stop();
+      persistence = null;
+      if (state.getState().kind === 'shared') clearFragment();
+    },
   };
 }

@@ -10,6 +10,7 @@ export function memoLast<D extends readonly unknown[], R>(fn: (...deps: D) => R)
     if (lastDeps !== null && lastDeps.length === deps.length && lastDeps.every((d, i) => d === deps[i])) {
       return lastResult;
     }
+    // spread-ok: `deps` is the memoised function's own argument list, a tuple of fixed length.
     lastResult = fn(...deps);
     lastDeps = deps;
     return lastResult;

@@ -7,11 +7,49 @@ export const STORAGE_KEY = 'raincut.scenario';
 /** Damaged saved data is moved to this key plus a time stamp, never deleted. */
 export const SET_ASIDE_PREFIX = 'raincut.scenario.damaged.';
 
-/** The part of the Web Storage interface used here (localStorage, or a test double). */
+/**
+ * The part of the Web Storage interface used here (localStorage, or a test
+ * double). `length` and `key` let the saved list find set-aside copies
+ * (src/store/set-aside.ts); without them there is simply nothing to list.
+ */
 export interface StorageLike {
   getItem(key: string): string | null;
   setItem(key: string, value: string): void;
   removeItem(key: string): void;
+  readonly length?: number;
+  key?(index: number): string | null;
+}
+
+/** The outcome of setting the saved scenario aside; never an exception. */
+export type SetAsideResult =
+  | { readonly ok: true; readonly key: string }
+  | { readonly ok: true; readonly key: null }
+  | { readonly ok: false; readonly reason: string };
+
+/**
+ * Moves the saved scenario to a set-aside key of its own (SET_ASIDE_PREFIX
+ * and a time stamp; "-2", "-3" … when that is taken), so that it is kept but
+ * no longer opened. The copy is written before the original is removed; if
+ * the copy cannot be written (storage full, switched off), the original is
+ * left exactly where it was and the reason is returned. `key: null` when
+ * nothing was saved. Never throws.
+ */
+export function setAsideSaved(storage: StorageLike, nowIso: string): SetAsideResult {
+  try {
+    const saved = storage.getItem(STORAGE_KEY);
+    if (saved === null) return { ok: true, key: null };
+    let key = SET_ASIDE_PREFIX + nowIso;
+    for (let n = 2; storage.getItem(key) !== null; n++) key = `${SET_ASIDE_PREFIX}${nowIso}-${n}`;
+    storage.setItem(key, saved);
+    try {
+      storage.removeItem(STORAGE_KEY);
+    } catch {
+      // The copy is made; an original that stays is set aside again next time, never lost.
+    }
+    return { ok: true, key };
+  } catch (error) {
+    return { ok: false, reason: describe(error) };
+  }
 }
 
 export interface Loaded {
@@ -21,14 +59,28 @@ export interface Loaded {
   readonly canSave: boolean;
 }
 
-const describe = (error: unknown): string => (error instanceof Error ? error.message : String(error));
+/** An error in words: its message, after its name when that says more than "Error" (QuotaExceededError). */
+function describe(error: unknown): string {
+  if (error !== null && typeof error === 'object' && typeof (error as Error).message === 'string') {
+    const { name, message } = error as Error;
+    return typeof name === 'string' && name !== '' && name !== 'Error' ? `${name}: ${message}` : message;
+  }
+  return String(error);
+}
 
 /**
  * Restores the saved scenario, or `fallback` when there is none. A saved copy
  * that cannot be read is moved to a set-aside key (so nothing the user had is
- * lost) and reported; the screen opens on `fallback`.
+ * lost; the saved list shows it, see set-aside.ts) and reported; the screen
+ * opens on `fallback`. `skipSaved` leaves the saved copy unopened and
+ * unwritten (chosen on the error screen when it could not be set aside).
  */
-export function loadScenario(storage: StorageLike | null, fallback: Scenario, nowIso: string): Loaded {
+export function loadScenario(
+  storage: StorageLike | null,
+  fallback: Scenario,
+  nowIso: string,
+  options: { readonly skipSaved?: boolean } = {},
+): Loaded {
   if (!storage) {
     return {
       scenario: fallback,
@@ -53,20 +105,30 @@ export function loadScenario(storage: StorageLike | null, fallback: Scenario, no
     };
   }
   if (saved === null) return { scenario: fallback, notice: null, canSave: true };
-  const read = readScenarioJson(saved);
-  if (read.ok) return { scenario: read.scenario, notice: null, canSave: true };
-
-  const key = SET_ASIDE_PREFIX + nowIso;
-  try {
-    storage.setItem(key, saved);
-    storage.removeItem(STORAGE_KEY);
-  } catch (error) {
+  if (options.skipSaved) {
+    // After it stopped the screen and could not be set aside: left unopened and unwritten (see crash.ts).
     return {
       scenario: fallback,
       notice: {
         kind: 'unavailable',
         message:
-          `The saved scenario is damaged (${read.message}) and could not be set aside (${describe(error)}). ` +
+          'The saved scenario was left unopened, as chosen after it stopped the workbench, and could not be set aside. ' +
+          'It is still stored in this browser, unchanged; nothing will be saved over it in this tab.',
+      },
+      canSave: false,
+    };
+  }
+  const read = readScenarioJson(saved);
+  if (read.ok) return { scenario: read.scenario, notice: null, canSave: true };
+
+  const aside = setAsideSaved(storage, nowIso);
+  if (!aside.ok || aside.key === null) {
+    return {
+      scenario: fallback,
+      notice: {
+        kind: 'unavailable',
+        message:
+          `The saved scenario is damaged (${read.message}) and could not be set aside (${aside.ok ? 'it vanished while being read' : aside.reason}). ` +
           `It is left untouched under "${STORAGE_KEY}", and nothing will be saved over it in this session.`,
       },
       canSave: false,
@@ -76,8 +138,8 @@ export function loadScenario(storage: StorageLike | null, fallback: Scenario, no
     scenario: fallback,
     notice: {
       kind: 'set-aside',
-      key,
-      message: `The saved scenario could not be opened: ${read.message} It was kept in browser storage under "${key}", and the demo scenario is shown instead.`,
+      key: aside.key,
+      message: `The saved scenario could not be opened: ${read.message} It is kept as it was (browser storage key "${aside.key}") and listed under Saved scenarios, “Set-aside copies”, to download or restore; the demo scenario is shown instead.`,
     },
     canSave: true,
   };

@@ -14,6 +14,8 @@ export interface StartOptions {
   /** Takes the fragment out of the address once the user has chosen (history.replaceState). */
   readonly clearFragment: () => void;
   readonly persistDelayMs?: number;
+  /** Leave the saved scenario unopened and unwritten (chosen on the error screen; see crash.ts). */
+  readonly skipSaved?: boolean;
 }
 
 export interface Started {
@@ -28,7 +30,9 @@ export interface Started {
  * only when no shared scenario is waiting for the user's choice.
  */
 export function startWorkbench(options: StartOptions): Started {
-  const loaded = loadScenario(options.storage, options.fallback, options.nowIso);
+  const loaded = loadScenario(options.storage, options.fallback, options.nowIso, {
+    skipSaved: options.skipSaved === true,
+  });
   const store = createWorkbenchStore(loaded.scenario, { notice: loaded.notice });
   const link = createLinkSession({
     store,

@@ -1,6 +1,7 @@
 import {
   InputError,
   baseflowMethodSpec,
+  checkSpanH,
   defaultBaseflowMethod,
   isBaseflowKind,
   isInputError,
@@ -13,7 +14,7 @@ import {
   type BaseflowMethodSpec,
 } from '../core';
 import type { Scenario, Streamflow } from '../scenario/types';
-import { alignRecord } from './alignment';
+import { alignRecord, checkRecordNearStorm } from './alignment';
 
 /**
  * Pure edits of the scenario's streamflow record, in the manner of
@@ -104,7 +105,10 @@ export function withStreamflowRecord(s: Scenario, input: RecordInput): Scenario 
     baseflowMemory: memory,
     useAsObserved: old?.useAsObserved ?? false,
   };
-  return { ...s, streamflow: next };
+  const result = { ...s, streamflow: next };
+  checkRecordNearStorm(result);
+  checkSpanH('offsetH', 'The offset from the storm start to the first sample', next.offsetH);
+  return result;
 }
 
 function requireRecord(s: Scenario, field: string): Streamflow {
@@ -130,9 +134,8 @@ export function withoutStreamflow(s: Scenario, keepDepthMm?: number): Scenario {
 /** Sets the hours from the storm start to the first sample (used when the two are not both on a clock). */
 export function withRecordOffsetH(s: Scenario, offsetH: number): Scenario {
   const flow = requireRecord(s, 'offsetH');
-  if (typeof offsetH !== 'number' || !Number.isFinite(offsetH)) {
-    throw new InputError('offsetH', `The offset must be a finite number of hours (got ${String(offsetH)}).`);
-  }
+  // Within 500 years either way (core/time-limits.ts).
+  checkSpanH('offsetH', 'The offset from the storm start to the first sample', offsetH);
   const value = offsetH === 0 ? 0 : offsetH;
   return value === flow.offsetH ? s : { ...s, streamflow: { ...flow, offsetH: value } };
 }

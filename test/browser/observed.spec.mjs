@@ -6,7 +6,7 @@
 // and match the demo storm to it; then open the scenario from a share link in a fresh
 // browser context and find the same record, end point and numbers; and pass
 // an axe-core check with the record, the paste dialog and its problems showing.
-import { AXE, check, checkShown, loadSourceModules } from './support.mjs';
+import { addAxe, check, checkShown, loadSourceModules } from './support.mjs';
 
 /** Source modules to check the page against (see support.mjs). */
 const loadModules = () =>
@@ -272,7 +272,7 @@ export const tests = [
     async run({ baseUrl, newPage }) {
       const page = await newPage();
       await page.goto(baseUrl);
-      await page.addScriptTag({ path: AXE });
+      await addAxe(page);
       // This spec answers for the observed event's own parts (the whole page is workbench.spec's check).
       const run = () =>
         page.evaluate(async () => {

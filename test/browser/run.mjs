@@ -5,6 +5,7 @@
 import { readdir } from 'node:fs/promises';
 import { join } from 'node:path';
 import { pathToFileURL } from 'node:url';
+import { watchCsp } from './csp.mjs';
 import { launchBrowser, serveDist, unexpectedErrors, watchErrors } from './harness.mjs';
 import { tallyBrowser } from './tally.mjs';
 
@@ -31,6 +32,7 @@ try {
       const watch = watchErrors();
       const browser = watch.watchBrowser(launched.browser);
       const context = await browser.newContext({ viewport: { width: 1400, height: 900 } });
+      const csp = await watchCsp(context);
       const newPage = () => context.newPage();
       const launch = async () => {
         const more = await launchBrowser();
@@ -41,7 +43,8 @@ try {
       try {
         let thrown = null;
         try {
-          await t.run({ browser, context, baseUrl: server.baseUrl, newPage, launchBrowser: launch });
+          await t.run({ browser, context, baseUrl: server.baseUrl, newPage, launchBrowser: launch, csp });
+          csp.check();
         } catch (error) {
           thrown = error;
         }

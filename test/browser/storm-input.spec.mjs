@@ -4,7 +4,7 @@
 // computing the same thing (loaded from source); the pasted storm's results
 // are also checked against values worked by hand. Also axe-core with the
 // dialog, tools and drawing open, and a narrow window.
-import { AXE, check, checkShown, loadSourceModules } from './support.mjs';
+import { addAxe, check, checkShown, loadSourceModules } from './support.mjs';
 
 /** Source modules to check the page against (see support.mjs). */
 const loadModules = () =>
@@ -63,7 +63,7 @@ async function checkResults(page, mods, scenario) {
 }
 
 async function axeViolations(page) {
-  if (!(await page.evaluate(() => 'axe' in window))) await page.addScriptTag({ path: AXE });
+  await addAxe(page);
   return page.evaluate(async () => {
     const result = await window.axe.run(document);
     return result.violations.map((v) => `${v.id}: ${v.help} (${v.nodes.map((n) => n.target.join(' ')).join(', ')})`);

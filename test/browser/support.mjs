@@ -4,13 +4,24 @@
 // scenario layer, the screen's number format, …) into Node through Vite, so a
 // spec checks what the page shows against the core computing the same thing —
 // never against copied numbers.
+import { readFileSync } from 'node:fs';
 import { resolve } from 'node:path';
 import { createServer } from 'vite';
 
 const ROOT = resolve(import.meta.dirname, '../..');
 
-/** axe-core's browser build, for page.addScriptTag({ path: AXE }). */
+/** axe-core's browser build. */
 export const AXE = resolve(ROOT, 'node_modules/axe-core/axe.min.js');
+
+/**
+ * Loads axe-core into the page. Evaluated through the browser's debugging
+ * protocol rather than added as a <script> tag, which the app's
+ * Content-Security-Policy (no inline script) rightly refuses.
+ */
+export async function addAxe(page) {
+  if (await page.evaluate(() => 'axe' in window)) return;
+  await page.evaluate(readFileSync(AXE, 'utf8'));
+}
 
 /** Throws `message` unless `condition` holds (specs fail by throwing). */
 export function check(condition, message) {

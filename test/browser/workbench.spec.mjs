@@ -3,7 +3,7 @@
 // results against values worked by hand for the demo storm (and the drag's
 // against the core too); reload and keep the scenario, recover from damaged
 // saved data, and pass an axe-core check.
-import { AXE, check, checkShown, loadSource } from './support.mjs';
+import { addAxe, check, checkShown, loadSource } from './support.mjs';
 
 const text = async (page, label) =>
   ((await page.getByLabel(label, { exact: true }).first().textContent()) ?? '').trim();
@@ -193,7 +193,7 @@ export const tests = [
     async run({ baseUrl, newPage }) {
       const page = await newPage();
       await page.goto(baseUrl);
-      await page.addScriptTag({ path: AXE });
+      await addAxe(page);
       const run = () =>
         page.evaluate(async () => {
           const result = await window.axe.run(document);

@@ -107,7 +107,8 @@ describe('resampling a storm to another time step', () => {
   });
 
   it('refuses a step that would make too many bars', () => {
-    const error = thrown(() => resampleStorm({ durationsH: [1000], depthsMm: [1] }, 1e-4));
+    // 1000 h in steps of one second: 3,600,000 bars.
+    const error = thrown(() => resampleStorm({ durationsH: [1000], depthsMm: [1] }, 1 / 3600));
     expect(error.field).toBe('stepH');
     expect(error.message).toContain(String(MAX_TOOL_BARS));
   });

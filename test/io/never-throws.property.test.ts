@@ -1,6 +1,6 @@
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
-import { validateStorm } from '../../src/core';
+import { validateHydrograph, validateStorm } from '../../src/core';
 import {
   applyFlowImport,
   applyRainImport,
@@ -62,6 +62,15 @@ const TOKENS = [
   '#',
   'é',
   '💧',
+  // Extreme times (core/time-limits.ts): a span of 10¹² min, 3·10⁹ h, start clocks at and past the years allowed.
+  '1e12',
+  '3000000000',
+  '0.001',
+  '0999-12-31T23:59',
+  '1000-01-01T00:00',
+  '2999-12-31 23:59:59',
+  '3000-01-01T00:00',
+  '10:00:00.5',
 ];
 
 const tokenText = fc.array(fc.constantFrom(...TOKENS), { maxLength: 80 }).map((parts) => parts.join(''));
@@ -124,6 +133,8 @@ function checkFlow(text: string): void {
     expect(timesH[0]).toBe(0);
     for (let k = 1; k < timesH.length; k++) expect(timesH[k]!).toBeGreaterThan(timesH[k - 1]!);
     for (const q of dischargeM3s) expect(q >= 0 && Number.isFinite(q)).toBe(true);
+    // Every record an importer gives is one the core (and so the schema) takes, limits of time included.
+    expect(() => validateHydrograph(result.record)).not.toThrow();
   } else {
     expect(result.problems.length).toBeGreaterThan(0);
   }

@@ -2,8 +2,12 @@ import fc from 'fast-check';
 import {
   BASEFLOW_KINDS,
   BASEFLOW_METHODS,
+  FIRST_CLOCK_YEAR,
+  LAST_CLOCK_YEAR,
+  MAX_RECORD_H,
   METHODS,
   METHOD_KINDS,
+  MIN_STEP_H,
   validateBaseflowMethod,
   validateMethod,
   type BaseflowKind,
@@ -43,39 +47,64 @@ const depthMm = fc.oneof(
   { weight: 1, arbitrary: anyNonNegative },
 );
 
-const positiveDuration = fc.double({
-  min: Number.MIN_VALUE,
-  max: Number.MAX_VALUE,
-  noNaN: true,
-  noDefaultInfinity: true,
-});
+/**
+ * Any bar duration the schema takes, from one second to the longest bar a
+ * storm of MAX_BARS may hold, its ends included (extreme but valid:
+ * core/time-limits.ts).
+ */
+const anyDuration = fc.oneof(
+  fc.constantFrom(MIN_STEP_H, MAX_RECORD_H / (MAX_BARS + 1)),
+  fc.double({ min: MIN_STEP_H, max: MAX_RECORD_H / (MAX_BARS + 1), noNaN: true }),
+);
 
-/** Steps as gauges log them (1, 5, 6, 10, 15, 30 min, 1 h) or any positive double. */
+/** Steps as gauges log them (1, 5, 6, 10, 15, 30 min, 1 h) or any duration the schema takes. */
 const stepH = fc.oneof(
   fc.constantFrom(1 / 60, 5 / 60, 6 / 60, 10 / 60, 0.25, 0.5, 1),
   fc.double({ min: 1 / 3600, max: 24, noNaN: true }),
-  positiveDuration,
+  anyDuration,
 );
 
-export const stormArb = fc
-  .record({
-    uniform: fc.boolean(),
-    step: stepH,
-    bars: fc.array(fc.record({ durationH: stepH, depthMm }), { maxLength: MAX_BARS, size: 'max' }),
-  })
-  .map(({ uniform, step, bars }) => ({
-    durationsH: bars.map((b) => (uniform ? step : b.durationH)),
-    depthsMm: bars.map((b) => b.depthMm),
-  }));
+export const stormArb = fc.oneof(
+  {
+    weight: 9,
+    arbitrary: fc
+      .record({
+        uniform: fc.boolean(),
+        step: stepH,
+        bars: fc.array(fc.record({ durationH: stepH, depthMm }), { maxLength: MAX_BARS, size: 'max' }),
+      })
+      .map(({ uniform, step, bars }) => ({
+        durationsH: bars.map((b) => (uniform ? step : b.durationH)),
+        depthsMm: bars.map((b) => b.depthMm),
+      })),
+  },
+  // One bar as long as a record may be, or a second: the ends of the range.
+  {
+    weight: 1,
+    arbitrary: fc.record({ durationH: fc.constantFrom(MAX_RECORD_H, MIN_STEP_H), depthMm }).map((b) => ({
+      durationsH: [b.durationH],
+      depthsMm: [b.depthMm],
+    })),
+  },
+);
 
 /** ISO 8601 start times in the forms the schema reads. */
 export const startIsoArb = fc
   .record({
-    date: fc.date({
-      min: new Date('1900-01-01T00:00:00Z'),
-      max: new Date('2100-12-31T23:59:59Z'),
-      noInvalidDate: true,
-    }),
+    // Any start clock the schema takes, its first and last moments included (core/time-limits.ts).
+    date: fc.oneof(
+      fc.date({
+        min: new Date('1900-01-01T00:00:00Z'),
+        max: new Date('2100-12-31T23:59:59Z'),
+        noInvalidDate: true,
+      }),
+      fc.date({
+        min: new Date(`${FIRST_CLOCK_YEAR}-01-01T00:00:00Z`),
+        max: new Date(`${LAST_CLOCK_YEAR}-12-31T23:59:59Z`),
+        noInvalidDate: true,
+      }),
+      fc.constantFrom(new Date(`${FIRST_CLOCK_YEAR}-01-01T00:00:00Z`), new Date(`${LAST_CLOCK_YEAR}-12-31T23:59:59Z`)),
+    ),
     form: fc.constantFrom('minutes', 'seconds', 'utc', 'offset'),
   })
   .map(({ date, form }) => {

@@ -104,8 +104,16 @@ describe('parseScenario names the field of every problem', () => {
     ['a null depth', 'depthsMm', null, '(got null)'],
     ['an infinite depth', 'depthsMm', Infinity, '(got Infinity)'],
     ['a NaN depth', 'depthsMm', NaN, '(got NaN)'],
-    ['a zero duration', 'durationsH', 0, 'must be a number > 0 (bar duration, hours) (got 0)'],
+    [
+      'a zero duration',
+      'durationsH',
+      0,
+      'must be a number of hours from 1 second (0.000278) to 500 years (bar duration) (got 0)',
+    ],
     ['a negative duration', 'durationsH', -0.5, '(got -0.5)'],
+    ['a duration of half a second', 'durationsH', 0.5 / 3600, '(got 0.000138'],
+    // 10¹² min typed as a bar duration: 1.67·10¹⁰ h, far past 500 years (4,383,000 h).
+    ['a duration of 10¹² min', 'durationsH', 1e12 / 60, '(got 16666666666.666666)'],
   ])('refuses %s', (_what, field, value, expected) => {
     const input = demo();
     input['storm'][field][3] = value;

@@ -89,7 +89,7 @@ describe('scenario version 2: the streamflow record', () => {
     expect(good).toEqual({ ok: true, scenario: WITH_RECORD });
     const bad = parseScenario({ ...versionOne(), streamflow: { ...RECORD, offsetH: 'soon' } });
     expect(messages(bad)).toEqual([
-      'streamflow.offsetH: must be a finite number of hours (from the storm start to the first sample) (got "soon").',
+      'streamflow.offsetH: must be a number of hours from the storm start to the first sample, within 500 years either way (got "soon").',
     ]);
   });
 

@@ -1,11 +1,20 @@
 import { InputError } from '../errors';
+import {
+  LONGEST_SPAN_TEXT,
+  MAX_RECORD_H,
+  MAX_RECORD_YEARS,
+  describeHours,
+  describeOver,
+  SHORTEST_STEP_ACCEPTED_H,
+} from '../time-limits';
 import type { Hydrograph } from './types';
 
 /**
  * Throws an InputError naming the first bad sample (0-based `index`, shown
  * 1-based in the message) and its field. Runs once per call at the core's edge
  * so the methods can assume clean data: at least two samples (a volume needs
- * one step), finite strictly increasing times, finite discharge ≥ 0.
+ * one step), finite strictly increasing times at least a second apart and
+ * spanning at most 500 years (core/time-limits.ts), finite discharge ≥ 0.
  */
 export function validateHydrograph(hydrograph: Hydrograph): void {
   if (!hydrograph || typeof hydrograph !== 'object') {
@@ -28,10 +37,22 @@ export function validateHydrograph(hydrograph: Hydrograph): void {
   if (n < 2) {
     throw new InputError('timesH', `The streamflow record needs at least two samples to hold a volume (got ${n}).`);
   }
+  // Limits of time (a record spans at most 500 years, samples at least a second apart, time-limits.ts),
+  // read once: no call per sample in the loop.
+  const shortest = SHORTEST_STEP_ACCEPTED_H;
+  const longest = MAX_RECORD_H;
+  const first = timesH[0] as number;
   for (let k = 0; k < n; k++) {
     const t = timesH[k] as number;
     if (typeof t !== 'number' || !Number.isFinite(t)) {
       throw new InputError('timesH', `Sample ${k + 1}: time must be a finite number of hours (got ${String(t)}).`, k);
+    }
+    if (!(t <= longest && t >= -longest)) {
+      throw new InputError(
+        'timesH',
+        `Sample ${k + 1}: time ${describeHours(t)} is further from the first sample than a record spans (at most ${MAX_RECORD_YEARS} years).`,
+        k,
+      );
     }
     if (k > 0) {
       const before = timesH[k - 1] as number;
@@ -39,6 +60,20 @@ export function validateHydrograph(hydrograph: Hydrograph): void {
         throw new InputError(
           'timesH',
           `Sample ${k + 1}: time ${t} h must be later than the time of sample ${k} (${before} h); times must strictly increase.`,
+          k,
+        );
+      }
+      if (t - before < shortest) {
+        throw new InputError(
+          'timesH',
+          `Sample ${k + 1}: it comes ${describeHours(t - before)} after sample ${k}; samples are at least 1 second apart.`,
+          k,
+        );
+      }
+      if (t - first > longest) {
+        throw new InputError(
+          'timesH',
+          `Sample ${k + 1}: the record would run ${describeOver(t - first)} from its first sample; a record spans at most ${LONGEST_SPAN_TEXT}.`,
           k,
         );
       }

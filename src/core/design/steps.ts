@@ -1,4 +1,5 @@
 import { InputError } from '../errors';
+import { checkStepH } from '../time-limits';
 import { fmt } from './format';
 
 /**
@@ -17,18 +18,9 @@ const WHOLE_REL_TOL = 1e-9;
  * of equal bars. Throws InputError naming `durationH` or `stepH`.
  */
 export function stepCount(durationH: number, stepH: number): number {
-  if (typeof durationH !== 'number' || !Number.isFinite(durationH) || !(durationH > 0)) {
-    throw new InputError(
-      'durationH',
-      `The storm duration must be a finite number of hours greater than 0 (got ${String(durationH)}).`,
-    );
-  }
-  if (typeof stepH !== 'number' || !Number.isFinite(stepH) || !(stepH > 0)) {
-    throw new InputError(
-      'stepH',
-      `The time step must be a finite number of hours greater than 0 (got ${String(stepH)}).`,
-    );
-  }
+  // One second to 500 years each (core/time-limits.ts).
+  checkStepH('durationH', 'The storm duration', durationH);
+  checkStepH('stepH', 'The time step', stepH);
   if (stepH > durationH * (1 + WHOLE_REL_TOL)) {
     throw new InputError('stepH', `The time step (${fmt(stepH)} h) is longer than the storm (${fmt(durationH)} h).`);
   }

@@ -1,20 +1,16 @@
 /**
- * The storm's own wall clock. A start such as "2026-07-14T15:00" or
- * "2026-07-14T15:00+10:00" is shown as 15:00 whatever the viewer's time zone:
- * the time on the gauge is what a hydrologist reads against. The fields are
- * read as written and placed on a UTC axis, so the browser's zone never enters.
+ * The storm's own wall clock on screen. Readings come from the core's
+ * `wallClockMs` (zone-free axis); writing them never throws: a moment the
+ * calendar cannot write (past the browser's date range, or not a number) is
+ * written as "—". Records are held to the core's limits of time
+ * (core/time-limits.ts), so this is a guard, not a path in use.
  */
-const WALL = /^(\d{4})-(\d{2})-(\d{2})(?:T(\d{2}):(\d{2})(?::(\d{2})(\.\d+)?)?)?/;
+import { wallClockParts } from '../../core';
 
-/** Milliseconds of the wall-clock reading of `iso` on a UTC axis, or null when it is not a date-time. */
-export function wallClockMs(iso: string): number | null {
-  const m = WALL.exec(iso);
-  if (!m) return null;
-  const n = (i: number): number => (m[i] === undefined ? 0 : Number(m[i]));
-  const ms = m[7] === undefined ? 0 : Math.round(Number(m[7]) * 1000);
-  const t = Date.UTC(n(1), n(2) - 1, n(3), n(4), n(5), n(6), ms);
-  return Number.isNaN(t) ? null : t;
-}
+export { wallClockMs } from '../../core';
+
+/** What a moment the calendar cannot write is shown as. */
+export const NO_CLOCK_TEXT = '—';
 
 const dateFormat = new Intl.DateTimeFormat('en-GB', {
   timeZone: 'UTC',
@@ -31,10 +27,26 @@ const timeFormat = new Intl.DateTimeFormat('en-GB', {
 
 /** "14 Jul 2026" for a wall-clock time. */
 export function formatWallDate(ms: number): string {
-  return dateFormat.format(ms);
+  return wallClockParts(ms) === null ? NO_CLOCK_TEXT : dateFormat.format(ms);
 }
 
 /** "15:00" for a wall-clock time. */
 export function formatWallTime(ms: number): string {
-  return timeFormat.format(ms);
+  return wallClockParts(ms) === null ? NO_CLOCK_TEXT : timeFormat.format(ms);
+}
+
+const pad = (n: number, width = 2): string => String(n).padStart(width, '0');
+
+/**
+ * "15:10", "15:10:30" or "15:10:07.5" (seconds only when not whole minutes),
+ * with the date first ("2026-07-14 15:10") when `withDate`: how the bar table
+ * and the CSV export write a clock time.
+ */
+export function formatClockText(ms: number, withDate: boolean): string {
+  const t = wallClockParts(ms);
+  if (t === null) return NO_CLOCK_TEXT;
+  const s = t.second + t.millisecond / 1000;
+  const seconds = s === 0 ? '' : `:${s < 10 ? '0' : ''}${Number(s.toFixed(3))}`;
+  const date = withDate ? `${pad(t.year, 4)}-${pad(t.month)}-${pad(t.day)} ` : '';
+  return `${date}${pad(t.hour)}:${pad(t.minute)}${seconds}`;
 }

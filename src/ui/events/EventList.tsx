@@ -7,6 +7,7 @@ import {
   withEventRemoved,
   withEventRenamed,
 } from '../../store';
+import { TextInput } from '../fields/TextInput';
 
 /**
  * The catchment's events: add the workbench's storm as an event, rename,
@@ -38,12 +39,12 @@ export function EventList() {
               <label className="visually-hidden" htmlFor={`event-name-${event.id}`}>
                 Name of event {k + 1}
               </label>
-              <input
+              <TextInput
                 id={`event-name-${event.id}`}
-                type="text"
                 value={event.name}
-                onChange={(e) =>
-                  actions.edit(`Rename event ${k + 1}`, (s) => withEventRenamed(s, event.id, e.currentTarget.value), {
+                messageClassName="events-list__msg"
+                onCommit={(text) =>
+                  actions.edit(`Rename event ${k + 1}`, (s) => withEventRenamed(s, event.id, text), {
                     coalesceKey: `event-name-${event.id}`,
                   })
                 }

@@ -30,14 +30,28 @@ export function FitChart({ rows, parameterLabel, unit, depthUnit, showValue, sho
     points.push({ name: row.event.name, x: showDepth(row.fit.rainMm), y: showValue(row.fit.result.value) });
   }
   const design = designValue === null ? null : showValue(designValue);
-  const xs = points.map((p) => p.x);
-  const ys = points.map((p) => p.y).concat(design === null ? [] : [design]);
+  // Plain loops, not Math.max(...list): a spread of a long list overflows the call stack.
+  let xMax = 1;
+  let yLow = Infinity;
+  let yHigh = -Infinity;
+  for (const p of points) {
+    xMax = Math.max(xMax, p.x);
+    yLow = Math.min(yLow, p.y);
+    yHigh = Math.max(yHigh, p.y);
+  }
+  // The axis also holds 0 and the design value; 1e-9 keeps a flat zero line off the top.
+  let axisLow = Math.min(0, yLow);
+  let axisHigh = Math.max(1e-9, yHigh);
+  if (design !== null) {
+    axisLow = Math.min(axisLow, design);
+    axisHigh = Math.max(axisHigh, design);
+  }
   const x = scaleLinear()
-    .domain([0, Math.max(1, ...xs)])
+    .domain([0, xMax])
     .nice()
     .range([M.left, W - M.right]);
   const y = scaleLinear()
-    .domain([Math.min(0, ...ys), Math.max(1e-9, ...ys)])
+    .domain([axisLow, axisHigh])
     .nice()
     .range([H - M.bottom, M.top]);
   const u = unit === '' ? '' : ` ${unit}`;
@@ -51,7 +65,7 @@ export function FitChart({ rows, parameterLabel, unit, depthUnit, showValue, sho
         ? `One event: ${parameterLabel} ${formatValue(points[0]?.y ?? NaN)}${u} at ${formatValue(points[0]?.x ?? NaN)} ${depthUnit} of rain.`
         : `${formatCount(points.length)} events, from ${formatValue(first.x)} to ${formatValue(last.x)} ${depthUnit} of rain. ` +
           `${parameterLabel} is ${formatValue(first.y)}${u} for the smallest storm and ${formatValue(last.y)}${u} for the largest; ` +
-          `${points.length > 1 ? `it ranges from ${formatValue(Math.min(...points.map((p) => p.y)))} to ${formatValue(Math.max(...points.map((p) => p.y)))}${u}` : ''}` +
+          `${points.length > 1 ? `it ranges from ${formatValue(yLow)} to ${formatValue(yHigh)}${u}` : ''}` +
           (design === null ? '.' : `; the design value ${formatValue(design)}${u} is dashed.`);
   return (
     <figure className="fit-chart" aria-labelledby="fit-chart-caption">

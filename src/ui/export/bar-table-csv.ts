@@ -1,16 +1,19 @@
 import { barEdgesH, methodSpec, paramApplies, type LossMethod, type LossResult, type UnitSystem } from '../../core';
 import { CAUTION_TEXT } from '../../scenario';
 import type { Scenario } from '../../scenario/types';
-import { wallClockMs } from '../chart/clock';
+import { formatClockText, wallClockMs } from '../chart/clock';
 import { formatValue } from '../format';
+import { csvFile, csvNote, csvRow, type CsvCell } from './csv';
 import { displayUnit, paramToDisplay, paramUnitText, toDisplay, unitText } from '../units';
 
 /**
- * The bar table as CSV: a few leading note lines that start with "#" (the
- * scenario name, the caution, the method and totals; spreadsheets show them
- * as text rows, and CSV readers skip them with a comment setting such as
- * papaparse `comments: '#'`, pandas `comment='#'`), then one header row with
- * the unit of every column, then one row per bar.
+ * The bar table as CSV, written through the one CSV writer (./csv.ts: every
+ * field quoted, text that could start a formula neutralised): a few leading
+ * note lines that start with "#" (the scenario name, the caution, the method
+ * and totals; spreadsheets show them as text rows, and CSV readers skip them
+ * with a comment setting such as papaparse `comments: '#'`, pandas
+ * `comment='#'`), then one header row with the unit of every column, then one
+ * row per bar.
  *
  * Numbers in the rows are written in full (shortest text that reads back as
  * the same double), in the units the screen shows, so the table reads back to
@@ -36,22 +39,6 @@ function noteNumber(x: number): string {
   if (!Number.isFinite(x)) return '—';
   if (Object.is(x, -0)) return '0';
   return Math.abs(x) >= 1000 ? whole.format(x) : sig4.format(x);
-}
-
-/** A note line: "#", then the text on one line (line breaks in names would end the note early). */
-const note = (text: string): string => `# ${text.replace(/[\r\n]+/g, ' ')}`;
-
-const pad = (n: number, width = 2): string => String(n).padStart(width, '0');
-
-/** Wall-clock text "2026-07-14 15:10" (with seconds when not whole minutes) of a time on the storm's axis. */
-function clockText(ms: number): string {
-  const d = new Date(Math.round(ms));
-  const s = d.getUTCSeconds() + d.getUTCMilliseconds() / 1000;
-  const seconds = s === 0 ? '' : `:${s < 10 ? '0' : ''}${Number(s.toFixed(3))}`;
-  return (
-    `${pad(d.getUTCFullYear(), 4)}-${pad(d.getUTCMonth() + 1)}-${pad(d.getUTCDate())} ` +
-    `${pad(d.getUTCHours())}:${pad(d.getUTCMinutes())}${seconds}`
-  );
 }
 
 /** "Loss rate φ = 8 mm/h; …" for the method's numeric parameters and choices, in display units. */
@@ -96,11 +83,6 @@ export function barTableHeader(scenario: Scenario): string[] {
   return head;
 }
 
-/** A CSV field: quoted when it holds a separator, a quote or a line break. */
-function field(text: string): string {
-  return /[",\r\n]/.test(text) ? `"${text.replace(/"/g, '""')}"` : text;
-}
-
 export function barTableCsv({ scenario, method, result, volumeM3 }: BarTableInput): string {
   const { storm, units } = scenario;
   const depthUnit = unitText(displayUnit('depth', units));
@@ -108,29 +90,29 @@ export function barTableCsv({ scenario, method, result, volumeM3 }: BarTableInpu
   const startMs = storm.startIso === undefined ? null : wallClockMs(storm.startIso);
 
   const lines: string[] = [
-    note(`Raincut bar table: ${scenario.name}`),
-    note(`Caution: ${CAUTION_TEXT}`),
-    note(`Loss method: ${methodSpec(method.kind).label}; ${methodParametersText(method, units, noteNumber)}`),
+    csvNote(`Raincut bar table: ${scenario.name}`),
+    csvNote(`Caution: ${CAUTION_TEXT}`),
+    csvNote(`Loss method: ${methodSpec(method.kind).label}; ${methodParametersText(method, units, noteNumber)}`),
   ];
   if (scenario.catchment.name !== '' || scenario.catchment.areaM2 > 0) {
     const area =
       scenario.catchment.areaM2 > 0
         ? `${noteNumber(toDisplay('area', scenario.catchment.areaM2, units))} ${unitText(displayUnit('area', units))}`
         : 'area not given';
-    lines.push(note(`Catchment: ${scenario.catchment.name === '' ? 'unnamed' : scenario.catchment.name}; ${area}`));
+    lines.push(csvNote(`Catchment: ${scenario.catchment.name === '' ? 'unnamed' : scenario.catchment.name}; ${area}`));
   }
-  if (storm.startIso !== undefined) lines.push(note(`Storm start: ${storm.startIso}`));
+  if (storm.startIso !== undefined) lines.push(csvNote(`Storm start: ${storm.startIso}`));
   const volume =
     volumeM3 === null
       ? ''
       : `; runoff volume ${noteNumber(toDisplay('volume', volumeM3, units))} ${unitText(displayUnit('volume', units))}`;
   lines.push(
-    note(
+    csvNote(
       `Totals: rainfall ${show(result.rainMm)}; loss ${show(result.totalLossMm)}; rainfall excess ${show(result.totalExcessMm)}` +
         `; runoff fraction ${noteNumber(result.runoffFraction * 100)} %${volume}`,
     ),
-    note('Numbers in the rows are unrounded; each column heading gives its unit.'),
-    barTableHeader(scenario).map(field).join(','),
+    csvNote('Numbers in the rows are unrounded; each column heading gives its unit.'),
+    csvRow(barTableHeader(scenario)),
   );
 
   const edges = barEdgesH(storm);
@@ -139,20 +121,20 @@ export function barTableCsv({ scenario, method, result, volumeM3 }: BarTableInpu
     const depthMm = storm.depthsMm[k] as number;
     const durationH = storm.durationsH[k] as number;
     const startH = edges[k] as number;
-    const row = [String(k + 1)];
-    if (startMs !== null) row.push(clockText(startMs + startH * 3_600_000));
+    const row: CsvCell[] = [k + 1];
+    if (startMs !== null) row.push(formatClockText(startMs + startH * 3_600_000, true));
     row.push(
-      String(startH),
-      String(durationH),
-      String(toDisplay('depth', depthMm, units)),
-      String(toDisplay('rate', depthMm / durationH, units)),
-      String(toDisplay('depth', result.lossMm[k] as number, units)),
-      String(toDisplay('depth', result.excessMm[k] as number, units)),
+      startH,
+      durationH,
+      toDisplay('depth', depthMm, units),
+      toDisplay('rate', depthMm / durationH, units),
+      toDisplay('depth', result.lossMm[k] as number, units),
+      toDisplay('depth', result.excessMm[k] as number, units),
     );
-    lines.push(row.join(','));
+    lines.push(csvRow(row));
   }
   // A byte-order mark so spreadsheet programs read the file as UTF-8 (φ, ³ in names and notes).
-  return `\ufeff${lines.join('\r\n')}\r\n`;
+  return csvFile(lines);
 }
 
 /** "fenmoor-brook-storm-bars.csv" from the scenario file name. */

@@ -46,6 +46,16 @@ function isPageOnly(name: string): boolean {
   );
 }
 
+/**
+ * Writes an element's inline style through the CSS object model, not
+ * setAttribute('style'): the app's Content-Security-Policy refuses inline
+ * style attributes set as markup, while CSSOM writes are the page's own.
+ * The file's serialisation writes it out as a style attribute all the same.
+ */
+function setStyle(target: Element, css: string): void {
+  (target as SVGElement).style.cssText = css;
+}
+
 function inlineStyle(source: Element, target: Element, view: Window): void {
   const computed = view.getComputedStyle(source);
   const parts: string[] = [];
@@ -62,7 +72,7 @@ function inlineStyle(source: Element, target: Element, view: Window): void {
   for (const attr of Array.from(target.attributes)) {
     if (isPageOnly(attr.name)) target.removeAttribute(attr.name);
   }
-  if (parts.length > 0) target.setAttribute('style', parts.join(';'));
+  if (parts.length > 0) setStyle(target, parts.join(';'));
 }
 
 /** Walks the live tree and its copy side by side (same shape), styling each copy from its original. */
@@ -183,7 +193,7 @@ export function standaloneSvg(live: SVGSVGElement, options: StandaloneOptions): 
 
   const chart = doc.createElementNS(SVG_NS, 'g');
   const copyStyle = copy.getAttribute('style');
-  if (copyStyle) chart.setAttribute('style', copyStyle);
+  if (copyStyle) setStyle(chart, copyStyle);
   while (copy.firstChild) chart.appendChild(copy.firstChild);
   root.appendChild(chart);
 
@@ -210,16 +220,13 @@ export function standaloneSvg(live: SVGSVGElement, options: StandaloneOptions): 
         mark.setAttribute('y', String(y - 9));
         mark.setAttribute('width', '14');
         mark.setAttribute('height', '10');
-        mark.setAttribute('style', `fill:${item.paint}`);
+        setStyle(mark, `fill:${item.paint}`);
       } else {
         mark.setAttribute('x1', String(x));
         mark.setAttribute('x2', String(x + 18));
         mark.setAttribute('y1', String(y - 4));
         mark.setAttribute('y2', String(y - 4));
-        mark.setAttribute(
-          'style',
-          `stroke:${item.paint};stroke-width:2.5${item.dash ? `;stroke-dasharray:${item.dash}` : ''}`,
-        );
+        setStyle(mark, `stroke:${item.paint};stroke-width:2.5${item.dash ? `;stroke-dasharray:${item.dash}` : ''}`);
       }
       foot.appendChild(mark);
       const gap = item.kind === 'fill' ? 19 : 24;

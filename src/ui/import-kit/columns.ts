@@ -6,9 +6,31 @@ export function columnLabel(c: number, header: readonly string[] | null): string
   return name ? `Column ${c}: ${name}` : `Column ${c}`;
 }
 
-/** Column numbers to offer: every column read, and any the settings already name. */
+/**
+ * Most columns offered in a column picker. A time series has a few columns; a
+ * paste with thousands is a row of values, and hundreds of thousands of
+ * options would freeze the page (a one-line paste of 200,000 cells took about
+ * a minute to show). Our own number.
+ */
+export const MAX_COLUMN_CHOICES = 1000;
+
+/** Column numbers to offer: every column read up to MAX_COLUMN_CHOICES, and any the settings already name. */
 export function columnNumbers(s: SeriesSettings, columnCount: number): number[] {
-  return Array.from({ length: Math.max(1, columnCount, s.valueColumn, s.timeColumn ?? 0) }, (_, i) => i + 1);
+  const count = Math.min(Math.max(1, columnCount), MAX_COLUMN_CHOICES);
+  const columns = Array.from({ length: count }, (_, i) => i + 1);
+  for (const named of [s.dateColumn, s.timeColumn, s.valueColumn]) {
+    if (named !== null && named > count && !columns.includes(named)) columns.push(named);
+  }
+  return columns.sort((a, b) => a - b);
+}
+
+/** Said beside the value column when there are more columns than the pickers offer, else undefined. */
+export function columnCapHint(columnCount: number): string | undefined {
+  if (columnCount <= MAX_COLUMN_CHOICES) return undefined;
+  return (
+    `The text has ${columnCount.toLocaleString('en-US')} columns; only the first ${MAX_COLUMN_CHOICES.toLocaleString('en-US')} can be chosen here. ` +
+    'Raincut reads one value per line: a row of values should be pasted as a column.'
+  );
 }
 
 /** Which date controls the first data line calls for: times of day without dates, dates written with slashes. */

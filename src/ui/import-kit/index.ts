@@ -28,4 +28,4 @@ export { DateField } from './DateField';
 export { ColumnOptions } from './ColumnOptions';
 export { SplitSettings } from './SplitSettings';
 export { TimeSettings, type TimeSettingsProps, type TimeWords } from './TimeSettings';
-export { columnLabel, columnNumbers, dateNeeds } from './columns';
+export { MAX_COLUMN_CHOICES, columnCapHint, columnLabel, columnNumbers, dateNeeds } from './columns';

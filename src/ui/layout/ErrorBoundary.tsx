@@ -1,46 +1,100 @@
 import { Component, type ErrorInfo, type ReactNode } from 'react';
+import type { CrashRecovery, CrashReport } from '../../store/crash';
 
 export interface ErrorBoundaryProps {
   readonly children?: ReactNode;
-  /** Moves the saved scenario aside (so a scenario that breaks the screen cannot break it again) and reloads. */
-  readonly onSetAside?: () => void;
+  /**
+   * What was saved and what can be done about it (src/store/crash.ts). Without
+   * it the screen says only what happened and offers a reload.
+   */
+  readonly recovery?: CrashRecovery;
+  /** Reloads the page (tests pass their own). */
+  readonly reload?: () => void;
+  /** Hands the saved scenario's text to the user as a file. */
+  readonly download?: (text: string) => void;
 }
 
 interface State {
   readonly error: Error | null;
+  readonly report: CrashReport | null;
+  /** What setting aside did, when it was tried. */
+  readonly setAside: { readonly ok: boolean; readonly text: string } | null;
 }
+
+const reloadPage = (): void => window.location.reload();
 
 /**
  * The last guard against a blank screen: if drawing the workbench throws,
- * say so plainly, keep the saved scenario, and offer a way out.
+ * say so plainly, say truthfully what is saved (once the autosave has been
+ * stopped, so the change that broke the screen is not written after the
+ * fact), and offer a way out that loses nothing: reload, set the saved
+ * scenario aside (kept under Saved scenarios), or download it first.
  */
 export class ErrorBoundary extends Component<ErrorBoundaryProps, State> {
-  override state: State = { error: null };
+  override state: State = { error: null, report: null, setAside: null };
 
-  static getDerivedStateFromError(error: unknown): State {
+  static getDerivedStateFromError(error: unknown): Partial<State> {
     return { error: error instanceof Error ? error : new Error(String(error)) };
   }
 
   override componentDidCatch(error: unknown, info: ErrorInfo): void {
     console.error('Raincut could not draw the workbench:', error, info.componentStack);
+    if (this.props.recovery && this.state.report === null) this.setState({ report: this.props.recovery.report() });
   }
 
+  private readonly setAside = (): void => {
+    const recovery = this.props.recovery;
+    if (!recovery) return;
+    const result = recovery.setAside();
+    if (result.ok) (this.props.reload ?? reloadPage)();
+    else this.setState({ setAside: result });
+  };
+
+  private readonly download = (): void => {
+    const text = this.props.recovery?.savedText();
+    if (text != null) this.props.download?.(text);
+  };
+
+  private readonly startWithout = (): void => {
+    if (this.props.recovery?.skipSavedNextTime()) (this.props.reload ?? reloadPage)();
+    else
+      this.setState({
+        setAside: {
+          ok: false,
+          text: 'This tab cannot remember to leave the saved scenario unopened. Download it, then clear this site’s data in the browser to start afresh.',
+        },
+      });
+  };
+
   override render() {
-    const { error } = this.state;
+    const { error, report, setAside } = this.state;
     if (!error) return this.props.children;
+    const reload = this.props.reload ?? reloadPage;
+    const saved = report?.state === 'saved';
+    const blocked = setAside !== null && !setAside.ok;
     return (
       <main className="crash">
         <h1>Raincut stopped drawing the workbench</h1>
-        <p role="alert">
-          Something went wrong on this screen: {error.message}. The scenario saved in this browser has not been changed.
-        </p>
+        <p role="alert">Something went wrong on this screen: {error.message}.</p>
+        {report ? <p className="crash__saved">{report.text}</p> : null}
+        {setAside ? <p role="status">{setAside.text}</p> : null}
         <div className="crash__actions">
-          <button type="button" onClick={() => window.location.reload()}>
+          <button type="button" onClick={reload}>
             Reload
           </button>
-          {this.props.onSetAside ? (
-            <button type="button" onClick={this.props.onSetAside}>
+          {saved && !blocked ? (
+            <button type="button" onClick={this.setAside}>
               Set the saved scenario aside and start from the demo
+            </button>
+          ) : null}
+          {saved && this.props.download ? (
+            <button type="button" onClick={this.download}>
+              Download the saved scenario
+            </button>
+          ) : null}
+          {saved && blocked ? (
+            <button type="button" onClick={this.startWithout}>
+              Start from the demo without opening it
             </button>
           ) : null}
         </div>

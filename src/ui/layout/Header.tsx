@@ -1,6 +1,7 @@
 import type { UnitSystem } from '../../core';
 import { useActions, useScenario, useWorkbench } from '../../store';
 import { NumberFormatPicker } from '../number-format';
+import { TextInput } from '../fields/TextInput';
 
 const SYSTEMS: readonly { value: UnitSystem; label: string; hint: string }[] = [
   { value: 'si', label: 'SI', hint: 'mm, mm/h, ha, m³' },
@@ -23,12 +24,12 @@ export function Header() {
       <h1 className="visually-hidden">Raincut rainfall loss workbench</h1>
       <div className="top__name">
         <label htmlFor="scenario-name">Scenario name</label>
-        <input
+        <TextInput
           id="scenario-name"
-          type="text"
           value={name}
           autoComplete="off"
-          onChange={(e) => actions.setName(e.currentTarget.value)}
+          onCommit={actions.setName}
+          messageClassName="top__name-msg"
         />
       </div>
       <fieldset className="segmented" aria-describedby="units-hint">

@@ -2,6 +2,9 @@ import { useCallback, useEffect, useState, type FormEvent, type KeyboardEvent } 
 import { methodSpec } from '../../core';
 import type { DeletedEntry, LibraryEntry, LibraryListing, LibraryResult, Problem } from '../../scenario';
 import { useActions, useWorkbenchStore } from '../../store';
+import { listSetAside, type SetAsideCopy } from '../../store/set-aside';
+import { ListProblems } from './ListProblems';
+import { SetAsideCopies } from './SetAsideCopies';
 import { useServices } from './services';
 import { formatCount } from '../format';
 
@@ -65,16 +68,22 @@ function RenameForm({ entry, onDone }: { entry: LibraryEntry; onDone: (name: str
  * and delete, with Undo for a deletion.
  */
 export function LibraryPanel() {
-  const { library, link } = useServices();
+  const { library, link, storage, saveFile } = useServices();
   const store = useWorkbenchStore();
   const actions = useActions();
   const [listing, setListing] = useState<LibraryListing>(() => library?.list() ?? EMPTY);
+  const readAside = useCallback((): SetAsideCopy[] => (storage ? listSetAside(storage).copies : []), [storage]);
+  const [aside, setAside] = useState<SetAsideCopy[]>(readAside);
   const [status, setStatus] = useState<Status | null>(null);
   const [renaming, setRenaming] = useState<string | null>(null);
   /** The entry the scenario on screen was opened from or saved as, offered for "Update". */
   const [currentId, setCurrentId] = useState<string | null>(null);
 
-  const refresh = useCallback(() => setListing(library?.list() ?? EMPTY), [library]);
+  const refresh = useCallback(() => {
+    // Reading the list may itself set damaged data aside, so the copies are read after it.
+    setListing(library?.list() ?? EMPTY);
+    setAside(readAside());
+  }, [library, readAside]);
   useEffect(() => {
     // Another tab, or keeping a shared link, may change the list.
     window.addEventListener('storage', refresh);
@@ -145,15 +154,7 @@ export function LibraryPanel() {
         </div>
       </div>
 
-      {listing.problems.length > 0 ? (
-        <div className="library__problems" role="alert">
-          <ul>
-            {listing.problems.map((p, i) => (
-              <li key={i}>{p.message}</li>
-            ))}
-          </ul>
-        </div>
-      ) : null}
+      {listing.problems.length > 0 ? <ListProblems details={listing.problems.map((p) => p.message)} /> : null}
 
       <div className="library__status" role="status">
         {status?.kind === 'done' ? <p>{status.text}</p> : null}
@@ -176,14 +177,7 @@ export function LibraryPanel() {
         ) : null}
       </div>
       {status?.kind === 'problem' ? (
-        <div className="library__problems" role="alert">
-          <p>{status.text}</p>
-          <ul>
-            {status.problems.map((p, i) => (
-              <li key={i}>{p.message}</li>
-            ))}
-          </ul>
-        </div>
+        <ListProblems text={status.text} details={status.problems.map((p) => p.message)} />
       ) : null}
 
       {listing.entries.length === 0 ? (
@@ -273,6 +267,10 @@ export function LibraryPanel() {
           })}
         </ul>
       )}
+
+      {storage ? (
+        <SetAsideCopies copies={aside} storage={storage} library={library} saveFile={saveFile} onChanged={refresh} />
+      ) : null}
     </section>
   );
 }

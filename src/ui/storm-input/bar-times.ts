@@ -1,5 +1,5 @@
 import { isoAt, parseClock } from '../../io';
-import { wallClockMs } from '../chart/clock';
+import { NO_CLOCK_TEXT, formatClockText, wallClockMs } from '../chart/clock';
 
 /**
  * Bar times as the bar table shows and reads them. With a start, a bar's time
@@ -33,17 +33,9 @@ export function barClock(startIso: string | undefined, totalH: number): BarClock
   return { startMs, multiDay, heading: 'clock' };
 }
 
-function clockText(ms: number, withDate: boolean): string {
-  const d = new Date(Math.round(ms));
-  const time = `${pad(d.getUTCHours())}:${pad(d.getUTCMinutes())}`;
-  const s = d.getUTCSeconds() + d.getUTCMilliseconds() / 1000;
-  const seconds = s === 0 ? '' : `:${s < 10 ? '0' : ''}${Number(s.toFixed(3))}`;
-  const date = withDate ? `${pad(d.getUTCFullYear(), 4)}-${pad(d.getUTCMonth() + 1)}-${pad(d.getUTCDate())} ` : '';
-  return `${date}${time}${seconds}`;
-}
-
 /** Hours as h:mm, or h:mm:ss when the seconds are not whole minutes. */
 export function elapsedText(hours: number): string {
+  if (!Number.isFinite(hours)) return NO_CLOCK_TEXT;
   const totalMs = Math.round(hours * MS_PER_HOUR);
   const h = Math.floor(totalMs / MS_PER_HOUR);
   const m = Math.floor((totalMs % MS_PER_HOUR) / 60_000);
@@ -55,7 +47,7 @@ export function elapsedText(hours: number): string {
 /** The text for the start of a bar that starts `hours` after the storm start. */
 export function barTimeText(clock: BarClock, hours: number): string {
   if (clock.startMs === null) return elapsedText(hours);
-  return clockText(clock.startMs + hours * MS_PER_HOUR, clock.multiDay);
+  return formatClockText(clock.startMs + hours * MS_PER_HOUR, clock.multiDay);
 }
 
 const ELAPSED = /^(\d+):(\d{1,2})(?::(\d{1,2}(?:[.,]\d+)?))?$/;

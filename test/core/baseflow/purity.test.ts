@@ -13,7 +13,7 @@ describe('the baseflow core', () => {
       const source = readFileSync(join(folder, name), 'utf8');
       const specifiers = [...source.matchAll(/from\s+'([^']+)'/g)].map((m) => m[1] as string);
       for (const spec of specifiers) {
-        expect(spec, `${name} imports ${spec}`).toMatch(/^\.\/[\w-]+$|^\.\.\/(errors|units)$/);
+        expect(spec, `${name} imports ${spec}`).toMatch(/^\.\/[\w-]+$|^\.\.\/(errors|units|time-limits)$/);
       }
       const code = source.replace(/\/\*[\s\S]*?\*\//g, '').replace(/\/\/.*$/gm, '');
       expect(code, name).not.toMatch(/\b(document|window|navigator|HTMLElement|requestAnimationFrame)\b/);

@@ -43,9 +43,9 @@ describe('bar table CSV', () => {
     // UTF-8 with a byte-order mark, so spreadsheet programs show φ and ³.
     expect([...bytes.slice(0, 3)]).toEqual([0xef, 0xbb, 0xbf]);
     const lines = text.replace(/^\ufeff/, '').split('\r\n');
-    expect(lines[0]).toBe('# Raincut bar table: Four bars');
-    expect(lines[1]).toBe(`# Caution: ${CAUTION_TEXT}`);
-    expect(lines).toContain('# Loss method: Constant loss rate (φ-index); Loss rate φ = 8 mm/h');
+    expect(lines[0]).toBe('#,"Raincut bar table: Four bars"');
+    expect(lines[1]).toBe(`#,"Caution: ${CAUTION_TEXT}"`);
+    expect(lines).toContain('#,"Loss method: Constant loss rate (φ-index); Loss rate φ = 8 mm/h"');
 
     const parsed = parse(text);
     expect(parsed.meta.fields).toEqual([
@@ -126,7 +126,7 @@ describe('bar table CSV', () => {
     const odd: Scenario = { ...FOUR_BARS, name: 'Pond 3, "east" arm\nsecond try' };
     const result = computeLosses(odd.storm, odd.method);
     const text = barTableCsv({ scenario: odd, method: odd.method, result, volumeM3: null });
-    expect(text.split('\r\n')[0]).toBe('\ufeff# Raincut bar table: Pond 3, "east" arm second try');
+    expect(text.split('\r\n')[0]).toBe('\ufeff#,"Raincut bar table: Pond 3, ""east"" arm second try"');
     expect(parse(text).data.map((r) => Number(r['Rainfall depth (mm)']))).toEqual(odd.storm.depthsMm);
   });
 
@@ -137,9 +137,9 @@ describe('bar table CSV', () => {
     const notes = barTableCsv({ scenario: big, method: big.method, result, volumeM3: volume })
       .split('\r\n')
       .filter((l) => l.replace(/^\ufeff/, '').startsWith('#'));
-    expect(notes).toContain('# Catchment: Wide plain (invented); 250000 ha');
-    expect(notes.find((l) => l.startsWith('# Totals:'))).toBe(
-      `# Totals: rainfall 20 mm; loss 12 mm; rainfall excess 8 mm; runoff fraction 40 %; runoff volume ${Math.round(volume)} m³`,
+    expect(notes).toContain('#,"Catchment: Wide plain (invented); 250000 ha"');
+    expect(notes.find((l) => l.startsWith('#,"Totals:'))).toBe(
+      `#,"Totals: rainfall 20 mm; loss 12 mm; rainfall excess 8 mm; runoff fraction 40 %; runoff volume ${Math.round(volume)} m³"`,
     );
     for (const line of notes.slice(2)) expect(line).not.toMatch(/\d,\d/);
   });

@@ -112,10 +112,17 @@ describe('streamflow edits', () => {
     });
   });
 
-  it('the offset must be a finite number of hours', () => {
+  it('the offset must be a finite number of hours, within 500 years either way', () => {
     expect(flow(withRecordOffsetH(WITH_TRIANGLE, -1.25)).offsetH).toBe(-1.25);
     expect(thrown(() => withRecordOffsetH(WITH_TRIANGLE, Number.NaN)).message).toBe(
-      'The offset must be a finite number of hours (got NaN).',
+      'The offset from the storm start to the first sample must be a finite number of hours (got NaN).',
+    );
+    // 500 years of 365.25 days = 4,383,000 h: allowed at the limit, refused past it.
+    expect(flow(withRecordOffsetH(WITH_TRIANGLE, -4_383_000)).offsetH).toBe(-4_383_000);
+    const far = thrown(() => withRecordOffsetH(WITH_TRIANGLE, 4_383_001));
+    expect(far.field).toBe('offsetH');
+    expect(far.message).toBe(
+      'The offset from the storm start to the first sample must be within 500 years, 4,383,000 h, either way (got 4,383,001 h, 500 years).',
     );
   });
 });

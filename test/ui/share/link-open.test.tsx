@@ -114,11 +114,19 @@ describe('opening a share link', () => {
       'storm.depthsMm[1] (bar 2): must be a number ≥ 0',
     ],
     ['a fragment that is not a scenario link', 'section-3', 'This is not a Raincut scenario link'],
+    [
+      // Before the limits of time this link opened, and drawing its clock threw "Invalid time value".
+      'a link with one bar of 3·10⁹ h on a clock',
+      encodeScenarioLink({ ...SHARED, storm: { durationsH: [3e9], depthsMm: [5], startIso: '2026-02-12T21:45:00' } }),
+      'storm.durationsH[0] (bar 1): must be a number of hours from 1 second (0.000278) to 500 years',
+    ],
   ])('%s says what was wrong and keeps the saved scenario', (_kind, fragment, why) => {
     const { storage, own, text } = usedBrowser();
-    const { scenario, link: session, actions } = renderTools({ storage, fragment: `#${fragment}` });
+    const { scenario, link: session, actions, calls } = renderTools({ storage, fragment: `#${fragment}` });
     const alert = screen.getByRole('alert');
     expect(alert).toHaveTextContent('The shared link could not be opened.');
+    // Taken out of the address, so a reload does not refuse it again.
+    expect(calls.clearFragment).toBe(1);
     expect(alert).toHaveTextContent(
       'Nothing was changed: “My own work” is on screen and your saved scenario is as it was.',
     );

@@ -44,5 +44,9 @@ export function memoryStorage(initial: Record<string, string> = {}) {
     removeItem: (key: string) => {
       data.delete(key);
     },
+    get length() {
+      return data.size;
+    },
+    key: (index: number) => [...data.keys()][index] ?? null,
   };
 }

@@ -95,6 +95,7 @@ describe('storm tools', () => {
     const { user, scenario } = renderWorkbench();
     const tools = await openTools(user);
     const field = within(tools).getByRole('textbox', { name: 'New time step (min)' });
+    // 0.0001 min = 0.006 s.
     await fill(user, field, '0.0001');
     await user.click(within(tools).getByRole('button', { name: 'Resample' }));
     // One second is 1/60 min = 0.01667 min to four figures.

@@ -1,6 +1,7 @@
 import type { FlowImportSettings } from '../../../io';
 import {
   ColumnOptions,
+  columnCapHint,
   columnNumbers,
   Select,
   SplitSettings,
@@ -54,6 +55,7 @@ export function FlowSettings({
           label="Discharge column"
           value={String(s.valueColumn)}
           onChange={(v) => onChange({ valueColumn: Number(v) })}
+          hint={columnCapHint(columnCount)}
         >
           <ColumnOptions columns={columns.filter((c) => c !== s.timeColumn)} header={header} />
         </Select>

@@ -1,6 +1,7 @@
 import type { RainImportSettings } from '../../../io';
 import {
   ColumnOptions,
+  columnCapHint,
   columnNumbers,
   Select,
   SplitSettings,
@@ -90,6 +91,7 @@ export function ImportSettings({
             label="Rainfall column"
             value={String(s.valueColumn)}
             onChange={(v) => onChange({ valueColumn: Number(v) })}
+            hint={columnCapHint(columnCount)}
           >
             <ColumnOptions columns={columns.filter((c) => c !== s.timeColumn)} header={header} />
           </Select>

@@ -1,0 +1,132 @@
+import type { LinkSession } from './link-session';
+import { STORAGE_KEY, setAsideSaved, type StorageLike } from './persistence';
+import type { WorkbenchStore } from './scenario-store';
+
+/**
+ * What the error screen may truthfully say, and do, after drawing the
+ * workbench failed. The screen's claims come from storage as it is once the
+ * autosave has been stopped, never from hope:
+ *
+ * - `shared`: the scenario on screen came from a link and was never saved;
+ *   the user's own saved scenario is not touched, and the link is taken out
+ *   of the address so a reload opens the user's own scenario.
+ * - `saved`: the scenario that failed is the one saved in this browser (it
+ *   was opened from it, or saved before it failed), so a reload would fail
+ *   again: setting it aside breaks the loop without losing it.
+ * - `older`: the change that failed was not saved; the saved scenario is the
+ *   one before it, and a reload opens that.
+ * - `nothing`: nothing is saved in this browser (or it cannot save).
+ */
+export type SavedState = 'shared' | 'saved' | 'older' | 'nothing';
+
+export interface CrashReport {
+  readonly state: SavedState;
+  /** One or two plain sentences on what was and was not saved, and what a reload will show. */
+  readonly text: string;
+}
+
+export type CrashSetAside =
+  { readonly ok: true; readonly text: string } | { readonly ok: false; readonly text: string };
+
+export interface CrashRecovery {
+  /** Stops the autosave (dropping the change that broke the screen), clears a shared link, and says what is saved. */
+  report(): CrashReport;
+  /** Moves the saved scenario to a set-aside copy, so a reload starts from the demo. Never throws. */
+  setAside(): CrashSetAside;
+  /** The saved scenario's text, for a download, or null. */
+  savedText(): string | null;
+  /** Marks this tab to start without opening the saved scenario (when it could not be set aside); false when it cannot. */
+  skipSavedNextTime(): boolean;
+}
+
+export interface CrashRecoveryOptions {
+  readonly store: WorkbenchStore;
+  readonly link: Pick<LinkSession, 'getState' | 'halt'>;
+  readonly storage: StorageLike | null;
+  readonly now: () => Date;
+  /** Where "start without the saved scenario" is remembered for this tab (sessionStorage), or null. */
+  readonly tabStorage: Pick<StorageLike, 'setItem'> | null;
+}
+
+/** The tab-only key that asks the next start to leave the saved scenario unopened. */
+export const SKIP_SAVED_KEY = 'raincut.skip-saved';
+
+function readSaved(storage: StorageLike | null): string | null {
+  try {
+    return storage?.getItem(STORAGE_KEY) ?? null;
+  } catch {
+    return null;
+  }
+}
+
+export function createCrashRecovery(options: CrashRecoveryOptions): CrashRecovery {
+  const { store, link, storage } = options;
+  return {
+    report() {
+      const shared = link.getState().kind === 'shared';
+      link.halt();
+      if (shared) {
+        return {
+          state: 'shared',
+          text:
+            'The scenario on screen came from a share link and was never saved. Your own saved scenario has not been changed, ' +
+            'and the link has been taken out of the address, so reloading opens your own scenario.',
+        };
+      }
+      const saved = readSaved(storage);
+      if (saved === null) {
+        return {
+          state: 'nothing',
+          text: 'Nothing is saved in this browser, so reloading starts again from the demo scenario.',
+        };
+      }
+      if (saved === JSON.stringify(store.getState().scenario)) {
+        return {
+          state: 'saved',
+          text:
+            'The scenario that stopped the screen is the one saved in this browser, so reloading would stop it again. ' +
+            'Set it aside to start from the demo: it is kept, as it was, under Saved scenarios, “Set-aside copies”.',
+        };
+      }
+      return {
+        state: 'older',
+        text:
+          'The change that stopped the screen was not saved: the scenario saved in this browser is the one from before it, ' +
+          'and reloading opens that.',
+      };
+    },
+
+    setAside() {
+      if (!storage)
+        return { ok: false, text: 'This browser does not allow saving here, so there is nothing to set aside.' };
+      const result = setAsideSaved(storage, options.now().toISOString());
+      if (!result.ok) {
+        return {
+          ok: false,
+          text:
+            `The saved scenario could not be set aside (${result.reason}); it is still saved, unchanged. ` +
+            'Download it to keep a copy, then start without it: this tab will leave it unopened and write nothing over it.',
+        };
+      }
+      return {
+        ok: true,
+        text:
+          result.key === null
+            ? 'Nothing was saved to set aside.'
+            : 'The saved scenario is set aside; find it under Saved scenarios, “Set-aside copies”.',
+      };
+    },
+
+    savedText: () => readSaved(storage),
+
+    skipSavedNextTime() {
+      if (!options.tabStorage) return false;
+      try {
+        options.tabStorage.setItem(SKIP_SAVED_KEY, '1');
+        return true;
+      } catch {
+        return false;
+      }
+    },
+  };
+}

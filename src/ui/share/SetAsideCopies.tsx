@@ -1,0 +1,198 @@
+import { useState } from 'react';
+import type { ScenarioLibrary } from '../../scenario';
+import { recoverScenarios, type SetAsideCopy, type SetAsideKind } from '../../store/set-aside';
+import type { StorageLike } from '../../store';
+import { ListProblems } from './ListProblems';
+
+const WHAT: Readonly<Record<SetAsideKind, string>> = {
+  scenario: 'Saved scenario',
+  list: 'Saved list of scenarios',
+  pins: 'Pinned scenarios',
+  other: 'Saved data',
+};
+
+const stampFormat = new Intl.DateTimeFormat(undefined, { dateStyle: 'medium', timeStyle: 'short' });
+
+/** "Saved scenario set aside 1 Mar 2026, 10:00" (the key when it carries no time). */
+export function setAsideLabel(copy: SetAsideCopy): string {
+  const t = copy.setAsideAt === null ? Number.NaN : Date.parse(copy.setAsideAt);
+  return Number.isNaN(t)
+    ? `${WHAT[copy.kind]} set aside (${copy.key})`
+    : `${WHAT[copy.kind]} set aside ${stampFormat.format(t)}`;
+}
+
+/** "saved scenario set aside Dec 4 …": the label inside a sentence (only its first letter lowered). */
+const lowerFirst = (text: string): string => text.charAt(0).toLowerCase() + text.slice(1);
+
+function sizeText(chars: number): string {
+  return chars < 1024 ? `${chars} characters` : `${(chars / 1024).toFixed(1)} k characters`;
+}
+
+/** "raincut-set-aside-2026-03-01T10-00-00Z.json" from the copy's key. */
+function fileNameOf(copy: SetAsideCopy): string {
+  const stamp = (copy.setAsideAt ?? copy.key).replace(/[^\w-]+/g, '-').replace(/-+$/, '');
+  return `raincut-set-aside-${copy.kind}-${stamp}.json`;
+}
+
+type Verb = 'Restore' | 'Download' | 'Delete';
+const ACTIONS: readonly { readonly verb: Verb; readonly danger: boolean }[] = [
+  { verb: 'Restore', danger: false },
+  { verb: 'Download', danger: false },
+  { verb: 'Delete', danger: true },
+];
+
+export type SetAsideStatus =
+  | { readonly kind: 'done'; readonly text: string }
+  | { readonly kind: 'deleted'; readonly copy: SetAsideCopy; readonly kept: string }
+  | { readonly kind: 'problem'; readonly text: string; readonly details: readonly string[] };
+
+export interface SetAsideCopiesProps {
+  readonly copies: readonly SetAsideCopy[];
+  readonly storage: StorageLike;
+  readonly library: ScenarioLibrary;
+  readonly saveFile: (blob: Blob, fileName: string) => void;
+  /** Called after any change to storage, so the lists on screen are read again. */
+  readonly onChanged: () => void;
+}
+
+const why = (error: unknown): string => (error instanceof Error ? error.message : String(error));
+
+/**
+ * The set-aside copies (src/store/set-aside.ts), each with Restore (the
+ * scenarios in it that this version reads join the saved list), Download
+ * (the text exactly as it was kept) and Delete (with Undo while the panel is
+ * open). Nothing here opens a copy on the workbench: a copy may be the
+ * scenario that stopped the screen, and the list is where it can be looked
+ * at first.
+ */
+export function SetAsideCopies({ copies, storage, library, saveFile, onChanged }: SetAsideCopiesProps) {
+  const [status, setStatus] = useState<SetAsideStatus | null>(null);
+
+  const textOf = (copy: SetAsideCopy): string | null => {
+    try {
+      return storage.getItem(copy.key);
+    } catch {
+      return null;
+    }
+  };
+
+  const restore = (copy: SetAsideCopy): void => {
+    const text = textOf(copy);
+    if (text === null) {
+      setStatus({ kind: 'problem', text: `${setAsideLabel(copy)} could not be read.`, details: [] });
+      return;
+    }
+    const { scenarios, problems } = recoverScenarios(text);
+    const saved: string[] = [];
+    const failed: string[] = problems.map((p) => p.message);
+    for (const scenario of scenarios) {
+      const result = library.save(scenario);
+      if (result.ok) saved.push(`“${result.value.scenario.name}”`);
+      else for (const p of result.problems) failed.push(p.message);
+    }
+    onChanged();
+    if (saved.length === 0) {
+      setStatus({
+        kind: 'problem',
+        text: `Nothing in ${lowerFirst(setAsideLabel(copy))} can be opened by this version of Raincut; it is kept as it was. Download it to keep or repair it.`,
+        details: failed,
+      });
+      return;
+    }
+    const restored = `Restored ${saved.join(', ')} to the saved list; open ${saved.length === 1 ? 'it' : 'them'} from there. The set-aside copy is kept until you delete it.`;
+    setStatus(
+      failed.length === 0 ? { kind: 'done', text: restored } : { kind: 'problem', text: restored, details: failed },
+    );
+  };
+
+  const download = (copy: SetAsideCopy): void => {
+    const text = textOf(copy);
+    if (text === null) {
+      setStatus({ kind: 'problem', text: `${setAsideLabel(copy)} could not be read.`, details: [] });
+      return;
+    }
+    const name = fileNameOf(copy);
+    saveFile(new Blob([text], { type: 'application/json' }), name);
+    setStatus({ kind: 'done', text: `Downloaded ${name}, exactly as it was kept.` });
+  };
+
+  const remove = (copy: SetAsideCopy): void => {
+    const text = textOf(copy);
+    try {
+      storage.removeItem(copy.key);
+    } catch (error) {
+      setStatus({ kind: 'problem', text: `${setAsideLabel(copy)} could not be deleted (${why(error)}).`, details: [] });
+      return;
+    }
+    onChanged();
+    setStatus(text === null ? null : { kind: 'deleted', copy, kept: text });
+  };
+
+  const undoDelete = (copy: SetAsideCopy, text: string): void => {
+    try {
+      storage.setItem(copy.key, text);
+    } catch (error) {
+      setStatus({
+        kind: 'problem',
+        text: `${setAsideLabel(copy)} could not be put back (${why(error)}); download it below before leaving.`,
+        details: [],
+      });
+      return;
+    }
+    onChanged();
+    setStatus({ kind: 'done', text: `Brought back ${lowerFirst(setAsideLabel(copy))}.` });
+  };
+
+  const run: Record<Verb, (copy: SetAsideCopy) => void> = { Restore: restore, Download: download, Delete: remove };
+  if (copies.length === 0 && status === null) return null;
+  return (
+    <section className="library__aside" aria-labelledby="set-aside-title">
+      <h3 id="set-aside-title">Set-aside copies</h3>
+      <p className="library__intro">
+        Saved data Raincut could not open (damaged, or past what this version reads) is kept here exactly as it was.
+      </p>
+      <div className="library__status" role="status">
+        {status?.kind === 'done' ? <p>{status.text}</p> : null}
+        {status?.kind === 'deleted' ? (
+          <p>
+            Deleted {lowerFirst(setAsideLabel(status.copy))} —{' '}
+            <button type="button" className="share-button--small" onClick={() => undoDelete(status.copy, status.kept)}>
+              Undo
+            </button>
+          </p>
+        ) : null}
+      </div>
+      {status?.kind === 'problem' ? <ListProblems text={status.text} details={status.details} /> : null}
+      {copies.length > 0 ? (
+        <ul className="library__list" aria-label="Set-aside copies">
+          {copies.map((copy) => {
+            const label = setAsideLabel(copy);
+            return (
+              <li key={copy.key} className="library__entry">
+                <div className="library__name">
+                  <strong>{label}</strong>
+                  <span className="library__meta">
+                    {sizeText(copy.chars)} · browser storage key “{copy.key}”
+                  </span>
+                </div>
+                <div className="library__buttons" role="group" aria-label={`Actions for ${label}`}>
+                  {ACTIONS.map(({ verb, danger }) => (
+                    <button
+                      key={verb}
+                      type="button"
+                      className={danger ? 'share-button--small share-button--danger' : 'share-button--small'}
+                      aria-label={`${verb} ${label}`}
+                      onClick={() => run[verb](copy)}
+                    >
+                      {verb}
+                    </button>
+                  ))}
+                </div>
+              </li>
+            );
+          })}
+        </ul>
+      ) : null}
+    </section>
+  );
+}
