@@ -24,7 +24,35 @@ interface Case {
   /** Range the true value is drawn from. */
   readonly low: number;
   readonly high: number;
+  /**
+   * False where runoff is not monotone in the parameter, so two values can give
+   * the same runoff and the fit need not return the one drawn (it must still
+   * reproduce the runoff).
+   */
+  readonly unique?: false;
+  /** Storms to fit on (random storms of up to 30 bars when absent). */
+  readonly storms?: fc.Arbitrary<{ durationsH: number[]; depthsMm: number[] }>;
 }
+
+/**
+ * Two bursts of substance with a spell of an hour to two days between: the
+ * storms on which the Green–Ampt soil values for recovery (Sᵢ, λ) act. On
+ * random storms their effect can be a trace (a drop, then a minute dry) and
+ * runoff need not be monotone in λ there, so a fit may answer that no value
+ * in the bounds gives the target.
+ */
+const twoBurstArb = fc
+  .record({
+    first: fc.double({ min: 5, max: 60, noNaN: true }),
+    firstH: fc.double({ min: 0.25, max: 3, noNaN: true }),
+    gapH: fc.double({ min: 1, max: 48, noNaN: true }),
+    second: fc.double({ min: 5, max: 60, noNaN: true }),
+    secondH: fc.double({ min: 0.25, max: 3, noNaN: true }),
+  })
+  .map(({ first, firstH, gapH, second, secondH }) => ({
+    durationsH: [firstH, gapH, secondH],
+    depthsMm: [first, 0, second],
+  }));
 
 const hortonBase = (ponding: boolean): LossMethod => ({ kind: 'horton', f0MmH: 75, fcMmH: 10, kPerH: 4, ponding });
 const greenAmptBase: LossMethod = { kind: 'green-ampt', ksMmH: 3.4, suctionMm: 88.9, moistureDeficit: 0.3 };
@@ -51,17 +79,33 @@ const CASES: readonly Case[] = [
   { name: 'Green–Ampt K', method: greenAmptBase, key: 'ksMmH', low: 0.05, high: 60 },
   {
     name: 'Green–Ampt K with recovery',
-    method: { ...greenAmptBase, recovers: true, recoveryPerH: 0.3 } as LossMethod,
+    method: { ...greenAmptBase, recovers: true, initialSaturation: 0.3, poreSizeIndex: 0.22 },
     key: 'ksMmH',
     low: 0.05,
     high: 60,
   },
   {
-    name: 'Green–Ampt k_r',
-    method: { ...greenAmptBase, recovers: true, recoveryPerH: 0.3 } as LossMethod,
-    key: 'recoveryPerH',
-    low: 0.01,
-    high: 20,
+    name: 'Green–Ampt Sᵢ (recovery)',
+    method: { ...greenAmptBase, recovers: true, initialSaturation: 0.3, poreSizeIndex: 0.22 },
+    key: 'initialSaturation',
+    low: 0,
+    high: 0.99,
+    storms: twoBurstArb,
+    // 5 mm, an hour dry, 5 mm (loam): runoff falls from 0.83 mm at Sᵢ = 0 to 0.324 mm near
+    // Sᵢ = 0.95 and rises to 0.39 mm at 0.99 (a wetter start, but a larger porosity Δθ/(1 − Sᵢ)).
+    unique: false,
+  },
+  {
+    name: 'Green–Ampt λ (recovery)',
+    method: { ...greenAmptBase, recovers: true, initialSaturation: 0.3, poreSizeIndex: 0.22 },
+    key: 'poreSizeIndex',
+    // The soils of Rawls, Brakensiek & Saxton (1982) lie within 0.1–0.7 (from memory).
+    low: 0.05,
+    high: 2,
+    storms: twoBurstArb,
+    // 5 mm, an hour dry, 5 mm (loam): runoff falls from 0.92 mm at λ = 0.01 to 0.65 mm at
+    // λ = 1 and rises to 0.73 mm at λ = 10 (faster drainage, but less pull into the drained zone).
+    unique: false,
   },
   { name: 'Green–Ampt ψ', method: greenAmptBase, key: 'suctionMm', low: 0, high: 400 },
   { name: 'Green–Ampt Δθ', method: greenAmptBase, key: 'moistureDeficit', low: 0, high: 1 },
@@ -100,13 +144,19 @@ describe('calibration of every infiltration parameter', () => {
     'round-trips $name on random storms: the fitted value is within 1e-9 of an exact answer, and of the true value where runoff responds',
     (c) => {
       fc.assert(
-        fc.property(stormArb(30), fc.double({ min: c.low, max: c.high, noNaN: true }), (storm, truth) => {
+        fc.property(c.storms ?? stormArb(30), fc.double({ min: c.low, max: c.high, noNaN: true }), (storm, truth) => {
           const truthMethod = withValue(c.method, c.key, truth);
           // Horton's f₀ ≥ f_c: keep the drawn pair valid.
           if (truthMethod.kind === 'horton' && truthMethod.f0MmH < truthMethod.fcMmH) return;
           const target = excessOf(storm, truthMethod);
           const rain = computeLosses(storm, c.method).rainMm;
           const r = calibrate(storm, c.method, c.key, target);
+          if (!r.ok && c.unique === false) {
+            // A target at the very top of a peak (or bottom of a dip) of a response that is not
+            // monotone can slip between the scanned values; the closest one is then within 1e-8.
+            expect(Math.abs((r.boundExcessMm as number) - target)).toBeLessThanOrEqual(1e-8 * Math.max(target, 1));
+            return;
+          }
           expect(r.ok).toBe(true);
           if (!r.ok) return;
           const nudged = (value: number, factor: number): number | undefined => {
@@ -130,7 +180,7 @@ describe('calibration of every infiltration parameter', () => {
           const down = nudged(truth, 1 - 1e-6);
           const moves = (e: number | undefined): boolean =>
             e !== undefined && Math.abs(e - target) > 1e-7 * Math.max(target, 1e-3);
-          if (truth > 0 && moves(up) && moves(down)) {
+          if (c.unique !== false && truth > 0 && moves(up) && moves(down)) {
             expect(Math.abs(r.value - truth)).toBeLessThanOrEqual(1e-9 * truth);
           }
         }),
