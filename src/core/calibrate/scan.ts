@@ -6,7 +6,8 @@ export const SCAN_POINTS = 48;
 /**
  * Solves g(x) = target on [lo, hi] for a g that need not be monotone (a soil
  * value whose effects pull both ways, e.g. Green–Ampt's λ for recovery):
- * evaluates g at SCAN_POINTS + 1 evenly spaced points and solves, as a
+ * evaluates g at SCAN_POINTS + 1 points, evenly spaced (on a log scale when
+ * the range spans a decade or more), and solves, as a
  * monotone piece (Brent), in the first stretch whose ends straddle or touch
  * the target. When every point lies on one side, the target may still be
  * met near the point that came closest, in a dip (or peak) between its
@@ -18,7 +19,11 @@ export const SCAN_POINTS = 48;
  */
 export function solveByScan(g: (x: number) => number, lo: number, hi: number, target: number): MonotoneSolve {
   if (!(hi > lo)) return solveMonotone(g, lo, hi, target);
-  const at = (k: number): number => (k === SCAN_POINTS ? hi : lo + ((hi - lo) * k) / SCAN_POINTS);
+  // Evenly spaced, or evenly on a log scale over a range of a decade or more
+  // (λ from 0.01 to 10 acts on a log scale).
+  const geometric = lo > 0 && hi >= 10 * lo;
+  const at = (k: number): number =>
+    k === SCAN_POINTS ? hi : geometric ? lo * Math.pow(hi / lo, k / SCAN_POINTS) : lo + ((hi - lo) * k) / SCAN_POINTS;
   // Within rounding of the target counts as meeting it (as in solveMonotone).
   const meets = (v: number): boolean => Math.abs(v - target) <= 1e-13 * Math.max(Math.abs(target), Math.abs(v), 1e-300);
   let gPrev = g(lo);

@@ -92,7 +92,12 @@ export function greenAmptPondedIncrementMm(
   // long storm (u ~ 1e-6) that is below 1e-15 of the answer: no iteration needed.
   const u = low / base;
   if (m * u * u * u <= 3e-15 * low * ((startMm + low) / (base + low))) return low < high ? low : high;
-  return solveIncrement(kt, m, startMm, base, low, high);
+  if (u < 1) return solveIncrement(kt, m, startMm, base, low, high);
+  // Far beyond F₁ + M (a new front after a dry spell, a dry start) the quadratic
+  // bound is poor; K·t + M·ln(1 + K·t/(F₁ + M)) is another lower bound (x ≥ K·t
+  // inside the logarithm) and close to the root there.
+  const far = kt + m * growth(kt, base);
+  return solveIncrement(kt, m, startMm, base, far > low ? (far < high ? far : high) : low, high);
 }
 
 /** ln(1 + x/base); for a tiny base x/base can overflow, and then ln x − ln base is exact enough. */
@@ -250,16 +255,14 @@ function barLoss(k: number, m: number, km: number, depth: number, p: number, dt:
   return loss > p ? p : loss;
 }
 
-/** u − ln(1 + u), without cancellation for small u. */
+/**
+ * u − ln(1 + u) for u > −1. Directly above |u| = 1e-3, where cancellation
+ * costs at most 2ε/|u| ≤ 5e-13 of the result; below, u²·(1/2 − u/3 + u²/4 −
+ * u³/5 + u⁴/6), whose next term is below 1e-15 of the first.
+ */
 function uMinusLog1p(u: number): number {
-  const size = Math.abs(u);
-  if (size > 0.1) return u - Math.log1p(u);
-  // u²·Σ_{n≥0} (−u)^n/(n + 2), by Horner, with as many terms as bring the
-  // next below 1e-17 of the first: 0.1^15, 0.01^8, 0.001^6 …
-  const terms = size > 0.01 ? 16 : size > 1e-3 ? 9 : size > 1e-5 ? 6 : 4;
-  let sum = 0;
-  for (let n = terms - 1; n >= 0; n--) sum = 1 / (n + 2) - u * sum;
-  return u * u * sum;
+  if (Math.abs(u) > 1e-3) return u - Math.log1p(u);
+  return u * u * (1 / 2 - u * (1 / 3 - u * (1 / 4 - u * (1 / 5 - u / 6))));
 }
 
 /**

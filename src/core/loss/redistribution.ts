@@ -40,8 +40,8 @@
  *
  * No closed form exists, so it is solved by its Taylor series in τ, with
  * coefficients from the recurrences for powers and products of series
- * (automatic differentiation of the right-hand side), summed until two
- * successive terms fall below 1e-16 of the sum; where the series would not
+ * (automatic differentiation of the right-hand side), summed until the last
+ * term is below 1e-16 of the sum and the one before below 1e-12; where the series would not
  * converge over the whole spell it is restarted from an intermediate point
  * inside its radius of convergence. It is written in y = (S₀/σ)^(−ε), σ the
  * value at the expansion point: there the leading drainage term is linear in
@@ -55,8 +55,14 @@ export const REDISTRIBUTION_SHAPE_FACTOR = 1.7;
 
 /** Highest order of the series before the step is shortened. */
 const ORDER = 24;
-/** Terms below this (relative to each sum) end the series. */
+/**
+ * A series ends when its last term is below TERM_TOL of its sum and the one
+ * before below PREVIOUS_TOL: the terms then fall by 1e-4 or more a step, and
+ * the rest is below TERM_TOL too (two small terms in a row, so that one
+ * coefficient near zero by chance cannot end it).
+ */
 const TERM_TOL = 1e-16;
+const PREVIOUS_TOL = 1e-12;
 
 /** A soil's numbers for the redistribution equation, worked out once per method. */
 export interface RedistributionSoil {
@@ -107,6 +113,7 @@ const G = new Float64Array(ORDER + 2);
 export function redistribute(soil: RedistributionSoil, zone: WettedZone, tau: number, b: number): void {
   const { si, eps, siC } = soil;
   if (!(zone.sat > si) || !(tau > 0)) return;
+  if (shortSpell(soil, zone, tau, b)) return;
   const toS = -1 / eps; // S = σ·Y^(−1/ε)
   const q = 1 / (3 / soil.invLambda + 2); // Y^(1 − c/ε) = Y^(1/(3λ + 2)): S^c·y = σ^c·Y^q
   let sigma = zone.sat;
@@ -165,9 +172,9 @@ export function redistribute(soil: RedistributionSoil, zone: WettedZone, tau: nu
         termY <= TERM_TOL &&
         termS <= TERM_TOL &&
         termQ <= TERM_TOL &&
-        lastY <= TERM_TOL &&
-        lastS <= TERM_TOL &&
-        lastQ <= TERM_TOL
+        lastY <= PREVIOUS_TOL &&
+        lastS <= PREVIOUS_TOL &&
+        lastQ <= PREVIOUS_TOL
       ) {
         converged = true;
         order = k;
@@ -215,6 +222,99 @@ export function redistribute(soil: RedistributionSoil, zone: WettedZone, tau: nu
   }
   zone.sat = sigma;
   zone.satPow = sigmaPow;
+}
+
+/**
+ * The general series of `redistribute` written out to order 4 in local
+ * variables, for the spells short against the zone's pace (most of them deep
+ * into a long record): the same coefficients and the same test for
+ * convergence. Returns false, leaving `zone` alone, when the series needs more
+ * terms; the general loop then starts again.
+ */
+function shortSpell(soil: RedistributionSoil, zone: WettedZone, h: number, b: number): boolean {
+  const { si, eps, siC } = soil;
+  const a = -1 / eps; // S = σ·Y^a
+  const q = 1 / (3 / soil.invLambda + 2); // Q = Y^q
+  const sigma = zone.sat;
+  const sigmaC = sigma * sigma * sigma * zone.satPow;
+  const sigmaEps = sigmaC * zone.satPow;
+  const x0 = sigma - si;
+  const tol = TERM_TOL;
+  const before = PREVIOUS_TOL;
+  // Order 0 (y = 1).
+  const s0 = sigma;
+  const r0 = 1 / sigma;
+  const d0 = sigmaC - siC;
+  const a0 = 1 - si * r0;
+  const g0 = sigmaEps + b * x0 * d0;
+  const y1 = eps * a0 * g0;
+  // Order 1.
+  const s1 = a * y1 * s0;
+  const r1 = -a * y1 * r0;
+  const q1 = q * y1;
+  const d1 = sigmaC * q1 - siC * y1;
+  const a1 = -si * r1;
+  const g1 = b * (x0 * d1 + s1 * d0);
+  const y2 = (eps * (a0 * g1 + a1 * g0)) / 2;
+  const h2 = h * h;
+  const h3 = h2 * h;
+  const h4 = h3 * h;
+  // Order 2.
+  const s2 = ((a - 1) * y1 * s1 + 2 * a * y2 * s0) / 2;
+  const r2 = ((-a - 1) * y1 * r1 - 2 * a * y2 * r0) / 2;
+  const q2 = ((q - 1) * y1 * q1 + 2 * q * y2) / 2;
+  const d2 = sigmaC * q2 - siC * y2;
+  const a2 = -si * r2;
+  const g2 = b * (x0 * d2 + s1 * d1 + s2 * d0);
+  const y3 = (eps * (a0 * g2 + a1 * g1 + a2 * g0)) / 3;
+  // Order 3.
+  const s3 = ((a - 2) * y1 * s2 + (2 * a - 1) * y2 * s1 + 3 * a * y3 * s0) / 3;
+  const r3 = ((-a - 2) * y1 * r2 + (-2 * a - 1) * y2 * r1 - 3 * a * y3 * r0) / 3;
+  const q3 = ((q - 2) * y1 * q2 + (2 * q - 1) * y2 * q1 + 3 * q * y3) / 3;
+  const d3 = sigmaC * q3 - siC * y3;
+  const a3 = -si * r3;
+  const g3 = b * (x0 * d3 + s1 * d2 + s2 * d1 + s3 * d0);
+  const y4 = (eps * (a0 * g3 + a1 * g2 + a2 * g1 + a3 * g0)) / 4;
+  let sum: number;
+  let qSum: number;
+  // Converged at order 3: terms of orders 2 and 3 (4 for y) below the tolerance.
+  if (
+    Math.abs(y4) * h4 <= tol &&
+    Math.abs(y3) * h3 <= before &&
+    (Math.abs(s3) * h3) / sigma <= tol &&
+    (Math.abs(s2) * h2) / sigma <= before &&
+    Math.abs(q3) * h3 <= tol &&
+    Math.abs(q2) * h2 <= before
+  ) {
+    sum = s0 + h * (s1 + h * (s2 + h * s3));
+    qSum = 1 + h * (q1 + h * (q2 + h * q3));
+  } else {
+    // Order 4.
+    const s4 = ((a - 3) * y1 * s3 + (2 * a - 2) * y2 * s2 + (3 * a - 1) * y3 * s1 + 4 * a * y4 * s0) / 4;
+    const r4 = ((-a - 3) * y1 * r3 + (-2 * a - 2) * y2 * r2 + (-3 * a - 1) * y3 * r1 - 4 * a * y4 * r0) / 4;
+    const q4 = ((q - 3) * y1 * q3 + (2 * q - 2) * y2 * q2 + (3 * q - 1) * y3 * q1 + 4 * q * y4) / 4;
+    const d4 = sigmaC * q4 - siC * y4;
+    const a4 = -si * r4;
+    const g4 = b * (x0 * d4 + s1 * d3 + s2 * d2 + s3 * d1 + s4 * d0);
+    const y5 = (eps * (a0 * g4 + a1 * g3 + a2 * g2 + a3 * g1 + a4 * g0)) / 5;
+    const h5 = h4 * h;
+    if (!(
+      Math.abs(y5) * h5 <= tol &&
+      Math.abs(y4) * h4 <= before &&
+      (Math.abs(s4) * h4) / sigma <= tol &&
+      (Math.abs(s3) * h3) / sigma <= before &&
+      Math.abs(q4) * h4 <= tol &&
+      Math.abs(q3) * h3 <= before
+    )) {
+      return false;
+    }
+    sum = s0 + h * (s1 + h * (s2 + h * (s3 + h * s4)));
+    qSum = 1 + h * (q1 + h * (q2 + h * (q3 + h * q4)));
+  }
+  if (!(sum > si)) return false;
+  zone.sat = sum;
+  zone.satPow /= qSum;
+  return true;
 }
 
 /**

@@ -152,9 +152,13 @@ describe('calibration of every infiltration parameter', () => {
           const rain = computeLosses(storm, c.method).rainMm;
           const r = calibrate(storm, c.method, c.key, target);
           if (!r.ok && c.unique === false) {
-            // A target at the very top of a peak (or bottom of a dip) of a response that is not
-            // monotone can slip between the scanned values; the closest one is then within 1e-8.
-            expect(Math.abs((r.boundExcessMm as number) - target)).toBeLessThanOrEqual(1e-8 * Math.max(target, 1));
+            // Runoff not monotone in the parameter: the scan of 49 values (and the search for a
+            // dip or peak beside the closest) can miss a narrow bump, as where recovery first
+            // takes hold on a fine soil (λ near 0.1: a rise of 3e-4 mm in 0.005 of λ). Then the
+            // answer says so and names the closest value tried, with the runoff it really gives.
+            expect(r.reason).toBe('bound-reached');
+            expect(r.message).toMatch(/was found to give .* of 49 values tried across the range/);
+            expect(r.boundExcessMm).toBe(excessOf(storm, withValue(c.method, c.key, r.boundValue as number)));
             return;
           }
           expect(r.ok).toBe(true);

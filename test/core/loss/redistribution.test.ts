@@ -96,6 +96,25 @@ describe('redistribution of the wetted zone in a dry spell', () => {
     }
   });
 
+  it('is as exact on the short spells of a long record (τ of 1e-7 to 1e-3, the series written out to order 4)', () => {
+    for (const [si, lambda] of [
+      [0.3, 0.22],
+      [0, 0.6],
+      [0.6, 0.13],
+    ] as const) {
+      for (const b of [1e-3, 0.1, 2]) {
+        for (const tau of [1e-7, 1e-5, 1e-4, 1e-3]) {
+          for (const start of [1, si + 0.9 * (1 - si)]) {
+            const got = redistributedSaturation(start, tau, si, lambda, b);
+            // Over so short a spell the change itself is small: hold it to 1e-12 of itself.
+            const ref = rk4Reference(start, tau, si, lambda, b);
+            expect(Math.abs(got - ref)).toBeLessThanOrEqual(1e-12 * Math.abs(start - ref) + 1e-15);
+          }
+        }
+      }
+    }
+  });
+
   it('without capillarity from dry soil follows the closed form S = (1 + ετ)^(−1/ε)', () => {
     // Sᵢ = 0, b = 0: dS/dτ = −S^(1+ε), so d(S^−ε)/dτ = ε and S^−ε = 1 + ετ.
     // λ = 0.25: ε = 3 + 2/0.25 = 11; τ = 2: S = 23^(−1/11) = e^(−3.1354942/11) = e^(−0.2850449) = 0.7519805.
