@@ -43,7 +43,8 @@
  * (automatic differentiation of the right-hand side), summed until the last
  * term is below 1e-16 of the sum and the one before below 1e-12; where the series would not
  * converge over the whole spell it is restarted from an intermediate point
- * inside its radius of convergence. It is written in y = (S₀/σ)^(−ε), σ the
+ * inside its radius of convergence (the short spells of a long record, most
+ * of them, take the same series written out to order 4). It is written in y = (S₀/σ)^(−ε), σ the
  * value at the expansion point: there the leading drainage term is linear in
  * τ (exactly so for Sᵢ = 0 without capillarity), so the series converges fast
  * and cannot overflow. The whole spell is one solve from the state where the
@@ -57,9 +58,9 @@ export const REDISTRIBUTION_SHAPE_FACTOR = 1.7;
 const ORDER = 24;
 /**
  * A series ends when its last term is below TERM_TOL of its sum and the one
- * before below PREVIOUS_TOL: the terms then fall by 1e-4 or more a step, and
- * the rest is below TERM_TOL too (two small terms in a row, so that one
- * coefficient near zero by chance cannot end it).
+ * before below PREVIOUS_TOL: the terms are then falling fast (by some 1e-4 a
+ * step), so the rest is smaller still; two small terms in a row, so that one
+ * coefficient near zero by chance cannot end it.
  */
 const TERM_TOL = 1e-16;
 const PREVIOUS_TOL = 1e-12;
