@@ -284,7 +284,10 @@ function hoursToTake(k: number, m: number, km: number, from: number, to: number,
   const base = start + m;
   // Without suction (M = 0, or too small to add to F₁) the ponded rate is K.
   if (!(m > 0) || base === start) return before + x / k;
-  return before + ((x * start) / base + m * uMinusLog1p(x / base)) / k;
+  const u = x / base;
+  // For a subnormal M on a dry surface u can overflow: then ln(1 + u) = ln x − ln(F₁ + M).
+  const curved = u < 1e300 ? m * uMinusLog1p(u) : x * (m / base) - m * (Math.log(x) - Math.log(base));
+  return before + ((x * start) / base + curved) / k;
 }
 
 /**
@@ -351,7 +354,8 @@ function runGreenAmpt(
         // Two fronts: the new one takes rain until it reaches the old zone.
         const freshKm = k * st.freshM;
         const i = p / dt;
-        const joinH = hoursToTake(k, st.freshM, freshKm, st.fresh, st.join, i);
+        // All the bar's rain would not reach the old zone: no need to time the meeting.
+        const joinH = st.fresh + p <= st.join ? dt : hoursToTake(k, st.freshM, freshKm, st.fresh, st.join, i);
         if (joinH >= dt) {
           loss = barLoss(k, st.freshM, freshKm, st.fresh, p, dt);
           st.fresh += loss;

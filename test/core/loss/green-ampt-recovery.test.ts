@@ -210,6 +210,25 @@ describe('Green–Ampt with recovery in dry spells (Ogden & Saghafian 1997; from
     );
   });
 
+  it('stays exact with a subnormal ψΔθ, where the new front’s meeting time once overflowed to NaN', () => {
+    // Found by the split-invariance property: ψ = 2.5e-323 mm makes M₂ = 5e-324 and
+    // u = F₂/(F₁ + M₂) overflow. With no suction to speak of the soil takes K·t: 2.8209820 h × 1e-6 mm/h.
+    const storm = {
+      durationsH: [0.30037583756168074, 0.27907720008861475, 0.540854100182554, 2.8209820052356576, 0.5979135686620684],
+      depthsMm: [6.674229040041524, 0.000012794712909854219, 0, 0.0006167234654837305, 0.0000013814422640690025],
+    };
+    const method: GreenAmptLoss = {
+      kind: 'green-ampt',
+      ksMmH: 1e-6,
+      suctionMm: 2.5e-323,
+      moistureDeficit: 0.9,
+      recovers: true,
+      initialSaturation: 0,
+      poreSizeIndex: 0.06717920365659026,
+    };
+    expectClose(computeLosses(storm, method).lossMm[3] as number, 2.8209820052356576e-6, 1e-12);
+  });
+
   it('lets dry bars before the rain change nothing (there is no wetted zone yet)', () => {
     const r = computeLosses({ durationsH: [5, 1], depthsMm: [0, 40] }, recovering(clay));
     expect(r.lossMm[1]).toBe(computeLosses({ durationsH: [1], depthsMm: [40] }, clay).lossMm[0]);
