@@ -5,6 +5,7 @@ import type { LossMethod, NumericParam } from '../loss/types';
 import { totalDepthMm, validateStorm, type Storm } from '../storm';
 import { EXACT_CALIBRATORS } from './exact';
 import { PARAMETER_REL_TOL, solveMonotone } from './monotone';
+import { SCAN_POINTS, solveByScan } from './scan';
 
 export type CalibrationFailure =
   'invalid-input' | 'unknown-parameter' | 'invalid-target' | 'negative-target' | 'exceeds-rainfall' | 'bound-reached';
@@ -103,7 +104,21 @@ export function calibrate(
   const lo = param.searchMin ? Math.max(ownLo, param.searchMin(storm, method as never)) : ownLo;
   let hi = Number.isFinite(param.max) ? param.max : (param.searchMax?.(storm, method as never) ?? lo + 1);
   if (!(hi > lo)) hi = lo;
-  const solved = solveMonotone(excessWith, lo, hi, target);
+  const monotone = param.monotone !== false;
+  const solved = monotone ? solveMonotone(excessWith, lo, hi, target) : solveByScan(excessWith, lo, hi, target);
+  if (!solved.ok && !monotone) {
+    return {
+      ok: false,
+      reason: 'bound-reached',
+      bound: solved.side,
+      boundValue: solved.x,
+      boundExcessMm: solved.g,
+      message:
+        `No ${lowerFirst(param.label)} ${describeRange(param)}${unitText(param)} was found to give ${fmt(target)} mm of runoff ` +
+        `(runoff need not rise or fall steadily with it; of ${SCAN_POINTS + 1} values tried across the range, ` +
+        `${fmt(solved.x)}${unitText(param)} came closest with ${fmt(solved.g)} mm).`,
+    };
+  }
   if (!solved.ok) {
     const bound = solved.side === 'min' ? 'lowest' : 'highest';
     return {

@@ -17,8 +17,7 @@ export interface ProportionalLoss {
   readonly coefficient: number;
 }
 /**
- * Capacity recovery in dry spells, shared by the infiltration methods whose
- * capacity falls as the soil wets (Horton, Green–Ampt). Both fields may be
+ * Capacity recovery in dry spells at a rate (Horton). Both fields may be
  * left out by callers written before they existed: no recovery then.
  */
 export interface DrySpellRecovery {
@@ -39,12 +38,24 @@ export interface HortonLoss extends DrySpellRecovery {
   readonly kPerH: number;
   readonly ponding: boolean;
 }
-/** Green–Ampt: saturated conductivity, wetting-front suction head, moisture deficit Δθ. */
-export interface GreenAmptLoss extends DrySpellRecovery {
+/**
+ * Green–Ampt: saturated conductivity, wetting-front suction head, moisture
+ * deficit Δθ. With `recovers`, the wetted zone redistributes in dry spells
+ * (Ogden & Saghafian 1997), which needs the soil's initial effective
+ * saturation Sᵢ and Brooks–Corey λ; callers written before they existed may
+ * leave all three out (no recovery; loam's 0.3 and 0.22).
+ */
+export interface GreenAmptLoss {
   readonly kind: 'green-ampt';
   readonly ksMmH: number;
   readonly suctionMm: number;
   readonly moistureDeficit: number;
+  /** Capacity recovers during bars with no rain (off when absent). */
+  readonly recovers?: boolean;
+  /** Initial effective saturation Sᵢ, 0–1; read only while `recovers`. */
+  readonly initialSaturation?: number;
+  /** Brooks–Corey pore-size distribution index λ; read only while `recovers`. */
+  readonly poreSizeIndex?: number;
 }
 /**
  * How S on the λ = 0.2 basis converts to the λ = 0.05 basis: 'power',
@@ -109,6 +120,12 @@ export interface NumericParam<K extends LossKind = LossKind> {
    */
   readonly searchMin?: (storm: Storm, method: MethodOf<K>) => number;
   readonly help: string;
+  /**
+   * False when runoff need not be monotone in this parameter (a soil value
+   * whose effects pull both ways): calibration then scans the search interval
+   * for a stretch that holds the answer before solving. Absent: monotone.
+   */
+  readonly monotone?: false;
   /**
    * The value the core uses when a method object leaves this parameter out
    * (it was added after callers were written). Absent: the parameter is required.
