@@ -12,10 +12,57 @@ export interface Storm {
 }
 
 /**
+ * Whether one bar is clean: its duration and its depth pass the rules below.
+ * The one statement of them: validateStorm throws where it fails, and the
+ * fused passes (computeLosses) test it as they read each bar, so the two
+ * cannot disagree. Small enough for the optimiser to inline.
+ */
+export function isCleanBar(durationH: unknown, depthMm: unknown): boolean {
+  return isCleanDuration(durationH) && isCleanDepth(depthMm);
+}
+
+/** A bar lasts a finite number of hours greater than zero. */
+function isCleanDuration(durationH: unknown): boolean {
+  return typeof durationH === 'number' && durationH > 0 && durationH < Infinity;
+}
+
+/** A bar's depth is a finite number of millimetres, zero or more. */
+function isCleanDepth(depthMm: unknown): boolean {
+  return typeof depthMm === 'number' && depthMm >= 0 && depthMm < Infinity;
+}
+
+/**
  * Throws an InputError naming the first bad bar or field. Runs once per call at
  * the core's edge, so the methods inside can assume clean data.
  */
 export function validateStorm(storm: Storm): void {
+  validateStormDepthMm(storm);
+}
+
+/**
+ * validateStorm that also returns the storm's total depth, mm, summed in the
+ * same pass over the bars (calibration needs both: one read of a long storm
+ * instead of two).
+ */
+export function validateStormDepthMm(storm: Storm): number {
+  validateStormLists(storm);
+  const { durationsH, depthsMm } = storm;
+  let total = 0;
+  for (let k = 0; k < durationsH.length; k++) {
+    const d = durationsH[k];
+    const p = depthsMm[k];
+    if (!isCleanBar(d, p)) throw barError(k, d, p);
+    total += p as number;
+  }
+  validateStormStart(storm);
+  return total;
+}
+
+/**
+ * The checks validateStorm makes before it reads any bar: both lists are
+ * there and match one to one. Throws an InputError naming the field.
+ */
+export function validateStormLists(storm: Storm): void {
   const { durationsH, depthsMm } = storm;
   if (!durationsH || typeof durationsH.length !== 'number') {
     throw new InputError('durationsH', 'The storm has no list of bar durations (durationsH).');
@@ -30,28 +77,29 @@ export function validateStorm(storm: Storm): void {
       `The storm has ${n} bar durations but ${depthsMm.length} bar depths; they must match one to one.`,
     );
   }
-  for (let k = 0; k < n; k++) {
-    const d = durationsH[k] as number;
-    // `!(d > 0)` also catches NaN; the second test catches +Infinity.
-    if (!(d > 0) || d === Infinity || typeof d !== 'number') {
-      throw new InputError(
-        'durationsH',
-        `Bar ${k + 1}: duration must be a finite number of hours greater than zero (got ${String(d)}).`,
-        k,
-      );
-    }
-    const p = depthsMm[k] as number;
-    if (!(p >= 0) || p === Infinity || typeof p !== 'number') {
-      throw new InputError(
-        'depthsMm',
-        `Bar ${k + 1}: rainfall depth must be a finite number of millimetres, zero or more (got ${String(p)}).`,
-        k,
-      );
-    }
-  }
+}
+
+/** The check validateStorm makes after every bar: the start, when given, is a date-time. */
+export function validateStormStart(storm: Storm): void {
   if (storm.startIso !== undefined && Number.isNaN(Date.parse(storm.startIso))) {
     throw new InputError('startIso', `The storm start "${storm.startIso}" is not an ISO 8601 date-time.`);
   }
+}
+
+/** The error for bar k, which isCleanBar refused: the duration if it is bad, else the depth. */
+function barError(k: number, d: unknown, p: unknown): InputError {
+  if (!isCleanDuration(d)) {
+    return new InputError(
+      'durationsH',
+      `Bar ${k + 1}: duration must be a finite number of hours greater than zero (got ${String(d)}).`,
+      k,
+    );
+  }
+  return new InputError(
+    'depthsMm',
+    `Bar ${k + 1}: rainfall depth must be a finite number of millimetres, zero or more (got ${String(p)}).`,
+    k,
+  );
 }
 
 /** Total rainfall depth, mm. */
