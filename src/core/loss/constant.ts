@@ -1,27 +1,37 @@
-import { isCleanBar } from '../storm';
+import { isCleanBar, PASS_BLOCK } from '../storm';
 import type { CheckedComputeFn, ComputeFn, MethodSpec, TotalExcessFn } from './types';
 import { peakRate } from './search-bounds';
 
-// Three habits of V8's optimiser shape the pass below (figures: 10⁶ bars,
-// CPU time, measured on the reference machine).
+// Habits of V8's optimiser shape the pass below (figures: 10⁶ bars, CPU
+// time, measured here).
 // - A loop over 10⁶ bars run once per call is optimised only mid-loop (on-
 //   stack replacement), and the function can stay in the baseline tier,
 //   entering that code call after call: 6–7 ms where the function optimised
-//   whole takes 2.7. In blocks of BLOCK bars it is called often enough to be
-//   optimised whole. The sums run bar after bar across blocks, so the totals
-//   are the same to the last bit.
+//   whole takes 2.7. In blocks of PASS_BLOCK bars it is called often enough
+//   to be optimised whole. The sums run bar after bar across blocks, so the
+//   totals are the same to the last bit.
 // - The type feedback of an element read is kept per function literal. One
 //   loop fed Float64Array columns and plain arrays in their four layouts
 //   (packed or holey, whole numbers or not) sees five, turns megamorphic and
 //   runs ten times slower (27 ms instead of 2.5). So the block is written
 //   twice, for Float64Array columns and for everything else; the two must stay
 //   alike (test/core/loss/compute.test.ts holds them to the same numbers).
+// - The running totals pass from block to block in module variables, not in
+//   an object or array: reading and writing those needs no type feedback, so
+//   code optimised mid-loop does not fall back to the baseline tier at the
+//   loop's end, as it did each call when the block ended by storing into a
+//   Float64Array (the store had never run when the loop was optimised).
 // - isCleanBar is called through a local name. Bundled, that is the same
 //   function; where modules stay apart (the test and bench runner's loader)
 //   each use of an imported name reads a getter on the module object, which
 //   is not inlined: once per bar, 12 ms instead of 4.
-const BLOCK = 16384;
+const BLOCK = PASS_BLOCK;
 const cleanBar = isCleanBar;
+// Rain, loss, excess (mm) and peak excess rate (mm/h) of the bars so far.
+let sumRain = 0;
+let sumLoss = 0;
+let sumExcess = 0;
+let sumPeak = 0;
 
 /**
  * Constant loss rate (φ-index): each bar loses φ·Δt or its whole depth,
@@ -39,21 +49,18 @@ export const computeConstantChecked: CheckedComputeFn<'constant'> = (
   const phi = method.rateMmH;
   const n = depthsMm.length;
   const typed = durationsH instanceof Float64Array && depthsMm instanceof Float64Array;
-  // Running totals carried from block to block: rain, loss, excess, peak.
-  const totals = new Float64Array(4);
+  sumRain = 0;
+  sumLoss = 0;
+  sumExcess = 0;
+  sumPeak = 0;
   for (let start = 0; start < n; start += BLOCK) {
     const end = Math.min(n, start + BLOCK);
     const clean = typed
-      ? constantBlockTyped(durationsH, depthsMm, phi, lossOut, excessOut, start, end, totals)
-      : constantBlockListed(durationsH, depthsMm, phi, lossOut, excessOut, start, end, totals);
+      ? constantBlockTyped(durationsH, depthsMm, phi, lossOut, excessOut, start, end)
+      : constantBlockListed(durationsH, depthsMm, phi, lossOut, excessOut, start, end);
     if (!clean) return null;
   }
-  return {
-    rainMm: totals[0] as number,
-    totalLossMm: totals[1] as number,
-    totalExcessMm: totals[2] as number,
-    peakExcessMmH: totals[3] as number,
-  };
+  return { rainMm: sumRain, totalLossMm: sumLoss, totalExcessMm: sumExcess, peakExcessMmH: sumPeak };
 };
 
 /** The same pass over a clean storm, where every check holds. */
@@ -68,12 +75,11 @@ function constantBlockTyped(
   excessOut: Float64Array,
   start: number,
   end: number,
-  totals: Float64Array,
 ): boolean {
-  let rain = totals[0] as number;
-  let loss = totals[1] as number;
-  let total = totals[2] as number;
-  let peak = totals[3] as number;
+  let rain = sumRain;
+  let loss = sumLoss;
+  let total = sumExcess;
+  let peak = sumPeak;
   for (let k = start; k < end; k++) {
     const p = depthsMm[k] as number;
     const dt = durationsH[k] as number;
@@ -93,10 +99,10 @@ function constantBlockTyped(
     // Compare by multiplication; divide only when the peak moves (rarely).
     if (excess > peak * dt) peak = excess / dt;
   }
-  totals[0] = rain;
-  totals[1] = loss;
-  totals[2] = total;
-  totals[3] = peak;
+  sumRain = rain;
+  sumLoss = loss;
+  sumExcess = total;
+  sumPeak = peak;
   return true;
 }
 
@@ -109,12 +115,11 @@ function constantBlockListed(
   excessOut: Float64Array,
   start: number,
   end: number,
-  totals: Float64Array,
 ): boolean {
-  let rain = totals[0] as number;
-  let loss = totals[1] as number;
-  let total = totals[2] as number;
-  let peak = totals[3] as number;
+  let rain = sumRain;
+  let loss = sumLoss;
+  let total = sumExcess;
+  let peak = sumPeak;
   for (let k = start; k < end; k++) {
     const p = depthsMm[k] as number;
     const dt = durationsH[k] as number;
@@ -129,23 +134,38 @@ function constantBlockListed(
     total += excess;
     if (excess > peak * dt) peak = excess / dt;
   }
-  totals[0] = rain;
-  totals[1] = loss;
-  totals[2] = total;
-  totals[3] = peak;
+  sumRain = rain;
+  sumLoss = loss;
+  sumExcess = total;
+  sumPeak = peak;
   return true;
 }
 
 /** Σ max(0, P − φΔt), the same expression as computeConstant, summed only. */
 export const totalExcessConstant: TotalExcessFn<'constant'> = (durationsH, depthsMm, method) => {
-  const phi = method.rateMmH;
+  const n = depthsMm.length;
   let total = 0;
-  for (let k = 0; k < depthsMm.length; k++) {
+  for (let start = 0; start < n; start += BLOCK) {
+    total = excessSum(durationsH, depthsMm, method.rateMmH, start, Math.min(n, start + BLOCK), total);
+  }
+  return total;
+};
+
+/** `total` plus the excess of bars start to end − 1 (clean bars), in blocks as above. */
+function excessSum(
+  durationsH: ArrayLike<number>,
+  depthsMm: ArrayLike<number>,
+  phi: number,
+  start: number,
+  end: number,
+  total: number,
+): number {
+  for (let k = start; k < end; k++) {
     const x = (depthsMm[k] as number) - phi * (durationsH[k] as number);
     total += 0.5 * (x + Math.abs(x));
   }
   return total;
-};
+}
 
 export const constantSpec: MethodSpec<'constant'> = {
   kind: 'constant',

@@ -1,6 +1,6 @@
 // The public computeLosses: for the constant rate it checks every bar in the
-// same loop that computes it (src/core/loss/constant.ts), in blocks of 16,384
-// bars, with one copy of the loop for Float64Array columns and one for
+// same loop that computes it (src/core/loss/constant.ts), in blocks of
+// PASS_BLOCK bars, with one copy of the loop for Float64Array columns and one for
 // everything else. These tests hold that path to what validating first gave:
 // the same InputError (field, bar, words) wherever the bad bar lies, nothing
 // returned or written for a refused storm, and the same numbers either way.
@@ -15,6 +15,7 @@ import {
   type LossMethod,
   type Storm,
 } from '../../../src/core';
+import { PASS_BLOCK } from '../../../src/core/storm';
 import { stormArb } from '../../helpers/arbitraries';
 import { thrown } from '../../helpers/thrown';
 
@@ -68,9 +69,8 @@ describe('computeLosses with the constant rate (checks fused into the pass)', ()
     expect(r.runoffFraction).toBe(4 / 9);
   });
 
-  // 40,000 bars: two full blocks of 16,384 and a part block. Bars at block
-  // edges (16,384 and 16,385 counted from 1) and the very last are the ones a
-  // blocked loop could miss.
+  // 40,000 bars: full blocks and a part block. Bars either side of the first
+  // block edge and the very last are the ones a blocked loop could miss.
   const N = 40_000;
   const badDepths: [string, unknown, string][] = [
     ['NaN', Number.NaN, 'NaN'],
@@ -80,7 +80,11 @@ describe('computeLosses with the constant rate (checks fused into the pass)', ()
     ['null', null, 'null'],
     ['missing', undefined, 'undefined'],
   ];
-  for (const at of [0, 16_383, 16_384, N - 1]) {
+  it('has storms long enough to cross block edges and end in a part block', () => {
+    expect(N).toBeGreaterThan(2 * PASS_BLOCK);
+    expect(N % PASS_BLOCK).not.toBe(0);
+  });
+  for (const at of [0, PASS_BLOCK - 1, PASS_BLOCK, N - 1]) {
     it.each(badDepths)(`names bar ${at + 1} of ${N} when its depth is %s`, (_label, bad, shown) => {
       const storm = longStorm(N);
       storm.depthsMm[at] = bad;
