@@ -2,7 +2,7 @@ import { isInputError } from '../errors';
 import { totalExcessMm } from '../loss/compute';
 import { describeRange, methodSpec, numericParam, validateMethod } from '../loss/methods';
 import type { LossMethod, NumericParam } from '../loss/types';
-import { totalDepthMm, validateStorm, type Storm } from '../storm';
+import { validateStormDepthMm, type Storm } from '../storm';
 import { EXACT_CALIBRATORS } from './exact';
 import { PARAMETER_REL_TOL, solveMonotone } from './monotone';
 import { SCAN_POINTS, solveByScan } from './scan';
@@ -51,8 +51,9 @@ export function calibrate(
   parameter: string,
   targetExcessMm: number,
 ): CalibrationResult {
+  let rainMm: number;
   try {
-    validateStorm(storm);
+    rainMm = validateStormDepthMm(storm);
     validateMethod(method);
   } catch (error) {
     if (isInputError(error)) return { ok: false, reason: 'invalid-input', message: error.message };
@@ -78,7 +79,6 @@ export function calibrate(
   if (targetExcessMm < 0) {
     return { ok: false, reason: 'negative-target', message: 'The observed runoff cannot be negative.' };
   }
-  const rainMm = totalDepthMm(storm);
   // Allow for rounding when the target was itself summed from the bars.
   const slack = 1e-12 * Math.max(rainMm, 1);
   if (targetExcessMm > rainMm + slack) {

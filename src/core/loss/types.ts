@@ -185,6 +185,21 @@ export interface BarTotals {
   readonly peakExcessMmH: number;
 }
 
+/**
+ * A compute that checks each bar as it reads it, by storm.ts's isCleanBar (the
+ * rule validateStorm enforces), so the public computeLosses reads the storm
+ * once instead of twice. The method is already valid; the storm's lists are
+ * there and of equal length. Returns the totals, or null at the first bar that
+ * fails (the output arrays then hold a partial pass: the caller discards them).
+ */
+export type CheckedComputeFn<K extends LossKind> = (
+  durationsH: ArrayLike<number>,
+  depthsMm: ArrayLike<number>,
+  method: MethodOf<K>,
+  lossOut: Float64Array,
+  excessOut: Float64Array,
+) => BarTotals | null;
+
 /** Total excess of a clean storm, mm, with no per-bar output. */
 export type TotalExcessFn<K extends LossKind> = (
   durationsH: ArrayLike<number>,
@@ -205,6 +220,12 @@ export interface MethodSpec<K extends LossKind = LossKind> {
   /** What happens in a bar with no rain under these settings, in a plain sentence or two. */
   readonly dryBars: (method: MethodOf<K>) => string;
   readonly compute: ComputeFn<K>;
+  /**
+   * Optional: `compute` with the bar checks in the same loop (see
+   * CheckedComputeFn), for methods whose pass is cheap enough that a separate
+   * validation pass would cost as much as the computation.
+   */
+  readonly checkedCompute?: CheckedComputeFn<K>;
   /** Cross-parameter checks beyond each parameter's own range (throws InputError). */
   readonly validateExtra?: (method: MethodOf<K>) => void;
   /**
