@@ -69,6 +69,20 @@ describe('computeLosses with the constant rate (checks fused into the pass)', ()
     expect(r.runoffFraction).toBe(4 / 9);
   });
 
+  // The limits of time (time-limits.ts) hold in the fused pass as in validateStorm:
+  // a bar of half a second, and two bars of 300 years (600 years past a 500-year span).
+  it('refuses a bar shorter than one second, naming it', () => {
+    const e = thrown(() => computeLosses({ durationsH: [1, 0.5 / 3600, 1], depthsMm: [1, 1, 1] }, PHI));
+    expect(e).toMatchObject({ field: 'durationsH', index: 1 });
+    expect((e as Error).message).toMatch(/^Bar 2: duration must be at least 1 second/);
+  });
+  it('refuses a storm that runs past a record\'s longest span, naming the bar that passes it', () => {
+    const years300 = 300 * 8766;
+    const e = thrown(() => computeLosses({ durationsH: [years300, years300], depthsMm: [1, 1] }, PHI));
+    expect(e).toMatchObject({ field: 'durationsH', index: 1 });
+    expect((e as Error).message).toMatch(/^Bar 2: the storm would run .* from its start; a record spans at most 500 years/);
+  });
+
   // 40,000 bars: full blocks and a part block. Bars either side of the first
   // block edge and the very last are the ones a blocked loop could miss.
   const N = 40_000;
