@@ -1,5 +1,5 @@
 import type { ReactNode } from 'react';
-import { StoreProvider, useActions, type WorkbenchStore } from '../store';
+import { StoreProvider, useActions, useScenario, type WorkbenchStore } from '../store';
 import { Hyetograph } from './chart/Hyetograph';
 import { useUndoShortcuts } from './keyboard/useUndoShortcuts';
 import { Caution } from './layout/Caution';
@@ -7,15 +7,37 @@ import { Header } from './layout/Header';
 import { StorageNoticeBar } from './layout/StorageNotice';
 import { MatchingPanel } from './matching/MatchingPanel';
 import { MethodPanel } from './method/MethodPanel';
-import { HydrographChart, SeparationPanel } from './observed';
+import { HydrographChart } from './observed';
 import { RainfallToolbar } from './rainfall/RainfallToolbar';
 import { ResultsPanel } from './results/ResultsPanel';
 import { BarTable, DrawableChart, RainfallTools, StormInputProvider, StormPanels } from './storm-input';
-import { ComparePanel } from './compare';
-import { PrintReport } from './export';
+import { PrintReport } from './export/PrintReport';
 import { LinkNotice, ScenarioBar, ScenarioServicesProvider, type ScenarioServices } from './share';
-import { EventsView, ViewTabs } from './events';
-import { DesignStormView } from './design-storm';
+import { usePins } from './share/services';
+import { ViewTabs } from './events/ViewTabs';
+import { lazyPart } from './layout/LazyPart';
+
+// Views the first screen does not show load when first opened, so the first screen's JavaScript stays small
+// (scripts/check-first-screen.mjs holds it under its budget).
+const EventsView = lazyPart('event set', () => import('./events').then((m) => m.EventsView));
+const DesignStormView = lazyPart('design storm view', () => import('./design-storm').then((m) => m.DesignStormView));
+const ComparePanel = lazyPart('comparison', () => import('./compare').then((m) => m.ComparePanel));
+
+const SeparationPanel = lazyPart('baseflow separation', () =>
+  import('./observed/SeparationPanel').then((m) => m.SeparationPanel),
+);
+
+/** Baseflow separation, fetched once there is a streamflow record. */
+function RecordSeparation() {
+  const hasRecord = useScenario((s) => s.streamflow !== null);
+  return hasRecord ? <SeparationPanel /> : null;
+}
+
+/** The comparison of pinned scenarios, fetched once something is pinned. */
+function PinnedComparison() {
+  const { pins, problems } = usePins();
+  return pins.length > 0 || problems.length > 0 ? <ComparePanel /> : null;
+}
 
 export interface AppProps {
   readonly store: WorkbenchStore;
@@ -51,7 +73,7 @@ function Workbench({ rainfallTools }: { rainfallTools?: ReactNode }) {
                     </DrawableChart>
                     <HydrographChart />
                     <ResultsPanel />
-                    <SeparationPanel />
+                    <RecordSeparation />
                     <BarTable />
                   </StormInputProvider>
                 </div>
@@ -59,7 +81,7 @@ function Workbench({ rainfallTools }: { rainfallTools?: ReactNode }) {
                   <MethodPanel />
                   <MatchingPanel />
                 </div>
-                <ComparePanel />
+                <PinnedComparison />
               </div>
             ),
           },

@@ -16,8 +16,8 @@ export interface ImportLauncher<S> {
 }
 
 export interface ImportLauncherOptions<S> {
-  /** The draft of a first paste, and of the next one after a record is used. */
-  readonly empty: ImportDraft<Partial<S>>;
+  /** The draft of a first paste, and of the next one after a record is used (default: no text, no corrections). */
+  readonly empty?: ImportDraft<Partial<S>>;
   /** Names the record in file messages ("the rainfall"). */
   readonly fileWhat: string;
   /** Runs each time the dialog opens. */
@@ -28,7 +28,13 @@ export interface ImportLauncherOptions<S> {
  * The buttons that lead to an import dialog ("Paste …", "Open … file…"):
  * which draft the dialog opens on, and what is kept when it is cancelled.
  */
-export function useImportLauncher<S>({ empty, fileWhat, beforeOpen }: ImportLauncherOptions<S>): ImportLauncher<S> {
+const BLANK = { text: '', fileName: null, corrections: {} } as const;
+
+export function useImportLauncher<S>({
+  empty = BLANK,
+  fileWhat,
+  beforeOpen,
+}: ImportLauncherOptions<S>): ImportLauncher<S> {
   const [dialog, setDialog] = useState<ImportDraft<Partial<S>> | null>(null);
   const [kept, setKept] = useState(empty);
 

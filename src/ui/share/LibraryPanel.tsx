@@ -2,9 +2,8 @@ import { useCallback, useEffect, useState, type FormEvent, type KeyboardEvent } 
 import { methodSpec } from '../../core';
 import type { DeletedEntry, LibraryEntry, LibraryListing, LibraryResult, Problem } from '../../scenario';
 import { useActions, useWorkbenchStore } from '../../store';
+import { LIBRARY_PANEL_ID } from './ScenarioBar';
 import { useServices } from './services';
-
-export const LIBRARY_PANEL_ID = 'saved-scenarios';
 
 const savedAtFormat = new Intl.DateTimeFormat(undefined, { dateStyle: 'medium', timeStyle: 'short' });
 const quoted = (name: string): string => `“${name}”`;

@@ -1,5 +1,5 @@
 // @vitest-environment jsdom
-import { act, screen } from '@testing-library/react';
+import { act, screen, waitFor } from '@testing-library/react';
 import Papa from 'papaparse';
 import { describe, expect, it } from 'vitest';
 import { barEdgesH, computeLosses, convertDepth, runoffVolumeM3 } from '../../../src/core';
@@ -30,8 +30,12 @@ function parse(text: string) {
 async function exportedCsv(scenario: Scenario) {
   const view = renderTools({ fallback: scenario });
   await view.user.click(screen.getByRole('button', { name: 'Export CSV' }));
-  const file = view.saved.at(-1);
-  if (!file) throw new Error('no CSV was saved');
+  // The export code loads on the first export, so the file arrives a moment after the click.
+  const file = await waitFor(() => {
+    const saved = view.saved.at(-1);
+    if (!saved) throw new Error('no CSV was saved');
+    return saved;
+  });
   const bytes = await bytesOf(file.blob);
   return { ...view, name: file.name, bytes, text: new TextDecoder('utf-8').decode(bytes) };
 }

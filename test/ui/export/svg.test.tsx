@@ -72,7 +72,7 @@ describe('chart SVG', () => {
     const view = renderTools({ fallback: FOUR_BARS });
     document.querySelector('svg.chart__svg')?.classList.remove('chart__svg');
     await view.user.click(screen.getByRole('button', { name: 'Export SVG' }));
-    expect(screen.getByRole('alert', { name: MESSAGE })).toHaveTextContent(
+    expect(await screen.findByRole('alert', { name: MESSAGE })).toHaveTextContent(
       'The chart was not exported: the chart is not on screen.',
     );
     expect(view.saved).toEqual([]);

@@ -1,4 +1,4 @@
-import { render } from '@testing-library/react';
+import { render, waitFor } from '@testing-library/react';
 import userEvent from '@testing-library/user-event';
 import type { Scenario } from '../../../src/scenario/types';
 import { readScenario } from '../../../src/store';
@@ -107,8 +107,12 @@ export function renderTools(options: ToolsOptions = {}) {
 
 /** The text of a saved (downloaded) file. */
 export async function savedText(saved: readonly { name: string; blob: Blob }[], index = -1): Promise<string> {
-  const file = saved.at(index);
-  if (!file) throw new Error('nothing was saved');
+  // The export code loads on the first export, so the file arrives a moment after the click.
+  const file = await waitFor(() => {
+    const at = saved.at(index);
+    if (!at) throw new Error('nothing was saved');
+    return at;
+  });
   // jsdom's Blob has no text(); FileReader reads it.
   return new Promise((resolve, reject) => {
     const reader = new FileReader();

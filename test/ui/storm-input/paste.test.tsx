@@ -12,7 +12,8 @@ const WITH_BAD_ROWS = 'Time,Rain mm\n0,0.2\n10,1.4\n20,abc\n30,-2\n40,0.8\n';
 
 async function openPaste(user: ReturnType<typeof renderWorkbench>['user']) {
   await user.click(screen.getByRole('button', { name: 'Paste rainfall…' }));
-  const dialog = screen.getByRole('dialog', { name: 'Paste rainfall' });
+  // The dialog's code loads when it is first opened.
+  const dialog = await screen.findByRole('dialog', { name: 'Paste rainfall' });
   return dialog;
 }
 

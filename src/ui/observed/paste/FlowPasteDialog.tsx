@@ -16,8 +16,6 @@ import { FlowSettings, type FlowSettingsPatch } from './FlowSettings';
 /** What the dialog holds: kept when it is cancelled, so reopening shows the same text and corrections. */
 export type FlowDraft = ImportDraft<FlowSettingsPatch>;
 
-export const EMPTY_FLOW_DRAFT: FlowDraft = { text: '', fileName: null, corrections: {} };
-
 function recordOf(text: string, settings: FlowImportSettings): FlowRecord | null {
   const result = applyFlowImport(text, settings);
   return result.ok ? result.record : null;

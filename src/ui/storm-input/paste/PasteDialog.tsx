@@ -12,8 +12,6 @@ import { PreviewBars } from './PreviewBars';
 /** What the dialog holds: kept when it is cancelled, so reopening shows the same text and corrections. */
 export type PasteDraft = ImportDraft<SettingsPatch>;
 
-export const EMPTY_DRAFT: PasteDraft = { text: '', fileName: null, corrections: {} };
-
 export interface PasteDialogProps {
   readonly initial: PasteDraft;
   /** Called on cancel with what to keep, and on accept with null. */
