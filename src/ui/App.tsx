@@ -10,7 +10,7 @@ import { MethodPanel } from './method/MethodPanel';
 import { HydrographChart } from './observed';
 import { RainfallToolbar } from './rainfall/RainfallToolbar';
 import { ResultsPanel } from './results/ResultsPanel';
-import { BarTable, DrawableChart, RainfallTools, StormInputProvider, StormPanels } from './storm-input';
+import { DrawableChart, RainfallTools, StormInputProvider, StormPanels } from './storm-input';
 import { PrintReport } from './export/PrintReport';
 import { LinkNotice, ScenarioBar, ScenarioServicesProvider, type ScenarioServices } from './share';
 import { usePins } from './share/services';
@@ -23,6 +23,8 @@ const EventsView = lazyPart('event set', () => import('./events').then((m) => m.
 const DesignStormView = lazyPart('design storm view', () => import('./design-storm').then((m) => m.DesignStormView));
 const ComparePanel = lazyPart('comparison', () => import('./compare').then((m) => m.ComparePanel));
 
+// Below the chart and the results, out of the first view: it loads just after the first screen.
+const BarTable = lazyPart('bar table', () => import('./storm-input/table/BarTable').then((m) => m.BarTable));
 const SeparationPanel = lazyPart('baseflow separation', () =>
   import('./observed/SeparationPanel').then((m) => m.SeparationPanel),
 );

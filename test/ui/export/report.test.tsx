@@ -6,6 +6,7 @@ import { CAUTION_TEXT } from '../../../src/scenario';
 import { loadReport } from '../../../src/ui/export';
 import { formatPercent, formatValue } from '../../../src/ui/format';
 import { FOUR_BARS } from '../store/fixtures';
+import { LAZY_LOAD_MS } from '../render';
 import { SHARED, renderTools } from '../share/render-tools';
 
 const mm = (v: number): string => `${formatValue(v)} mm`;
@@ -19,7 +20,7 @@ describe('printable report', () => {
     expect(screen.queryByRole('article', { name: 'Printable report' })).toBeNull();
     await user.click(screen.getByRole('button', { name: 'Print report' }));
     // The button waits for the report's code (not part of the first screen) before opening the print dialog.
-    await waitFor(() => expect(calls.print).toBe(1));
+    await waitFor(() => expect(calls.print).toBe(1), { timeout: LAZY_LOAD_MS });
 
     act(() => {
       window.dispatchEvent(new Event('beforeprint'));

@@ -17,7 +17,7 @@ import { sharedTimeSpanH } from '../../../src/ui/chart/time-span';
 import { formatForField as formatField, formatValue } from '../../../src/ui/format';
 import { HYDROGRAPH_HEIGHT } from '../../../src/ui/observed';
 import { hydrographFrame } from '../../../src/ui/observed/hydrograph-frame';
-import { lazyPartsLoaded, renderWorkbench } from '../render';
+import { LAZY_LOAD_MS, lazyPartsLoaded, renderWorkbench } from '../render';
 import { FOUR_BARS } from '../store/fixtures';
 import { TRIANGLE, TRIANGLE_TEXT, WITH_TRIANGLE } from './fixtures';
 
@@ -52,7 +52,7 @@ async function renderRecord(...args: Parameters<typeof renderWorkbench>) {
 async function pasteRecord(user: ReturnType<typeof renderWorkbench>['user'], text: string) {
   await user.click(screen.getByRole('button', { name: 'Paste streamflow…' }));
   // The dialog's code loads when it is first opened.
-  const dialog = await screen.findByRole('dialog', { name: 'Paste streamflow' });
+  const dialog = await screen.findByRole('dialog', { name: 'Paste streamflow' }, { timeout: LAZY_LOAD_MS });
   const box = within(dialog).getByLabelText('Streamflow text');
   await user.click(box);
   await user.paste(text);
@@ -133,7 +133,7 @@ describe('bringing a streamflow record in', () => {
     const { user, scenario } = renderWorkbench();
     const file = new File([TRIANGLE_TEXT], 'gauge-event.csv', { type: 'text/csv' });
     await user.upload(screen.getByLabelText('Streamflow file to open'), file);
-    const dialog = await screen.findByRole('dialog', { name: 'Paste streamflow' });
+    const dialog = await screen.findByRole('dialog', { name: 'Paste streamflow' }, { timeout: LAZY_LOAD_MS });
     expect(within(dialog).getByText('Read from gauge-event.csv')).toBeInTheDocument();
     await user.click(within(dialog).getByRole('button', { name: 'Use this record' }));
     expect(flowOf(scenario()).dischargeM3s).toEqual(TRIANGLE.dischargeM3s);
