@@ -1,10 +1,15 @@
 /// <reference types="vitest/config" />
 import { defineConfig } from 'vite';
 import react from '@vitejs/plugin-react';
+import { offlineApp } from './build/offline-app.ts';
 
 // One config for the app build, the dev server and Vitest.
 export default defineConfig({
-  plugins: [react()],
+  plugins: [
+    react(),
+    // --- Working with no network (issue 14): the installable app with its service worker (build/offline-app.ts).
+    offlineApp(),
+  ],
   base: './',
   build: {
     outDir: 'dist',

@@ -1,4 +1,7 @@
+/// <reference types="vite-plugin-pwa/vanillajs" />
 import { StrictMode } from 'react';
+import { registerSW } from 'virtual:pwa-register';
+import { createUpdateChannel } from './offline/updates';
 import { createRoot } from 'react-dom/client';
 import { DEMO_SCENARIO } from './scenario/demo';
 import { SET_ASIDE_PREFIX, STORAGE_KEY, type StorageLike } from './store';
@@ -36,6 +39,13 @@ document.addEventListener('visibilitychange', () => {
 // A link pasted into the address of an open page changes only the fragment.
 window.addEventListener('hashchange', () => link.open(window.location.hash));
 const services = browserServices({ storage, link });
+// After the first visit the app runs with no network: a service worker keeps it (build/offline-app.ts). A new
+// version waits until the user reloads (src/offline/updates.ts). The single-file build registers nothing.
+const updates = createUpdateChannel({
+  register: registerSW,
+  beforeReload: () => link.flush(),
+  reloadPage: () => window.location.reload(),
+});
 
 /** After a crash: keep the saved scenario under a set-aside key, and reload on the demo. */
 function setAsideAndReload(): void {
@@ -55,7 +65,7 @@ if (!root) throw new Error('index.html has no #root element');
 createRoot(root).render(
   <StrictMode>
     <ErrorBoundary onSetAside={setAsideAndReload}>
-      <App store={store} services={services} />
+      <App store={store} services={services} updates={updates} />
     </ErrorBoundary>
   </StrictMode>,
 );

@@ -16,6 +16,8 @@ import { LinkNotice, ScenarioBar, ScenarioServicesProvider, type ScenarioService
 import { usePins } from './share/services';
 import { ViewTabs } from './events/ViewTabs';
 import { lazyPart } from './layout/LazyPart';
+import { UpdateNotice } from './layout/UpdateNotice';
+import type { UpdateChannel } from '../offline/updates';
 
 // Views the first screen does not show load when first opened, so the first screen's JavaScript stays small
 // (scripts/check-first-screen.mjs holds it under its budget).
@@ -47,15 +49,18 @@ export interface AppProps {
   readonly rainfallTools?: ReactNode;
   /** Storage, share-link session, clipboard and downloads for the scenario tools (default: the browser's). */
   readonly services?: ScenarioServices;
+  /** New versions of the installed app (main.tsx; none in tests and in the single-file build). */
+  readonly updates?: UpdateChannel;
 }
 
-function Workbench({ rainfallTools }: { rainfallTools?: ReactNode }) {
+function Workbench({ rainfallTools, updates }: { rainfallTools?: ReactNode; updates?: UpdateChannel | undefined }) {
   useUndoShortcuts(useActions());
   return (
     <div className="app">
       <Header />
       <ScenarioBar />
       <Caution />
+      {updates ? <UpdateNotice updates={updates} /> : null}
       {/* The workbench first and by default; the event set and design storms in views of their own. */}
       <ViewTabs
         views={[
@@ -97,11 +102,11 @@ function Workbench({ rainfallTools }: { rainfallTools?: ReactNode }) {
 }
 
 /** The workbench screen, on the given store. */
-export function App({ store, rainfallTools, services }: AppProps) {
+export function App({ store, rainfallTools, services, updates }: AppProps) {
   return (
     <StoreProvider store={store}>
       <ScenarioServicesProvider services={services}>
-        <Workbench rainfallTools={rainfallTools} />
+        <Workbench rainfallTools={rainfallTools} updates={updates} />
       </ScenarioServicesProvider>
     </StoreProvider>
   );
