@@ -2,13 +2,16 @@
 import { defineConfig } from 'vite';
 import react from '@vitejs/plugin-react';
 import { offlineApp } from './build/offline-app.ts';
+import { SINGLE_FILE_MODE, singleFileBuild } from './build/single-file.ts';
 
 // One config for the app build, the dev server and Vitest.
-export default defineConfig({
+export default defineConfig(({ mode }) => ({
   plugins: [
     react(),
-    // --- Working with no network (issue 14): the installable app with its service worker (build/offline-app.ts).
-    offlineApp(),
+    // --- Working with no network (issue 14): the installable app with its service worker (build/offline-app.ts),
+    // or, with `--mode single` (npm run build:single), one self-contained HTML file with a policy of its own
+    // (build/single-file.ts).
+    ...(mode === SINGLE_FILE_MODE ? singleFileBuild() : [offlineApp()]),
   ],
   base: './',
   build: {
@@ -26,4 +29,4 @@ export default defineConfig({
     environment: 'node',
     setupFiles: ['test/setup.ts'],
   },
-});
+}));
