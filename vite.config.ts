@@ -2,16 +2,13 @@
 import { defineConfig } from 'vite';
 import react from '@vitejs/plugin-react';
 import { offlineApp } from './build/offline-app.ts';
-import { SINGLE_FILE_MODE, singleFileBuild } from './build/single-file.ts';
 
-// One config for the app build, the dev server and Vitest.
-export default defineConfig(({ mode }) => ({
+// One config for the app build, the dev server and Vitest. (npm run build:single: vite.single.config.ts.)
+export default defineConfig({
   plugins: [
     react(),
-    // --- Working with no network (issue 14): the installable app with its service worker (build/offline-app.ts),
-    // or, with `--mode single` (npm run build:single), one self-contained HTML file with a policy of its own
-    // (build/single-file.ts).
-    ...(mode === SINGLE_FILE_MODE ? singleFileBuild() : [offlineApp()]),
+    // --- Working with no network (issue 14): the installable app and its service worker (build/offline-app.ts).
+    offlineApp(),
   ],
   base: './',
   build: {
@@ -29,4 +26,4 @@ export default defineConfig(({ mode }) => ({
     environment: 'node',
     setupFiles: ['test/setup.ts'],
   },
-}));
+});

@@ -5,8 +5,6 @@ import type { Plugin, PluginOption } from 'vite';
 import { viteSingleFile } from 'vite-plugin-singlefile';
 import { noServiceWorker } from './offline-app.ts';
 
-/** `vite build --mode single` (npm run build:single) makes the single-file build. */
-export const SINGLE_FILE_MODE = 'single';
 export const SINGLE_FILE_DIR = 'dist-single';
 export const SINGLE_FILE_NAME = 'raincut.html';
 

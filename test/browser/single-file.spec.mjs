@@ -19,7 +19,7 @@ const FILE = join(OUT, 'raincut.html');
 let built = null;
 function buildSingleFile() {
   built ??= (() => {
-    const run = spawnSync('npx', ['vite', 'build', '--mode', 'single', '--logLevel', 'warn'], {
+    const run = spawnSync('npx', ['vite', 'build', '-c', 'vite.single.config.ts', '--logLevel', 'warn'], {
       cwd: ROOT,
       encoding: 'utf8',
     });
