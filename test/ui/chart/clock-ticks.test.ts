@@ -18,6 +18,7 @@ describe('the clock axis', () => {
         const frame = chartFrame({ ...storm, startIso }, width, 300, 'si');
         // What the chart drew with d3's time scale: the storm's span on the clock, ticks one per ~90 px.
         const startMs = wallClockMs(startIso);
+        if (startMs === null) throw new Error(`${startIso} is not read as a clock`);
         const left = MARGIN.left;
         const right = width - MARGIN.right;
         const clock = scaleUtc()
