@@ -2,11 +2,11 @@
 // and the bar that holds them with the export and compare buttons. Mounted by App.tsx.
 import './share.css';
 
-export { ScenarioBar } from './ScenarioBar';
+export { ScenarioBar, LIBRARY_PANEL_ID } from './ScenarioBar';
 export { LinkNotice } from './LinkNotice';
 export { CopyLink, linkLengthText, LONG_LINK_CHARS } from './CopyLink';
 export { ScenarioFile } from './ScenarioFile';
-export { LibraryPanel, LIBRARY_PANEL_ID } from './LibraryPanel';
+// LibraryPanel is not exported here: ScenarioBar loads it when the saved list is first opened.
 export {
   ScenarioServicesProvider,
   browserServices,
