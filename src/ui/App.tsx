@@ -12,9 +12,9 @@ import { RainfallToolbar } from './rainfall/RainfallToolbar';
 import { ResultsPanel } from './results/ResultsPanel';
 import { DrawableChart, RainfallTools, StormInputProvider, StormPanels } from './storm-input';
 import { PrintReport } from './export/PrintReport';
-import { LinkNotice, ScenarioBar, ScenarioServicesProvider, type ScenarioServices } from './share';
+import { ScenarioBar, ScenarioServicesProvider, type ScenarioServices } from './share';
 import { useNumberFormat } from './number-format';
-import { usePins } from './share/services';
+import { useLinkState, usePins } from './share/services';
 import { ViewTabs } from './events/ViewTabs';
 import { lazyPart } from './layout/LazyPart';
 import { UpdateNotice } from './layout/UpdateNotice';
@@ -36,6 +36,14 @@ const SeparationPanel = lazyPart('baseflow separation', () =>
 function RecordSeparation() {
   const hasRecord = useScenario((s) => s.streamflow !== null);
   return hasRecord ? <SeparationPanel /> : null;
+}
+
+// What came in a link, and the choices it leaves: loaded when a link has been opened.
+const LinkNoticeBody = lazyPart('link notice', () => import('./share/LinkNotice').then((m) => m.LinkNotice));
+
+/** The notice about a shared link, fetched once a link has been opened. */
+function LinkNotice() {
+  return useLinkState().kind === 'none' ? null : <LinkNoticeBody />;
 }
 
 /** The comparison of pinned scenarios, fetched once something is pinned. */
