@@ -10,6 +10,8 @@ import { formatPercent, formatValue } from '../format';
 import { displayUnit, paramToDisplay, paramUnitText, toDisplay, unitText } from '../units';
 import { buildDesignStorm, FIELD_LABELS, type DesignForm, type FormField } from './build';
 import { StormBars } from './StormBars';
+import './design-storm.css';
+import '../events/events.css';
 
 // Invented starting values (no real gauge): a 2-hour storm from a made-up IDF formula.
 const START: DesignForm = {

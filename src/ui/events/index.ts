@@ -1,5 +1,4 @@
 // The catchment's event set: the list of events, fit all, the spread of the fits and the design value.
-import './events.css';
 
 export { EventsView } from './EventsView';
 export { EventList } from './EventList';

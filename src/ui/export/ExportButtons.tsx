@@ -4,6 +4,7 @@ import { useBarMessage } from '../share/bar-message';
 import { useServices } from '../share/services';
 import { loadReport } from './PrintReport';
 import { formatCount } from '../format';
+import './export.css';
 
 /** The workbench's live chart: the hyetograph's SVG (src/ui/chart/Hyetograph.tsx). */
 export function liveChartSvg(doc: Document = document): SVGSVGElement | null {

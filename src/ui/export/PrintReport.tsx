@@ -1,5 +1,6 @@
 import { useEffect, useState, type ComponentType } from 'react';
 import { flushSync } from 'react-dom';
+import './export.css';
 
 let body: ComponentType | null = null;
 let loading: Promise<ComponentType> | null = null;

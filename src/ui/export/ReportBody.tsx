@@ -12,6 +12,7 @@ import { displayUnit, toDisplay, unitText, type Quantity } from '../units';
 import { useServices } from '../share/services';
 import { methodParametersText } from './bar-table-csv';
 import { StaticChart } from './StaticChart';
+import './export.css';
 
 const REPORT_CHART = { width: 720, height: 280 } as const;
 

@@ -1,5 +1,4 @@
 // Exports of the scenario on screen: bar table CSV, chart SVG and PNG, and the printed report.
-import './export.css';
 
 export { ExportButtons, liveChartSvg } from './ExportButtons';
 export { chartHeading, chartLegend } from './chart-file';

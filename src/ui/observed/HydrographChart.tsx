@@ -3,6 +3,7 @@ import type { Streamflow } from '../../scenario/types';
 import { useScenario } from '../../store';
 import { lazyPart } from '../layout/LazyPart';
 import { StreamflowButtons } from './StreamflowButtons';
+import './observed.css';
 
 export { HYDROGRAPH_HEIGHT } from './hydrograph-frame';
 

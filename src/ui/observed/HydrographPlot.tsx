@@ -20,6 +20,7 @@ import { baseflowPath, directRunoffPath, seriesPath } from './hydrograph-paths';
 import { OffsetControl } from './OffsetControl';
 import { hoursText, momentText, recordClock, type RecordClock } from './time-text';
 import { formatCount } from '../format';
+import './observed.css';
 
 /** The record's discharge line: depends on the record and the frame only, so moving the end point never redraws it. */
 const DischargeLayer = memo(function DischargeLayer({ flow, frame }: { flow: Streamflow; frame: HydrographFrame }) {

@@ -28,6 +28,7 @@ import { displayUnit, toDisplay, unitText } from '../units';
 import { BaseflowParamField } from './BaseflowParamField';
 import { dischargeText } from './discharge';
 import { clockAt, clockParts, hoursText, momentText, recordClock, type RecordClock } from './time-text';
+import './observed.css';
 
 const valueOf = (method: BaseflowMethod, key: string): number | undefined => {
   const v = (method as unknown as Record<string, unknown>)[key];

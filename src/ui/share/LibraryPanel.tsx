@@ -8,6 +8,7 @@ import { SetAsideCopies } from './SetAsideCopies';
 import { LIBRARY_PANEL_ID } from './ScenarioBar';
 import { useServices } from './services';
 import { formatCount } from '../format';
+import './share.css';
 
 const savedAtFormat = new Intl.DateTimeFormat(undefined, { dateStyle: 'medium', timeStyle: 'short' });
 const quoted = (name: string): string => `“${name}”`;

@@ -1,5 +1,6 @@
 import { ProblemList } from './bar-message';
 import { useLinkState, useServices } from './services';
+import './share.css';
 
 const quoted = (name: string): string => `“${name}”`;
 
