@@ -1,16 +1,42 @@
 import { memo, useMemo } from 'react';
 import { scaleLinear } from 'd3-scale';
+import { utcTicks } from 'd3-time';
 import type { RecordEvent, Storm, UnitSystem } from '../../core';
 import { Axes, type AxesFrame } from '../chart/Axes';
 import { useElementWidth } from '../chart/useElementWidth';
 import { formatValue } from '../format';
-import { barClock, barTimeText } from '../storm-input/bar-times';
+import { formatWallDate, formatWallTime } from '../chart/clock';
+import { barClock, barTimeText, type BarClock } from '../storm-input/bar-times';
 import { displayUnit, toDisplay, unitText } from '../units';
 import { eventBandsPath } from './bands';
 import { columnsPath, recordColumns } from './columns';
 
 const HEIGHT = 220;
-const MARGIN = { top: 12, right: 16, bottom: 44, left: 60 };
+
+/**
+ * Time ticks across the record: calendar-aware on a clock (d3-time's UTC
+ * ticks on the zone-free wall-clock axis, as the hyetograph does), labelled
+ * with the date at midnight and the time otherwise; hours from the start
+ * without one.
+ */
+function timeTicks(clock: BarClock, spanH: number, left: number, right: number) {
+  const count = Math.max(2, Math.floor((right - left) / 110));
+  if (clock.startMs === null) {
+    const x = scaleLinear()
+      .domain([0, spanH > 0 ? spanH : 1])
+      .range([left, right]);
+    return x.ticks(count).map((h) => ({ px: x(h), label: barTimeText(clock, h) }));
+  }
+  const from = Math.round(clock.startMs);
+  const to = Math.round(clock.startMs + spanH * 3.6e6);
+  const x = scaleLinear().domain([from, to]).range([left, right]);
+  const multiDay = formatWallDate(from) !== formatWallDate(to);
+  return utcTicks(new Date(from), new Date(to), count).map((t) => {
+    const ms = t.getTime();
+    return { px: x(ms), label: multiDay && formatWallTime(ms) === '00:00' ? formatWallDate(ms) : formatWallTime(ms) };
+  });
+}
+const MARGIN = { top: 12, right: 34, bottom: 44, left: 60 };
 
 export interface OverviewChartProps {
   readonly storm: Storm;
@@ -60,7 +86,6 @@ export const OverviewChart = memo(function OverviewChart({
     () => columnsPath(columns, plot.left, plotWidth, plot.bottom, (v) => y(toDisplay('rate', v, units))),
     [columns, plot.left, plotWidth, plot.bottom, y, units],
   );
-  const xOf = (h: number): number => x(h);
   const pickedD = useMemo(
     () => eventBandsPath(picked, startsH, (h) => x(h), plot.top, plot.bottom),
     [picked, startsH, x, plot.top, plot.bottom],
@@ -74,11 +99,10 @@ export const OverviewChart = memo(function OverviewChart({
   const frame: AxesFrame = {
     plot,
     height: HEIGHT,
-    xTicks: x
-      .ticks(Math.max(2, Math.floor(plotWidth / 140)))
-      .map((h) => ({ px: xOf(h), label: barTimeText(clock, h) })),
+    xTicks: timeTicks(clock, spanH, plot.left, plot.right),
     yTicks: y.ticks(4).map((v) => ({ px: y(v), label: formatValue(v) })),
-    xTitle: clock.startMs === null ? 'Time from the record start (h:mm)' : 'Date and time',
+    xTitle:
+      clock.startMs === null ? 'Time from the record start (h:mm)' : `Clock time, record from ${barTimeText(clock, 0)}`,
     yTitle: `Highest intensity, ${rateUnit}`,
   };
   const count = picked.length + unpicked.length;

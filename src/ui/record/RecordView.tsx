@@ -171,95 +171,101 @@ export function RecordView() {
         </div>
       </section>
 
-      <section className="panel record-view__split" aria-labelledby="record-split-title">
-        <h2 id="record-split-title">Where one event ends</h2>
-        <div className="record-view__fields">
-          <NumberField
-            id="record-min-dry"
-            label="Dry spell that separates events"
-            unit="h"
-            value={minDryH}
-            plausible="stormDuration"
-            onCommit={(h) => setMinDryH(h)}
-            hint={
-              <>
-                The minimum inter-event time: rain after a dry spell at least this long starts a new event; a shorter
-                spell stays inside the event. Restrepo-Posada &amp; Eagleson (1982) choose it for a gauge so the storms
-                it separates are independent, and found a few hours to a day; 6 h was used for the rainfall statistics
-                of US gauges by Driscoll et al. (1989, US EPA). Both from memory.
-              </>
-            }
-          />
-          <NumberField
-            id="record-min-depth"
-            label="Smallest event kept"
-            unit={depthUnit}
-            value={minDepthMm}
-            toDisplay={(mm) => toDisplay('depth', mm, units)}
-            fromDisplay={(v) => fromDisplay('depth', v, units)}
-            plausible="depth"
-            onCommit={(mm) => setMinDepthMm(mm)}
-            hint="Events with less rain are left out. A few millimetres keeps drizzle that makes no runoff off the list (common practice, no source)."
-          />
-          {flow ? (
+      <div className="record-view__work">
+        <section className="panel record-view__split" aria-labelledby="record-split-title">
+          <h2 id="record-split-title">Where one event ends</h2>
+          <div className="record-view__fields">
             <NumberField
-              id="record-after"
-              label="Streamflow kept after the rain"
+              id="record-min-dry"
+              label="Dry spell that separates events"
               unit="h"
-              value={afterH}
-              check={nonNegative('The time after the rain')}
-              plausible="offset"
-              onCommit={(h) => setAfterH(h)}
-              hint="Each event takes the streamflow record from its start to this long after its last wet bar: enough for the recession, for baseflow separation."
+              value={minDryH}
+              plausible="stormDuration"
+              onCommit={(h) => setMinDryH(h)}
+              hint={
+                <>
+                  The minimum inter-event time: rain after a dry spell at least this long starts a new event; a shorter
+                  spell stays inside the event. Restrepo-Posada &amp; Eagleson (1982) choose it for a gauge so the
+                  storms it separates are independent, and found a few hours to a day; 6 h was used for the rainfall
+                  statistics of US gauges by Driscoll et al. (1989, US EPA). Both from memory.
+                </>
+              }
             />
-          ) : null}
-        </div>
-      </section>
-
-      {storm ? (
-        <section className="panel" aria-labelledby="record-events-title">
-          <h2 id="record-events-title">
-            {formatCount(events.length)} event{events.length === 1 ? '' : 's'} found, {formatCount(picked.length)}{' '}
-            picked
-          </h2>
-          <OverviewChart storm={storm} startsH={startsH} picked={picked} unpicked={unpicked} units={units} />
-          {events.length > 0 ? (
-            <>
-              <div className="record-view__actions">
-                <button type="button" onClick={() => setLeftOut(new Set())}>
-                  Pick all
-                </button>
-                <button type="button" onClick={() => setLeftOut(new Set(events.map((e) => e.firstBar)))}>
-                  Pick none
-                </button>
-                <button type="button" className="button--primary" onClick={add} disabled={picked.length === 0}>
-                  Add {formatCount(picked.length)} picked event{picked.length === 1 ? '' : 's'} to the event set
-                </button>
-                <span className="record-view__set">The set holds {formatCount(setSize)} now.</span>
-              </div>
-              {said ? (
-                <p
-                  className={said.ok ? 'record-view__said' : 'record-view__said record-view__said--bad'}
-                  role={said.ok ? 'status' : 'alert'}
-                >
-                  {said.text}
-                </p>
-              ) : null}
-              <EventPicks
-                storm={storm}
-                startsH={startsH}
-                clock={clock}
-                events={events}
-                isPicked={(e) => !leftOut.has(e.firstBar)}
-                onPick={pick}
-                units={units}
+            <NumberField
+              id="record-min-depth"
+              label="Smallest event kept"
+              unit={depthUnit}
+              value={minDepthMm}
+              toDisplay={(mm) => toDisplay('depth', mm, units)}
+              fromDisplay={(v) => fromDisplay('depth', v, units)}
+              plausible="depth"
+              onCommit={(mm) => setMinDepthMm(mm)}
+              hint="Events with less rain are left out. A few millimetres keeps drizzle that makes no runoff off the list (common practice, no source)."
+            />
+            {flow ? (
+              <NumberField
+                id="record-after"
+                label="Streamflow kept after the rain"
+                unit="h"
+                value={afterH}
+                check={nonNegative('The time after the rain')}
+                plausible="offset"
+                onCommit={(h) => setAfterH(h)}
+                hint="Each event takes the streamflow record from its start to this long after its last wet bar: enough for the recession, for baseflow separation."
               />
-            </>
-          ) : (
-            <p>No event in this record reaches the smallest depth kept.</p>
-          )}
+            ) : null}
+          </div>
         </section>
-      ) : null}
+
+        {storm ? (
+          <section className="panel record-view__events" aria-labelledby="record-events-title">
+            <h2 id="record-events-title">
+              {formatCount(events.length)} event{events.length === 1 ? '' : 's'} found, {formatCount(picked.length)}{' '}
+              picked
+            </h2>
+            <OverviewChart storm={storm} startsH={startsH} picked={picked} unpicked={unpicked} units={units} />
+            {events.length > 0 ? (
+              <>
+                <div className="record-view__actions">
+                  <button type="button" onClick={() => setLeftOut(new Set())}>
+                    Pick all
+                  </button>
+                  <button type="button" onClick={() => setLeftOut(new Set(events.map((e) => e.firstBar)))}>
+                    Pick none
+                  </button>
+                  <button type="button" className="button--primary" onClick={add} disabled={picked.length === 0}>
+                    Add {formatCount(picked.length)} picked event{picked.length === 1 ? '' : 's'} to the event set
+                  </button>
+                  <span className="record-view__set">The set holds {formatCount(setSize)} now.</span>
+                </div>
+                {said ? (
+                  <p
+                    className={said.ok ? 'record-view__said' : 'record-view__said record-view__said--bad'}
+                    role={said.ok ? 'status' : 'alert'}
+                  >
+                    {said.text}
+                  </p>
+                ) : null}
+                <EventPicks
+                  storm={storm}
+                  startsH={startsH}
+                  clock={clock}
+                  events={events}
+                  isPicked={(e) => !leftOut.has(e.firstBar)}
+                  onPick={pick}
+                  units={units}
+                />
+              </>
+            ) : (
+              <p>No event in this record reaches the smallest depth kept.</p>
+            )}
+          </section>
+        ) : (
+          <section className="panel record-view__events record-view__events--none" aria-label="Events">
+            <p>Paste or open a rainfall record to see it here with its events.</p>
+          </section>
+        )}
+      </div>
 
       {rainPaste.dialog ? (
         <RainRecordDialog
