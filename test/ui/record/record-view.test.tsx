@@ -121,4 +121,36 @@ describe('cutting a long record into events', () => {
     actions.undo();
     expect(scenario().eventSet.events).toEqual([]);
   });
+
+  it('gives each event its window of a streamflow record over the same period', async () => {
+    // Hourly discharge from 00:00 to 13:00 (invented), on the rainfall's clock from its start (neither has a date).
+    // Dry spell 3 h and 2 h kept after the rain: the event at 4:00 (bars 4–5, 4 h to 6 h) takes 4 h to 8 h,
+    // samples 4 to 8: 2, 5, 9, 6, 4 m³/s at 0 to 4 h from its start.
+    const q = [1, 1, 1, 1, 2, 5, 9, 6, 4, 3, 2, 2, 1, 1];
+    const flowText = q.map((v, h) => `${String(h).padStart(2, '0')}:00\t${v}`).join('\n');
+    const { user, scenario } = renderWorkbench(FOUR_BARS);
+    await openView(user);
+    await pasteRecord(user, RECORD);
+    await user.click(screen.getByRole('button', { name: 'Paste streamflow record…' }));
+    const dialog = await screen.findByRole(
+      'dialog',
+      { name: 'Paste a long streamflow record' },
+      { timeout: LAZY_LOAD_MS },
+    );
+    await user.click(within(dialog).getByRole('textbox', { name: 'Streamflow record text' }));
+    await user.paste(flowText);
+    const use = within(dialog).getByRole('button', { name: 'Use this record' });
+    await waitFor(() => expect(use).toBeEnabled());
+    await user.click(use);
+    expect(screen.getByText(/14 samples over 13 h/)).toBeInTheDocument();
+    await setField(user, /Dry spell that separates events/, '3');
+    await setField(user, /Streamflow kept after the rain/, '2');
+    await user.click(screen.getByRole('checkbox', { name: 'Pick event 1, from 0:00' }));
+    await user.click(screen.getByRole('checkbox', { name: 'Pick event 3, from 10:00' }));
+    await user.click(screen.getByRole('button', { name: 'Add 1 picked event to the event set' }));
+    const flow = scenario().eventSet.events[0]?.streamflow;
+    expect(flow?.dischargeM3s).toEqual([2, 5, 9, 6, 4]);
+    expect(flow?.timesH).toEqual([0, 1, 2, 3, 4]);
+    expect(flow?.offsetH).toBe(0);
+  });
 });
