@@ -24,6 +24,7 @@ import type { UpdateChannel } from '../offline/updates';
 // (scripts/check-first-screen.mjs holds it under its budget).
 const EventsView = lazyPart('event set', () => import('./events').then((m) => m.EventsView));
 const DesignStormView = lazyPart('design storm view', () => import('./design-storm').then((m) => m.DesignStormView));
+const RecordView = lazyPart('long record view', () => import('./record').then((m) => m.RecordView));
 const ComparePanel = lazyPart('comparison', () => import('./compare').then((m) => m.ComparePanel));
 
 // Below the chart and the results, out of the first view: it loads just after the first screen.
@@ -119,6 +120,15 @@ function Workbench({ rainfallTools, updates }: { rainfallTools?: ReactNode; upda
             content: (
               <Fragment key={format}>
                 <DesignStormView />
+              </Fragment>
+            ),
+          },
+          {
+            id: 'record',
+            label: 'Long record',
+            content: (
+              <Fragment key={format}>
+                <RecordView />
               </Fragment>
             ),
           },
