@@ -8,6 +8,18 @@ export type {
   WorkbenchStore,
 } from './scenario-store';
 export { createDerived, type Derived, type Results, type Separation, type Target } from './derive';
+export type { ComputedHydrograph, Outcome, TimeSeries } from './derive-hydrograph';
+export {
+  fitRunoffTransform,
+  fittableTransformKeys,
+  transformFitParameter,
+  withObservedUncertainty,
+  withTransform,
+  withTransformFit,
+  withTransformKind,
+  withTransformParam,
+  type TransformFitOutcome,
+} from './hydrograph-edits';
 export {
   FIRST_BASEFLOW_KIND,
   recordOffsetH,
