@@ -7,6 +7,7 @@ import { Header } from './layout/Header';
 import { StorageNoticeBar } from './layout/StorageNotice';
 import { MatchingPanel } from './matching/MatchingPanel';
 import { MethodPanel } from './method/MethodPanel';
+import { HydrographPanel } from './hydrograph/HydrographPanel';
 import { HydrographChart } from './observed';
 import { RainfallToolbar } from './rainfall/RainfallToolbar';
 import { ResultsPanel } from './results/ResultsPanel';
@@ -90,6 +91,7 @@ function Workbench({ rainfallTools, updates }: { rainfallTools?: ReactNode; upda
                 </div>
                 <div className="bench__side">
                   <MethodPanel />
+                  <HydrographPanel />
                   <MatchingPanel />
                 </div>
                 <PinnedComparison />
