@@ -9,17 +9,7 @@ export type {
 } from './scenario-store';
 export { createDerived, type Derived, type Results, type Separation, type Target } from './derive';
 export type { ComputedHydrograph, Outcome, TimeSeries } from './derive-hydrograph';
-export {
-  fitRunoffTransform,
-  fittableTransformKeys,
-  transformFitParameter,
-  withObservedUncertainty,
-  withTransform,
-  withTransformFit,
-  withTransformKind,
-  withTransformParam,
-  type TransformFitOutcome,
-} from './hydrograph-edits';
+// The hydrograph's edits and fit (./hydrograph-edits) are imported by path: the panel that uses them loads on first use.
 export {
   FIRST_BASEFLOW_KIND,
   recordOffsetH,

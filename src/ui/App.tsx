@@ -7,7 +7,6 @@ import { Header } from './layout/Header';
 import { StorageNoticeBar } from './layout/StorageNotice';
 import { MatchingPanel } from './matching/MatchingPanel';
 import { MethodPanel } from './method/MethodPanel';
-import { HydrographPanel } from './hydrograph/HydrographPanel';
 import { HydrographChart } from './observed';
 import { RainfallToolbar } from './rainfall/RainfallToolbar';
 import { ResultsPanel } from './results/ResultsPanel';
@@ -26,6 +25,9 @@ import type { UpdateChannel } from '../offline/updates';
 const EventsView = lazyPart('event set', () => import('./events').then((m) => m.EventsView));
 const DesignStormView = lazyPart('design storm view', () => import('./design-storm').then((m) => m.DesignStormView));
 const ComparePanel = lazyPart('comparison', () => import('./compare').then((m) => m.ComparePanel));
+const HydrographPanel = lazyPart('runoff hydrograph', () =>
+  import('./hydrograph/HydrographPanel').then((m) => m.HydrographPanel),
+);
 
 // Below the chart and the results, out of the first view: it loads just after the first screen.
 const BarTable = lazyPart('bar table', () => import('./storm-input/table/BarTable').then((m) => m.BarTable));

@@ -7,17 +7,14 @@ import {
   type TransformObjective,
   type TransformParam,
 } from '../../core';
+import { useActions, useDerived, useScenario, useWorkbenchStore } from '../../store';
 import {
   fitRunoffTransform,
   fittableTransformKeys,
   transformFitParameter,
-  useActions,
-  useDerived,
-  useScenario,
-  useWorkbenchStore,
   withTransformFit,
   withTransformKind,
-} from '../../store';
+} from '../../store/hydrograph-edits';
 import { formatValue } from '../format';
 import { dischargeText } from '../observed/discharge';
 import { hoursMinutes } from './hours-minutes';

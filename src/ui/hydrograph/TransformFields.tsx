@@ -7,7 +7,8 @@ import {
   type TransformParam,
   type UnitHydrographTransform,
 } from '../../core';
-import { useActions, useDerived, withTransform, withTransformParam } from '../../store';
+import { useActions, useDerived } from '../../store';
+import { withTransform, withTransformParam } from '../../store/hydrograph-edits';
 import { NumberField } from '../fields/NumberField';
 import { formatValue } from '../format';
 import { OrdinatesField } from './OrdinatesField';

@@ -6,7 +6,7 @@ import { fireEvent, screen, within } from '@testing-library/react';
 import { describe, expect, it } from 'vitest';
 import { TRANSFORMS, TRANSFORM_KINDS } from '../../../src/core';
 import type { Scenario } from '../../../src/scenario/types';
-import { LAZY_LOAD_MS, renderWorkbench } from '../render';
+import { LAZY_LOAD_MS, lazyPartsLoaded, renderWorkbench } from '../render';
 import { FOUR_BARS } from '../store/fixtures';
 
 /**
@@ -56,9 +56,16 @@ const WITH_RECORD: Scenario = {
 
 const result = (id: string): string => document.querySelector(`[data-result="${id}"]`)?.textContent ?? '';
 
+/** The workbench with its parts loaded on first use (the hydrograph panel and plot among them). */
+async function open(scenario?: Scenario) {
+  const view = renderWorkbench(scenario);
+  await lazyPartsLoaded();
+  return view;
+}
+
 describe('the runoff hydrograph panel', () => {
-  it('sits beside the loss method and offers none and every transform of the core', () => {
-    renderWorkbench();
+  it('sits beside the loss method and offers none and every transform of the core', async () => {
+    await open();
     const panel = screen.getByRole('region', { name: 'Runoff hydrograph' });
     const picker = within(panel).getByRole('combobox', { name: 'Unit hydrograph' });
     expect(picker).toHaveValue('none');
@@ -72,7 +79,7 @@ describe('the runoff hydrograph panel', () => {
   });
 
   it('picking a unit hydrograph stores it with its defaults, and None takes it away again (one undo step each)', async () => {
-    const { user, scenario, actions } = renderWorkbench();
+    const { user, scenario, actions } = await open();
     await user.selectOptions(screen.getByRole('combobox', { name: 'Unit hydrograph' }), 'nash');
     expect(scenario().hydrograph.transform).toEqual({ kind: 'nash', n: 3, kH: 0.5 });
     expect(screen.getByRole('textbox', { name: 'Number of reservoirs n' })).toHaveValue('3');
@@ -83,16 +90,16 @@ describe('the runoff hydrograph panel', () => {
     expect(scenario().hydrograph.transform).toEqual({ kind: 'nash', n: 3, kH: 0.5 });
   });
 
-  it('shows the peak and time to peak worked by hand for a triangular unit hydrograph on one bar of excess', () => {
-    renderWorkbench(ONE_BAR);
+  it('shows the peak and time to peak worked by hand for a triangular unit hydrograph on one bar of excess', async () => {
+    await open(ONE_BAR);
     expect(result('peak-discharge')).toBe('0.6944 m³/s');
     expect(result('time-to-peak')).toBe('3:00 after the storm start');
     // No record: no errors to show.
     expect(document.querySelector('[data-result="peak-error"]')).toBeNull();
   });
 
-  it('against the record: peak, timing and volume errors and the efficiency, worked by hand', () => {
-    renderWorkbench(WITH_RECORD);
+  it('against the record: peak, timing and volume errors and the efficiency, worked by hand', async () => {
+    await open(WITH_RECORD);
     // Peak: (0.69444 − 1)/1 = −30.56 %. Timing: 3 h − 4 h = −1:00, early.
     expect(result('peak-error')).toBe('−30.56 %');
     expect(result('timing-error')).toBe('−1:00 (early)');
@@ -106,7 +113,7 @@ describe('the runoff hydrograph panel', () => {
   });
 
   it('refuses a lag that is not a number, negative or beyond what a lag can mean, keeping the one in use', async () => {
-    const { user, scenario } = renderWorkbench(ONE_BAR);
+    const { user, scenario } = await open(ONE_BAR);
     const lag = screen.getByRole('textbox', { name: 'Lag (h)' });
     await user.clear(lag);
     await user.type(lag, 'abc');
@@ -129,7 +136,7 @@ describe('the runoff hydrograph panel', () => {
   });
 
   it('sets the lag from a time of concentration as 0.6 Tc', async () => {
-    const { user, scenario } = renderWorkbench(ONE_BAR);
+    const { user, scenario } = await open(ONE_BAR);
     const tc = screen.getByRole('textbox', { name: 'Time of concentration Tc (h)' });
     await user.clear(tc);
     await user.type(tc, '5');
@@ -138,7 +145,7 @@ describe('the runoff hydrograph panel', () => {
   });
 
   it('reads pasted ordinates with the number reader, says how far their volume is from 1 mm, and refuses a bad one by number', async () => {
-    const { user, scenario } = renderWorkbench(ONE_BAR);
+    const { user, scenario } = await open(ONE_BAR);
     await user.selectOptions(screen.getByRole('combobox', { name: 'Unit hydrograph' }), 'unit-hydrograph');
     const box = screen.getByRole('textbox', { name: 'Unit hydrograph ordinates (m³/s per mm)' });
     // 1-hour ordinates 0, 0.2, 0.1, 0 (m³/s per mm) hold, by the trapezoidal rule, 0.3 m³/s·h = 1080 m³,
@@ -161,7 +168,7 @@ describe('the runoff hydrograph panel', () => {
   });
 
   it('draws the computed hydrograph alone when there is no record', async () => {
-    renderWorkbench(ONE_BAR);
+    await open(ONE_BAR);
     const path = await screen.findByRole(
       'img',
       { name: /^Computed direct runoff: peak 0.6944 m³\/s 3:00/ },
@@ -178,7 +185,7 @@ describe('the runoff hydrograph panel', () => {
     // The loss that leaves 8 mm of the 12 mm bar is φ = (12 − 8)/1 h = 4 mm/h; starting from lag 1 h,
     // the lag whose peak matches is 2.5 h (the peak falls steadily as the lag grows, so there is one).
     const peak = (0.25 * 1e6 * 0.008) / 3600;
-    const { user, scenario } = renderWorkbench({
+    const { user, scenario } = await open({
       ...WITH_RECORD,
       hydrograph: { ...WITH_RECORD.hydrograph, transform: { kind: 'triangular', lagH: 1 } },
       observed: { as: 'depth', value: 0, parameter: 'rateMmH', locked: false },
