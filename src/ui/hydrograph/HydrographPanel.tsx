@@ -29,6 +29,13 @@ export const OBJECTIVE_LABELS: Readonly<Record<TransformObjective, string>> = {
 };
 
 /** A signed percentage; below 0.0001 % (solver round-off on a match) it reads 0. */
+/** How each objective reads after a fit. */
+const OBJECTIVE_PHRASES: Readonly<Record<TransformObjective, string>> = {
+  peak: 'matching the observed peak discharge',
+  'time-of-peak': 'matching the observed time of peak',
+  nse: 'for the best Nash–Sutcliffe efficiency',
+};
+
 const signedPercent = (x: number | null): string => {
   if (x === null) return '—';
   if (Math.abs(x) < 1e-4) return '0 %';
@@ -158,7 +165,7 @@ function HydrographFit() {
             const unit = params.find((p) => p.key === parameter)?.unit === 'h' ? ' h' : '';
             setAnswer(
               `Fitted: ${labelOf(parameter ?? '')} ${formatValue(outcome.result.value)}${unit} ` +
-                `(${OBJECTIVE_LABELS[s.hydrograph.objective].toLowerCase()})` +
+                `${OBJECTIVE_PHRASES[s.hydrograph.objective]}` +
                 (outcome.lossMatched ? '; the loss was matched to the observed volume first.' : '.'),
             );
           } else {

@@ -202,7 +202,7 @@ describe('the runoff hydrograph panel', () => {
     const t = s.hydrograph.transform;
     expect(t?.kind === 'triangular' && t.lagH).toBeCloseTo(2.5, 6);
     expect(document.querySelector('[data-answer="hydro-fit"]')).toHaveTextContent(
-      'Fitted: Lag 2.5 h (observed peak discharge); the loss was matched to the observed volume first.',
+      'Fitted: Lag 2.5 h matching the observed peak discharge; the loss was matched to the observed volume first.',
     );
     expect(result('peak-error')).toBe('0 %');
     expect(result('volume-error')).toBe('0 %');
