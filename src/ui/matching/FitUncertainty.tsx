@@ -138,12 +138,11 @@ export function FitUncertainty() {
   if (interval && !interval.ok) text = interval.message;
   else if (interval?.ok && param) {
     const { value } = interval;
-    const name = labelInSentence(param.label);
     if (value.range) {
+      // "Fitted" is kept for a value in use (see fit-words.ts): this states what the fits would be.
       text =
-        `${value.fit.ok ? `Fitted ${name} ${paramAmount(param, value.fit.value, units)}; ` : ''}` +
-        `from ${paramAmount(param, value.range.min, units)} to ${paramAmount(param, value.range.max, units)} ` +
-        `for the observed runoff ± ${formatValue(pct)} %.`;
+        `${value.fit.ok ? `${param.label} for the observed runoff: ${paramAmount(param, value.fit.value, units)}; ` : ''}` +
+        `for it ± ${formatValue(pct)} %: from ${paramAmount(param, value.range.min, units)} to ${paramAmount(param, value.range.max, units)}.`;
     } else {
       const end = !value.lowRunoff.result.ok ? value.lowRunoff : value.highRunoff;
       text = `At ${formatValue(toDisplay('depth', end.runoffMm, units))} ${unitText(displayUnit('depth', units))}: ${end.result.ok ? '' : end.result.message}`;

@@ -25,7 +25,7 @@ describe('how sure the loss fit is', () => {
     // For 4 < φ < 12 mm/h the two middle bars (6 and 10 mm, 1 h together) run off: R = 16 − φ·1 h,
     // so φ = 16 − R: 6 mm/h for 10 mm, 7 for 9 mm (−10 %), 5 for 11 mm (+10 %) (Chow et al. 1988, §5.2).
     expect(document.querySelector('[data-answer="fit-interval"]')).toHaveTextContent(
-      'Fitted loss rate φ 6 mm/h; from 5 mm/h to 7 mm/h for the observed runoff ± 10 %.',
+      'Loss rate φ for the observed runoff: 6 mm/h; for it ± 10 %: from 5 mm/h to 7 mm/h.',
     );
     expect(document.querySelector('[data-layer="observed-band"]')).not.toBeNull();
     expect(document.querySelector('[data-layer="fitted-range"]')).not.toBeNull();
