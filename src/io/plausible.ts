@@ -167,8 +167,8 @@ export const PLAUSIBLE: Readonly<Record<PlausibleQuantity, PlausibleRange>> = {
     minExclusive: false,
     max: 99.99,
     why: {
-      min: 'an uncertainty is a width, not a direction, so it cannot be negative.',
-      max: 'at 100 % or more the lower end of the observed runoff would be no runoff at all, and nothing could be fitted there.',
+      min: 'an uncertainty is a width, not a direction, so it cannot be negative (physical limit).',
+      max: 'at 100 % or more the lower end of the observed runoff would be no runoff at all, and nothing could be fitted there (physical limit).',
     },
   },
   barCount: {
