@@ -136,7 +136,7 @@ async function installProbe(page) {
 async function dragAcross(page, steps) {
   await installProbe(page);
   const box = await page.locator('.loss-line__stroke').boundingBox();
-  const plot = await page.locator('.chart__svg').boundingBox();
+  const plot = await page.locator('.chart__svg').first().boundingBox();
   const x = box.x + box.width * 0.3;
   let y = box.y + box.height / 2;
   await page.mouse.move(x, y);
