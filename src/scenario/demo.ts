@@ -6,7 +6,7 @@ import type { Scenario } from './types';
  * 10 minutes, 41.6 mm in all, over a 3.2 km² mixed rural–suburban catchment.
  */
 export const DEMO_SCENARIO: Scenario = {
-  version: 4,
+  version: 5,
   name: 'Demo: Fenmoor Brook storm (invented)',
   notes:
     'Invented example for trying the workbench: a made-up 3-hour summer storm over a made-up 3.2 km² catchment. ' +
@@ -23,4 +23,6 @@ export const DEMO_SCENARIO: Scenario = {
   observed: { as: 'depth', value: 12.5, parameter: 'rateMmH', locked: false },
   streamflow: null,
   eventSet: { events: [], activeId: null, parameter: null, designPick: 'median' },
+  hydrograph: { transform: null, transformMemory: {}, fitParameter: null, objective: 'nse' },
+  observedUncertaintyPct: 0,
 };

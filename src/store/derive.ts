@@ -10,9 +10,11 @@ import {
   type CalibrationResult,
   type LossMethod,
   type LossResult,
+  type ObservedDirectRunoff,
 } from '../core';
 import type { Scenario } from '../scenario/types';
 import { alignRecord, type Alignment } from './alignment';
+import { createHydrographDerived, type HydrographDerived, type TimeSeries } from './derive-hydrograph';
 import { memoLast } from './memo';
 
 /** The observed runoff as a depth to match, or why it cannot be one. */
@@ -28,7 +30,7 @@ export type Separation =
   | { readonly ok: true; readonly result: BaseflowResult; readonly method: BaseflowMethod }
   | { readonly ok: false; readonly message: string; readonly field: string; readonly method: BaseflowMethod };
 
-export interface Derived {
+export interface Derived extends HydrographDerived {
   /**
    * The observed runoff as a depth (null when none is entered). While the
    * streamflow record is used as the observed runoff, it is the separated
@@ -62,6 +64,8 @@ export interface Derived {
   results(s: Scenario): Results;
   /** Runoff volume, m³, or null when the catchment area is not known. */
   runoffVolumeM3(s: Scenario): number | null;
+  /** The separated direct runoff on the storm's time axis (null without a separated record). */
+  observedDirect(s: Scenario): ObservedDirectRunoff | null;
 }
 
 /**
@@ -157,7 +161,49 @@ export function createDerived(): Derived {
   });
   const resultsOf = (s: Scenario): Results => results(s.storm, effectiveMethod(s));
 
+  // The record's samples on the storm's time axis, for the computed hydrograph to be set against.
+  const shifted = memoLast((timesH: readonly number[], offsetH: number): Float64Array => {
+    const out = new Float64Array(timesH.length);
+    for (let i = 0; i < out.length; i++) out[i] = (timesH[i] as number) + offsetH;
+    return out;
+  });
+  const separatedOnAxis = (s: Scenario): { timesH: Float64Array; result: BaseflowResult } | null => {
+    const sep = separationOf(s);
+    const aligned = alignment(s.storm.startIso, s.streamflow);
+    if (!sep?.ok || !aligned || !s.streamflow) return null;
+    return { timesH: shifted(s.streamflow.timesH, aligned.offsetH), result: sep.result };
+  };
+  const observedDirect = memoLast(
+    (timesH: Float64Array | undefined, result: BaseflowResult | undefined): ObservedDirectRunoff | null =>
+      timesH && result ? { timesH, directM3s: result.directM3s } : null,
+  );
+  const baseflowOnAxis = memoLast(
+    (timesH: Float64Array | undefined, result: BaseflowResult | undefined): TimeSeries | null =>
+      timesH && result ? { timesH, dischargeM3s: result.baseflowM3s } : null,
+  );
+  const observedDirectOf = (s: Scenario): ObservedDirectRunoff | null => {
+    const on = separatedOnAxis(s);
+    return observedDirect(on?.timesH, on?.result);
+  };
+  const hydrographSide = createHydrographDerived({
+    excessMm: (s) => {
+      const r = resultsOf(s);
+      return r.ok ? r.result.excessMm : null;
+    },
+    observedDirect: observedDirectOf,
+    baseflowOnStormAxis: (s) => {
+      const on = separatedOnAxis(s);
+      return baseflowOnAxis(on?.timesH, on?.result);
+    },
+    targetMm: (s) => {
+      const t = targetOf(s);
+      return t?.ok ? t.mm : null;
+    },
+  });
+
   return {
+    ...hydrographSide,
+    observedDirect: observedDirectOf,
     target: targetOf,
     separation: separationOf,
     observedFromSeparation: linked,

@@ -8,6 +8,8 @@ export type {
   WorkbenchStore,
 } from './scenario-store';
 export { createDerived, type Derived, type Results, type Separation, type Target } from './derive';
+export type { ComputedHydrograph, Outcome, TimeSeries } from './derive-hydrograph';
+// The hydrograph's edits and fit (./hydrograph-edits) are imported by path: the panel that uses them loads on first use.
 export {
   FIRST_BASEFLOW_KIND,
   recordOffsetH,

@@ -26,6 +26,9 @@ const EventsView = lazyPart('event set', () => import('./events').then((m) => m.
 const DesignStormView = lazyPart('design storm view', () => import('./design-storm').then((m) => m.DesignStormView));
 const RecordView = lazyPart('long record view', () => import('./record').then((m) => m.RecordView));
 const ComparePanel = lazyPart('comparison', () => import('./compare').then((m) => m.ComparePanel));
+const HydrographPanel = lazyPart('runoff hydrograph', () =>
+  import('./hydrograph/HydrographPanel').then((m) => m.HydrographPanel),
+);
 
 // Below the chart and the results, out of the first view: it loads just after the first screen.
 const BarTable = lazyPart('bar table', () => import('./storm-input/table/BarTable').then((m) => m.BarTable));
@@ -99,6 +102,7 @@ function Workbench({ rainfallTools, updates }: { rainfallTools?: ReactNode; upda
                 </div>
                 <div className="bench__side">
                   <MethodPanel />
+                  <HydrographPanel />
                   <MatchingPanel />
                 </div>
                 <PinnedComparison />

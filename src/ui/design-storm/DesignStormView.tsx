@@ -1,5 +1,7 @@
 import { useMemo, useState } from 'react';
-import { computeLosses, isInputError, methodSpec, runoffVolumeM3, type LossMethod } from '../../core';
+import { computeLosses, isInputError, methodSpec, runoffHydrograph, runoffVolumeM3, type LossMethod } from '../../core';
+import { dischargeText } from '../observed/discharge';
+import { hoursMinutes } from '../hydrograph/hours-minutes';
 import { useActions, useDerived, useScenario, useWorkbenchStore, withDesignStormOnWorkbench } from '../../store';
 import { toScenarioStorm } from '../../store/edits';
 import { usePins, useServices } from '../share/services';
@@ -104,6 +106,23 @@ export function DesignStormView() {
       throw error;
     }
   }, [built, method]);
+
+  // The design peak, through the workbench's unit hydrograph (issue 13), when one is chosen.
+  const transform = useScenario((s) => s.hydrograph.transform);
+  const peak = useMemo(() => {
+    if (!result?.ok || !built.ok || transform === null || !(areaM2 > 0)) return null;
+    try {
+      const h = runoffHydrograph(
+        { durationsH: built.storm.durationsH, excessMm: result.r.excessMm },
+        transform,
+        areaM2,
+      );
+      return { ok: true as const, peakM3s: h.peakM3s, timeOfPeakH: h.timeOfPeakH };
+    } catch (error) {
+      if (isInputError(error)) return { ok: false as const, message: error.message };
+      throw error;
+    }
+  }, [result, built, transform, areaM2]);
 
   const spec = methodSpec(method.kind);
   const param = spec.params.find((p) => p.key === fits.parameter);
@@ -292,6 +311,16 @@ export function DesignStormView() {
                   <dt>Runoff fraction</dt>
                   <dd>{formatPercent(result.r.runoffFraction)}</dd>
                 </div>
+                {peak ? (
+                  <div>
+                    <dt>Design peak discharge</dt>
+                    <dd data-result="design-peak">
+                      {peak.ok
+                        ? `${dischargeText(peak.peakM3s, units)} at ${hoursMinutes(peak.timeOfPeakH)} after the storm start`
+                        : `— (${peak.message})`}
+                    </dd>
+                  </div>
+                ) : null}
               </dl>
             ) : result ? (
               <p role="alert" className="design-form__problem">

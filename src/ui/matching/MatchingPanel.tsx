@@ -16,6 +16,10 @@ import { NumberField } from '../fields/NumberField';
 import { formatValue } from '../format';
 import { VOLUME_CHOICES, displayUnit, fromDisplay, toDisplay, unitText } from '../units';
 import { labelInSentence, paramAmount } from './fit-words';
+import { lazyPart } from '../layout/LazyPart';
+
+// How sure the fit is: its interval and calibration chart load on first use (not part of the first screen).
+const FitUncertainty = lazyPart('fit uncertainty', () => import('./FitUncertainty').then((m) => m.FitUncertainty));
 
 /**
  * The observed value when the user switches between depth and volume: the
@@ -201,6 +205,7 @@ export function MatchingPanel() {
       <p className="matching__answer" id="fit-answer" aria-live="polite">
         {answer}
       </p>
+      {observed ? <FitUncertainty /> : null}
     </section>
   );
 }
