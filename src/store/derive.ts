@@ -14,7 +14,7 @@ import {
 } from '../core';
 import type { Scenario } from '../scenario/types';
 import { alignRecord, type Alignment } from './alignment';
-import { createHydrographDerived, type HydrographDerived, type TimeSeries } from './derive-hydrograph';
+import type { HydrographDerived, TimeSeries } from './derive-hydrograph';
 import { memoLast } from './memo';
 
 /** The observed runoff as a depth to match, or why it cannot be one. */
@@ -30,7 +30,37 @@ export type Separation =
   | { readonly ok: true; readonly result: BaseflowResult; readonly method: BaseflowMethod }
   | { readonly ok: false; readonly message: string; readonly field: string; readonly method: BaseflowMethod };
 
+/**
+ * The hydrograph side of the derived values (derive-hydrograph.ts and the
+ * core's transforms) is fetched just after the first screen, not with it:
+ * until it arrives its values are null (as with no hydrograph chosen), and
+ * `whenHydrographReady` tells the store to draw again once they can be had.
+ */
+type HydrographModule = typeof import('./derive-hydrograph');
+let hydrographModule: HydrographModule | null = null;
+let hydrographLoading: Promise<HydrographModule> | null = null;
+const hydrographWaiting = new Set<() => void>();
+
+/** Fetches the hydrograph side's code once (again after a failed fetch); resolves when it can be used. */
+export function loadHydrographSide(): Promise<HydrographModule> {
+  hydrographLoading ??= import('./derive-hydrograph').then(
+    (m) => {
+      hydrographModule = m;
+      for (const ready of hydrographWaiting) ready();
+      hydrographWaiting.clear();
+      return m;
+    },
+    (error: unknown) => {
+      hydrographLoading = null;
+      throw error;
+    },
+  );
+  return hydrographLoading;
+}
+
 export interface Derived extends HydrographDerived {
+  /** Calls `ready` once the hydrograph side's code has arrived (at once if it has). */
+  whenHydrographReady(ready: () => void): void;
   /**
    * The observed runoff as a depth (null when none is entered). While the
    * streamflow record is used as the observed runoff, it is the separated
@@ -185,7 +215,7 @@ export function createDerived(): Derived {
     const on = separatedOnAxis(s);
     return observedDirect(on?.timesH, on?.result);
   };
-  const hydrographSide = createHydrographDerived({
+  const lossSide: Parameters<HydrographModule['createHydrographDerived']>[0] = {
     excessMm: (s) => {
       const r = resultsOf(s);
       return r.ok ? r.result.excessMm : null;
@@ -199,10 +229,35 @@ export function createDerived(): Derived {
       const t = targetOf(s);
       return t?.ok ? t.mm : null;
     },
-  });
+  };
+
+  let side: HydrographDerived | null = null;
+  /** The hydrograph side, or null (its code then starts loading). */
+  const hydro = (): HydrographDerived | null => {
+    if (side) return side;
+    if (hydrographModule) return (side = hydrographModule.createHydrographDerived(lossSide));
+    void loadHydrographSide().catch(() => {}); // a failed fetch is tried again at the next call
+    return null;
+  };
+  const hydrographSide: HydrographDerived = {
+    hydrograph: (s) => hydro()?.hydrograph(s) ?? null,
+    totalFlow: (s) => hydro()?.totalFlow(s) ?? null,
+    comparison: (s) => hydro()?.comparison(s) ?? null,
+    hydrographEndH: (s) => hydro()?.hydrographEndH(s) ?? null,
+    unitHydrographDepthMm: (s) => hydro()?.unitHydrographDepthMm(s) ?? null,
+    lossInterval: (s) => hydro()?.lossInterval(s) ?? null,
+    lossCurve: (s) => hydro()?.lossCurve(s) ?? null,
+  };
 
   return {
     ...hydrographSide,
+    whenHydrographReady: (ready) => {
+      if (hydrographModule) ready();
+      else {
+        hydrographWaiting.add(ready);
+        void loadHydrographSide().catch(() => {});
+      }
+    },
     observedDirect: observedDirectOf,
     target: targetOf,
     separation: separationOf,

@@ -7,7 +7,7 @@ export type {
   WorkbenchState,
   WorkbenchStore,
 } from './scenario-store';
-export { createDerived, type Derived, type Results, type Separation, type Target } from './derive';
+export { createDerived, loadHydrographSide, type Derived, type Results, type Separation, type Target } from './derive';
 export type { ComputedHydrograph, Outcome, TimeSeries } from './derive-hydrograph';
 // The hydrograph's edits and fit (./hydrograph-edits) are imported by path: the panel that uses them loads on first use.
 export {

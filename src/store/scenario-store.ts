@@ -283,5 +283,7 @@ export function createWorkbenchStore(initial: Scenario, options: CreateStoreOpti
     };
   });
 
+  // Once the hydrograph side's code arrives, every view reading it draws again (the scenario is unchanged).
+  derived.whenHydrographReady(() => api.setState({}));
   return Object.assign(api, { derived });
 }

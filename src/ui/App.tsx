@@ -1,5 +1,5 @@
 import { Fragment, type ReactNode } from 'react';
-import { StoreProvider, useActions, useScenario, type WorkbenchStore } from '../store';
+import { StoreProvider, loadHydrographSide, useActions, useScenario, type WorkbenchStore } from '../store';
 import { Hyetograph } from './chart/Hyetograph';
 import { useUndoShortcuts } from './keyboard/useUndoShortcuts';
 import { Caution } from './layout/Caution';
@@ -23,11 +23,14 @@ import type { UpdateChannel } from '../offline/updates';
 // Views the first screen does not show load when first opened, so the first screen's JavaScript stays small
 // (scripts/check-first-screen.mjs holds it under its budget).
 const EventsView = lazyPart('event set', () => import('./events').then((m) => m.EventsView));
-const DesignStormView = lazyPart('design storm view', () => import('./design-storm').then((m) => m.DesignStormView));
+const DesignStormView = lazyPart('design storm view', () =>
+  Promise.all([import('./design-storm'), loadHydrographSide()]).then(([m]) => m.DesignStormView),
+);
 const RecordView = lazyPart('long record view', () => import('./record').then((m) => m.RecordView));
 const ComparePanel = lazyPart('comparison', () => import('./compare').then((m) => m.ComparePanel));
+// Parts that show the computed hydrograph wait for its code too (loadHydrographSide), so they draw it at once.
 const HydrographPanel = lazyPart('runoff hydrograph', () =>
-  import('./hydrograph/HydrographPanel').then((m) => m.HydrographPanel),
+  Promise.all([import('./hydrograph/HydrographPanel'), loadHydrographSide()]).then(([m]) => m.HydrographPanel),
 );
 
 // Below the chart and the results, out of the first view: it loads just after the first screen.

@@ -1,5 +1,5 @@
 import { CAUTION_TEXT, scenarioFileName } from '../../scenario';
-import { useScenario, useWorkbenchStore } from '../../store';
+import { loadHydrographSide, useScenario, useWorkbenchStore } from '../../store';
 import { useBarMessage } from '../share/bar-message';
 import { useServices } from '../share/services';
 import { loadReport } from './PrintReport';
@@ -63,6 +63,12 @@ export function ExportButtons() {
   const hasHydrograph = useScenario((s) => s.hydrograph.transform !== null);
   const exportHydrographCsv = async (): Promise<void> => {
     const { scenario, base } = current();
+    try {
+      await loadHydrographSide();
+    } catch (error) {
+      show({ tone: 'problem', title: `No hydrograph was exported: ${why(error)}.` });
+      return;
+    }
     const computed = store.derived.hydrograph(scenario);
     if (!computed?.ok) {
       show({

@@ -11,7 +11,7 @@ import {
   type VolumeUnit,
 } from '../../core';
 import type { Scenario } from '../../scenario/types';
-import { useActions, useDerived, useScenario } from '../../store';
+import { loadHydrographSide, useActions, useDerived, useScenario } from '../../store';
 import { NumberField } from '../fields/NumberField';
 import { formatValue } from '../format';
 import { VOLUME_CHOICES, displayUnit, fromDisplay, toDisplay, unitText } from '../units';
@@ -19,7 +19,9 @@ import { labelInSentence, paramAmount } from './fit-words';
 import { lazyPart } from '../layout/LazyPart';
 
 // How sure the fit is: its interval and calibration chart load on first use (not part of the first screen).
-const FitUncertainty = lazyPart('fit uncertainty', () => import('./FitUncertainty').then((m) => m.FitUncertainty));
+const FitUncertainty = lazyPart('fit uncertainty', () =>
+  Promise.all([import('./FitUncertainty'), loadHydrographSide()]).then(([m]) => m.FitUncertainty),
+);
 
 /**
  * The observed value when the user switches between depth and volume: the

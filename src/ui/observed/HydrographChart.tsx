@@ -1,6 +1,6 @@
 import { baseflowMethodSpec } from '../../core';
 import type { Streamflow } from '../../scenario/types';
-import { useDerived, useScenario } from '../../store';
+import { loadHydrographSide, useDerived, useScenario } from '../../store';
 import { lazyPart } from '../layout/LazyPart';
 import { StreamflowButtons } from './StreamflowButtons';
 import './observed.css';
@@ -9,7 +9,7 @@ export { HYDROGRAPH_HEIGHT } from './hydrograph-frame';
 
 // The plot and its separation layers load once there is a record to draw (they are not part of the first screen).
 const HydrographPlot = lazyPart<{ flow: Streamflow | null }>('hydrograph', () =>
-  import('./HydrographPlot').then((m) => m.HydrographPlot),
+  Promise.all([import('./HydrographPlot'), loadHydrographSide()]).then(([m]) => m.HydrographPlot),
 );
 
 /**
