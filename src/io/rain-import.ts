@@ -474,6 +474,16 @@ export function previewRainImport(
   return previewOf(settings, result, series);
 }
 
+/** The preview and the result of one run: what a dialog needs, reading a long text once rather than twice. */
+export function readRainImport(
+  text: string,
+  settings: RainImportSettings,
+  format: NumberFormat = DEFAULT_NUMBER_FORMAT,
+): { readonly preview: RainImportPreview; readonly result: RainImportResult } {
+  const { result, series } = runRainImport(text, settings, format);
+  return { preview: previewOf(settings, result, series), result };
+}
+
 /** Guesses the settings and returns the preview they give. */
 export function guessRainImport(text: string, hints: ImportHints = {}): RainImportPreview {
   return previewRainImport(
