@@ -97,6 +97,7 @@ function splitSingleColumn(text: string): { rows: TextRow[]; problems: ImportPro
  */
 function splitUnquoted(text: string, delimiter: string): { rows: TextRow[]; problems: ImportProblem[] } {
   const rows: TextRow[] = [];
+  if (text === '') return { rows, problems: [] };
   let line = 1;
   let from = 0;
   // The next separator at or after the read position, kept across lines so a line without one costs no search to the end.
