@@ -1,6 +1,7 @@
 import type { ReadOutcome } from '../../io';
 import { unpackColumns, type ReadReply, type ReadRequest, type ReadStage } from './reader-messages';
 import { readSteps } from './run-read';
+import { startWorker } from './start-worker';
 
 /** What a reader tells the dialog as it goes. */
 export interface ReadListener {
@@ -17,16 +18,6 @@ export interface TextReader {
   readonly stop: () => void;
   /** 'worker' off the page's thread; 'page' when no worker could start (the one-file build). */
   readonly where: 'worker' | 'page';
-}
-
-/** The worker, or null when the page cannot start one (no Worker, a policy that refuses it, a file:// page). */
-function startWorker(): Worker | null {
-  if (typeof Worker === 'undefined') return null;
-  try {
-    return new Worker(new URL('./reader.worker.ts', import.meta.url), { type: 'module', name: 'raincut-reader' });
-  } catch {
-    return null;
-  }
 }
 
 /** Lets the page draw and answer input between two steps of a read on its own thread. */
