@@ -3,6 +3,8 @@ import {
   LAST_CLOCK_YEAR,
   MAX_RECORD_H,
   MAX_RECORD_YEARS,
+  daysFromCivil,
+  daysInMonth,
   describeHours,
   isBelowMinStep,
   wallClockParts,
@@ -76,11 +78,6 @@ const YEAR_LAST = new RegExp(
 
 const CLOCK_HELP =
   'use an ISO 8601 date-time (2024-05-01T10:00), a date and time (01/05/2024 10:00) or a time of day (10:00).';
-
-function daysInMonth(year: number, month: number): number {
-  const leap = (year % 4 === 0 && year % 100 !== 0) || year % 400 === 0;
-  return [31, leap ? 29 : 28, 31, 30, 31, 30, 31, 31, 30, 31, 30, 31][month - 1] ?? 0;
-}
 
 function checkDate(year: number, month: number, day: number): Parsed<CalendarDate> {
   if (month < 1 || month > 12) return { ok: false, reason: `there is no month ${month}.` };
@@ -236,20 +233,6 @@ export function looksLikeClock(cell: string): boolean {
 /** Milliseconds of a calendar date's midnight on a zone-free timeline. */
 export function dateMs(date: CalendarDate): number {
   return daysFromCivil(date.year, date.month, date.day) * MS_PER_DAY;
-}
-
-/**
- * Days from 1970-01-01 to a date of the proleptic Gregorian calendar, in
- * closed form (the civil-from-days algorithm of Hinnant, "chrono-Compatible
- * Low-Level Date Algorithms", 2013): no Date object per line of a long record.
- */
-function daysFromCivil(year: number, month: number, day: number): number {
-  const y = month <= 2 ? year - 1 : year;
-  const era = Math.floor(y / 400);
-  const yoe = y - era * 400;
-  const doy = Math.floor((153 * (month + (month > 2 ? -3 : 9)) + 2) / 5) + day - 1;
-  const doe = yoe * 365 + Math.floor(yoe / 4) - Math.floor(yoe / 100) + doy;
-  return era * 146097 + doe - 719468;
 }
 
 /** Reads a "YYYY-MM-DD" date (as typed into a settings field). */
