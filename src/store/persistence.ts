@@ -1,4 +1,3 @@
-import { createScenarioLibrary } from '../scenario/library';
 import { MAX_NAME_LENGTH } from '../scenario/text-limits';
 import type { Scenario } from '../scenario/types';
 import { readScenarioJson } from './read-scenario';
@@ -227,8 +226,10 @@ export function persistStore(
     lastSaved = store.getState().scenario;
   };
 
-  const keepMine = (): void => {
+  const keepMine = async (): Promise<void> => {
     const mine = store.getState().scenario;
+    // The saved list's code loads here, on this rare path, not with the first screen.
+    const { createScenarioLibrary } = await import('../scenario/library');
     const saved = createScenarioLibrary(storage).save({ ...mine, name: copyName(mine.name) });
     if (!saved.ok) {
       store.getState().actions.setNotice({

@@ -53,7 +53,7 @@ export type StorageNotice =
       /** Opens the other tab's version here (one undoable edit). */
       readonly takeTheirs: () => void;
       /** Saves this tab's scenario under a new name in the saved list, then saves it as the current one again. */
-      readonly keepMine: () => void;
+      readonly keepMine: () => Promise<void>;
     };
 
 export interface EditOptions {

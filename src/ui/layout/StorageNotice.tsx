@@ -14,7 +14,7 @@ export function StorageNoticeBar() {
         <button type="button" onClick={notice.takeTheirs}>
           Open the other tab’s version
         </button>
-        <button type="button" onClick={notice.keepMine}>
+        <button type="button" onClick={() => void notice.keepMine()}>
           Keep this one
         </button>
       </div>

@@ -82,7 +82,7 @@ describe('two tabs of the workbench', () => {
     expect(a.store.getState().scenario.name).toBe('Tab A');
   });
 
-  it('"keep this one" saves it under a new name in the saved list, then as the saved scenario; the other tab is told', () => {
+  it('"keep this one" saves it under a new name in the saved list, then as the saved scenario; the other tab is told', async () => {
     const { storage, a, b } = twoTabs();
     b.actions.setName('Tab B');
     vi.advanceTimersByTime(10);
@@ -90,7 +90,7 @@ describe('two tabs of the workbench', () => {
     vi.advanceTimersByTime(10);
     const notice = a.store.getState().notice;
     if (notice?.kind !== 'other-tab') throw new Error('tab A was not told');
-    notice.keepMine();
+    await notice.keepMine();
     const list = createScenarioLibrary(storage).list();
     expect(list.entries.map((e) => e.scenario.name)).toEqual(['Tab A (this tab’s copy)']);
     expect(saved(storage).name).toBe('Tab A');
