@@ -50,6 +50,10 @@ export {
   guessRainImport,
   guessRainSettings,
   previewRainImport,
+  readRainImport,
+  findGaps,
+  type GapChoice,
+  type RecordGaps,
   applyRainImport,
   rainHintsFromName,
   type RainImportSettings,
@@ -65,6 +69,7 @@ export {
   guessFlowImport,
   guessFlowSettings,
   previewFlowImport,
+  readFlowImport,
   applyFlowImport,
   flowUnitFromName,
   type FlowImportSettings,
@@ -72,3 +77,14 @@ export {
   type FlowImportResult,
   type FlowRecord,
 } from './flow-import';
+export { guessForScreen } from './screen-guess';
+export {
+  READERS,
+  RAIN_READER,
+  FLOW_READER,
+  PREVIEW_ROWS,
+  type Reader,
+  type ReaderName,
+  type ReaderContext,
+  type ReadOutcome,
+} from './readers';

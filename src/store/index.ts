@@ -35,6 +35,8 @@ export {
   type SetAsideResult,
   type Loaded,
   type Persistence,
+  type OtherTabWatch,
+  copyName,
   type StorageLike,
 } from './persistence';
 export { StoreProvider, useActions, useDerived, useScenario, useWorkbench, useWorkbenchStore } from './react';

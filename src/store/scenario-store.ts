@@ -45,7 +45,16 @@ import {
 export type StorageNotice =
   | { readonly kind: 'set-aside'; readonly message: string; readonly key: string }
   | { readonly kind: 'save-failed'; readonly message: string }
-  | { readonly kind: 'unavailable'; readonly message: string };
+  | { readonly kind: 'unavailable'; readonly message: string }
+  /** Another tab changed the saved scenario: nothing is written over it until the user chooses. */
+  | {
+      readonly kind: 'other-tab';
+      readonly message: string;
+      /** Opens the other tab's version here (one undoable edit). */
+      readonly takeTheirs: () => void;
+      /** Saves this tab's scenario under a new name in the saved list, then saves it as the current one again. */
+      readonly keepMine: () => Promise<void>;
+    };
 
 export interface EditOptions {
   /** Successive edits with the same key in quick succession are one undo step. */

@@ -1,12 +1,17 @@
 import { useMemo } from 'react';
 import { totalDepthMm } from '../../../core';
-import { applyRainImport, previewRainImport, type ImportedStorm, type RainImportSettings } from '../../../io';
+import {
+  applyRainImport,
+  guessForScreen,
+  previewRainImport,
+  type ImportedStorm,
+  type RainImportSettings,
+} from '../../../io';
 import { useActions, useScenario } from '../../../store';
 import { formatCount, formatValue } from '../../format';
 import { currentNumberFormat } from '../../number-format';
 import { ImportDialog, type ImportDraft, type ImportKind, type ImportWords } from '../../import-kit';
 import { displayUnit, toDisplay, unitText } from '../../units';
-import { guessForScreen } from './guess';
 import { ImportSettings, type SettingsPatch } from './ImportSettings';
 import { PreviewBars } from './PreviewBars';
 
@@ -58,6 +63,7 @@ export function PasteDialog({ initial, onClose }: PasteDialogProps) {
       preview: (text, settings) => previewRainImport(text, settings, format),
       apply: stormOf,
       Settings: ImportSettings,
+      reader: { name: 'rain', context: { numberFormat: format, units, stepMinutes } },
     };
   }, [units, stepMinutes]);
 
