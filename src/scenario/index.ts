@@ -27,6 +27,7 @@ export { scenarioToFileText, scenarioFromFileText, scenarioFileName, FILE_FORMAT
 export { CAUTION_TEXT } from './caution';
 export { MAX_NAME_LENGTH, MAX_NOTES_LENGTH, textLengthProblem } from './text-limits';
 export { DEMO_SCENARIO } from './demo';
+export { blankScenario } from './blank';
 export {
   createScenarioLibrary,
   LIBRARY_KEY,

@@ -8,6 +8,7 @@ import {
   type Storm,
   type UnitSystem,
 } from '../core';
+import { blankScenario } from '../scenario/blank';
 import type { Scenario } from '../scenario/types';
 import { createDerived, type Derived } from './derive';
 import {
@@ -19,7 +20,9 @@ import {
   withMethod,
   withMethodDefaults,
   withMethodKind,
+  withCatchmentName,
   withName,
+  withNotes,
   withObserved,
   withParam,
   withStartIso,
@@ -59,6 +62,10 @@ export interface WorkbenchActions {
   edit(label: string, recipe: (s: Scenario) => Scenario, options?: EditOptions): void;
 
   setName(name: string): void;
+  setCatchmentName(name: string): void;
+  setNotes(notes: string): void;
+  /** Starts a new, empty scenario in the same units (one undoable step). */
+  newScenario(): void;
   setUnits(units: UnitSystem): void;
   setAreaM2(areaM2: number, options?: EditOptions): void;
 
@@ -165,6 +172,10 @@ export function createWorkbenchStore(initial: Scenario, options: CreateStoreOpti
     const actions: WorkbenchActions = {
       edit,
       setName: (name) => edit('Rename scenario', (s) => withName(s, name), { coalesceKey: 'name' }),
+      setCatchmentName: (name) =>
+        edit('Rename catchment', (s) => withCatchmentName(s, name), { coalesceKey: 'catchment-name' }),
+      setNotes: (notes) => edit('Edit notes', (s) => withNotes(s, notes), { coalesceKey: 'notes' }),
+      newScenario: () => edit('New scenario', (s) => blankScenario(s.units, s.method)),
       setUnits: (units) =>
         edit(units === 'us' ? 'Show US customary units' : 'Show SI units', (s) => withUnits(s, units)),
       setAreaM2: (areaM2, opts) => edit('Set catchment area', (s) => withAreaM2(s, areaM2), opts),

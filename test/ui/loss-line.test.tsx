@@ -2,9 +2,12 @@
 import { fireEvent, screen, waitFor } from '@testing-library/react';
 import { describe, expect, it } from 'vitest';
 import { chartFrame } from '../../src/ui/chart/frame';
-import { CHART_HEIGHT } from '../../src/ui/chart/Hyetograph';
+import { chartHeightFor } from '../../src/ui/chart/chart-height';
 import { coreTotals, mmText, renderWorkbench } from './render';
 import { FOUR_BARS } from './store/fixtures';
+
+/** The chart's height in this window (jsdom's 768 px tall one), as the page draws it. */
+const CHART_HEIGHT = chartHeightFor(window.innerHeight);
 
 // jsdom lays nothing out: the chart keeps its fallback width and the svg sits at y = 0,
 // so a pointer's clientY is the chart's own y.

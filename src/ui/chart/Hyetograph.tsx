@@ -6,6 +6,7 @@ import { formatCount, formatValue } from '../format';
 import { displayUnit, toDisplay, unitText } from '../units';
 import { Axes } from './Axes';
 import { CAPACITY_CURVES } from './capacity';
+import { useChartHeight } from './chart-height';
 import { chartFrame } from './frame';
 import { LINE_PARAM, LOSS_PARTS } from './line-params';
 import { LossLayer } from './LossLayer';
@@ -14,7 +15,7 @@ import { RainLayer } from './RainLayer';
 import { useTimeSpanH } from './time-span';
 import { useElementWidth } from './useElementWidth';
 
-export const CHART_HEIGHT = 360;
+export { CHART_HEIGHT } from './chart-height';
 
 /** The part of the loss drawn in its own shade (initial loss), computed by the core. */
 function lossPart(storm: Scenario['storm'], method: LossMethod): Float64Array | null {
@@ -43,7 +44,8 @@ export function Hyetograph() {
 
   // With a streamflow record the axis holds the record too, shared with the hydrograph below.
   const span = useTimeSpanH();
-  const frame = useMemo(() => chartFrame(storm, width, CHART_HEIGHT, units, span), [storm, width, units, span]);
+  const height = useChartHeight();
+  const frame = useMemo(() => chartFrame(storm, width, height, units, span), [storm, width, height, units, span]);
   const part = useMemo(() => lossPart(storm, method), [storm, method]);
   const capacity = CAPACITY_CURVES[method.kind];
   const capacityPath = useMemo(
@@ -94,7 +96,7 @@ export function Hyetograph() {
         </ul>
       </figcaption>
       <div className="chart__box" ref={boxRef}>
-        <svg className="chart__svg" width={width} height={CHART_HEIGHT} role="group" aria-labelledby="chart-title">
+        <svg className="chart__svg" width={width} height={height} role="group" aria-labelledby="chart-title">
           <defs>
             <pattern id="part-hatch" width="6" height="6" patternUnits="userSpaceOnUse" patternTransform="rotate(45)">
               <rect className="hatch__bg" width="6" height="6" />

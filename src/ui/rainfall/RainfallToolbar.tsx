@@ -67,11 +67,13 @@ export function RainfallToolbar({ tools }: { tools?: ReactNode }) {
   const when = start === null ? '' : `, from ${formatWallDate(start)} ${formatWallTime(start)}`;
   return (
     <section className="rainfall" aria-labelledby="rainfall-title" data-slot="rainfall-tools">
-      <h2 id="rainfall-title">Rainfall</h2>
-      <p className="rainfall__summary" aria-live="polite">
-        {bars}, {depth} in {formatDuration(totalDurationH(storm))}
-        {when}
-      </p>
+      <div className="rainfall__what">
+        <h2 id="rainfall-title">Rainfall</h2>
+        <p className="rainfall__summary" aria-live="polite">
+          {bars}, {depth} in {formatDuration(totalDurationH(storm))}
+          {when}
+        </p>
+      </div>
       <RecordWarning storm={storm} units={units} />
       {tools ? <div className="rainfall__tools">{tools}</div> : null}
     </section>

@@ -3,10 +3,13 @@ import { fireEvent, screen, within } from '@testing-library/react';
 import { describe, expect, it } from 'vitest';
 import type { Scenario } from '../../../src/scenario/types';
 import { chartFrame } from '../../../src/ui/chart/frame';
-import { CHART_HEIGHT } from '../../../src/ui/chart/Hyetograph';
+import { chartHeightFor } from '../../../src/ui/chart/chart-height';
 import { expectAllClose } from '../../helpers/tolerance';
 import { lazyPartsLoaded, renderWorkbench } from '../render';
 import { FOUR_BARS } from '../store/fixtures';
+
+/** The chart's height in this window (jsdom's 768 px tall one), as the page draws it. */
+const CHART_HEIGHT = chartHeightFor(window.innerHeight);
 
 // jsdom lays nothing out: the chart keeps its fallback width (880 px) and sits at
 // the top left, so a pointer's clientX/clientY are the chart's own x and y.
