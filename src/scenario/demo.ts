@@ -24,3 +24,35 @@ export const DEMO_SCENARIO: Scenario = {
   streamflow: null,
   eventSet: { events: [], activeId: null, parameter: null, designPick: 'median' },
 };
+
+/**
+ * Whether the scenario still carries the invented demo's identity: its name, its catchment's name or its notes.
+ * A storm of the user's own laid over it would otherwise be saved, shared and printed under the demo's words.
+ */
+export function carriesDemoIdentity(s: Scenario): boolean {
+  return (
+    s.name === DEMO_SCENARIO.name ||
+    s.catchment.name === DEMO_SCENARIO.catchment.name ||
+    s.notes === DEMO_SCENARIO.notes
+  );
+}
+
+/**
+ * The scenario without the demo's identity: no name, notes, catchment name or area, and no observed runoff when it
+ * is still the demo's (all of them describe the invented event, not the storm brought in). Method and units stay.
+ */
+export function withoutDemoIdentity(s: Scenario): Scenario {
+  const demoObserved = DEMO_SCENARIO.observed;
+  const observedIsDemo =
+    s.observed !== null &&
+    demoObserved !== null &&
+    s.observed.as === demoObserved.as &&
+    s.observed.value === demoObserved.value;
+  return {
+    ...s,
+    name: s.name === DEMO_SCENARIO.name ? '' : s.name,
+    notes: s.notes === DEMO_SCENARIO.notes ? '' : s.notes,
+    catchment: s.catchment.name === DEMO_SCENARIO.catchment.name ? { name: '', areaM2: 0 } : s.catchment,
+    observed: observedIsDemo ? null : s.observed,
+  };
+}

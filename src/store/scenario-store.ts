@@ -9,6 +9,7 @@ import {
   type UnitSystem,
 } from '../core';
 import { blankScenario } from '../scenario/blank';
+import { carriesDemoIdentity, withoutDemoIdentity } from '../scenario/demo';
 import type { Scenario } from '../scenario/types';
 import { createDerived, type Derived } from './derive';
 import {
@@ -71,6 +72,11 @@ export interface WorkbenchActions {
 
   /** Replaces the whole storm (paste, draw, storm tools) as one undoable edit named `label`. */
   setStorm(storm: Storm, label: string): void;
+  /**
+   * Replaces the storm with one brought in from elsewhere (pasted, opened from a file). Over the invented demo it
+   * also clears the demo's name, catchment, notes and observed runoff, which are not the new storm's.
+   */
+  setImportedStorm(storm: Storm, label: string): void;
   setBarDepth(k: number, depthMm: number, options?: EditOptions): void;
   setBarDuration(k: number, durationH: number, options?: EditOptions): void;
   /** Inserts a bar before index k (k = bar count appends); default a dry bar as long as its neighbour. */
@@ -181,6 +187,11 @@ export function createWorkbenchStore(initial: Scenario, options: CreateStoreOpti
       setAreaM2: (areaM2, opts) => edit('Set catchment area', (s) => withAreaM2(s, areaM2), opts),
 
       setStorm: (storm, label) => edit(label, (s) => withStorm(s, storm)),
+      setImportedStorm: (storm, label) =>
+        edit(label, (s) => {
+          const next = withStorm(s, storm);
+          return carriesDemoIdentity(s) ? withoutDemoIdentity(next) : next;
+        }),
       setBarDepth: (k, depthMm, opts) => edit(`Set bar ${k + 1} depth`, (s) => withBarDepth(s, k, depthMm), opts),
       setBarDuration: (k, durationH, opts) =>
         edit(`Set bar ${k + 1} duration`, (s) => withBarDuration(s, k, durationH), opts),
