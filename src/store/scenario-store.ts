@@ -10,6 +10,7 @@ import {
 } from '../core';
 import { blankScenario } from '../scenario/blank';
 import { carriesDemoIdentity, withoutDemoIdentity } from '../scenario/demo';
+import { labelInSentence } from '../scenario/label-text';
 import type { Scenario } from '../scenario/types';
 import { createDerived, type Derived } from './derive';
 import {
@@ -175,6 +176,18 @@ export function createWorkbenchStore(initial: Scenario, options: CreateStoreOpti
       return spec.params.find((p) => p.key === key)?.label ?? spec.choices?.find((c) => c.key === key)?.label ?? key;
     };
 
+    // Each kind of change to the observed runoff is an undo step of its own name.
+    const observedLabel = (s: Scenario, patch: Partial<Observed> | null): string => {
+      if (patch === null) return 'Clear observed runoff';
+      if (s.observed !== null && patch.as !== undefined && patch.as !== s.observed.as)
+        return patch.as === 'volume' ? 'Give observed runoff as a volume' : 'Give observed runoff as a depth';
+      if (patch.value === undefined && patch.parameter !== undefined)
+        return `Choose ${labelInSentence(paramLabel(s, patch.parameter))} to fit`;
+      if (patch.value === undefined && patch.locked !== undefined)
+        return patch.locked ? 'Keep matched to observed runoff' : 'Stop keeping matched';
+      return 'Set observed runoff';
+    };
+
     const actions: WorkbenchActions = {
       edit,
       setName: (name) => edit('Rename scenario', (s) => withName(s, name), { coalesceKey: 'name' }),
@@ -206,7 +219,7 @@ export function createWorkbenchStore(initial: Scenario, options: CreateStoreOpti
         edit(`Use ${methodSpec(kind).label}`, (s) => withMethodKind(s, kind, derived.effectiveMethod(s))),
       setParam: (key, value, opts) =>
         edit(
-          `Set ${paramLabel(get().scenario, key).toLowerCase()}`,
+          `Set ${labelInSentence(paramLabel(get().scenario, key))}`,
           (s) => {
             if (s.observed?.locked && s.observed.parameter === key && derived.isMatched(s)) {
               throw new InputError(
@@ -230,7 +243,7 @@ export function createWorkbenchStore(initial: Scenario, options: CreateStoreOpti
           return withMethod(s, method);
         }),
 
-      setObserved: (patch, opts) => edit('Set observed runoff', (s) => withObserved(s, patch), opts),
+      setObserved: (patch, opts) => edit(observedLabel(get().scenario, patch), (s) => withObserved(s, patch), opts),
       setKeepMatched: (on) =>
         edit(on ? 'Keep matched to observed runoff' : 'Stop keeping matched', (s) => {
           if (!s.observed)
@@ -245,7 +258,7 @@ export function createWorkbenchStore(initial: Scenario, options: CreateStoreOpti
         const result = derived.fit(s);
         if (result?.ok) {
           const fitted: LossMethod = result.method;
-          edit(`Fit ${paramLabel(s, s.observed?.parameter ?? '').toLowerCase()} to observed runoff`, (doc) =>
+          edit(`Fit ${labelInSentence(paramLabel(s, s.observed?.parameter ?? ''))} to observed runoff`, (doc) =>
             withMethod(doc, fitted),
           );
         }

@@ -5,6 +5,7 @@ import { useDragHandle } from '../interaction/useDragHandle';
 import { displayUnit, fromDisplay, toDisplay, unitText } from '../units';
 import { fineStep, grabOffsetPx, valueAfterKey, valueAtPointer } from './drag-math';
 import type { ChartFrame } from './frame';
+import { labelInSentence } from '../../scenario/label-text';
 
 export interface LossLineProps {
   readonly frame: ChartFrame;
@@ -36,7 +37,7 @@ export function LossLine({ frame, paramKey, label, valueMmH, minMmH, system, loc
 
   const handlers = useDragHandle({
     axis: 'y',
-    gesture: `Drag ${label.toLowerCase()}`,
+    gesture: `Drag ${labelInSentence(label)}`,
     disabled: locked,
     grabOffsetPx: (px) => grabOffsetPx(y, px, Math.min(valueMmH, topMmH)),
     valueAt: (px, grabPx) => valueAtPointer(y, px, grabPx, minMmH, topMmH),
