@@ -48,10 +48,12 @@ export function Hyetograph() {
   const frame = useMemo(() => chartFrame(storm, width, height, units, span), [storm, width, height, units, span]);
   const part = useMemo(() => lossPart(storm, method), [storm, method]);
   const capacity = CAPACITY_CURVES[method.kind];
-  const capacityPath = useMemo(
-    () => (capacity && results.ok ? capacity.path(frame, storm, method, results.result.lossMm) : null),
-    [capacity, frame, storm, method, results],
+  const capacityDrawing = useMemo(
+    () => (capacity && results.ok ? capacity.draw(frame, storm, method) : null),
+    [capacity, frame, storm, method, results.ok],
   );
+  const capacityPath = capacityDrawing?.path ?? null;
+  const aboveTop = capacityDrawing?.aboveTopMmH ?? null;
 
   const spec = methodSpec(method.kind);
   const lineKey = LINE_PARAM[method.kind];
@@ -111,6 +113,11 @@ export function Hyetograph() {
           {capacityPath ? (
             <path className="capacity" d={capacityPath} data-layer="capacity" aria-hidden="true" />
           ) : null}
+          {aboveTop !== null ? (
+            <text className="capacity__clip" x={frame.plot.left + 6} y={frame.plot.top + 12} aria-hidden="true">
+              ▲ capacity above the chart
+            </text>
+          ) : null}
           {n === 0 ? (
             <text
               className="chart__empty"
@@ -134,6 +141,14 @@ export function Hyetograph() {
           ) : null}
         </svg>
       </div>
+      {aboveTop !== null ? (
+        <p className="chart__notice" data-note="capacity-clip">
+          The infiltration capacity runs above the top of the chart, where its dashed line runs along the top edge:{' '}
+          {Number.isFinite(aboveTop)
+            ? `up to ${formatValue(toDisplay('rate', aboveTop, units))} ${unitText(displayUnit('rate', units))}.`
+            : 'without bound where the rain starts on dry soil (Green–Ampt’s capacity at the first drop).'}
+        </p>
+      ) : null}
       {!results.ok ? (
         <p className="chart__error" role="alert">
           Losses cannot be worked out: {results.message}
