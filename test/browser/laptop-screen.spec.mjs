@@ -78,3 +78,18 @@ export const tests = SIZES.map(({ width, height }) => ({
     await context.close();
   },
 }));
+
+tests.push({
+  name: 'the hidden file inputs are not in the accessibility tree as extra buttons',
+  async run({ baseUrl, newPage }) {
+    const page = await newPage();
+    await page.goto(baseUrl);
+    await page.locator('.loss-line__stroke').waitFor({ state: 'attached' });
+    const tree = await page.locator('body').ariaSnapshot();
+    for (const name of ['Scenario file to open', 'Rainfall file to open', 'Streamflow file to open']) {
+      check(!tree.includes(name), `the screen reader's tree holds "${name}":\n${tree.slice(0, 2000)}`);
+    }
+    // The buttons that open them are there, once each.
+    check(tree.includes('button "Open scenario file…"'), 'no "Open scenario file…" button in the tree');
+  },
+});
