@@ -2,7 +2,7 @@
 // line and the live results (excess depth, runoff volume, runoff fraction) are
 // in view together without scrolling, and stay in view while the line is
 // dragged; the scenario tools and the rainfall tools do not wrap.
-import { check } from './support.mjs';
+import { addAxe, check } from './support.mjs';
 
 const SIZES = [
   { width: 1366, height: 768 },
@@ -91,5 +91,53 @@ tests.push({
     }
     // The buttons that open them are there, once each.
     check(tree.includes('button "Open scenario file…"'), 'no "Open scenario file…" button in the tree');
+  },
+});
+
+tests.push({
+  name: 'at 1280×720 the paste dialog’s "Time column" choice shows its whole text',
+  async run({ browser, baseUrl }) {
+    const context = await browser.newContext({ viewport: { width: 1280, height: 720 } });
+    const page = await context.newPage();
+    await page.goto(baseUrl);
+    await page.getByRole('button', { name: 'Paste rainfall…' }).click();
+    const dialog = page.getByRole('dialog', { name: 'Paste rainfall' });
+    await dialog.waitFor();
+    await page
+      .getByRole('textbox', { name: 'Rainfall text' })
+      .fill('Time (local, end)\tRain (mm)\n10:10\t0.4\n10:20\t1.6\n10:30\t3.2\n');
+    const select = dialog.getByRole('combobox', { name: 'Time column' });
+    await select.waitFor();
+    // The selected option's text, in the select's own font, against the room inside the select (less its arrow).
+    const fit = await select.evaluate((el) => {
+      const style = getComputedStyle(el);
+      const ctx = document.createElement('canvas').getContext('2d');
+      ctx.font = `${style.fontSize} ${style.fontFamily}`;
+      const text = el.options[el.selectedIndex].text;
+      const room = el.clientWidth - parseFloat(style.paddingLeft) - parseFloat(style.paddingRight) - 20;
+      return { text, need: Math.ceil(ctx.measureText(text).width), room: Math.floor(room) };
+    });
+    check(fit.need <= fit.room, `"${fit.text}" needs ${fit.need} px; the Time column select has ${fit.room}`);
+    await context.close();
+  },
+});
+
+tests.push({
+  name: 'the pressed "Saved scenarios" button keeps its text contrast, under the pointer too (axe)',
+  async run({ baseUrl, newPage }) {
+    const page = await newPage();
+    await page.goto(baseUrl);
+    const button = page.getByRole('button', { name: 'Saved scenarios' });
+    await button.click();
+    await page.locator('#saved-scenarios').waitFor();
+    await button.hover();
+    await addAxe(page);
+    const bad = await page.evaluate(async () => {
+      const r = await window.axe.run(document.querySelector('.scenario-bar__groups'), {
+        runOnly: ['color-contrast'],
+      });
+      return r.violations.flatMap((v) => v.nodes.map((n) => `${n.target.join(' ')}: ${n.failureSummary}`));
+    });
+    check(bad.length === 0, `contrast problems in the scenario tools:\n${bad.join('\n')}`);
   },
 });
