@@ -143,7 +143,11 @@ function DrawLayer({ wrapRef }: { wrapRef: RefObject<HTMLDivElement | null> }) {
     e.preventDefault();
     e.currentTarget.setPointerCapture?.(e.pointerId);
     const f = chartFrame(storm, at.width, height, units, span);
-    const base = { frame: f, box: at, maxMmH: Math.max(f.y.invert(0), f.topMmH) };
+    // The axis follows the pointer: above the plot (the pointer is captured) a stroke goes on rising on the
+    // stroke's own scale, up to three plot heights over the top, and the axis grows to the result when the stroke
+    // ends. Before, a stroke stopped at the chart's top and an empty storm's 10 mm/h axis took many strokes to grow.
+    const reachPx = f.plot.top - 3 * (f.plot.bottom - f.plot.top);
+    const base = { frame: f, box: at, maxMmH: Math.max(f.y.invert(reachPx), f.topMmH) };
     const first = pointIn(base, e);
     const s: Stroke = {
       ...base,
