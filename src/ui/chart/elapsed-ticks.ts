@@ -26,9 +26,11 @@ export function elapsedTicksH(fromH: number, toH: number, count: number, barStep
     barMin === null || Math.abs(step / barMin - Math.round(step / barMin)) < 1e-6;
   // A round step on the bar grid; else whole bars (7-min bars: every 14 min); else a round step; else weeks.
   const perTick = spanMin / Math.max(1, count);
+  // Whole bars only while they leave at least two intervals (a storm of one long bar gets round steps).
+  const wholeBars = barMin !== null ? barMin * Math.ceil(perTick / barMin - 1e-9) : undefined;
   const step =
     STEPS_MIN.find((s) => fits(s) && onBars(s) && spanMin / s >= 2) ??
-    (barMin !== null ? barMin * Math.ceil(perTick / barMin - 1e-9) : undefined) ??
+    (wholeBars !== undefined && spanMin / wholeBars >= 2 ? wholeBars : undefined) ??
     STEPS_MIN.find(fits) ??
     Math.ceil(perTick / 10080) * 10080;
   const ticks: number[] = [];
