@@ -38,8 +38,9 @@ export function carriesDemoIdentity(s: Scenario): boolean {
 }
 
 /**
- * The scenario without the demo's identity: no name, notes, catchment name or area, and no observed runoff when it
- * is still the demo's (all of them describe the invented event, not the storm brought in). Method and units stay.
+ * The scenario without the demo's identity: no name, notes or catchment name, and no observed runoff when it is
+ * still the demo's (they describe the invented event, not the storm brought in). The area stays, shown under
+ * "Catchment and notes" to be changed (the README's sample files are for the demo's catchment). Method and units stay.
  */
 export function withoutDemoIdentity(s: Scenario): Scenario {
   const demoObserved = DEMO_SCENARIO.observed;
@@ -52,7 +53,7 @@ export function withoutDemoIdentity(s: Scenario): Scenario {
     ...s,
     name: s.name === DEMO_SCENARIO.name ? '' : s.name,
     notes: s.notes === DEMO_SCENARIO.notes ? '' : s.notes,
-    catchment: s.catchment.name === DEMO_SCENARIO.catchment.name ? { name: '', areaM2: 0 } : s.catchment,
+    catchment: s.catchment.name === DEMO_SCENARIO.catchment.name ? { ...s.catchment, name: '' } : s.catchment,
     observed: observedIsDemo ? null : s.observed,
   };
 }

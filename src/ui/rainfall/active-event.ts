@@ -38,7 +38,7 @@ export function useReplaceConsequences(): string {
   }
   if (demo) {
     parts.push(
-      'The invented demo’s name, catchment, notes and observed runoff are cleared with it; they are not your storm’s.',
+      'The invented demo’s name, catchment, notes and observed runoff are cleared with it; they are not your storm’s (its area stays, to change).',
     );
   }
   return parts.join(' ');
