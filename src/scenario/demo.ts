@@ -26,3 +26,36 @@ export const DEMO_SCENARIO: Scenario = {
   hydrograph: { transform: null, transformMemory: {}, fitParameter: null, objective: 'nse' },
   observedUncertaintyPct: 0,
 };
+
+/**
+ * Whether the scenario still carries the invented demo's identity: its name, its catchment's name or its notes.
+ * A storm of the user's own laid over it would otherwise be saved, shared and printed under the demo's words.
+ */
+export function carriesDemoIdentity(s: Scenario): boolean {
+  return (
+    s.name === DEMO_SCENARIO.name ||
+    s.catchment.name === DEMO_SCENARIO.catchment.name ||
+    s.notes === DEMO_SCENARIO.notes
+  );
+}
+
+/**
+ * The scenario without the demo's identity: no name, notes or catchment name, and no observed runoff when it is
+ * still the demo's (they describe the invented event, not the storm brought in). The area stays, shown under
+ * "Catchment and notes" to be changed (the README's sample files are for the demo's catchment). Method and units stay.
+ */
+export function withoutDemoIdentity(s: Scenario): Scenario {
+  const demoObserved = DEMO_SCENARIO.observed;
+  const observedIsDemo =
+    s.observed !== null &&
+    demoObserved !== null &&
+    s.observed.as === demoObserved.as &&
+    s.observed.value === demoObserved.value;
+  return {
+    ...s,
+    name: s.name === DEMO_SCENARIO.name ? '' : s.name,
+    notes: s.notes === DEMO_SCENARIO.notes ? '' : s.notes,
+    catchment: s.catchment.name === DEMO_SCENARIO.catchment.name ? { ...s.catchment, name: '' } : s.catchment,
+    observed: observedIsDemo ? null : s.observed,
+  };
+}

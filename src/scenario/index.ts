@@ -26,7 +26,8 @@ export {
 export { scenarioToFileText, scenarioFromFileText, scenarioFileName, FILE_FORMAT_TAG, MAX_FILE_CHARS } from './file';
 export { CAUTION_TEXT } from './caution';
 export { MAX_NAME_LENGTH, MAX_NOTES_LENGTH, textLengthProblem } from './text-limits';
-export { DEMO_SCENARIO } from './demo';
+export { DEMO_SCENARIO, carriesDemoIdentity, withoutDemoIdentity } from './demo';
+export { blankScenario } from './blank';
 export {
   createScenarioLibrary,
   LIBRARY_KEY,

@@ -10,6 +10,7 @@ import { MethodPanel } from './method/MethodPanel';
 import { HydrographChart } from './observed';
 import { RainfallToolbar } from './rainfall/RainfallToolbar';
 import { ResultsPanel } from './results/ResultsPanel';
+import { CatchmentPanel } from './catchment/CatchmentPanel';
 import { DrawableChart, RainfallTools, StormInputProvider, StormPanels } from './storm-input';
 import { PrintReport } from './export/PrintReport';
 import { ScenarioBar, ScenarioServicesProvider, type ScenarioServices } from './share';
@@ -97,8 +98,10 @@ function Workbench({ rainfallTools, updates }: { rainfallTools?: ReactNode; upda
                     <DrawableChart>
                       <Hyetograph />
                     </DrawableChart>
-                    <HydrographChart />
+                    {/* Right under the chart, and held in view at the window's foot: the numbers the line moves. */}
                     <ResultsPanel />
+                    <CatchmentPanel />
+                    <HydrographChart />
                     <RecordSeparation />
                     <BarTable />
                   </StormInputProvider>

@@ -1,4 +1,4 @@
-import { useMemo, useState } from 'react';
+import { useEffect, useMemo, useState } from 'react';
 import { computeLosses, isInputError, methodSpec, runoffHydrograph, runoffVolumeM3, type LossMethod } from '../../core';
 import { dischargeText } from '../observed/discharge';
 import { hoursMinutes } from '../hydrograph/hours-minutes';
@@ -10,7 +10,7 @@ import { designMethod } from '../events/event-fits';
 import { useEventFits } from '../events/use-event-fits';
 import { formatPercent, formatValue } from '../format';
 import { displayUnit, paramToDisplay, paramUnitText, toDisplay, unitText } from '../units';
-import { buildDesignStorm, FIELD_LABELS, type DesignForm, type FormField } from './build';
+import { buildDesignStorm, FIELD_LABELS, FORM_DEPTH_UNIT, formInUnits, type DesignForm, type FormField } from './build';
 import { StormBars } from './StormBars';
 import './design-storm.css';
 import '../events/events.css';
@@ -78,14 +78,19 @@ function Text({
  * undoable edit, belonging to no event) or be pinned for comparison.
  */
 export function DesignStormView() {
-  const [form, setForm] = useState<DesignForm>(START);
+  const units = useScenario((s) => s.units);
+  const [form, setForm] = useState<DesignForm>(() => formInUnits(START, units));
+  // The form follows the SI / US switch: depths and intensities are re-expressed in the new units.
+  useEffect(() => {
+    setForm((f) => ((f.depthUnit ?? 'mm') === FORM_DEPTH_UNIT[units] ? f : formInUnits(f, units)));
+  }, [units]);
+  const formDepthUnit = form.depthUnit ?? 'mm';
   const [loss, setLoss] = useState<'design' | 'workbench'>('design');
   const [said, setSaid] = useState<string | null>(null);
   const set = (
     field: FormField | 'shape' | 'formula' | 'durationUnit' | 'intensityUnit' | 'scale',
     value: string | boolean,
   ): void => setForm((f) => ({ ...f, [field]: value }));
-  const units = useScenario((s) => s.units);
   const areaM2 = useScenario((s) => s.catchment.areaM2);
   const benchMethod = useDerived((d, s) => d.effectiveMethod(s));
   const { fits, outcome } = useEventFits();
@@ -237,7 +242,7 @@ export function DesignStormView() {
             </div>
           </div>
         ) : (
-          <Text form={form} field="depthMm" set={set} bad={badField} hint="(mm)" />
+          <Text form={form} field="depthMm" set={set} bad={badField} hint={`(${formDepthUnit})`} />
         )}
         <div className="design-form__row">
           <Text form={form} field="durationMin" set={set} bad={badField} hint="(min)" />
@@ -250,7 +255,7 @@ export function DesignStormView() {
           <input type="checkbox" checked={form.scale} onChange={(e) => set('scale', e.currentTarget.checked)} />
           Scale to a total depth
         </label>
-        {form.scale ? <Text form={form} field="scaleMm" set={set} bad={badField} hint="(mm)" /> : null}
+        {form.scale ? <Text form={form} field="scaleMm" set={set} bad={badField} hint={`(${formDepthUnit})`} /> : null}
         {!built.ok ? (
           <p id={messageId} role="alert" className="design-form__problem">
             {built.message}

@@ -29,6 +29,7 @@ import { BaseflowParamField } from './BaseflowParamField';
 import { dischargeText } from './discharge';
 import { clockAt, clockParts, hoursText, momentText, recordClock, type RecordClock } from './time-text';
 import './observed.css';
+import { labelInSentence } from '../../scenario/label-text';
 
 const valueOf = (method: BaseflowMethod, key: string): number | undefined => {
   const v = (method as unknown as Record<string, unknown>)[key];
@@ -73,7 +74,7 @@ function ParamFields({ flow, spec }: { flow: Streamflow; spec: BaseflowMethodSpe
             history={actions}
             onSet={(v, edit) =>
               actions.edit(
-                `Set ${param.label.toLowerCase()}`,
+                `Set ${labelInSentence(param.label)}`,
                 (s) => withBaseflowParam(s, param.key, v),
                 edit ?? { coalesceKey: `baseflow:${param.key}` },
               )
@@ -249,7 +250,7 @@ export function SeparationPanel() {
               onChange={(e) => {
                 const kind = e.currentTarget.value;
                 if (isBaseflowKind(kind))
-                  actions.edit(`Separate by ${BASEFLOW_METHODS[kind].label.toLowerCase()}`, (s) =>
+                  actions.edit(`Separate by ${labelInSentence(BASEFLOW_METHODS[kind].label)}`, (s) =>
                     withBaseflowKind(s, kind),
                   );
               }}

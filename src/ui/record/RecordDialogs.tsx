@@ -15,7 +15,7 @@ import { ImportDialog, type ImportDraft, type ImportKind } from '../import-kit';
 import { currentNumberFormat } from '../number-format';
 import { FlowPreview } from '../observed/paste/FlowPreview';
 import { FlowSettings } from '../observed/paste/FlowSettings';
-import { guessForScreen } from '../storm-input/paste/guess';
+import { guessForScreen } from '../../io/screen-guess';
 import { ImportSettings } from '../storm-input/paste/ImportSettings';
 import { PreviewBars } from '../storm-input/paste/PreviewBars';
 

@@ -14,6 +14,7 @@ import { ImportDialog, type ImportDraft, type ImportKind, type ImportWords } fro
 import { displayUnit, toDisplay, unitText } from '../../units';
 import { ImportSettings, type SettingsPatch } from './ImportSettings';
 import { PreviewBars } from './PreviewBars';
+import { useReplaceConsequences } from '../../rainfall/active-event';
 
 /** What the dialog opens on (a file's text, or nothing). */
 export type PasteDraft = ImportDraft<SettingsPatch>;
@@ -67,6 +68,7 @@ export function PasteDialog({ initial, onClose }: PasteDialogProps) {
     };
   }, [units, stepMinutes]);
 
+  const consequences = useReplaceConsequences();
   const depthUnit = displayUnit('depth', units);
   const current = storm.depthsMm.length;
   const currentText = `${formatCount(current)} bar${current === 1 ? '' : 's'}, ${formatValue(toDisplay('depth', totalDepthMm(storm), units))} ${unitText(depthUnit)}`;
@@ -77,9 +79,9 @@ export function PasteDialog({ initial, onClose }: PasteDialogProps) {
       initial={initial}
       onClose={onClose}
       renderPreview={(imported) => <PreviewBars storm={imported} units={units} />}
-      keepText={`Replaces the storm now on screen (${currentText}); Undo brings it back.`}
+      keepText={`Replaces the storm now on screen (${currentText}); Undo brings it back.${consequences ? ` ${consequences}` : ''}`}
       onUse={(imported, fileName) => {
-        actions.setStorm(imported, fileName ? `Open rainfall file ${fileName}` : 'Paste rainfall');
+        actions.setImportedStorm(imported, fileName ? `Open rainfall file ${fileName}` : 'Paste rainfall');
         return null;
       }}
     />
