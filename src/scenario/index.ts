@@ -12,11 +12,10 @@ export {
   type MigrationResult,
   type RawDocument,
 } from './migrate';
+export { encodeScenarioLink, makeShareLink, type ShareLinkResult } from './link-make';
 export {
-  encodeScenarioLink,
   decodeScenarioLink,
-  makeShareLink,
-  type ShareLinkResult,
+  loadLinkReader,
   isScenarioLink,
   LINK_FORMAT_VERSION,
   LINK_PREFIX,
