@@ -1,8 +1,8 @@
 // The runoff hydrograph derived in the store (issue 13): recomputed on a loss
 // drag where it must be, and kept where it need not be.
-import { describe, expect, it } from 'vitest';
+import { beforeAll, describe, expect, it } from 'vitest';
 import type { Scenario } from '../../../src/scenario/types';
-import { createDerived } from '../../../src/store';
+import { createDerived, loadHydrographSide } from '../../../src/store';
 import { withTransformKind } from '../../../src/store/hydrograph-edits';
 import { FOUR_BARS } from './fixtures';
 
@@ -15,6 +15,9 @@ const BASE: Scenario = {
 const moved = (s: Scenario, rateMmH: number): Scenario => ({ ...s, method: { kind: 'constant', rateMmH } });
 
 describe('the derived runoff hydrograph', () => {
+  // Its code arrives just after the first screen (store/derive.ts); until then the values are null.
+  beforeAll(() => loadHydrographSide());
+
   it('follows the loss: a new rate routes a new excess, the same scenario gives the same object', () => {
     const d = createDerived();
     const a = d.hydrograph(BASE);
@@ -50,5 +53,17 @@ describe('the derived runoff hydrograph', () => {
       field: 'areaM2',
       message: 'Enter the catchment area to turn the rainfall excess into discharge.',
     });
+  });
+});
+
+describe('the hydrograph side before its code arrives', () => {
+  it('gives null, and tells the store once it can be worked out', async () => {
+    // In this file the code is loaded by the block above; whenHydrographReady then answers at once.
+    const d = createDerived();
+    let told = 0;
+    d.whenHydrographReady(() => told++);
+    await loadHydrographSide();
+    expect(told).toBe(1);
+    expect(d.hydrograph({ ...FOUR_BARS, hydrograph: { ...FOUR_BARS.hydrograph, transform: null } })).toBeNull();
   });
 });
