@@ -181,6 +181,8 @@ export const tests = [
         );
         const [link] = await page.evaluate(() => window.copiedLinks);
         check(link?.startsWith(`${pathToFileURL(FILE).href}#`), `the link is ${link?.slice(0, 80)}`);
+        // The reader's decompressor is loaded on demand, in Node as in the page (src/scenario/link.ts).
+        await scenario.loadLinkReader();
         const decoded = scenario.decodeScenarioLink(link.slice(link.indexOf('#') + 1));
         check(decoded.ok && decoded.scenario.name === 'Copied from a file page (invented)', 'the link does not decode');
 
