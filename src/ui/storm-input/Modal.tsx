@@ -66,8 +66,9 @@ export function Modal({ labelledBy, describedBy, onClose, initialFocus, classNam
     if (!box) return;
     const target = initialFocus?.current ?? box.querySelector<HTMLElement>(FOCUSABLE) ?? box;
     target.focus();
-    // Only on opening (no dependencies): later renders must not pull focus back.
-  }, []);
+    // On opening only: later renders must not pull focus back. Callers pass a ref from useRef, the same
+    // object on every render, so this runs again only if the dialog is told to focus another element.
+  }, [initialFocus]);
 
   const onKeyDown = (e: KeyboardEvent<HTMLDivElement>): void => {
     if (e.key === 'Escape') {

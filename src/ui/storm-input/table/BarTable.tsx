@@ -161,8 +161,8 @@ function EditorInput({
     input.focus({ preventScroll: true });
     if (editing.select) input.select();
     else input.setSelectionRange(input.value.length, input.value.length);
-    // Once, when the editor opens for this cell.
-  }, [editing.row, editing.col]);
+    // When the editor opens for a cell (or opens again on it asking for its text selected), not as it is typed in.
+  }, [editing.row, editing.col, editing.select]);
   return (
     <input
       ref={ref}
