@@ -158,6 +158,8 @@ export default defineConfig(
       'import-x/resolver-next': [createNodeResolver({ extensions: ['.ts', '.tsx', '.js', '.mjs', '.json'] })],
     },
     rules: {
+      // `let [a, b] = …` where only a changes stays one statement.
+      'prefer-const': ['error', { destructuring: 'all' }],
       'import-x/no-cycle': ['error', { ignoreExternal: true }],
       'no-eval': 'error',
       'no-new-func': 'error',
