@@ -15,7 +15,7 @@ function bytesOf(blob: Blob): Promise<Uint8Array> {
   return new Promise((resolve, reject) => {
     const reader = new FileReader();
     reader.onload = () => resolve(new Uint8Array(reader.result as ArrayBuffer));
-    reader.onerror = () => reject(reader.error);
+    reader.onerror = () => reject(reader.error ?? new Error('the blob could not be read'));
     reader.readAsArrayBuffer(blob);
   });
 }
