@@ -15,10 +15,7 @@ import {
   validateBaseflowMethod,
   validateHydrograph,
   validateStorm,
-  type BaseflowKind,
   type BaseflowMethod,
-  type LossKind,
-  type LossMethod,
 } from '../core';
 import { baseflowRecordProblem, readBaseflowMethod } from './baseflow-check';
 import { isIsoDateTime } from './iso-date-time';
@@ -35,7 +32,6 @@ import {
   type ScenarioResult,
 } from './problems';
 import { MAX_NAME_LENGTH, MAX_NOTES_LENGTH, tooLongText } from './text-limits';
-import type { Scenario } from './types';
 
 /**
  * The most bars a storm may have: a year of one-minute bars is about half

@@ -1,5 +1,5 @@
 import { nashWeights } from './nash';
-import { NRCS_PEAK_RATE_FACTOR, nrcsWeights } from './nrcs';
+import { nrcsWeights } from './nrcs';
 import { triangularWeights } from './triangular';
 import type { TransformKind, TransformOf } from './types';
 import { unitHydrographWeights } from './unit-hydrograph';
