@@ -187,7 +187,7 @@ export function looksLikeClock(cell: string): boolean {
 }
 
 /** Milliseconds of a calendar date's midnight on a zone-free timeline. */
-export function dateMs(date: CalendarDate): number {
+function dateMs(date: CalendarDate): number {
   const d = new Date(0);
   d.setUTCFullYear(date.year, date.month - 1, date.day);
   return d.getTime();

@@ -1,31 +1,22 @@
 // The scenario document layer: schema, versions, share links, files and the
 // browser's list of saved scenarios. Pure TypeScript, no React or DOM.
-export type { Scenario, ScenarioV1, SetEvent, EventSet, EventObserved, DesignPickDoc } from './types';
+export type { Scenario } from './types';
 export type { Problem, ScenarioResult } from './problems';
 export { MAX_LISTED_PROBLEMS } from './problems';
-export { parseScenario, ScenarioSchema, FIELD_HELP, MAX_BARS, MAX_EVENTS } from './schema';
-export {
-  CURRENT_SCENARIO_VERSION,
-  MIGRATIONS,
-  migrate,
-  type Migration,
-  type MigrationResult,
-  type RawDocument,
-} from './migrate';
+export { parseScenario, FIELD_HELP } from './schema';
+export { CURRENT_SCENARIO_VERSION, MIGRATIONS, migrate, type Migration, type RawDocument } from './migrate';
 export {
   encodeScenarioLink,
   decodeScenarioLink,
   makeShareLink,
-  type ShareLinkResult,
   isScenarioLink,
-  LINK_FORMAT_VERSION,
   LINK_PREFIX,
   MAX_LINK_CHARS,
   MAX_LINK_JSON_BYTES,
 } from './link';
 export { scenarioToFileText, scenarioFromFileText, scenarioFileName, FILE_FORMAT_TAG, MAX_FILE_CHARS } from './file';
 export { CAUTION_TEXT } from './caution';
-export { MAX_NAME_LENGTH, MAX_NOTES_LENGTH, textLengthProblem } from './text-limits';
+export { MAX_NAME_LENGTH, MAX_NOTES_LENGTH } from './text-limits';
 export { DEMO_SCENARIO } from './demo';
 export {
   createScenarioLibrary,
@@ -38,6 +29,5 @@ export {
   type DeletedEntry,
   type LibraryListing,
   type LibraryResult,
-  type LibraryOptions,
   type StorageLike,
 } from './library';

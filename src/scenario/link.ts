@@ -27,7 +27,7 @@ import type { Scenario } from './types';
  * moment the output passes it, which defeats deflate bombs even in links
  * made on purpose with a correct check sum.
  */
-export const LINK_FORMAT_VERSION = 1;
+const LINK_FORMAT_VERSION = 1;
 export const LINK_PREFIX = `rc${LINK_FORMAT_VERSION}.`;
 
 /**

@@ -1,16 +1,7 @@
 export { createWorkbenchStore } from './scenario-store';
-export type {
-  CreateStoreOptions,
-  EditOptions,
-  StorageNotice,
-  WorkbenchActions,
-  WorkbenchState,
-  WorkbenchStore,
-} from './scenario-store';
-export { createDerived, type Derived, type Results, type Separation, type Target } from './derive';
+export type { CreateStoreOptions, WorkbenchActions, WorkbenchStore } from './scenario-store';
+export { createDerived, type Derived, type Separation } from './derive';
 export {
-  FIRST_BASEFLOW_KIND,
-  recordOffsetH,
   withBaseflowDefaults,
   withBaseflowKind,
   withBaseflowParam,
@@ -18,27 +9,19 @@ export {
   withSeparationAsObserved,
   withStreamflowRecord,
   withoutStreamflow,
-  type RecordInput,
 } from './streamflow-edits';
-export { hoursBetweenClocks } from '../core';
-export { alignRecord, type Alignment, type AlignmentSource } from './alignment';
-export type { Bar, Observed } from './edits';
-export { readScenario, readScenarioJson, type ReadResult } from './read-scenario';
+export { alignRecord } from './alignment';
+export { readScenario } from './read-scenario';
 export {
   loadScenario,
   persistStore,
   STORAGE_KEY,
   SET_ASIDE_PREFIX,
   setAsideSaved,
-  type SetAsideResult,
-  type Loaded,
-  type Persistence,
   type StorageLike,
 } from './persistence';
 export { StoreProvider, useActions, useDerived, useScenario, useWorkbench, useWorkbenchStore } from './react';
-export { HISTORY_LIMIT, COALESCE_WINDOW_MS } from './history';
 export {
-  withActiveEventSynced,
   withDesignPick,
   withDesignStormOnWorkbench,
   withEventAdded,

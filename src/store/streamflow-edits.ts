@@ -32,7 +32,7 @@ export interface RecordInput {
 }
 
 /** The separation a new record starts with: a straight line, its end N = A^0.2 days after the peak. */
-export const FIRST_BASEFLOW_KIND: BaseflowKind = 'straight-line';
+const FIRST_BASEFLOW_KIND: BaseflowKind = 'straight-line';
 
 const paramsOf = (method: BaseflowMethod): Record<string, unknown> => method as unknown as Record<string, unknown>;
 
@@ -207,9 +207,4 @@ export function withSeparationAsObserved(s: Scenario, on: boolean, depthMm?: num
   const observed =
     s.observed && depth !== undefined ? { ...s.observed, as: 'depth' as const, value: depth } : s.observed;
   return { ...s, observed, streamflow: { ...flow, useAsObserved: false } };
-}
-
-/** Where the record starts on the storm's time axis, h (clocks first, else the stored offset). */
-export function recordOffsetH(s: Scenario): number {
-  return s.streamflow ? alignRecord(s.storm.startIso, s.streamflow.startIso, s.streamflow.offsetH).offsetH : 0;
 }

@@ -38,7 +38,7 @@ function toPath(frame: ChartFrame, tH: ArrayLike<number>, rateMmH: ArrayLike<num
  * every bar edge while bars are wider than that (capacity bends there: rain
  * starts, stops or changes), merged in order.
  */
-export function capacitySampleTimes(frame: ChartFrame, storm: Storm): Float64Array {
+function capacitySampleTimes(frame: ChartFrame, storm: Storm): Float64Array {
   const durationH = totalDurationH(storm);
   const widthPx = Math.max(1, frame.x(durationH) - frame.x(0));
   const samples = Math.max(2, Math.ceil(widthPx / 2));

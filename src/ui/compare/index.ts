@@ -2,8 +2,5 @@
 import './compare.css';
 
 export { ComparePanel } from './ComparePanel';
-export { PinButton } from './PinButton';
-export { createPinBoard, MAX_PINS, PINS_KEY, type Pin, type PinBoard, type PinState } from './pins';
-export { commonFrames } from './common-frame';
-export { difference, type Difference } from './difference';
-export { totalsOf, type Totals } from './totals';
+export { createPinBoard, MAX_PINS, PINS_KEY } from './pins';
+export { difference } from './difference';

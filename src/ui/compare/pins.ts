@@ -15,8 +15,8 @@ import type { Scenario } from '../../scenario/types';
  * list instead of overwriting each other.
  */
 export const PINS_KEY = 'raincut.pins';
-export const PINS_FORMAT_TAG = 'raincut-pins';
-export const PINS_VERSION = 1;
+const PINS_FORMAT_TAG = 'raincut-pins';
+const PINS_VERSION = 1;
 export const MAX_PINS = 4;
 
 export interface Pin {

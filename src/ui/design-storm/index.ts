@@ -2,5 +2,3 @@
 import './design-storm.css';
 
 export { DesignStormView } from './DesignStormView';
-export { StormBars } from './StormBars';
-export { buildDesignStorm, parseIdfTable, FIELD_LABELS, type DesignForm, type Built, type FormField } from './build';

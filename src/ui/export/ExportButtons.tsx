@@ -12,17 +12,17 @@ import { standaloneSvg, type LegendEntry } from './chart-svg';
 import { formatCount } from '../format';
 
 /** The workbench's live chart: the hyetograph's SVG (src/ui/chart/Hyetograph.tsx). */
-export function liveChartSvg(doc: Document = document): SVGSVGElement | null {
+function liveChartSvg(doc: Document = document): SVGSVGElement | null {
   return doc.querySelector<SVGSVGElement>('svg.chart__svg');
 }
 
 /** The line under an exported chart: scenario, method and parameters. */
-export function chartHeading(scenario: Scenario, method: Scenario['method']): string {
+function chartHeading(scenario: Scenario, method: Scenario['method']): string {
   return `${scenario.name} — ${methodSpec(method.kind).label}; ${methodParametersText(method, scenario.units)}`;
 }
 
 /** The chart's legend for a file: the layers the hyetograph draws (data-layer marks them), in the method's words. */
-export function chartLegend(method: LossMethod): LegendEntry[] {
+function chartLegend(method: LossMethod): LegendEntry[] {
   const lineKey = LINE_PARAM[method.kind];
   const line = lineKey ? methodSpec(method.kind).params.find((p) => p.key === lineKey)?.label : undefined;
   const part = LOSS_PARTS[method.kind]?.label;

@@ -66,7 +66,7 @@ export function methodParametersText(
 }
 
 /** The column headings, with units, for a unit system and storm. */
-export function barTableHeader(scenario: Scenario): string[] {
+function barTableHeader(scenario: Scenario): string[] {
   const depth = unitText(displayUnit('depth', scenario.units));
   const rate = unitText(displayUnit('rate', scenario.units));
   const head = ['Bar'];

@@ -5,4 +5,3 @@ import './observed.css';
 
 export { HydrographChart, HYDROGRAPH_HEIGHT } from './HydrographChart';
 export { SeparationPanel } from './SeparationPanel';
-export { FlowPasteDialog, EMPTY_FLOW_DRAFT, type FlowDraft } from './paste/FlowPasteDialog';

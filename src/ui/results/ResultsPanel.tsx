@@ -13,7 +13,7 @@ interface Row {
 }
 
 /** The catchment area, typed in a unit of the user's choice, stored in m². */
-export function AreaField() {
+function AreaField() {
   const areaM2 = useScenario((s) => s.catchment.areaM2);
   const units = useScenario((s) => s.units);
   // While "Keep matched" follows an observed volume (or a separated record), the fit needs an area: 0 is not applied.

@@ -12,7 +12,7 @@ export interface BarMessage {
 }
 
 /** The accessible name of the message line. */
-export const MESSAGE_LABEL = 'Scenario tools message';
+const MESSAGE_LABEL = 'Scenario tools message';
 
 export type ShowMessage = (message: BarMessage | null) => void;
 

@@ -4,13 +4,5 @@ import './share.css';
 
 export { ScenarioBar } from './ScenarioBar';
 export { LinkNotice } from './LinkNotice';
-export { CopyLink, linkLengthText, LONG_LINK_CHARS } from './CopyLink';
-export { ScenarioFile } from './ScenarioFile';
-export { LibraryPanel, LIBRARY_PANEL_ID } from './LibraryPanel';
-export {
-  ScenarioServicesProvider,
-  browserServices,
-  browserStorage,
-  useServices,
-  type ScenarioServices,
-} from './services';
+export { linkLengthText, LONG_LINK_CHARS } from './CopyLink';
+export { ScenarioServicesProvider, browserServices, type ScenarioServices } from './services';

@@ -25,7 +25,7 @@ export interface ScenarioServices {
 }
 
 /** The browser's storage, or null where it is switched off (reading `localStorage` can itself throw). */
-export function browserStorage(): StorageLike | null {
+function browserStorage(): StorageLike | null {
   try {
     return typeof window === 'undefined' ? null : (window.localStorage ?? null);
   } catch {

@@ -2,7 +2,7 @@
 // the chart, edit the bar table, and whole-storm tools. Mounted by App.tsx.
 import './storm-input.css';
 
-export { StormInputProvider, useStormInput } from './context';
+export { StormInputProvider } from './context';
 export { RainfallTools } from './RainfallTools';
 export { StormPanels } from './StormPanels';
 export { DrawableChart } from './draw/DrawableChart';

@@ -8,7 +8,7 @@ import { readCell, type EditableColumn } from './cell-edit';
 import { moveCell, scrollToShow, visibleRows, type CellPos } from './grid-nav';
 
 /** Row height, px (the CSS gives rows this height). */
-export const ROW_PX = 30;
+const ROW_PX = 30;
 /** Rows in view when the table cannot measure itself (no layout, as in tests). */
 const FALLBACK_VIEW_ROWS = 12;
 /** Rows drawn beyond each edge of the view, so a quick scroll shows no gap. */
