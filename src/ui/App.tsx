@@ -13,8 +13,10 @@ import { ResultsPanel } from './results/ResultsPanel';
 import { BarTable, DrawableChart, RainfallTools, StormInputProvider, StormPanels } from './storm-input';
 import { ComparePanel } from './compare';
 import { PrintReport } from './export';
-import { LinkNotice, ScenarioBar, ScenarioServicesProvider, type ScenarioServices } from './share';
-import { EventsView, ViewTabs } from './events';
+import { LinkNotice, ScenarioBar } from './share';
+import { ScenarioServicesProvider, type ScenarioServices } from './services';
+import { EventsView } from './events';
+import { ViewTabs } from './layout/ViewTabs';
 import { DesignStormView } from './design-storm';
 import { useNumberFormat } from './number-format';
 

@@ -12,7 +12,7 @@ import {
   formatForLanguage,
   startNumberFormat,
 } from '../../src/ui/number-format';
-import { totalsOf } from '../../src/ui/compare/totals';
+import { totalsOf } from '../../src/ui/results/totals';
 import { renderWorkbench } from './render';
 import { FOUR_BARS } from './store/fixtures';
 

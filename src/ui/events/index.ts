@@ -2,4 +2,3 @@
 import './events.css';
 
 export { EventsView } from './EventsView';
-export { ViewTabs } from './ViewTabs';

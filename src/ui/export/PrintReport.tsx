@@ -6,11 +6,11 @@ import { useDerived, useScenario } from '../../store';
 import { chartFrame } from '../chart/frame';
 import { LINE_PARAM } from '../chart/line-params';
 import { formatWallDate, formatWallTime, wallClockMs } from '../chart/clock';
-import { totalsOf } from '../compare/totals';
-import { fittedCellText } from '../matching/fit-words';
+import { totalsOf } from '../results/totals';
+import { fittedCellText } from '../results/fit-words';
 import { formatCount, formatPercent, formatValue } from '../format';
 import { displayUnit, toDisplay, unitText, type Quantity } from '../units';
-import { useServices } from '../share/services';
+import { useServices } from '../services/services';
 import { methodParametersText } from './bar-table-csv';
 import { StaticChart } from './StaticChart';
 

@@ -1,6 +1,6 @@
 import { useDeferredValue, useId, useMemo, useRef, useState, type ComponentType, type ReactNode } from 'react';
 import type { ImportProblem, SeriesSettings, TextRow } from '../../io';
-import { Modal } from '../storm-input/Modal';
+import { Modal } from '../layout/Modal';
 import { OpenFileButton } from './OpenFileButton';
 import { ProblemTable } from './ProblemTable';
 import type { SettingsPanelProps } from './settings-panel';

@@ -15,7 +15,7 @@ import { useActions, useDerived, useScenario } from '../../store';
 import { NumberField } from '../fields/NumberField';
 import { formatValue } from '../format';
 import { VOLUME_CHOICES, displayUnit, fromDisplay, toDisplay, unitText } from '../units';
-import { labelInSentence, paramAmount } from './fit-words';
+import { labelInSentence, paramAmount } from '../results/fit-words';
 
 /**
  * The observed value when the user switches between depth and volume: the

@@ -5,7 +5,7 @@ import { useActions, useWorkbenchStore } from '../../store';
 import { listSetAside, type SetAsideCopy } from '../../store/set-aside';
 import { ListProblems } from './ListProblems';
 import { SetAsideCopies } from './SetAsideCopies';
-import { useServices } from './services';
+import { useServices } from '../services/services';
 import { formatCount } from '../format';
 
 export const LIBRARY_PANEL_ID = 'saved-scenarios';

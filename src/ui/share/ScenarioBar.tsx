@@ -1,7 +1,7 @@
 import { useState, type ReactNode } from 'react';
 import { PinButton } from '../compare/PinButton';
 import { ExportButtons } from '../export/ExportButtons';
-import { BarMessageProvider, BarMessageView, type BarMessage } from './bar-message';
+import { BarMessageProvider, BarMessageView, type BarMessage } from '../services/bar-message';
 import { CopyLink } from './CopyLink';
 import { LIBRARY_PANEL_ID, LibraryPanel } from './LibraryPanel';
 import { ScenarioFile } from './ScenarioFile';

@@ -2,8 +2,8 @@ import type { ReactNode } from 'react';
 import { MAX_FILE_CHARS, scenarioFileName, scenarioFromFileText, scenarioToFileText } from '../../scenario';
 import { useActions, useWorkbenchStore } from '../../store';
 import { OpenFileButton, readAsText } from '../import-kit';
-import { ProblemList, useBarMessage } from './bar-message';
-import { useServices } from './services';
+import { ProblemList, useBarMessage } from '../services/bar-message';
+import { useServices } from '../services/services';
 import { formatValue } from '../format';
 
 const megabytes = (bytes: number): string => `${formatValue(bytes / (1024 * 1024))} MB`;

@@ -5,4 +5,3 @@ import './share.css';
 export { ScenarioBar } from './ScenarioBar';
 export { LinkNotice } from './LinkNotice';
 export { linkLengthText, LONG_LINK_CHARS } from './CopyLink';
-export { ScenarioServicesProvider, browserServices, type ScenarioServices } from './services';

@@ -6,7 +6,7 @@ import { makeShareLink } from '../../../src/scenario';
 import { createWorkbenchStore } from '../../../src/store';
 import { App } from '../../../src/ui/App';
 import { PRACTICAL_LINK_CHARS } from '../../../src/ui/events/LongLinkOffer';
-import { browserServices } from '../../../src/ui/share';
+import { browserServices } from '../../../src/ui/services';
 import { inventedEvents, withSet } from '../../scenario/event-set-fixtures';
 import { memoryStorage } from '../store/fixtures';
 

@@ -4,7 +4,7 @@ import type { Scenario } from '../../../src/scenario/types';
 import { readScenario } from '../../../src/store';
 import { startWorkbench } from '../../../src/store/start';
 import { App } from '../../../src/ui/App';
-import type { ScenarioServices } from '../../../src/ui/share';
+import type { ScenarioServices } from '../../../src/ui/services';
 import { FOUR_BARS, memoryStorage } from '../store/fixtures';
 
 export const NOW = '2026-03-01T10:00:00.000Z';

@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { frameThrottle } from '../../../src/ui/chart/frame-throttle';
+import { frameThrottle } from '../../../src/ui/interaction/frame-throttle';
 
 /** Animation frames run by hand: tick() is one frame. */
 function fakeFrames() {

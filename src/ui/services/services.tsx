@@ -1,8 +1,8 @@
 import { createContext, useContext, useMemo, useSyncExternalStore, type ReactNode } from 'react';
 import { createScenarioLibrary, type ScenarioLibrary, type StorageLike } from '../../scenario';
 import type { LinkSession, LinkState } from '../../store/link-session';
-import { createPinBoard, type PinBoard, type PinState } from '../compare/pins';
-import { downloadBlob } from '../export/download';
+import { createPinBoard, type PinBoard, type PinState } from './pins';
+import { downloadBlob } from './download';
 
 /**
  * What the share, file, export and compare tools need from the browser,
