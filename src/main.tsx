@@ -1,4 +1,7 @@
+/// <reference types="vite-plugin-pwa/vanillajs" />
 import { StrictMode } from 'react';
+import { registerSW } from 'virtual:pwa-register';
+import { createUpdateChannel } from './offline/updates';
 import { createRoot } from 'react-dom/client';
 import { DEMO_SCENARIO } from './scenario/demo';
 import { type StorageLike } from './store';
@@ -64,13 +67,21 @@ const services = browserServices({ storage, link });
 const recovery = createCrashRecovery({ store, link, storage, now: () => new Date(), tabStorage: tab });
 const downloadSaved = (text: string): void =>
   downloadBlob(new Blob([text], { type: 'application/json' }), 'raincut-saved-scenario.json');
+// After the first visit the app runs with no network: a service worker keeps it (build/offline-app.ts). A new
+// version waits until the user reloads (src/offline/updates.ts). The single-file build registers nothing.
+const updates = createUpdateChannel({
+  register: registerSW,
+  beforeReload: () => link.flush(),
+  reloadPage: () => window.location.reload(),
+});
+
 
 const root = document.getElementById('root');
 if (!root) throw new Error('index.html has no #root element');
 createRoot(root).render(
   <StrictMode>
     <ErrorBoundary recovery={recovery} download={downloadSaved}>
-      <App store={store} services={services} />
+      <App store={store} services={services} updates={updates} />
     </ErrorBoundary>
   </StrictMode>,
 );

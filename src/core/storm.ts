@@ -20,10 +20,120 @@ export interface Storm {
 }
 
 /**
+ * Whether one bar is clean: its duration and its depth pass the rules below.
+ * The one statement of them: validateStorm throws where it fails, and the
+ * fused passes (computeLosses) test it as they read each bar, so the two
+ * cannot disagree. Small enough for the optimiser to inline.
+ */
+export function isCleanBar(durationH: unknown, depthMm: unknown): boolean {
+  return isCleanDuration(durationH) && isCleanDepth(depthMm);
+}
+
+// Limits of time (one second to 500 years, time-limits.ts) as module constants:
+// read without a call per bar.
+const SHORTEST_H = SHORTEST_STEP_ACCEPTED_H;
+const LONGEST_H = MAX_RECORD_H;
+
+/** A bar lasts from one second to a record's longest span (time-limits.ts). */
+function isCleanDuration(durationH: unknown): boolean {
+  return typeof durationH === 'number' && durationH >= SHORTEST_H && durationH <= LONGEST_H;
+}
+
+/** A bar's depth is a finite number of millimetres, zero or more. */
+function isCleanDepth(depthMm: unknown): boolean {
+  return typeof depthMm === 'number' && depthMm >= 0 && depthMm < Infinity;
+}
+
+/**
+ * How many bars a long pass reads per call of its inner loop. A loop over
+ * 10⁶ bars run once per call is optimised only mid-loop and the function can
+ * stay in V8's baseline tier (2–3 times slower); in blocks the inner function
+ * is called often enough to be optimised whole.
+ */
+export const PASS_BLOCK = 4096;
+
+/**
  * Throws an InputError naming the first bad bar or field. Runs once per call at
  * the core's edge, so the methods inside can assume clean data.
  */
 export function validateStorm(storm: Storm): void {
+  validateStormDepthMm(storm);
+}
+
+/**
+ * validateStorm that also returns the storm's total depth, mm, summed in the
+ * same pass over the bars (calibration needs both: one read of a long storm
+ * instead of two).
+ */
+export function validateStormDepthMm(storm: Storm): number {
+  validateStormLists(storm);
+  const { durationsH, depthsMm } = storm;
+  const n = durationsH.length;
+  let total = 0;
+  spanH = 0;
+  for (let start = 0; start < n; start += PASS_BLOCK) {
+    total = cleanDepthSum(durationsH, depthsMm, start, Math.min(n, start + PASS_BLOCK), total);
+    if (total < 0) throw firstBarError(durationsH, depthsMm, start);
+  }
+  validateStormSpan(storm, spanH);
+  validateStormStart(storm);
+  return total;
+}
+
+/** The storm's span so far, h, summed by cleanDepthSum (a module variable: see loss/constant.ts). */
+let spanH = 0;
+
+/**
+ * The check validateStorm makes after every bar: the whole storm lies within a
+ * record's longest span, given its total duration (h) summed in the same pass.
+ * Only when it does not, a second pass finds the bar that passes the limit.
+ */
+export function validateStormSpan(storm: Storm, totalH: number): void {
+  if (totalH <= LONGEST_H) return;
+  const { durationsH } = storm;
+  const n = durationsH.length;
+  let endH = 0;
+  let k = 0;
+  while (k < n - 1 && endH + (durationsH[k] as number) <= LONGEST_H) endH += durationsH[k++] as number;
+  endH += durationsH[k] as number;
+  throw new InputError(
+    'durationsH',
+    `Bar ${k + 1}: the storm would run ${describeOver(endH)} from its start; a record spans at most ${LONGEST_SPAN_TEXT}.`,
+    k,
+  );
+}
+
+/** `total` plus the depths of bars start to end − 1, or −1 if one of them is not clean. */
+function cleanDepthSum(
+  durationsH: ArrayLike<unknown>,
+  depthsMm: ArrayLike<unknown>,
+  start: number,
+  end: number,
+  total: number,
+): number {
+  let span = spanH;
+  for (let k = start; k < end; k++) {
+    const p = depthsMm[k];
+    const d = durationsH[k];
+    if (!isCleanBar(d, p)) return -1;
+    total += p as number;
+    span += d as number;
+  }
+  spanH = span;
+  return total;
+}
+
+function firstBarError(durationsH: ArrayLike<unknown>, depthsMm: ArrayLike<unknown>, from: number): InputError {
+  let k = from;
+  while (isCleanBar(durationsH[k], depthsMm[k])) k++;
+  return barError(k, durationsH[k], depthsMm[k]);
+}
+
+/**
+ * The checks validateStorm makes before it reads any bar: both lists are
+ * there and match one to one. Throws an InputError naming the field.
+ */
+export function validateStormLists(storm: Storm): void {
   const { durationsH, depthsMm } = storm;
   if (!durationsH || typeof durationsH.length !== 'number') {
     throw new InputError('durationsH', 'The storm has no list of bar durations (durationsH).');
@@ -38,46 +148,33 @@ export function validateStorm(storm: Storm): void {
       `The storm has ${n} bar durations but ${depthsMm.length} bar depths; they must match one to one.`,
     );
   }
-  // Limits of time (one second to 500 years, time-limits.ts), read once: no call per bar in the loop.
-  const shortest = SHORTEST_STEP_ACCEPTED_H;
-  const longest = MAX_RECORD_H;
-  let totalH = 0;
-  for (let k = 0; k < n; k++) {
-    const d = durationsH[k] as number;
-    // `!(… && …)` is also true for NaN; typeof catches text that compares as a number.
-    if (!(d >= shortest && d <= longest) || typeof d !== 'number') {
-      throw new InputError('durationsH', stepProblem(`Bar ${k + 1}: duration`, d) ?? `Bar ${k + 1}: bad duration.`, k);
-    }
-    totalH += d;
-    const p = depthsMm[k] as number;
-    if (!(p >= 0) || p === Infinity || typeof p !== 'number') {
-      throw new InputError(
-        'depthsMm',
-        `Bar ${k + 1}: rainfall depth must be a finite number of millimetres, zero or more (got ${String(p)}).`,
-        k,
-      );
-    }
+}
+
+/** The check validateStorm makes after every bar: the start, when given, is a date-time within the years held. */
+export function validateStormStart(storm: Storm): void {
+  const start = storm.startIso;
+  if (start === undefined) return;
+  if (typeof start !== 'string' || Number.isNaN(Date.parse(start))) {
+    throw new InputError('startIso', `The storm start "${String(start)}" is not an ISO 8601 date-time.`);
   }
-  // The whole storm within a record's span; only when it is not, a second pass finds the bar that passes it.
-  if (totalH > longest) {
-    let endH = 0;
-    let k = 0;
-    while (k < n - 1 && endH + (durationsH[k] as number) <= longest) endH += durationsH[k++] as number;
-    endH += durationsH[k] as number;
-    throw new InputError(
+  const year = clockYearProblem('The storm start', start);
+  if (year !== null) throw new InputError('startIso', year);
+}
+
+/** The error for bar k, which isCleanBar refused: the duration if it is bad, else the depth. */
+function barError(k: number, d: unknown, p: unknown): InputError {
+  if (!isCleanDuration(d)) {
+    return new InputError(
       'durationsH',
-      `Bar ${k + 1}: the storm would run ${describeOver(endH)} from its start; a record spans at most ${LONGEST_SPAN_TEXT}.`,
+      stepProblem(`Bar ${k + 1}: duration`, d as number) ?? `Bar ${k + 1}: bad duration (got ${String(d)}).`,
       k,
     );
   }
-  const start = storm.startIso;
-  if (start !== undefined) {
-    if (typeof start !== 'string' || Number.isNaN(Date.parse(start))) {
-      throw new InputError('startIso', `The storm start "${String(start)}" is not an ISO 8601 date-time.`);
-    }
-    const year = clockYearProblem('The storm start', start);
-    if (year !== null) throw new InputError('startIso', year);
-  }
+  return new InputError(
+    'depthsMm',
+    `Bar ${k + 1}: rainfall depth must be a finite number of millimetres, zero or more (got ${String(p)}).`,
+    k,
+  );
 }
 
 /** Total rainfall depth, mm. */

@@ -1,4 +1,4 @@
-import type { Storm } from '../core';
+import { MIN_STEP_H, type Storm } from '../core';
 
 /**
  * What each quantity a person types or pastes can mean: one stated range per
@@ -32,6 +32,10 @@ export interface PlausibleRange {
 const EARTH_LAND_M2 = 1.49e14;
 /** A year of 366 days, in hours. */
 const YEAR_H = 366 * 24;
+// The times below are the first gate for typed values; the core's limits of
+// time (src/core/time-limits.ts: bars of at least MIN_STEP_H, spans of at most
+// MAX_RECORD_H) are the last. The shortest bar is the core's, read from there
+// so the bound lives in one place; the longest here (a year) lies well inside.
 
 /** The one table of plausible ranges. */
 export const PLAUSIBLE: Readonly<Record<PlausibleQuantity, PlausibleRange>> = {
@@ -93,7 +97,7 @@ export const PLAUSIBLE: Readonly<Record<PlausibleQuantity, PlausibleRange>> = {
   barDuration: {
     unit: 'h',
     noun: 'a bar or time step',
-    min: 1 / 3600,
+    min: MIN_STEP_H,
     minExclusive: false,
     max: YEAR_H,
     why: {
@@ -104,7 +108,7 @@ export const PLAUSIBLE: Readonly<Record<PlausibleQuantity, PlausibleRange>> = {
   stormDuration: {
     unit: 'h',
     noun: 'a storm duration',
-    min: 1 / 3600,
+    min: MIN_STEP_H,
     minExclusive: false,
     max: YEAR_H,
     why: {

@@ -65,9 +65,11 @@ const isObject = (x: unknown): x is Readonly<Record<string, unknown>> =>
 
 /**
  * A version 3 loss method with the settings version 4 added, each as the
- * version 3 document computed it: no recovery in dry spells (Horton,
- * Green–Ampt; the rate at its default so that turning recovery on starts
- * from it), and for the curve number on the 0.05 basis the constant ratio
+ * version 3 document computed it: no recovery in dry spells (Horton with its
+ * rate at the default, so that turning recovery on starts from it;
+ * Green–Ampt with the soil values its redistribution reads, Sᵢ 0.3 and λ 0.22
+ * of loam, the default soil, read only once recovery is on), and for the
+ * curve number on the 0.05 basis the constant ratio
  * S₀.₀₅ = 1.42 S₀.₂, the only conversion version 3 had. On the 0.2 basis the
  * conversion is not used, and gets the new default, the power relation.
  * Settings already there, and anything odd, are passed through for the
@@ -77,11 +79,19 @@ function methodToV4(method: unknown): unknown {
   if (!isObject(method)) return method;
   const kind = method['kind'];
   const missing = (key: string): boolean => !Object.hasOwn(method, key);
-  if (kind === 'horton' || kind === 'green-ampt') {
+  if (kind === 'horton') {
     return {
       ...method,
       ...(missing('recovers') ? { recovers: false } : {}),
       ...(missing('recoveryPerH') ? { recoveryPerH: 0.05 } : {}),
+    };
+  }
+  if (kind === 'green-ampt') {
+    return {
+      ...method,
+      ...(missing('recovers') ? { recovers: false } : {}),
+      ...(missing('initialSaturation') ? { initialSaturation: 0.3 } : {}),
+      ...(missing('poreSizeIndex') ? { poreSizeIndex: 0.22 } : {}),
     };
   }
   if (kind === 'curve-number' && missing('conversion')) {
@@ -92,8 +102,9 @@ function methodToV4(method: unknown): unknown {
 
 /**
  * Version 3 → 4: the infiltration methods gain settings (issue 10): Horton
- * and Green–Ampt `recovers` and `recoveryPerH` (capacity recovery in dry
- * spells), the curve number `conversion` (how S converts to the 0.05 basis).
+ * `recovers` and `recoveryPerH`, Green–Ampt `recovers`, `initialSaturation`
+ * and `poreSizeIndex` (capacity recovery in dry spells), the curve number
+ * `conversion` (how S converts to the 0.05 basis).
  * `method` and every `methodMemory` entry get them with the values that
  * compute what version 3 computed, so every old link and file opens to the
  * same numbers. Horton by the clock (`ponding: false`) now loses the exact
@@ -106,7 +117,7 @@ const addInfiltrationSettings: Migration = {
   from: 3,
   to: 4,
   summary:
-    'Adds `recovers` and `recoveryPerH` to Horton and Green–Ampt methods (false, 0.05) and `conversion` to curve-number methods ("ratio" on the 0.05 basis, as version 3 computed; "power" on the 0.2 basis, where it is not used), in `method` and every `methodMemory` entry.',
+    'Adds `recovers` and `recoveryPerH` to Horton methods (false, 0.05), `recovers`, `initialSaturation` and `poreSizeIndex` to Green–Ampt methods (false, 0.3, 0.22) and `conversion` to curve-number methods ("ratio" on the 0.05 basis, as version 3 computed; "power" on the 0.2 basis, where it is not used), in `method` and every `methodMemory` entry.',
   up: (doc) => {
     const memory = doc['methodMemory'];
     return {

@@ -140,8 +140,9 @@ export interface ScenarioV3 extends Omit<ScenarioV2, 'version'> {
 
 /**
  * Version 4: version 3 whose loss methods carry every setting of the core's
- * method table, including those added for issue 10 (Horton and Green–Ampt
- * `recovers`, `recoveryPerH`; curve number `conversion`). The shape of the
+ * method table, including those added for issue 10 (Horton `recovers`,
+ * `recoveryPerH`; Green–Ampt `recovers`, `initialSaturation`,
+ * `poreSizeIndex`; curve number `conversion`). The shape of the
  * document is unchanged; a version 3 document upgrades with the values that
  * compute what it computed.
  */

@@ -1,5 +1,5 @@
 import { Fragment, type ReactNode } from 'react';
-import { StoreProvider, useActions, type WorkbenchStore } from '../store';
+import { StoreProvider, useActions, useScenario, type WorkbenchStore } from '../store';
 import { Hyetograph } from './chart/Hyetograph';
 import { useUndoShortcuts } from './keyboard/useUndoShortcuts';
 import { Caution } from './layout/Caution';
@@ -7,18 +7,43 @@ import { Header } from './layout/Header';
 import { StorageNoticeBar } from './layout/StorageNotice';
 import { MatchingPanel } from './matching/MatchingPanel';
 import { MethodPanel } from './method/MethodPanel';
-import { HydrographChart, SeparationPanel } from './observed';
+import { HydrographChart } from './observed';
 import { RainfallToolbar } from './rainfall/RainfallToolbar';
 import { ResultsPanel } from './results/ResultsPanel';
-import { BarTable, DrawableChart, RainfallTools, StormInputProvider, StormPanels } from './storm-input';
-import { ComparePanel } from './compare';
-import { PrintReport } from './export';
+import { DrawableChart, RainfallTools, StormInputProvider, StormPanels } from './storm-input';
+import { PrintReport } from './export/PrintReport';
 import { LinkNotice, ScenarioBar } from './share';
 import { ScenarioServicesProvider, type ScenarioServices } from './services';
-import { EventsView } from './events';
-import { ViewTabs } from './layout/ViewTabs';
-import { DesignStormView } from './design-storm';
 import { useNumberFormat } from './number-format';
+import { usePins } from './services/services';
+import { ViewTabs } from './layout/ViewTabs';
+import { lazyPart } from './layout/LazyPart';
+import { UpdateNotice } from './layout/UpdateNotice';
+import type { UpdateChannel } from '../offline/updates';
+
+// Views the first screen does not show load when first opened, so the first screen's JavaScript stays small
+// (scripts/check-first-screen.mjs holds it under its budget).
+const EventsView = lazyPart('event set', () => import('./events').then((m) => m.EventsView));
+const DesignStormView = lazyPart('design storm view', () => import('./design-storm').then((m) => m.DesignStormView));
+const ComparePanel = lazyPart('comparison', () => import('./compare').then((m) => m.ComparePanel));
+
+// Below the chart and the results, out of the first view: it loads just after the first screen.
+const BarTable = lazyPart('bar table', () => import('./storm-input/table/BarTable').then((m) => m.BarTable));
+const SeparationPanel = lazyPart('baseflow separation', () =>
+  import('./observed/SeparationPanel').then((m) => m.SeparationPanel),
+);
+
+/** Baseflow separation, fetched once there is a streamflow record. */
+function RecordSeparation() {
+  const hasRecord = useScenario((s) => s.streamflow !== null);
+  return hasRecord ? <SeparationPanel /> : null;
+}
+
+/** The comparison of pinned scenarios, fetched once something is pinned. */
+function PinnedComparison() {
+  const { pins, problems } = usePins();
+  return pins.length > 0 || problems.length > 0 ? <ComparePanel /> : null;
+}
 
 export interface AppProps {
   readonly store: WorkbenchStore;
@@ -26,9 +51,11 @@ export interface AppProps {
   readonly rainfallTools?: ReactNode;
   /** Storage, share-link session, clipboard and downloads for the scenario tools (default: the browser's). */
   readonly services?: ScenarioServices;
+  /** New versions of the installed app (main.tsx; none in tests and in the single-file build). */
+  readonly updates?: UpdateChannel;
 }
 
-function Workbench({ rainfallTools }: { rainfallTools?: ReactNode }) {
+function Workbench({ rainfallTools, updates }: { rainfallTools?: ReactNode; updates?: UpdateChannel | undefined }) {
   useUndoShortcuts(useActions());
   // Every number in the views is written in the reader's number format: a new format draws the views afresh
   // (text typed under the old one is dropped rather than read under the new), while the header and tabs stay.
@@ -38,6 +65,7 @@ function Workbench({ rainfallTools }: { rainfallTools?: ReactNode }) {
       <Header />
       <ScenarioBar />
       <Caution />
+      {updates ? <UpdateNotice updates={updates} /> : null}
       {/* The workbench first and by default; the event set and design storms in views of their own. */}
       <ViewTabs
         views={[
@@ -57,7 +85,7 @@ function Workbench({ rainfallTools }: { rainfallTools?: ReactNode }) {
                     </DrawableChart>
                     <HydrographChart />
                     <ResultsPanel />
-                    <SeparationPanel />
+                    <RecordSeparation />
                     <BarTable />
                   </StormInputProvider>
                 </div>
@@ -65,7 +93,7 @@ function Workbench({ rainfallTools }: { rainfallTools?: ReactNode }) {
                   <MethodPanel />
                   <MatchingPanel />
                 </div>
-                <ComparePanel />
+                <PinnedComparison />
               </div>
             ),
           },
@@ -95,11 +123,11 @@ function Workbench({ rainfallTools }: { rainfallTools?: ReactNode }) {
 }
 
 /** The workbench screen, on the given store. */
-export function App({ store, rainfallTools, services }: AppProps) {
+export function App({ store, rainfallTools, services, updates }: AppProps) {
   return (
     <StoreProvider store={store}>
       <ScenarioServicesProvider services={services}>
-        <Workbench rainfallTools={rainfallTools} />
+        <Workbench rainfallTools={rainfallTools} updates={updates} />
       </ScenarioServicesProvider>
     </StoreProvider>
   );

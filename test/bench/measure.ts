@@ -97,3 +97,25 @@ export function syntheticStorm(n: number, seed = 1): { durationsH: number[]; dep
   }
   return { durationsH, depthsMm };
 }
+
+/**
+ * n depths drawn from a gamma distribution (shape ≥ 1, scale in mm), as the
+ * numpy peer draws its bars: Marsaglia & Tsang (2000), "A simple method for
+ * generating gamma variables", ACM Trans. Math. Softw. 26(3), the squeeze-free
+ * form; normals by Box & Muller (1958). A plain array built by push.
+ */
+export function gammaDepths(n: number, shape: number, scale: number, seed = 1): number[] {
+  const rand = seededRandom(seed);
+  const d = shape - 1 / 3;
+  const c = 1 / Math.sqrt(9 * d);
+  const depths: number[] = [];
+  while (depths.length < n) {
+    // 1 − u lies in (0, 1], so the logarithms stay finite.
+    const x = Math.sqrt(-2 * Math.log(1 - rand())) * Math.cos(2 * Math.PI * rand());
+    const root = 1 + c * x;
+    if (root <= 0) continue;
+    const v = root * root * root;
+    if (Math.log(1 - rand()) < 0.5 * x * x + d - d * v + d * Math.log(v)) depths.push(d * v * scale);
+  }
+  return depths;
+}

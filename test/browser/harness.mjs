@@ -23,6 +23,7 @@ const TYPES = {
   '.json': 'application/json',
   '.png': 'image/png',
   '.ico': 'image/x-icon',
+  '.webmanifest': 'application/manifest+json',
   '.map': 'application/json',
 };
 
@@ -38,9 +39,9 @@ export const CHROMIUM_FLAGS = [
   '--disable-sync',
 ];
 
-/** Serves dist/ on 127.0.0.1 at a free port. */
-export async function serveDist() {
-  await stat(join(DIST, 'index.html')).catch(() => {
+/** Serves dist/ (or another built copy) on 127.0.0.1 at a free port. */
+export async function serveDist(dir = DIST) {
+  await stat(join(dir, 'index.html')).catch(() => {
     throw new Error('dist/index.html is missing: run `vite build` first.');
   });
   const server = createServer(async (req, res) => {
@@ -48,8 +49,8 @@ export async function serveDist() {
       const url = new URL(req.url ?? '/', 'http://localhost');
       let path = normalize(decodeURIComponent(url.pathname)).replace(/^([/\\])+/, '');
       if (path === '' || path.endsWith('/')) path += 'index.html';
-      const file = join(DIST, path);
-      if (!file.startsWith(DIST)) throw new Error('outside');
+      const file = join(dir, path);
+      if (!file.startsWith(dir)) throw new Error('outside');
       const body = await readFile(file);
       res.writeHead(200, { 'content-type': TYPES[extname(file)] ?? 'application/octet-stream' });
       res.end(body);

@@ -80,6 +80,8 @@ async function pasteRecord(page) {
   await dialog.getByRole('status').filter({ hasText: '121 samples every 15 min' }).waitFor();
   await dialog.getByRole('button', { name: 'Use this record' }).click();
   await dialog.waitFor({ state: 'detached' });
+  // The hydrograph and the separation panel load their code once there is a record.
+  await page.getByRole('region', { name: 'Baseflow separation' }).waitFor();
 }
 
 /**

@@ -1,5 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import { InputError, barEdgesH, peakIntensityMmH, totalDepthMm, validateStorm } from '../../src/core';
+import { PASS_BLOCK, validateStormDepthMm } from '../../src/core/storm';
 
 function rejection(fn: () => void): InputError {
   try {
@@ -52,6 +53,26 @@ describe('validateStorm', () => {
   it('rejects a start time that is not a date-time', () => {
     const e = rejection(() => validateStorm({ durationsH: [1], depthsMm: [1], startIso: 'yesterday' }));
     expect(e.field).toBe('startIso');
+  });
+});
+
+describe('validateStormDepthMm', () => {
+  it('returns the total depth from the validating pass', () => {
+    // 0 + 3.2 + 1 = 4.2 mm, summed in bar order as totalDepthMm sums it.
+    const storm = { durationsH: [0.5, 1, 0.25], depthsMm: [0, 3.2, 1] };
+    expect(validateStormDepthMm(storm)).toBe(0 + 3.2 + 1);
+    expect(validateStormDepthMm({ durationsH: [], depthsMm: [] })).toBe(0);
+  });
+
+  it('sums across its blocks and names a bad bar past the first block', () => {
+    const n = 2 * PASS_BLOCK + 5;
+    const storm = { durationsH: new Array<number>(n).fill(0.25), depthsMm: new Array<number>(n).fill(0.5) };
+    // n bars of 0.5 mm: every partial sum is a multiple of 0.5, exact in binary.
+    expect(validateStormDepthMm(storm)).toBe(0.5 * n);
+    storm.depthsMm[PASS_BLOCK + 1] = -3;
+    const e = rejection(() => validateStormDepthMm(storm));
+    expect([e.field, e.index]).toEqual(['depthsMm', PASS_BLOCK + 1]);
+    expect(e.message).toMatch(new RegExp(`^Bar ${PASS_BLOCK + 2}: rainfall depth`));
   });
 });
 

@@ -7,6 +7,7 @@ import {
   stormBeyondRecords,
   type PlausibleQuantity,
 } from '../../src/io/plausible';
+import { MAX_RECORD_H, MIN_STEP_H } from '../../src/core';
 import { expectClose } from '../helpers/tolerance';
 
 describe('the plausible range of each quantity', () => {
@@ -33,6 +34,17 @@ describe('the plausible range of each quantity', () => {
     expect(checkPlausible('depth', 0)).toBeNull();
     expect(checkPlausible('barDuration', 0)).toEqual({ quantity: 'barDuration', side: 'below', limit: 1 / 3600 });
     expect(checkPlausible('offset', -24)).toBeNull();
+  });
+
+  it('is the first gate for typed times, the core’s limits of time the last: never wider, the shortest bar shared', () => {
+    // One second (1/3600 h) is the core's shortest bar; the table reads it rather than restating it.
+    expect(PLAUSIBLE.barDuration.min).toBe(MIN_STEP_H);
+    expect(PLAUSIBLE.stormDuration.min).toBe(MIN_STEP_H);
+    // A year of 366 days (8,784 h) per bar, storm or offset lies inside 500 years (4,383,000 h) either way.
+    for (const q of ['barDuration', 'stormDuration', 'offset'] as const) {
+      expect(PLAUSIBLE[q].max, q).toBeLessThanOrEqual(MAX_RECORD_H);
+      expect(PLAUSIBLE[q].min, q).toBeGreaterThanOrEqual(-MAX_RECORD_H);
+    }
   });
 
   it('says what and why in plain words', () => {

@@ -3,7 +3,7 @@
 // documents the schema accepts.
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
-import { BASEFLOW_KINDS } from '../../src/core';
+import { BASEFLOW_KINDS, FIRST_CLOCK_YEAR, LAST_CLOCK_YEAR, MAX_RECORD_H, hoursBetweenClocks } from '../../src/core';
 import { parseScenario } from '../../src/scenario';
 import { MAX_BARS, MAX_SAMPLES, MAX_SET_EVENTS, scenarioArb } from './arbitraries';
 
@@ -29,6 +29,19 @@ describe('the scenario generator', () => {
     expect(docs.filter((d) => d.streamflow?.useAsObserved).length).toBeGreaterThan(10);
     expect(docs.filter((d) => d.eventSet.activeId !== null).length).toBeGreaterThan(10);
     expect(new Set(records.map((r) => r.baseflow.kind))).toEqual(new Set(BASEFLOW_KINDS));
+  });
+
+  it('reaches the limits of time: start clocks in the first and last years, a record exactly 500 years from its storm', () => {
+    const clocks = docs.flatMap((d) => [d.storm.startIso, d.streamflow?.startIso]).filter((c) => c !== undefined);
+    expect(clocks.some((c) => c.startsWith(`${FIRST_CLOCK_YEAR}-`))).toBe(true);
+    expect(clocks.some((c) => c.startsWith(`${LAST_CLOCK_YEAR}-`))).toBe(true);
+    const apart = docs.map((d) =>
+      d.storm.startIso && d.streamflow?.startIso
+        ? Math.abs(hoursBetweenClocks(d.storm.startIso, d.streamflow.startIso)?.hours ?? Number.NaN)
+        : Number.NaN,
+    );
+    // 500 years of 365.25 days = 4,383,000 h, the most a record's clock may lie from its storm's.
+    expect(apart.some((h) => h === MAX_RECORD_H)).toBe(true);
   });
 
   it('gives only documents the schema accepts as they are', () => {

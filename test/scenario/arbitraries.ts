@@ -88,32 +88,81 @@ export const stormArb = fc.oneof(
   },
 );
 
+/** The forms of ISO 8601 start clock the schema reads. */
+type ClockForm = 'minutes' | 'seconds' | 'utc' | 'offset';
+
+/** A start clock before it is written: a moment (its UTC fields are the clock's digits) and a form. */
+interface Clock {
+  readonly date: Date;
+  readonly form: ClockForm;
+}
+
+const FIRST_CLOCK_MS = Date.UTC(FIRST_CLOCK_YEAR, 0, 1);
+const LAST_CLOCK_MS = Date.UTC(LAST_CLOCK_YEAR, 11, 31, 23, 59, 59);
+
+const clockFormArb = fc.constantFrom<ClockForm>('minutes', 'seconds', 'utc', 'offset');
+
+const clockArb: fc.Arbitrary<Clock> = fc.record({
+  // Any start clock the schema takes, its first and last moments included (core/time-limits.ts).
+  date: fc.oneof(
+    fc.date({
+      min: new Date('1900-01-01T00:00:00Z'),
+      max: new Date('2100-12-31T23:59:59Z'),
+      noInvalidDate: true,
+    }),
+    fc.date({ min: new Date(FIRST_CLOCK_MS), max: new Date(LAST_CLOCK_MS), noInvalidDate: true }),
+    fc.constantFrom(new Date(FIRST_CLOCK_MS), new Date(LAST_CLOCK_MS)),
+  ),
+  form: clockFormArb,
+});
+
+/** A clock as a document writes it: "2026-07-14T15:00", "…:00", "…:00.000Z" or "…:00+10:00". */
+function isoOf({ date, form }: Clock): string {
+  const iso = date.toISOString(); // 2026-07-14T15:00:00.000Z
+  if (form === 'minutes') return iso.slice(0, 16);
+  if (form === 'seconds') return iso.slice(0, 19);
+  if (form === 'utc') return iso;
+  return `${iso.slice(0, 19)}+10:00`;
+}
+
 /** ISO 8601 start times in the forms the schema reads. */
-export const startIsoArb = fc
-  .record({
-    // Any start clock the schema takes, its first and last moments included (core/time-limits.ts).
-    date: fc.oneof(
-      fc.date({
-        min: new Date('1900-01-01T00:00:00Z'),
-        max: new Date('2100-12-31T23:59:59Z'),
-        noInvalidDate: true,
-      }),
-      fc.date({
-        min: new Date(`${FIRST_CLOCK_YEAR}-01-01T00:00:00Z`),
-        max: new Date(`${LAST_CLOCK_YEAR}-12-31T23:59:59Z`),
-        noInvalidDate: true,
-      }),
-      fc.constantFrom(new Date(`${FIRST_CLOCK_YEAR}-01-01T00:00:00Z`), new Date(`${LAST_CLOCK_YEAR}-12-31T23:59:59Z`)),
+export const startIsoArb = clockArb.map(isoOf);
+
+/** `ms` moved into the years a start clock may have (the record then lies nearer its storm, never farther). */
+const intoClockYears = (ms: number): Date => new Date(Math.min(LAST_CLOCK_MS, Math.max(FIRST_CLOCK_MS, ms)));
+
+/**
+ * Room kept below the 500-year limit between two clocks written in different
+ * forms: "+10:00" against "Z" moves one by 10 h, and the minutes form drops up
+ * to a minute of seconds.
+ */
+const FORMS_APART_H = 11;
+
+/**
+ * A record's start clock, or none. With no storm clock, any clock. With one,
+ * a clock within 500 years of it (the schema's rule, core/time-limits.ts):
+ * exactly 500 years before or after, written in the storm's own form so the
+ * two differ by exactly MAX_RECORD_H (moved into the allowed years, where it
+ * falls nearer); anywhere between, in any form; or within two days, as a
+ * real record lies.
+ */
+function recordStartArb(storm: Clock | undefined): fc.Arbitrary<string | undefined> {
+  if (storm === undefined) return fc.option(startIsoArb, { nil: undefined });
+  const from = (hours: number): Date => intoClockYears(storm.date.getTime() + hours * 3.6e6);
+  const farthest = MAX_RECORD_H - FORMS_APART_H;
+  return fc.option(
+    fc.oneof(
+      fc.constantFrom(-MAX_RECORD_H, MAX_RECORD_H).map((hours) => isoOf({ date: from(hours), form: storm.form })),
+      fc
+        .record({ hours: fc.double({ min: -farthest, max: farthest, noNaN: true }), form: clockFormArb })
+        .map(({ hours, form }) => isoOf({ date: from(hours), form })),
+      fc
+        .record({ hours: fc.double({ min: -48, max: 48, noNaN: true }), form: clockFormArb })
+        .map(({ hours, form }) => isoOf({ date: from(hours), form })),
     ),
-    form: fc.constantFrom('minutes', 'seconds', 'utc', 'offset'),
-  })
-  .map(({ date, form }) => {
-    const iso = date.toISOString(); // 2026-07-14T15:00:00.000Z
-    if (form === 'minutes') return iso.slice(0, 16);
-    if (form === 'seconds') return iso.slice(0, 19);
-    if (form === 'utc') return iso;
-    return `${iso.slice(0, 19)}+10:00`;
-  });
+    { nil: undefined },
+  );
+}
 
 /** A value for one numeric parameter, anywhere inside its bounds. */
 function paramValue(param: MethodSpec['params'][number]): fc.Arbitrary<number> {
@@ -223,10 +272,11 @@ function baseflowOfKindArb(
 /**
  * A streamflow record of 2 to MAX_SAMPLES samples (steps as gauges log them
  * or any length from 1 min to a day; discharge 0, small or large), its
- * clock, offset, separation method, method memory and link to the observed
+ * clock (within 500 years of `stormClock`, its storm's start, when there is
+ * one), offset, separation method, method memory and link to the observed
  * runoff (only where `canLink`).
  */
-export const streamflowArb = (canLink: boolean): fc.Arbitrary<Streamflow> =>
+export const streamflowArb = (canLink: boolean, stormClock?: Clock): fc.Arbitrary<Streamflow> =>
   fc
     .record({
       uniform: fc.boolean(),
@@ -242,7 +292,7 @@ export const streamflowArb = (canLink: boolean): fc.Arbitrary<Streamflow> =>
         }),
         { minLength: 2, maxLength: MAX_SAMPLES, size: 'max' },
       ),
-      start: fc.option(startIsoArb, { nil: undefined }),
+      start: recordStartArb(stormClock),
       offsetH: fc.double({ min: -48, max: 48, noNaN: true }).map(unsignedZero),
       linked: fc.boolean(),
     })
@@ -268,52 +318,57 @@ export const streamflowArb = (canLink: boolean): fc.Arbitrary<Streamflow> =>
       }));
     });
 
+// The storm's start clock is drawn first: the workbench's record (and the
+// active event's, which is the same) lies within 500 years of it.
 export const scenarioArb: fc.Arbitrary<Scenario> = fc
-  .record({
-    name: textArb(60),
-    notes: textArb(300),
-    storm: stormArb,
-    start: fc.option(startIsoArb, { nil: undefined }),
-    catchmentName: textArb(40),
-    areaM2: fc.oneof(fc.constant(0), fc.double({ min: 1, max: 1e10, noNaN: true }), anyNonNegative),
-    units: fc.constantFrom('si' as const, 'us' as const),
-    method: methodArb,
-    methodMemory: methodMemoryArb,
-    observed: fc.option(
-      fc.record({
-        as: fc.constantFrom('depth' as const, 'volume' as const),
-        value: fc.oneof(fc.double({ min: 0, max: 500, noNaN: true }).map(unsignedZero), anyNonNegative),
-        locked: fc.boolean(),
-        pick: fc.nat(),
-      }),
-      { nil: null },
-    ),
-    // Version 2: the workbench's streamflow record (linked to the observed runoff only where there is one).
-    streamflow: fc.option(streamflowArb(true), { nil: null, freq: 2 }),
-    // Version 3: a few events of the catchment, each with its own storm, observed runoff and record.
-    events: fc.array(
-      fc.record({
-        name: textArb(30),
-        storm: stormArb,
-        observed: fc.option(
-          fc.record({
-            as: fc.constantFrom('depth' as const, 'volume' as const),
-            value: fc.double({ min: 0, max: 500, noNaN: true }).map(unsignedZero),
-          }),
-          { nil: null },
-        ),
-        streamflow: fc.option(streamflowArb(false), { nil: null, freq: 3 }),
-      }),
-      { maxLength: MAX_SET_EVENTS, size: 'max' },
-    ),
-    // The event on the workbench (an index into the events), or none.
-    active: fc.option(fc.nat(), { nil: null }),
-    setParameter: fc.option(fc.nat(), { nil: null }),
-    designPick: fc.oneof(
-      fc.constantFrom('median' as const, 'mean' as const, 'min' as const, 'max' as const),
-      fc.record({ value: fc.double({ min: -1e6, max: 1e6, noNaN: true }).map(unsignedZero) }),
-    ),
-  })
+  .option(clockArb, { nil: undefined })
+  .chain((stormClock) =>
+    fc.record({
+      name: textArb(60),
+      notes: textArb(300),
+      storm: stormArb,
+      start: fc.constant(stormClock === undefined ? undefined : isoOf(stormClock)),
+      catchmentName: textArb(40),
+      areaM2: fc.oneof(fc.constant(0), fc.double({ min: 1, max: 1e10, noNaN: true }), anyNonNegative),
+      units: fc.constantFrom('si' as const, 'us' as const),
+      method: methodArb,
+      methodMemory: methodMemoryArb,
+      observed: fc.option(
+        fc.record({
+          as: fc.constantFrom('depth' as const, 'volume' as const),
+          value: fc.oneof(fc.double({ min: 0, max: 500, noNaN: true }).map(unsignedZero), anyNonNegative),
+          locked: fc.boolean(),
+          pick: fc.nat(),
+        }),
+        { nil: null },
+      ),
+      // Version 2: the workbench's streamflow record (linked to the observed runoff only where there is one).
+      streamflow: fc.option(streamflowArb(true, stormClock), { nil: null, freq: 2 }),
+      // Version 3: a few events of the catchment, each with its own storm, observed runoff and record.
+      events: fc.array(
+        fc.record({
+          name: textArb(30),
+          storm: stormArb,
+          observed: fc.option(
+            fc.record({
+              as: fc.constantFrom('depth' as const, 'volume' as const),
+              value: fc.double({ min: 0, max: 500, noNaN: true }).map(unsignedZero),
+            }),
+            { nil: null },
+          ),
+          streamflow: fc.option(streamflowArb(false), { nil: null, freq: 3 }),
+        }),
+        { maxLength: MAX_SET_EVENTS, size: 'max' },
+      ),
+      // The event on the workbench (an index into the events), or none.
+      active: fc.option(fc.nat(), { nil: null }),
+      setParameter: fc.option(fc.nat(), { nil: null }),
+      designPick: fc.oneof(
+        fc.constantFrom('median' as const, 'mean' as const, 'min' as const, 'max' as const),
+        fc.record({ value: fc.double({ min: -1e6, max: 1e6, noNaN: true }).map(unsignedZero) }),
+      ),
+    }),
+  )
   .map((r) => {
     const params: string[] = (METHODS[r.method.kind] as MethodSpec).params.map((p) => String(p.key));
     const observed =

@@ -82,7 +82,8 @@ describe('scenario version 4: infiltration settings', () => {
             suctionMm: 88.9,
             moistureDeficit: 0.3038,
             recovers: false,
-            recoveryPerH: 0.05,
+            initialSaturation: 0.3,
+            poreSizeIndex: 0.22,
           },
           'curve-number': { kind: 'curve-number', cn: 80, iaRatio: 0.05, conversion: 'ratio' },
           constant: { kind: 'constant', rateMmH: 6 },
@@ -149,7 +150,58 @@ describe('scenario version 4: infiltration settings', () => {
     const r = parseScenario(doc);
     expect(r.ok).toBe(false);
     if (!r.ok)
-      expect(r.problems.map((p) => p.message)).toEqual(['method.recoveryPerH: is missing (Recovery rate k_r, 1/h).']);
+      expect(r.problems.map((p) => p.message)).toEqual([
+        'method.initialSaturation: is missing (Initial saturation Sᵢ).',
+        'method.poreSizeIndex: is missing (Pore-size distribution index λ).',
+      ]);
+  });
+
+  it('refuses a recovery rate on Green–Ampt, whose recovery follows the soil and has none', () => {
+    const doc = {
+      ...DEMO_SCENARIO,
+      method: {
+        kind: 'green-ampt',
+        ksMmH: 3.4,
+        suctionMm: 88.9,
+        moistureDeficit: 0.3,
+        recovers: true,
+        initialSaturation: 0.3,
+        poreSizeIndex: 0.22,
+        recoveryPerH: 0.05,
+      },
+      observed: null,
+    };
+    const r = parseScenario(doc);
+    expect(r.ok).toBe(false);
+    if (!r.ok) expect(r.problems.map((p) => p.path)).toEqual(['method.recoveryPerH']);
+  });
+
+  it('round-trips Green–Ampt recovery and its soil values through a link and a file, with the results they give', () => {
+    const method: LossMethod = {
+      kind: 'green-ampt',
+      ksMmH: 6.5,
+      suctionMm: 166.8,
+      moistureDeficit: 0.34,
+      recovers: true,
+      initialSaturation: 0.3,
+      poreSizeIndex: 0.211,
+    };
+    const scenario: Scenario = {
+      ...DEMO_SCENARIO,
+      storm: { durationsH: [0.5, 6, 0.5], depthsMm: [30, 0, 30] },
+      method,
+      observed: null,
+    };
+    for (const back of [
+      decodeScenarioLink(encodeScenarioLink(scenario)),
+      scenarioFromFileText(scenarioToFileText(scenario)),
+    ]) {
+      expect(back).toStrictEqual({ ok: true, scenario });
+      if (back.ok)
+        expect(computeLosses(back.scenario.storm, back.scenario.method).lossMm[2]).toBe(
+          computeLosses(scenario.storm, method).lossMm[2],
+        );
+    }
   });
 
   it('round-trips recovery and the conversion through a link and a file, with the results they give', () => {

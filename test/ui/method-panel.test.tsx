@@ -83,6 +83,45 @@ describe('the loss-method panel', () => {
     expect(screen.queryByRole('textbox', { name: /^Recovery rate k_r/ })).not.toBeInTheDocument();
   });
 
+  it('Green–Ampt’s “Capacity recovers in dry spells” shows the soil values Sᵢ and λ (no rate), changes the losses and says what dry bars do', async () => {
+    const storm = { durationsH: [1, 6, 0.5], depthsMm: [30, 0, 20] };
+    const { user, scenario } = renderWorkbench({
+      ...FOUR_BARS,
+      storm,
+      method: {
+        kind: 'green-ampt',
+        ksMmH: 3.4,
+        suctionMm: 88.9,
+        moistureDeficit: 0.3038,
+        recovers: false,
+        initialSaturation: 0.3,
+        poreSizeIndex: 0.22,
+      },
+      observed: null,
+    });
+    const toggle = screen.getByRole('checkbox', { name: 'Capacity recovers in dry spells' });
+    expect(toggle).toHaveAccessibleDescription(/Ogden & Saghafian 1997/);
+    expect(toggle).toHaveAccessibleDescription(/there is no rate to set/);
+    expect(screen.queryByRole('textbox', { name: /^Initial saturation Sᵢ/ })).not.toBeInTheDocument();
+    expect(document.getElementById('method-dry-bars')).toHaveTextContent(/leaves the infiltrated depth/);
+    const before = scenario().method;
+    await user.click(toggle);
+    expect(scenario().method).toMatchObject({ recovers: true, initialSaturation: 0.3, poreSizeIndex: 0.22 });
+    expect(screen.getByRole('textbox', { name: /^Initial saturation Sᵢ/ })).toHaveValue('0.3');
+    expect(screen.getByRole('textbox', { name: /^Pore-size distribution index λ/ })).toHaveValue('0.22');
+    expect(screen.queryByRole('textbox', { name: /^Recovery rate/ })).not.toBeInTheDocument();
+    expect(document.getElementById('method-dry-bars')).toHaveTextContent(/starts a new wetting front/);
+    // The screen shows the core's losses with recovery, more than without (a 6-hour spell).
+    const on = coreTotals(storm, scenario().method).totalLossMm;
+    expect(on).toBeGreaterThan(coreTotals(storm, before).totalLossMm);
+    expect(screen.getByLabelText('Loss depth')).toHaveTextContent(mmText(on));
+    // Soil texture values keep the switch and set Sᵢ and λ with K, ψ and Δθ.
+    await user.selectOptions(screen.getByRole('combobox', { name: 'Soil texture' }), 'clay');
+    await user.click(screen.getByRole('button', { name: 'Use soil values' }));
+    expect(scenario().method).toEqual({ ...greenAmptForTexture('clay', 0.3), recovers: true });
+    expect(screen.getByRole('textbox', { name: /^Pore-size distribution index λ/ })).toHaveValue('0.131');
+  });
+
   it('the curve number offers the S conversion only on the 0.05 basis, with the power relation chosen by default', async () => {
     const { user, scenario } = renderWorkbench({
       ...FOUR_BARS,

@@ -1,4 +1,5 @@
-import { render } from '@testing-library/react';
+import { render, waitFor } from '@testing-library/react';
+import { expect } from 'vitest';
 import userEvent from '@testing-library/user-event';
 import { computeLosses, type LossMethod } from '../../src/core';
 import type { Scenario } from '../../src/scenario/types';
@@ -20,3 +21,14 @@ export const mmText = (mm: number): string => `${formatValue(mm)} mm`;
 
 /** The core's totals for a storm and method, for checking the screen against. */
 export const coreTotals = (storm: Scenario['storm'], method: LossMethod) => computeLosses(storm, method);
+
+/** How long a test waits for code loaded on first use: its first load compiles it, slow on a busy machine (within the 5 s a test may take). */
+export const LAZY_LOAD_MS = 4_000;
+
+/**
+ * Waits until no part of the screen is still loading its code (the views,
+ * dialogs and panels that load when first shown, src/ui/layout/LazyPart.tsx).
+ */
+export async function lazyPartsLoaded(): Promise<void> {
+  await waitFor(() => expect(document.querySelector('.lazy-part')).toBeNull(), { timeout: LAZY_LOAD_MS });
+}

@@ -9,10 +9,10 @@ import { renderWorkbench } from './render';
 import { FOUR_BARS } from './store/fixtures';
 import { WITH_TRIANGLE } from './observed/fixtures';
 
-// Every typed time or duration is held to the core's limits of time
-// (src/core/time-limits.ts: a record of at most 500 years, bars of at least a
-// second, start clocks in the years 1000 to 2999), with a message beside the
-// field, and nothing past them reaches the store, the autosave or the clock
+// Every typed time or duration is held to its plausible range and, last, to
+// the core's limits of time (src/core/time-limits.ts: a record of at most 500
+// years, bars of at least a second, start clocks in the years 1000 to 2999),
+// with a message beside the field, and nothing past them reaches the store, the autosave or the clock
 // formatters. Before these limits, a bar duration of 10¹² min typed into the
 // bar table of a storm with a start clock was stored, and drawing the chart
 // threw "Invalid time value" (Intl.DateTimeFormat past the Date range).
@@ -74,15 +74,39 @@ describe('the clock formatters never throw', () => {
   });
 });
 
+/**
+ * The plausible range's refusal of a bar or step past a year (src/io/plausible.ts): a year of
+ * 366 days is 366 × 24 × 60 = 527,040 min.
+ */
+const STEP_PAST_A_YEAR =
+  '“1e12” min is more than a bar or time step can be (at most 527,040 min): a rainfall bar is one reading of a gauge, and the longest totals kept are yearly (common practice, no source).';
+
+/**
+ * CLOCKED's first two bars (0.5 h each) and then 498 bars of a 366-day year (8,784 h each, the
+ * longest a typed bar may be): 0.5 + 0.5 + 498 × 8,784 = 1 + 4,374,432 = 4,374,433 h, inside
+ * 500 years (4,383,000 h), so the storm reads; but bar 2 typed as a whole year is past them.
+ */
+const NEAR_500_YEARS: Scenario = {
+  ...CLOCKED,
+  storm: {
+    ...CLOCKED.storm,
+    durationsH: [0.5, 0.5, ...Array.from({ length: 498 }, () => 8784)],
+    depthsMm: [2, 6, ...Array.from({ length: 498 }, () => 0)],
+  },
+};
+
+// A typed value meets the plausible range first (src/io/plausible.ts: a bar,
+// a step or a storm of at most a year, an offset within a year): its message
+// quotes what was typed and names the field. The core's limits of time are
+// the last gate, reached by what passes the first: a storm whose bars, each
+// plausible, add up to more than 500 years.
 describe('a time or duration typed past the limits is refused beside its field', () => {
   it('a bar duration of 10¹² min in the bar table of a storm with a start clock', async () => {
     const { user, scenario, store } = renderWorkbench(CLOCKED);
     await user.click(durationCell(1));
     await user.keyboard('1e12{Enter}');
     const editor = screen.getByRole('textbox', { name: 'Bar 1 duration' });
-    expect(editor).toHaveAccessibleDescription(
-      'Bar 1 duration: a bar lasts from 1 second (0.0167 min) to 500 years (262,980,000 min); got 1e12 min.',
-    );
+    expect(editor).toHaveAccessibleDescription(`Bar 1 duration: ${STEP_PAST_A_YEAR}`);
     expect(scenario()).toBe(CLOCKED);
     expect(store.getState().history.past).toHaveLength(0);
     // The chart still draws its clock axis.
@@ -90,15 +114,17 @@ describe('a time or duration typed past the limits is refused beside its field',
   });
 
   it('a bar duration that would make the storm run past 500 years, refused by the store with the bar named', async () => {
-    const { user, scenario } = renderWorkbench(CLOCKED);
+    const { user, scenario, store } = renderWorkbench(NEAR_500_YEARS);
     await user.click(durationCell(2));
-    // 262,980,000 min is exactly 500 years: with the other three bars (1.5 h) the storm passes the limit.
-    await user.keyboard('262980000{Enter}');
+    // 527,040 min = 8,784 h, a year of 366 days: the most the plausible range lets a bar be.
+    await user.keyboard('527040{Enter}');
     expect(screen.getByRole('textbox', { name: 'Bar 2 duration' })).toHaveAccessibleDescription(
-      // 4,383,000 h + the other three bars' 1.5 h = 4,383,001.5 h.
-      'Bar 2: with a duration of 500 years the storm would last 4,383,001.5 h, 500 years; a record spans at most 500 years (4,383,000 h).',
+      // 4,374,433 h − 0.5 h (bar 2 as it was) + 8,784 h = 4,383,216.5 h; ÷ 8,766 h a year = 500.02 years,
+      // "500" to four figures. 8,784 h ÷ 24 = 366 days.
+      'Bar 2: with a duration of 366 days the storm would last 4,383,216.5 h, 500 years; a record spans at most 500 years (4,383,000 h).',
     );
-    expect(scenario()).toBe(CLOCKED);
+    expect(scenario()).toBe(NEAR_500_YEARS);
+    expect(store.getState().history.past).toHaveLength(0);
   });
 
   it('a new empty storm of 10¹² min bars in the drawing panel', async () => {
@@ -108,7 +134,7 @@ describe('a time or duration typed past the limits is refused beside its field',
     const step = within(panel).getByRole('textbox', { name: 'Bar duration (min)' });
     await retype(user, step, '1e12');
     await user.click(within(panel).getByRole('button', { name: 'Start a new empty storm' }));
-    expect(step).toHaveAccessibleDescription(/The time step must be at most 500 years/);
+    expect(step).toHaveAccessibleDescription(STEP_PAST_A_YEAR);
     expect(scenario()).toBe(CLOCKED);
   });
 
@@ -119,7 +145,7 @@ describe('a time or duration typed past the limits is refused beside its field',
     const step = within(tools).getByRole('textbox', { name: 'New time step (min)' });
     await retype(user, step, '1e12');
     await user.click(within(tools).getByRole('button', { name: 'Resample' }));
-    expect(step).toHaveAccessibleDescription(/The time step must be at most 500 years/);
+    expect(step).toHaveAccessibleDescription(expect.stringContaining(STEP_PAST_A_YEAR));
     const start = within(tools).getByRole('textbox', { name: 'Storm start' });
     await retype(user, start, '0024-05-01 10:00');
     await user.click(within(tools).getByRole('button', { name: 'Set start' }));
@@ -136,19 +162,25 @@ describe('a time or duration typed past the limits is refused beside its field',
     await view.user.click(screen.getByRole('tab', { name: 'Design storm' }));
     await retype(view.user, screen.getByRole('textbox', { name: 'Storm duration (min)' }), '1e12');
     expect(screen.getByRole('alert')).toHaveTextContent(
-      /^Storm duration: The storm duration must be at most 500 years/,
+      // A year of 366 days = 527,040 min (as above).
+      /^Storm duration: “1e12” min is more than a storm duration can be \(at most 527,040 min\)/,
     );
+    expect(view.scenario()).toBe(CLOCKED);
   });
 
   it('a record offset of 10¹² h', async () => {
-    const { user, scenario } = renderWorkbench(WITH_TRIANGLE);
+    const { user, scenario, store } = renderWorkbench(WITH_TRIANGLE);
     const offset = screen.getByLabelText(/^Record start after storm start/);
     await retype(user, offset, '1e12');
     expect(offset).toHaveAccessibleDescription(
-      expect.stringContaining('The offset from the storm start to the first sample must be within 500 years'),
+      expect.stringContaining(
+        // A year of 366 days = 366 × 24 = 8,784 h, either way.
+        '“1e12” h is more than a time between the storm and the record can be (at most 8,784 h): a streamflow record for an event starts within days of its storm; a year is far beyond that (common practice, no source). Not applied; still 0 h.',
+      ),
     );
     expect(offset).toHaveValue('1e12');
-    // The field stores as it is typed: "1e1" (10 h) was the last text it could take.
-    expect(scenario().streamflow?.offsetH).toBe(10);
+    // Not applied: the offset stays as it was before the typing (0 h), never the "1e1" (10 h) typed on the way.
+    expect(scenario()).toBe(WITH_TRIANGLE);
+    expect(store.getState().history.past).toHaveLength(0);
   });
 });

@@ -2,9 +2,10 @@ import { isInputError } from '../errors';
 import { totalExcessMm } from '../loss/compute';
 import { describeRange, methodSpec, numericParam, validateMethod } from '../loss/methods';
 import type { LossMethod, NumericParam } from '../loss/types';
-import { totalDepthMm, validateStorm, type Storm } from '../storm';
+import { validateStormDepthMm, type Storm } from '../storm';
 import { EXACT_CALIBRATORS } from './exact';
 import { PARAMETER_REL_TOL, solveMonotone } from './monotone';
+import { SCAN_POINTS, solveByScan } from './scan';
 
 export type CalibrationFailure =
   'invalid-input' | 'unknown-parameter' | 'invalid-target' | 'negative-target' | 'exceeds-rainfall' | 'bound-reached';
@@ -50,8 +51,9 @@ export function calibrate(
   parameter: string,
   targetExcessMm: number,
 ): CalibrationResult {
+  let rainMm: number;
   try {
-    validateStorm(storm);
+    rainMm = validateStormDepthMm(storm);
     validateMethod(method);
   } catch (error) {
     if (isInputError(error)) return { ok: false, reason: 'invalid-input', message: error.message };
@@ -77,7 +79,6 @@ export function calibrate(
   if (targetExcessMm < 0) {
     return { ok: false, reason: 'negative-target', message: 'The observed runoff cannot be negative.' };
   }
-  const rainMm = totalDepthMm(storm);
   // Allow for rounding when the target was itself summed from the bars.
   const slack = 1e-12 * Math.max(rainMm, 1);
   if (targetExcessMm > rainMm + slack) {
@@ -103,7 +104,21 @@ export function calibrate(
   const lo = param.searchMin ? Math.max(ownLo, param.searchMin(storm, method as never)) : ownLo;
   let hi = Number.isFinite(param.max) ? param.max : (param.searchMax?.(storm, method as never) ?? lo + 1);
   if (!(hi > lo)) hi = lo;
-  const solved = solveMonotone(excessWith, lo, hi, target);
+  const monotone = param.monotone !== false;
+  const solved = monotone ? solveMonotone(excessWith, lo, hi, target) : solveByScan(excessWith, lo, hi, target);
+  if (!solved.ok && !monotone) {
+    return {
+      ok: false,
+      reason: 'bound-reached',
+      bound: solved.side,
+      boundValue: solved.x,
+      boundExcessMm: solved.g,
+      message:
+        `No ${lowerFirst(param.label)} ${describeRange(param)}${unitText(param)} was found to give ${fmt(target)} mm of runoff ` +
+        `(runoff need not rise or fall steadily with it; of ${SCAN_POINTS + 1} values tried across the range, ` +
+        `${fmt(solved.x)}${unitText(param)} came closest with ${fmt(solved.g)} mm).`,
+    };
+  }
   if (!solved.ok) {
     const bound = solved.side === 'min' ? 'lowest' : 'highest';
     return {

@@ -1,6 +1,6 @@
-import { validateStorm, type Storm } from '../storm';
-import { methodSpec, validateMethod } from './methods';
-import type { LossMethod, LossResult, MethodSpec } from './types';
+import { validateStorm, validateStormLists, validateStormStart, type Storm } from '../storm';
+import { isLossKind, METHODS, methodSpec, validateMethod } from './methods';
+import type { BarTotals, LossMethod, LossResult, MethodSpec } from './types';
 
 /** Reusable output buffers, so a drag loop need not allocate every frame. */
 export interface LossBuffers {
@@ -10,14 +10,44 @@ export interface LossBuffers {
 
 /**
  * Applies a loss method to every bar of a storm. Validates both at the edge
- * (throws InputError naming the bar or field), then runs the method's own
- * compute over plain arrays. Pass `buffers` of at least the storm's length to
- * reuse memory; otherwise fresh arrays are allocated.
+ * (throws InputError naming the bar or field, before any result is
+ * returned), then runs the method's own compute over plain arrays. Pass
+ * `buffers` of at least the storm's length to reuse memory; otherwise fresh
+ * arrays are allocated.
  */
 export function computeLosses(storm: Storm, method: LossMethod, buffers?: LossBuffers): LossResult {
+  // Into fresh arrays only: a refused storm must leave the caller's buffers
+  // holding the result they held before.
+  const fused = buffers ? undefined : checkedLosses(storm, method);
+  if (fused) return fused;
   validateStorm(storm);
   validateMethod(method);
   return computeLossesUnchecked(storm, method, buffers);
+}
+
+/**
+ * computeLosses in one read of the storm, for a method with a checkedCompute:
+ * the bars are checked in the same loop that computes them (validating first
+ * cost as much as the constant-rate pass itself). Undefined when the method
+ * has no such pass or anything fails a check; computeLosses then validates in
+ * validateStorm's order and throws the error that names the first problem,
+ * and the arrays written here are dropped unseen.
+ */
+function checkedLosses(storm: Storm, method: LossMethod): LossResult | undefined {
+  const checkedCompute = isLossKind(method?.kind) ? (METHODS[method.kind] as MethodSpec).checkedCompute : undefined;
+  if (!checkedCompute) return undefined;
+  try {
+    validateStormLists(storm);
+    validateStormStart(storm);
+    validateMethod(method);
+  } catch {
+    return undefined;
+  }
+  const n = storm.depthsMm.length;
+  const lossMm = new Float64Array(n);
+  const excessMm = new Float64Array(n);
+  const totals = checkedCompute(storm.durationsH, storm.depthsMm, method as never, lossMm, excessMm);
+  return totals ? withTotals(lossMm, excessMm, totals) : undefined;
 }
 
 /**
@@ -35,9 +65,20 @@ export function computeLossesUnchecked(storm: Storm, method: LossMethod, buffers
     lossMm,
     excessMm,
   );
-  if (!totals) return summarise(storm, lossMm, excessMm);
-  const { rainMm } = totals;
-  return { lossMm, excessMm, ...totals, runoffFraction: rainMm > 0 ? totals.totalExcessMm / rainMm : 0 };
+  return totals ? withTotals(lossMm, excessMm, totals) : summarise(storm, lossMm, excessMm);
+}
+
+function withTotals(lossMm: Float64Array, excessMm: Float64Array, totals: BarTotals): LossResult {
+  const { rainMm, totalExcessMm } = totals;
+  return {
+    lossMm,
+    excessMm,
+    rainMm,
+    totalLossMm: totals.totalLossMm,
+    totalExcessMm,
+    runoffFraction: rainMm > 0 ? totalExcessMm / rainMm : 0,
+    peakExcessMmH: totals.peakExcessMmH,
+  };
 }
 
 function summarise(storm: Storm, lossMm: Float64Array, excessMm: Float64Array): LossResult {
@@ -55,15 +96,7 @@ function summarise(storm: Storm, lossMm: Float64Array, excessMm: Float64Array): 
     const dt = durationsH[k] as number;
     if (e > peak * dt) peak = e / dt;
   }
-  return {
-    lossMm,
-    excessMm,
-    rainMm: rain,
-    totalLossMm: loss,
-    totalExcessMm: excess,
-    runoffFraction: rain > 0 ? excess / rain : 0,
-    peakExcessMmH: peak,
-  };
+  return withTotals(lossMm, excessMm, { rainMm: rain, totalLossMm: loss, totalExcessMm: excess, peakExcessMmH: peak });
 }
 
 let scratch: LossBuffers = { lossMm: new Float64Array(0), excessMm: new Float64Array(0) };

@@ -1,5 +1,11 @@
 import { peakIntensityMmH, totalDepthMm, type Storm } from '../storm';
-import { halfRecoveryText, recoveryRateParam, recoveryRatePerH, recoverySwitch } from './recovery';
+import {
+  REDISTRIBUTION_SHAPE_FACTOR,
+  redistribute,
+  redistributionSoil,
+  type RedistributionSoil,
+} from './redistribution';
+import { recoverySwitch } from './recovery';
 import { sampleCapacity } from './sample-capacity';
 import type { CapacityFn, ComputeFn, GreenAmptLoss, MethodSpec } from './types';
 
@@ -17,9 +23,34 @@ import type { CapacityFn, ComputeFn, GreenAmptLoss, MethodSpec } from './types';
  *   F₂ − F₁ − ψΔθ·ln((F₂ + ψΔθ)/(F₁ + ψΔθ)) = K·Δt
  * (Chow, Maidment & Mays 1988, §4.4, the Green–Ampt equation from a known
  * starting depth F₁). Each bar is solved exactly in this way, so the result
- * does not depend on how the rain is cut into bars. Dry bars leave F as it
- * is unless recovery is on (see recovery.ts), when the wetted zone drains
- * and F decays, F·e^(−k_r Δt).
+ * does not depend on how the rain is cut into bars.
+ *
+ * Dry spells. Without recovery a dry bar leaves F, and so the capacity, as
+ * the rain left it. With recovery the method follows the Green–Ampt
+ * infiltration with redistribution of Ogden & Saghafian (1997, J. Irrig.
+ * Drain. Eng. 123(5); the description here is from memory):
+ * 1. While no rain falls (bars with zero depth, once rain has begun) the
+ *    wetted zone, holding I = F mm, keeps its water, deepens and drains: its
+ *    water content θ₀ falls towards the initial θᵢ by the redistribution
+ *    equation of Smith, Corradini & Melone (1993), solved over the whole
+ *    spell in one piece (redistribution.ts, which also states how the
+ *    Brooks–Corey soil relations are tied to K, ψ and Δθ).
+ * 2. When rain returns, a new wetting front starts at the surface and moves
+ *    into soil at θ₀: Green–Ampt with the same K, the deficit θ_s − θ₀ and
+ *    the capillary drive G(θ₀, θ_s), so its M₂ = G(θ₀, θ_s)·(θ_s − θ₀) and
+ *    its capacity K(1 + M₂/F₂), F₂ counted from zero (infinite at the first
+ *    drop, as on dry soil), with ponding by Mein & Larson as above.
+ * 3. When the new front reaches the old zone's depth Z (F₂ = Z(θ_s − θ₀)),
+ *    the two are one front again at Z with θ_s above it: F = I + F₂ = Z·Δθ,
+ *    and plain Green–Ampt goes on from there.
+ * Our stated assumptions where the model leaves a choice: a hiatus is a bar
+ * with no rain (any rain is a burst); the old zone stays as it is while the
+ * new front advances; rain that stops before its new front has reached the
+ * old zone is spread over the old zone's depth (water kept) before the zone
+ * redistributes again; the soil relations are those of redistribution.ts.
+ * The meeting point is found in closed form (the ponded equation solved for
+ * the time), so wet bars stay exact and a dry spell is one solve: cutting
+ * any bar in two changes nothing.
  */
 
 /**
@@ -61,7 +92,12 @@ export function greenAmptPondedIncrementMm(
   // long storm (u ~ 1e-6) that is below 1e-15 of the answer: no iteration needed.
   const u = low / base;
   if (m * u * u * u <= 3e-15 * low * ((startMm + low) / (base + low))) return low < high ? low : high;
-  return solveIncrement(kt, m, startMm, base, low, high);
+  if (u < 1) return solveIncrement(kt, m, startMm, base, low, high);
+  // Far beyond F₁ + M (a new front after a dry spell, a dry start) the quadratic
+  // bound is poor; K·t + M·ln(1 + K·t/(F₁ + M)) is another lower bound (x ≥ K·t
+  // inside the logarithm) and close to the root there.
+  const far = kt + m * growth(kt, base);
+  return solveIncrement(kt, m, startMm, base, far > low ? (far < high ? far : high) : low, high);
 }
 
 /** ln(1 + x/base); for a tiny base x/base can overflow, and then ln x − ln base is exact enough. */
@@ -128,6 +164,11 @@ export function greenAmptPondingDepthMm(
   return intensityMmH > ksMmH ? (ksMmH * suctionMm * moistureDeficit) / (intensityMmH - ksMmH) : Infinity;
 }
 
+/** Sᵢ used when a method object leaves it out: loam's default, 0.3. */
+export const DEFAULT_INITIAL_SATURATION = 0.3;
+/** λ used when a method object leaves it out: loam's, 0.22 (Rawls, Brakensiek & Saxton 1982; from memory). */
+export const DEFAULT_PORE_SIZE_INDEX = 0.22;
+
 /** A Green–Ampt method's numbers, worked out once per call. */
 interface GreenAmptConstants {
   readonly k: number;
@@ -135,20 +176,148 @@ interface GreenAmptConstants {
   readonly m: number;
   /** K·ψΔθ, mm²/h. */
   readonly km: number;
-  /** Recovery rate in dry bars, 1/h; 0 when off. */
-  readonly kr: number;
+  /** Recovery in dry spells is on and can change something (ψΔθ > 0, Sᵢ < 1). */
+  readonly recovers: boolean;
+  /** The soil's numbers for the redistribution equation (Sᵢ, λ). */
+  readonly soil: RedistributionSoil;
+  /** 2 + 3λ: with Sᵢ^c, the drives G(Sᵢ, 1) and G(S₀, 1) over h_b/(1 + 3λ). */
+  readonly airEntry: number;
+  /** 2 + 3λ − Sᵢ^c: ψ·(1 + 3λ)/h_b, the drive from Sᵢ to saturation over h_b/(1 + 3λ). */
+  readonly drive: number;
+  /** b·I of the redistribution equation, p·ψΔθ/((1 − Sᵢ)(2 + 3λ − Sᵢ^c)), mm. */
+  readonly bI: number;
 }
 
 function constants(method: GreenAmptLoss): GreenAmptConstants {
+  const k = method.ksMmH;
   const m = method.suctionMm * method.moistureDeficit;
-  return { k: method.ksMmH, m, km: method.ksMmH * m, kr: recoveryRatePerH(method) };
+  const si = method.initialSaturation ?? DEFAULT_INITIAL_SATURATION;
+  const soil = redistributionSoil(si, method.poreSizeIndex ?? DEFAULT_PORE_SIZE_INDEX);
+  const airEntry = 2 + 3 / soil.invLambda;
+  const drive = airEntry - soil.siC;
+  return {
+    k,
+    m,
+    km: k * m,
+    recovers: method.recovers === true && m > 0 && si < 1,
+    soil,
+    airEntry,
+    drive,
+    bI: (REDISTRIBUTION_SHAPE_FACTOR * m) / ((1 - si) * drive),
+  };
 }
 
-/** The cumulative infiltration F, mm, that sets the capacity. */
-interface DepthState {
+/**
+ * The soil's state. While one wetting front is at work (always without
+ * recovery) `sat` is 1 and `depth` is the Green–Ampt F. After a dry spell
+ * with recovery the old wetted zone has drained to `sat` < 1, and a new
+ * front from the surface has taken in `fresh` mm since the rain returned.
+ */
+interface GreenAmptState {
+  /** Infiltrated water above the initial content in the (deeper) wetted zone, mm: F, or I. */
   depth: number;
-  /** Hours of dry spell not yet drained from F (one exponential per spell: they multiply). */
+  /** Effective saturation S₀ of that zone (1: at θᵢ + Δθ). */
+  sat: number;
+  /** S₀^(1/λ). */
+  satPow: number;
+  /** Water the new front has taken in since the last dry spell, mm (0 while one front). */
+  fresh: number;
+  /** The new front's ψΔθ: G(S₀, 1)·(θ_s − θ₀), mm. */
+  freshM: number;
+  /** `fresh` at which the new front reaches the old one, mm. */
+  join: number;
+  /** Hours of dry spell not yet applied (the spell is solved in one piece when it ends). */
   dryH: number;
+}
+
+const startState = (): GreenAmptState => ({ depth: 0, sat: 1, satPow: 1, fresh: 0, freshM: 0, join: 0, dryH: 0 });
+
+/**
+ * Loss of one bar of rain p over dt hours, mm, for a front that has taken in
+ * `depth` mm, with M = ψΔθ and km = K·M (Green & Ampt 1911; Mein & Larson
+ * 1973): rain at or below K, or below the ponding depth F_p = KM/(i − K),
+ * soaks in; once ponded, the implicit ponded equation from the depth reached.
+ */
+function barLoss(k: number, m: number, km: number, depth: number, p: number, dt: number): number {
+  const i = p / dt;
+  if (i <= k || depth + p <= km / (i - k)) return p;
+  const pondDepth = km / (i - k);
+  let before = 0;
+  let pondedH = dt;
+  let from = depth;
+  if (depth < pondDepth) {
+    // Ponding starts inside the bar, t_p = (F_p − F)/i after its start.
+    before = pondDepth - depth;
+    pondedH = dt - before / i;
+    from = pondDepth;
+  }
+  const loss = before + (pondedH > 0 ? greenAmptPondedIncrementMm(k, m, from, pondedH) : 0);
+  return loss > p ? p : loss;
+}
+
+/**
+ * u − ln(1 + u) for u > −1. Directly above |u| = 1e-3, where cancellation
+ * costs at most 2ε/|u| ≤ 5e-13 of the result; below, u²·(1/2 − u/3 + u²/4 −
+ * u³/5 + u⁴/6), whose next term is below 1e-15 of the first.
+ */
+function uMinusLog1p(u: number): number {
+  if (Math.abs(u) > 1e-3) return u - Math.log1p(u);
+  return u * u * (1 / 2 - u * (1 / 3 - u * (1 / 4 - u * (1 / 5 - u / 6))));
+}
+
+/**
+ * Hours for a front with M = ψΔθ that has taken in `from` mm to take in
+ * `to` mm under rain of intensity i: below ponding at the rain rate; once
+ * ponded (F ≥ F_p) from the ponded Green–Ampt equation solved for the time,
+ * t = [x − M·ln(1 + x/(F₁ + M))]/K, x = F₂ − F₁ (Chow, Maidment & Mays 1988,
+ * §4.4), written as [x·F₁/(F₁ + M) + M·(u − ln(1 + u))]/K, u = x/(F₁ + M).
+ */
+function hoursToTake(k: number, m: number, km: number, from: number, to: number, i: number): number {
+  if (!(to > from)) return 0;
+  // A zone drained to Sᵢ (to rounding) is never reached: F₂ = I(1 − S₀)/(S₀ − Sᵢ) is infinite.
+  if (to === Infinity) return Infinity;
+  const pondDepth = i > k ? km / (i - k) : Infinity;
+  if (to <= pondDepth) return (to - from) / i;
+  const start = from > pondDepth ? from : pondDepth;
+  const before = (start - from) / i;
+  const x = to - start;
+  const base = start + m;
+  // Without suction (M = 0, or too small to add to F₁) the ponded rate is K.
+  if (!(m > 0) || base === start) return before + x / k;
+  const u = x / base;
+  // For a subnormal M on a dry surface u can overflow: then ln(1 + u) = ln x − ln(F₁ + M).
+  const curved = u < 1e300 ? m * uMinusLog1p(u) : x * (m / base) - m * (Math.log(x) - Math.log(base));
+  return before + ((x * start) / base + curved) / k;
+}
+
+/**
+ * Ends a dry spell: the wetted zone redistributes over the spell's hours
+ * (redistribution.ts), and the next rain starts a new front at the surface
+ * into soil at the zone's content (Ogden & Saghafian 1997; from memory).
+ * Rain that stopped before its new front reached the old zone is first
+ * spread over the old zone's depth Z, the water kept: S₀ − Sᵢ grows by the
+ * factor (I + F₂)/I (our rule: the model keeps one zone through a spell).
+ */
+function endDrySpell(c: GreenAmptConstants, st: GreenAmptState): void {
+  const si = c.soil.si;
+  if (st.fresh > 0) {
+    const grown = st.sat < 1 ? si + (st.sat - si) * ((st.depth + st.fresh) / st.depth) : 1;
+    st.sat = grown < 1 ? grown : 1;
+    st.satPow = grown < 1 ? Math.pow(grown, c.soil.invLambda) : 1;
+    st.depth += st.fresh;
+    st.fresh = 0;
+  }
+  redistribute(c.soil, st, (c.k * st.dryH) / st.depth, c.bI / st.depth);
+  st.dryH = 0;
+  const sat = st.sat;
+  if (sat < 1) {
+    // The new front: deficit θ_s − θ₀ = Δθ(1 − S₀)/(1 − Sᵢ) and drive
+    // G(S₀, 1) = ψ(2 + 3λ − S₀^c)/(2 + 3λ − Sᵢ^c); it meets the old front at
+    // F₂ = Z(θ_s − θ₀) = I(1 − S₀)/(S₀ − Sᵢ).
+    const satC = sat * sat * sat * st.satPow;
+    st.freshM = (c.m * ((1 - sat) / (1 - si)) * (c.airEntry - satC)) / c.drive;
+    st.join = (st.depth * (1 - sat)) / (sat - si);
+  }
 }
 
 /**
@@ -158,7 +327,7 @@ interface DepthState {
  */
 function runGreenAmpt(
   c: GreenAmptConstants,
-  st: DepthState,
+  st: GreenAmptState,
   durationsH: ArrayLike<number>,
   depthsMm: ArrayLike<number>,
   from: number,
@@ -166,40 +335,50 @@ function runGreenAmpt(
   lossOut: Float64Array | null,
   excessOut: Float64Array | null,
 ): void {
-  const { k, m, km, kr } = c;
+  const { k, m, km, recovers } = c;
   let depth = st.depth;
-  let dryH = st.dryH;
   for (let j = from; j < to; j++) {
     const p = depthsMm[j] as number;
     const dt = durationsH[j] as number;
     let loss = p;
     if (p === 0) {
-      // With recovery the wetted zone drains, F·e^(−k_r Δt) (see recovery.ts).
-      if (kr > 0) dryH += dt;
+      // A dry bar: with recovery, once there is water to move, the spell's hours count.
+      if (recovers && depth > 0) st.dryH += dt;
+    } else if (!recovers) {
+      loss = barLoss(k, m, km, depth, p, dt);
+      depth += loss;
     } else {
-      if (dryH > 0) {
-        depth *= Math.exp(-kr * dryH);
-        dryH = 0;
-      }
-      const i = p / dt;
-      // Rain at or below K never ponds; below F_p = Kψ∆θ/(i − K) (Mein & Larson 1973) all soaks in.
-      if (i <= k || depth + p <= km / (i - k)) {
-        depth += p;
-      } else {
-        const pondDepth = km / (i - k);
-        let before = 0;
-        let pondedH = dt;
-        if (depth < pondDepth) {
-          // Ponding starts inside the bar, t_p = (F_p − F)/i after its start.
-          before = pondDepth - depth;
-          pondedH = dt - before / i;
-          depth = pondDepth;
+      st.depth = depth;
+      if (st.dryH > 0) endDrySpell(c, st);
+      if (st.sat < 1) {
+        // Two fronts: the new one takes rain until it reaches the old zone.
+        const freshKm = k * st.freshM;
+        const i = p / dt;
+        // All the bar's rain would not reach the old zone: no need to time the meeting.
+        const joinH = st.fresh + p <= st.join ? dt : hoursToTake(k, st.freshM, freshKm, st.fresh, st.join, i);
+        if (joinH >= dt) {
+          loss = barLoss(k, st.freshM, freshKm, st.fresh, p, dt);
+          st.fresh += loss;
+        } else {
+          // They join: one front again, at Z with θ_s above, F = I + F₂ = Z·Δθ.
+          const taken = st.join - st.fresh;
+          const joined = st.depth + st.join;
+          const restH = dt - joinH;
+          const rest = i * restH;
+          // Below capacity on both fronts (never ponded in this bar): all of it,
+          // exactly, rather than a sum of parts that rounds off the rain.
+          const soaked = i <= k || (st.join <= freshKm / (i - k) && joined + rest <= km / (i - k));
+          loss = soaked ? p : taken + (restH > 0 ? barLoss(k, m, km, joined, rest, restH) : 0);
+          if (loss > p) loss = p;
+          st.depth = joined + (loss - taken);
+          st.sat = 1;
+          st.fresh = 0;
         }
-        const ponded = pondedH > 0 ? greenAmptPondedIncrementMm(k, m, depth, pondedH) : 0;
-        depth += ponded;
-        loss = before + ponded;
-        if (loss > p) loss = p;
+      } else {
+        loss = barLoss(k, m, km, depth, p, dt);
+        st.depth += loss;
       }
+      depth = st.depth;
     }
     if (lossOut !== null && excessOut !== null) {
       lossOut[j] = loss;
@@ -207,32 +386,35 @@ function runGreenAmpt(
     }
   }
   st.depth = depth;
-  st.dryH = dryH;
 }
 
 export const computeGreenAmpt: ComputeFn<'green-ampt'> = (durationsH, depthsMm, method, lossOut, excessOut) => {
-  const st: DepthState = { depth: 0, dryH: 0 };
-  runGreenAmpt(constants(method), st, durationsH, depthsMm, 0, depthsMm.length, lossOut, excessOut);
+  runGreenAmpt(constants(method), startState(), durationsH, depthsMm, 0, depthsMm.length, lossOut, excessOut);
 };
 
 /**
- * Green–Ampt capacity through the storm, f = K(1 + ψΔθ/F) at the depth F(t)
- * reached at each time, from the same bar loop as the losses (Green & Ampt
- * 1911). Infinite on dry soil (F = 0) when ψΔθ > 0.
+ * Green–Ampt capacity through the storm from the same bar loop as the
+ * losses: f = K(1 + ψΔθ/F) at the depth F(t) reached (Green & Ampt 1911);
+ * while a new front follows a dry spell, its own K(1 + M₂/F₂). Infinite on
+ * dry soil (F = 0) when ψΔθ > 0, and so also in a dry spell with recovery:
+ * the surface has dried below saturation and the next rain starts a new front.
  */
 export const greenAmptCapacity: CapacityFn<'green-ampt'> = (durationsH, depthsMm, method, timesH, out) => {
   const c = constants(method);
-  sampleCapacity<DepthState>(
+  sampleCapacity<GreenAmptState>(
     durationsH,
     depthsMm,
     timesH,
     out,
-    { depth: 0, dryH: 0 },
+    startState(),
     (st) => ({ ...st }),
     (st, d, p, from, to) => runGreenAmpt(c, st, d, p, from, to, null, null),
-    (st) => {
-      const depth = st.depth * (st.dryH > 0 ? Math.exp(-c.kr * st.dryH) : 1);
-      return c.m === 0 ? c.k : depth > 0 ? c.k * (1 + c.m / depth) : Infinity;
+    (state) => {
+      if (c.m === 0) return c.k;
+      const st = { ...state };
+      if (st.dryH > 0) endDrySpell(c, st);
+      if (st.sat < 1) return st.fresh > 0 ? c.k * (1 + st.freshM / st.fresh) : Infinity;
+      return st.depth > 0 ? c.k * (1 + c.m / st.depth) : Infinity;
     },
   );
 };
@@ -254,7 +436,8 @@ export const greenAmptSpec: MethodSpec<'green-ampt'> = {
   summary:
     'A wetting front moves down into the soil; capacity falls as the soil fills, and rain above it becomes excess.',
   source:
-    'Green & Ampt (1911); ponding time by Mein & Larson (1973); Chow, Maidment & Mays (1988) Applied Hydrology, sections 4.3–4.4.',
+    'Green & Ampt (1911); ponding time by Mein & Larson (1973); Chow, Maidment & Mays (1988) Applied Hydrology, sections 4.3–4.4; ' +
+    'recovery in dry spells: Ogden & Saghafian (1997), with the redistribution of Smith, Corradini & Melone (1993).',
   params: [
     {
       key: 'ksMmH',
@@ -287,34 +470,63 @@ export const greenAmptSpec: MethodSpec<'green-ampt'> = {
       step: 0.01,
       help: 'Soil water the soil can still take up, (1 − initial effective saturation) × effective porosity.',
     },
-    recoveryRateParam<'green-ampt'>(
-      'How fast the infiltrated depth that sets the capacity drains away while no rain falls: F falls by 63 % in 1/k_r hours. ' +
-        '0.05 /h (about 70 % gone in a day) is a rule of thumb, no source.',
-    ),
+    {
+      key: 'initialSaturation',
+      label: 'Initial saturation Sᵢ',
+      unit: '-',
+      min: 0,
+      // At 1 no deficit could remain (the porosity Δθ/(1 − Sᵢ) would be unbounded).
+      max: 0.99,
+      step: 0.01,
+      omitted: DEFAULT_INITIAL_SATURATION,
+      monotone: false,
+      activeWhen: (method) => method.recovers === true,
+      help:
+        'Effective saturation of the soil before the storm (0 as dry as it gets, up to 0.99), for the drainage in dry spells; ' +
+        'with Δθ it gives the effective porosity, Δθ/(1 − Sᵢ). "Use soil values" sets it together with Δθ.',
+    },
+    {
+      key: 'poreSizeIndex',
+      label: 'Pore-size distribution index λ',
+      unit: '-',
+      min: 0.01,
+      max: 10,
+      step: 0.01,
+      omitted: DEFAULT_PORE_SIZE_INDEX,
+      monotone: false,
+      activeWhen: (method) => method.recovers === true,
+      help:
+        'Brooks–Corey λ: how fast conductivity and suction change as the wetted zone drains (smaller in fine soils). ' +
+        '"Use soil values" sets the texture\'s value (Rawls, Brakensiek & Saxton 1982; from memory); 0.22 is loam\'s. ' +
+        'Runoff need not rise or fall steadily with λ (faster drainage, but less pull into the drained zone), so a fit of it may find one of two values.',
+    },
   ],
   choices: [
     recoverySwitch<'green-ampt'>(
-      'Off: a dry spell leaves the wetting front as the rain left it, so the next burst meets the same wet soil. ' +
-        'On: the infiltrated depth drains away in every bar with no rain, F = F_w·e^(−k_r t), so capacity climbs back towards that of dry soil ' +
-        '(a one-parameter stand-in for the redistribution modelled by Smith, Corradini & Melone 1993 and Ogden & Saghafian 1997; from memory).',
+      'Off: a dry spell leaves the wetted zone as the rain left it, so the next burst meets the same wet soil. ' +
+        'On: in bars with no rain the wetted zone keeps its water but drains deeper and drier (the redistribution equation of ' +
+        'Smith, Corradini & Melone 1993); the next rain starts a new wetting front at the surface, which takes water quickly ' +
+        'until it reaches the old one, and then one front goes on (Green–Ampt with redistribution, Ogden & Saghafian 1997; ' +
+        'from memory). How fast the soil recovers follows from K, ψ, Δθ, Sᵢ and λ: there is no rate to set.',
     ),
   ],
-  // Loam with initial effective saturation 0.3 (Rawls, Brakensiek & Miller 1983; see soils.ts).
+  // Loam with initial effective saturation 0.3 (Rawls, Brakensiek & Miller 1983; λ from
+  // Rawls, Brakensiek & Saxton 1982; see soils.ts).
   defaults: {
     kind: 'green-ampt',
     ksMmH: 3.4,
     suctionMm: 88.9,
     moistureDeficit: 0.3038,
     recovers: false,
-    recoveryPerH: 0.05,
+    initialSaturation: DEFAULT_INITIAL_SATURATION,
+    poreSizeIndex: DEFAULT_PORE_SIZE_INDEX,
   },
   dryBars: (method) => {
     if (method.recovers === true) {
-      const half = halfRecoveryText(method);
       return (
-        'A dry bar loses nothing, and the infiltrated depth drains away' +
-        (half ? ` (half of it ${half})` : '') +
-        ', so the next burst meets drier soil with a higher capacity.'
+        'A dry bar loses nothing; the wetted zone keeps its water but drains deeper and drier, so the next rain ' +
+        "starts a new wetting front that takes water at an unbounded rate at first, falling to the old front's " +
+        'capacity once it reaches it.'
       );
     }
     return 'A dry bar loses nothing and leaves the infiltrated depth, and so the capacity, where the rain left it.';

@@ -1,30 +1,24 @@
 import type { ChoiceParam, DrySpellRecovery, NumericParam } from './types';
 
 /**
- * Capacity recovery in dry spells, shared by Horton and Green–Ampt.
+ * Capacity recovery in dry spells. Both Horton and Green–Ampt turn it on with
+ * the same switch ("Capacity recovers in dry spells"); each has its own
+ * published model:
  *
- * While no rain falls the soil drains and dries, and the capacity it lost
- * while wetting grows back. Both methods use an exponential recovery at a
- * rate k_r (1/h) over each dry bar of length Δt:
- *
- * - Horton: the capacity regains its initial value f₀ as
+ * - Horton, at a recovery rate k_r (1/h) over each dry bar: the capacity
+ *   regains its initial value f₀ as
  *     f₀ − f(t) = (f₀ − f_w)·e^(−k_r (t − t_w))
  *   from the capacity f_w where the rain stopped at t_w (the regeneration of
  *   Horton capacity during drying given by Bedient, Huber & Vieux,
  *   Hydrology and Floodplain Analysis, chapter on infiltration; equation
  *   recalled from memory). When rain returns, the capacity falls again from
  *   the point of the decay curve where f equals the recovered value.
- * - Green–Ampt: the infiltrated depth that sets the capacity drains away as
- *     F(t) = F_w·e^(−k_r (t − t_w)),
- *   so f = K(1 + ψΔθ/F) climbs back towards the dry-soil value. This is a
- *   one-parameter stand-in for the redistribution of the wetted zone between
- *   bursts modelled in full by Smith, Corradini & Melone (1993, Water
- *   Resources Research 29(1)) and Ogden & Saghafian (1997, J. Irrig. Drain.
- *   Eng. 123(5)); the exponential form is the simplification chosen here, not
- *   their equations (both citations from memory).
- *
- * Splitting a dry bar into two multiplies two exponentials into one, so the
- * result does not depend on how a dry spell is cut.
+ *   Splitting a dry bar into two multiplies two exponentials into one, so the
+ *   result does not depend on how a dry spell is cut.
+ * - Green–Ampt, with no rate of its own: the wetted zone redistributes by the
+ *   equation of Smith, Corradini & Melone (1993) and the next rain starts a
+ *   new wetting front, as in the Green–Ampt infiltration with redistribution
+ *   of Ogden & Saghafian (1997); see green-ampt.ts and redistribution.ts.
  */
 
 /** The loss methods whose capacity can recover in dry spells. */
@@ -56,7 +50,7 @@ export function recoverySwitch<K extends RecoveringKind>(help: string): ChoicePa
   };
 }
 
-/** The recovery rate parameter, taking part only while the switch is on. */
+/** Horton's recovery rate parameter, taking part only while the switch is on. */
 export function recoveryRateParam<K extends RecoveringKind>(help: string): NumericParam<K> {
   return {
     key: 'recoveryPerH' as NumericParam<K>['key'],

@@ -17,8 +17,7 @@ export interface ProportionalLoss {
   readonly coefficient: number;
 }
 /**
- * Capacity recovery in dry spells, shared by the infiltration methods whose
- * capacity falls as the soil wets (Horton, Green–Ampt). Both fields may be
+ * Capacity recovery in dry spells at a rate (Horton). Both fields may be
  * left out by callers written before they existed: no recovery then.
  */
 export interface DrySpellRecovery {
@@ -39,12 +38,24 @@ export interface HortonLoss extends DrySpellRecovery {
   readonly kPerH: number;
   readonly ponding: boolean;
 }
-/** Green–Ampt: saturated conductivity, wetting-front suction head, moisture deficit Δθ. */
-export interface GreenAmptLoss extends DrySpellRecovery {
+/**
+ * Green–Ampt: saturated conductivity, wetting-front suction head, moisture
+ * deficit Δθ. With `recovers`, the wetted zone redistributes in dry spells
+ * (Ogden & Saghafian 1997), which needs the soil's initial effective
+ * saturation Sᵢ and Brooks–Corey λ; callers written before they existed may
+ * leave all three out (no recovery; loam's 0.3 and 0.22).
+ */
+export interface GreenAmptLoss {
   readonly kind: 'green-ampt';
   readonly ksMmH: number;
   readonly suctionMm: number;
   readonly moistureDeficit: number;
+  /** Capacity recovers during bars with no rain (off when absent). */
+  readonly recovers?: boolean;
+  /** Initial effective saturation Sᵢ, 0–1; read only while `recovers`. */
+  readonly initialSaturation?: number;
+  /** Brooks–Corey pore-size distribution index λ; read only while `recovers`. */
+  readonly poreSizeIndex?: number;
 }
 /**
  * How S on the λ = 0.2 basis converts to the λ = 0.05 basis: 'power',
@@ -110,6 +121,12 @@ export interface NumericParam<K extends LossKind = LossKind> {
   readonly searchMin?: (storm: Storm, method: MethodOf<K>) => number;
   readonly help: string;
   /**
+   * False when runoff need not be monotone in this parameter (a soil value
+   * whose effects pull both ways): calibration then scans the search interval
+   * for a stretch that holds the answer before solving. Absent: monotone.
+   */
+  readonly monotone?: false;
+  /**
    * The value the core uses when a method object leaves this parameter out
    * (it was added after callers were written). Absent: the parameter is required.
    */
@@ -168,6 +185,21 @@ export interface BarTotals {
   readonly peakExcessMmH: number;
 }
 
+/**
+ * A compute that checks each bar as it reads it, by storm.ts's isCleanBar (the
+ * rule validateStorm enforces), so the public computeLosses reads the storm
+ * once instead of twice. The method is already valid; the storm's lists are
+ * there and of equal length. Returns the totals, or null at the first bar that
+ * fails (the output arrays then hold a partial pass: the caller discards them).
+ */
+export type CheckedComputeFn<K extends LossKind> = (
+  durationsH: ArrayLike<number>,
+  depthsMm: ArrayLike<number>,
+  method: MethodOf<K>,
+  lossOut: Float64Array,
+  excessOut: Float64Array,
+) => BarTotals | null;
+
 /** Total excess of a clean storm, mm, with no per-bar output. */
 export type TotalExcessFn<K extends LossKind> = (
   durationsH: ArrayLike<number>,
@@ -188,6 +220,12 @@ export interface MethodSpec<K extends LossKind = LossKind> {
   /** What happens in a bar with no rain under these settings, in a plain sentence or two. */
   readonly dryBars: (method: MethodOf<K>) => string;
   readonly compute: ComputeFn<K>;
+  /**
+   * Optional: `compute` with the bar checks in the same loop (see
+   * CheckedComputeFn), for methods whose pass is cheap enough that a separate
+   * validation pass would cost as much as the computation.
+   */
+  readonly checkedCompute?: CheckedComputeFn<K>;
   /** Cross-parameter checks beyond each parameter's own range (throws InputError). */
   readonly validateExtra?: (method: MethodOf<K>) => void;
   /**

@@ -1,4 +1,5 @@
-import { scaleLinear, scaleUtc, type ScaleLinear } from 'd3-scale';
+import { scaleLinear, type ScaleLinear } from 'd3-scale';
+import { utcTicks } from 'd3-time';
 import { barEdgesH, peakIntensityMmH, totalDurationH, type Storm, type UnitSystem } from '../../core';
 import { formatValue } from '../format';
 import { displayUnit, fromDisplay, toDisplay, unitText } from '../units';
@@ -81,10 +82,14 @@ export function chartFrame(
   if (startMs !== null) {
     const fromMs = startMs + (x.domain()[0] as number) * 3.6e6;
     const endMs = startMs + (x.domain()[1] as number) * 3.6e6;
-    const clock = scaleUtc().domain([fromMs, endMs]).range([plot.left, plot.right]);
+    // Exactly what d3's UTC time scale does (domain rounded to whole milliseconds, its calendar-aware ticks), on a
+    // linear scale: the time scale would bring d3-time-format, unused here (the labels are our own), into the
+    // first screen's JavaScript.
+    const [clockFrom, clockEnd] = [Math.round(fromMs), Math.round(endMs)];
+    const clock = scaleLinear().domain([clockFrom, clockEnd]).range([plot.left, plot.right]);
     const multiDay = formatWallDate(fromMs) !== formatWallDate(endMs);
-    xTicks = clock.ticks(tickCount).map((t) => ({
-      px: clock(t),
+    xTicks = utcTicks(new Date(clockFrom), new Date(clockEnd), tickCount).map((t) => ({
+      px: clock(t.getTime()),
       label:
         multiDay && formatWallTime(t.getTime()) === '00:00' ? formatWallDate(t.getTime()) : formatWallTime(t.getTime()),
     }));

@@ -1,40 +1,17 @@
-import { methodSpec, type LossMethod } from '../../core';
 import { CAUTION_TEXT, scenarioFileName } from '../../scenario';
-import type { Scenario } from '../../scenario/types';
 import { useWorkbenchStore } from '../../store';
 import { useBarMessage } from '../services/bar-message';
 import { useServices } from '../services/services';
-import { barTableCsv, exportFileName, methodParametersText } from './bar-table-csv';
-import { svgToPng } from './chart-png';
-import { CAPACITY_CURVES } from '../chart/capacity';
-import { LINE_PARAM, LOSS_PARTS } from '../chart/line-params';
-import { standaloneSvg, type LegendEntry } from './chart-svg';
+import { loadReport } from './PrintReport';
 import { formatCount } from '../format';
 
 /** The workbench's live chart: the hyetograph's SVG (src/ui/chart/Hyetograph.tsx). */
-function liveChartSvg(doc: Document = document): SVGSVGElement | null {
+export function liveChartSvg(doc: Document = document): SVGSVGElement | null {
   return doc.querySelector<SVGSVGElement>('svg.chart__svg');
 }
 
-/** The line under an exported chart: scenario, method and parameters. */
-function chartHeading(scenario: Scenario, method: Scenario['method']): string {
-  return `${scenario.name} — ${methodSpec(method.kind).label}; ${methodParametersText(method, scenario.units)}`;
-}
-
-/** The chart's legend for a file: the layers the hyetograph draws (data-layer marks them), in the method's words. */
-function chartLegend(method: LossMethod): LegendEntry[] {
-  const lineKey = LINE_PARAM[method.kind];
-  const line = lineKey ? methodSpec(method.kind).params.find((p) => p.key === lineKey)?.label : undefined;
-  const part = LOSS_PARTS[method.kind]?.label;
-  const capacity = CAPACITY_CURVES[method.kind]?.label;
-  return [
-    { selector: '[data-layer="rain"]', label: 'Rainfall excess', kind: 'fill' },
-    { selector: '[data-layer="loss"]', label: 'Loss', kind: 'fill' },
-    ...(part ? [{ selector: '[data-layer="loss-part"]', label: part, kind: 'fill' as const }] : []),
-    ...(capacity ? [{ selector: '[data-layer="capacity"]', label: capacity, kind: 'line' as const }] : []),
-    ...(line ? [{ selector: '.loss-line__stroke', label: line, kind: 'line' as const }] : []),
-  ];
-}
+/** The code that writes the files, fetched on the first export (offline it comes from the stored app). */
+const exportFiles = () => import('./export-files');
 
 const why = (error: unknown): string => (error instanceof Error ? error.message : String(error));
 
@@ -53,7 +30,7 @@ export function ExportButtons() {
     return { scenario, results: store.derived.results(scenario), base: scenarioFileName(scenario) };
   };
 
-  const exportCsv = (): void => {
+  const exportCsv = async (): Promise<void> => {
     const { scenario, results, base } = current();
     if (!results.ok) {
       show({
@@ -63,36 +40,42 @@ export function ExportButtons() {
       });
       return;
     }
-    const text = barTableCsv({
+    let files: Awaited<ReturnType<typeof exportFiles>>;
+    try {
+      files = await exportFiles();
+    } catch (error) {
+      show({ tone: 'problem', title: `No table was exported: ${why(error)}.` });
+      return;
+    }
+    const text = files.barTableCsv({
       scenario,
       method: results.method,
       result: results.result,
       volumeM3: store.derived.runoffVolumeM3(scenario),
     });
-    const name = exportFileName(base, 'bars', 'csv');
+    const name = files.exportFileName(base, 'bars', 'csv');
     saveFile(new Blob([text], { type: 'text/csv;charset=utf-8' }), name);
     const n = scenario.storm.depthsMm.length;
     show({ tone: 'done', title: `Exported ${name}: ${formatCount(n)} bar${n === 1 ? '' : 's'} with loss and excess.` });
   };
 
-  const chart = () => {
+  const chart = async () => {
     const live = liveChartSvg();
     if (!live) throw new Error('the chart is not on screen');
     const { scenario, results, base } = current();
-    return {
-      svg: standaloneSvg(live, {
-        heading: chartHeading(scenario, results.method),
-        caution: CAUTION_TEXT,
-        legend: chartLegend(results.method),
-      }),
-      base,
-    };
+    const files = await exportFiles();
+    const svg = files.standaloneSvg(live, {
+      heading: files.chartHeading(scenario, results.method),
+      caution: CAUTION_TEXT,
+      legend: files.chartLegend(results.method),
+    });
+    return { svg, base, files };
   };
 
-  const exportSvg = (): void => {
+  const exportSvg = async (): Promise<void> => {
     try {
-      const { svg, base } = chart();
-      const name = exportFileName(base, 'chart', 'svg');
+      const { svg, base, files } = await chart();
+      const name = files.exportFileName(base, 'chart', 'svg');
       saveFile(new Blob([svg.text], { type: 'image/svg+xml' }), name);
       show({ tone: 'done', title: `Exported ${name}.` });
     } catch (error) {
@@ -102,9 +85,9 @@ export function ExportButtons() {
 
   const exportPng = async (): Promise<void> => {
     try {
-      const { svg, base } = chart();
-      const png = await svgToPng(svg.text, svg.width, svg.height, 2);
-      const name = exportFileName(base, 'chart', 'png');
+      const { svg, base, files } = await chart();
+      const png = await files.svgToPng(svg.text, svg.width, svg.height, 2);
+      const name = files.exportFileName(base, 'chart', 'png');
       saveFile(png, name);
       show({ tone: 'done', title: `Exported ${name} (${svg.width * 2} × ${svg.height * 2} pixels).` });
     } catch (error) {
@@ -115,18 +98,29 @@ export function ExportButtons() {
     }
   };
 
+  // The report's code arrives when the page is idle; a click before then waits for it.
+  const printReport = async (): Promise<void> => {
+    try {
+      await loadReport();
+    } catch (error) {
+      show({ tone: 'problem', title: `The report could not be prepared: ${why(error)}.` });
+      return;
+    }
+    print();
+  };
+
   return (
     <>
-      <button type="button" onClick={exportCsv} title="Bars with loss and excess, as CSV">
+      <button type="button" onClick={() => void exportCsv()} title="Bars with loss and excess, as CSV">
         Export CSV
       </button>
-      <button type="button" onClick={exportSvg}>
+      <button type="button" onClick={() => void exportSvg()}>
         Export SVG
       </button>
       <button type="button" onClick={() => void exportPng()}>
         Export PNG
       </button>
-      <button type="button" onClick={print} title="A one-page report of this scenario">
+      <button type="button" onClick={() => void printReport()} title="A one-page report of this scenario">
         Print report
       </button>
     </>

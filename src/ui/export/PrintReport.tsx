@@ -1,164 +1,56 @@
-import { useEffect, useMemo, useState } from 'react';
+import { useEffect, useState, type ComponentType } from 'react';
 import { flushSync } from 'react-dom';
-import { methodSpec, totalDurationH } from '../../core';
-import { CAUTION_TEXT } from '../../scenario';
-import { useDerived, useScenario } from '../../store';
-import { chartFrame } from '../chart/frame';
-import { LINE_PARAM } from '../chart/line-params';
-import { formatWallDate, formatWallTime, wallClockMs } from '../chart/clock';
-import { totalsOf } from '../results/totals';
-import { fittedCellText } from '../results/fit-words';
-import { formatCount, formatPercent, formatValue } from '../format';
-import { displayUnit, toDisplay, unitText, type Quantity } from '../units';
-import { useServices } from '../services/services';
-import { methodParametersText } from './bar-table-csv';
-import { StaticChart } from './StaticChart';
 
-const REPORT_CHART = { width: 720, height: 280 } as const;
+let body: ComponentType | null = null;
+let loading: Promise<ComponentType> | null = null;
 
-/** The report's body: inputs, chart, results and the caution, for the scenario on screen. */
-function ReportBody() {
-  const scenario = useScenario((s) => s);
-  const derived = useDerived((d) => d);
-  const { now } = useServices();
-  const { storm, units, catchment, observed } = scenario;
-  const method = derived.effectiveMethod(scenario);
-  const results = derived.results(scenario);
-  const totals = totalsOf(scenario, derived);
-  const frame = useMemo(() => chartFrame(storm, REPORT_CHART.width, REPORT_CHART.height, units), [storm, units]);
-
-  const show = (q: Quantity, si: number | null): string =>
-    si === null ? '—' : `${formatValue(toDisplay(q, si, units))} ${unitText(displayUnit(q, units))}`;
-  const n = storm.depthsMm.length;
-  const startMs = storm.startIso === undefined ? null : wallClockMs(storm.startIso);
-  const lineKey = LINE_PARAM[method.kind];
-  const lineValue = lineKey ? (method as unknown as Record<string, unknown>)[lineKey] : undefined;
-  const spec = methodSpec(method.kind);
-  const observedParam = spec.params.find((p) => p.key === observed?.parameter);
-  const observedText =
-    observed === null
-      ? 'None'
-      : derived.observedFromSeparation(scenario)
-        ? 'Direct runoff separated from the streamflow record'
-        : observed.as === 'depth'
-          ? show('depth', observed.value)
-          : show('volume', observed.value);
-  const printed = now();
-
-  return (
-    <>
-      <header className="report__head">
-        <p className="report__kind">Raincut scenario report</p>
-        <h2 className="report__title">{scenario.name}</h2>
-        <p className="report__date">
-          Printed {printed.toLocaleString(undefined, { dateStyle: 'medium', timeStyle: 'short' })}
-        </p>
-      </header>
-      <p className="report__caution" role="note">
-        <strong>Caution.</strong> {CAUTION_TEXT}
-      </p>
-
-      <section className="report__inputs" aria-label="Inputs">
-        <h3>Inputs</h3>
-        <dl>
-          <dt>Storm</dt>
-          <dd>
-            {formatCount(n)} bar{n === 1 ? '' : 's'}, {show('depth', totals.rainMm)} in{' '}
-            {formatValue(totalDurationH(storm))} h
-            {startMs === null ? '' : `, from ${formatWallDate(startMs)} ${formatWallTime(startMs)}`}
-          </dd>
-          <dt>Catchment</dt>
-          <dd>
-            {catchment.name === '' ? 'Unnamed' : catchment.name},{' '}
-            {catchment.areaM2 > 0 ? show('area', catchment.areaM2) : 'area not given'}
-          </dd>
-          <dt>Loss method</dt>
-          <dd>
-            {spec.label}: {methodParametersText(method, units)}
-          </dd>
-          <dt>Observed runoff</dt>
-          <dd>
-            {observedText}
-            {observed !== null && observedParam
-              ? `; fitting ${observedParam.label}${observed.locked ? ', kept matched' : ''}`
-              : ''}
-          </dd>
-          {scenario.notes.trim() !== '' ? (
-            <>
-              <dt>Notes</dt>
-              <dd className="report__notes">{scenario.notes}</dd>
-            </>
-          ) : null}
-        </dl>
-      </section>
-
-      <figure className="report__chart">
-        <StaticChart
-          frame={frame}
-          storm={storm}
-          lossMm={results.ok ? results.result.lossMm : null}
-          lineMmH={typeof lineValue === 'number' ? lineValue : null}
-          label={`Hyetograph of ${scenario.name}: rainfall excess over loss for each bar`}
-        />
-        <figcaption>
-          Hyetograph: rainfall excess (dark) above loss (light) in each bar
-          {typeof lineValue === 'number' ? '; the line is the loss rate' : ''}.
-        </figcaption>
-      </figure>
-
-      <section className="report__results" aria-label="Results">
-        <h3>Results</h3>
-        {totals.error ? <p>Losses cannot be worked out: {totals.error}</p> : null}
-        <table>
-          <tbody>
-            <tr>
-              <th scope="row">Rainfall depth</th>
-              <td>{show('depth', totals.rainMm)}</td>
-            </tr>
-            <tr>
-              <th scope="row">Loss depth</th>
-              <td>{show('depth', totals.lossMm)}</td>
-            </tr>
-            <tr>
-              <th scope="row">Rainfall excess depth</th>
-              <td>{show('depth', totals.excessMm)}</td>
-            </tr>
-            <tr>
-              <th scope="row">Runoff volume</th>
-              <td>{totals.volumeM3 === null ? '— (needs the catchment area)' : show('volume', totals.volumeM3)}</td>
-            </tr>
-            <tr>
-              <th scope="row">Runoff fraction</th>
-              <td>{totals.fraction === null ? '—' : formatPercent(totals.fraction)}</td>
-            </tr>
-            <tr>
-              <th scope="row">Peak excess intensity</th>
-              <td>{show('rate', totals.peakExcessMmH)}</td>
-            </tr>
-            <tr>
-              <th scope="row">Fitted parameter</th>
-              <td>{fittedCellText(totals, units)}</td>
-            </tr>
-          </tbody>
-        </table>
-      </section>
-      <p className="report__foot">
-        Losses and excess computed by Raincut’s core; method source: {spec.source.replace(/\.$/, '')}. The per-bar table
-        is in the CSV export.
-      </p>
-    </>
+/**
+ * Fetches the report's code once (it is not part of the first screen). The
+ * page asks for it when idle, so the browser's own print command finds it
+ * ready; "Print report" waits for it. A failed fetch may be tried again.
+ */
+export function loadReport(): Promise<ComponentType> {
+  loading ??= import('./ReportBody').then(
+    (m) => (body = m.ReportBody),
+    (error: unknown) => {
+      loading = null;
+      throw error;
+    },
   );
+  return loading;
+}
+
+/** Runs `task` when the browser is idle (or soon, where it cannot say); returns a cancel. */
+function whenIdle(task: () => void): () => void {
+  if (typeof window.requestIdleCallback === 'function') {
+    const id = window.requestIdleCallback(task, { timeout: 5000 });
+    return () => window.cancelIdleCallback(id);
+  }
+  const id = window.setTimeout(task, 1000);
+  return () => window.clearTimeout(id);
 }
 
 /**
  * The one-page printable report. It is built only while printing (from the
  * "Print report" button, the browser's own print command, or print
- * emulation), so editing on screen never pays for it.
+ * emulation), so editing on screen never pays for it. Printing before its
+ * code has arrived prints the screen as it is.
  */
 export function PrintReport() {
   const [printing, setPrinting] = useState(false);
+  // Re-render once the code has arrived (the report may be showing by then).
+  const [, setArrivals] = useState(0);
   useEffect(() => {
-    const on = (): void => flushSync(() => setPrinting(true));
+    const fetchBody = (): void =>
+      void loadReport().then(
+        () => setArrivals((n) => n + 1),
+        () => {},
+      );
+    const cancel = whenIdle(fetchBody);
+    const on = (): void => {
+      if (!body) fetchBody();
+      flushSync(() => setPrinting(true));
+    };
     const off = (): void => setPrinting(false);
     window.addEventListener('beforeprint', on);
     window.addEventListener('afterprint', off);
@@ -167,15 +59,17 @@ export function PrintReport() {
     media?.addEventListener?.('change', follow);
     if (media?.matches) setPrinting(true);
     return () => {
+      cancel();
       window.removeEventListener('beforeprint', on);
       window.removeEventListener('afterprint', off);
       media?.removeEventListener?.('change', follow);
     };
   }, []);
-  if (!printing) return null;
+  const Body = body;
+  if (!printing || !Body) return null;
   return (
     <article className="report" aria-label="Printable report">
-      <ReportBody />
+      <Body />
     </article>
   );
 }

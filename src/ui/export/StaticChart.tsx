@@ -3,6 +3,8 @@ import { Axes } from '../chart/Axes';
 import type { ChartFrame } from '../chart/frame';
 import { LossLayer } from '../chart/LossLayer';
 import { RainLayer } from '../chart/RainLayer';
+// Its styles, and the report's print styles, come with the code that draws it (the comparison, the report).
+import './export.css';
 
 export interface StaticChartProps {
   readonly frame: ChartFrame;

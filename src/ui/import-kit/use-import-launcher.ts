@@ -16,13 +16,15 @@ export interface ImportLauncher<S> {
 }
 
 export interface ImportLauncherOptions<S> {
-  /** The draft every paste opens on. */
-  readonly empty: ImportDraft<Partial<S>>;
+  /** The draft every paste opens on (default: no text, no corrections). */
+  readonly empty?: ImportDraft<Partial<S>>;
   /** Names the record in file messages ("the rainfall"). */
   readonly fileWhat: string;
   /** Runs each time the dialog opens. */
   readonly beforeOpen?: () => void;
 }
+
+const BLANK = { text: '', fileName: null, corrections: {} } as const;
 
 /**
  * The buttons that lead to an import dialog ("Paste …", "Open … file…") and
@@ -30,7 +32,12 @@ export interface ImportLauncherOptions<S> {
  * the next opening is empty, so text and corrections of an abandoned paste
  * are never applied to the next one by surprise.
  */
-export function useImportLauncher<S>({ empty, fileWhat, beforeOpen }: ImportLauncherOptions<S>): ImportLauncher<S> {
+
+export function useImportLauncher<S>({
+  empty = BLANK,
+  fileWhat,
+  beforeOpen,
+}: ImportLauncherOptions<S>): ImportLauncher<S> {
   const [dialog, setDialog] = useState<ImportDraft<Partial<S>> | null>(null);
 
   const file = useTextFile(fileWhat, (text, name) => openWith({ text, fileName: name, corrections: {} }));

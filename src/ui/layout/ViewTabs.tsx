@@ -1,4 +1,5 @@
 import { useRef, useState, type KeyboardEvent, type ReactNode } from 'react';
+import './view-tabs.css';
 
 export interface View {
   readonly id: string;
@@ -8,11 +9,18 @@ export interface View {
 
 /**
  * The page's views as an accessible tab list (arrow keys, Home and End move
- * between tabs). Hidden views stay mounted, so what was typed in one is
- * still there on coming back. The first view is shown at first.
+ * between tabs). A view is mounted when it is first opened (so a view whose
+ * code loads lazily is fetched only then) and stays mounted while hidden,
+ * so what was typed in one is still there on coming back. The first view is
+ * shown at first.
  */
 export function ViewTabs({ views }: { views: readonly View[] }) {
-  const [current, setCurrent] = useState(views[0]?.id ?? '');
+  const [current, setShown] = useState(views[0]?.id ?? '');
+  const [opened, setOpened] = useState<ReadonlySet<string>>(() => new Set([current]));
+  const setCurrent = (id: string): void => {
+    setShown(id);
+    setOpened((was) => (was.has(id) ? was : new Set(was).add(id)));
+  };
   const tabs = useRef<(HTMLButtonElement | null)[]>([]);
   const move = (e: KeyboardEvent, k: number): void => {
     const n = views.length;
@@ -70,7 +78,7 @@ export function ViewTabs({ views }: { views: readonly View[] }) {
             hidden={current !== view.id}
             className="view-tabs__panel"
           >
-            {view.content}
+            {opened.has(view.id) ? view.content : null}
           </div>
         ))}
       </main>

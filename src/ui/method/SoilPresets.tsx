@@ -1,6 +1,6 @@
 import { useState } from 'react';
 import { SOIL_TEXTURES, greenAmptForTexture, isInputError, type SoilTextureName } from '../../core';
-import { useActions } from '../../store';
+import { useActions, useScenario } from '../../store';
 import { NumberField } from '../fields/NumberField';
 
 const DEFAULT_TEXTURE: SoilTextureName = 'loam';
@@ -8,10 +8,12 @@ const DEFAULT_TEXTURE: SoilTextureName = 'loam';
 /**
  * Green–Ampt values from a soil texture (the core's table of Rawls,
  * Brakensiek & Miller 1983) and the soil's initial effective saturation:
- * one click sets K, ψ and Δθ together, as one undoable edit.
+ * one click sets K, ψ and Δθ together, with Sᵢ and λ for recovery in dry
+ * spells, as one undoable edit. The recovery switch stays as it was.
  */
 export function SoilPresets() {
   const actions = useActions();
+  const recovers = useScenario((s) => (s.method.kind === 'green-ampt' ? s.method.recovers : undefined));
   const [texture, setTexture] = useState<SoilTextureName>(DEFAULT_TEXTURE);
   const [saturation, setSaturation] = useState(0.3);
   const [problem, setProblem] = useState<string | null>(null);
@@ -49,7 +51,8 @@ export function SoilPresets() {
         type="button"
         onClick={() => {
           try {
-            actions.setMethod(greenAmptForTexture(texture, saturation), `Use ${texture} soil values`);
+            const soil = greenAmptForTexture(texture, saturation);
+            actions.setMethod(recovers === undefined ? soil : { ...soil, recovers }, `Use ${texture} soil values`);
             setProblem(null);
           } catch (error) {
             if (!isInputError(error)) throw error;

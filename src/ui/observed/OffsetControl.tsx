@@ -44,6 +44,7 @@ export function OffsetControl() {
         value={stored}
         toDisplay={(h) => h * PER_HOUR[unit]}
         fromDisplay={(v) => v / PER_HOUR[unit]}
+        shownUnit={unit}
         plausible="offset"
         onCommit={(h, edit) => actions.edit('Line up the record', (s) => withRecordOffsetH(s, h), edit)}
         history={actions}

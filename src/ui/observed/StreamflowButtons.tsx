@@ -1,7 +1,14 @@
 import type { FlowImportSettings } from '../../io';
 import { useActions, useScenario, useWorkbenchStore, withoutStreamflow } from '../../store';
-import { OpenFileButton, useImportLauncher } from '../import-kit';
-import { EMPTY_FLOW_DRAFT, FlowPasteDialog } from './paste/FlowPasteDialog';
+// Straight from the modules, not the import kit's index, so the dialogs' code stays out of the first screen.
+import { OpenFileButton } from '../import-kit/OpenFileButton';
+import { useImportLauncher } from '../import-kit/use-import-launcher';
+import { lazyPart } from '../layout/LazyPart';
+
+// The dialog and the text import behind it load when first opened (they are not part of the first screen).
+const FlowPasteDialog = lazyPart('paste dialog', () =>
+  import('./paste/FlowPasteDialog').then((m) => m.FlowPasteDialog),
+);
 
 /**
  * The buttons in the hydrograph's head: paste or open a streamflow record
@@ -11,7 +18,7 @@ export function StreamflowButtons() {
   const store = useWorkbenchStore();
   const actions = useActions();
   const hasRecord = useScenario((s) => s.streamflow !== null);
-  const paste = useImportLauncher<FlowImportSettings>({ empty: EMPTY_FLOW_DRAFT, fileWhat: 'the streamflow record' });
+  const paste = useImportLauncher<FlowImportSettings>({ fileWhat: 'the streamflow record' });
 
   const remove = (): void => {
     const s = store.getState().scenario;

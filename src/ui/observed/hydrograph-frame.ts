@@ -5,6 +5,9 @@ import type { TimeSpanH } from '../chart/time-span';
 import { formatValue } from '../format';
 import { dischargeFromDisplay, dischargeToDisplay, dischargeUnitText } from './discharge';
 
+/** Height of the hydrograph chart, px. */
+export const HYDROGRAPH_HEIGHT = 280;
+
 /**
  * Scales and ticks of the hydrograph. The time axis is the hyetograph's own
  * (chartFrame over the same span and width), so the two charts line up to

@@ -4,4 +4,5 @@
 import './observed.css';
 
 export { HydrographChart, HYDROGRAPH_HEIGHT } from './HydrographChart';
-export { SeparationPanel } from './SeparationPanel';
+// SeparationPanel is not exported here: App.tsx loads it once there is a streamflow record.
+// The paste dialog (paste/FlowPasteDialog.tsx) is not exported here: StreamflowButtons loads it when first opened.

@@ -37,10 +37,9 @@ export function browserServices(overrides: Partial<ScenarioServices> = {}): Scen
   return {
     storage: browserStorage(),
     link: null,
-    pageAddress: () => {
-      const { origin, pathname, search } = window.location;
-      return `${origin}${pathname}${search}`;
-    },
+    // The address as it is, less its fragment: for a page opened from a file (the single-file build) the
+    // origin is "null", so origin + path would not be an address at all.
+    pageAddress: () => window.location.href.replace(/#.*$/, ''),
     clipboard: typeof navigator !== 'undefined' && navigator.clipboard ? navigator.clipboard : null,
     saveFile: downloadBlob,
     print: () => window.print(),

@@ -17,6 +17,10 @@ export function linkLengthText(chars: number): string {
     : base;
 }
 
+/** Said with a link made in a page opened from a file (the single-file build): the link names that file's place. */
+export const FILE_PAGE_NOTE =
+  'This page was opened from a file, so the link opens the scenario only where that file is at the same place (on this computer, for instance). To send the scenario to a colleague, use Save as file.';
+
 /** The words of a refusal (a DOMException is not an Error in every realm). */
 function reason(error: unknown): string {
   const message = typeof error === 'object' && error !== null && 'message' in error ? String(error.message) : '';
@@ -83,7 +87,12 @@ export function CopyLink() {
       });
       return;
     }
-    const length = <p>{linkLengthText(url.length)}</p>;
+    const length = (
+      <>
+        <p>{linkLengthText(url.length)}</p>
+        {url.startsWith('file:') ? <p>{FILE_PAGE_NOTE}</p> : null}
+      </>
+    );
     let refused: string | null = null;
     if (!clipboard) refused = 'this browser gives the page no clipboard';
     else {

@@ -5,10 +5,9 @@ import { useActions, useWorkbenchStore } from '../../store';
 import { listSetAside, type SetAsideCopy } from '../../store/set-aside';
 import { ListProblems } from './ListProblems';
 import { SetAsideCopies } from './SetAsideCopies';
+import { LIBRARY_PANEL_ID } from './ScenarioBar';
 import { useServices } from '../services/services';
 import { formatCount } from '../format';
-
-export const LIBRARY_PANEL_ID = 'saved-scenarios';
 
 const savedAtFormat = new Intl.DateTimeFormat(undefined, { dateStyle: 'medium', timeStyle: 'short' });
 const quoted = (name: string): string => `“${name}”`;

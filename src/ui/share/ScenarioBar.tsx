@@ -3,8 +3,14 @@ import { PinButton } from '../compare/PinButton';
 import { ExportButtons } from '../export/ExportButtons';
 import { BarMessageProvider, BarMessageView, type BarMessage } from '../services/bar-message';
 import { CopyLink } from './CopyLink';
-import { LIBRARY_PANEL_ID, LibraryPanel } from './LibraryPanel';
+import { lazyPart } from '../layout/LazyPart';
 import { ScenarioFile } from './ScenarioFile';
+
+/** The saved list's region, which the "Saved scenarios" button opens. */
+export const LIBRARY_PANEL_ID = 'saved-scenarios';
+
+// The saved list loads when first opened (it is not part of the first screen).
+const LibraryPanel = lazyPart('saved scenarios', () => import('./LibraryPanel').then((m) => m.LibraryPanel));
 
 function Group({ id, label, children }: { id: string; label: string; children: ReactNode }) {
   return (

@@ -1,7 +1,9 @@
 import type { ReactNode } from 'react';
 import { MAX_FILE_CHARS, scenarioFileName, scenarioFromFileText, scenarioToFileText } from '../../scenario';
 import { useActions, useWorkbenchStore } from '../../store';
-import { OpenFileButton, readAsText } from '../import-kit';
+// Straight from the modules, not the import kit's index, so the import dialogs' code stays out of the first screen.
+import { OpenFileButton } from '../import-kit/OpenFileButton';
+import { readAsText } from '../import-kit/read-file';
 import { ProblemList, useBarMessage } from '../services/bar-message';
 import { useServices } from '../services/services';
 import { formatValue } from '../format';

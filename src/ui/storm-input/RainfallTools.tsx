@@ -1,7 +1,12 @@
 import type { RainImportSettings } from '../../io';
-import { OpenFileButton, useImportLauncher } from '../import-kit';
+// Straight from the modules, not the import kit's index, so the dialogs' code stays out of the first screen.
+import { OpenFileButton } from '../import-kit/OpenFileButton';
+import { useImportLauncher } from '../import-kit/use-import-launcher';
 import { DRAW_PANEL_ID, STORM_TOOLS_ID, useStormInput } from './context';
-import { EMPTY_DRAFT, PasteDialog } from './paste/PasteDialog';
+import { lazyPart } from '../layout/LazyPart';
+
+// The dialog and the text import behind it load when first opened (they are not part of the first screen).
+const PasteDialog = lazyPart('paste dialog', () => import('./paste/PasteDialog').then((m) => m.PasteDialog));
 
 /**
  * The buttons in the Rainfall region: paste or open rainfall (into the
@@ -10,7 +15,6 @@ import { EMPTY_DRAFT, PasteDialog } from './paste/PasteDialog';
 export function RainfallTools() {
   const { drawing, setDrawing, toolsOpen, setToolsOpen } = useStormInput();
   const paste = useImportLauncher<RainImportSettings>({
-    empty: EMPTY_DRAFT,
     fileWhat: 'the rainfall',
     beforeOpen: () => setDrawing(false),
   });

@@ -1,5 +1,8 @@
 import { useStormInput } from './context';
-import { StormTools } from './tools/StormTools';
+import { lazyPart } from '../layout/LazyPart';
+
+// The tools load when first opened (they are not part of the first screen).
+const StormTools = lazyPart('storm tools', () => import('./tools/StormTools').then((m) => m.StormTools));
 
 /** The storm tools, between the Rainfall region and the chart, while the "Storm tools" button is pressed. */
 export function StormPanels() {

@@ -1,4 +1,5 @@
-import { isoAt, parseClock } from '../../io';
+// Straight from the module, not the io index, so the first screen does not pull in the whole text import.
+import { isoAt, parseClock } from '../../io/time-values';
 import { NO_CLOCK_TEXT, formatClockText, wallClockMs } from '../chart/clock';
 
 /**

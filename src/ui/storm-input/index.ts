@@ -6,4 +6,4 @@ export { StormInputProvider } from './context';
 export { RainfallTools } from './RainfallTools';
 export { StormPanels } from './StormPanels';
 export { DrawableChart } from './draw/DrawableChart';
-export { BarTable } from './table/BarTable';
+// BarTable (table/BarTable.tsx) is not exported here: App.tsx loads it just after the first screen.

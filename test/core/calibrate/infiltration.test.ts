@@ -25,7 +25,35 @@ interface Case {
   readonly low: number;
   readonly high: number;
   readonly log?: boolean;
+  /**
+   * False where runoff is not monotone in the parameter, so two values can give
+   * the same runoff and the fit need not return the one drawn (it must still
+   * reproduce the runoff).
+   */
+  readonly unique?: false;
+  /** Storms to fit on (random storms of up to 30 bars when absent). */
+  readonly storms?: fc.Arbitrary<{ durationsH: number[]; depthsMm: number[] }>;
 }
+
+/**
+ * Two bursts of substance with a spell of an hour to two days between: the
+ * storms on which the Green–Ampt soil values for recovery (Sᵢ, λ) act. On
+ * random storms their effect can be a trace (a drop, then a minute dry) and
+ * runoff need not be monotone in λ there, so a fit may answer that no value
+ * in the bounds gives the target.
+ */
+const twoBurstArb = fc
+  .record({
+    first: fc.double({ min: 5, max: 60, noNaN: true }),
+    firstH: fc.double({ min: 0.25, max: 3, noNaN: true }),
+    gapH: fc.double({ min: 1, max: 48, noNaN: true }),
+    second: fc.double({ min: 5, max: 60, noNaN: true }),
+    secondH: fc.double({ min: 0.25, max: 3, noNaN: true }),
+  })
+  .map(({ first, firstH, gapH, second, secondH }) => ({
+    durationsH: [firstH, gapH, secondH],
+    depthsMm: [first, 0, second],
+  }));
 
 const hortonBase = (ponding: boolean): LossMethod => ({ kind: 'horton', f0MmH: 75, fcMmH: 10, kPerH: 4, ponding });
 const greenAmptBase: LossMethod = { kind: 'green-ampt', ksMmH: 3.4, suctionMm: 88.9, moistureDeficit: 0.3 };
@@ -52,27 +80,33 @@ const CASES: readonly Case[] = [
   { name: 'Green–Ampt K', method: greenAmptBase, key: 'ksMmH', low: 0.05, high: 60 },
   {
     name: 'Green–Ampt K with recovery',
-    method: { ...greenAmptBase, recovers: true, recoveryPerH: 0.3 } as LossMethod,
+    method: { ...greenAmptBase, recovers: true, initialSaturation: 0.3, poreSizeIndex: 0.22 },
     key: 'ksMmH',
     low: 0.05,
     high: 60,
   },
   {
-    // A sandy loam (Rawls, Brakensiek & Miller 1983: K 10.9 mm/h, ψ 110.1 mm, θe 0.412):
-    // on the clay-loam-like base the capacity after a burst is near K whatever k_r, so
-    // the runoff barely answers to it.
-    name: 'Green–Ampt k_r',
-    method: {
-      kind: 'green-ampt',
-      ksMmH: 10.9,
-      suctionMm: 110.1,
-      moistureDeficit: 0.4,
-      recovers: true,
-      recoveryPerH: 0.3,
-    } as LossMethod,
-    key: 'recoveryPerH',
-    low: 0.01,
-    high: 20,
+    name: 'Green–Ampt Sᵢ (recovery)',
+    method: { ...greenAmptBase, recovers: true, initialSaturation: 0.3, poreSizeIndex: 0.22 },
+    key: 'initialSaturation',
+    low: 0,
+    high: 0.99,
+    storms: twoBurstArb,
+    // 5 mm, an hour dry, 5 mm (loam): runoff falls from 0.83 mm at Sᵢ = 0 to 0.324 mm near
+    // Sᵢ = 0.95 and rises to 0.39 mm at 0.99 (a wetter start, but a larger porosity Δθ/(1 − Sᵢ)).
+    unique: false,
+  },
+  {
+    name: 'Green–Ampt λ (recovery)',
+    method: { ...greenAmptBase, recovers: true, initialSaturation: 0.3, poreSizeIndex: 0.22 },
+    key: 'poreSizeIndex',
+    // The soils of Rawls, Brakensiek & Saxton (1982) lie within 0.1–0.7 (from memory).
+    low: 0.05,
+    high: 2,
+    storms: twoBurstArb,
+    // 5 mm, an hour dry, 5 mm (loam): runoff falls from 0.92 mm at λ = 0.01 to 0.65 mm at
+    // λ = 1 and rises to 0.73 mm at λ = 10 (faster drainage, but less pull into the drained zone).
+    unique: false,
   },
   { name: 'Green–Ampt ψ', method: greenAmptBase, key: 'suctionMm', low: 0, high: 400 },
   { name: 'Green–Ampt Δθ', method: greenAmptBase, key: 'moistureDeficit', low: 0, high: 1 },
@@ -165,8 +199,10 @@ describe('calibration of every infiltration parameter', () => {
       let trueValueBack = 0;
       fc.assert(
         fc.property(
-          c.key === 'recoveryPerH'
-            ? recoveryDraws(c.low, c.high)
+          c.storms
+            ? fc.tuple(c.storms, linearIn(c.low, c.high))
+            : c.key === 'recoveryPerH'
+              ? recoveryDraws(c.low, c.high)
             : fc.tuple(
                 fc.oneof(pondingStormArb, stormArb(30)),
                 c.log ? linearIn(Math.log(c.low), Math.log(c.high)).map(Math.exp) : linearIn(c.low, c.high),
@@ -178,6 +214,17 @@ describe('calibration of every infiltration parameter', () => {
             const target = excessOf(storm, truthMethod);
             const rain = computeLosses(storm, c.method).rainMm;
             const r = calibrate(storm, c.method, c.key, target);
+            if (!r.ok && c.unique === false) {
+              // Runoff not monotone in the parameter: the scan of 49 values (and the search for a
+              // dip or peak beside the closest) can miss a narrow bump, as where recovery first
+              // takes hold on a fine soil (λ near 0.1: a rise of 3e-4 mm in 0.005 of λ). Then the
+              // answer says so and names the closest value tried, with the runoff it really gives.
+              expect(r.reason).toBe('bound-reached');
+              expect(r.message).toMatch(/was found to give .* of 49 values tried across the range/);
+              expect(r.boundExcessMm).toBe(excessOf(storm, withValue(c.method, c.key, r.boundValue as number)));
+              checked++;
+              return;
+            }
             expect(r.ok).toBe(true);
             if (!r.ok) return;
             const nudged = (value: number, factor: number): number | undefined => {
@@ -202,7 +249,7 @@ describe('calibration of every infiltration parameter', () => {
             const moves = (e: number | undefined): boolean =>
               e !== undefined && Math.abs(e - target) > 1e-7 * Math.max(target, 1e-3);
             checked++;
-            if (truth > 0 && moves(up) && moves(down)) {
+            if (c.unique !== false && truth > 0 && moves(up) && moves(down)) {
               expect(Math.abs(r.value - truth)).toBeLessThanOrEqual(1e-9 * truth);
               trueValueBack++;
             }
@@ -213,7 +260,8 @@ describe('calibration of every infiltration parameter', () => {
       // Every draw reaches the fit check, and enough reach the true-value check
       // (measured: 26 to 95 of 200 over four seeds, the fewest for Horton k).
       expect(checked).toBeGreaterThanOrEqual(190);
-      expect(trueValueBack).toBeGreaterThanOrEqual(15);
+      // Where runoff is not monotone in the parameter, two values can give the target.
+      expect(trueValueBack).toBeGreaterThanOrEqual(c.unique === false ? 0 : 15);
     },
   );
 

@@ -245,30 +245,3 @@ describe('Green–Ampt input checks', () => {
     expectInputError(() => validateMethod(method as never), field, message);
   });
 });
-
-describe('Green–Ampt with recovery in dry spells (F drains as F·e^(−k_r t): our one-parameter stand-in for the redistribution of Smith, Corradini & Melone 1993; from memory)', () => {
-  const soil = { kind: 'green-ampt', ksMmH: 3.4, suctionMm: 88.9, moistureDeficit: 0.3 } as const;
-
-  it('meets the next burst with F = F_w·e^(−k_r t): the same loss as a soil that soaked in exactly that depth', () => {
-    // Burst 1 ponds and infiltrates F_w; 3 dry hours at k_r = 0.2 /h leave F_w·e^(−0.6).
-    // The same F reached by rain at 2 mm/h (below K: all soaks in, no ponding) must
-    // then lose the same in a 30 mm/h bar.
-    const m = { ...soil, recovers: true, recoveryPerH: 0.2 };
-    const r = computeLosses({ durationsH: [1, 3, 0.5], depthsMm: [40, 0, 15] }, m);
-    const fw = r.lossMm[0] as number;
-    const f2 = fw * Math.exp(-0.6);
-    const refilled = computeLosses({ durationsH: [f2 / 2, 0.5], depthsMm: [f2, 15] }, soil);
-    expectClose(r.lossMm[2] as number, refilled.lossMm[1] as number, 1e-12);
-  });
-
-  it('leaves F as it is in dry bars with the option off', () => {
-    const plain = computeLosses({ durationsH: [1, 3, 0.5], depthsMm: [40, 0, 15] }, soil);
-    const joined = computeLosses({ durationsH: [1, 0.5], depthsMm: [40, 15] }, soil);
-    expect(plain.lossMm[2]).toBe(joined.lossMm[1]);
-    const off = computeLosses(
-      { durationsH: [1, 3, 0.5], depthsMm: [40, 0, 15] },
-      { ...soil, recovers: false, recoveryPerH: 5 },
-    );
-    expect(Array.from(off.lossMm)).toEqual(Array.from(plain.lossMm));
-  });
-});

@@ -33,14 +33,17 @@ const hortonArb = (ponding: boolean): fc.Arbitrary<LossMethod> =>
       ...recovery,
     }));
 
-const greenAmptArb: fc.Arbitrary<LossMethod> = fc
-  .record({
-    ksMmH: fc.double({ min: 1e-3, max: 150, noNaN: true }),
-    suctionMm: fc.oneof(fc.constant(0), fc.double({ min: 0, max: 400, noNaN: true })),
-    moistureDeficit: fc.oneof(fc.constant(0), fc.double({ min: 0, max: 1, noNaN: true })),
-    recovery: recoveryArb,
-  })
-  .map(({ recovery, ...rest }) => ({ kind: 'green-ampt', ...rest, ...recovery }));
+// Green–Ampt recovery has no rate: the soil's Sᵢ and λ set the redistribution,
+// drawn over their whole allowed ranges.
+const greenAmptArb: fc.Arbitrary<LossMethod> = fc.record({
+  kind: fc.constant('green-ampt' as const),
+  ksMmH: fc.double({ min: 1e-3, max: 150, noNaN: true }),
+  suctionMm: fc.oneof(fc.constant(0), fc.double({ min: 0, max: 400, noNaN: true })),
+  moistureDeficit: fc.oneof(fc.constant(0), fc.double({ min: 0, max: 1, noNaN: true })),
+  recovers: fc.boolean(),
+  initialSaturation: fc.oneof(fc.constantFrom(0, 0.99), fc.double({ min: 0, max: 0.99, noNaN: true })),
+  poreSizeIndex: fc.oneof(fc.constantFrom(0.01, 10), fc.double({ min: 0.01, max: 10, noNaN: true })),
+});
 
 const curveNumberArb: fc.Arbitrary<LossMethod> = fc.record({
   kind: fc.constant('curve-number' as const),

@@ -6,6 +6,7 @@ import type { Scenario } from '../../../src/scenario/types';
 import { PINS_KEY } from '../../../src/ui/services';
 import { formatPercent, formatValue } from '../../../src/ui/format';
 import { FOUR_BARS, memoryStorage } from '../store/fixtures';
+import { lazyPartsLoaded } from '../render';
 import { SHARED, renderTools } from '../share/render-tools';
 
 const MESSAGE = 'Scenario tools message';
@@ -23,6 +24,8 @@ const mm = (v: number): string => `${formatValue(v)} mm`;
 
 async function pin(user: ReturnType<typeof renderTools>['user']) {
   await user.click(screen.getByRole('button', { name: 'Pin to compare' }));
+  // The comparison's code loads once something is pinned.
+  await lazyPartsLoaded();
 }
 
 describe('comparing pinned scenarios', () => {

@@ -3,13 +3,14 @@ import { screen, within } from '@testing-library/react';
 import { describe, expect, it } from 'vitest';
 import { alternatingBlockStorm, computeLosses, uniformStorm } from '../../../src/core';
 import { formatValue } from '../../../src/ui/format';
-import { renderWorkbench } from '../render';
+import { lazyPartsLoaded, renderWorkbench } from '../render';
 import { FOUR_EVENTS } from '../events/fixtures';
 import { FOUR_BARS } from '../store/fixtures';
 
 async function openDesign(scenario = FOUR_EVENTS) {
   const view = renderWorkbench(scenario);
   await view.user.click(screen.getByRole('tab', { name: 'Design storm' }));
+  await lazyPartsLoaded();
   return view;
 }
 

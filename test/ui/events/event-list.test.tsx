@@ -1,11 +1,13 @@
 // @vitest-environment jsdom
 import { screen, within } from '@testing-library/react';
 import { describe, expect, it } from 'vitest';
-import { renderWorkbench } from '../render';
+import { lazyPartsLoaded, renderWorkbench } from '../render';
 import { FOUR_BARS } from '../store/fixtures';
 
-const openEvents = async (user: ReturnType<typeof renderWorkbench>['user']) =>
-  user.click(screen.getByRole('tab', { name: 'Event set' }));
+const openEvents = async (user: ReturnType<typeof renderWorkbench>['user']) => {
+  await user.click(screen.getByRole('tab', { name: 'Event set' }));
+  await lazyPartsLoaded();
+};
 const names = (scenario: ReturnType<ReturnType<typeof renderWorkbench>['scenario']>) =>
   scenario.eventSet.events.map((e) => e.name);
 

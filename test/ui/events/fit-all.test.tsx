@@ -2,12 +2,13 @@
 import { screen, within } from '@testing-library/react';
 import { describe, expect, it } from 'vitest';
 import { calibrate } from '../../../src/core';
-import { renderWorkbench } from '../render';
+import { lazyPartsLoaded, renderWorkbench } from '../render';
 import { FOUR_EVENTS, HAND_FITS } from './fixtures';
 
 async function openFits() {
   const view = renderWorkbench(FOUR_EVENTS);
   await view.user.click(screen.getByRole('tab', { name: 'Event set' }));
+  await lazyPartsLoaded();
   return view;
 }
 

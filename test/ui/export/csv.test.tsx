@@ -1,5 +1,5 @@
 // @vitest-environment jsdom
-import { act, screen } from '@testing-library/react';
+import { act, screen, waitFor } from '@testing-library/react';
 import Papa from 'papaparse';
 import { describe, expect, it } from 'vitest';
 import { barEdgesH, computeLosses, convertDepth, runoffVolumeM3 } from '../../../src/core';
@@ -7,6 +7,7 @@ import { CAUTION_TEXT } from '../../../src/scenario';
 import type { Scenario } from '../../../src/scenario/types';
 import { barTableCsv } from '../../../src/ui/export';
 import { FOUR_BARS } from '../store/fixtures';
+import { LAZY_LOAD_MS } from '../render';
 import { SHARED, renderTools } from '../share/render-tools';
 
 const MESSAGE = 'Scenario tools message';
@@ -30,8 +31,15 @@ function parse(text: string) {
 async function exportedCsv(scenario: Scenario) {
   const view = renderTools({ fallback: scenario });
   await view.user.click(screen.getByRole('button', { name: 'Export CSV' }));
-  const file = view.saved.at(-1);
-  if (!file) throw new Error('no CSV was saved');
+  // The export code loads on the first export, so the file arrives a moment after the click.
+  const file = await waitFor(
+    () => {
+      const saved = view.saved.at(-1);
+      if (!saved) throw new Error('no CSV was saved');
+      return saved;
+    },
+    { timeout: LAZY_LOAD_MS },
+  );
   const bytes = await bytesOf(file.blob);
   return { ...view, name: file.name, bytes, text: new TextDecoder('utf-8').decode(bytes) };
 }

@@ -17,11 +17,23 @@ describe('the method line of an export', () => {
 
   it('says recovery is off and leaves the rate out while it is off', () => {
     const off = methodParametersText(
-      { kind: 'green-ampt', ksMmH: 3.4, suctionMm: 88.9, moistureDeficit: 0.3, recovers: false, recoveryPerH: 0.4 },
+      { kind: 'horton', f0MmH: 60, fcMmH: 8, kPerH: 3, ponding: false, recovers: false, recoveryPerH: 0.4 },
       'si',
     );
     expect(off).toContain('Capacity recovers in dry spells: no');
     expect(off).not.toContain('Recovery rate');
+  });
+
+  it('carries Green–Ampt’s soil values for recovery (Sᵢ, λ) while it is on, and leaves them out while it is off', () => {
+    const soil = { kind: 'green-ampt', ksMmH: 3.4, suctionMm: 88.9, moistureDeficit: 0.3 } as const;
+    const on = methodParametersText({ ...soil, recovers: true, initialSaturation: 0.3, poreSizeIndex: 0.22 }, 'si');
+    expect(on).toBe(
+      'Hydraulic conductivity K = 3.4 mm/h; Wetting-front suction head ψ = 88.9 mm; Moisture deficit Δθ = 0.3; ' +
+        'Initial saturation Sᵢ = 0.3; Pore-size distribution index λ = 0.22; Capacity recovers in dry spells: yes',
+    );
+    const off = methodParametersText({ ...soil, recovers: false, initialSaturation: 0.3, poreSizeIndex: 0.22 }, 'si');
+    expect(off).toContain('Capacity recovers in dry spells: no');
+    expect(off).not.toMatch(/Sᵢ|λ|Recovery rate/);
   });
 
   it('names the S conversion on the 0.05 basis only', () => {

@@ -1,10 +1,12 @@
 // @vitest-environment jsdom
-import { act, screen, within } from '@testing-library/react';
+import { act, screen, waitFor, within } from '@testing-library/react';
 import { describe, expect, it } from 'vitest';
 import { computeLosses, runoffVolumeM3 } from '../../../src/core';
 import { CAUTION_TEXT } from '../../../src/scenario';
+import { loadReport } from '../../../src/ui/export';
 import { formatPercent, formatValue } from '../../../src/ui/format';
 import { FOUR_BARS } from '../store/fixtures';
+import { LAZY_LOAD_MS } from '../render';
 import { SHARED, renderTools } from '../share/render-tools';
 
 const mm = (v: number): string => `${formatValue(v)} mm`;
@@ -17,7 +19,8 @@ describe('printable report', () => {
     const { user, calls } = renderTools({ fallback: { ...FOUR_BARS, observed, notes: 'Invented test notes.' } });
     expect(screen.queryByRole('article', { name: 'Printable report' })).toBeNull();
     await user.click(screen.getByRole('button', { name: 'Print report' }));
-    expect(calls.print).toBe(1);
+    // The button waits for the report's code (not part of the first screen) before opening the print dialog.
+    await waitFor(() => expect(calls.print).toBe(1), { timeout: LAZY_LOAD_MS });
 
     act(() => {
       window.dispatchEvent(new Event('beforeprint'));
@@ -51,8 +54,10 @@ describe('printable report', () => {
     expect(screen.queryByRole('article', { name: 'Printable report' })).toBeNull();
   });
 
-  it('shows the scenario’s own units and says when there is nothing to fit', () => {
+  it('shows the scenario’s own units and says when there is nothing to fit', async () => {
     renderTools({ fallback: { ...SHARED, observed: null } });
+    // The page fetches the report's code when idle; printing from the browser's menu finds it ready.
+    await act(() => loadReport());
     act(() => {
       window.dispatchEvent(new Event('beforeprint'));
     });

@@ -5,6 +5,7 @@ import { CAUTION_TEXT } from '../../../src/scenario';
 import type { Scenario } from '../../../src/scenario/types';
 import { wrapText } from '../../../src/ui/export';
 import { FOUR_BARS } from '../store/fixtures';
+import { LAZY_LOAD_MS } from '../render';
 import { SHARED, renderTools, savedText } from '../share/render-tools';
 
 const MESSAGE = 'Scenario tools message';
@@ -72,7 +73,7 @@ describe('chart SVG', () => {
     const view = renderTools({ fallback: FOUR_BARS });
     document.querySelector('svg.chart__svg')?.classList.remove('chart__svg');
     await view.user.click(screen.getByRole('button', { name: 'Export SVG' }));
-    expect(screen.getByRole('alert', { name: MESSAGE })).toHaveTextContent(
+    expect(await screen.findByRole('alert', { name: MESSAGE }, { timeout: LAZY_LOAD_MS })).toHaveTextContent(
       'The chart was not exported: the chart is not on screen.',
     );
     expect(view.saved).toEqual([]);

@@ -17,7 +17,7 @@ import { sharedTimeSpanH } from '../../../src/ui/chart/time-span';
 import { formatForField as formatField, formatValue } from '../../../src/ui/format';
 import { HYDROGRAPH_HEIGHT } from '../../../src/ui/observed';
 import { hydrographFrame } from '../../../src/ui/observed/hydrograph-frame';
-import { renderWorkbench } from '../render';
+import { LAZY_LOAD_MS, lazyPartsLoaded, renderWorkbench } from '../render';
 import { FOUR_BARS } from '../store/fixtures';
 import { TRIANGLE, TRIANGLE_TEXT, WITH_TRIANGLE } from './fixtures';
 
@@ -42,9 +42,17 @@ const frame = hydrographFrame(
   sharedTimeSpanH(2, { firstH: 0, lastH: 12 }),
 );
 
+/** The workbench on a scenario with a record, once the hydrograph and the separation (loaded with a record) are drawn. */
+async function renderRecord(...args: Parameters<typeof renderWorkbench>) {
+  const view = renderWorkbench(...args);
+  await lazyPartsLoaded();
+  return view;
+}
+
 async function pasteRecord(user: ReturnType<typeof renderWorkbench>['user'], text: string) {
   await user.click(screen.getByRole('button', { name: 'Paste streamflow…' }));
-  const dialog = screen.getByRole('dialog', { name: 'Paste streamflow' });
+  // The dialog's code loads when it is first opened.
+  const dialog = await screen.findByRole('dialog', { name: 'Paste streamflow' }, { timeout: LAZY_LOAD_MS });
   const box = within(dialog).getByLabelText('Streamflow text');
   await user.click(box);
   await user.paste(text);
@@ -68,12 +76,13 @@ describe('bringing a streamflow record in', () => {
     expect(flowOf(scenario()).timesH).toEqual(TRIANGLE.timesH);
     expect(flowOf(scenario()).dischargeM3s).toEqual(TRIANGLE.dischargeM3s);
     expect(store.getState().undoLabel).toBe('Paste streamflow');
+    await lazyPartsLoaded();
     expect(screen.getByRole('group', { name: 'Hydrograph' })).toBeInTheDocument();
     expect(screen.getByRole('slider', { name: 'End of direct runoff' })).toBeInTheDocument();
   });
 
   it('lists every bad cell by line and column, keeps the record unchanged, and keeps the text when cancelled', async () => {
-    const { user, scenario } = renderWorkbench(WITH_TRIANGLE);
+    const { user, scenario } = await renderRecord(WITH_TRIANGLE);
     const bad = 'Time\tQ (m3/s)\n14:00\t0.5\n14:15\tabc\n14:30\t-4\n14:20\t2\n14:45\t1';
     const dialog = await pasteRecord(user, bad);
     await waitFor(() =>
@@ -127,7 +136,7 @@ describe('bringing a streamflow record in', () => {
     const { user, scenario } = renderWorkbench();
     const file = new File([TRIANGLE_TEXT], 'gauge-event.csv', { type: 'text/csv' });
     await user.upload(screen.getByLabelText('Streamflow file to open'), file);
-    const dialog = await screen.findByRole('dialog', { name: 'Paste streamflow' });
+    const dialog = await screen.findByRole('dialog', { name: 'Paste streamflow' }, { timeout: LAZY_LOAD_MS });
     expect(within(dialog).getByText('Read from gauge-event.csv')).toBeInTheDocument();
     await user.click(within(dialog).getByRole('button', { name: 'Use this record' }));
     expect(flowOf(scenario()).dischargeM3s).toEqual(TRIANGLE.dischargeM3s);
@@ -148,8 +157,8 @@ describe('bringing a streamflow record in', () => {
 });
 
 describe('separating baseflow', () => {
-  it('shows the core’s volume, depth, baseflow index, peak and time of peak', () => {
-    renderWorkbench(WITH_TRIANGLE);
+  it('shows the core’s volume, depth, baseflow index, peak and time of peak', async () => {
+    await renderRecord(WITH_TRIANGLE);
     const r = separate({ kind: 'straight-line', endTimeH: 7 });
     expect(screen.getByLabelText('Direct runoff volume')).toHaveTextContent(m3(r.directVolumeM3));
     expect(screen.getByLabelText('Direct runoff depth')).toHaveTextContent(mm(r.directDepthMm as number));
@@ -160,7 +169,7 @@ describe('separating baseflow', () => {
   });
 
   it('the method picker and its fields come from the method table, and each method keeps its values', async () => {
-    const { user, scenario } = renderWorkbench(WITH_TRIANGLE);
+    const { user, scenario } = await renderRecord(WITH_TRIANGLE);
     const picker = screen.getByLabelText('Baseflow method');
     expect(
       within(picker)
@@ -188,7 +197,7 @@ describe('separating baseflow', () => {
   });
 
   it('a bad parameter keeps what was typed, says why, and changes nothing', async () => {
-    const { user, scenario } = renderWorkbench(WITH_TRIANGLE);
+    const { user, scenario } = await renderRecord(WITH_TRIANGLE);
     const end = screen.getByRole('textbox', { name: /^End of direct runoff/ });
     expect(end).toHaveValue('7');
     await user.clear(end);
@@ -212,7 +221,7 @@ describe('separating baseflow', () => {
   });
 
   it('counts the start of rise from 1, as the paste does', async () => {
-    const { user, scenario } = renderWorkbench(WITH_TRIANGLE);
+    const { user, scenario } = await renderRecord(WITH_TRIANGLE);
     const rise = screen.getByLabelText(/^Start of rise/);
     await user.type(rise, '3');
     expect(flowOf(scenario()).baseflow).toEqual({ kind: 'straight-line', endTimeH: 7, riseIndex: 2 });
@@ -226,8 +235,8 @@ describe('separating baseflow', () => {
 });
 
 describe('the end point', () => {
-  it('is a slider with its value, unit and place on the recession', () => {
-    renderWorkbench(WITH_TRIANGLE);
+  it('is a slider with its value, unit and place on the recession', async () => {
+    await renderRecord(WITH_TRIANGLE);
     const handle = screen.getByRole('slider', { name: 'End of direct runoff' });
     expect(handle).toHaveAttribute('aria-valuenow', '7');
     expect(handle).toHaveAttribute('aria-valuemin', '3');
@@ -238,7 +247,7 @@ describe('the end point', () => {
 
   it('moved with the keys, it changes the volume and, used as observed runoff, the matched loss rate', async () => {
     const linked = withSeparationAsObserved(WITH_TRIANGLE, true, 0);
-    const { user, scenario } = renderWorkbench(linked);
+    const { user, scenario } = await renderRecord(linked);
     const before = fittedRate(7);
     expect(screen.getByRole('textbox', { name: /^Loss rate φ/ })).toHaveValue(formatField(before));
     const handle = screen.getByRole('slider', { name: 'End of direct runoff' });
@@ -259,7 +268,7 @@ describe('the end point', () => {
   });
 
   it('dragged with the pointer, it follows the pointer live and the whole drag is one undo step', async () => {
-    const { scenario, store } = renderWorkbench(withSeparationAsObserved(WITH_TRIANGLE, true, 0));
+    const { scenario, store } = await renderRecord(withSeparationAsObserved(WITH_TRIANGLE, true, 0));
     const handle = screen.getByRole('slider', { name: 'End of direct runoff' });
     fireEvent.pointerDown(handle, { pointerId: 1, button: 0, clientX: frame.x(7) });
     fireEvent.pointerMove(handle, { pointerId: 1, clientX: frame.x(5.5) });
@@ -279,8 +288,8 @@ describe('the end point', () => {
     expect(flowOf(scenario()).baseflow).toEqual({ kind: 'straight-line', endTimeH: 3 });
   });
 
-  it('a cancelled drag, or Escape, puts it back', () => {
-    const { scenario } = renderWorkbench(WITH_TRIANGLE);
+  it('a cancelled drag, or Escape, puts it back', async () => {
+    const { scenario } = await renderRecord(WITH_TRIANGLE);
     const handle = screen.getByRole('slider', { name: 'End of direct runoff' });
     fireEvent.pointerDown(handle, { pointerId: 1, button: 0, clientX: frame.x(7) });
     fireEvent.pointerMove(handle, { pointerId: 1, clientX: frame.x(5) });
@@ -293,7 +302,7 @@ describe('the end point', () => {
   });
 
   it('"End at N = A^0.2 days after the peak" uses the area, and when that falls past the record ends at the last sample and says so', async () => {
-    const { user, scenario, actions } = renderWorkbench(WITH_TRIANGLE);
+    const { user, scenario, actions } = await renderRecord(WITH_TRIANGLE);
     const button = screen.getByRole('button', { name: 'End at N = A^0.2 days after the peak' });
     const days = recessionDays(AREA_M2);
     expect(button).toHaveAccessibleDescription(expect.stringContaining(`N = ${formatValue(days)} days`));
@@ -324,7 +333,7 @@ describe('the end point', () => {
 
 describe('use as observed runoff', () => {
   it('sends the depth to Matching, keeps the loss matched, and follows the area', async () => {
-    const { user, scenario, actions } = renderWorkbench(WITH_TRIANGLE);
+    const { user, scenario, actions } = await renderRecord(WITH_TRIANGLE);
     const use = screen.getByRole('button', { name: 'Use as observed runoff' });
     expect(use).toHaveAttribute('aria-pressed', 'false');
     await user.click(use);
@@ -346,7 +355,7 @@ describe('use as observed runoff', () => {
   });
 
   it('typing an observed runoff takes Matching back; pressing again keeps the depth shown', async () => {
-    const { user, scenario } = renderWorkbench(withSeparationAsObserved(WITH_TRIANGLE, true, 0));
+    const { user, scenario } = await renderRecord(withSeparationAsObserved(WITH_TRIANGLE, true, 0));
     const field = screen.getByLabelText(/^Observed runoff/);
     await user.clear(field);
     await user.type(field, '9');
@@ -358,15 +367,15 @@ describe('use as observed runoff', () => {
     expect(scenario().observed?.value).toBe(separate({ kind: 'straight-line', endTimeH: 7 }).directDepthMm);
   });
 
-  it('cannot be used without a catchment area, and says so', () => {
-    renderWorkbench({ ...WITH_TRIANGLE, catchment: { ...WITH_TRIANGLE.catchment, areaM2: 0 } });
+  it('cannot be used without a catchment area, and says so', async () => {
+    await renderRecord({ ...WITH_TRIANGLE, catchment: { ...WITH_TRIANGLE.catchment, areaM2: 0 } });
     expect(screen.getByRole('button', { name: 'Use as observed runoff' })).toBeDisabled();
     expect(screen.getByText('Needs a direct-runoff depth: the separation and the catchment area.')).toBeInTheDocument();
     expect(screen.getByLabelText('Direct runoff depth')).toHaveTextContent('— (needs the catchment area)');
   });
 
   it('"Remove record" keeps the last depth in Matching, and Undo brings the record back', async () => {
-    const { user, scenario, actions } = renderWorkbench(withSeparationAsObserved(WITH_TRIANGLE, true, 0));
+    const { user, scenario, actions } = await renderRecord(withSeparationAsObserved(WITH_TRIANGLE, true, 0));
     await user.click(screen.getByRole('button', { name: 'Remove record' }));
     expect(scenario().streamflow).toBeNull();
     expect(scenario().observed?.value).toBe(separate({ kind: 'straight-line', endTimeH: 7 }).directDepthMm);
@@ -378,7 +387,7 @@ describe('use as observed runoff', () => {
 
 describe('units and lining up', () => {
   it('shows volume, depth and discharge in US customary units after the switch', async () => {
-    const { user } = renderWorkbench(WITH_TRIANGLE);
+    const { user } = await renderRecord(WITH_TRIANGLE);
     await user.click(screen.getByRole('radio', { name: 'US customary' }));
     const r = separate({ kind: 'straight-line', endTimeH: 7 });
     expect(screen.getByLabelText('Direct runoff volume')).toHaveTextContent(
@@ -394,7 +403,7 @@ describe('units and lining up', () => {
   });
 
   it('without clock times on both, the record is lined up by an offset in hours or minutes', async () => {
-    const { user, scenario } = renderWorkbench(WITH_TRIANGLE);
+    const { user, scenario } = await renderRecord(WITH_TRIANGLE);
     const offset = screen.getByLabelText(/^Record start after storm start/);
     await user.clear(offset);
     await user.type(offset, '-1.5');
@@ -409,13 +418,13 @@ describe('units and lining up', () => {
     expect(flowOf(scenario()).offsetH).toBe(0.75);
   });
 
-  it('with clock times on both, the clocks line them up and no offset is asked for', () => {
+  it('with clock times on both, the clocks line them up and no offset is asked for', async () => {
     const clocked: Scenario = {
       ...WITH_TRIANGLE,
       storm: { ...WITH_TRIANGLE.storm, startIso: '2026-07-14T15:00' },
       streamflow: { ...flowOf(WITH_TRIANGLE), startIso: '2026-07-14T14:00:00' },
     };
-    renderWorkbench(clocked);
+    await renderRecord(clocked);
     expect(screen.queryByLabelText(/^Record start after storm start/)).not.toBeInTheDocument();
     expect(
       screen.getByText(/Lined up by clock time: the record’s first sample is 1 h before the storm start\./),

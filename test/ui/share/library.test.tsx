@@ -3,6 +3,7 @@ import { screen, within } from '@testing-library/react';
 import { describe, expect, it } from 'vitest';
 import { LIBRARY_KEY, createScenarioLibrary } from '../../../src/scenario';
 import { FOUR_BARS, memoryStorage } from '../store/fixtures';
+import { lazyPartsLoaded } from '../render';
 import { NOW, SHARED, renderTools } from './render-tools';
 
 const names = (storage: ReturnType<typeof memoryStorage>) =>
@@ -15,6 +16,7 @@ async function openPanel(user: ReturnType<typeof renderTools>['user']) {
   expect(toggle).toHaveAttribute('aria-expanded', 'false');
   await user.click(toggle);
   expect(toggle).toHaveAttribute('aria-expanded', 'true');
+  await lazyPartsLoaded();
   return screen.getByRole('region', { name: 'Saved scenarios' });
 }
 

@@ -1,9 +1,10 @@
-import { render } from '@testing-library/react';
+import { render, waitFor } from '@testing-library/react';
 import userEvent from '@testing-library/user-event';
 import type { Scenario } from '../../../src/scenario/types';
 import { readScenario } from '../../../src/store';
 import { startWorkbench } from '../../../src/store/start';
 import { App } from '../../../src/ui/App';
+import { LAZY_LOAD_MS } from '../render';
 import type { ScenarioServices } from '../../../src/ui/services';
 import { FOUR_BARS, memoryStorage } from '../store/fixtures';
 
@@ -107,13 +108,20 @@ export function renderTools(options: ToolsOptions = {}) {
 
 /** The text of a saved (downloaded) file. */
 export async function savedText(saved: readonly { name: string; blob: Blob }[], index = -1): Promise<string> {
-  const file = saved.at(index);
-  if (!file) throw new Error('nothing was saved');
+  // The export code loads on the first export, so the file arrives a moment after the click.
+  const file = await waitFor(
+    () => {
+      const at = saved.at(index);
+      if (!at) throw new Error('nothing was saved');
+      return at;
+    },
+    { timeout: LAZY_LOAD_MS },
+  );
   // jsdom's Blob has no text(); FileReader reads it.
   return new Promise((resolve, reject) => {
     const reader = new FileReader();
-    reader.onload = () => resolve(reader.result as string);
-    reader.onerror = () => reject(reader.error ?? new Error('the saved file could not be read'));
+    reader.onload = () => resolve(String(reader.result));
+    reader.onerror = () => reject(reader.error);
     reader.readAsText(file.blob);
   });
 }

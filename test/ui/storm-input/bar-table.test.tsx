@@ -3,8 +3,15 @@ import { screen, within } from '@testing-library/react';
 import { describe, expect, it } from 'vitest';
 import type { Scenario } from '../../../src/scenario/types';
 import { formatValue } from '../../../src/ui/format';
-import { coreTotals, mmText, renderWorkbench } from '../render';
+import { coreTotals, lazyPartsLoaded, mmText, renderWorkbench } from '../render';
 import { FOUR_BARS } from '../store/fixtures';
+
+/** The workbench, once the bar table (loaded just after the first screen) is drawn. */
+async function renderTable(...args: Parameters<typeof renderWorkbench>) {
+  const view = renderWorkbench(...args);
+  await lazyPartsLoaded();
+  return view;
+}
 
 const grid = () => screen.getByRole('grid', { name: 'Bar table' });
 /** Row of bar k (1-based), found by its ARIA row index (the header is row 1). */
@@ -28,8 +35,8 @@ const cell = (k: number, column: keyof typeof COLUMN) => {
 const CLOCKED: Scenario = { ...FOUR_BARS, storm: { ...FOUR_BARS.storm, startIso: '2026-07-14T15:00:00' } };
 
 describe('the bar table', () => {
-  it('lists every bar with its start, duration, depth and the core’s loss and excess', () => {
-    renderWorkbench();
+  it('lists every bar with its start, duration, depth and the core’s loss and excess', async () => {
+    await renderTable();
     expect(grid()).toHaveAttribute('aria-rowcount', '5');
     const headers = within(grid())
       .getAllByRole('columnheader')
@@ -54,15 +61,15 @@ describe('the bar table', () => {
     expect(cell(1, 'excess')).toHaveTextContent('0');
   });
 
-  it('shows clock times when the storm has a start', () => {
-    renderWorkbench(CLOCKED);
+  it('shows clock times when the storm has a start', async () => {
+    await renderTable(CLOCKED);
     expect(within(grid()).getAllByRole('columnheader')[1]).toHaveTextContent('Start (clock)');
     expect(cell(1, 'start')).toHaveTextContent('15:00');
     expect(cell(4, 'start')).toHaveTextContent('16:30');
   });
 
   it('edits a depth from the keyboard: move with arrows, type, Enter applies and goes down', async () => {
-    const { user, scenario, store } = renderWorkbench();
+    const { user, scenario, store } = await renderTable();
     await user.click(cell(1, 'depth'));
     expect(cell(1, 'depth')).toHaveFocus();
     await user.keyboard('{ArrowDown}');
@@ -81,7 +88,7 @@ describe('the bar table', () => {
   });
 
   it('Enter opens the editor on the present value; Tab applies and moves to the next editable cell', async () => {
-    const { user, scenario } = renderWorkbench();
+    const { user, scenario } = await renderTable();
     await user.click(cell(1, 'duration'));
     await user.keyboard('{Enter}');
     const editor = screen.getByRole('textbox', { name: 'Bar 1 duration' });
@@ -92,7 +99,7 @@ describe('the bar table', () => {
   });
 
   it('a bad value shows a message beside the cell naming the bar, keeps the typed text and applies nothing', async () => {
-    const { user, scenario, store } = renderWorkbench();
+    const { user, scenario, store } = await renderTable();
     await user.click(cell(3, 'depth'));
     await user.keyboard('abc{Enter}');
     const editor = screen.getByRole('textbox', { name: 'Bar 3 depth' });
@@ -121,7 +128,7 @@ describe('the bar table', () => {
   });
 
   it('a negative depth is refused by name, and Escape drops the typing', async () => {
-    const { user, scenario } = renderWorkbench();
+    const { user, scenario } = await renderTable();
     await user.click(cell(2, 'depth'));
     await user.keyboard('-3{Enter}');
     expect(cell(2, 'note')).toHaveTextContent('Bar 2 depth: “-3” mm: a rainfall or runoff depth cannot be negative.');
@@ -133,7 +140,7 @@ describe('the bar table', () => {
   });
 
   it('depths are typed and shown in inches in US customary units', async () => {
-    const { user, scenario } = renderWorkbench({ ...FOUR_BARS, units: 'us' });
+    const { user, scenario } = await renderTable({ ...FOUR_BARS, units: 'us' });
     expect(within(grid()).getAllByRole('columnheader')[3]).toHaveTextContent('Depth (in)');
     await user.click(cell(1, 'depth'));
     await user.keyboard('0.5{Enter}');
@@ -142,7 +149,7 @@ describe('the bar table', () => {
   });
 
   it('a new start time moves the boundary with the bar before it; the first bar moves the clock start', async () => {
-    const { user, scenario, store } = renderWorkbench(CLOCKED);
+    const { user, scenario, store } = await renderTable(CLOCKED);
     await user.click(cell(3, 'start'));
     await user.keyboard('{Enter}{Control>}a{/Control}15:50{Enter}');
     expect(scenario().storm.durationsH.map((d) => Math.round(d * 600) / 10)).toEqual([30, 20, 40, 30]);
@@ -157,7 +164,7 @@ describe('the bar table', () => {
   });
 
   it('a start outside the neighbouring bars is refused with the times it must fall between', async () => {
-    const { user, scenario } = renderWorkbench(CLOCKED);
+    const { user, scenario } = await renderTable(CLOCKED);
     await user.click(cell(2, 'start'));
     await user.keyboard('{Enter}{Control>}a{/Control}16:20{Enter}');
     expect(cell(2, 'note')).toHaveTextContent(
@@ -167,7 +174,7 @@ describe('the bar table', () => {
   });
 
   it('inserts, adds and deletes bars at the selected row, each one undo step', async () => {
-    const { user, scenario, store } = renderWorkbench();
+    const { user, scenario, store } = await renderTable();
     await user.click(cell(2, 'depth'));
     expect(screen.getByText('Bar 2 of 4 selected.')).toBeInTheDocument();
     await user.click(screen.getByRole('button', { name: 'Insert bar' }));
@@ -188,7 +195,7 @@ describe('the bar table', () => {
       ...FOUR_BARS,
       storm: { durationsH: Array(n).fill(0.1), depthsMm: Array.from({ length: n }, (_, k) => (k % 7) * 0.5) },
     };
-    const { user, scenario } = renderWorkbench(long);
+    const { user, scenario } = await renderTable(long);
     expect(grid()).toHaveAttribute('aria-rowcount', String(n + 1));
     const drawn = within(grid()).getAllByRole('row').length - 1;
     expect(drawn).toBeGreaterThan(5);
@@ -207,7 +214,7 @@ describe('the bar table', () => {
   });
 
   it('says so when there are no bars, and Add bar at end starts one', async () => {
-    const { user, scenario } = renderWorkbench({ ...FOUR_BARS, storm: { durationsH: [], depthsMm: [] } });
+    const { user, scenario } = await renderTable({ ...FOUR_BARS, storm: { durationsH: [], depthsMm: [] } });
     expect(screen.getByText('No bars yet: add one, paste rainfall or draw.')).toBeInTheDocument();
     expect(screen.getByRole('button', { name: 'Delete bar' })).toBeDisabled();
     await user.click(screen.getByRole('button', { name: 'Add bar at end' }));

@@ -5,7 +5,7 @@ import type { Scenario } from '../../../src/scenario/types';
 import { chartFrame } from '../../../src/ui/chart/frame';
 import { CHART_HEIGHT } from '../../../src/ui/chart/Hyetograph';
 import { expectAllClose } from '../../helpers/tolerance';
-import { renderWorkbench } from '../render';
+import { lazyPartsLoaded, renderWorkbench } from '../render';
 import { FOUR_BARS } from '../store/fixtures';
 
 // jsdom lays nothing out: the chart keeps its fallback width (880 px) and sits at
@@ -15,6 +15,8 @@ const centre = (k: number) => ((frame.edgesPx[k] as number) + (frame.edgesPx[k +
 
 async function startDrawing(user: ReturnType<typeof renderWorkbench>['user']) {
   await user.click(screen.getByRole('button', { name: 'Draw bars' }));
+  // The drawing settings' code loads when drawing first starts.
+  await lazyPartsLoaded();
   return screen.getByRole('application', { name: /^Drawing area/ });
 }
 

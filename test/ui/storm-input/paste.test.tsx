@@ -2,7 +2,7 @@
 import { screen, waitFor, within } from '@testing-library/react';
 import { describe, expect, it } from 'vitest';
 import { applyRainImport, guessRainSettings } from '../../../src/io';
-import { coreTotals, mmText, renderWorkbench } from '../render';
+import { coreTotals, LAZY_LOAD_MS, mmText, renderWorkbench } from '../render';
 import { FOUR_BARS } from '../store/fixtures';
 
 // Invented gauge records for these tests (no real gauge or storm).
@@ -12,7 +12,8 @@ const WITH_BAD_ROWS = 'Time,Rain mm\n0,0.2\n10,1.4\n20,abc\n30,-2\n40,0.8\n';
 
 async function openPaste(user: ReturnType<typeof renderWorkbench>['user']) {
   await user.click(screen.getByRole('button', { name: 'Paste rainfall…' }));
-  const dialog = screen.getByRole('dialog', { name: 'Paste rainfall' });
+  // The dialog's code loads when it is first opened.
+  const dialog = await screen.findByRole('dialog', { name: 'Paste rainfall' }, { timeout: LAZY_LOAD_MS });
   return dialog;
 }
 
@@ -226,7 +227,7 @@ describe('pasting rainfall', () => {
     const { user, scenario, store } = renderWorkbench();
     const file = new File(['minutes,depth mm\n0,1\n15,3\n30,2\n'], 'event-invented.csv', { type: 'text/csv' });
     await user.upload(screen.getByLabelText('Rainfall file to open'), file);
-    const dialog = await screen.findByRole('dialog', { name: 'Paste rainfall' });
+    const dialog = await screen.findByRole('dialog', { name: 'Paste rainfall' }, { timeout: LAZY_LOAD_MS });
     expect(within(dialog).getByRole('textbox', { name: 'Rainfall text' })).toHaveValue(
       'minutes,depth mm\n0,1\n15,3\n30,2\n',
     );

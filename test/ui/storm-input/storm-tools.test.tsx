@@ -3,7 +3,7 @@ import { screen, within } from '@testing-library/react';
 import { describe, expect, it } from 'vitest';
 import { totalDepthMm } from '../../../src/core';
 import { expectAllClose, expectClose } from '../../helpers/tolerance';
-import { renderWorkbench } from '../render';
+import { lazyPartsLoaded, renderWorkbench } from '../render';
 import { FOUR_BARS } from '../store/fixtures';
 
 async function openTools(user: ReturnType<typeof renderWorkbench>['user']) {
@@ -11,6 +11,7 @@ async function openTools(user: ReturnType<typeof renderWorkbench>['user']) {
   expect(button).toHaveAttribute('aria-expanded', 'false');
   await user.click(button);
   expect(button).toHaveAttribute('aria-expanded', 'true');
+  await lazyPartsLoaded();
   return screen.getByRole('region', { name: 'Storm tools' });
 }
 

@@ -18,8 +18,6 @@ import { FlowSettings, type FlowSettingsPatch } from './FlowSettings';
 /** What the dialog opens on (a file's text, or nothing). */
 export type FlowDraft = ImportDraft<FlowSettingsPatch>;
 
-export const EMPTY_FLOW_DRAFT: FlowDraft = { text: '', fileName: null, corrections: {} };
-
 function recordOf(text: string, settings: FlowImportSettings): FlowRecord | null {
   const result = applyFlowImport(text, settings, currentNumberFormat());
   return result.ok ? result.record : null;

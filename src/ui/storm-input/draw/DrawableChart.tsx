@@ -6,8 +6,11 @@ import { frameThrottle, type FrameThrottle } from '../../interaction/frame-throt
 import { CHART_HEIGHT } from '../../chart/Hyetograph';
 import { useTimeSpanH } from '../../chart/time-span';
 import { useStormInput } from '../context';
-import { DrawPanel } from './DrawPanel';
 import { paintSegment, rateAtPointer, type StrokePoint } from './draw-math';
+import { lazyPart } from '../../layout/LazyPart';
+
+// The drawing settings load when drawing first starts (they are not part of the first screen).
+const DrawPanel = lazyPart('drawing settings', () => import('./DrawPanel').then((m) => m.DrawPanel));
 
 /** Where the chart's svg sits inside the wrapper, px. */
 interface Box {

@@ -13,8 +13,6 @@ import { PreviewBars } from './PreviewBars';
 /** What the dialog opens on (a file's text, or nothing). */
 export type PasteDraft = ImportDraft<SettingsPatch>;
 
-export const EMPTY_DRAFT: PasteDraft = { text: '', fileName: null, corrections: {} };
-
 export interface PasteDialogProps {
   readonly initial: PasteDraft;
   /** Called on cancel and after the bars are used. */
