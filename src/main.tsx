@@ -75,7 +75,6 @@ const updates = createUpdateChannel({
   reloadPage: () => window.location.reload(),
 });
 
-
 const root = document.getElementById('root');
 if (!root) throw new Error('index.html has no #root element');
 createRoot(root).render(

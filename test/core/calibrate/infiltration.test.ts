@@ -203,10 +203,10 @@ describe('calibration of every infiltration parameter', () => {
             ? fc.tuple(c.storms, linearIn(c.low, c.high))
             : c.key === 'recoveryPerH'
               ? recoveryDraws(c.low, c.high)
-            : fc.tuple(
-                fc.oneof(pondingStormArb, stormArb(30)),
-                c.log ? linearIn(Math.log(c.low), Math.log(c.high)).map(Math.exp) : linearIn(c.low, c.high),
-              ),
+              : fc.tuple(
+                  fc.oneof(pondingStormArb, stormArb(30)),
+                  c.log ? linearIn(Math.log(c.low), Math.log(c.high)).map(Math.exp) : linearIn(c.low, c.high),
+                ),
           ([storm, truth]) => {
             const truthMethod = withValue(c.method, c.key, truth);
             // Horton's f₀ ≥ f_c: keep the drawn pair valid.

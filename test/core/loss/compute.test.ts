@@ -76,11 +76,13 @@ describe('computeLosses with the constant rate (checks fused into the pass)', ()
     expect(e).toMatchObject({ field: 'durationsH', index: 1 });
     expect((e as Error).message).toMatch(/^Bar 2: duration must be at least 1 second/);
   });
-  it('refuses a storm that runs past a record\'s longest span, naming the bar that passes it', () => {
+  it("refuses a storm that runs past a record's longest span, naming the bar that passes it", () => {
     const years300 = 300 * 8766;
     const e = thrown(() => computeLosses({ durationsH: [years300, years300], depthsMm: [1, 1] }, PHI));
     expect(e).toMatchObject({ field: 'durationsH', index: 1 });
-    expect((e as Error).message).toMatch(/^Bar 2: the storm would run .* from its start; a record spans at most 500 years/);
+    expect((e as Error).message).toMatch(
+      /^Bar 2: the storm would run .* from its start; a record spans at most 500 years/,
+    );
   });
 
   // 40,000 bars: full blocks and a part block. Bars either side of the first

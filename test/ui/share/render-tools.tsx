@@ -120,8 +120,8 @@ export async function savedText(saved: readonly { name: string; blob: Blob }[], 
   // jsdom's Blob has no text(); FileReader reads it.
   return new Promise((resolve, reject) => {
     const reader = new FileReader();
-    reader.onload = () => resolve(String(reader.result));
-    reader.onerror = () => reject(reader.error);
+    reader.onload = () => resolve(reader.result as string);
+    reader.onerror = () => reject(reader.error ?? new Error('the saved file could not be read'));
     reader.readAsText(file.blob);
   });
 }

@@ -140,7 +140,9 @@ describe('setting the saved scenario aside', () => {
     const storage = fullStorage({ [STORAGE_KEY]: '{"version":' });
     const loaded = loadScenario(storage, DEMO_SCENARIO, NOW.toISOString());
     expect(loaded.canSave).toBe(false);
-    expect(loaded.notice?.message).toMatch(/could not be set aside \(QuotaExceededError: The quota has been exceeded\.\)/);
+    expect(loaded.notice?.message).toMatch(
+      /could not be set aside \(QuotaExceededError: The quota has been exceeded\.\)/,
+    );
     expect(storage.data.get(STORAGE_KEY)).toBe('{"version":');
   });
 });
