@@ -11,7 +11,7 @@ import {
   type Scenario,
   type ScenarioResult,
 } from '../../src/scenario';
-import { scenarioArb } from './arbitraries';
+import { scenarioArb } from '../helpers/scenario-arbitraries';
 
 /** A document broken on purpose, field by field: any field may be set to anything. */
 // eslint-disable-next-line @typescript-eslint/no-explicit-any -- these tests write wrong types into the document

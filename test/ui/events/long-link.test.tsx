@@ -7,8 +7,8 @@ import { createWorkbenchStore } from '../../../src/store';
 import { App } from '../../../src/ui/App';
 import { PRACTICAL_LINK_CHARS } from '../../../src/ui/events/LongLinkOffer';
 import { browserServices } from '../../../src/ui/services';
-import { inventedEvents, withSet } from '../../scenario/event-set-fixtures';
-import { memoryStorage } from '../store/fixtures';
+import { inventedEvents, withSet } from '../../helpers/event-set-fixtures';
+import { memoryStorage } from '../../helpers/scenario-fixtures';
 
 function renderWith(scenario: ReturnType<typeof withSet>) {
   const writeText = vi.fn(async (_text: string) => {});

@@ -5,8 +5,8 @@ import type { Scenario } from '../../../src/scenario/types';
 import { chartFrame } from '../../../src/ui/chart/frame';
 import { CHART_HEIGHT } from '../../../src/ui/chart/Hyetograph';
 import { expectAllClose } from '../../helpers/tolerance';
-import { lazyPartsLoaded, renderWorkbench } from '../render';
-import { FOUR_BARS } from '../store/fixtures';
+import { lazyPartsLoaded, renderWorkbench } from '../../helpers/render';
+import { FOUR_BARS } from '../../helpers/scenario-fixtures';
 
 // jsdom lays nothing out: the chart keeps its fallback width (880 px) and sits at
 // the top left, so a pointer's clientX/clientY are the chart's own x and y.

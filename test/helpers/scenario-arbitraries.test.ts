@@ -5,7 +5,7 @@ import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
 import { BASEFLOW_KINDS, FIRST_CLOCK_YEAR, LAST_CLOCK_YEAR, MAX_RECORD_H, hoursBetweenClocks } from '../../src/core';
 import { parseScenario } from '../../src/scenario';
-import { MAX_BARS, MAX_SAMPLES, MAX_SET_EVENTS, scenarioArb } from './arbitraries';
+import { MAX_BARS, MAX_SAMPLES, MAX_SET_EVENTS, scenarioArb } from './scenario-arbitraries';
 
 describe('the scenario generator', () => {
   const docs = fc.sample(scenarioArb, { numRuns: 150, seed: 20261204 });

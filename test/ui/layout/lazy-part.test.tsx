@@ -2,8 +2,8 @@
 import { render, screen } from '@testing-library/react';
 import userEvent from '@testing-library/user-event';
 import { describe, expect, it } from 'vitest';
-import { ViewTabs } from '../../src/ui/layout/ViewTabs';
-import { lazyPart } from '../../src/ui/layout/LazyPart';
+import { ViewTabs } from '../../../src/ui/layout/ViewTabs';
+import { lazyPart } from '../../../src/ui/layout/LazyPart';
 
 /** A load that the test settles by hand. */
 function manualLoad<T>() {

@@ -8,9 +8,9 @@ import {
   greenAmptForTexture,
   paramApplies,
   type MethodSpec,
-} from '../../src/core';
-import { coreTotals, mmText, renderWorkbench } from './render';
-import { FOUR_BARS } from './store/fixtures';
+} from '../../../src/core';
+import { coreTotals, mmText, renderWorkbench } from '../../helpers/render';
+import { FOUR_BARS } from '../../helpers/scenario-fixtures';
 
 describe('the loss-method panel', () => {
   it('offers every method in the core’s table', () => {

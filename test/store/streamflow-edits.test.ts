@@ -1,7 +1,7 @@
 import { describe, expect, it } from 'vitest';
-import { calibrate, isInputError, separateBaseflow } from '../../../src/core';
-import { parseScenario } from '../../../src/scenario';
-import type { Scenario } from '../../../src/scenario/types';
+import { calibrate, isInputError, separateBaseflow } from '../../src/core';
+import { parseScenario } from '../../src/scenario';
+import type { Scenario } from '../../src/scenario/types';
 import {
   alignRecord,
   createWorkbenchStore,
@@ -11,11 +11,11 @@ import {
   withSeparationAsObserved,
   withStreamflowRecord,
   withoutStreamflow,
-} from '../../../src/store';
-import { withAreaM2, withObserved } from '../../../src/store/edits';
-import { expectClose } from '../../helpers/tolerance';
-import { FOUR_BARS } from '../store/fixtures';
-import { TRIANGLE, TRIANGLE_DIRECT_M3, WITH_TRIANGLE } from './fixtures';
+} from '../../src/store';
+import { withAreaM2, withObserved } from '../../src/store/edits';
+import { expectClose } from '../helpers/tolerance';
+import { FOUR_BARS } from '../helpers/scenario-fixtures';
+import { TRIANGLE, TRIANGLE_DIRECT_M3, WITH_TRIANGLE } from '../helpers/flow-fixtures';
 
 const flow = (s: Scenario) => {
   if (!s.streamflow) throw new Error('expected a streamflow record');

@@ -6,7 +6,7 @@ import type { Scenario } from '../../src/scenario/types';
 import { createWorkbenchStore, type CreateStoreOptions } from '../../src/store';
 import { App } from '../../src/ui/App';
 import { formatValue } from '../../src/ui/format';
-import { FOUR_BARS } from './store/fixtures';
+import { FOUR_BARS } from './scenario-fixtures';
 
 /** Renders the whole workbench on a fresh store. */
 export function renderWorkbench(scenario: Scenario = FOUR_BARS, options: CreateStoreOptions = {}) {

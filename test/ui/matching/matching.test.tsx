@@ -1,9 +1,9 @@
 // @vitest-environment jsdom
 import { screen } from '@testing-library/react';
 import { describe, expect, it } from 'vitest';
-import { calibrate, convertVolume } from '../../src/core';
-import { coreTotals, mmText, renderWorkbench } from './render';
-import { FOUR_BARS } from './store/fixtures';
+import { calibrate, convertVolume } from '../../../src/core';
+import { coreTotals, mmText, renderWorkbench } from '../../helpers/render';
+import { FOUR_BARS } from '../../helpers/scenario-fixtures';
 
 const rate = (s: { method: unknown }) => (s.method as { rateMmH: number }).rateMmH;
 

@@ -1,8 +1,8 @@
 // @vitest-environment jsdom
 import { screen } from '@testing-library/react';
 import { describe, expect, it } from 'vitest';
-import { renderWorkbench } from './render';
-import { FOUR_BARS } from './store/fixtures';
+import { renderWorkbench } from '../../helpers/render';
+import { FOUR_BARS } from '../../helpers/scenario-fixtures';
 
 const rate = (s: { method: unknown }) => (s.method as { rateMmH: number }).rateMmH;
 

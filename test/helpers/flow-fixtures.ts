@@ -1,5 +1,5 @@
-import type { Scenario } from '../../../src/scenario/types';
-import { FOUR_BARS } from '../store/fixtures';
+import type { Scenario } from '../../src/scenario/types';
+import { FOUR_BARS } from './scenario-fixtures';
 
 /**
  * An invented event record (not from any gauge): hourly samples for 12 h, a

@@ -8,7 +8,7 @@ import {
   redoLabel,
   undo,
   undoLabel,
-} from '../../../src/store/history';
+} from '../../src/store/history';
 
 describe('history', () => {
   it('an edit can be undone and redone, and says what it was', () => {

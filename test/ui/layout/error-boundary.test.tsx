@@ -2,13 +2,13 @@
 import { render, screen } from '@testing-library/react';
 import userEvent from '@testing-library/user-event';
 import { afterEach, beforeEach, describe, expect, it, vi } from 'vitest';
-import { DEMO_SCENARIO } from '../../src/scenario';
-import { STORAGE_KEY } from '../../src/store';
-import { createCrashRecovery, type CrashRecovery } from '../../src/store/crash';
-import { listSetAside } from '../../src/store/set-aside';
-import { startWorkbench } from '../../src/store/start';
-import { ErrorBoundary } from '../../src/ui/layout/ErrorBoundary';
-import { FOUR_BARS, memoryStorage } from './store/fixtures';
+import { DEMO_SCENARIO } from '../../../src/scenario';
+import { STORAGE_KEY } from '../../../src/store';
+import { createCrashRecovery, type CrashRecovery } from '../../../src/store/crash';
+import { listSetAside } from '../../../src/store/set-aside';
+import { startWorkbench } from '../../../src/store/start';
+import { ErrorBoundary } from '../../../src/ui/layout/ErrorBoundary';
+import { FOUR_BARS, memoryStorage } from '../../helpers/scenario-fixtures';
 
 function Broken(): never {
   throw new Error('bar 3 has no depth');

@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { InputError, defaultMethod } from '../../../src/core';
+import { InputError, defaultMethod } from '../../src/core';
 import {
   withAreaM2,
   withBarDeleted,
@@ -11,8 +11,8 @@ import {
   withParam,
   withStartIso,
   withStorm,
-} from '../../../src/store/edits';
-import { FOUR_BARS } from './fixtures';
+} from '../../src/store/edits';
+import { FOUR_BARS } from '../helpers/scenario-fixtures';
 
 const catchError = (fn: () => unknown): InputError => {
   try {

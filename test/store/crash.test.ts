@@ -1,10 +1,10 @@
 import { afterEach, beforeEach, describe, expect, it, vi } from 'vitest';
-import { DEMO_SCENARIO, encodeScenarioLink } from '../../../src/scenario';
-import { SET_ASIDE_PREFIX, STORAGE_KEY, loadScenario, setAsideSaved } from '../../../src/store';
-import { SKIP_SAVED_KEY, createCrashRecovery } from '../../../src/store/crash';
-import { listSetAside } from '../../../src/store/set-aside';
-import { startWorkbench } from '../../../src/store/start';
-import { FOUR_BARS, memoryStorage } from './fixtures';
+import { DEMO_SCENARIO, encodeScenarioLink } from '../../src/scenario';
+import { SET_ASIDE_PREFIX, STORAGE_KEY, loadScenario, setAsideSaved } from '../../src/store';
+import { SKIP_SAVED_KEY, createCrashRecovery } from '../../src/store/crash';
+import { listSetAside } from '../../src/store/set-aside';
+import { startWorkbench } from '../../src/store/start';
+import { FOUR_BARS, memoryStorage } from '../helpers/scenario-fixtures';
 
 const NOW = new Date('2026-03-01T10:00:00.000Z');
 

@@ -1,12 +1,12 @@
 import { render, waitFor } from '@testing-library/react';
 import userEvent from '@testing-library/user-event';
-import type { Scenario } from '../../../src/scenario/types';
-import { readScenario } from '../../../src/store';
-import { startWorkbench } from '../../../src/store/start';
-import { App } from '../../../src/ui/App';
-import { LAZY_LOAD_MS } from '../render';
-import type { ScenarioServices } from '../../../src/ui/services';
-import { FOUR_BARS, memoryStorage } from '../store/fixtures';
+import type { Scenario } from '../../src/scenario/types';
+import { readScenario } from '../../src/store';
+import { startWorkbench } from '../../src/store/start';
+import { App } from '../../src/ui/App';
+import { LAZY_LOAD_MS } from './render';
+import type { ScenarioServices } from '../../src/ui/services';
+import { FOUR_BARS, memoryStorage } from './scenario-fixtures';
 
 export const NOW = '2026-03-01T10:00:00.000Z';
 export const PAGE = 'https://raincut.example/bench/';

@@ -1,7 +1,7 @@
 import { describe, expect, it } from 'vitest';
-import { calibrate, computeLosses, InputError } from '../../../src/core';
-import { createWorkbenchStore } from '../../../src/store';
-import { FOUR_BARS } from './fixtures';
+import { calibrate, computeLosses, InputError } from '../../src/core';
+import { createWorkbenchStore } from '../../src/store';
+import { FOUR_BARS } from '../helpers/scenario-fixtures';
 
 const make = (scenario = FOUR_BARS) => {
   let t = 0;

@@ -1,17 +1,5 @@
 import fc from 'fast-check';
-import { isInputError, type InputError } from '../../../src/core/errors';
-import type { Hydrograph } from '../../../src/core/baseflow/types';
-
-/** Runs `fn`, expecting it to throw an InputError, and returns that error. */
-export function inputErrorOf(fn: () => unknown): InputError {
-  try {
-    fn();
-  } catch (error) {
-    if (isInputError(error)) return error;
-    throw error;
-  }
-  throw new Error('Expected an InputError, but nothing was thrown.');
-}
+import type { Hydrograph } from '../../src/core/baseflow/types';
 
 /**
  * A triangular direct-runoff hydrograph on top of a baseflow line: baseflow

@@ -1,5 +1,5 @@
-import type { Scenario, SetEvent } from '../../../src/scenario/types';
-import { FOUR_BARS } from '../store/fixtures';
+import type { Scenario, SetEvent } from '../../src/scenario/types';
+import { FOUR_BARS } from './scenario-fixtures';
 
 /**
  * Four invented events on the FOUR_BARS storm (bars of 30 min, 2/6/10/2 mm,

@@ -2,11 +2,11 @@
 import { act, render, screen, within } from '@testing-library/react';
 import userEvent from '@testing-library/user-event';
 import { describe, expect, it } from 'vitest';
-import { createUpdateChannel, type RegisterCallbacks } from '../../src/offline/updates';
-import { createWorkbenchStore } from '../../src/store';
-import { App } from '../../src/ui/App';
-import { browserServices } from '../../src/ui/services';
-import { FOUR_BARS, memoryStorage } from './store/fixtures';
+import { createUpdateChannel, type RegisterCallbacks } from '../../../src/offline/updates';
+import { createWorkbenchStore } from '../../../src/store';
+import { App } from '../../../src/ui/App';
+import { browserServices } from '../../../src/ui/services';
+import { FOUR_BARS, memoryStorage } from '../../helpers/scenario-fixtures';
 
 function renderWithUpdates(storage: ReturnType<typeof memoryStorage> | null) {
   let worker: RegisterCallbacks = {};

@@ -1,5 +1,5 @@
-import type { Scenario } from '../../../src/scenario/types';
-import { readScenario } from '../../../src/store';
+import type { Scenario } from '../../src/scenario/types';
+import { readScenario } from '../../src/store';
 
 /**
  * A small test scenario: four bars of 30 min, 2/6/10/2 mm (intensities 4, 12,

@@ -1,5 +1,5 @@
 import { afterEach, beforeEach, describe, expect, it, vi } from 'vitest';
-import { DEMO_SCENARIO } from '../../../src/scenario/demo';
+import { DEMO_SCENARIO } from '../../src/scenario/demo';
 import {
   SET_ASIDE_PREFIX,
   STORAGE_KEY,
@@ -7,8 +7,8 @@ import {
   loadScenario,
   persistStore,
   readScenario,
-} from '../../../src/store';
-import { FOUR_BARS, memoryStorage } from './fixtures';
+} from '../../src/store';
+import { FOUR_BARS, memoryStorage } from '../helpers/scenario-fixtures';
 
 const NOW = '2026-03-01T10:00:00.000Z';
 

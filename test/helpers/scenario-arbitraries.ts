@@ -23,7 +23,7 @@ import { baseflowRecordProblem } from '../../src/scenario/baseflow-check';
 
 // Sizes are explicit (size: 'max'): fast-check's default size keeps arrays
 // and strings near a dozen elements whatever their maxLength, so without it
-// a "300-bar" storm never passed 10 bars. test/scenario/arbitraries.test.ts
+// a "300-bar" storm never passed 10 bars. test/helpers/scenario-arbitraries.test.ts
 // checks that each generator reaches its maximum.
 /** Most bars in a generated storm. */
 export const MAX_BARS = 300;

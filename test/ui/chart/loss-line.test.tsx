@@ -1,10 +1,10 @@
 // @vitest-environment jsdom
 import { fireEvent, screen, waitFor } from '@testing-library/react';
 import { describe, expect, it } from 'vitest';
-import { chartFrame } from '../../src/ui/chart/frame';
-import { CHART_HEIGHT } from '../../src/ui/chart/Hyetograph';
-import { coreTotals, mmText, renderWorkbench } from './render';
-import { FOUR_BARS } from './store/fixtures';
+import { chartFrame } from '../../../src/ui/chart/frame';
+import { CHART_HEIGHT } from '../../../src/ui/chart/Hyetograph';
+import { coreTotals, mmText, renderWorkbench } from '../../helpers/render';
+import { FOUR_BARS } from '../../helpers/scenario-fixtures';
 
 // jsdom lays nothing out: the chart keeps its fallback width and the svg sits at y = 0,
 // so a pointer's clientY is the chart's own y.
