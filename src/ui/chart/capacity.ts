@@ -2,6 +2,8 @@ import { line } from 'd3-shape';
 import {
   barEdgesH,
   infiltrationCapacity,
+  METHOD_KINDS,
+  methodSpec,
   totalDurationH,
   type LossKind,
   type LossMethod,
@@ -65,7 +67,7 @@ const coreCurve = (kind: LossKind): CapacityCurve => ({
   },
 });
 
-export const CAPACITY_CURVES: Partial<Record<LossKind, CapacityCurve>> = {
-  horton: coreCurve('horton'),
-  'green-ampt': coreCurve('green-ampt'),
-};
+/** A curve for each method whose spec gives a capacity (src/core/loss/methods.ts): no list of kinds kept here. */
+export const CAPACITY_CURVES: Partial<Record<LossKind, CapacityCurve>> = Object.fromEntries(
+  METHOD_KINDS.filter((kind) => methodSpec(kind).capacity).map((kind) => [kind, coreCurve(kind)]),
+);

@@ -1,5 +1,5 @@
 import { useMemo, useState } from 'react';
-import { computeLosses, isInputError, methodSpec, runoffVolumeM3, type LossMethod } from '../../core';
+import { computeLosses, isInputError, methodNumber, methodSpec, runoffVolumeM3, type LossMethod } from '../../core';
 import { useActions, useDerived, useScenario, useWorkbenchStore, withDesignStormOnWorkbench } from '../../store';
 import { toScenarioStorm } from '../../store/edits';
 import { usePins, useServices } from '../services/services';
@@ -109,7 +109,7 @@ export function DesignStormView() {
   const depth = (mm: number): string => `${formatValue(toDisplay('depth', mm, units))} ${depthUnit}`;
   const designText =
     fromSet && param
-      ? `${param.label} ${formatValue(paramToDisplay(param.unit, (fromSet as unknown as Record<string, number>)[fits.parameter] ?? NaN, units))} ${paramUnitText(param.unit, units)}`
+      ? `${param.label} ${formatValue(paramToDisplay(param.unit, methodNumber(fromSet, fits.parameter) ?? NaN, units))} ${paramUnitText(param.unit, units)}`
       : null;
   const messageId = 'design-form-problem';
   const badField = built.ok ? null : built.field;
