@@ -12,10 +12,10 @@ import { RainfallToolbar } from './rainfall/RainfallToolbar';
 import { ResultsPanel } from './results/ResultsPanel';
 import { DrawableChart, RainfallTools, StormInputProvider, StormPanels } from './storm-input';
 import { PrintReport } from './export/PrintReport';
-import { LinkNotice, ScenarioBar } from './share';
+import { ScenarioBar } from './share';
 import { ScenarioServicesProvider, type ScenarioServices } from './services';
 import { useNumberFormat } from './number-format';
-import { usePins } from './services/services';
+import { useLinkState, usePins } from './services/services';
 import { ViewTabs } from './layout/ViewTabs';
 import { lazyPart } from './layout/LazyPart';
 import { UpdateNotice } from './layout/UpdateNotice';
@@ -37,6 +37,14 @@ const SeparationPanel = lazyPart('baseflow separation', () =>
 function RecordSeparation() {
   const hasRecord = useScenario((s) => s.streamflow !== null);
   return hasRecord ? <SeparationPanel /> : null;
+}
+
+// What came in a link, and the choices it leaves: loaded when a link has been opened.
+const LinkNoticeBody = lazyPart('link notice', () => import('./share/LinkNotice').then((m) => m.LinkNotice));
+
+/** The notice about a shared link, fetched once a link has been opened. */
+function LinkNotice() {
+  return useLinkState().kind === 'none' ? null : <LinkNoticeBody />;
 }
 
 /** The comparison of pinned scenarios, fetched once something is pinned. */

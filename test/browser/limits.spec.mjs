@@ -115,6 +115,8 @@ export const tests = [
         await page.getByRole('alert').filter({ hasText: 'Set-aside copies' }).waitFor();
         await page.getByRole('button', { name: 'Saved scenarios' }).click();
         const copies = page.getByRole('list', { name: 'Set-aside copies' });
+        // The saved list's panel loads its code on first use: wait for it before counting.
+        await copies.waitFor({ timeout: 10_000 }).catch(() => {});
         check((await copies.getByRole('listitem').count()) === 1, 'the set-aside copy is not listed');
         const [file] = await Promise.all([
           page.waitForEvent('download'),

@@ -1,7 +1,7 @@
 // @vitest-environment jsdom
 import { screen } from '@testing-library/react';
 import { describe, expect, it } from 'vitest';
-import { renderWorkbench } from '../helpers/render';
+import { lazyPartsLoaded, renderWorkbench } from '../helpers/render';
 import { FOUR_EVENTS } from '../helpers/event-fixtures';
 import { FOUR_BARS } from '../helpers/scenario-fixtures';
 
@@ -15,6 +15,7 @@ const LONG = 'n'.repeat(200);
 describe('name fields keep within the cap, with a message', () => {
   it('the scenario name', async () => {
     const { user, scenario } = renderWorkbench();
+    await lazyPartsLoaded();
     const field = screen.getByRole('textbox', { name: 'Scenario name' });
     await user.clear(field);
     await user.click(field);
@@ -33,7 +34,9 @@ describe('name fields keep within the cap, with a message', () => {
 
   it('an event name', async () => {
     const { user, scenario } = renderWorkbench(FOUR_EVENTS);
+    await lazyPartsLoaded();
     await user.click(screen.getByRole('tab', { name: 'Event set' }));
+    await lazyPartsLoaded();
     const field = screen.getByRole('textbox', { name: 'Name of event 2' });
     const before = scenario().eventSet.events[1]?.name;
     await user.click(field);

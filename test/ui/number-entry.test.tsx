@@ -13,7 +13,7 @@ import {
   startNumberFormat,
 } from '../../src/ui/number-format';
 import { totalsOf } from '../../src/ui/results/totals';
-import { renderWorkbench } from '../helpers/render';
+import { lazyPartsLoaded, renderWorkbench } from '../helpers/render';
 import { FOUR_BARS } from '../helpers/scenario-fixtures';
 
 // FOUR_BARS (invented): four 30-min bars of 2, 6, 10, 2 mm (4, 12, 20, 4 mm/h), 20 mm in all, 1 km², φ = 8 mm/h.
@@ -39,6 +39,7 @@ function expectNoWildNumbers(): void {
 describe('a number typed with thousands separators means what the screen means by them', () => {
   it('"4,500" typed as an observed volume is 4,500 m³, not 4.5 m³', async () => {
     const { user, scenario } = renderWorkbench();
+    await lazyPartsLoaded();
     await user.click(screen.getByRole('radio', { name: 'Volume' }));
     const observed = screen.getByRole('textbox', { name: 'Observed runoff' });
     await user.type(observed, '4,500');
@@ -49,6 +50,7 @@ describe('a number typed with thousands separators means what the screen means b
 
   it('"2,500" typed as an area in ha is 25 km², not 2.5 ha', async () => {
     const { user, scenario } = renderWorkbench();
+    await lazyPartsLoaded();
     const area = screen.getByRole('textbox', { name: 'Catchment area' });
     await user.clear(area);
     await user.type(area, '2,500');
@@ -61,6 +63,7 @@ describe('a number typed with thousands separators means what the screen means b
   it('in the 1.234,5 format the same area is typed "2.500" and a decimal "0,5"', async () => {
     chooseNumberFormat('1.234,5');
     const { user, scenario } = renderWorkbench();
+    await lazyPartsLoaded();
     const area = screen.getByRole('textbox', { name: 'Catchment area' });
     // 1 km² shows as 100 ha.
     expect(area).toHaveValue('100');
@@ -85,6 +88,7 @@ describe('a number typed with thousands separators means what the screen means b
 describe('a typed parameter out of range is not applied anywhere', () => {
   it('CN "120" leaves CN 75 in the results and the history, and says so (not CN 12)', async () => {
     const { user, scenario, store } = renderWorkbench(CURVE_NUMBER);
+    await lazyPartsLoaded();
     const cn = screen.getByRole('textbox', { name: 'Curve number CN' });
     await user.clear(cn);
     await user.type(cn, '120');
@@ -100,6 +104,7 @@ describe('a typed parameter out of range is not applied anywhere', () => {
 
   it('runoff coefficient "1.5" leaves 0.4 in use: 8 mm of excess, not 20', async () => {
     const { user, scenario } = renderWorkbench(PROPORTIONAL);
+    await lazyPartsLoaded();
     const c = screen.getByRole('textbox', { name: 'Runoff coefficient' });
     await user.clear(c);
     await user.type(c, '1.5');
@@ -111,6 +116,7 @@ describe('a typed parameter out of range is not applied anywhere', () => {
 
   it('a good value typed after a refused one is applied as one undo step', async () => {
     const { user, scenario, store } = renderWorkbench(PROPORTIONAL);
+    await lazyPartsLoaded();
     const c = screen.getByRole('textbox', { name: 'Runoff coefficient' });
     await user.clear(c);
     await user.type(c, '1.5');
@@ -126,6 +132,7 @@ describe('a typed parameter out of range is not applied anywhere', () => {
 describe('values beyond what a field can mean are refused, quoting what was typed', () => {
   it('an observed depth of 10³⁰⁰ mm is refused and nothing on screen prints a wild number', async () => {
     const { user, scenario } = renderWorkbench();
+    await lazyPartsLoaded();
     const observed = screen.getByRole('textbox', { name: 'Observed runoff (mm)' });
     await user.type(observed, '1e300');
     expect(scenario().observed).toBeNull();
@@ -137,6 +144,7 @@ describe('values beyond what a field can mean are refused, quoting what was type
 
   it('a loss rate of a 300-digit number is refused, quoted cut short', async () => {
     const { user, scenario } = renderWorkbench();
+    await lazyPartsLoaded();
     const rate = screen.getByRole('textbox', { name: 'Loss rate φ (mm/h)' });
     await user.clear(rate);
     await user.click(rate);
@@ -148,6 +156,7 @@ describe('values beyond what a field can mean are refused, quoting what was type
 
   it('99,999,999 mm in a bar is refused in the bar table, and the bar keeps its depth', async () => {
     const { user, scenario } = renderWorkbench();
+    await lazyPartsLoaded();
     const table = screen.getByRole('grid', { name: 'Bar table' });
     const depth = within(table)
       .getAllByRole('gridcell')
@@ -166,6 +175,7 @@ describe('values beyond what a field can mean are refused, quoting what was type
 describe('matching reads as applied only when it is', () => {
   it('Fit is off while the observed runoff typed is not a number, and the stale answer goes', async () => {
     const { user } = renderWorkbench();
+    await lazyPartsLoaded();
     const observed = screen.getByRole('textbox', { name: 'Observed runoff (mm)' });
     await user.type(observed, '4.5');
     // Bars above φ ∈ (4, 12): (6 − 0.5φ) + (10 − 0.5φ) = 16 − φ = 4.5 → φ = 11.5 mm/h.
@@ -183,6 +193,7 @@ describe('matching reads as applied only when it is', () => {
 
   it('the preview says "Fit would set …" until Fit is pressed; then the value is called fitted', async () => {
     const { user, store, scenario } = renderWorkbench();
+    await lazyPartsLoaded();
     await user.type(screen.getByRole('textbox', { name: 'Observed runoff (mm)' }), '4.5');
     expect(screen.queryByText(/^Fitted:/)).toBeNull();
     // The report and the compare table take their totals from totalsOf: nothing fitted is in use yet.
@@ -226,6 +237,7 @@ describe('matching reads as applied only when it is', () => {
 describe('storm tools, drawing and design storms read numbers the one way, within what they can mean', () => {
   async function openTools(user: ReturnType<typeof renderWorkbench>['user']) {
     await user.click(screen.getByRole('button', { name: 'Storm tools' }));
+    await lazyPartsLoaded();
     return screen.getByRole('region', { name: 'Storm tools' });
   }
   async function fill(user: ReturnType<typeof renderWorkbench>['user'], field: HTMLElement, text: string) {
@@ -235,6 +247,7 @@ describe('storm tools, drawing and design storms read numbers the one way, withi
 
   it('a scale factor that would give a bar of 10³⁰⁰ mm is refused, and the storm is kept', async () => {
     const { user, scenario } = renderWorkbench();
+    await lazyPartsLoaded();
     const tools = await openTools(user);
     const factor = within(tools).getByRole('textbox', { name: 'Scale factor' });
     await fill(user, factor, '1e300');
@@ -249,6 +262,7 @@ describe('storm tools, drawing and design storms read numbers the one way, withi
 
   it('a total depth of "99,999,999" mm is refused, quoted; "1,000" is a thousand millimetres', async () => {
     const { user, scenario } = renderWorkbench();
+    await lazyPartsLoaded();
     const tools = await openTools(user);
     const total = within(tools).getByRole('textbox', { name: 'Total depth (mm)' });
     await fill(user, total, '99,999,999');
@@ -263,6 +277,7 @@ describe('storm tools, drawing and design storms read numbers the one way, withi
 
   it('a resampling step of a year and more is refused in the field’s own unit', async () => {
     const { user, scenario } = renderWorkbench();
+    await lazyPartsLoaded();
     const tools = await openTools(user);
     const step = within(tools).getByRole('textbox', { name: 'New time step (min)' });
     await fill(user, step, '1e9');
@@ -276,7 +291,9 @@ describe('storm tools, drawing and design storms read numbers the one way, withi
 
   it('a new empty storm of "1,500" bars has fifteen hundred bars; a bar duration of 10³⁰⁰ min is refused', async () => {
     const { user, scenario } = renderWorkbench();
+    await lazyPartsLoaded();
     await user.click(screen.getByRole('button', { name: 'Draw bars' }));
+    await lazyPartsLoaded();
     const panel = screen.getByRole('region', { name: 'Drawing bars' });
     const count = within(panel).getByRole('textbox', { name: 'Number of bars' });
     const step = within(panel).getByRole('textbox', { name: 'Bar duration (min)' });
@@ -295,7 +312,9 @@ describe('storm tools, drawing and design storms read numbers the one way, withi
 describe('the design storm form reads numbers the one way', () => {
   it('a uniform storm of "1,000" mm holds a thousand millimetres; 10³⁰⁰ mm is refused by name', async () => {
     const { user } = renderWorkbench();
+    await lazyPartsLoaded();
     await user.click(screen.getByRole('tab', { name: 'Design storm' }));
+    await lazyPartsLoaded();
     await user.click(screen.getByRole('radio', { name: 'Uniform depth' }));
     const depth = screen.getByRole('textbox', { name: 'Storm depth (mm)' });
     await user.clear(depth);
@@ -316,6 +335,7 @@ describe('the design storm form reads numbers the one way', () => {
 describe('rain beyond the world’s records is flagged in plain words above the chart', () => {
   it('500 mm typed into a 30-min bar is applied, and the Rainfall region says it passes the records', async () => {
     const { user, scenario } = renderWorkbench();
+    await lazyPartsLoaded();
     const rainfall = screen.getByRole('region', { name: 'Rainfall' });
     expect(within(rainfall).queryByRole('note')).toBeNull();
     const table = screen.getByRole('grid', { name: 'Bar table' });
@@ -336,6 +356,7 @@ describe('rain beyond the world’s records is flagged in plain words above the 
 describe('the number format is the reader’s, kept in this browser and never in the scenario', () => {
   it('choosing 1 234,5 rewrites every number on screen and reads typed numbers that way', async () => {
     const { user, scenario } = renderWorkbench();
+    await lazyPartsLoaded();
     const before = scenario();
     // FOUR_BARS with φ = 8 mm/h: excess 6 − 4 + 10 − 4 = 8 mm over 1 km² = 8,000 m³.
     expect(screen.getByLabelText('Runoff volume')).toHaveTextContent('8,000 m³');

@@ -5,7 +5,7 @@ import { MAX_RECORD_H } from '../../src/core';
 import type { Scenario } from '../../src/scenario/types';
 import { NO_CLOCK_TEXT, formatClockText, formatWallDate, formatWallTime, wallClockMs } from '../../src/ui/chart/clock';
 import { elapsedText } from '../../src/ui/storm-input/bar-times';
-import { renderWorkbench } from '../helpers/render';
+import { lazyPartsLoaded, renderWorkbench } from '../helpers/render';
 import { FOUR_BARS } from '../helpers/scenario-fixtures';
 import { WITH_TRIANGLE } from '../helpers/flow-fixtures';
 
@@ -103,6 +103,7 @@ const NEAR_500_YEARS: Scenario = {
 describe('a time or duration typed past the limits is refused beside its field', () => {
   it('a bar duration of 10¹² min in the bar table of a storm with a start clock', async () => {
     const { user, scenario, store } = renderWorkbench(CLOCKED);
+    await lazyPartsLoaded();
     await user.click(durationCell(1));
     await user.keyboard('1e12{Enter}');
     const editor = screen.getByRole('textbox', { name: 'Bar 1 duration' });
@@ -115,6 +116,7 @@ describe('a time or duration typed past the limits is refused beside its field',
 
   it('a bar duration that would make the storm run past 500 years, refused by the store with the bar named', async () => {
     const { user, scenario, store } = renderWorkbench(NEAR_500_YEARS);
+    await lazyPartsLoaded();
     await user.click(durationCell(2));
     // 527,040 min = 8,784 h, a year of 366 days: the most the plausible range lets a bar be.
     await user.keyboard('527040{Enter}');
@@ -129,7 +131,9 @@ describe('a time or duration typed past the limits is refused beside its field',
 
   it('a new empty storm of 10¹² min bars in the drawing panel', async () => {
     const { user, scenario } = renderWorkbench(CLOCKED);
+    await lazyPartsLoaded();
     await user.click(screen.getByRole('button', { name: 'Draw bars' }));
+    await lazyPartsLoaded();
     const panel = screen.getByRole('region', { name: 'Drawing bars' });
     const step = within(panel).getByRole('textbox', { name: 'Bar duration (min)' });
     await retype(user, step, '1e12');
@@ -140,7 +144,9 @@ describe('a time or duration typed past the limits is refused beside its field',
 
   it('a resample step of 10¹² min and a storm start in the year 24 in Storm tools', async () => {
     const { user, scenario } = renderWorkbench(CLOCKED);
+    await lazyPartsLoaded();
     await user.click(screen.getByRole('button', { name: 'Storm tools' }));
+    await lazyPartsLoaded();
     const tools = screen.getByRole('region', { name: 'Storm tools' });
     const step = within(tools).getByRole('textbox', { name: 'New time step (min)' });
     await retype(user, step, '1e12');
@@ -159,7 +165,9 @@ describe('a time or duration typed past the limits is refused beside its field',
 
   it('a design storm of 10¹² min', async () => {
     const view = renderWorkbench(CLOCKED);
+    await lazyPartsLoaded();
     await view.user.click(screen.getByRole('tab', { name: 'Design storm' }));
+    await lazyPartsLoaded();
     await retype(view.user, screen.getByRole('textbox', { name: 'Storm duration (min)' }), '1e12');
     expect(screen.getByRole('alert')).toHaveTextContent(
       // A year of 366 days = 527,040 min (as above).
@@ -170,6 +178,7 @@ describe('a time or duration typed past the limits is refused beside its field',
 
   it('a record offset of 10¹² h', async () => {
     const { user, scenario, store } = renderWorkbench(WITH_TRIANGLE);
+    await lazyPartsLoaded();
     const offset = screen.getByLabelText(/^Record start after storm start/);
     await retype(user, offset, '1e12');
     expect(offset).toHaveAccessibleDescription(

@@ -17,7 +17,10 @@ import {
 import { useActions, useDerived, useScenario } from '../../store';
 import { NumberField } from '../fields/NumberField';
 import { paramFromDisplay, paramPlausible, paramToDisplay, paramUnitText } from '../units';
-import { SoilPresets } from './SoilPresets';
+import { lazyPart } from '../layout/LazyPart';
+
+// Green–Ampt's soil texture values load when that method is chosen, not with the first screen.
+const SoilPresets = lazyPart('soil texture values', () => import('./SoilPresets').then((m) => m.SoilPresets));
 
 /** The core's own message for a candidate parameter value, or null when the core accepts it. */
 function coreProblem(method: LossMethod, key: string, value: number | boolean | string): string | null {

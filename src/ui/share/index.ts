@@ -3,7 +3,6 @@
 import './share.css';
 
 export { ScenarioBar } from './ScenarioBar';
-export { LinkNotice } from './LinkNotice';
 export { linkLengthText, LONG_LINK_CHARS } from './CopyLink';
-// LibraryPanel is not exported here: ScenarioBar loads it when the saved list is first opened.
+// LibraryPanel and LinkNotice are not exported here: ScenarioBar and App.tsx load them when first needed.
 // The page's services (storage, clipboard, downloads, pins) live in ../services, below this panel.

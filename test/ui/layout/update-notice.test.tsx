@@ -33,7 +33,7 @@ describe('the new-version notice', () => {
     const { user, log, newVersion } = renderWithUpdates(memoryStorage());
     expect(screen.queryByRole('region', { name: 'New version' })).toBeNull();
     newVersion();
-    const notice = screen.getByRole('region', { name: 'New version' });
+    const notice = await screen.findByRole('region', { name: 'New version' });
     expect(notice).toHaveTextContent(
       'A new version of Raincut is ready. Reload when convenient to use it. Your scenario is saved in this browser and opens as you left it.',
     );
@@ -46,7 +46,7 @@ describe('the new-version notice', () => {
   it('warns before a reload would lose a scenario the browser cannot save', async () => {
     const { user, log, newVersion } = renderWithUpdates(null);
     newVersion();
-    const notice = screen.getByRole('region', { name: 'New version' });
+    const notice = await screen.findByRole('region', { name: 'New version' });
     expect(notice).toHaveTextContent(
       'This browser does not let Raincut save here, so a reload would lose the scenario on screen. Save it as a file first.',
     );

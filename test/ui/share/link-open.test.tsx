@@ -30,7 +30,7 @@ describe('opening a share link', () => {
     expect(nameField()).toHaveValue(SHARED.name);
     expect(screen.getByRole('radio', { name: 'US customary' })).toBeChecked();
     expect(screen.getByRole('combobox', { name: 'Loss method' })).toHaveValue('horton');
-    const notice = screen.getByRole('region', { name: `Shared scenario: “${SHARED.name}”` });
+    const notice = await screen.findByRole('region', { name: `Shared scenario: “${SHARED.name}”` });
     expect(notice).toHaveTextContent('Your own scenario “My own work” stays saved in this browser as it was.');
     // Editing the shared one saves nothing either.
     act(() => actions.setBarDepth(0, 2.5));

@@ -5,6 +5,7 @@ import { LIBRARY_FORMAT_TAG, LIBRARY_KEY, LIBRARY_VERSION, createScenarioLibrary
 import { SET_ASIDE_PREFIX, STORAGE_KEY } from '../../../src/store';
 import { FOUR_BARS, memoryStorage } from '../../helpers/scenario-fixtures';
 import { SHARED, renderTools, savedText } from '../../helpers/render-tools';
+import { lazyPartsLoaded } from '../../helpers/render';
 
 // Saved data Raincut set aside (damaged, past the limits this version reads,
 // or the scenario that stopped the screen) is listed under Saved scenarios,
@@ -37,6 +38,7 @@ function browserWithCopies() {
 
 async function openCopies(user: ReturnType<typeof renderTools>['user']) {
   await user.click(screen.getByRole('button', { name: 'Saved scenarios' }));
+  await lazyPartsLoaded();
   const panel = screen.getByRole('region', { name: 'Saved scenarios' });
   return { panel, copies: () => within(panel).getByRole('list', { name: 'Set-aside copies' }) };
 }
@@ -50,6 +52,7 @@ const savedNames = (storage: ReturnType<typeof memoryStorage>) =>
 describe('set-aside copies in Saved scenarios', { timeout: 20_000 }, () => {
   it('are listed oldest first, each with what it held and when', async () => {
     const { user } = renderTools({ storage: browserWithCopies() });
+    await lazyPartsLoaded();
     const { copies } = await openCopies(user);
     const items = within(copies()).getAllByRole('listitem');
     expect(items).toHaveLength(3);
@@ -62,6 +65,7 @@ describe('set-aside copies in Saved scenarios', { timeout: 20_000 }, () => {
   it('Restore puts what this version reads into the saved list, and says why the rest cannot be', async () => {
     const storage = browserWithCopies();
     const { user, scenario } = renderTools({ storage });
+    await lazyPartsLoaded();
     const { panel, copies } = await openCopies(user);
     const [first, second, list] = within(copies()).getAllByRole('listitem') as [HTMLElement, HTMLElement, HTMLElement];
 
@@ -87,6 +91,7 @@ describe('set-aside copies in Saved scenarios', { timeout: 20_000 }, () => {
 
   it('Download gives the text exactly as it was kept', async () => {
     const { user, saved } = renderTools({ storage: browserWithCopies() });
+    await lazyPartsLoaded();
     const { copies } = await openCopies(user);
     const second = within(copies()).getAllByRole('listitem')[1] as HTMLElement;
     await user.click(within(second).getByRole('button', { name: /^Download/ }));
@@ -97,6 +102,7 @@ describe('set-aside copies in Saved scenarios', { timeout: 20_000 }, () => {
   it('Delete removes the copy, and Undo brings it back', async () => {
     const storage = browserWithCopies();
     const { user } = renderTools({ storage });
+    await lazyPartsLoaded();
     const { panel, copies } = await openCopies(user);
     const first = within(copies()).getAllByRole('listitem')[0] as HTMLElement;
     await user.click(within(first).getByRole('button', { name: /^Delete/ }));
@@ -110,6 +116,7 @@ describe('set-aside copies in Saved scenarios', { timeout: 20_000 }, () => {
   it('a saved scenario refused at start-up is listed at once', async () => {
     const storage = memoryStorage({ [STORAGE_KEY]: PAST_LIMITS });
     const { user } = renderTools({ storage });
+    await lazyPartsLoaded();
     expect(screen.getByRole('alert')).toHaveTextContent('Set-aside copies');
     const { copies } = await openCopies(user);
     expect(within(copies()).getAllByRole('listitem')).toHaveLength(1);
@@ -117,6 +124,7 @@ describe('set-aside copies in Saved scenarios', { timeout: 20_000 }, () => {
 
   it('with nothing set aside, the section is not shown', async () => {
     const { user } = renderTools({ storage: memoryStorage() });
+    await lazyPartsLoaded();
     const { panel } = await openCopies(user);
     expect(within(panel).queryByRole('heading', { name: 'Set-aside copies' })).toBeNull();
   });

@@ -3,11 +3,12 @@
 // FOUR_BARS (invented) has 30-min bars. Expected values are worked by hand.
 import { screen, waitFor, within } from '@testing-library/react';
 import { describe, expect, it } from 'vitest';
-import { renderWorkbench } from '../../helpers/render';
+import { lazyPartsLoaded, renderWorkbench } from '../../helpers/render';
 import { FOUR_BARS } from '../../helpers/scenario-fixtures';
 
 async function openPaste(user: ReturnType<typeof renderWorkbench>['user']) {
   await user.click(screen.getByRole('button', { name: 'Paste rainfall…' }));
+  await lazyPartsLoaded();
   return screen.getByRole('dialog', { name: 'Paste rainfall' });
 }
 
@@ -19,6 +20,7 @@ async function pasteText(user: ReturnType<typeof renderWorkbench>['user'], text:
 describe('the paste dialog', () => {
   it('reads a spreadsheet row as bars across it, at the storm’s own step', async () => {
     const { user, scenario } = renderWorkbench();
+    await lazyPartsLoaded();
     const dialog = await openPaste(user);
     await pasteText(user, '1.2\t3.4\t5.6');
     // 1.2 + 3.4 + 5.6 = 10.2 mm in three 30-min bars (the storm on screen has 30-min bars).
@@ -34,6 +36,7 @@ describe('the paste dialog', () => {
 
   it('takes the storm’s step for a column without times, not 60 min', async () => {
     const { user } = renderWorkbench();
+    await lazyPartsLoaded();
     const dialog = await openPaste(user);
     await pasteText(user, '1\n2\n3\n');
     await waitFor(() => expect(within(dialog).getByRole('textbox', { name: 'Time step (min)' })).toHaveValue('30'));
@@ -41,6 +44,7 @@ describe('the paste dialog', () => {
 
   it('a cancelled paste leaves nothing behind for the next opening', async () => {
     const { user, scenario } = renderWorkbench();
+    await lazyPartsLoaded();
     let dialog = await openPaste(user);
     await pasteText(user, '1\n2\n3\n');
     await user.selectOptions(within(dialog).getByRole('combobox', { name: 'Unit' }), 'in');
@@ -56,6 +60,7 @@ describe('the paste dialog', () => {
 
   it('"1,200 / 3,500" is a column of grouped numbers, written back as the screen writes them', async () => {
     const { user } = renderWorkbench();
+    await lazyPartsLoaded();
     const dialog = await openPaste(user);
     await pasteText(user, '1,200\n3,500\n');
     // 1,200 + 3,500 = 4,700 mm: whole and grouped, as the screen writes a result.
@@ -69,6 +74,7 @@ describe('the paste dialog', () => {
 
   it('offers spaces and aligned columns as separators, and skipping blank lines with their count', async () => {
     const { user } = renderWorkbench();
+    await lazyPartsLoaded();
     const dialog = await openPaste(user);
     await pasteText(user, '0:30 1.5\n\n1:00 2.5\n');
     const separator = within(dialog).getByRole('combobox', { name: 'Separator' });
