@@ -39,7 +39,11 @@ async function errors(path: string, text: string): Promise<string[]> {
     .map((m) => `${m.ruleId}: ${m.message}`);
 }
 
-describe('the layer rules, as ESLint applies them', () => {
+// ESLint follows each file's imports through the tree (no-cycle): on a loaded
+// machine that outlasts the default test timeout. No time is asserted here.
+const LINT_TIMEOUT_MS = 180_000;
+
+describe('the layer rules, as ESLint applies them', { timeout: LINT_TIMEOUT_MS }, () => {
   it('leave the real files clean (so each error below comes from the line added)', async () => {
     for (const path of [
       'src/core/errors.ts',
