@@ -1,5 +1,6 @@
 // `npm run build:single`: the workbench as one self-contained HTML file, dist-single/raincut.html
 // (build/single-file.ts). The served app's config, less its service worker, plus the single-file plugins.
+import { fileURLToPath } from 'node:url';
 import { defineConfig, type Plugin, type PluginOption } from 'vite';
 import served from './vite.config.ts';
 import { singleFileBuild } from './build/single-file.ts';
@@ -16,7 +17,11 @@ function withoutServiceWorker(options: readonly PluginOption[]): Plugin[] {
   return plugins;
 }
 
+// The one page has no file beside it to start a worker from: long imports are read on the page instead.
+const pageReader = fileURLToPath(new URL('./src/ui/import-kit/start-worker.page.ts', import.meta.url));
+
 export default defineConfig({
   ...served,
+  resolve: { ...served.resolve, alias: [{ find: /^\.\/start-worker$/, replacement: pageReader }] },
   plugins: [...withoutServiceWorker(served.plugins ?? []), ...singleFileBuild()],
 });

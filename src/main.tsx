@@ -4,6 +4,7 @@ import { registerSW } from 'virtual:pwa-register';
 import { createUpdateChannel } from './offline/updates';
 import { createRoot } from 'react-dom/client';
 import { DEMO_SCENARIO } from './scenario/demo';
+import { isScenarioLink, loadLinkReader } from './scenario/link';
 import { type StorageLike } from './store';
 import { SKIP_SAVED_KEY, createCrashRecovery } from './store/crash';
 import { startWorkbench } from './store/start';
@@ -45,42 +46,56 @@ function takeSkipSaved(): boolean {
     return false;
   }
 }
-// The saved scenario, and a share link in the address shown over it unsaved until the user chooses (src/store/link-session.ts).
-const { store, link } = startWorkbench({
-  storage,
-  fragment: window.location.hash,
-  fallback: DEMO_SCENARIO,
-  nowIso: new Date().toISOString(),
-  clearFragment: () =>
-    window.history.replaceState(window.history.state, '', window.location.pathname + window.location.search),
-  skipSaved: takeSkipSaved(),
-});
-// Save a change made just before the page closes or reloads.
-window.addEventListener('pagehide', () => link.flush());
-document.addEventListener('visibilitychange', () => {
-  if (document.visibilityState === 'hidden') link.flush();
-});
-// A link pasted into the address of an open page changes only the fragment.
-window.addEventListener('hashchange', () => link.open(window.location.hash));
-const services = browserServices({ storage, link });
-// After a crash: what was saved, and a way out that loses nothing (src/store/crash.ts).
-const recovery = createCrashRecovery({ store, link, storage, now: () => new Date(), tabStorage: tab });
-const downloadSaved = (text: string): void =>
-  downloadBlob(new Blob([text], { type: 'application/json' }), 'raincut-saved-scenario.json');
-// After the first visit the app runs with no network: a service worker keeps it (build/offline-app.ts). A new
-// version waits until the user reloads (src/offline/updates.ts). The single-file build registers nothing.
-const updates = createUpdateChannel({
-  register: registerSW,
-  beforeReload: () => link.flush(),
-  reloadPage: () => window.location.reload(),
-});
+/** Starts the workbench and draws the page. */
+function start(): void {
+  // The saved scenario, and a share link in the address shown over it unsaved until the user chooses (src/store/link-session.ts).
+  const { store, link } = startWorkbench({
+    storage,
+    fragment: window.location.hash,
+    fallback: DEMO_SCENARIO,
+    nowIso: new Date().toISOString(),
+    clearFragment: () =>
+      window.history.replaceState(window.history.state, '', window.location.pathname + window.location.search),
+    skipSaved: takeSkipSaved(),
+  });
+  // Save a change made just before the page closes or reloads.
+  window.addEventListener('pagehide', () => link.flush());
+  document.addEventListener('visibilitychange', () => {
+    if (document.visibilityState === 'hidden') link.flush();
+  });
+  // A link pasted into the address of an open page changes only the fragment.
+  window.addEventListener('hashchange', () => {
+    void loadLinkReader()
+      .catch(() => {})
+      .then(() => link.open(window.location.hash));
+  });
+  const services = browserServices({ storage, link });
+  // After a crash: what was saved, and a way out that loses nothing (src/store/crash.ts).
+  const recovery = createCrashRecovery({ store, link, storage, now: () => new Date(), tabStorage: tab });
+  const downloadSaved = (text: string): void =>
+    downloadBlob(new Blob([text], { type: 'application/json' }), 'raincut-saved-scenario.json');
+  // After the first visit the app runs with no network: a service worker keeps it (build/offline-app.ts). A new
+  // version waits until the user reloads (src/offline/updates.ts). The single-file build registers nothing.
+  const updates = createUpdateChannel({
+    register: registerSW,
+    beforeReload: () => link.flush(),
+    reloadPage: () => window.location.reload(),
+  });
 
-const root = document.getElementById('root');
-if (!root) throw new Error('index.html has no #root element');
-createRoot(root).render(
-  <StrictMode>
-    <ErrorBoundary recovery={recovery} download={downloadSaved}>
-      <App store={store} services={services} updates={updates} />
-    </ErrorBoundary>
-  </StrictMode>,
-);
+  const root = document.getElementById('root');
+  if (!root) throw new Error('index.html has no #root element');
+  createRoot(root).render(
+    <StrictMode>
+      <ErrorBoundary recovery={recovery} download={downloadSaved}>
+        <App store={store} services={services} updates={updates} />
+      </ErrorBoundary>
+    </StrictMode>,
+  );
+}
+
+// A share link in the address needs the link reader's decompressor, fetched only then (src/scenario/link.ts).
+if (isScenarioLink(window.location.hash))
+  void loadLinkReader()
+    .catch(() => {})
+    .then(start);
+else start();

@@ -15,6 +15,10 @@ if (pinned !== undefined) {
   fc.configureGlobal({ seed });
 }
 
+// Share links unpack with a decompressor the app fetches only when a link is opened (src/scenario/link.ts);
+// tests open links throughout, so it is loaded once here.
+await (await import('../src/scenario/link')).loadLinkReader();
+
 if (typeof document !== 'undefined') {
   await import('@testing-library/jest-dom/vitest');
   const { cleanup } = await import('@testing-library/react');

@@ -83,4 +83,16 @@ export * from './record';
 export * from './uncertainty';
 // Limits of time: how long a record may span, how short a bar may be, which years a start clock may name.
 export * from './time-limits';
-export { wallClockMs, wallClockParts, hoursBetweenClocks, namesZone, type WallClockParts } from './wall-clock';
+export {
+  wallClockMs,
+  wallClockParts,
+  hoursBetweenClocks,
+  namesZone,
+  readIsoDateTime,
+  instantMs,
+  daysInMonth,
+  daysFromCivil,
+  isLeapYear,
+  type IsoReading,
+  type WallClockParts,
+} from './wall-clock';

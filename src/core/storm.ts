@@ -1,4 +1,5 @@
 import { InputError } from './errors';
+import { readIsoDateTime } from './wall-clock';
 import {
   LONGEST_SPAN_TEXT,
   MAX_RECORD_H,
@@ -154,7 +155,8 @@ export function validateStormLists(storm: Storm): void {
 export function validateStormStart(storm: Storm): void {
   const start = storm.startIso;
   if (start === undefined) return;
-  if (typeof start !== 'string' || Number.isNaN(Date.parse(start))) {
+  const read = typeof start === 'string' ? readIsoDateTime(start) : null;
+  if (read === null || !read.hasTime) {
     throw new InputError('startIso', `The storm start "${String(start)}" is not an ISO 8601 date-time.`);
   }
   const year = clockYearProblem('The storm start', start);

@@ -7,26 +7,92 @@
  * a zone-free axis of milliseconds that uses UTC's arithmetic, so the
  * browser's own zone never enters.
  */
-const WALL = /^(\d{4})-(\d{2})-(\d{2})(?:T(\d{2}):(\d{2})(?::(\d{2})(\.\d+)?)?)?/;
+/** Any ISO 8601 date-time or date, read field by field; the zone, when written, is "Z" or "±hh:mm". */
+const ISO = /^(\d{4})-(\d{2})-(\d{2})(?:T(\d{2}):(\d{2})(?::(\d{2})(\.\d{1,9})?)?)?(Z|[+-]\d{2}:\d{2})?$/;
 const ZONE = /(?:Z|[+-]\d{2}:\d{2})$/;
+const MS_PER_DAY = 86_400_000;
+
+/** True for a leap year of the Gregorian calendar (every 4th year, not every 100th, every 400th). */
+export function isLeapYear(year: number): boolean {
+  return (year % 4 === 0 && year % 100 !== 0) || year % 400 === 0;
+}
+
+/** Days in a month (1 to 12) of a Gregorian year; 0 for a month that does not exist. */
+export function daysInMonth(year: number, month: number): number {
+  if (month === 2) return isLeapYear(year) ? 29 : 28;
+  if (month < 1 || month > 12) return 0;
+  return month === 4 || month === 6 || month === 9 || month === 11 ? 30 : 31;
+}
+
+/**
+ * Days from 1970-01-01 to a date of the proleptic Gregorian calendar, in
+ * closed form (the days-from-civil algorithm of Hinnant, "chrono-Compatible
+ * Low-Level Date Algorithms", 2013): no Date object, every year alike.
+ */
+export function daysFromCivil(year: number, month: number, day: number): number {
+  const y = month <= 2 ? year - 1 : year;
+  const era = Math.floor(y / 400);
+  const yoe = y - era * 400;
+  const doy = Math.floor((153 * (month + (month > 2 ? -3 : 9)) + 2) / 5) + day - 1;
+  const doe = yoe * 365 + Math.floor(yoe / 4) - Math.floor(yoe / 100) + doy;
+  return era * 146097 + doe - 719468;
+}
+
+/** A date-time as written: its wall-clock reading on the zone-free axis, and its zone's offset in minutes (null: none written). */
+export interface IsoReading {
+  readonly wallMs: number;
+  readonly zoneMinutes: number | null;
+  /** Whether a time of day was written ("2026-07-14" has none). */
+  readonly hasTime: boolean;
+}
+
+/**
+ * The one strict reader of ISO 8601 date-times in Raincut
+ * ("2026-07-14", "2026-07-14T15:00", "2026-07-14T15:00:00.5Z",
+ * "2026-07-14T15:00+10:00"): every field in range (no 30 February, no
+ * 24:00, no minute 60, a zone within ±23:59), or null. Never throws.
+ */
+export function readIsoDateTime(text: string): IsoReading | null {
+  if (typeof text !== 'string') return null;
+  const m = ISO.exec(text);
+  if (!m) return null;
+  const year = Number(m[1]);
+  const month = Number(m[2]);
+  const day = Number(m[3]);
+  if (day < 1 || day > daysInMonth(year, month)) return null;
+  const hour = m[4] === undefined ? 0 : Number(m[4]);
+  const minute = m[5] === undefined ? 0 : Number(m[5]);
+  const second = m[6] === undefined ? 0 : Number(m[6]);
+  if (hour > 23 || minute > 59 || second > 59) return null;
+  const ms = m[7] === undefined ? 0 : Math.round(Number(m[7]) * 1000);
+  let zoneMinutes: number | null = null;
+  if (m[8] !== undefined) {
+    if (m[8] === 'Z') zoneMinutes = 0;
+    else {
+      const zh = Number(m[8].slice(1, 3));
+      const zm = Number(m[8].slice(4, 6));
+      if (zh > 23 || zm > 59) return null;
+      zoneMinutes = (m[8][0] === '-' ? -1 : 1) * (zh * 60 + zm);
+    }
+  }
+  const wallMs = daysFromCivil(year, month, day) * MS_PER_DAY + ((hour * 60 + minute) * 60 + second) * 1000 + ms;
+  return { wallMs, zoneMinutes, hasTime: m[4] !== undefined };
+}
 
 /** True when the text ends in a zone ("Z", "+10:00"). */
 export function namesZone(iso: string): boolean {
   return ZONE.test(iso);
 }
 
-/** Milliseconds of the wall-clock reading of `iso` on a zone-free axis, or null when it is not a date-time. */
+/** Milliseconds of the wall-clock reading of `iso` on a zone-free axis, or null when it is not a date-time (readIsoDateTime). */
 export function wallClockMs(iso: string): number | null {
-  const m = WALL.exec(iso);
-  if (!m) return null;
-  const n = (i: number): number => (m[i] === undefined ? 0 : Number(m[i]));
-  const ms = m[7] === undefined ? 0 : Math.round(Number(m[7]) * 1000);
-  // setUTCFullYear, not Date.UTC: Date.UTC reads the years 0 to 99 as 1900 to 1999.
-  const d = new Date(0);
-  d.setUTCFullYear(n(1), n(2) - 1, n(3));
-  d.setUTCHours(n(4), n(5), n(6), ms);
-  const t = d.getTime();
-  return Number.isNaN(t) ? null : t;
+  return readIsoDateTime(iso)?.wallMs ?? null;
+}
+
+/** The instant a date-time that names its zone stands for (ms from 1970 UTC), or null without a zone or when unreadable. */
+export function instantMs(iso: string): number | null {
+  const read = readIsoDateTime(iso);
+  return read === null || read.zoneMinutes === null ? null : read.wallMs - read.zoneMinutes * 60_000;
 }
 
 /**
@@ -39,9 +105,9 @@ export function hoursBetweenClocks(
   toIso: string,
 ): { readonly hours: number; readonly asWritten: boolean } | null {
   const zoned = namesZone(fromIso) && namesZone(toIso);
-  const a = zoned ? Date.parse(fromIso) : wallClockMs(fromIso);
-  const b = zoned ? Date.parse(toIso) : wallClockMs(toIso);
-  if (a === null || b === null || Number.isNaN(a) || Number.isNaN(b)) return null;
+  const a = zoned ? instantMs(fromIso) : wallClockMs(fromIso);
+  const b = zoned ? instantMs(toIso) : wallClockMs(toIso);
+  if (a === null || b === null) return null;
   return { hours: (b - a) / 3.6e6, asWritten: !zoned };
 }
 

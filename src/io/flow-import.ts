@@ -206,6 +206,16 @@ export function previewFlowImport(
   return previewOf(settings, result, series);
 }
 
+/** The preview and the result of one run: what a dialog needs, reading a long text once rather than twice. */
+export function readFlowImport(
+  text: string,
+  settings: FlowImportSettings,
+  format: NumberFormat = DEFAULT_NUMBER_FORMAT,
+): { readonly preview: FlowImportPreview; readonly result: FlowImportResult } {
+  const { result, series } = runFlowImport(text, settings, format);
+  return { preview: previewOf(settings, result, series), result };
+}
+
 /** Guesses the settings and returns the preview they give. */
 export function guessFlowImport(text: string, hints: ImportHints = {}): FlowImportPreview {
   return previewFlowImport(

@@ -3,7 +3,7 @@
 // Pure TypeScript: no React, no DOM.
 export { describeProblem, MAX_LISTED_PROBLEMS, type ImportProblem } from './problems';
 export { parseNumber, type Grouping } from './numbers';
-export { numberFormat } from './number-format';
+export { DEFAULT_NUMBER_FORMAT, numberFormat } from './number-format';
 export { readTable, type Separator, type TextRow } from './table-text';
 export { parseClock, isoAt } from './time-values';
 export type { SeriesSettings, ImportHints } from './series';
@@ -11,6 +11,10 @@ export {
   guessRainImport,
   guessRainSettings,
   previewRainImport,
+  readRainImport,
+  findGaps,
+  type GapChoice,
+  type RecordGaps,
   applyRainImport,
   rainHintsFromName,
   type RainImportSettings,
@@ -23,8 +27,20 @@ export {
   guessFlowImport,
   guessFlowSettings,
   previewFlowImport,
+  readFlowImport,
   applyFlowImport,
   flowUnitFromName,
   type FlowImportSettings,
   type FlowRecord,
 } from './flow-import';
+export { guessForScreen } from './screen-guess';
+export {
+  READERS,
+  RAIN_READER,
+  FLOW_READER,
+  PREVIEW_ROWS,
+  type Reader,
+  type ReaderName,
+  type ReaderContext,
+  type ReadOutcome,
+} from './readers';

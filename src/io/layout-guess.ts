@@ -30,7 +30,7 @@ export interface LayoutGuess {
   readonly valuesAlong: 'column' | 'line';
   readonly skipLines: number;
   readonly hasHeader: boolean;
-  /** The table as read with the guessed separator, skip and header. */
+  /** The head of the table (its first HEAD_LINES lines) as read with the guessed separator, skip and header. */
   readonly table: TextTable;
   readonly dateColumn: number | null;
   readonly timeColumn: number | null;
@@ -44,6 +44,23 @@ export interface LayoutGuess {
 const SAMPLE_ROWS = 500;
 /** How far down a title block may reach before the data starts. */
 const HEADER_SEARCH_ROWS = 200;
+/**
+ * Lines of the text the guesses read: past the title block and the rows
+ * sampled, with room for blank lines. A record of 10⁶ lines is guessed from
+ * its head in milliseconds instead of being split whole (twice) to look at
+ * its first 500 rows.
+ */
+export const HEAD_LINES = 5000;
+
+/** The first `lines` lines of the text (all of it when shorter). */
+export function headOf(text: string, lines: number): string {
+  let at = -1;
+  for (let k = 0; k < lines; k++) {
+    at = text.indexOf('\n', at + 1);
+    if (at === -1) return text;
+  }
+  return text.slice(0, at);
+}
 
 const TIME_NAME = /time|date|clock|elapsed|\bmin|minute|hour|\bhrs?\b|\bh\b|\bt\b|stamp/i;
 /** Columns that count bars or rows rather than measure anything. */
@@ -162,10 +179,11 @@ function rises(values: readonly number[]): boolean {
  * settles what the text leaves open ("1,200": twelve hundred, or 1.2).
  */
 export function guessLayout(
-  text: string,
+  whole: string,
   isValueName: (name: string) => boolean,
   preferred?: NumberStyle,
 ): LayoutGuess {
+  const text = headOf(whole, HEAD_LINES);
   const separator = detectSeparator(text);
   const raw = splitRows(text, separator).rows;
   const sampleCells: string[] = [];

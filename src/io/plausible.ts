@@ -13,7 +13,18 @@ import { MIN_STEP_H, type Storm } from '../core';
  * `stormBeyondRecords` flags it in plain words instead.
  */
 export type PlausibleQuantity =
-  'depth' | 'rate' | 'decay' | 'area' | 'volume' | 'barDuration' | 'stormDuration' | 'offset' | 'barCount';
+  | 'depth'
+  | 'rate'
+  | 'decay'
+  | 'area'
+  | 'volume'
+  | 'barDuration'
+  | 'stormDuration'
+  | 'offset'
+  | 'barCount'
+  | 'responseTime'
+  | 'unitDischarge'
+  | 'uncertainty';
 
 export interface PlausibleRange {
   /** SI unit of the bounds: mm, mm/h, 1/h, m², m³, h, or '' for counts. */
@@ -125,6 +136,39 @@ export const PLAUSIBLE: Readonly<Record<PlausibleQuantity, PlausibleRange>> = {
     why: {
       min: 'a streamflow record for an event starts within days of its storm; a year is far beyond that (common practice, no source).',
       max: 'a streamflow record for an event starts within days of its storm; a year is far beyond that (common practice, no source).',
+    },
+  },
+  responseTime: {
+    unit: 'h',
+    noun: 'a lag, time of concentration or storage constant',
+    min: 0,
+    minExclusive: true,
+    max: YEAR_H,
+    why: {
+      min: 'a catchment takes some time to respond (physical limit).',
+      max: 'the largest river basins take weeks to respond to a storm; a year is far beyond any (common practice, no source).',
+    },
+  },
+  unitDischarge: {
+    unit: 'm³/s per mm',
+    noun: 'a unit hydrograph ordinate',
+    min: 0,
+    minExclusive: false,
+    max: 1e5,
+    why: {
+      min: 'a discharge cannot be negative (physical limit).',
+      max: 'the largest river floods on record carry a few hundred thousand m³/s from many tens of mm of runoff (the Amazon, from memory), a few thousand m³/s per mm; 100,000 per mm is far beyond any (limits of this table).',
+    },
+  },
+  uncertainty: {
+    unit: '%',
+    noun: 'an uncertainty of the observed runoff',
+    min: 0,
+    minExclusive: false,
+    max: 99.99,
+    why: {
+      min: 'an uncertainty is a width, not a direction, so it cannot be negative (physical limit).',
+      max: 'at 100 % or more the lower end of the observed runoff would be no runoff at all, and nothing could be fitted there (physical limit).',
     },
   },
   barCount: {

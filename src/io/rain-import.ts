@@ -32,8 +32,12 @@ import { formatTimeOfDay, isoAt, parseClock } from './time-values';
  *   first stamp. With `timeMarks: 'start'` a stamp opens its bar, each bar runs
  *   to the next stamp and the last bar takes the last gap. Elapsed times that
  *   begin at 0 are guessed as starts (0 is the storm's start), all else as ends.
- * - Unequal gaps give bars of unequal duration: a gap of 40 min in a 10-min
- *   record is one 40-min bar holding the rain reported at its end.
+ * - A step longer than the record's own (the most frequent step) is a gap:
+ *   by default (`gaps: 'fill'`) the reading keeps one step for its rain and
+ *   the rest of the gap becomes dry bars of the step, so 0.6 mm two hours
+ *   after the previous reading of a 15-min record stays 0.6 mm in 15 min;
+ *   `gaps: 'keep'` makes it one 2-h bar. A record whose steps mostly differ
+ *   has no step of its own: its bars keep their unequal durations.
  * - Cumulative depths are readings at instants; bars are the differences
  *   between successive readings, and a reading below the one before is an
  *   error. `cumulativeFrom: 'first-value'` (the guess when there are times, or
@@ -55,6 +59,15 @@ export type RainUnit = 'mm' | 'in';
 export type TimeMarks = 'end' | 'start';
 /** Whether cumulative readings count from zero or from the first reading. */
 export type CumulativeFrom = 'zero' | 'first-value';
+/**
+ * What a step longer than the record's own step becomes. 'fill' (the
+ * default): the reading's rain keeps the record's step, at the end of the
+ * gap for stamps that mark the end of their bar and for cumulative
+ * readings, at its start for stamps that mark the start, and the rest of
+ * the gap is dry bars of the step. 'keep': one long bar, its rain spread
+ * over the whole gap (a lower intensity).
+ */
+export type GapChoice = 'fill' | 'keep';
 
 export interface RainImportSettings extends SeriesSettings {
   readonly valueKind: RainValueKind;
@@ -62,6 +75,8 @@ export interface RainImportSettings extends SeriesSettings {
   readonly unit: RainUnit;
   readonly timeMarks: TimeMarks;
   readonly cumulativeFrom: CumulativeFrom;
+  /** Steps longer than the record's step, when there are times (default 'fill'). */
+  readonly gaps?: GapChoice | undefined;
 }
 
 /** A storm as imported: plain arrays, SI units (durations h, depths mm). */
@@ -172,6 +187,7 @@ export function guessRainSettings(text: string, hints: ImportHints = {}): RainIm
     unit: named.unit ?? 'mm',
     timeMarks,
     cumulativeFrom,
+    gaps: 'fill',
   };
 }
 
@@ -186,6 +202,9 @@ function checkRainSettings(s: RainImportSettings, problems: ProblemList): void {
   }
   if (s.cumulativeFrom !== 'zero' && s.cumulativeFrom !== 'first-value') {
     problems.add(problem(0, 0, 'cumulativeFrom', String(s.cumulativeFrom), 'must be zero or first-value.'));
+  }
+  if (s.gaps !== undefined && s.gaps !== 'fill' && s.gaps !== 'keep') {
+    problems.add(problem(0, 0, 'gaps', String(s.gaps), 'must be fill or keep.'));
   }
 }
 
@@ -211,41 +230,90 @@ function checkCumulative(series: Series, s: RainImportSettings, problems: Proble
   });
 }
 
+/** Steps longer than the record's own step, found between time stamps. */
+export interface RecordGaps {
+  /** The record's step, hours: the most frequent step between stamps. */
+  readonly stepH: number;
+  readonly count: number;
+  /** The longest gap: its length (hours) and the lines of the stamps before and after it. */
+  readonly longest: { readonly lengthH: number; readonly fromLine: number; readonly toLine: number } | null;
+  /** Lines of the stamps that end the first gaps (at most GAP_LINES_LISTED), in text order. */
+  readonly endLines: readonly number[];
+}
+
+/** Lines named in the summary for the gaps; the count says how many more. */
+export const GAP_LINES_LISTED = 5;
+
+/** Steps are compared to the millisecond: stamps are read to the millisecond. */
+const stepKey = (h: number): number => Math.round(h * 3_600_000);
+
+/**
+ * The record's step (the most frequent step between successive stamps; the
+ * shortest of equally frequent ones) and the steps longer than it; null
+ * when fewer than half the steps are the most frequent one (a record of
+ * unequal bars, which has no step of its own). A record of two steps
+ * (5 min, then 10 min for a while) shows its longer steps as gaps; the
+ * preview says so and "keep" leaves them as they are.
+ */
+export function findGaps(hours: readonly number[], lineOf: (row: number) => number): RecordGaps | null {
+  const n = hours.length;
+  if (n < 3) return null;
+  const counts = new Map<number, number>();
+  for (let k = 1; k < n; k++) {
+    const key = stepKey((hours[k] as number) - (hours[k - 1] as number));
+    counts.set(key, (counts.get(key) ?? 0) + 1);
+  }
+  let stepKeyMs = 0;
+  let most = 0;
+  for (const [key, count] of counts) {
+    if (count > most || (count === most && key < stepKeyMs)) {
+      stepKeyMs = key;
+      most = count;
+    }
+  }
+  // A record whose steps mostly differ (a storm of unequal bars written out with its times) has no step of its own to fill with.
+  if (most * 2 < n - 1) return null;
+  const stepH = stepKeyMs / 3_600_000;
+  let count = 0;
+  let longest: RecordGaps['longest'] = null;
+  const endLines: number[] = [];
+  for (let k = 1; k < n; k++) {
+    const lengthH = (hours[k] as number) - (hours[k - 1] as number);
+    if (stepKey(lengthH) <= stepKeyMs) continue;
+    count++;
+    if (endLines.length < GAP_LINES_LISTED) endLines.push(lineOf(k));
+    if (longest === null || lengthH > longest.lengthH) {
+      longest = { lengthH, fromLine: lineOf(k - 1), toLine: lineOf(k) };
+    }
+  }
+  return count === 0 ? { stepH, count, longest: null, endLines } : { stepH, count, longest, endLines };
+}
+
 interface Bars {
   durationsH: number[];
   depthsMm: number[];
   /** Hours from the first time stamp to the storm's start (0 or negative). */
   startOffsetH: number;
+  /** For each bar, the data row it was read from; -1 for a dry bar that fills a gap. */
+  rowOfBar: number[];
 }
 
 /**
- * Bars from clean values (all finite, ≥ 0) and, when given, clean times
- * (strictly rising hours). Adds a problem and returns null when the rows are
- * too few for the settings.
+ * One bar per reading, as the stamps give them: each row's bar (its row
+ * index, its duration), before gaps are filled.
  */
-function buildBars(
-  values: readonly number[],
+function readingBars(
+  n: number,
   hours: readonly number[] | null,
   s: RainImportSettings,
   problems: ProblemList,
-): Bars | null {
-  const n = values.length;
+): { rows: number[]; durationsH: number[]; startOffsetH: number } | null {
   const cumulative = s.valueKind === 'cumulative';
   const fromFirst = cumulative && s.cumulativeFrom === 'first-value';
-  if (fromFirst && n < 2) {
-    problems.add(
-      problem(
-        0,
-        0,
-        'text',
-        '',
-        'cumulative readings counted from the first reading need at least two lines; set "count from zero" if the first value is already a depth.',
-      ),
-    );
-    return null;
-  }
+  const rows: number[] = [];
   const durationsH: number[] = [];
   let startOffsetH = 0;
+  for (let k = fromFirst ? 1 : 0; k < n; k++) rows.push(k);
   if (hours === null) {
     if (!checkStep(s, problems)) return null;
     const dt = s.stepMinutesIfNoTime / 60;
@@ -266,23 +334,114 @@ function buildBars(
     for (let k = 0; k < n - 1; k++) durationsH.push((hours[k + 1] as number) - (hours[k] as number));
     durationsH.push((hours[n - 1] as number) - (hours[n - 2] as number));
   }
+  return { rows, durationsH, startOffsetH };
+}
+
+/**
+ * Bars from clean values (all finite, ≥ 0) and, when given, clean times
+ * (strictly rising hours). Adds a problem and returns null when the rows are
+ * too few for the settings. With gaps filled, a reading whose step is
+ * longer than the record's keeps one step of it for its rain, and the rest
+ * of the gap becomes dry bars of the step (a shorter dry bar first, then
+ * whole steps, for a gap that is not a whole number of steps).
+ */
+function buildBars(
+  values: readonly number[],
+  hours: readonly number[] | null,
+  gaps: RecordGaps | null,
+  s: RainImportSettings,
+  problems: ProblemList,
+): Bars | null {
+  const n = values.length;
+  const cumulative = s.valueKind === 'cumulative';
+  const fromFirst = cumulative && s.cumulativeFrom === 'first-value';
+  if (fromFirst && n < 2) {
+    problems.add(
+      problem(
+        0,
+        0,
+        'text',
+        '',
+        'cumulative readings counted from the first reading need at least two lines; set "count from zero" if the first value is already a depth.',
+      ),
+    );
+    return null;
+  }
+  const read = readingBars(n, hours, s, problems);
+  if (read === null) return null;
+  let { durationsH, startOffsetH } = read;
+  let rowOfBar = read.rows;
+  if (gaps !== null && gaps.count > 0 && (s.gaps ?? 'fill') === 'fill') {
+    const step = gaps.stepH;
+    const wetFirst = !cumulative && s.timeMarks === 'start';
+    const filledDurations: number[] = [];
+    const filledRows: number[] = [];
+    const last = durationsH.length - 1;
+    for (let b = 0; b <= last; b++) {
+      const d = durationsH[b] as number;
+      const row = rowOfBar[b] as number;
+      // The first bar of end stamps (and the last of start stamps) has no stamp of its own on the far side: it takes the step.
+      const edge = hours !== null && !fromFirst && (wetFirst ? b === last : b === 0);
+      if (stepKey(d) <= stepKey(step)) {
+        filledDurations.push(d);
+        filledRows.push(row);
+        continue;
+      }
+      if (edge) {
+        filledDurations.push(step);
+        filledRows.push(row);
+        if (b === 0) startOffsetH = -step;
+        continue;
+      }
+      const dry = d - step;
+      const whole = Math.floor(stepKey(dry) / stepKey(step));
+      const rest = dry - whole * step;
+      if (wetFirst) {
+        filledDurations.push(step);
+        filledRows.push(row);
+      }
+      if (stepKey(rest) > 0) {
+        filledDurations.push(rest);
+        filledRows.push(-1);
+      }
+      for (let w = 0; w < whole; w++) {
+        filledDurations.push(step);
+        filledRows.push(-1);
+      }
+      if (!wetFirst) {
+        filledDurations.push(step);
+        filledRows.push(row);
+      }
+    }
+    durationsH = filledDurations;
+    rowOfBar = filledRows;
+  }
   const depthsMm: number[] = [];
+  const bars = durationsH.length;
   if (cumulative) {
     const mm = DEPTH_UNITS[s.unit];
-    let prev = fromFirst ? (values[0] as number) : 0;
-    for (let k = fromFirst ? 1 : 0; k < n; k++) {
-      const v = values[k] as number;
-      depthsMm.push((v - prev) * mm);
-      prev = v;
+    for (let b = 0; b < bars; b++) {
+      const k = rowOfBar[b] as number;
+      if (k < 0) depthsMm.push(0);
+      else {
+        const before = k === 0 ? (fromFirst ? (values[0] as number) : 0) : (values[k - 1] as number);
+        depthsMm.push(((values[k] as number) - before) * mm);
+      }
     }
   } else if (s.valueKind === 'intensity') {
     const mmH = RATE_UNITS[s.unit === 'mm' ? 'mm/h' : 'in/h'];
-    for (let k = 0; k < n; k++) depthsMm.push((values[k] as number) * mmH * (durationsH[k] as number));
+    for (let b = 0; b < bars; b++) {
+      const k = rowOfBar[b] as number;
+      depthsMm.push(k < 0 ? 0 : (values[k] as number) * mmH * (durationsH[b] as number));
+    }
   } else {
     const mm = DEPTH_UNITS[s.unit];
-    for (let k = 0; k < n; k++) depthsMm.push((values[k] as number) * mm);
+    for (let b = 0; b < bars; b++) {
+      const k = rowOfBar[b] as number;
+      depthsMm.push(k < 0 ? 0 : (values[k] as number) * mm);
+    }
   }
-  return { durationsH, depthsMm, startOffsetH };
+  return { durationsH, depthsMm, startOffsetH, rowOfBar };
 }
 
 function describeTimes(s: RainImportSettings, format: NumberFormat): string {
@@ -317,6 +476,7 @@ function successSummary(
   series: Series,
   s: RainImportSettings,
   format: NumberFormat,
+  gaps: RecordGaps | null,
 ): string {
   const n = storm.durationsH.length;
   let total = 0;
@@ -350,6 +510,7 @@ function successSummary(
       notes.push(`counted from the first reading, ${valueCell(first, s)} on line ${first.line}`);
     }
   }
+  if (gaps !== null && gaps.longest !== null) notes.push(gapWords(gaps, s, format));
   if (s.skipLines > 0) notes.push(`${plural(s.skipLines, 'line', undefined, format)} skipped at the top`);
   const blank = series.table.blankLinesSkipped;
   if (blank > 0) notes.push(`${plural(blank, 'blank line', undefined, format)} inside the data skipped`);
@@ -364,6 +525,22 @@ function successSummary(
   return `${parts.join(', ')}${notes.length > 0 ? `; ${notes.join('; ')}` : ''}.`;
 }
 
+/** The gaps in words: how many, the longest and where, the lines of the first, and what was done with them. */
+function gapWords(gaps: RecordGaps, s: RainImportSettings, format: NumberFormat): string {
+  const step = formatDuration(gaps.stepH, format);
+  const longest = gaps.longest as NonNullable<RecordGaps['longest']>;
+  const where = `the longest ${formatDuration(longest.lengthH, format)} between lines ${formatCount(longest.fromLine, format)} and ${formatCount(longest.toLine, format)}`;
+  const others =
+    gaps.count > 1
+      ? `; gaps end on line${gaps.endLines.length > 1 ? 's' : ''} ${gaps.endLines.map((l) => formatCount(l, format)).join(', ')}${gaps.count > gaps.endLines.length ? ` and ${plural(gaps.count - gaps.endLines.length, 'more line', undefined, format)}` : ''}`
+      : '';
+  const done =
+    (s.gaps ?? 'fill') === 'fill'
+      ? `each reading keeps one ${step} bar and the rest of its gap is dry ${step} bars`
+      : 'each reading after a gap is one long bar over the whole gap';
+  return `${plural(gaps.count, 'gap', undefined, format)} longer than the record’s ${step} step (${where}${others}): ${done}`;
+}
+
 /**
  * Bars holding more than any rainfall depth can be (src/io/plausible.ts)
  * are refused where they were read: the line and column of the value (for
@@ -376,12 +553,11 @@ function checkBarDepths(
   problems: ProblemList,
   format: NumberFormat,
 ): void {
-  const fromFirst = s.valueKind === 'cumulative' && s.cumulativeFrom === 'first-value';
   for (let k = 0; k < bars.depthsMm.length; k++) {
     const depthMm = bars.depthsMm[k] as number;
     const breach = checkPlausible('depth', depthMm);
     if (breach === null) continue;
-    const row = series.table.rows[fromFirst ? k + 1 : k];
+    const row = series.table.rows[bars.rowOfBar[k] as number];
     const column = row?.column ?? s.valueColumn;
     const cell = row === undefined ? '' : valueCell(row, s);
     problems.add(
@@ -423,7 +599,10 @@ function runRainImport(text: string, settings: RainImportSettings, format: Numbe
   if (settings.valueKind === 'cumulative') checkCumulative(series, settings, problems);
   if (problems.count > 0) return fail(series, settings, problems, format);
 
-  const bars = buildBars(series.values, series.times?.hours ?? null, settings, problems);
+  const hours = series.times?.hours ?? null;
+  const rows = series.table.rows;
+  const gaps = hours === null ? null : findGaps(hours, (k) => (rows[k] as TextRow).line);
+  const bars = buildBars(series.values, hours, gaps, settings, problems);
   if (bars === null) return fail(series, settings, problems, format);
   checkBarDepths(bars, series, settings, problems, format);
   if (problems.count > 0) return fail(series, settings, problems, format);
@@ -444,7 +623,7 @@ function runRainImport(text: string, settings: RainImportSettings, format: Numbe
     result: {
       ok: true,
       storm,
-      summary: successSummary(storm, bars.startOffsetH, series, settings, format),
+      summary: successSummary(storm, bars.startOffsetH, series, settings, format, gaps),
       problems: [],
     },
     series,
@@ -472,6 +651,16 @@ export function previewRainImport(
 ): RainImportPreview {
   const { result, series } = runRainImport(text, settings, format);
   return previewOf(settings, result, series);
+}
+
+/** The preview and the result of one run: what a dialog needs, reading a long text once rather than twice. */
+export function readRainImport(
+  text: string,
+  settings: RainImportSettings,
+  format: NumberFormat = DEFAULT_NUMBER_FORMAT,
+): { readonly preview: RainImportPreview; readonly result: RainImportResult } {
+  const { result, series } = runRainImport(text, settings, format);
+  return { preview: previewOf(settings, result, series), result };
 }
 
 /** Guesses the settings and returns the preview they give. */

@@ -89,7 +89,44 @@ function splitSingleColumn(text: string): { rows: TextRow[]; problems: ImportPro
   return { rows, problems: [] };
 }
 
+/**
+ * Text without a quote splits exactly as papaparse would split it (no cell
+ * can hold a separator or a line break), so it is cut directly: a record of
+ * 10⁶ lines splits several times faster this way, with no array of arrays
+ * in between.
+ */
+function splitUnquoted(text: string, delimiter: string): { rows: TextRow[]; problems: ImportProblem[] } {
+  const rows: TextRow[] = [];
+  if (text === '') return { rows, problems: [] };
+  let line = 1;
+  let from = 0;
+  // The next separator at or after the read position, kept across lines so a line without one costs no search to the end.
+  let cut = text.indexOf(delimiter);
+  for (;;) {
+    const nl = text.indexOf('\n', from);
+    const end = nl === -1 ? text.length : nl;
+    const cells: string[] = [];
+    let blank = true;
+    let at = from;
+    for (;;) {
+      if (cut !== -1 && cut < at) cut = text.indexOf(delimiter, at);
+      const stop = cut === -1 || cut > end ? end : cut;
+      const cell = text.slice(at, stop).trim();
+      if (cell !== '') blank = false;
+      cells.push(cell);
+      if (stop === end) break;
+      at = stop + 1;
+    }
+    rows.push({ line, cells: blank ? [] : cells });
+    if (nl === -1) break;
+    from = nl + 1;
+    line++;
+  }
+  return { rows, problems: [] };
+}
+
 function splitWithPapa(text: string, delimiter: string): { rows: TextRow[]; problems: ImportProblem[] } {
+  if (!text.includes('"')) return splitUnquoted(text, delimiter);
   const parsed = Papa.parse<string[]>(text, {
     delimiter,
     newline: '\n',

@@ -3,6 +3,8 @@ import {
   LAST_CLOCK_YEAR,
   MAX_RECORD_H,
   MAX_RECORD_YEARS,
+  daysFromCivil,
+  daysInMonth,
   describeHours,
   isBelowMinStep,
   wallClockParts,
@@ -77,11 +79,6 @@ const YEAR_LAST = new RegExp(
 const CLOCK_HELP =
   'use an ISO 8601 date-time (2024-05-01T10:00), a date and time (01/05/2024 10:00) or a time of day (10:00).';
 
-function daysInMonth(year: number, month: number): number {
-  const leap = (year % 4 === 0 && year % 100 !== 0) || year % 400 === 0;
-  return [31, leap ? 29 : 28, 31, 30, 31, 30, 31, 31, 30, 31, 30, 31][month - 1] ?? 0;
-}
-
 function checkDate(year: number, month: number, day: number): Parsed<CalendarDate> {
   if (month < 1 || month > 12) return { ok: false, reason: `there is no month ${month}.` };
   const last = daysInMonth(year, month);
@@ -128,10 +125,57 @@ function readZone(text: string | undefined): Parsed<number | null> {
   return { ok: true, value: sign * (hours * 60 + minutes) };
 }
 
+/** The digit at position i of a text, or -1. */
+function digitAt(text: string, i: number): number {
+  const c = text.charCodeAt(i) - 48;
+  return c >= 0 && c <= 9 ? c : -1;
+}
+
+/**
+ * "YYYY-MM-DD HH:MM" or "YYYY-MM-DDTHH:MM:SS" (no zone, no fraction), the
+ * form of most long gauge records, read by position; undefined for every
+ * other cell, and for any field out of range, which the general path
+ * reads and explains. Gives what the general path gives for the same cell.
+ */
+function plainIsoClock(text: string): Parsed<ClockReading> | undefined {
+  const n = text.length;
+  if (n !== 16 && n !== 19) return undefined;
+  if (text[4] !== '-' || text[7] !== '-' || text[13] !== ':' || (text[10] !== ' ' && text[10] !== 'T'))
+    return undefined;
+  if (n === 19 && text[16] !== ':') return undefined;
+  const at = [0, 1, 2, 3, 5, 6, 8, 9, 11, 12, 14, 15, 17, 18];
+  const d: number[] = [];
+  for (let k = 0; k < (n === 19 ? 14 : 12); k++) {
+    const v = digitAt(text, at[k] as number);
+    if (v < 0) return undefined;
+    d.push(v);
+  }
+  const num = (k: number): number => (d[k] as number) * 10 + (d[k + 1] as number);
+  const year = num(0) * 100 + num(2);
+  const month = num(4);
+  const day = num(6);
+  const hour = num(8);
+  const minute = num(10);
+  const second = n === 19 ? num(12) : 0;
+  if (month < 1 || month > 12 || day < 1 || day > daysInMonth(year, month)) return undefined;
+  if (hour > 23 || minute > 59 || second > 59) return undefined;
+  return {
+    ok: true,
+    value: {
+      date: { year, month, day },
+      hasTime: true,
+      msOfDay: ((hour * 60 + minute) * 60 + second) * 1000,
+      zoneMinutes: null,
+    },
+  };
+}
+
 /** Reads one clock cell. Never throws; a cell it cannot read gives a reason. */
 export function parseClock(cell: string, order: DateOrder): Parsed<ClockReading> {
   const text = cell.trim();
   if (text === '') return { ok: false, reason: 'the time is missing.' };
+  const quick = plainIsoClock(text);
+  if (quick !== undefined) return quick;
   let m = TIME_ONLY.exec(text);
   if (m) {
     const t = readTimeOfDay(m[1] as string, m[2] as string, m[3], m[4], m[5]);
@@ -187,10 +231,8 @@ export function looksLikeClock(cell: string): boolean {
 }
 
 /** Milliseconds of a calendar date's midnight on a zone-free timeline. */
-function dateMs(date: CalendarDate): number {
-  const d = new Date(0);
-  d.setUTCFullYear(date.year, date.month - 1, date.day);
-  return d.getTime();
+export function dateMs(date: CalendarDate): number {
+  return daysFromCivil(date.year, date.month, date.day) * MS_PER_DAY;
 }
 
 /** Reads a "YYYY-MM-DD" date (as typed into a settings field). */

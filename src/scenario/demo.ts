@@ -6,7 +6,7 @@ import type { Scenario } from './types';
  * 10 minutes, 41.6 mm in all, over a 3.2 km² mixed rural–suburban catchment.
  */
 export const DEMO_SCENARIO: Scenario = {
-  version: 4,
+  version: 5,
   name: 'Demo: Fenmoor Brook storm (invented)',
   notes:
     'Invented example for trying the workbench: a made-up 3-hour summer storm over a made-up 3.2 km² catchment. ' +
@@ -23,4 +23,39 @@ export const DEMO_SCENARIO: Scenario = {
   observed: { as: 'depth', value: 12.5, parameter: 'rateMmH', locked: false },
   streamflow: null,
   eventSet: { events: [], activeId: null, parameter: null, designPick: 'median' },
+  hydrograph: { transform: null, transformMemory: {}, fitParameter: null, objective: 'nse' },
+  observedUncertaintyPct: 0,
 };
+
+/**
+ * Whether the scenario still carries the invented demo's identity: its name, its catchment's name or its notes.
+ * A storm of the user's own laid over it would otherwise be saved, shared and printed under the demo's words.
+ */
+export function carriesDemoIdentity(s: Scenario): boolean {
+  return (
+    s.name === DEMO_SCENARIO.name ||
+    s.catchment.name === DEMO_SCENARIO.catchment.name ||
+    s.notes === DEMO_SCENARIO.notes
+  );
+}
+
+/**
+ * The scenario without the demo's identity: no name, notes or catchment name, and no observed runoff when it is
+ * still the demo's (they describe the invented event, not the storm brought in). The area stays, shown under
+ * "Catchment and notes" to be changed (the README's sample files are for the demo's catchment). Method and units stay.
+ */
+export function withoutDemoIdentity(s: Scenario): Scenario {
+  const demoObserved = DEMO_SCENARIO.observed;
+  const observedIsDemo =
+    s.observed !== null &&
+    demoObserved !== null &&
+    s.observed.as === demoObserved.as &&
+    s.observed.value === demoObserved.value;
+  return {
+    ...s,
+    name: s.name === DEMO_SCENARIO.name ? '' : s.name,
+    notes: s.notes === DEMO_SCENARIO.notes ? '' : s.notes,
+    catchment: s.catchment.name === DEMO_SCENARIO.catchment.name ? { ...s.catchment, name: '' } : s.catchment,
+    observed: observedIsDemo ? null : s.observed,
+  };
+}

@@ -4,11 +4,18 @@ export type { Scenario } from './types';
 export type { Problem, ScenarioResult } from './problems';
 export { MAX_LISTED_PROBLEMS } from './problems';
 export { parseScenario, FIELD_HELP } from './schema';
-export { CURRENT_SCENARIO_VERSION, MIGRATIONS, migrate, type Migration, type RawDocument } from './migrate';
 export {
-  encodeScenarioLink,
+  CURRENT_SCENARIO_VERSION,
+  MIGRATIONS,
+  migrate,
+  type Migration,
+  type MigrationResult,
+  type RawDocument,
+} from './migrate';
+export { encodeScenarioLink, makeShareLink, type ShareLinkResult } from './link-make';
+export {
   decodeScenarioLink,
-  makeShareLink,
+  loadLinkReader,
   isScenarioLink,
   LINK_PREFIX,
   MAX_LINK_CHARS,
@@ -16,8 +23,9 @@ export {
 } from './link';
 export { scenarioToFileText, scenarioFromFileText, scenarioFileName, FILE_FORMAT_TAG, MAX_FILE_CHARS } from './file';
 export { CAUTION_TEXT } from './caution';
-export { MAX_NAME_LENGTH, MAX_NOTES_LENGTH } from './text-limits';
-export { DEMO_SCENARIO } from './demo';
+export { MAX_NAME_LENGTH, MAX_NOTES_LENGTH, textLengthProblem } from './text-limits';
+export { DEMO_SCENARIO, carriesDemoIdentity, withoutDemoIdentity } from './demo';
+export { blankScenario } from './blank';
 export {
   createScenarioLibrary,
   LIBRARY_KEY,

@@ -1,10 +1,8 @@
-import { deflateSync } from 'fflate';
-import { decodeBase64Url, encodeBase64Url } from './base64url';
+import { decodeBase64Url } from './base64url';
 import { crc32 } from './crc32';
-import { inflateRawCapped } from './inflate-capped';
-import { failure, problem, type Problem, type ScenarioResult } from './problems';
+import type { InflateResult } from './inflate-capped';
+import { failure, problem, type ScenarioResult } from './problems';
 import { parseScenario } from './schema';
-import type { Scenario } from './types';
 
 /**
  * Share links put the whole scenario in the URL fragment (after '#'), which
@@ -28,6 +26,18 @@ import type { Scenario } from './types';
  * made on purpose with a correct check sum.
  */
 const LINK_FORMAT_VERSION = 1;
+
+// The decompressor (fflate's inflate) is fetched only when a link is opened, not with the first screen:
+// main.tsx loads it before opening a link in the address, and before each one pasted into it later.
+let inflateRawCapped: ((data: Uint8Array, maxBytes: number) => InflateResult) | null = null;
+
+/** Fetches the link reader's decompressor once; resolves when decodeScenarioLink can unpack a link. */
+export function loadLinkReader(): Promise<void> {
+  if (inflateRawCapped) return Promise.resolve();
+  return import('./inflate-capped').then((m) => {
+    inflateRawCapped = m.inflateRawCapped;
+  });
+}
 export const LINK_PREFIX = `rc${LINK_FORMAT_VERSION}.`;
 
 /**
@@ -50,17 +60,6 @@ function formatBytes(n: number): string {
   return `${(n / 1024 ** 3).toFixed(1)} GB`;
 }
 
-function writeVarint(n: number): number[] {
-  const out: number[] = [];
-  let rest = n;
-  while (rest >= 0x80) {
-    out.push((rest % 0x80) | 0x80);
-    rest = Math.floor(rest / 0x80);
-  }
-  out.push(rest);
-  return out;
-}
-
 /** Reads an unsigned LEB128 varint of at most 5 bytes, or undefined. */
 function readVarint(bytes: Uint8Array): { value: number; size: number } | undefined {
   let value = 0;
@@ -72,42 +71,6 @@ function readVarint(bytes: Uint8Array): { value: number; size: number } | undefi
     scale *= 0x80;
   }
   return undefined;
-}
-
-/** Link text (without '#') that opens exactly this scenario. */
-export function encodeScenarioLink(scenario: Scenario): string {
-  const json = new TextEncoder().encode(JSON.stringify(scenario));
-  const packed = deflateSync(json, { level: 9 });
-  const head = writeVarint(json.length);
-  const bytes = new Uint8Array(head.length + packed.length + 4);
-  bytes.set(head, 0);
-  bytes.set(packed, head.length);
-  const sum = crc32(bytes.subarray(0, bytes.length - 4));
-  new DataView(bytes.buffer).setUint32(bytes.length - 4, sum, false);
-  return LINK_PREFIX + encodeBase64Url(bytes);
-}
-
-export type ShareLinkResult =
-  { readonly ok: true; readonly fragment: string } | { readonly ok: false; readonly problems: readonly Problem[] };
-
-/**
- * What "Copy link" should call: checks the scenario as a reader will, makes
- * the link, and refuses one that readers would refuse as too long (the
- * scenario should then be shared as a file). Never throws.
- */
-export function makeShareLink(scenario: Scenario): ShareLinkResult {
-  const checked = parseScenario(scenario);
-  if (!checked.ok) return checked;
-  const fragment = encodeScenarioLink(checked.scenario);
-  if (fragment.length > MAX_LINK_CHARS) {
-    return failure([
-      problem(
-        `This scenario makes a link of ${fragment.length} characters, more than the ${MAX_LINK_CHARS} a link may have. ` +
-          'Save it as a file to share it.',
-      ),
-    ]);
-  }
-  return { ok: true, fragment };
 }
 
 /** True when the fragment (with or without '#') looks like a scenario link of any format. */
@@ -169,6 +132,11 @@ function decode(fragment: string): ScenarioResult {
   }
 
   const body = packed.subarray(head.size);
+  if (!inflateRawCapped) {
+    return failure([
+      problem('The link reader could not be loaded (no connection?); reload the page to open the link.'),
+    ]);
+  }
   const inflated = inflateRawCapped(body, head.value);
   if (!inflated.ok) {
     return inflated.tooLarge

@@ -1,7 +1,7 @@
 import { describeValue, problemAt, type Problem } from './problems';
 
 /** The scenario format version this build writes, and the newest it reads. */
-export const CURRENT_SCENARIO_VERSION = 4;
+export const CURRENT_SCENARIO_VERSION = 5;
 
 /** A scenario document of some version, before it is validated. */
 export type RawDocument = Readonly<Record<string, unknown>>;
@@ -131,12 +131,42 @@ const addInfiltrationSettings: Migration = {
   },
 };
 
+/** What a version 4 document computed: no runoff hydrograph, the fit objective at its default. */
+export const NO_HYDROGRAPH = { transform: null, transformMemory: {}, fitParameter: null, objective: 'nse' } as const;
+
+/**
+ * Version 4 → 5: the runoff hydrograph joins the document (issue 13):
+ * `hydrograph` (the transform from excess to direct runoff, null for none,
+ * with its memory, the parameter to fit and the fit's objective) and
+ * `observedUncertaintyPct` (± % on the observed runoff, 0 for none). A
+ * version 4 document had neither, so it gets no transform and no
+ * uncertainty: it opens to exactly the same screen and numbers. Fields
+ * already there are passed through for the schema to check.
+ */
+const addRunoffHydrograph: Migration = {
+  from: 4,
+  to: 5,
+  summary:
+    'Adds `hydrograph` (the transform from rainfall excess to a direct runoff hydrograph, its memory, the parameter to fit and the objective; version 4 documents get no transform) and `observedUncertaintyPct` (± % on the observed runoff; version 4 documents get 0, none).',
+  up: (doc) => ({
+    ...doc,
+    version: 5,
+    hydrograph: Object.hasOwn(doc, 'hydrograph') ? doc['hydrograph'] : NO_HYDROGRAPH,
+    observedUncertaintyPct: Object.hasOwn(doc, 'observedUncertaintyPct') ? doc['observedUncertaintyPct'] : 0,
+  }),
+};
+
 /**
  * The upgrade chain, oldest first. When the document changes (e.g. the
  * event set), bump CURRENT_SCENARIO_VERSION and append the next step
  * `{ from, to: from + 1, summary, up }`; never edit a released step.
  */
-export const MIGRATIONS: readonly Migration[] = [addStreamflow, addEventSet, addInfiltrationSettings];
+export const MIGRATIONS: readonly Migration[] = [
+  addStreamflow,
+  addEventSet,
+  addInfiltrationSettings,
+  addRunoffHydrograph,
+];
 
 export type MigrationResult =
   | { readonly ok: true; readonly doc: RawDocument; readonly fromVersion: number }

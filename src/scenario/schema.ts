@@ -12,6 +12,8 @@ import {
   isInputError,
   isSpanH,
   isLossKind,
+  isTransformKind,
+  TRANSFORM_OBJECTIVES,
   validateBaseflowMethod,
   validateHydrograph,
   validateStorm,
@@ -32,6 +34,7 @@ import {
   type ScenarioResult,
 } from './problems';
 import { MAX_NAME_LENGTH, MAX_NOTES_LENGTH, tooLongText } from './text-limits';
+import { fittableTransformParameters, readTransform } from './transform-check';
 
 /**
  * The most bars a storm may have: a year of one-minute bars is about half
@@ -71,10 +74,16 @@ export const FIELD_HELP: Readonly<Record<string, string>> = {
   'eventSet.activeId': 'the id of the event on the workbench, or null',
   'eventSet.parameter': "the parameter fitted for every event, or null for the workbench's",
   'eventSet.designPick': 'the design value: "median", "mean", "min", "max" or { "value": number }',
+  hydrograph: 'the runoff hydrograph: transform, transformMemory, fitParameter and objective',
+  'hydrograph.transform': 'the transform from rainfall excess to direct runoff, with its kind and parameters, or null',
+  'hydrograph.transformMemory': 'the last parameters used for each transform, an object keyed by kind (may be empty)',
+  'hydrograph.fitParameter': "the transform parameter to fit, or null for the kind's first",
+  'hydrograph.objective': 'what the transform fit matches: "peak", "time-of-peak" or "nse"',
+  observedUncertaintyPct: 'the uncertainty of the observed runoff, ± per cent from 0 to below 100 (0: none)',
 };
 
 /** The most events a set may hold: far more than anyone calibrates by hand, small enough to keep fits instant. */
-const MAX_EVENTS = 200;
+export const MAX_EVENTS = 200;
 
 /**
  * The most samples a streamflow record may have: a year of one-minute
@@ -320,6 +329,16 @@ const MethodMemorySchema = methodMemorySchema(readMethod, isLossKind, 'loss');
 const BaseflowSchema = methodSchema(readBaseflowMethod);
 const BaseflowMemorySchema = methodMemorySchema(readBaseflowMethod, isBaseflowKind, 'baseflow');
 
+const TransformSchema = methodSchema(readTransform);
+const TransformMemorySchema = methodMemorySchema(readTransform, isTransformKind, 'transform');
+
+const HydrographEntries = {
+  transform: v.nullable(TransformSchema),
+  transformMemory: TransformMemorySchema,
+  fitParameter: v.nullable(text()),
+  objective: v.picklist(TRANSFORM_OBJECTIVES, must('"peak", "time-of-peak" or "nse"')),
+};
+
 const StreamflowEntries = {
   timesH: sampleList(
     'sample times in hours',
@@ -543,6 +562,11 @@ const DocumentEntries = {
     ),
   ),
   eventSet: fields(EventSetEntries, 'an object with events, activeId, parameter and designPick'),
+  hydrograph: fields(HydrographEntries, 'an object with transform, transformMemory, fitParameter and objective'),
+  observedUncertaintyPct: numberField(
+    'a number of per cent from 0 to below 100 (uncertainty of the observed runoff; 0 for none)',
+    (x) => Number.isFinite(x) && x >= 0 && x < 100,
+  ),
 };
 
 /**
@@ -575,6 +599,18 @@ const crossFieldChecks = v.rawCheck<v.InferOutput<v.ObjectSchema<typeof Document
           ['observed', 'parameter'],
           `${describeValue(observed.parameter)} is not a parameter of the active method "${method.kind}" ` +
             `(it can fit ${keys.join(', ') || 'nothing'}).`,
+        );
+      }
+    }
+    const hydrograph = doc['hydrograph'] as { transform?: unknown; fitParameter?: unknown } | undefined;
+    const transformKind = (hydrograph?.transform as { kind?: unknown } | null | undefined)?.kind;
+    if (isTransformKind(transformKind) && typeof hydrograph?.fitParameter === 'string') {
+      const keys = fittableTransformParameters(transformKind);
+      if (!keys.includes(hydrograph.fitParameter)) {
+        add(
+          ['hydrograph', 'fitParameter'],
+          `${describeValue(hydrograph.fitParameter)} is not a parameter of the transform "${transformKind}" ` +
+            `that can be fitted (it can fit ${keys.join(', ') || 'nothing'}; or null).`,
         );
       }
     }
@@ -623,6 +659,7 @@ function unknownFields(doc: RawDocument): Problem[] {
   visit(doc['catchment'], ['catchment'], Object.keys(CatchmentEntries), 'the catchment');
   visit(doc['observed'], ['observed'], Object.keys(ObservedEntries), 'the observed runoff');
   visit(doc['streamflow'], ['streamflow'], Object.keys(StreamflowEntries), 'the streamflow record');
+  visit(doc['hydrograph'], ['hydrograph'], Object.keys(HydrographEntries), 'the runoff hydrograph settings');
   const set = doc['eventSet'];
   visit(set, ['eventSet'], Object.keys(EventSetEntries), 'the event set');
   const events = isRecord(set) && Array.isArray(set['events']) ? (set['events'] as unknown[]) : [];

@@ -1,4 +1,13 @@
-import type { BaseflowKind, BaseflowMethod, LossKind, LossMethod, UnitSystem } from '../core';
+import type {
+  BaseflowKind,
+  BaseflowMethod,
+  LossKind,
+  LossMethod,
+  Transform,
+  TransformKind,
+  TransformObjective,
+  UnitSystem,
+} from '../core';
 
 /**
  * The scenario document: everything the user chose, and nothing derived.
@@ -150,4 +159,36 @@ export interface ScenarioV4 extends Omit<ScenarioV3, 'version'> {
   readonly version: 4;
 }
 
-export type Scenario = ScenarioV4;
+/**
+ * The runoff hydrograph (version 5): how the rainfall excess is routed to a
+ * direct runoff hydrograph, and how a transform parameter is fitted to an
+ * observed record.
+ */
+export interface HydrographSettings {
+  /** The transform from excess to direct runoff; null: no hydrograph is computed (the screen of version 4). */
+  readonly transform: Transform | null;
+  /** Last parameters used for each transform kind, so switching back restores them (a pasted unit hydrograph too). */
+  readonly transformMemory: Partial<Record<TransformKind, Transform>>;
+  /** The transform parameter "Fit" sets; null: the kind's first fittable parameter (lag, or Nash's k). */
+  readonly fitParameter: string | null;
+  /** What the fit matches: the observed peak, its time, or the best Nash–Sutcliffe efficiency. */
+  readonly objective: TransformObjective;
+}
+
+/**
+ * Version 5: version 4 with the runoff hydrograph (issue 13) and the
+ * uncertainty of the observed runoff. A version 4 document upgrades with no
+ * transform and no uncertainty, so it opens to the same screen and numbers.
+ */
+export interface ScenarioV5 extends Omit<ScenarioV4, 'version'> {
+  readonly version: 5;
+  readonly hydrograph: HydrographSettings;
+  /**
+   * Uncertainty of the observed runoff, ± % (0 ≤ u < 100; 0: none). Gauge and
+   * rating errors: the fitted loss parameter is shown with the fits at the
+   * two ends. It never changes the fit itself.
+   */
+  readonly observedUncertaintyPct: number;
+}
+
+export type Scenario = ScenarioV5;

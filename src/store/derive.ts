@@ -11,9 +11,11 @@ import {
   type CalibrationResult,
   type LossMethod,
   type LossResult,
+  type ObservedDirectRunoff,
 } from '../core';
 import type { Scenario } from '../scenario/types';
 import { alignRecord, type Alignment } from './alignment';
+import type { HydrographDerived, TimeSeries } from './derive-hydrograph';
 import { memoLast } from './memo';
 
 /** The observed runoff as a depth to match, or why it cannot be one. */
@@ -29,7 +31,37 @@ export type Separation =
   | { readonly ok: true; readonly result: BaseflowResult; readonly method: BaseflowMethod }
   | { readonly ok: false; readonly message: string; readonly field: string; readonly method: BaseflowMethod };
 
-export interface Derived {
+/**
+ * The hydrograph side of the derived values (derive-hydrograph.ts and the
+ * core's transforms) is fetched just after the first screen, not with it:
+ * until it arrives its values are null (as with no hydrograph chosen), and
+ * `whenHydrographReady` tells the store to draw again once they can be had.
+ */
+type HydrographModule = typeof import('./derive-hydrograph');
+let hydrographModule: HydrographModule | null = null;
+let hydrographLoading: Promise<HydrographModule> | null = null;
+const hydrographWaiting = new Set<() => void>();
+
+/** Fetches the hydrograph side's code once (again after a failed fetch); resolves when it can be used. */
+export function loadHydrographSide(): Promise<HydrographModule> {
+  hydrographLoading ??= import('./derive-hydrograph').then(
+    (m) => {
+      hydrographModule = m;
+      for (const ready of hydrographWaiting) ready();
+      hydrographWaiting.clear();
+      return m;
+    },
+    (error: unknown) => {
+      hydrographLoading = null;
+      throw error;
+    },
+  );
+  return hydrographLoading;
+}
+
+export interface Derived extends HydrographDerived {
+  /** Calls `ready` once the hydrograph side's code has arrived (at once if it has). */
+  whenHydrographReady(ready: () => void): void;
   /**
    * The observed runoff as a depth (null when none is entered). While the
    * streamflow record is used as the observed runoff, it is the separated
@@ -63,6 +95,8 @@ export interface Derived {
   results(s: Scenario): Results;
   /** Runoff volume, m³, or null when the catchment area is not known. */
   runoffVolumeM3(s: Scenario): number | null;
+  /** The separated direct runoff on the storm's time axis (null without a separated record). */
+  observedDirect(s: Scenario): ObservedDirectRunoff | null;
 }
 
 /**
@@ -158,7 +192,74 @@ export function createDerived(): Derived {
   });
   const resultsOf = (s: Scenario): Results => results(s.storm, effectiveMethod(s));
 
+  // The record's samples on the storm's time axis, for the computed hydrograph to be set against.
+  const shifted = memoLast((timesH: readonly number[], offsetH: number): Float64Array => {
+    const out = new Float64Array(timesH.length);
+    for (let i = 0; i < out.length; i++) out[i] = (timesH[i] as number) + offsetH;
+    return out;
+  });
+  const separatedOnAxis = (s: Scenario): { timesH: Float64Array; result: BaseflowResult } | null => {
+    const sep = separationOf(s);
+    const aligned = alignment(s.storm.startIso, s.streamflow);
+    if (!sep?.ok || !aligned || !s.streamflow) return null;
+    return { timesH: shifted(s.streamflow.timesH, aligned.offsetH), result: sep.result };
+  };
+  const observedDirect = memoLast(
+    (timesH: Float64Array | undefined, result: BaseflowResult | undefined): ObservedDirectRunoff | null =>
+      timesH && result ? { timesH, directM3s: result.directM3s } : null,
+  );
+  const baseflowOnAxis = memoLast(
+    (timesH: Float64Array | undefined, result: BaseflowResult | undefined): TimeSeries | null =>
+      timesH && result ? { timesH, dischargeM3s: result.baseflowM3s } : null,
+  );
+  const observedDirectOf = (s: Scenario): ObservedDirectRunoff | null => {
+    const on = separatedOnAxis(s);
+    return observedDirect(on?.timesH, on?.result);
+  };
+  const lossSide: Parameters<HydrographModule['createHydrographDerived']>[0] = {
+    excessMm: (s) => {
+      const r = resultsOf(s);
+      return r.ok ? r.result.excessMm : null;
+    },
+    observedDirect: observedDirectOf,
+    baseflowOnStormAxis: (s) => {
+      const on = separatedOnAxis(s);
+      return baseflowOnAxis(on?.timesH, on?.result);
+    },
+    targetMm: (s) => {
+      const t = targetOf(s);
+      return t?.ok ? t.mm : null;
+    },
+  };
+
+  let side: HydrographDerived | null = null;
+  /** The hydrograph side, or null (its code then starts loading). */
+  const hydro = (): HydrographDerived | null => {
+    if (side) return side;
+    if (hydrographModule) return (side = hydrographModule.createHydrographDerived(lossSide));
+    void loadHydrographSide().catch(() => {}); // a failed fetch is tried again at the next call
+    return null;
+  };
+  const hydrographSide: HydrographDerived = {
+    hydrograph: (s) => hydro()?.hydrograph(s) ?? null,
+    totalFlow: (s) => hydro()?.totalFlow(s) ?? null,
+    comparison: (s) => hydro()?.comparison(s) ?? null,
+    hydrographEndH: (s) => hydro()?.hydrographEndH(s) ?? null,
+    unitHydrographDepthMm: (s) => hydro()?.unitHydrographDepthMm(s) ?? null,
+    lossInterval: (s) => hydro()?.lossInterval(s) ?? null,
+    lossCurve: (s) => hydro()?.lossCurve(s) ?? null,
+  };
+
   return {
+    ...hydrographSide,
+    whenHydrographReady: (ready) => {
+      if (hydrographModule) ready();
+      else {
+        hydrographWaiting.add(ready);
+        void loadHydrographSide().catch(() => {});
+      }
+    },
+    observedDirect: observedDirectOf,
     target: targetOf,
     separation: separationOf,
     observedFromSeparation: linked,

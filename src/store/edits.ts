@@ -19,7 +19,7 @@ import {
   type Storm,
   type UnitSystem,
 } from '../core';
-import { MAX_NAME_LENGTH, textLengthProblem } from '../scenario/text-limits';
+import { MAX_NAME_LENGTH, MAX_NOTES_LENGTH, textLengthProblem } from '../scenario/text-limits';
 import type { Scenario } from '../scenario/types';
 import { checkRecordNearStorm } from './alignment';
 
@@ -46,6 +46,22 @@ export function withName(s: Scenario, name: string): Scenario {
   const tooLong = textLengthProblem('The scenario name', name, MAX_NAME_LENGTH);
   if (tooLong !== null) throw new InputError('name', tooLong);
   return { ...s, name };
+}
+
+export function withCatchmentName(s: Scenario, name: string): Scenario {
+  if (typeof name !== 'string') throw new InputError('catchment.name', 'The catchment name must be text.');
+  if (name === s.catchment.name) return s;
+  const tooLong = textLengthProblem('The catchment name', name, MAX_NAME_LENGTH);
+  if (tooLong !== null) throw new InputError('catchment.name', tooLong);
+  return { ...s, catchment: { ...s.catchment, name } };
+}
+
+export function withNotes(s: Scenario, notes: string): Scenario {
+  if (typeof notes !== 'string') throw new InputError('notes', 'The notes must be text.');
+  if (notes === s.notes) return s;
+  const tooLong = textLengthProblem('The notes', notes, MAX_NOTES_LENGTH);
+  if (tooLong !== null) throw new InputError('notes', tooLong);
+  return { ...s, notes };
 }
 
 export function withUnits(s: Scenario, units: UnitSystem): Scenario {

@@ -1,6 +1,15 @@
 export { createWorkbenchStore } from './scenario-store';
-export type { CreateStoreOptions, WorkbenchActions, WorkbenchStore } from './scenario-store';
-export { createDerived, type Derived, type Separation } from './derive';
+export type {
+  CreateStoreOptions,
+  EditOptions,
+  StorageNotice,
+  WorkbenchActions,
+  WorkbenchState,
+  WorkbenchStore,
+} from './scenario-store';
+export { createDerived, loadHydrographSide, type Derived, type Results, type Separation, type Target } from './derive';
+export type { ComputedHydrograph, Outcome, TimeSeries } from './derive-hydrograph';
+// The hydrograph's edits and fit (./hydrograph-edits) are imported by path: the panel that uses them loads on first use.
 export {
   withBaseflowDefaults,
   withBaseflowKind,
@@ -18,6 +27,11 @@ export {
   STORAGE_KEY,
   SET_ASIDE_PREFIX,
   setAsideSaved,
+  type SetAsideResult,
+  type Loaded,
+  type Persistence,
+  type OtherTabWatch,
+  copyName,
   type StorageLike,
 } from './persistence';
 export { StoreProvider, useActions, useDerived, useScenario, useWorkbench, useWorkbenchStore } from './react';

@@ -1,9 +1,16 @@
 import { createStore, type StoreApi } from 'zustand/vanilla';
-import { createScenarioLibrary, decodeScenarioLink, type Problem } from '../scenario';
+import { decodeScenarioLink, type Problem } from '../scenario';
 import type { Scenario } from '../scenario/types';
 import { createHistory } from './history';
 import { persistStore, STORAGE_KEY, type Persistence, type StorageLike } from './persistence';
 import type { WorkbenchStore } from './scenario-store';
+
+type LibraryFactory = (typeof import('../scenario/library'))['createScenarioLibrary'];
+let library: LibraryFactory | null = null;
+/** The saved list's code, fetched only when a link is opened (not with the first screen). */
+function loadLibrary(): Promise<LibraryFactory> {
+  return import('../scenario/library').then((m) => (library = m.createScenarioLibrary));
+}
 
 /**
  * What happened with a share link in the address.
@@ -157,6 +164,8 @@ export function createLinkSession(options: LinkSessionOptions): LinkSession {
       return;
     }
     show(decoded.scenario);
+    // "Keep" puts the user's own scenario in the saved list: its code is fetched now, while the choice is read.
+    void loadLibrary().catch(() => {});
     state.setState(
       {
         kind: 'shared',
@@ -177,7 +186,19 @@ export function createLinkSession(options: LinkSessionOptions): LinkSession {
     }
   }
 
+  /** "Keep": at once when the saved list's code is here (it is fetched as a link opens), else once it arrives. */
   const keep = (): void => {
+    if (library) keepWith(library);
+    else {
+      loadLibrary().then(keepWith, (error: unknown) => {
+        const current = state.getState();
+        if (current.kind !== 'shared') return;
+        state.setState({ ...current, problem: `The shared scenario could not be kept (${why(error)}); try again.` });
+      });
+    }
+  };
+
+  const keepWith = (createScenarioLibrary: LibraryFactory): void => {
     const current = state.getState();
     if (current.kind !== 'shared') return;
     const shared = store.getState().scenario;

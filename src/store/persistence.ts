@@ -1,3 +1,4 @@
+import { MAX_NAME_LENGTH } from '../scenario/text-limits';
 import type { Scenario } from '../scenario/types';
 import { readScenarioJson } from './read-scenario';
 import type { StorageNotice, WorkbenchStore } from './scenario-store';
@@ -151,23 +152,130 @@ export interface Persistence {
   stop(): void;
 }
 
+/** Calls back with the storage key another tab changed (null: all cleared); returns how to stop listening. */
+export type OtherTabWatch = (changed: (key: string | null) => void) => () => void;
+
+/** The browser's "storage" events: fired in every other tab of the same origin when one tab writes. */
+const windowStorageEvents: OtherTabWatch = (changed) => {
+  if (typeof window === 'undefined') return () => undefined;
+  const listener = (event: StorageEvent): void => changed(event.key);
+  window.addEventListener('storage', listener);
+  return () => window.removeEventListener('storage', listener);
+};
+
+/** The name of this tab's copy when the user keeps it beside the other tab's version. */
+export function copyName(name: string): string {
+  const suffix = ' (this tab’s copy)';
+  return `${name.slice(0, Math.max(0, MAX_NAME_LENGTH - suffix.length))}${suffix}`;
+}
+
 /**
  * Saves the scenario whenever it changes, at most once per `delayMs` of
  * quiet (a drag saves once, after it stops). A failed save is reported
  * through the store's notice, once per kind of failure.
+ *
+ * Two tabs: the saved text this tab last read or wrote is its version
+ * stamp. When the saved scenario is found changed by another tab (its
+ * "storage" event, or a different text at the next save), nothing is
+ * written over it: the notice says so and offers the two ways on, to open
+ * the other tab's version here or to keep this one (saved under a new name
+ * in the saved list, then saved as the current scenario again).
  */
-export function persistStore(store: WorkbenchStore, storage: StorageLike, delayMs = 400): Persistence {
+export function persistStore(
+  store: WorkbenchStore,
+  storage: StorageLike,
+  delayMs = 400,
+  watch: OtherTabWatch = windowStorageEvents,
+): Persistence {
   let timer: ReturnType<typeof setTimeout> | null = null;
   let pending: Scenario | null = null;
   let lastSaved: Scenario = store.getState().scenario;
+  let known: string | null = readSlot();
 
-  const write = (): void => {
+  function readSlot(): string | null {
+    try {
+      return storage.getItem(STORAGE_KEY);
+    } catch {
+      return null;
+    }
+  }
+
+  /** True when another tab wrote the saved scenario since this tab last read or wrote it. */
+  const changedElsewhere = (): boolean => {
+    const now = readSlot();
+    return now !== null && now !== known;
+  };
+
+  const takeTheirs = (): void => {
+    const theirs = readSlot();
+    store.getState().actions.setNotice(null);
+    if (theirs === null) return;
+    const read = readScenarioJson(theirs);
+    if (!read.ok) {
+      store.getState().actions.setNotice({
+        kind: 'save-failed',
+        message: `The other tab's version could not be opened (${read.message}). This tab's scenario stays on screen and is not saved over it; export it to keep it.`,
+      });
+      return;
+    }
+    known = theirs;
+    lastSaved = read.scenario;
+    pending = null;
+    store.getState().actions.replaceScenario(read.scenario, 'Open the other tab’s version');
+    // The edit above is this tab's own view of the saved text: nothing to write.
+    lastSaved = store.getState().scenario;
+  };
+
+  const keepMine = async (): Promise<void> => {
+    const mine = store.getState().scenario;
+    // The saved list's code loads here, on this rare path, not with the first screen.
+    const { createScenarioLibrary } = await import('../scenario/library');
+    const saved = createScenarioLibrary(storage).save({ ...mine, name: copyName(mine.name) });
+    if (!saved.ok) {
+      store.getState().actions.setNotice({
+        kind: 'save-failed',
+        message: `This tab's scenario could not be saved as a copy (${saved.problems.map((p) => p.message).join(' ')}). It stays on screen; export it to keep it.`,
+      });
+      return;
+    }
+    known = readSlot();
+    store.getState().actions.setNotice(null);
+    pending = null;
+    save(mine);
+  };
+
+  const tellOtherTab = (): void => {
+    if (store.getState().notice?.kind === 'other-tab') return;
+    store.getState().actions.setNotice({
+      kind: 'other-tab',
+      message:
+        'The saved scenario was changed in another tab of this workbench. This tab has not saved over it. Open that version here, or keep this one: it is saved under a new name in Saved scenarios and becomes the saved scenario again.',
+      takeTheirs,
+      keepMine,
+    });
+  };
+
+  function write(): void {
     timer = null;
     const scenario = pending;
+    if (!scenario || scenario === lastSaved) {
+      pending = null;
+      return;
+    }
+    if (changedElsewhere()) {
+      // Kept pending: written once the user has chosen.
+      tellOtherTab();
+      return;
+    }
     pending = null;
-    if (!scenario || scenario === lastSaved) return;
+    save(scenario);
+  }
+
+  function save(scenario: Scenario): void {
     try {
-      storage.setItem(STORAGE_KEY, JSON.stringify(scenario));
+      const json = JSON.stringify(scenario);
+      storage.setItem(STORAGE_KEY, json);
+      known = json;
       lastSaved = scenario;
       if (store.getState().notice?.kind === 'save-failed') store.getState().actions.setNotice(null);
     } catch (error) {
@@ -176,7 +284,11 @@ export function persistStore(store: WorkbenchStore, storage: StorageLike, delayM
         message: `The latest change could not be saved in this browser (${describe(error)}). It stays on screen; export it to keep it.`,
       });
     }
-  };
+  }
+
+  const unwatch = watch((key) => {
+    if ((key === STORAGE_KEY || key === null) && changedElsewhere()) tellOtherTab();
+  });
 
   const unsubscribe = store.subscribe((state, previous) => {
     if (state.scenario === previous.scenario) return;
@@ -194,6 +306,7 @@ export function persistStore(store: WorkbenchStore, storage: StorageLike, delayM
       if (timer !== null) clearTimeout(timer);
       timer = null;
       unsubscribe();
+      unwatch();
     },
   };
 }

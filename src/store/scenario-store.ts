@@ -8,6 +8,9 @@ import {
   type Storm,
   type UnitSystem,
 } from '../core';
+import { blankScenario } from '../scenario/blank';
+import { carriesDemoIdentity, withoutDemoIdentity } from '../scenario/demo';
+import { labelInSentence } from '../scenario/label-text';
 import type { Scenario } from '../scenario/types';
 import { createDerived, type Derived } from './derive';
 import {
@@ -19,7 +22,9 @@ import {
   withMethod,
   withMethodDefaults,
   withMethodKind,
+  withCatchmentName,
   withName,
+  withNotes,
   withObserved,
   withParam,
   withStartIso,
@@ -45,7 +50,16 @@ import {
 export type StorageNotice =
   | { readonly kind: 'set-aside'; readonly message: string; readonly key: string }
   | { readonly kind: 'save-failed'; readonly message: string }
-  | { readonly kind: 'unavailable'; readonly message: string };
+  | { readonly kind: 'unavailable'; readonly message: string }
+  /** Another tab changed the saved scenario: nothing is written over it until the user chooses. */
+  | {
+      readonly kind: 'other-tab';
+      readonly message: string;
+      /** Opens the other tab's version here (one undoable edit). */
+      readonly takeTheirs: () => void;
+      /** Saves this tab's scenario under a new name in the saved list, then saves it as the current one again. */
+      readonly keepMine: () => Promise<void>;
+    };
 
 export interface EditOptions {
   /** Successive edits with the same key in quick succession are one undo step. */
@@ -59,11 +73,20 @@ export interface WorkbenchActions {
   edit(label: string, recipe: (s: Scenario) => Scenario, options?: EditOptions): void;
 
   setName(name: string): void;
+  setCatchmentName(name: string): void;
+  setNotes(notes: string): void;
+  /** Starts a new, empty scenario in the same units (one undoable step). */
+  newScenario(): void;
   setUnits(units: UnitSystem): void;
   setAreaM2(areaM2: number, options?: EditOptions): void;
 
   /** Replaces the whole storm (paste, draw, storm tools) as one undoable edit named `label`. */
   setStorm(storm: Storm, label: string): void;
+  /**
+   * Replaces the storm with one brought in from elsewhere (pasted, opened from a file). Over the invented demo it
+   * also clears the demo's name, catchment, notes and observed runoff, which are not the new storm's.
+   */
+  setImportedStorm(storm: Storm, label: string): void;
   setBarDepth(k: number, depthMm: number, options?: EditOptions): void;
   setBarDuration(k: number, durationH: number, options?: EditOptions): void;
   /** Inserts a bar before index k (k = bar count appends); default a dry bar as long as its neighbour. */
@@ -162,14 +185,35 @@ export function createWorkbenchStore(initial: Scenario, options: CreateStoreOpti
       return spec.params.find((p) => p.key === key)?.label ?? spec.choices?.find((c) => c.key === key)?.label ?? key;
     };
 
+    // Each kind of change to the observed runoff is an undo step of its own name.
+    const observedLabel = (s: Scenario, patch: Partial<Observed> | null): string => {
+      if (patch === null) return 'Clear observed runoff';
+      if (s.observed !== null && patch.as !== undefined && patch.as !== s.observed.as)
+        return patch.as === 'volume' ? 'Give observed runoff as a volume' : 'Give observed runoff as a depth';
+      if (patch.value === undefined && patch.parameter !== undefined)
+        return `Choose ${labelInSentence(paramLabel(s, patch.parameter))} to fit`;
+      if (patch.value === undefined && patch.locked !== undefined)
+        return patch.locked ? 'Keep matched to observed runoff' : 'Stop keeping matched';
+      return 'Set observed runoff';
+    };
+
     const actions: WorkbenchActions = {
       edit,
       setName: (name) => edit('Rename scenario', (s) => withName(s, name), { coalesceKey: 'name' }),
+      setCatchmentName: (name) =>
+        edit('Rename catchment', (s) => withCatchmentName(s, name), { coalesceKey: 'catchment-name' }),
+      setNotes: (notes) => edit('Edit notes', (s) => withNotes(s, notes), { coalesceKey: 'notes' }),
+      newScenario: () => edit('New scenario', (s) => blankScenario(s.units, s.method)),
       setUnits: (units) =>
         edit(units === 'us' ? 'Show US customary units' : 'Show SI units', (s) => withUnits(s, units)),
       setAreaM2: (areaM2, opts) => edit('Set catchment area', (s) => withAreaM2(s, areaM2), opts),
 
       setStorm: (storm, label) => edit(label, (s) => withStorm(s, storm)),
+      setImportedStorm: (storm, label) =>
+        edit(label, (s) => {
+          const next = withStorm(s, storm);
+          return carriesDemoIdentity(s) ? withoutDemoIdentity(next) : next;
+        }),
       setBarDepth: (k, depthMm, opts) => edit(`Set bar ${k + 1} depth`, (s) => withBarDepth(s, k, depthMm), opts),
       setBarDuration: (k, durationH, opts) =>
         edit(`Set bar ${k + 1} duration`, (s) => withBarDuration(s, k, durationH), opts),
@@ -184,7 +228,7 @@ export function createWorkbenchStore(initial: Scenario, options: CreateStoreOpti
         edit(`Use ${methodSpec(kind).label}`, (s) => withMethodKind(s, kind, derived.effectiveMethod(s))),
       setParam: (key, value, opts) =>
         edit(
-          `Set ${paramLabel(get().scenario, key).toLowerCase()}`,
+          `Set ${labelInSentence(paramLabel(get().scenario, key))}`,
           (s) => {
             if (s.observed?.locked && s.observed.parameter === key && derived.isMatched(s)) {
               throw new InputError(
@@ -208,7 +252,7 @@ export function createWorkbenchStore(initial: Scenario, options: CreateStoreOpti
           return withMethod(s, method);
         }),
 
-      setObserved: (patch, opts) => edit('Set observed runoff', (s) => withObserved(s, patch), opts),
+      setObserved: (patch, opts) => edit(observedLabel(get().scenario, patch), (s) => withObserved(s, patch), opts),
       setKeepMatched: (on) =>
         edit(on ? 'Keep matched to observed runoff' : 'Stop keeping matched', (s) => {
           if (!s.observed)
@@ -223,7 +267,7 @@ export function createWorkbenchStore(initial: Scenario, options: CreateStoreOpti
         const result = derived.fit(s);
         if (result?.ok) {
           const fitted: LossMethod = result.method;
-          edit(`Fit ${paramLabel(s, s.observed?.parameter ?? '').toLowerCase()} to observed runoff`, (doc) =>
+          edit(`Fit ${labelInSentence(paramLabel(s, s.observed?.parameter ?? ''))} to observed runoff`, (doc) =>
             withMethod(doc, fitted),
           );
         }
@@ -283,5 +327,7 @@ export function createWorkbenchStore(initial: Scenario, options: CreateStoreOpti
     };
   });
 
+  // Once the hydrograph side's code arrives, every view reading it draws again (the scenario is unchanged).
+  derived.whenHydrographReady(() => api.setState({}));
   return Object.assign(api, { derived });
 }

@@ -34,7 +34,7 @@ export interface RecordInput {
 }
 
 /** The separation a new record starts with: a straight line, its end N = A^0.2 days after the peak. */
-const FIRST_BASEFLOW_KIND: BaseflowKind = 'straight-line';
+export const FIRST_BASEFLOW_KIND: BaseflowKind = 'straight-line';
 
 /**
  * The core's objection to `method` on this record and area that names one of

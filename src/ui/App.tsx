@@ -1,5 +1,5 @@
 import { Fragment, type ReactNode } from 'react';
-import { StoreProvider, useActions, useScenario, type WorkbenchStore } from '../store';
+import { StoreProvider, loadHydrographSide, useActions, useScenario, type WorkbenchStore } from '../store';
 import { Hyetograph } from './chart/Hyetograph';
 import { useUndoShortcuts } from './keyboard/useUndoShortcuts';
 import { Caution } from './layout/Caution';
@@ -10,6 +10,7 @@ import { MethodPanel } from './method/MethodPanel';
 import { HydrographChart } from './observed';
 import { RainfallToolbar } from './rainfall/RainfallToolbar';
 import { ResultsPanel } from './results/ResultsPanel';
+import { CatchmentPanel } from './catchment/CatchmentPanel';
 import { DrawableChart, RainfallTools, StormInputProvider, StormPanels } from './storm-input';
 import { PrintReport } from './export/PrintReport';
 import { ScenarioBar } from './share';
@@ -24,8 +25,15 @@ import type { UpdateChannel } from '../offline/updates';
 // Views the first screen does not show load when first opened, so the first screen's JavaScript stays small
 // (scripts/check-first-screen.mjs holds it under its budget).
 const EventsView = lazyPart('event set', () => import('./events').then((m) => m.EventsView));
-const DesignStormView = lazyPart('design storm view', () => import('./design-storm').then((m) => m.DesignStormView));
+const DesignStormView = lazyPart('design storm view', () =>
+  Promise.all([import('./design-storm'), loadHydrographSide()]).then(([m]) => m.DesignStormView),
+);
+const RecordView = lazyPart('long record view', () => import('./record').then((m) => m.RecordView));
 const ComparePanel = lazyPart('comparison', () => import('./compare').then((m) => m.ComparePanel));
+// Parts that show the computed hydrograph wait for its code too (loadHydrographSide), so they draw it at once.
+const HydrographPanel = lazyPart('runoff hydrograph', () =>
+  Promise.all([import('./hydrograph/HydrographPanel'), loadHydrographSide()]).then(([m]) => m.HydrographPanel),
+);
 
 // Below the chart and the results, out of the first view: it loads just after the first screen.
 const BarTable = lazyPart('bar table', () => import('./storm-input/table/BarTable').then((m) => m.BarTable));
@@ -91,14 +99,17 @@ function Workbench({ rainfallTools, updates }: { rainfallTools?: ReactNode; upda
                     <DrawableChart>
                       <Hyetograph />
                     </DrawableChart>
-                    <HydrographChart />
+                    {/* Right under the chart, and held in view at the window's foot: the numbers the line moves. */}
                     <ResultsPanel />
+                    <CatchmentPanel />
+                    <HydrographChart />
                     <RecordSeparation />
                     <BarTable />
                   </StormInputProvider>
                 </div>
                 <div className="bench__side">
                   <MethodPanel />
+                  <HydrographPanel />
                   <MatchingPanel />
                 </div>
                 <PinnedComparison />
@@ -120,6 +131,15 @@ function Workbench({ rainfallTools, updates }: { rainfallTools?: ReactNode; upda
             content: (
               <Fragment key={format}>
                 <DesignStormView />
+              </Fragment>
+            ),
+          },
+          {
+            id: 'record',
+            label: 'Long record',
+            content: (
+              <Fragment key={format}>
+                <RecordView />
               </Fragment>
             ),
           },

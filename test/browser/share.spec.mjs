@@ -200,17 +200,19 @@ export const tests = [
           `${parsed.data.length} rows for ${s.storm.depthsMm.length} bars`,
         );
         parsed.data.forEach((row, k) => {
-          const want = core.convertDepth(s.storm.depthsMm[k], 'mm', 'in');
+          // Rows are written to 12 significant figures (the bar table CSV's rule).
+          const want = Number(core.convertDepth(s.storm.depthsMm[k], 'mm', 'in').toPrecision(12));
           check(
             Number(row['Rainfall depth (in)']) === want,
             `bar ${k + 1}: CSV ${row['Rainfall depth (in)']}, scenario ${want} in`,
           );
-          check(Number(row['Duration (h)']) === s.storm.durationsH[k], `bar ${k + 1}: duration ${row['Duration (h)']}`);
+          const minutes = Number((s.storm.durationsH[k] * 60).toPrecision(12));
+          check(Number(row['Duration (min)']) === minutes, `bar ${k + 1}: duration ${row['Duration (min)']} min`);
         });
         const r = core.computeLosses(s.storm, s.method);
         parsed.data.forEach((row, k) => {
           check(
-            Number(row['Loss (in)']) === core.convertDepth(r.lossMm[k], 'mm', 'in'),
+            Number(row['Loss (in)']) === Number(core.convertDepth(r.lossMm[k], 'mm', 'in').toPrecision(12)),
             `bar ${k + 1}: loss is not the core’s`,
           );
         });

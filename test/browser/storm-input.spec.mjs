@@ -187,6 +187,9 @@ export const tests = [
         // A fresh browser opens on the demo; its storm is what the chart was drawn from at the press.
         const stormBefore = before === null ? mods.demo.DEMO_SCENARIO.storm : JSON.parse(before).storm;
         await page.getByRole('button', { name: 'Draw bars' }).click();
+        // The drawing panel loads its code on first use: stroke only once it is on screen.
+        await page.getByRole('region', { name: 'Drawing bars' }).waitFor();
+        await page.locator('.draw-layer__plot').waitFor();
         const plot = await page.locator('.draw-layer__plot').boundingBox();
         const svg = await page.locator('.chart__svg').boundingBox();
         check(plot && svg, 'the drawing layer is not over the chart');

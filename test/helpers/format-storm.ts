@@ -198,6 +198,8 @@ export function formatPaste(spec: PasteSpec): Paste {
     // Used without times, and for a lone stamp: the one bar's length.
     stepMinutesIfNoTime: durMin[0] as number,
     valueKind: spec.valueKind,
+    // The text was written from bars: a long step is a long bar, not a gap in a gauge record.
+    gaps: 'keep',
     unit: spec.unit,
     timeMarks: spec.timeMarks,
     cumulativeFrom: spec.cumulativeFrom,

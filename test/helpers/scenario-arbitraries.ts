@@ -16,9 +16,15 @@ import {
   type LossKind,
   type LossMethod,
   type MethodSpec,
+  TRANSFORMS,
+  TRANSFORM_KINDS,
+  TRANSFORM_OBJECTIVES,
+  type Transform,
+  type TransformKind,
+  type TransformParam,
 } from '../../src/core';
 import { CURRENT_SCENARIO_VERSION, type Scenario } from '../../src/scenario';
-import type { Streamflow } from '../../src/scenario/types';
+import type { HydrographSettings, Streamflow } from '../../src/scenario/types';
 import { baseflowRecordProblem } from '../../src/scenario/baseflow-check';
 
 // Sizes are explicit (size: 'max'): fast-check's default size keeps arrays
@@ -318,6 +324,57 @@ export const streamflowArb = (canLink: boolean, stormClock?: Clock): fc.Arbitrar
       }));
     });
 
+/** A transform of the given kind with parameters drawn inside the core's bounds (version 5). */
+function transformOfKindArb(kind: TransformKind): fc.Arbitrary<Transform> {
+  const time = fc.double({ min: 0.01, max: 100, noNaN: true });
+  switch (kind) {
+    case 'nrcs-dimensionless':
+      return fc
+        .record({ lagH: time, prf: fc.option(fc.double({ min: 100, max: 1000, noNaN: true }), { nil: undefined }) })
+        .map(({ lagH, prf }) => (prf === undefined ? { kind, lagH } : { kind, lagH, peakRateFactor: prf }));
+    case 'triangular':
+      return time.map((lagH) => ({ kind, lagH }));
+    case 'nash':
+      return fc
+        .record({ n: fc.double({ min: 0.5, max: 20, noNaN: true }), kH: time })
+        .map(({ n, kH }) => ({ kind, n, kH }));
+    case 'unit-hydrograph':
+      return fc
+        .record({
+          stepH: fc.double({ min: 0.1, max: 2, noNaN: true }),
+          ordinates: fc.array(fc.double({ min: 0, max: 50, noNaN: true }).map(unsignedZero), {
+            minLength: 3,
+            maxLength: 40,
+          }),
+        })
+        .map(({ stepH, ordinates }) => ({
+          kind,
+          // The ordinates must outlast the unit excess, and hold some runoff.
+          durationH: stepH,
+          stepH,
+          ordinatesM3sPerMm: ordinates.some((q) => q > 0) ? ordinates : [0, 1, ...ordinates.slice(2)],
+        }));
+  }
+}
+
+/** Version 5: the runoff hydrograph settings. */
+export const hydrographArb: fc.Arbitrary<HydrographSettings> = fc
+  .record({
+    transform: fc.option(fc.constantFrom(...TRANSFORM_KINDS).chain(transformOfKindArb), { nil: null }),
+    memory: fc.subarray([...TRANSFORM_KINDS]).chain((kinds) => fc.tuple(...kinds.map(transformOfKindArb))),
+    pick: fc.option(fc.nat(), { nil: null }),
+    objective: fc.constantFrom(...TRANSFORM_OBJECTIVES),
+  })
+  .map(({ transform, memory, pick, objective }) => {
+    const transformMemory: Partial<Record<TransformKind, Transform>> = {};
+    for (const t of memory) transformMemory[t.kind] = t;
+    const keys = transform
+      ? (TRANSFORMS[transform.kind].params as readonly TransformParam[]).filter((p) => p.fit).map((p) => p.key)
+      : [];
+    const fitParameter = pick === null || keys.length === 0 ? null : (keys[pick % keys.length] ?? null);
+    return { transform, transformMemory, fitParameter, objective };
+  });
+
 // The storm's start clock is drawn first: the workbench's record (and the
 // active event's, which is the same) lies within 500 years of it.
 export const scenarioArb: fc.Arbitrary<Scenario> = fc
@@ -367,6 +424,8 @@ export const scenarioArb: fc.Arbitrary<Scenario> = fc
         fc.constantFrom('median' as const, 'mean' as const, 'min' as const, 'max' as const),
         fc.record({ value: fc.double({ min: -1e6, max: 1e6, noNaN: true }).map(unsignedZero) }),
       ),
+      hydrograph: hydrographArb,
+      uncertaintyPct: fc.oneof(fc.constant(0), fc.double({ min: 0, max: 99.9, noNaN: true }).map(unsignedZero)),
     }),
   )
   .map((r) => {
@@ -422,6 +481,8 @@ export const scenarioArb: fc.Arbitrary<Scenario> = fc
           r.setParameter === null || params.length === 0 ? null : (params[r.setParameter % params.length] ?? null),
         designPick: typeof r.designPick === 'string' ? r.designPick : { value: r.designPick.value },
       },
+      hydrograph: r.hydrograph,
+      observedUncertaintyPct: r.uncertaintyPct,
     } satisfies Scenario;
   });
 

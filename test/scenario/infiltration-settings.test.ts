@@ -49,16 +49,17 @@ const opened = (doc: unknown): Scenario => {
 };
 
 describe('scenario version 4: infiltration settings', () => {
-  it('is the current version, one step up from version 3', () => {
-    expect(CURRENT_SCENARIO_VERSION).toBe(4);
+  it('is one step up from version 3 (version 5 came after it)', () => {
+    expect(CURRENT_SCENARIO_VERSION).toBeGreaterThanOrEqual(4);
     expect(MIGRATIONS.map((m) => [m.from, m.to])).toContainEqual([3, 4]);
-    expect(DEMO_SCENARIO.version).toBe(4);
+    expect(DEMO_SCENARIO.version).toBe(CURRENT_SCENARIO_VERSION);
   });
 
   it('adds to the method and every remembered method the settings that compute what version 3 computed, and nothing else', () => {
     const v3 = deepFreeze(versionThree());
     const before = JSON.stringify(v3);
-    const migrated = migrate(v3);
+    // The chain up to version 4 only: the step to 5 is tested in runoff-hydrograph.test.ts.
+    const migrated = migrate(v3, MIGRATIONS, 4);
     expect(migrated).toEqual({
       ok: true,
       fromVersion: 3,

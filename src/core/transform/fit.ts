@@ -5,7 +5,7 @@ import type { Hydrograph } from '../baseflow/types';
 import { brentMinimize } from './brent-min';
 import { checkSeries, compareClean, nashSutcliffe, type HydrographComparison } from './compare';
 import { runoffHydrograph } from './hydrograph';
-import { TRANSFORMS, type TransformParam } from './transforms';
+import { TRANSFORMS, TRANSFORM_OBJECTIVES, type TransformObjective, type TransformParam } from './transforms';
 import type { Excess, RunoffHydrograph, Transform } from './types';
 
 /**
@@ -13,8 +13,6 @@ import type { Excess, RunoffHydrograph, Transform } from './types';
  * observed time of peak, or the best Nash–Sutcliffe efficiency over the
  * observed direct runoff.
  */
-export type TransformObjective = 'peak' | 'time-of-peak' | 'nse';
-export const TRANSFORM_OBJECTIVES: readonly TransformObjective[] = ['peak', 'time-of-peak', 'nse'];
 
 /** Observed direct runoff (after baseflow separation), times in h from the storm start. */
 export interface ObservedDirectRunoff {

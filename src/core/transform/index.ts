@@ -11,18 +11,22 @@ export type {
   Excess,
   RunoffHydrograph,
 } from './types';
-export { TRANSFORMS, TRANSFORM_KINDS, isTransformKind, type TransformParam, type TransformSpec } from './transforms';
+export {
+  TRANSFORMS,
+  TRANSFORM_KINDS,
+  TRANSFORM_OBJECTIVES,
+  NRCS_PEAK_RATE_FACTOR,
+  isTransformKind,
+  type TransformObjective,
+  type TransformParam,
+  type TransformSpec,
+} from './transforms';
+export { TRANSFORM_WEIGHTS } from './weights';
 export { validateTransform, validateExcess } from './validate';
 export { runoffHydrograph, MAX_HYDROGRAPH_SAMPLES, type RunoffHydrographOptions } from './hydrograph';
 export { unitResponse } from './response';
 export { unitHydrographVolumeMm } from './uh-volume';
-export {
-  NRCS_DIMENSIONLESS_UH,
-  NRCS_PEAK_RATE_FACTOR,
-  peakRateFactorSi,
-  dimensionlessArea,
-  gammaShapeForPeakRateFactor,
-} from './nrcs';
+export { NRCS_DIMENSIONLESS_UH, peakRateFactorSi, dimensionlessArea, gammaShapeForPeakRateFactor } from './nrcs';
 export { TRIANGULAR_BASE_OVER_TP } from './triangular';
 export { nashIuh, nashSCurve } from './nash';
 export { lagFromTimeOfConcentration, nrcsTimeToPeakH } from './lag';
@@ -33,8 +37,6 @@ export { compareHydrographs, nashSutcliffe, type HydrographComparison } from './
 export {
   fitTransform,
   peakTimeBetweenSamples,
-  TRANSFORM_OBJECTIVES,
-  type TransformObjective,
   type ObservedDirectRunoff,
   type TransformFitOptions,
   type TransformFitResult,

@@ -1,6 +1,7 @@
 import { brentRoot } from '../calibrate/brent';
 import { gammaTailEnd, responseArray } from './tail';
 import { logGamma } from './gamma';
+import { NRCS_PEAK_RATE_FACTOR } from './transforms';
 
 /**
  * The NRCS dimensionless unit hydrograph: discharge ratio q/qp against time
@@ -19,9 +20,6 @@ export const NRCS_DIMENSIONLESS_UH: { readonly tOverTp: readonly number[]; reado
     0.28, 0.207, 0.147, 0.107, 0.077, 0.055, 0.04, 0.029, 0.021, 0.015, 0.011, 0.005, 0,
   ],
 };
-
-/** The peak rate factor of the published table, in cfs per (mi²·in/h) (NEH-630 ch. 16, from memory). */
-export const NRCS_PEAK_RATE_FACTOR = 484;
 
 /**
  * The same factor in m³/s per (km²·mm/h): qp = factor·A·Q/Tp with A in km²,

@@ -1,4 +1,4 @@
-import { TRANSFORMS, type TransformSpec } from './transforms';
+import { TRANSFORM_WEIGHTS } from './weights';
 import type { Transform } from './types';
 
 /**
@@ -10,8 +10,8 @@ import type { Transform } from './types';
  * trimmed after their last non-zero value.
  */
 export function unitResponse(transform: Transform, stepH: number): Float64Array {
-  const spec = TRANSFORMS[transform.kind] as TransformSpec;
-  const w = spec.weights(transform as never, stepH);
+  const weights = TRANSFORM_WEIGHTS[transform.kind] as (t: Transform, stepH: number) => Float64Array;
+  const w = weights(transform, stepH);
   let sum = 0;
   let last = -1;
   for (let j = 0; j < w.length; j++) {

@@ -1,8 +1,11 @@
-import { nashWeights } from './nash';
-import { nrcsWeights } from './nrcs';
-import { triangularWeights } from './triangular';
 import type { TransformKind, TransformOf } from './types';
-import { unitHydrographWeights } from './unit-hydrograph';
+
+/** The peak rate factor of the published table, in cfs per (mi²·in/h) (NEH-630 ch. 16, from memory). */
+export const NRCS_PEAK_RATE_FACTOR = 484;
+
+/** What a transform parameter is fitted to: the observed peak, its time, or the Nash–Sutcliffe efficiency. */
+export type TransformObjective = 'peak' | 'time-of-peak' | 'nse';
+export const TRANSFORM_OBJECTIVES: readonly TransformObjective[] = ['peak', 'time-of-peak', 'nse'];
 
 /** A numeric parameter of a transform, with its unit and physical bounds. */
 export interface TransformParam<K extends TransformKind = TransformKind> {
@@ -31,13 +34,6 @@ export interface TransformSpec<K extends TransformKind = TransformKind> {
   readonly source: string;
   readonly params: readonly TransformParam<K>[];
   readonly defaults: TransformOf<K>;
-  /**
-   * The unit response for an output step Δ: weights w_j ≥ 0 proportional to
-   * the discharge at the instant j·Δ after the start of 1 mm of excess spread
-   * evenly over [0, Δ] (the Δ-hour unit hydrograph). Rescaled to sum to 1 by
-   * the caller, which makes the volume exact.
-   */
-  readonly weights: (transform: TransformOf<K>, stepH: number) => Float64Array;
 }
 
 const LAG_HELP =
@@ -81,7 +77,6 @@ export const TRANSFORMS: { readonly [K in TransformKind]: TransformSpec<K> } = {
       },
     ],
     defaults: { kind: 'nrcs-dimensionless', lagH: 1 },
-    weights: (t, stepH) => nrcsWeights(t.lagH, t.peakRateFactor, stepH),
   },
   triangular: {
     kind: 'triangular',
@@ -90,7 +85,6 @@ export const TRANSFORMS: { readonly [K in TransformKind]: TransformSpec<K> } = {
     source: 'USDA NRCS (2007) National Engineering Handbook Part 630, ch. 16',
     params: [lagParam],
     defaults: { kind: 'triangular', lagH: 1 },
-    weights: (t, stepH) => triangularWeights(t.lagH, stepH),
   },
   nash: {
     kind: 'nash',
@@ -122,7 +116,6 @@ export const TRANSFORMS: { readonly [K in TransformKind]: TransformSpec<K> } = {
       },
     ],
     defaults: { kind: 'nash', n: 3, kH: 0.5 },
-    weights: (t, stepH) => nashWeights(t.n, t.kH, stepH),
   },
   'unit-hydrograph': {
     kind: 'unit-hydrograph',
@@ -159,7 +152,6 @@ export const TRANSFORMS: { readonly [K in TransformKind]: TransformSpec<K> } = {
       // 0.278 m³/s·h = 1000.8 m³ = 1.0008 mm over 1 km².
       ordinatesM3sPerMm: [0, 0.05, 0.09, 0.06, 0.035, 0.02, 0.0118, 0.0062, 0.0033, 0.0012, 0.0005, 0],
     },
-    weights: unitHydrographWeights,
   },
 };
 

@@ -6,6 +6,7 @@ import { formatCount, formatValue } from '../format';
 import { displayUnit, toDisplay, unitText } from '../units';
 import { Axes } from './Axes';
 import { CAPACITY_CURVES } from './capacity';
+import { useChartHeight } from './chart-height';
 import { chartFrame } from './frame';
 import { lossPartOf, rateLine } from './method-layers';
 import { LossLayer } from './LossLayer';
@@ -14,7 +15,7 @@ import { RainLayer } from './RainLayer';
 import { useTimeSpanH } from './time-span';
 import { useElementWidth } from './useElementWidth';
 
-export const CHART_HEIGHT = 360;
+export { CHART_HEIGHT } from './chart-height';
 
 /** The part of the loss drawn in its own shade (initial loss), computed by the core. */
 function lossPart(storm: Scenario['storm'], method: LossMethod): Float64Array | null {
@@ -43,13 +44,16 @@ export function Hyetograph() {
 
   // With a streamflow record the axis holds the record too, shared with the hydrograph below.
   const span = useTimeSpanH();
-  const frame = useMemo(() => chartFrame(storm, width, CHART_HEIGHT, units, span), [storm, width, units, span]);
+  const height = useChartHeight();
+  const frame = useMemo(() => chartFrame(storm, width, height, units, span), [storm, width, height, units, span]);
   const part = useMemo(() => lossPart(storm, method), [storm, method]);
   const capacity = CAPACITY_CURVES[method.kind];
-  const capacityPath = useMemo(
-    () => (capacity && results.ok ? capacity.path(frame, storm, method, results.result.lossMm) : null),
-    [capacity, frame, storm, method, results],
+  const capacityDrawing = useMemo(
+    () => (capacity && results.ok ? capacity.draw(frame, storm, method) : null),
+    [capacity, frame, storm, method, results.ok],
   );
+  const capacityPath = capacityDrawing?.path ?? null;
+  const aboveTop = capacityDrawing?.aboveTopMmH ?? null;
 
   const line = rateLine(method);
   const lineParam = line?.param;
@@ -94,7 +98,7 @@ export function Hyetograph() {
         </ul>
       </figcaption>
       <div className="chart__box" ref={boxRef}>
-        <svg className="chart__svg" width={width} height={CHART_HEIGHT} role="group" aria-labelledby="chart-title">
+        <svg className="chart__svg" width={width} height={height} role="group" aria-labelledby="chart-title">
           <defs>
             <pattern id="part-hatch" width="6" height="6" patternUnits="userSpaceOnUse" patternTransform="rotate(45)">
               <rect className="hatch__bg" width="6" height="6" />
@@ -108,6 +112,11 @@ export function Hyetograph() {
           </g>
           {capacityPath ? (
             <path className="capacity" d={capacityPath} data-layer="capacity" aria-hidden="true" />
+          ) : null}
+          {aboveTop !== null ? (
+            <text className="capacity__clip" x={frame.plot.left + 6} y={frame.plot.top + 12} aria-hidden="true">
+              ▲ capacity above the chart
+            </text>
           ) : null}
           {n === 0 ? (
             <text
@@ -132,6 +141,14 @@ export function Hyetograph() {
           ) : null}
         </svg>
       </div>
+      {aboveTop !== null ? (
+        <p className="chart__notice" data-note="capacity-clip">
+          The infiltration capacity runs above the top of the chart, where its dashed line runs along the top edge:{' '}
+          {Number.isFinite(aboveTop)
+            ? `up to ${formatValue(toDisplay('rate', aboveTop, units))} ${unitText(displayUnit('rate', units))}.`
+            : 'without bound where the rain starts on dry soil (Green–Ampt’s capacity at the first drop).'}
+        </p>
+      ) : null}
       {!results.ok ? (
         <p className="chart__error" role="alert">
           Losses cannot be worked out: {results.message}

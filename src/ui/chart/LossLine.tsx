@@ -3,8 +3,9 @@ import { useActions } from '../../store';
 import { formatValue } from '../format';
 import { useDragHandle } from '../interaction/useDragHandle';
 import { displayUnit, fromDisplay, toDisplay, unitText } from '../units';
-import { fineStep, grabOffsetPx, valueAfterKey, valueAtPointer } from './drag-math';
+import { clamp, fineStep, grabOffsetPx, snapToStep, valueAfterKey, valueAtPointer } from './drag-math';
 import type { ChartFrame } from './frame';
+import { labelInSentence } from '../../scenario/label-text';
 
 export interface LossLineProps {
   readonly frame: ChartFrame;
@@ -36,10 +37,15 @@ export function LossLine({ frame, paramKey, label, valueMmH, minMmH, system, loc
 
   const handlers = useDragHandle({
     axis: 'y',
-    gesture: `Drag ${label.toLowerCase()}`,
+    gesture: `Drag ${labelInSentence(label)}`,
     disabled: locked,
     grabOffsetPx: (px) => grabOffsetPx(y, px, Math.min(valueMmH, topMmH)),
-    valueAt: (px, grabPx) => valueAtPointer(y, px, grabPx, minMmH, topMmH),
+    // The pointer's value lands on the arrow keys' step, in the units on screen, so a drag gives 6.2 mm/h, not 6.2137….
+    valueAt: (px, grabPx) => {
+      const atPointer = valueAtPointer(y, px, grabPx, minMmH, topMmH);
+      const snapped = fromDisplay('rate', snapToStep(toDisplay('rate', atPointer, system), step), system);
+      return clamp(snapped, minMmH, topMmH);
+    },
     apply: (v) => actions.setParam(paramKey, v),
     stepKey: (key) => {
       const next = valueAfterKey(key, Math.min(shown, topDisplay), {

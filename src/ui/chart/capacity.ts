@@ -22,6 +22,25 @@ export interface CapacityCurve {
   readonly label: string;
   /** Path through the plot, or null when the core has no capacity for this method. */
   readonly path: (frame: ChartFrame, storm: Storm, method: LossMethod, lossMm: Float64Array) => string | null;
+  /** The path, and how far the capacity runs above the chart's top (never clipped silently), or null. */
+  readonly draw: (frame: ChartFrame, storm: Storm, method: LossMethod) => CapacityDrawing | null;
+}
+
+export interface CapacityDrawing {
+  readonly path: string;
+  /** The highest capacity where it runs above the top of the rate axis, mm/h (Infinity: unbounded); null if never. */
+  readonly aboveTopMmH: number | null;
+}
+
+/** The highest capacity above the axis top, mm/h (Infinity when unbounded), or null when it stays under it. */
+export function capacityAboveTop(frame: ChartFrame, rateMmH: ArrayLike<number>): number | null {
+  let high: number | null = null;
+  for (let i = 0; i < rateMmH.length; i++) {
+    const r = rateMmH[i] as number;
+    const v = Number.isNaN(r) ? null : r;
+    if (v !== null && v > frame.topMmH && (high === null || v > high)) high = v;
+  }
+  return high;
 }
 
 /** Points are clipped to the top of the axis, so an unbounded capacity (dry soil) runs along it. */
@@ -57,14 +76,17 @@ function capacitySampleTimes(frame: ChartFrame, storm: Storm): Float64Array {
   return out.subarray(0, i);
 }
 
+function drawCurve(kind: LossKind, frame: ChartFrame, storm: Storm, method: LossMethod): CapacityDrawing | null {
+  if (method.kind !== kind || storm.depthsMm.length === 0) return null;
+  const tH = capacitySampleTimes(frame, storm);
+  const rate = infiltrationCapacity(storm, method, tH);
+  return rate ? { path: toPath(frame, tH, rate), aboveTopMmH: capacityAboveTop(frame, rate) } : null;
+}
+
 const coreCurve = (kind: LossKind): CapacityCurve => ({
   label: 'Infiltration capacity',
-  path: (frame, storm, method) => {
-    if (method.kind !== kind || storm.depthsMm.length === 0) return null;
-    const tH = capacitySampleTimes(frame, storm);
-    const rate = infiltrationCapacity(storm, method, tH);
-    return rate ? toPath(frame, tH, rate) : null;
-  },
+  path: (frame, storm, method) => drawCurve(kind, frame, storm, method)?.path ?? null,
+  draw: (frame, storm, method) => drawCurve(kind, frame, storm, method),
 });
 
 /** A curve for each method whose spec gives a capacity (src/core/loss/methods.ts): no list of kinds kept here. */

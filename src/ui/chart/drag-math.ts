@@ -35,6 +35,12 @@ export function fineStep(top: number): number {
   return 10 ** Math.floor(Math.log10(top / 100));
 }
 
+/** `value` on the grid of `step` (the arrow keys' step), without binary residue (no 6.000000000000001). */
+export function snapToStep(value: number, step: number): number {
+  if (!(step > 0) || !Number.isFinite(value)) return value;
+  return Number((Math.round(value / step) * step).toPrecision(12));
+}
+
 export interface KeySteps {
   readonly step: number;
   /** Page Up / Page Down step. */

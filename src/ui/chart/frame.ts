@@ -4,7 +4,17 @@ import { barEdgesH, peakIntensityMmH, totalDurationH, type Storm, type UnitSyste
 import { formatValue } from '../format';
 import { displayUnit, fromDisplay, toDisplay, unitText } from '../units';
 import { formatWallDate, formatWallTime, wallClockMs } from './clock';
+import { elapsedTicksH, formatElapsed } from './elapsed-ticks';
 import type { TimeSpanH } from './time-span';
+
+/** The bars' one duration, h, or null when they differ (to a part in 10⁹, as the rainfall line reads them). */
+function uniformStepH(storm: Storm): number | null {
+  const d = storm.durationsH;
+  const first = d[0];
+  if (first === undefined) return null;
+  for (let k = 1; k < d.length; k++) if (Math.abs((d[k] as number) - first) > 1e-9 * first) return null;
+  return first;
+}
 
 /** Space around the plot for the axes, px. */
 export const MARGIN = { top: 18, right: 20, bottom: 46, left: 62 } as const;
@@ -95,8 +105,13 @@ export function chartFrame(
     }));
     xTitle = `Clock time, storm from ${formatWallDate(startMs)} ${formatWallTime(startMs)}`;
   } else {
-    xTicks = x.ticks(tickCount).map((h) => ({ px: x(h), label: formatValue(h) }));
-    xTitle = 'Time from storm start (h)';
+    // Hours and minutes from the start, on bar edges when the bars are of one length (issue 16).
+    const [fromH, toH] = x.domain() as [number, number];
+    xTicks = elapsedTicksH(fromH, toH, tickCount, uniformStepH(storm)).map((h) => ({
+      px: x(h),
+      label: formatElapsed(h),
+    }));
+    xTitle = 'Time from storm start (h:mm)';
   }
 
   const edgesH = barEdgesH(storm);

@@ -30,10 +30,16 @@ export function sharedTimeSpanH(
 function spanOf(d: Derived, s: Scenario): TimeSpanH | undefined {
   const flow = s.streamflow;
   const aligned = d.alignment(s);
-  if (!flow || !aligned) return undefined;
-  const first = flow.timesH[0] ?? 0;
-  const last = flow.timesH[flow.timesH.length - 1] ?? first;
-  return sharedTimeSpanH(totalDurationH(s.storm), { firstH: first + aligned.offsetH, lastH: last + aligned.offsetH });
+  // A computed hydrograph (issue 13) runs on after the storm: the axis holds its recession too. Its end
+  // depends on the storm and the unit hydrograph only, so a drag of the loss line leaves the axis put.
+  const computedEndH = d.hydrographEndH(s);
+  const stormH = totalDurationH(s.storm);
+  if (!flow || !aligned) {
+    return computedEndH === null ? undefined : sharedTimeSpanH(stormH, { firstH: 0, lastH: computedEndH });
+  }
+  const first = (flow.timesH[0] ?? 0) + aligned.offsetH;
+  const last = (flow.timesH[flow.timesH.length - 1] ?? first) + aligned.offsetH;
+  return sharedTimeSpanH(stormH, { firstH: first, lastH: Math.max(last, computedEndH ?? last) });
 }
 
 /** The shared span for the charts on screen (a stable object while its ends stay put). */

@@ -13,6 +13,7 @@ import { commonFrames } from './common-frame';
 import { difference, type Difference } from './difference';
 import { MAX_PINS, type Pin } from '../services/pins';
 import { totalsOf, type Totals } from '../results/totals';
+import './compare.css';
 
 const SMALL_CHART_HEIGHT = 190;
 const GAP_PX = 12;

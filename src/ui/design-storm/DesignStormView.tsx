@@ -1,5 +1,15 @@
-import { useMemo, useState } from 'react';
-import { computeLosses, isInputError, methodNumber, methodSpec, runoffVolumeM3, type LossMethod } from '../../core';
+import { useEffect, useMemo, useState } from 'react';
+import {
+  computeLosses,
+  isInputError,
+  methodNumber,
+  methodSpec,
+  runoffHydrograph,
+  runoffVolumeM3,
+  type LossMethod,
+} from '../../core';
+import { dischargeText } from '../observed/discharge';
+import { hoursMinutes } from '../results/hours-minutes';
 import { useActions, useDerived, useScenario, useWorkbenchStore, withDesignStormOnWorkbench } from '../../store';
 import { toScenarioStorm } from '../../store/edits';
 import { usePins, useServices } from '../services/services';
@@ -8,8 +18,10 @@ import { designMethod } from '../events/event-fits';
 import { useEventFits } from '../events/use-event-fits';
 import { formatPercent, formatValue } from '../format';
 import { displayUnit, paramToDisplay, paramUnitText, toDisplay, unitText } from '../units';
-import { buildDesignStorm, FIELD_LABELS, type DesignForm, type FormField } from './build';
+import { buildDesignStorm, FIELD_LABELS, FORM_DEPTH_UNIT, formInUnits, type DesignForm, type FormField } from './build';
 import { StormBars } from './StormBars';
+import './design-storm.css';
+import '../events/events.css';
 
 // Invented starting values (no real gauge): a 2-hour storm from a made-up IDF formula.
 const START: DesignForm = {
@@ -74,14 +86,19 @@ function Text({
  * undoable edit, belonging to no event) or be pinned for comparison.
  */
 export function DesignStormView() {
-  const [form, setForm] = useState<DesignForm>(START);
+  const units = useScenario((s) => s.units);
+  const [form, setForm] = useState<DesignForm>(() => formInUnits(START, units));
+  // The form follows the SI / US switch: depths and intensities are re-expressed in the new units.
+  useEffect(() => {
+    setForm((f) => ((f.depthUnit ?? 'mm') === FORM_DEPTH_UNIT[units] ? f : formInUnits(f, units)));
+  }, [units]);
+  const formDepthUnit = form.depthUnit ?? 'mm';
   const [loss, setLoss] = useState<'design' | 'workbench'>('design');
   const [said, setSaid] = useState<string | null>(null);
   const set = (
     field: FormField | 'shape' | 'formula' | 'durationUnit' | 'intensityUnit' | 'scale',
     value: string | boolean,
   ): void => setForm((f) => ({ ...f, [field]: value }));
-  const units = useScenario((s) => s.units);
   const areaM2 = useScenario((s) => s.catchment.areaM2);
   const benchMethod = useDerived((d, s) => d.effectiveMethod(s));
   const { fits, outcome } = useEventFits();
@@ -102,6 +119,23 @@ export function DesignStormView() {
       throw error;
     }
   }, [built, method]);
+
+  // The design peak, through the workbench's unit hydrograph (issue 13), when one is chosen.
+  const transform = useScenario((s) => s.hydrograph.transform);
+  const peak = useMemo(() => {
+    if (!result?.ok || !built.ok || transform === null || !(areaM2 > 0)) return null;
+    try {
+      const h = runoffHydrograph(
+        { durationsH: built.storm.durationsH, excessMm: result.r.excessMm },
+        transform,
+        areaM2,
+      );
+      return { ok: true as const, peakM3s: h.peakM3s, timeOfPeakH: h.timeOfPeakH };
+    } catch (error) {
+      if (isInputError(error)) return { ok: false as const, message: error.message };
+      throw error;
+    }
+  }, [result, built, transform, areaM2]);
 
   const spec = methodSpec(method.kind);
   const param = spec.params.find((p) => p.key === fits.parameter);
@@ -216,7 +250,7 @@ export function DesignStormView() {
             </div>
           </div>
         ) : (
-          <Text form={form} field="depthMm" set={set} bad={badField} hint="(mm)" />
+          <Text form={form} field="depthMm" set={set} bad={badField} hint={`(${formDepthUnit})`} />
         )}
         <div className="design-form__row">
           <Text form={form} field="durationMin" set={set} bad={badField} hint="(min)" />
@@ -229,7 +263,7 @@ export function DesignStormView() {
           <input type="checkbox" checked={form.scale} onChange={(e) => set('scale', e.currentTarget.checked)} />
           Scale to a total depth
         </label>
-        {form.scale ? <Text form={form} field="scaleMm" set={set} bad={badField} hint="(mm)" /> : null}
+        {form.scale ? <Text form={form} field="scaleMm" set={set} bad={badField} hint={`(${formDepthUnit})`} /> : null}
         {!built.ok ? (
           <p id={messageId} role="alert" className="design-form__problem">
             {built.message}
@@ -290,6 +324,16 @@ export function DesignStormView() {
                   <dt>Runoff fraction</dt>
                   <dd>{formatPercent(result.r.runoffFraction)}</dd>
                 </div>
+                {peak ? (
+                  <div>
+                    <dt>Design peak discharge</dt>
+                    <dd data-result="design-peak">
+                      {peak.ok
+                        ? `${dischargeText(peak.peakM3s, units)} at ${hoursMinutes(peak.timeOfPeakH)} after the storm start`
+                        : `— (${peak.message})`}
+                    </dd>
+                  </div>
+                ) : null}
               </dl>
             ) : result ? (
               <p role="alert" className="design-form__problem">

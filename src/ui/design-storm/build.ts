@@ -11,6 +11,8 @@ import {
 import { readTyped, stormDepthRefusal, type TypedQuantity } from '../fields/read-typed';
 import { currentNumberFormat } from '../number-format/preference';
 import { parseNumber } from '../parse-number';
+import { formatForField } from '../format';
+import type { UnitSystem } from '../../core';
 
 /** What the design storm form holds: text as typed, so nothing typed is ever lost. */
 export interface DesignForm {
@@ -28,6 +30,8 @@ export interface DesignForm {
   readonly depthMm: string;
   readonly scale: boolean;
   readonly scaleMm: string;
+  /** The unit the storm depth and the scaled depth are typed in (mm when left out); follows the SI / US switch. */
+  readonly depthUnit?: 'mm' | 'in';
 }
 
 /** Field ids of the form, and the name each one has on screen (used in messages). */
@@ -59,18 +63,70 @@ class FieldProblem extends Error {
 
 const MINUTES = { toSI: (min: number) => min / 60, fromSI: (h: number) => h * 60, unit: 'min' } as const;
 
-/** The plausible range each field's number falls in (src/io/plausible.ts); the core bounds the rest (a, b, c, peak). */
-const RANGES: Partial<Record<FormField, TypedQuantity>> = {
-  depthMm: { quantity: 'depth', unit: 'mm' },
-  scaleMm: { quantity: 'depth', unit: 'mm' },
-  durationMin: { quantity: 'stormDuration', ...MINUTES },
-  stepMin: { quantity: 'barDuration', ...MINUTES },
-};
+const MM_PER_IN = 25.4; // exact (NIST SP 811, 2008)
+const DEPTH = {
+  si: { quantity: 'depth', unit: 'mm' },
+  us: {
+    quantity: 'depth',
+    unit: 'in',
+    toSI: (inches: number) => inches * MM_PER_IN,
+    fromSI: (mm: number) => mm / MM_PER_IN,
+  },
+} as const satisfies Record<UnitSystem, TypedQuantity>;
 
-function num(form: DesignForm, field: FormField): number {
-  const parsed = readTyped(form[field] as string, RANGES[field]);
+/** The depth unit the form's depth fields are typed in, by unit system. */
+export const FORM_DEPTH_UNIT: Record<UnitSystem, 'mm' | 'in'> = { si: 'mm', us: 'in' };
+
+/** The plausible range each field's number falls in (src/io/plausible.ts); the core bounds the rest (a, b, c, peak). */
+function range(field: FormField, system: UnitSystem): TypedQuantity | undefined {
+  if (field === 'depthMm' || field === 'scaleMm') return DEPTH[system];
+  if (field === 'durationMin') return { quantity: 'stormDuration', ...MINUTES };
+  if (field === 'stepMin') return { quantity: 'barDuration', ...MINUTES };
+  return undefined;
+}
+
+/** A field's number, in SI for depths (mm) and as typed for the rest. */
+function num(form: DesignForm, field: FormField, system: UnitSystem = 'si'): number {
+  const what = range(field, system);
+  const parsed = readTyped(form[field] as string, what);
   if (!parsed.ok) throw new FieldProblem(field, `${FIELD_LABELS[field]}: ${parsed.message}`);
-  return parsed.value;
+  return (field === 'depthMm' || field === 'scaleMm') && what?.toSI ? what.toSI(parsed.value) : parsed.value;
+}
+
+/** Typed text re-expressed in another unit (`factor` new per old), or left as typed when it does not read as a number. */
+function rescaled(text: string, factor: number): string {
+  const parsed = parseNumber(text);
+  return parsed.ok ? formatForField(parsed.value * factor) : text;
+}
+
+/**
+ * The form re-expressed for another unit system, so it follows the SI / US switch: depths in mm or in, and
+ * intensities in mm/h or in/h (the IDF formula's a, which i is proportional to, and each row of the table).
+ * Durations stay in minutes or hours, as both systems write them.
+ */
+export function formInUnits(form: DesignForm, system: UnitSystem): DesignForm {
+  const depthFactor = system === 'us' ? 1 / MM_PER_IN : MM_PER_IN;
+  const wantRate: RateUnit = system === 'us' ? 'in/h' : 'mm/h';
+  const rateFactor = form.intensityUnit === wantRate ? 1 : depthFactor;
+  const depth = (form.depthUnit ?? 'mm') === FORM_DEPTH_UNIT[system] ? 1 : depthFactor;
+  return {
+    ...form,
+    depthUnit: FORM_DEPTH_UNIT[system],
+    depthMm: depth === 1 ? form.depthMm : rescaled(form.depthMm, depth),
+    scaleMm: depth === 1 ? form.scaleMm : rescaled(form.scaleMm, depth),
+    intensityUnit: wantRate,
+    a: rateFactor === 1 ? form.a : rescaled(form.a, rateFactor),
+    tableText:
+      rateFactor === 1
+        ? form.tableText
+        : form.tableText
+            .split(/\r?\n/)
+            .map((line) => {
+              const m = /^(\s*\S+)(\s*[;\t]\s*|\s+)(\S+)\s*$/.exec(line);
+              return m ? `${m[1]}${m[2]}${rescaled(m[3] as string, rateFactor)}` : line;
+            })
+            .join('\n'),
+  };
 }
 
 /**
@@ -131,14 +187,15 @@ const CORE_FIELDS: Readonly<Record<string, FormField>> = {
  * label, and for a table the row and column.
  */
 export function buildDesignStorm(form: DesignForm): Built {
+  const system: UnitSystem = form.depthUnit === 'in' ? 'us' : 'si';
   try {
     const durationH = num(form, 'durationMin') / 60;
     const stepH = num(form, 'stepMin') / 60;
     let storm: Storm;
     let description: string;
     if (form.shape === 'uniform') {
-      storm = uniformStorm({ depthMm: num(form, 'depthMm'), durationH, stepH });
-      description = `Uniform storm of ${form.depthMm} mm over ${form.durationMin} min`;
+      storm = uniformStorm({ depthMm: num(form, 'depthMm', system), durationH, stepH });
+      description = `Uniform storm of ${form.depthMm} ${form.depthUnit ?? 'mm'} over ${form.durationMin} min`;
     } else {
       const units = { durationUnit: form.durationUnit, intensityUnit: form.intensityUnit };
       const idf: Idf =
@@ -148,7 +205,7 @@ export function buildDesignStorm(form: DesignForm): Built {
       storm = alternatingBlockStorm({ idf, durationH, stepH, peakFraction: num(form, 'peak') });
       description = `Alternating block storm, ${form.durationMin} min in ${form.stepMin} min steps, from the IDF ${form.shape === 'table' ? 'table' : form.formula}`;
     }
-    const tooDeep = stormDepthRefusal(storm, 'si');
+    const tooDeep = stormDepthRefusal(storm, system);
     if (tooDeep) {
       throw new FieldProblem(
         form.shape === 'uniform' ? 'depthMm' : form.shape === 'table' ? 'tableText' : 'a',
@@ -156,14 +213,14 @@ export function buildDesignStorm(form: DesignForm): Built {
       );
     }
     if (form.scale) {
-      const to = num(form, 'scaleMm');
+      const to = num(form, 'scaleMm', system);
       try {
         storm = scaleStormToDepth(storm, to);
       } catch (error) {
         if (isInputError(error)) throw new FieldProblem('scaleMm', `${FIELD_LABELS.scaleMm}: ${error.message}`);
         throw error;
       }
-      description += `, scaled to ${form.scaleMm} mm`;
+      description += `, scaled to ${form.scaleMm} ${form.depthUnit ?? 'mm'}`;
     }
     return { ok: true, storm, description };
   } catch (error) {

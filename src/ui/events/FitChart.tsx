@@ -67,6 +67,20 @@ export function FitChart({ rows, parameterLabel, unit, depthUnit, showValue, sho
           `${parameterLabel} is ${formatValue(first.y)}${u} for the smallest storm and ${formatValue(last.y)}${u} for the largest; ` +
           `${points.length > 1 ? `it ranges from ${formatValue(yLow)} to ${formatValue(yHigh)}${u}` : ''}` +
           (design === null ? '.' : `; the design value ${formatValue(design)}${u} is dashed.`);
+  // With nothing to plot, a plain message rather than an empty frame whose axis has no range to label.
+  if (points.length === 0) {
+    return (
+      <figure className="fit-chart fit-chart--empty" aria-labelledby="fit-chart-caption">
+        <p className="fit-chart__empty">
+          Nothing to plot yet: each event with an observed runoff and a fit shows here as a point, its fitted{' '}
+          {parameterLabel.toLowerCase()} against its storm’s rainfall.
+        </p>
+        <figcaption id="fit-chart-caption" className="visually-hidden">
+          {summary}
+        </figcaption>
+      </figure>
+    );
+  }
   return (
     <figure className="fit-chart" aria-labelledby="fit-chart-caption">
       <svg viewBox={`0 0 ${W} ${H}`} width="100%" role="img" aria-label={summary} className="fit-chart__svg">

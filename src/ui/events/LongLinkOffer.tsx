@@ -1,6 +1,7 @@
 import { scenarioFileName, scenarioToFileText } from '../../scenario';
 import type { Scenario } from '../../scenario/types';
 import { formatCount } from '../format';
+import './events.css';
 
 /**
  * Above this many characters a link is not practical to send: mail and chat

@@ -1,4 +1,3 @@
 // The catchment's event set: the list of events, fit all, the spread of the fits and the design value.
-import './events.css';
 
 export { EventsView } from './EventsView';

@@ -1,9 +1,10 @@
 import { CAUTION_TEXT, scenarioFileName } from '../../scenario';
-import { useWorkbenchStore } from '../../store';
+import { loadHydrographSide, useScenario, useWorkbenchStore } from '../../store';
 import { useBarMessage } from '../services/bar-message';
 import { useServices } from '../services/services';
 import { loadReport } from './PrintReport';
 import { formatCount } from '../format';
+import './export.css';
 
 /** The workbench's live chart: the hyetograph's SVG (src/ui/chart/Hyetograph.tsx). */
 export function liveChartSvg(doc: Document = document): SVGSVGElement | null {
@@ -57,6 +58,42 @@ export function ExportButtons() {
     saveFile(new Blob([text], { type: 'text/csv;charset=utf-8' }), name);
     const n = scenario.storm.depthsMm.length;
     show({ tone: 'done', title: `Exported ${name}: ${formatCount(n)} bar${n === 1 ? '' : 's'} with loss and excess.` });
+  };
+
+  const hasHydrograph = useScenario((s) => s.hydrograph.transform !== null);
+  const exportHydrographCsv = async (): Promise<void> => {
+    const { scenario, base } = current();
+    try {
+      await loadHydrographSide();
+    } catch (error) {
+      show({ tone: 'problem', title: `No hydrograph was exported: ${why(error)}.` });
+      return;
+    }
+    const computed = store.derived.hydrograph(scenario);
+    if (!computed?.ok) {
+      show({
+        tone: 'problem',
+        title: 'No hydrograph was exported: it cannot be worked out.',
+        body: <p>{computed ? computed.message : 'Choose a unit hydrograph first.'}</p>,
+      });
+      return;
+    }
+    let files: Awaited<ReturnType<typeof exportFiles>>;
+    try {
+      files = await exportFiles();
+    } catch (error) {
+      show({ tone: 'problem', title: `No hydrograph was exported: ${why(error)}.` });
+      return;
+    }
+    const text = files.hydrographCsv({
+      scenario,
+      transform: computed.transform,
+      hydrograph: computed.hydrograph,
+      comparison: store.derived.comparison(scenario),
+    });
+    const name = files.exportFileName(base, 'hydrograph', 'csv');
+    saveFile(new Blob([text], { type: 'text/csv;charset=utf-8' }), name);
+    show({ tone: 'done', title: `Exported ${name}: ${formatCount(computed.hydrograph.timesH.length)} samples.` });
   };
 
   const chart = async () => {
@@ -114,6 +151,11 @@ export function ExportButtons() {
       <button type="button" onClick={() => void exportCsv()} title="Bars with loss and excess, as CSV">
         Export CSV
       </button>
+      {hasHydrograph ? (
+        <button type="button" onClick={() => void exportHydrographCsv()} title="The computed hydrograph, as CSV">
+          Export hydrograph CSV
+        </button>
+      ) : null}
       <button type="button" onClick={() => void exportSvg()}>
         Export SVG
       </button>

@@ -1,5 +1,7 @@
+import { loadHydrographSide } from '../../store';
 import { useEffect, useState, type ComponentType } from 'react';
 import { flushSync } from 'react-dom';
+import './export.css';
 
 let body: ComponentType | null = null;
 let loading: Promise<ComponentType> | null = null;
@@ -10,13 +12,15 @@ let loading: Promise<ComponentType> | null = null;
  * ready; "Print report" waits for it. A failed fetch may be tried again.
  */
 export function loadReport(): Promise<ComponentType> {
-  loading ??= import('./ReportBody').then(
-    (m) => (body = m.ReportBody),
-    (error: unknown) => {
-      loading = null;
-      throw error;
-    },
-  );
+  loading ??= Promise.all([import('./ReportBody'), loadHydrographSide()])
+    .then(([m]) => m)
+    .then(
+      (m) => (body = m.ReportBody),
+      (error: unknown) => {
+        loading = null;
+        throw error;
+      },
+    );
   return loading;
 }
 

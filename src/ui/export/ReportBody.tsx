@@ -1,5 +1,5 @@
 import { useMemo } from 'react';
-import { methodSpec, totalDurationH } from '../../core';
+import { TRANSFORMS, methodSpec, totalDurationH } from '../../core';
 import { CAUTION_TEXT } from '../../scenario';
 import { useDerived, useScenario } from '../../store';
 import { chartFrame } from '../chart/frame';
@@ -11,7 +11,11 @@ import { formatCount, formatPercent, formatValue } from '../format';
 import { displayUnit, toDisplay, unitText, type Quantity } from '../units';
 import { useServices } from '../services/services';
 import { methodParametersText } from './bar-table-csv';
+import { transformParametersText } from './hydrograph-csv';
+import { dischargeText } from '../observed/discharge';
+import { hoursMinutes } from '../results/hours-minutes';
 import { StaticChart } from './StaticChart';
+import './export.css';
 
 const REPORT_CHART = { width: 720, height: 280 } as const;
 
@@ -42,6 +46,8 @@ export function ReportBody() {
           ? show('depth', observed.value)
           : show('volume', observed.value);
   const printed = now();
+  const computed = derived.hydrograph(scenario);
+  const transform = scenario.hydrograph.transform;
 
   return (
     <>
@@ -73,6 +79,16 @@ export function ReportBody() {
           <dt>Loss method</dt>
           <dd>
             {spec.label}: {methodParametersText(method, units)}
+          </dd>
+          <dt>Runoff hydrograph</dt>
+          <dd data-report="hydrograph">
+            {transform === null
+              ? 'None'
+              : `${TRANSFORMS[transform.kind].label}: ${transformParametersText(transform, formatValue)}; ` +
+                (computed?.ok
+                  ? `peak discharge ${dischargeText(computed.hydrograph.peakM3s, units)} at ` +
+                    `${hoursMinutes(computed.hydrograph.timeOfPeakH)} after the storm start`
+                  : `no hydrograph (${computed?.message ?? 'not worked out'})`)}
           </dd>
           <dt>Observed runoff</dt>
           <dd>

@@ -24,10 +24,12 @@ import { displayUnit, paramToDisplay, paramUnitText, toDisplay, unitText } from 
  * `comment='#'`), then one header row with the unit of every column, then one
  * row per bar.
  *
- * Numbers in the rows are written in full (shortest text that reads back as
- * the same double), in the units the screen shows, so the table reads back to
- * the same bars; durations are always hours. Losses and excess per bar are
- * the core's, passed in from the store.
+ * Numbers in the rows are written to 12 significant figures (`cellNumber`),
+ * in the units the screen shows: every value a person typed reads back as
+ * typed, and the binary residue of sums and unit conversions is dropped
+ * (2.4000000000000004 h is 144 min). Durations and start times are in
+ * minutes, as the bar table on screen types them. Losses and excess per bar
+ * are the core's, passed in from the store.
  */
 export interface BarTableInput {
   readonly scenario: Scenario;
@@ -48,6 +50,14 @@ function noteNumber(x: number): string {
   if (!Number.isFinite(x)) return '—';
   if (Object.is(x, -0)) return '0';
   return Math.abs(x) >= 1000 ? whole.format(x) : sig4.format(x);
+}
+
+/**
+ * A number for a row cell: 12 significant figures, more than any typed input or gauge reading carries and
+ * fewer than a double's 15–17, so 0.1 + 0.2 is written 0.3 and 2.4 h × 60 is 144.
+ */
+export function cellNumber(x: number): number {
+  return Number.isFinite(x) ? Number(x.toPrecision(12)) : x;
 }
 
 /** "Loss rate φ = 8 mm/h; …" for the method's numeric parameters and choices, in display units. */
@@ -81,8 +91,8 @@ function barTableHeader(scenario: Scenario): string[] {
   if (scenario.storm.startIso !== undefined && wallClockMs(scenario.storm.startIso) !== null)
     head.push('Start (clock)');
   head.push(
-    'Start (h from storm start)',
-    'Duration (h)',
+    'Start (min from storm start)',
+    'Duration (min)',
     `Rainfall depth (${depth})`,
     `Rainfall intensity (${rate})`,
     `Loss (${depth})`,
@@ -119,7 +129,7 @@ export function barTableCsv({ scenario, method, result, volumeM3 }: BarTableInpu
       `Totals: rainfall ${show(result.rainMm)}; loss ${show(result.totalLossMm)}; rainfall excess ${show(result.totalExcessMm)}` +
         `; runoff fraction ${noteNumber(result.runoffFraction * 100)} %${volume}`,
     ),
-    csvNote('Numbers in the rows are unrounded; each column heading gives its unit.'),
+    csvNote('Numbers in the rows are to 12 significant figures; each column heading gives its unit.'),
     csvRow(barTableHeader(scenario)),
   );
 
@@ -132,12 +142,12 @@ export function barTableCsv({ scenario, method, result, volumeM3 }: BarTableInpu
     const row: CsvCell[] = [k + 1];
     if (startMs !== null) row.push(formatClockText(startMs + startH * 3_600_000, true));
     row.push(
-      startH,
-      durationH,
-      toDisplay('depth', depthMm, units),
-      toDisplay('rate', depthMm / durationH, units),
-      toDisplay('depth', result.lossMm[k] as number, units),
-      toDisplay('depth', result.excessMm[k] as number, units),
+      cellNumber(startH * 60),
+      cellNumber(durationH * 60),
+      cellNumber(toDisplay('depth', depthMm, units)),
+      cellNumber(toDisplay('rate', depthMm / durationH, units)),
+      cellNumber(toDisplay('depth', result.lossMm[k] as number, units)),
+      cellNumber(toDisplay('depth', result.excessMm[k] as number, units)),
     );
     lines.push(csvRow(row));
   }

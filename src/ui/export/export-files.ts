@@ -4,3 +4,4 @@ export { barTableCsv, exportFileName } from './bar-table-csv';
 export { chartHeading, chartLegend } from './chart-file';
 export { standaloneSvg } from './chart-svg';
 export { svgToPng } from './chart-png';
+export { hydrographCsv, transformParametersText } from './hydrograph-csv';

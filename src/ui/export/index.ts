@@ -1,5 +1,4 @@
 // Exports of the scenario on screen: bar table CSV, chart SVG and PNG, and the printed report.
-import './export.css';
 
 export { PrintReport, loadReport } from './PrintReport';
 export { barTableCsv } from './bar-table-csv';

@@ -1,7 +1,10 @@
 import { useDeferredValue, useId, useMemo, useRef, useState, type ComponentType, type ReactNode } from 'react';
-import type { ImportProblem, SeriesSettings, TextRow } from '../../io';
+import type { ImportProblem, ReaderContext, ReaderName, SeriesSettings, TextRow } from '../../io';
 import { Modal } from '../layout/Modal';
+import { HeldText, isLongText } from './HeldText';
 import { OpenFileButton } from './OpenFileButton';
+import { ReadProgress } from './ReadProgress';
+import { useLongRead } from './use-long-read';
 import { ProblemTable } from './ProblemTable';
 import type { SettingsPanelProps } from './settings-panel';
 import { useTextFile } from './use-text-file';
@@ -49,6 +52,12 @@ export interface ImportKind<S extends SeriesSettings, R> {
   readonly Settings: ComponentType<SettingsPanelProps<S>>;
   /** How the problem table names this import's settings, where it differs from the default. */
   readonly problemWords?: Readonly<Record<string, string>>;
+  /**
+   * The same import by name, for long texts (isLongText): they are read in
+   * a Web Worker (src/io/readers.ts names the readers), so the page keeps
+   * answering. A kind without one reads long texts on the page.
+   */
+  readonly reader?: { readonly name: ReaderName; readonly context: ReaderContext };
 }
 
 export interface ImportDialogProps<S extends SeriesSettings, R> {
@@ -89,29 +98,69 @@ export function ImportDialog<S extends SeriesSettings, R>({
   const [text, setText] = useState(initial.text);
   const [fileName, setFileName] = useState(initial.fileName);
   const [corrections, setCorrections] = useState<Partial<S>>(initial.corrections);
+  const [note, setNote] = useState<string | null>(null);
   const textRef = useRef<HTMLTextAreaElement | null>(null);
   const file = useTextFile(words.fileWhat, (read, name) => {
     setText(read);
     setFileName(name);
     setCorrections({});
+    setNote(null);
   });
 
-  // Reading a long record takes a moment: the text area stays responsive and the preview follows.
-  const shownText = useDeferredValue(text);
-  const stale = shownText !== text;
-  const empty = shownText.trim() === '';
-  const guessed = useMemo(() => guess(shownText), [guess, shownText]);
-  const settings: S = useMemo(() => ({ ...guessed, ...corrections }), [guessed, corrections]);
-  const preview = useMemo(
-    () => (empty ? null : previewOf(shownText, settings)),
-    [previewOf, empty, shownText, settings],
+  // A long text (megabytes) never goes into the text area, and is read off the page's thread when the kind can be.
+  const held = isLongText(text);
+  const offThread = held && kind.reader !== undefined;
+  const long = useLongRead<S, R>(offThread ? text : null, kind.reader, corrections);
+
+  // Reading a short record takes a moment: the text area stays responsive and the preview follows.
+  const shownText = useDeferredValue(offThread ? '' : text);
+  const stale = offThread ? long.state.phase !== 'done' : shownText !== text;
+  const empty = offThread ? false : shownText.trim() === '';
+  const guessed = useMemo(() => (offThread ? null : guess(shownText)), [guess, shownText, offThread]);
+  const settings: S | null = useMemo(
+    () =>
+      offThread
+        ? long.state.phase === 'done'
+          ? long.state.outcome.settings
+          : null
+        : { ...(guessed as S), ...corrections },
+    [offThread, long.state, guessed, corrections],
   );
-  const imported = useMemo(
-    () => (preview !== null && preview.problems.length === 0 ? apply(shownText, settings) : null),
-    [apply, preview, shownText, settings],
+  const syncPreview = useMemo(
+    () => (offThread || empty || settings === null ? null : previewOf(shownText, settings)),
+    [previewOf, offThread, empty, shownText, settings],
   );
+  const syncImported = useMemo(
+    () =>
+      !offThread && syncPreview !== null && syncPreview.problems.length === 0 && settings !== null
+        ? apply(shownText, settings)
+        : null,
+    [apply, offThread, syncPreview, shownText, settings],
+  );
+  const preview: ImportPreview | null = offThread
+    ? long.state.phase === 'done'
+      ? long.state.outcome
+      : null
+    : syncPreview;
+  const imported: R | null = offThread
+    ? long.state.phase === 'done' && long.state.outcome.problems.length === 0
+      ? long.state.outcome.imported
+      : null
+    : syncImported;
+
+  /** Drops the held text: the dialog is as it opened empty, ready for a paste. */
+  const letGo = (why: string | null): void => {
+    setText('');
+    setFileName(null);
+    setCorrections({});
+    setNote(why);
+  };
 
   const correct = (patch: Partial<S>): void => setCorrections((c) => ({ ...c, ...patch }));
+  const stopReading = (): void => {
+    long.stop();
+    letGo('Reading stopped. Nothing was changed; paste or open the record again when you are ready.');
+  };
   const cancel = (): void => onClose();
   const accept = (): void => {
     if (imported === null || stale) return;
@@ -139,27 +188,42 @@ export function ImportDialog<S extends SeriesSettings, R>({
       </div>
       <div className="paste__body">
         <div className="paste__source">
-          <div className="field">
-            <label htmlFor={`${id}-text`}>{words.textLabel}</label>
-            <textarea
-              id={`${id}-text`}
-              ref={textRef}
-              className="paste__text"
-              value={text}
-              spellCheck={false}
-              autoComplete="off"
-              wrap="off"
-              rows={14}
-              placeholder={words.placeholder}
-              aria-describedby={`${id}-summary`}
-              onChange={(e) => {
-                const next = e.currentTarget.value;
-                if (text.trim() === '') setCorrections({});
-                setText(next);
-                if (fileName !== null && next.trim() === '') setFileName(null);
-              }}
-            />
-          </div>
+          {held ? (
+            <HeldText text={text} label={words.textLabel} fileName={fileName} onClear={() => letGo(null)} />
+          ) : (
+            <div className="field">
+              <label htmlFor={`${id}-text`}>{words.textLabel}</label>
+              <textarea
+                id={`${id}-text`}
+                ref={textRef}
+                className="paste__text"
+                value={text}
+                spellCheck={false}
+                autoComplete="off"
+                wrap="off"
+                rows={14}
+                placeholder={words.placeholder}
+                aria-describedby={`${id}-summary`}
+                onPaste={(e) => {
+                  // Megabytes pasted into a text area hold the page for seconds: keep them beside it instead.
+                  const pasted = e.clipboardData.getData('text/plain');
+                  if (!isLongText(pasted)) return;
+                  e.preventDefault();
+                  setText(pasted);
+                  setFileName(null);
+                  setCorrections({});
+                  setNote(null);
+                }}
+                onChange={(e) => {
+                  const next = e.currentTarget.value;
+                  if (text.trim() === '') setCorrections({});
+                  setText(next);
+                  setNote(null);
+                  if (fileName !== null && next.trim() === '') setFileName(null);
+                }}
+              />
+            </div>
+          )}
           <div className="paste__file">
             <OpenFileButton inputLabel={words.fileInputLabel} onFile={file.open}>
               Open a file…
@@ -171,6 +235,7 @@ export function ImportDialog<S extends SeriesSettings, R>({
               {file.message}
             </p>
           ) : null}
+          {note ? <p className="paste__note">{note}</p> : null}
         </div>
 
         <div className="paste__check">
@@ -183,12 +248,20 @@ export function ImportDialog<S extends SeriesSettings, R>({
             >
               {empty ? 'Nothing pasted yet.' : stale || preview === null ? 'Reading…' : preview.summary}
             </p>
+            {offThread && long.state.phase === 'reading' ? (
+              <ReadProgress stage={long.state.stage} lines={long.state.lines} onCancel={stopReading} />
+            ) : null}
+            {offThread && long.state.phase === 'failed' ? (
+              <p className="paste__file-msg" role="alert">
+                {`The text could not be read (${long.state.message}). Nothing was changed.`}
+              </p>
+            ) : null}
             {imported !== null && !stale ? renderPreview(imported) : null}
             {preview && preview.problems.length > 0 ? (
               <ProblemTable problems={inWords(preview.problems, kind.problemWords)} />
             ) : null}
           </section>
-          {!empty ? (
+          {!empty && settings !== null ? (
             <section className="paste__settings" aria-labelledby={`${id}-settings`}>
               <div className="paste__settings-head">
                 <h3 id={`${id}-settings`}>Guesses to check</h3>

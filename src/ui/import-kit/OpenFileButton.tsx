@@ -38,7 +38,9 @@ export function OpenFileButton({
         ref={inputRef}
         type="file"
         accept={accept}
-        className="visually-hidden"
+        // Out of the accessibility tree altogether (not merely out of sight): the button above is the one control;
+        // a visually hidden input was read out as a second, unnamed-looking button. The button's click still opens it.
+        hidden
         tabIndex={-1}
         aria-label={inputLabel}
         onChange={(e) => {

@@ -20,6 +20,7 @@ const SETTING_NAMES: Readonly<Record<string, string>> = {
   valueKind: 'Values are',
   unit: 'Unit',
   timeMarks: 'Each time marks',
+  gaps: 'Steps longer than the record’s',
   cumulativeFrom: 'Count cumulative depths from',
   text: 'the text',
 };

@@ -31,6 +31,14 @@ export function Header() {
           onCommit={actions.setName}
           messageClassName="top__name-msg"
         />
+        <button
+          type="button"
+          className="top__new"
+          onClick={actions.newScenario}
+          title="A blank scenario in the same units; Undo brings this one back"
+        >
+          New scenario
+        </button>
       </div>
       <fieldset className="segmented" aria-describedby="units-hint">
         <legend>Units</legend>

@@ -11,11 +11,17 @@ import {
   type VolumeUnit,
 } from '../../core';
 import type { Scenario } from '../../scenario/types';
-import { useActions, useDerived, useScenario } from '../../store';
+import { loadHydrographSide, useActions, useDerived, useScenario } from '../../store';
 import { NumberField } from '../fields/NumberField';
 import { formatValue } from '../format';
 import { VOLUME_CHOICES, displayUnit, fromDisplay, toDisplay, unitText } from '../units';
 import { labelInSentence, paramAmount } from '../results/fit-words';
+import { lazyPart } from '../layout/LazyPart';
+
+// How sure the fit is: its interval and calibration chart load on first use (not part of the first screen).
+const FitUncertainty = lazyPart('fit uncertainty', () =>
+  Promise.all([import('./FitUncertainty'), loadHydrographSide()]).then(([m]) => m.FitUncertainty),
+);
 
 /**
  * The observed value when the user switches between depth and volume: the
@@ -201,6 +207,7 @@ export function MatchingPanel() {
       <p className="matching__answer" id="fit-answer" aria-live="polite">
         {answer}
       </p>
+      {observed ? <FitUncertainty /> : null}
     </section>
   );
 }

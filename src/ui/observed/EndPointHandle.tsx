@@ -7,6 +7,7 @@ import { dischargeText } from './discharge';
 import { endGrabOffsetPx, endPointSteps, endTimeAtPointer, type EndBounds } from './end-point-math';
 import type { HydrographFrame } from './hydrograph-frame';
 import { clockAt, momentText, type RecordClock } from './time-text';
+import { labelInSentence } from '../../scenario/label-text';
 
 export interface EndPointHandleProps {
   readonly frame: HydrographFrame;
@@ -51,7 +52,7 @@ export function EndPointHandle({
   const setEnd = (tH: number, coalesceKey?: string): void => {
     try {
       actions.edit(
-        `Move ${label.toLowerCase()}`,
+        `Move ${labelInSentence(label)}`,
         (s) => withBaseflowParam(s, paramKey, tH),
         coalesceKey ? { coalesceKey } : {},
       );
@@ -63,7 +64,7 @@ export function EndPointHandle({
 
   const handlers = useDragHandle({
     axis: 'x',
-    gesture: `Drag ${label.toLowerCase()}`,
+    gesture: `Drag ${labelInSentence(label)}`,
     grabOffsetPx: (px) => endGrabOffsetPx(x, px, endTimeH, offsetH),
     valueAt: (px, grabPx) => endTimeAtPointer(x, px, grabPx, offsetH, bounds),
     apply: (tH) => setEnd(tH),

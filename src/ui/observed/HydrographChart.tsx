@@ -1,24 +1,29 @@
 import { baseflowMethodSpec } from '../../core';
 import type { Streamflow } from '../../scenario/types';
-import { useScenario } from '../../store';
+import { loadHydrographSide, useDerived, useScenario } from '../../store';
 import { lazyPart } from '../layout/LazyPart';
 import { StreamflowButtons } from './StreamflowButtons';
+import './observed.css';
 
 export { HYDROGRAPH_HEIGHT } from './hydrograph-frame';
 
 // The plot and its separation layers load once there is a record to draw (they are not part of the first screen).
-const HydrographPlot = lazyPart<{ flow: Streamflow }>('hydrograph', () =>
-  import('./HydrographPlot').then((m) => m.HydrographPlot),
+const HydrographPlot = lazyPart<{ flow: Streamflow | null }>('hydrograph', () =>
+  Promise.all([import('./HydrographPlot'), loadHydrographSide()]).then(([m]) => m.HydrographPlot),
 );
 
 /**
  * The hydrograph under the hyetograph, on the same time axis: the record,
  * the core's baseflow line and the direct runoff shaded between them, and
- * for the straight-line separation the end point to drag. With no record,
- * the region says how to bring one in.
+ * for the straight-line separation the end point to drag; over it the
+ * computed direct runoff hydrograph when a unit hydrograph is chosen (alone
+ * when there is no record). With neither, the region says how to bring a
+ * record in.
  */
 export function HydrographChart() {
   const flow = useScenario((s) => s.streamflow);
+  const computed = useScenario((s) => s.hydrograph.transform !== null);
+  const withTotal = useDerived((d, s) => d.totalFlow(s) !== null);
   const endLabel =
     flow?.baseflow.kind === 'straight-line'
       ? baseflowMethodSpec('straight-line').params.find((p) => p.key === 'endTimeH')?.label
@@ -27,17 +32,31 @@ export function HydrographChart() {
     <figure className="chart hydro" aria-labelledby="hydrograph-title">
       <figcaption className="chart__head hydro__head">
         <h2 id="hydrograph-title">Hydrograph</h2>
-        {flow ? (
+        {flow || computed ? (
           <ul className="legend" aria-label="Hydrograph legend">
-            <li>
-              <span className="swatch swatch--discharge" aria-hidden="true" /> Discharge
-            </li>
-            <li>
-              <span className="swatch swatch--baseflow" aria-hidden="true" /> Baseflow
-            </li>
-            <li>
-              <span className="swatch swatch--direct" aria-hidden="true" /> Direct runoff
-            </li>
+            {flow ? (
+              <>
+                <li>
+                  <span className="swatch swatch--discharge" aria-hidden="true" /> Discharge
+                </li>
+                <li>
+                  <span className="swatch swatch--baseflow" aria-hidden="true" /> Baseflow
+                </li>
+                <li>
+                  <span className="swatch swatch--direct" aria-hidden="true" /> Direct runoff
+                </li>
+              </>
+            ) : null}
+            {computed ? (
+              <li>
+                <span className="swatch swatch--computed" aria-hidden="true" /> Computed direct runoff
+              </li>
+            ) : null}
+            {withTotal ? (
+              <li>
+                <span className="swatch swatch--total" aria-hidden="true" /> Computed total flow
+              </li>
+            ) : null}
             {endLabel ? (
               <li>
                 <span className="swatch swatch--end" aria-hidden="true" /> {endLabel} (drag or use arrow keys)
@@ -47,7 +66,7 @@ export function HydrographChart() {
         ) : null}
         <StreamflowButtons />
       </figcaption>
-      {flow ? (
+      {flow || computed ? (
         <HydrographPlot flow={flow} />
       ) : (
         <p className="hydro__empty">

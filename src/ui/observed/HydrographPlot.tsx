@@ -15,11 +15,13 @@ import { useElementWidth } from '../chart/useElementWidth';
 import { dischargeText } from './discharge';
 import { EndPointHandle } from './EndPointHandle';
 import { placeEndHandle } from './end-point-math';
-import { HYDROGRAPH_HEIGHT, hydrographFrame, type HydrographFrame } from './hydrograph-frame';
+import { ComputedLayer, computedPeakM3s } from './ComputedLayer';
+import { HYDROGRAPH_HEIGHT, dischargeAxisTop, hydrographFrameToTop, type HydrographFrame } from './hydrograph-frame';
 import { baseflowPath, directRunoffPath, seriesPath } from './hydrograph-paths';
 import { OffsetControl } from './OffsetControl';
 import { hoursText, momentText, recordClock, type RecordClock } from './time-text';
 import { formatCount } from '../format';
+import './observed.css';
 
 /** The record's discharge line: depends on the record and the frame only, so moving the end point never redraws it. */
 const DischargeLayer = memo(function DischargeLayer({ flow, frame }: { flow: Streamflow; frame: HydrographFrame }) {
@@ -93,21 +95,56 @@ function summaryOf(flow: Streamflow, sep: Separation | null, clock: RecordClock,
     : `${head}; baseflow not separated.`;
 }
 
-/** The chart itself, mounted with the record so it measures its own width. */
-export function HydrographPlot({ flow }: { flow: Streamflow }) {
+/**
+ * The chart itself, mounted with the record or a computed hydrograph so it
+ * measures its own width: the record and its separation when there is one,
+ * the computed direct runoff (and total flow) over it, or the computed
+ * hydrograph alone.
+ */
+export function HydrographPlot({ flow }: { flow: Streamflow | null }) {
   const [boxRef, width] = useElementWidth<HTMLDivElement>(880);
   const storm = useScenario((s) => s.storm);
   const units = useScenario((s) => s.units);
-  const separation = useDerived((d, s) => d.separation(s));
-  const alignment = useDerived((d, s) => d.alignment(s));
+  const computedTop = useDerived((d, s) => computedPeakM3s(d.hydrograph(s), d.totalFlow(s)));
   const span = useTimeSpanH();
-  const offsetH = alignment?.offsetH ?? 0;
-
-  const peakM3s = useMemo(() => flow.dischargeM3s[findPeakIndex(flow.dischargeM3s)] as number, [flow.dischargeM3s]);
-  const frame = useMemo(
-    () => hydrographFrame(storm, peakM3s, offsetH, width, HYDROGRAPH_HEIGHT, units, span),
-    [storm, peakM3s, offsetH, width, units, span],
+  const recordPeakM3s = useMemo(
+    () => (flow ? (flow.dischargeM3s[findPeakIndex(flow.dischargeM3s)] as number) : 0),
+    [flow],
   );
+  const alignment = useDerived((d, s) => d.alignment(s));
+  const offsetH = alignment?.offsetH ?? 0;
+  // A round top over the record and the computed flow: it changes only when the peaks pass a round value.
+  const topDisplay = dischargeAxisTop(Math.max(recordPeakM3s, computedTop), units);
+  const frame = useMemo(
+    () => hydrographFrameToTop(storm, topDisplay, offsetH, width, HYDROGRAPH_HEIGHT, units, span),
+    [storm, topDisplay, offsetH, width, units, span],
+  );
+  return (
+    <>
+      <div className="chart__box" ref={boxRef}>
+        <svg
+          className="chart__svg"
+          width={width}
+          height={HYDROGRAPH_HEIGHT}
+          role="group"
+          aria-labelledby="hydrograph-title"
+        >
+          <Axes frame={frame} />
+          {flow ? <RecordLayers flow={flow} frame={frame} /> : null}
+          <ComputedLayer frame={frame} />
+        </svg>
+      </div>
+      {flow ? <RecordNotes /> : null}
+    </>
+  );
+}
+
+/** The record's layers: separation, discharge and the end point to drag. */
+function RecordLayers({ flow, frame }: { flow: Streamflow; frame: HydrographFrame }) {
+  const storm = useScenario((s) => s.storm);
+  const units = useScenario((s) => s.units);
+  const separation = useDerived((d, s) => d.separation(s));
+  const offsetH = frame.offsetH;
   const clock = recordClock(flow.startIso, storm.startIso, offsetH);
   const method = flow.baseflow;
   const endParam =
@@ -121,34 +158,32 @@ export function HydrographPlot({ flow }: { flow: Streamflow }) {
 
   return (
     <>
-      <div className="chart__box" ref={boxRef}>
-        <svg
-          className="chart__svg"
-          width={width}
-          height={HYDROGRAPH_HEIGHT}
-          role="group"
-          aria-labelledby="hydrograph-title"
-        >
-          <Axes frame={frame} />
-          <g role="img" aria-label={summaryOf(flow, separation, clock, units)}>
-            {separation?.ok ? <SeparationLayer flow={flow} frame={frame} result={separation.result} /> : null}
-            <DischargeLayer flow={flow} frame={frame} />
-          </g>
-          {handle && endParam ? (
-            <EndPointHandle
-              frame={frame}
-              paramKey={endParam.key}
-              label={endParam.label}
-              endTimeH={handle.endTimeH}
-              endM3s={handle.endM3s}
-              bounds={handle.bounds}
-              clock={clock}
-              system={units}
-              automatic={handle.automatic}
-            />
-          ) : null}
-        </svg>
-      </div>
+      <g role="img" aria-label={summaryOf(flow, separation, clock, units)}>
+        {separation?.ok ? <SeparationLayer flow={flow} frame={frame} result={separation.result} /> : null}
+        <DischargeLayer flow={flow} frame={frame} />
+      </g>
+      {handle && endParam ? (
+        <EndPointHandle
+          frame={frame}
+          paramKey={endParam.key}
+          label={endParam.label}
+          endTimeH={handle.endTimeH}
+          endM3s={handle.endM3s}
+          bounds={handle.bounds}
+          clock={clock}
+          system={units}
+          automatic={handle.automatic}
+        />
+      ) : null}
+    </>
+  );
+}
+
+/** Below the chart with a record: its alignment, and what the separation says. */
+function RecordNotes() {
+  const separation = useDerived((d, s) => d.separation(s));
+  return (
+    <>
       <OffsetControl />
       {separation && !separation.ok ? (
         <p className="chart__error" role="alert">

@@ -28,6 +28,8 @@ import { displayUnit, toDisplay, unitText } from '../units';
 import { BaseflowParamField } from './BaseflowParamField';
 import { dischargeText } from './discharge';
 import { clockAt, clockParts, hoursText, momentText, recordClock, type RecordClock } from './time-text';
+import './observed.css';
+import { labelInSentence } from '../../scenario/label-text';
 
 /** The field's hint: the table's help, or for a sample number the table's words in the way the field counts. */
 function hintOf(param: BaseflowParam): string {
@@ -67,7 +69,7 @@ function ParamFields({ flow, spec }: { flow: Streamflow; spec: BaseflowMethodSpe
             history={actions}
             onSet={(v, edit) =>
               actions.edit(
-                `Set ${param.label.toLowerCase()}`,
+                `Set ${labelInSentence(param.label)}`,
                 (s) => withBaseflowParam(s, param.key, v),
                 edit ?? { coalesceKey: `baseflow:${param.key}` },
               )
@@ -243,7 +245,7 @@ export function SeparationPanel() {
               onChange={(e) => {
                 const kind = e.currentTarget.value;
                 if (isBaseflowKind(kind))
-                  actions.edit(`Separate by ${BASEFLOW_METHODS[kind].label.toLowerCase()}`, (s) =>
+                  actions.edit(`Separate by ${labelInSentence(BASEFLOW_METHODS[kind].label)}`, (s) =>
                     withBaseflowKind(s, kind),
                   );
               }}

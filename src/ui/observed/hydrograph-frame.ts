@@ -30,6 +30,20 @@ export interface HydrographFrame {
   readonly offsetH: number;
 }
 
+/**
+ * Top of the discharge axis in display units: a round value above the peak.
+ * Peaks that round to the same top draw the same frame, so a computed
+ * hydrograph that moves with a drag redraws the record only when the axis
+ * itself has to change.
+ */
+export function dischargeAxisTop(peakM3s: number, system: UnitSystem): number {
+  const peakDisplay = dischargeToDisplay(peakM3s, system);
+  const nice = scaleLinear()
+    .domain([0, peakDisplay > 0 ? peakDisplay * 1.1 : 1])
+    .nice(5);
+  return nice.domain()[1] as number;
+}
+
 export function hydrographFrame(
   storm: Storm,
   peakM3s: number,
@@ -39,14 +53,23 @@ export function hydrographFrame(
   system: UnitSystem,
   span: TimeSpanH | undefined,
 ): HydrographFrame {
+  return hydrographFrameToTop(storm, dischargeAxisTop(peakM3s, system), offsetH, width, height, system, span);
+}
+
+/** hydrographFrame with the top of the axis (display units) given, as dischargeAxisTop gives it. */
+export function hydrographFrameToTop(
+  storm: Storm,
+  topDisplay: number,
+  offsetH: number,
+  width: number,
+  height: number,
+  system: UnitSystem,
+  span: TimeSpanH | undefined,
+): HydrographFrame {
   const base = chartFrame(storm, width, height, system, span);
   const { plot } = base;
-  const peakDisplay = dischargeToDisplay(peakM3s, system);
-  const yDisplay = scaleLinear()
-    .domain([0, peakDisplay > 0 ? peakDisplay * 1.1 : 1])
-    .range([plot.bottom, plot.top])
-    .nice(5);
-  const topM3s = dischargeFromDisplay(yDisplay.domain()[1] as number, system);
+  const yDisplay = scaleLinear().domain([0, topDisplay]).range([plot.bottom, plot.top]);
+  const topM3s = dischargeFromDisplay(topDisplay, system);
   return {
     width,
     height,

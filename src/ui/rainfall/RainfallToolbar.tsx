@@ -5,6 +5,7 @@ import { useScenario } from '../../store';
 import { wallClockMs, formatWallDate, formatWallTime } from '../chart/clock';
 import { formatCount, formatValue } from '../format';
 import { displayUnit, toDisplay, unitText } from '../units';
+import { editingEventText, useActiveEvent } from './active-event';
 
 /** "10 min", "1 h", "1 h 30 min" for a bar duration in hours. */
 export function formatDuration(hours: number): string {
@@ -49,6 +50,7 @@ function RecordWarning({ storm, units }: { storm: Storm; units: UnitSystem }) {
 export function RainfallToolbar({ tools }: { tools?: ReactNode }) {
   const storm = useScenario((s) => s.storm);
   const units = useScenario((s) => s.units);
+  const event = useActiveEvent();
   const n = storm.depthsMm.length;
   const d = storm.durationsH;
   let uniform = n > 0;
@@ -67,11 +69,18 @@ export function RainfallToolbar({ tools }: { tools?: ReactNode }) {
   const when = start === null ? '' : `, from ${formatWallDate(start)} ${formatWallTime(start)}`;
   return (
     <section className="rainfall" aria-labelledby="rainfall-title" data-slot="rainfall-tools">
-      <h2 id="rainfall-title">Rainfall</h2>
-      <p className="rainfall__summary" aria-live="polite">
-        {bars}, {depth} in {formatDuration(totalDurationH(storm))}
-        {when}
-      </p>
+      <div className="rainfall__what">
+        <h2 id="rainfall-title">Rainfall</h2>
+        {event ? (
+          <p className="rainfall__event" role="status">
+            {editingEventText(event)}: {event.name}
+          </p>
+        ) : null}
+        <p className="rainfall__summary" aria-live="polite">
+          {bars}, {depth} in {formatDuration(totalDurationH(storm))}
+          {when}
+        </p>
+      </div>
       <RecordWarning storm={storm} units={units} />
       {tools ? <div className="rainfall__tools">{tools}</div> : null}
     </section>

@@ -9,13 +9,8 @@ import { paramToDisplay, paramUnitText } from '../units';
  * fitted only where it is in use, and a proposal always reads as one.
  */
 
-/** A label inside a sentence: "loss rate φ", but "CN" and "K" keep their capitals ("curve number CN"). */
-export function labelInSentence(label: string): string {
-  const second = label.charAt(1);
-  return second !== '' && second === second.toLowerCase() && second !== second.toUpperCase()
-    ? label.charAt(0).toLowerCase() + label.slice(1)
-    : label;
-}
+export { labelInSentence } from '../../scenario/label-text';
+import { labelInSentence } from '../../scenario/label-text';
 
 /** "11.5 mm/h", "72": a parameter value as the screen shows it, with its unit. */
 export function paramAmount(param: NumericParam, si: number, units: UnitSystem): string {

@@ -1,5 +1,5 @@
 import { createContext, useContext, useMemo, useSyncExternalStore, type ReactNode } from 'react';
-import { createScenarioLibrary, type ScenarioLibrary, type StorageLike } from '../../scenario';
+import type { StorageLike } from '../../scenario';
 import type { LinkSession, LinkState } from '../../store/link-session';
 import { createPinBoard, type PinBoard, type PinState } from './pins';
 import { downloadBlob } from './download';
@@ -49,7 +49,6 @@ export function browserServices(overrides: Partial<ScenarioServices> = {}): Scen
 }
 
 interface Provided extends ScenarioServices {
-  readonly library: ScenarioLibrary | null;
   readonly pins: PinBoard;
 }
 
@@ -66,7 +65,6 @@ export function ScenarioServicesProvider({
     const base = services ?? browserServices();
     return {
       ...base,
-      library: base.storage ? createScenarioLibrary(base.storage, { now: base.now }) : null,
       pins: createPinBoard(base.storage, { now: base.now }),
     };
   }, [services]);

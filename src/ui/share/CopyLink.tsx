@@ -1,5 +1,4 @@
 import { useEffect, useRef } from 'react';
-import { makeShareLink } from '../../scenario';
 import { useWorkbenchStore } from '../../store';
 import { ProblemList, useBarMessage } from '../services/bar-message';
 import { useServices } from '../services/services';
@@ -61,6 +60,14 @@ export function CopyLink() {
 
   const copy = async (anyway = false): Promise<void> => {
     const scenario = store.getState().scenario;
+    // The link maker (and its compressor) loads on the first click, not with the first screen.
+    let makeShareLink: (typeof import('../../scenario/link-make'))['makeShareLink'];
+    try {
+      ({ makeShareLink } = await import('../../scenario/link-make'));
+    } catch (error) {
+      show({ tone: 'problem', title: `No link was made: ${reason(error)}.` });
+      return;
+    }
     const made = makeShareLink(scenario);
     if (!made.ok) {
       show({

@@ -1,12 +1,14 @@
-import { useCallback, useEffect, useState, type FormEvent, type KeyboardEvent } from 'react';
+import { useMemo, useCallback, useEffect, useState, type FormEvent, type KeyboardEvent } from 'react';
 import { methodSpec } from '../../core';
 import type { DeletedEntry, LibraryEntry, LibraryListing, LibraryResult, Problem } from '../../scenario';
+import { createScenarioLibrary } from '../../scenario/library';
 import { useActions, useWorkbenchStore } from '../../store';
 import { listSetAside, type SetAsideCopy } from '../../store/set-aside';
 import { ListProblems } from './ListProblems';
 import { SetAsideCopies } from './SetAsideCopies';
 import { useServices } from '../services/services';
 import { formatCount } from '../format';
+import './share.css';
 
 const savedAtFormat = new Intl.DateTimeFormat(undefined, { dateStyle: 'medium', timeStyle: 'short' });
 const quoted = (name: string): string => `“${name}”`;
@@ -67,7 +69,9 @@ function RenameForm({ entry, onDone }: { entry: LibraryEntry; onDone: (name: str
  */
 /** `id` names the region for the button that opens it (ScenarioBar's aria-controls). */
 export function LibraryPanel({ id }: { id: string }) {
-  const { library, link, storage, saveFile } = useServices();
+  const { link, storage, saveFile, now } = useServices();
+  // The saved list lives in this panel's code, loaded when the panel first opens (not with the first screen).
+  const library = useMemo(() => (storage ? createScenarioLibrary(storage, { now }) : null), [storage, now]);
   const store = useWorkbenchStore();
   const actions = useActions();
   const [listing, setListing] = useState<LibraryListing>(() => library?.list() ?? EMPTY);

@@ -1,5 +1,6 @@
 import { ProblemList } from '../services/bar-message';
 import { useLinkState, useServices } from '../services/services';
+import './share.css';
 
 const quoted = (name: string): string => `“${name}”`;
 

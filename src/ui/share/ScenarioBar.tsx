@@ -5,6 +5,7 @@ import { BarMessageProvider, BarMessageView, type BarMessage } from '../services
 import { CopyLink } from './CopyLink';
 import { lazyPart } from '../layout/LazyPart';
 import { ScenarioFile } from './ScenarioFile';
+import './share.css';
 
 /** The saved list's region, which the "Saved scenarios" button opens. */
 const LIBRARY_PANEL_ID = 'saved-scenarios';

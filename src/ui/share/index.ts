@@ -1,6 +1,5 @@
 // Whole-scenario tools: share link, scenario file, the browser's saved list,
 // and the bar that holds them with the export and compare buttons. Mounted by App.tsx.
-import './share.css';
 
 export { ScenarioBar } from './ScenarioBar';
 export { linkLengthText, LONG_LINK_CHARS } from './CopyLink';

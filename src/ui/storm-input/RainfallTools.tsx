@@ -4,6 +4,7 @@ import { OpenFileButton } from '../import-kit/OpenFileButton';
 import { useImportLauncher } from '../import-kit/use-import-launcher';
 import { DRAW_PANEL_ID, STORM_TOOLS_ID, useStormInput } from './context';
 import { lazyPart } from '../layout/LazyPart';
+import './storm-input.css';
 
 // The dialog and the text import behind it load when first opened (they are not part of the first screen).
 const PasteDialog = lazyPart('paste dialog', () => import('./paste/PasteDialog').then((m) => m.PasteDialog));

@@ -1,5 +1,6 @@
 import { useStormInput } from './context';
 import { lazyPart } from '../layout/LazyPart';
+import './storm-input.css';
 
 // The tools load when first opened (they are not part of the first screen).
 const StormTools = lazyPart('storm tools', () => import('./tools/StormTools').then((m) => m.StormTools));

@@ -1,6 +1,5 @@
 // Getting rainfall in: paste or open text (with a preview to correct), draw on
 // the chart, edit the bar table, and whole-storm tools. Mounted by App.tsx.
-import './storm-input.css';
 
 export { StormInputProvider } from './context';
 export { RainfallTools } from './RainfallTools';

@@ -1,3 +1,4 @@
+// @vitest-environment jsdom
 import { describe, expect, it } from 'vitest';
 import { computeLosses, greenAmptRateMmH, hortonCapacityMmH, type LossMethod } from '../../../src/core';
 import { CAPACITY_CURVES } from '../../../src/ui/chart/capacity';
@@ -83,5 +84,29 @@ describe('capacity curves through the storm', () => {
   it('methods without a capacity curve have none', () => {
     expect(CAPACITY_CURVES.constant).toBeUndefined();
     expect(CAPACITY_CURVES.proportional).toBeUndefined();
+  });
+});
+
+describe('a capacity above the chart’s top is marked, never clipped silently', () => {
+  it('Horton with f₀ = 80 mm/h over a storm peaking at 20 mm/h says it runs up to 80 mm/h', () => {
+    // The axis tops out near 20 × 1.12 = 22.4 → a round 25 mm/h; f(0) = f₀ = 80 mm/h is above it (Horton 1940).
+    const method: LossMethod = { kind: 'horton', f0MmH: 80, fcMmH: 3, kPerH: 1.5, ponding: false };
+    const drawn = CAPACITY_CURVES.horton?.draw(frame, storm, method) ?? null;
+    expect(frame.topMmH).toBeLessThan(80);
+    expect(drawn?.aboveTopMmH).toBeCloseTo(80, 9);
+  });
+  it('Horton under the top is not marked', () => {
+    const method: LossMethod = { kind: 'horton', f0MmH: 15, fcMmH: 3, kPerH: 1.5, ponding: false };
+    expect(CAPACITY_CURVES.horton?.draw(frame, storm, method)?.aboveTopMmH).toBeNull();
+  });
+  it('on the workbench the chart says so under the plot and marks the top edge', async () => {
+    const { renderWorkbench } = await import('../../helpers/render');
+    const { FOUR_BARS } = await import('../../helpers/scenario-fixtures');
+    const { screen } = await import('@testing-library/react');
+    renderWorkbench({ ...FOUR_BARS, method: { kind: 'horton', f0MmH: 80, fcMmH: 3, kPerH: 1.5, ponding: false } });
+    expect(
+      screen.getByText(/The infiltration capacity runs above the top of the chart.*up to 80 mm\/h\./),
+    ).toBeInTheDocument();
+    expect(screen.getByText('▲ capacity above the chart')).toBeInTheDocument();
   });
 });

@@ -1,6 +1,6 @@
 import { scaleLinear } from 'd3-scale';
 import { describe, expect, it } from 'vitest';
-import { fineStep, grabOffsetPx, valueAfterKey, valueAtPointer } from '../../../src/ui/chart/drag-math';
+import { fineStep, grabOffsetPx, snapToStep, valueAfterKey, valueAtPointer } from '../../../src/ui/chart/drag-math';
 
 // A rate axis from 0 mm/h at 300 px (bottom) to 50 mm/h at 20 px (top).
 const y = scaleLinear().domain([0, 50]).range([300, 20]);
@@ -50,5 +50,19 @@ describe('stepping the line with keys', () => {
     expect(fineStep(2)).toBeCloseTo(0.01, 15);
     expect(fineStep(400)).toBe(1);
     expect(fineStep(0)).toBe(1);
+  });
+});
+
+describe('snapToStep', () => {
+  it('puts a dragged value on the arrow keys’ grid with no binary residue', () => {
+    // 6.2137 on a 0.1 grid is 62 steps = 6.2; 0.1 × 3 would print as 0.30000000000000004 unrounded.
+    expect(snapToStep(6.2137, 0.1)).toBe(6.2);
+    expect(snapToStep(0.3000001, 0.1)).toBe(0.3);
+    expect(snapToStep(0.0149, 0.01)).toBe(0.01);
+    expect(snapToStep(47.5, 1)).toBe(48);
+  });
+  it('leaves the value alone for a step that is not a positive number', () => {
+    expect(snapToStep(6.2137, 0)).toBe(6.2137);
+    expect(snapToStep(6.2137, Number.NaN)).toBe(6.2137);
   });
 });

@@ -27,10 +27,34 @@ describe('chart frame', () => {
     expect(tops[0]).toBeCloseTo(f.y(4), 12);
   });
 
-  it('without a start the time axis is hours from the start', () => {
+  it('without a start the time axis is hours and minutes from the start', () => {
     const f = chartFrame(storm, 800, 300, 'si');
-    expect(f.xTitle).toBe('Time from storm start (h)');
-    expect(f.xTicks[0]?.label).toBe('0');
+    expect(f.xTitle).toBe('Time from storm start (h:mm)');
+    expect(f.xTicks[0]?.label).toBe('0:00');
+  });
+
+  it('without a start, ticks fall on bar edges: 18 bars of 10 min get a tick every 30 min, each under a bar’s start', () => {
+    const tenMin = {
+      durationsH: Array.from({ length: 18 }, () => 1 / 6),
+      depthsMm: Array.from({ length: 18 }, () => 1),
+    };
+    // 880 px wide: (880 − 62 − 20)/90 → at most 8 ticks over 180 min. Round steps that are whole bars: 10 (18
+    // ticks), 20 (9), 30 (6 + 1): the first that fits is 30 min.
+    const f = chartFrame(tenMin, 880, 300, 'si');
+    expect(f.xTicks.map((t) => t.label)).toEqual(['0:00', '0:30', '1:00', '1:30', '2:00', '2:30', '3:00']);
+    f.xTicks.forEach((t, i) => expect(t.px).toBeCloseTo(f.edgesPx[i * 3] as number, 9));
+  });
+
+  it('without a start, bars of an odd length get ticks every whole number of bars (7-min bars: every 14 min)', () => {
+    const seven = {
+      durationsH: Array.from({ length: 10 }, () => 7 / 60),
+      depthsMm: Array.from({ length: 10 }, () => 1),
+    };
+    // 70 min over at most 8 ticks: 8.75 min a tick at least; no round step (1, 2, 5, 10 …) is whole 7-min bars,
+    // so two bars: 14 min → 0:00, 0:14, 0:28, 0:42, 0:56, 1:10.
+    const f = chartFrame(seven, 880, 300, 'si');
+    expect(f.xTicks.map((t) => t.label)).toEqual(['0:00', '0:14', '0:28', '0:42', '0:56', '1:10']);
+    f.xTicks.forEach((t, i) => expect(t.px).toBeCloseTo(f.edgesPx[i * 2] as number, 9));
   });
 
   it('with a start the time axis reads the storm’s own clock, whatever the viewer’s zone', () => {

@@ -2,9 +2,12 @@
 import { fireEvent, screen, waitFor } from '@testing-library/react';
 import { describe, expect, it } from 'vitest';
 import { chartFrame } from '../../../src/ui/chart/frame';
-import { CHART_HEIGHT } from '../../../src/ui/chart/Hyetograph';
+import { chartHeightFor } from '../../../src/ui/chart/chart-height';
 import { coreTotals, mmText, renderWorkbench } from '../../helpers/render';
 import { FOUR_BARS } from '../../helpers/scenario-fixtures';
+
+/** The chart's height in this window (jsdom's 768 px tall one), as the page draws it. */
+const CHART_HEIGHT = chartHeightFor(window.innerHeight);
 
 // jsdom lays nothing out: the chart keeps its fallback width and the svg sits at y = 0,
 // so a pointer's clientY is the chart's own y.
@@ -43,6 +46,19 @@ describe('the loss-rate line', () => {
     // The whole drag is one undo step.
     expect(store.getState().history.past).toHaveLength(1);
     expect(store.getState().undoLabel).toBe('Drag loss rate φ');
+  });
+
+  it('a drag lands on the arrow keys’ step, not on whatever the pixel gives (6.03… mm/h → 6 mm/h)', async () => {
+    const { scenario } = renderWorkbench();
+    const line = screen.getByRole('slider', { name: 'Loss rate φ' });
+    // FOUR_BARS peaks at 20 mm/h: the axis tops out at a round value near 22.4, so the arrow step is 0.1 mm/h.
+    const step = 10 ** Math.floor(Math.log10(frame.topDisplay / 100));
+    expect(step).toBe(0.1);
+    fireEvent.pointerDown(line, { pointerId: 1, button: 0, clientY: frame.y(8) });
+    // A third of a pixel under 6.03: unsnapped, the rate would be 6.0 and some hundredths.
+    fireEvent.pointerMove(line, { pointerId: 1, clientY: frame.y(6.03) + 0.3 });
+    fireEvent.pointerUp(line, { pointerId: 1, clientY: frame.y(6.03) + 0.3 });
+    await waitFor(() => expect(rate(scenario())).toBe(6));
   });
 
   it('a drag past the ends of the axis stops at them', () => {

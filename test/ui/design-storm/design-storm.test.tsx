@@ -96,4 +96,23 @@ describe('the design storm view', () => {
     actions.undo();
     expect(scenario().storm).toEqual(FOUR_BARS.storm);
   });
+
+  it('follows the SI / US switch: depths in inches, intensities in in/h, the storm the same', async () => {
+    const { user, actions } = await openDesign(FOUR_BARS);
+    await user.click(screen.getByRole('radio', { name: 'Uniform depth' }));
+    await retype(user, 'Storm depth (mm)', '50.8');
+    actions.setUnits('us');
+    // 50.8 mm = 2 in exactly (1 in = 25.4 mm, NIST SP 811).
+    expect(await screen.findByRole('textbox', { name: 'Storm depth (in)' })).toHaveValue('2');
+    expect(total('Rainfall depth')).toBe('2 in');
+    await retype(user, 'Storm depth (in)', '3');
+    // 3 in = 76.2 mm, shown in inches.
+    expect(total('Rainfall depth')).toBe('3 in');
+    await user.click(screen.getByRole('radio', { name: /IDF formula/ }));
+    expect(screen.getByRole('combobox', { name: 'Unit of i' })).toHaveValue('in/h');
+    // The invented a = 1200 mm/h·min^c becomes 1200 / 25.4 = 47.2441 in/h·min^c (six significant figures).
+    expect(screen.getByRole('textbox', { name: 'a' })).toHaveValue('47.2441');
+    actions.setUnits('si');
+    expect(await screen.findByRole('textbox', { name: 'a' })).toHaveValue('1,200');
+  });
 });

@@ -91,7 +91,7 @@ describe('the bar table CSV against injection', { timeout: 30_000 }, () => {
     expect(notes).toContain('Catchment: "=HYPERLINK(""http://example.invalid""); 100 ha');
     // Every bar is still there, unchanged: 4 bars after 6 notes and the header.
     expect(rows).toHaveLength(6 + 1 + 4);
-    expect(bars.map((r) => Number(r['Duration (h)']))).toEqual(FOUR_BARS.storm.durationsH);
+    expect(bars.map((r) => Number(r['Duration (min)']) / 60)).toEqual(FOUR_BARS.storm.durationsH);
     expect(bars.map((r) => Number(r['Rainfall depth (mm)']))).toEqual(FOUR_BARS.storm.depthsMm);
   });
 
@@ -112,7 +112,7 @@ describe('the bar table CSV against injection', { timeout: 30_000 }, () => {
         expect(notes[0]).toBe(`Raincut bar table: ${oneLine(scenarioName)}`);
         if (catchmentName !== '') expect(notes).toContain(`Catchment: ${oneLine(catchmentName)}; area not given`);
         expect(bars.map((r) => Number(r['Rainfall depth (mm)']))).toEqual(FOUR_BARS.storm.depthsMm);
-        expect(bars.map((r) => Number(r['Duration (h)']))).toEqual(FOUR_BARS.storm.durationsH);
+        expect(bars.map((r) => Number(r['Duration (min)']) / 60)).toEqual(FOUR_BARS.storm.durationsH);
       }),
       { numRuns: 500, seed: 404 },
     );

@@ -21,6 +21,9 @@ function bytesOf(blob: Blob): Promise<Uint8Array> {
   });
 }
 
+/** A double to 12 significant figures, as the rows are written (JavaScript's own toPrecision). */
+const sig12 = (x: number): number => Number(x.toPrecision(12));
+
 /** Reads the CSV as a spreadsheet-minded program would: UTF-8, '#' lines as comments, first row the header. */
 function parse(text: string) {
   const parsed = Papa.parse<Record<string, string>>(text, { header: true, comments: '#', skipEmptyLines: true });
@@ -58,23 +61,23 @@ describe('bar table CSV', () => {
     const parsed = parse(text);
     expect(parsed.meta.fields).toEqual([
       'Bar',
-      'Start (h from storm start)',
-      'Duration (h)',
+      'Start (min from storm start)',
+      'Duration (min)',
       'Rainfall depth (mm)',
       'Rainfall intensity (mm/h)',
       'Loss (mm)',
       'Rainfall excess (mm)',
     ]);
     const rows = parsed.data;
-    expect(rows.map((r) => Number(r['Duration (h)']))).toEqual(FOUR_BARS.storm.durationsH);
+    // Bars of 0.5 h: 30 minutes each.
+    expect(rows.map((r) => Number(r['Duration (min)']))).toEqual([30, 30, 30, 30]);
     expect(rows.map((r) => Number(r['Rainfall depth (mm)']))).toEqual(FOUR_BARS.storm.depthsMm);
     const core = computeLosses(FOUR_BARS.storm, FOUR_BARS.method);
-    expect(rows.map((r) => Number(r['Loss (mm)']))).toEqual([...core.lossMm]);
-    expect(rows.map((r) => Number(r['Rainfall excess (mm)']))).toEqual([...core.excessMm]);
+    expect(rows.map((r) => Number(r['Loss (mm)']))).toEqual([...core.lossMm].map(sig12));
+    expect(rows.map((r) => Number(r['Rainfall excess (mm)']))).toEqual([...core.excessMm].map(sig12));
     expect(rows.map((r) => Number(r['Rainfall intensity (mm/h)']))).toEqual([4, 12, 20, 4]);
-    expect(rows.map((r) => Number(r['Start (h from storm start)']))).toEqual([
-      ...barEdgesH(FOUR_BARS.storm).slice(0, 4),
-    ]);
+    expect(rows.map((r) => Number(r['Start (min from storm start)']))).toEqual([0, 30, 60, 90]);
+    expect(barEdgesH(FOUR_BARS.storm)).toHaveLength(5);
     expect(screen.getByRole('status', { name: MESSAGE })).toHaveTextContent(
       'Exported four-bars-bars.csv: 4 bars with loss and excess.',
     );
@@ -86,8 +89,8 @@ describe('bar table CSV', () => {
     expect(parsed.meta.fields).toEqual([
       'Bar',
       'Start (clock)',
-      'Start (h from storm start)',
-      'Duration (h)',
+      'Start (min from storm start)',
+      'Duration (min)',
       'Rainfall depth (in)',
       'Rainfall intensity (in/h)',
       'Loss (in)',
@@ -103,19 +106,32 @@ describe('bar table CSV', () => {
       '2026-02-13 00:15',
     ]);
     expect(rows.map((r) => Number(r['Rainfall depth (in)']))).toEqual(
-      SHARED.storm.depthsMm.map((mm) => convertDepth(mm, 'mm', 'in')),
+      SHARED.storm.depthsMm.map((mm) => sig12(convertDepth(mm, 'mm', 'in'))),
     );
     // Back to millimetres: the same bars, to the last few bits of a double.
     rows.forEach((r, k) => {
       const mm = convertDepth(Number(r['Rainfall depth (in)']), 'in', 'mm');
       expect(Math.abs(mm - (SHARED.storm.depthsMm[k] as number))).toBeLessThanOrEqual(
-        1e-12 * (SHARED.storm.depthsMm[k] as number),
+        1e-11 * (SHARED.storm.depthsMm[k] as number),
       );
     });
     const core = computeLosses(SHARED.storm, SHARED.method);
     expect(rows.map((r) => Number(r['Rainfall excess (in)']))).toEqual(
-      [...core.excessMm].map((mm) => convertDepth(mm, 'mm', 'in')),
+      [...core.excessMm].map((mm) => sig12(convertDepth(mm, 'mm', 'in'))),
     );
+  });
+
+  it('rows carry no binary residue: bars of 0.8 h start at 0, 48, 96 and 144 min, not 144.00000000000003', () => {
+    // Start of bar 4 = 0.8 + 0.8 + 0.8 = 2.4000000000000004 h in doubles; × 60 = 144.00000000000003.
+    const storm = { durationsH: [0.8, 0.8, 0.8, 0.8], depthsMm: [0.1, 0.2, 0.3, 0.4] };
+    const scenario: Scenario = { ...FOUR_BARS, storm };
+    const result = computeLosses(storm, { kind: 'constant', rateMmH: 0.2 });
+    const text = barTableCsv({ scenario, method: { kind: 'constant', rateMmH: 0.2 }, result, volumeM3: null });
+    const rows = parse(text).data;
+    expect(rows.map((r) => r['Start (min from storm start)'])).toEqual(['0', '48', '96', '144']);
+    expect(rows.map((r) => r['Duration (min)'])).toEqual(['48', '48', '48', '48']);
+    expect(text).not.toMatch(/\d\.\d*0000000\d/);
+    expect(text).not.toMatch(/\d\.\d*9999999\d/);
   });
 
   it('while kept matched, the table is computed with the fitted value the screen shows', async () => {

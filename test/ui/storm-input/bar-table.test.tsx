@@ -127,6 +127,20 @@ describe('the bar table', () => {
     expect(cell(3, 'depth')).not.toHaveAttribute('aria-invalid');
   });
 
+  it('the selected bar’s problem is written out in full under the grid, not only in the one-line Note cell', async () => {
+    const { user } = await renderTable();
+    await user.click(cell(2, 'depth'));
+    await user.keyboard('99999999999{Enter}');
+    const note = cell(2, 'note').textContent ?? '';
+    expect(note.length).toBeGreaterThan(40);
+    const full = document.querySelector('.bars__problem');
+    expect(full).toHaveTextContent(note);
+    expect(full?.closest('[role="grid"]')).toBeNull();
+    await user.keyboard('{Escape}');
+    await user.click(cell(1, 'depth'));
+    expect(document.querySelector('.bars__problem')).toBeNull();
+  });
+
   it('a negative depth is refused by name, and Escape drops the typing', async () => {
     const { user, scenario } = await renderTable();
     await user.click(cell(2, 'depth'));

@@ -3,10 +3,13 @@ import { fireEvent, screen, within } from '@testing-library/react';
 import { describe, expect, it } from 'vitest';
 import type { Scenario } from '../../../src/scenario/types';
 import { chartFrame } from '../../../src/ui/chart/frame';
-import { CHART_HEIGHT } from '../../../src/ui/chart/Hyetograph';
+import { chartHeightFor } from '../../../src/ui/chart/chart-height';
 import { expectAllClose } from '../../helpers/tolerance';
 import { lazyPartsLoaded, renderWorkbench } from '../../helpers/render';
 import { FOUR_BARS } from '../../helpers/scenario-fixtures';
+
+/** The chart's height in this window (jsdom's 768 px tall one), as the page draws it. */
+const CHART_HEIGHT = chartHeightFor(window.innerHeight);
 
 // jsdom lays nothing out: the chart keeps its fallback width (880 px) and sits at
 // the top left, so a pointer's clientX/clientY are the chart's own x and y.
@@ -52,6 +55,23 @@ describe('drawing bars on the chart', () => {
     expect(document.querySelector('[data-layer="drawn"]')).toBeNull();
     await user.click(screen.getByRole('button', { name: 'Undo' }));
     expect(scenario().storm).toBe(FOUR_BARS.storm);
+  });
+
+  it('on an empty storm the axis follows the pointer: one stroke above the chart draws a tall bar', async () => {
+    const dry = { ...FOUR_BARS, storm: { durationsH: [0.5, 0.5, 0.5, 0.5], depthsMm: [0, 0, 0, 0] } };
+    const { user, scenario } = renderWorkbench(dry);
+    const area = await startDrawing(user);
+    const empty = chartFrame(dry.storm, 880, CHART_HEIGHT, 'si');
+    expect(empty.topMmH).toBe(10);
+    const x = ((empty.edgesPx[0] as number) + (empty.edgesPx[1] as number)) / 2;
+    fireEvent.pointerDown(area, { pointerId: 1, button: 0, clientX: x, clientY: empty.y(2) });
+    // The pointer (captured) goes one plot height above the plot's top: on the stroke's own scale that is 20 mm/h,
+    // twice the axis. Before, a stroke stopped near the axis top (about 10.6 mm/h) and the axis grew 12 % a stroke.
+    const plotPx = empty.plot.bottom - empty.plot.top;
+    fireEvent.pointerMove(area, { pointerId: 1, clientX: x, clientY: empty.plot.top - plotPx });
+    fireEvent.pointerUp(area, { pointerId: 1, clientX: x, clientY: empty.plot.top - plotPx });
+    // 20 mm/h over a 0.5 h bar = 10 mm.
+    expect(scenario().storm.depthsMm[0]).toBeCloseTo(10, 9);
   });
 
   it('a fast sweep fills the bars between two pointer events along a straight line', async () => {

@@ -1,3 +1,4 @@
+import { useMemo } from 'react';
 import {
   applyFlowImport,
   guessFlowSettings,
@@ -63,6 +64,14 @@ export function FlowPasteDialog({ initial, onClose }: FlowPasteDialogProps) {
   const actions = useActions();
   const current = useScenario((s) => s.streamflow);
   const units = useScenario((s) => s.units);
+  // Long records are read in a worker, which is told the number format rather than reading it from the page.
+  const kind = useMemo(
+    (): ImportKind<FlowImportSettings, FlowRecord> => ({
+      ...FLOW_KIND,
+      reader: { name: 'flow', context: { numberFormat: currentNumberFormat(), units } },
+    }),
+    [units],
+  );
 
   const currentText = current
     ? (() => {
@@ -76,7 +85,7 @@ export function FlowPasteDialog({ initial, onClose }: FlowPasteDialogProps) {
 
   return (
     <ImportDialog
-      kind={FLOW_KIND}
+      kind={kind}
       initial={initial}
       onClose={onClose}
       renderPreview={(record) => <FlowPreview record={record} units={units} />}

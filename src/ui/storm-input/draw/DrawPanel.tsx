@@ -4,7 +4,7 @@ import { emptyStorm } from '../../../core/storm-tools';
 import { useActions, useScenario } from '../../../store';
 import { fineStep } from '../../chart/drag-math';
 import { chartFrame } from '../../chart/frame';
-import { CHART_HEIGHT } from '../../chart/Hyetograph';
+import { CHART_HEIGHT } from '../../chart/chart-height';
 import { formatCount, formatForField, formatValue } from '../../format';
 import { readTyped } from '../../fields/read-typed';
 import { displayUnit, unitText } from '../../units';

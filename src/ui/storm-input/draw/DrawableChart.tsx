@@ -3,7 +3,7 @@ import { useActions, useScenario } from '../../../store';
 import { barsPath } from '../../chart/bar-path';
 import { barTopsPx, chartFrame, type ChartFrame } from '../../chart/frame';
 import { frameThrottle, type FrameThrottle } from '../../interaction/frame-throttle';
-import { CHART_HEIGHT } from '../../chart/Hyetograph';
+import { useChartHeight } from '../../chart/chart-height';
 import { useTimeSpanH } from '../../chart/time-span';
 import { useStormInput } from '../context';
 import { paintSegment, rateAtPointer, type StrokePoint } from './draw-math';
@@ -75,6 +75,7 @@ function DrawLayer({ wrapRef }: { wrapRef: RefObject<HTMLDivElement | null> }) {
   const units = useScenario((s) => s.units);
   // The hyetograph's own time axis (shared with a streamflow record when there is one).
   const span = useTimeSpanH();
+  const height = useChartHeight();
   const stroke = useRef<Stroke | null>(null);
   const [box, setBox] = useState<Box | null>(null);
   const [, setVersion] = useState(0);
@@ -114,7 +115,7 @@ function DrawLayer({ wrapRef }: { wrapRef: RefObject<HTMLDivElement | null> }) {
   }, []);
 
   const n = storm.depthsMm.length;
-  const frame = box ? chartFrame(storm, box.width, CHART_HEIGHT, units, span) : null;
+  const frame = box ? chartFrame(storm, box.width, height, units, span) : null;
 
   const pointIn = (s: Pick<Stroke, 'frame' | 'box' | 'maxMmH'>, e: PointerEvent<HTMLDivElement>): StrokePoint => {
     const wrap = wrapRef.current;
@@ -141,8 +142,12 @@ function DrawLayer({ wrapRef }: { wrapRef: RefObject<HTMLDivElement | null> }) {
     if (!at) return;
     e.preventDefault();
     e.currentTarget.setPointerCapture?.(e.pointerId);
-    const f = chartFrame(storm, at.width, CHART_HEIGHT, units, span);
-    const base = { frame: f, box: at, maxMmH: Math.max(f.y.invert(0), f.topMmH) };
+    const f = chartFrame(storm, at.width, height, units, span);
+    // The axis follows the pointer: above the plot (the pointer is captured) a stroke goes on rising on the
+    // stroke's own scale, up to three plot heights over the top, and the axis grows to the result when the stroke
+    // ends. Before, a stroke stopped at the chart's top and an empty storm's 10 mm/h axis took many strokes to grow.
+    const reachPx = f.plot.top - 3 * (f.plot.bottom - f.plot.top);
+    const base = { frame: f, box: at, maxMmH: Math.max(f.y.invert(reachPx), f.topMmH) };
     const first = pointIn(base, e);
     const s: Stroke = {
       ...base,

@@ -65,6 +65,17 @@ export function ImportSettings({
             <option value="start">The start of its bar</option>
           </Select>
         ) : null}
+        {hasTimes ? (
+          <Select
+            label="Steps longer than the record’s"
+            value={s.gaps ?? 'fill'}
+            onChange={(v) => onChange({ gaps: v as RainImportSettings['gaps'] })}
+            hint="A reading after a gap: its rain in one step of the record, the rest of the gap dry; or one long bar at a lower intensity."
+          >
+            <option value="fill">Fill with dry bars of the step</option>
+            <option value="keep">Keep one long bar</option>
+          </Select>
+        ) : null}
       </TimeSettings>
 
       <fieldset className="guesses__group">

@@ -1,14 +1,20 @@
 import { useMemo } from 'react';
 import { totalDepthMm } from '../../../core';
-import { applyRainImport, previewRainImport, type ImportedStorm, type RainImportSettings } from '../../../io';
+import {
+  applyRainImport,
+  guessForScreen,
+  previewRainImport,
+  type ImportedStorm,
+  type RainImportSettings,
+} from '../../../io';
 import { useActions, useScenario } from '../../../store';
 import { formatCount, formatValue } from '../../format';
 import { currentNumberFormat } from '../../number-format';
 import { ImportDialog, type ImportDraft, type ImportKind, type ImportWords } from '../../import-kit';
 import { displayUnit, toDisplay, unitText } from '../../units';
-import { guessForScreen } from './guess';
 import { ImportSettings, type SettingsPatch } from './ImportSettings';
 import { PreviewBars } from './PreviewBars';
+import { useReplaceConsequences } from '../../rainfall/active-event';
 
 /** What the dialog opens on (a file's text, or nothing). */
 export type PasteDraft = ImportDraft<SettingsPatch>;
@@ -58,9 +64,11 @@ export function PasteDialog({ initial, onClose }: PasteDialogProps) {
       preview: (text, settings) => previewRainImport(text, settings, format),
       apply: stormOf,
       Settings: ImportSettings,
+      reader: { name: 'rain', context: { numberFormat: format, units, stepMinutes } },
     };
   }, [units, stepMinutes]);
 
+  const consequences = useReplaceConsequences();
   const depthUnit = displayUnit('depth', units);
   const current = storm.depthsMm.length;
   const currentText = `${formatCount(current)} bar${current === 1 ? '' : 's'}, ${formatValue(toDisplay('depth', totalDepthMm(storm), units))} ${unitText(depthUnit)}`;
@@ -71,9 +79,9 @@ export function PasteDialog({ initial, onClose }: PasteDialogProps) {
       initial={initial}
       onClose={onClose}
       renderPreview={(imported) => <PreviewBars storm={imported} units={units} />}
-      keepText={`Replaces the storm now on screen (${currentText}); Undo brings it back.`}
+      keepText={`Replaces the storm now on screen (${currentText}); Undo brings it back.${consequences ? ` ${consequences}` : ''}`}
       onUse={(imported, fileName) => {
-        actions.setStorm(imported, fileName ? `Open rainfall file ${fileName}` : 'Paste rainfall');
+        actions.setImportedStorm(imported, fileName ? `Open rainfall file ${fileName}` : 'Paste rainfall');
         return null;
       }}
     />

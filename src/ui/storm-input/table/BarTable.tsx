@@ -415,6 +415,10 @@ export function BarTable() {
     draftsByRow.get(r)?.set(c, d);
   }
 
+  // The active row's problem, written out in full under the grid: the Note column is one line wide.
+  let activeNote: Draft | undefined;
+  for (const d of draftsByRow.get(at.row)?.values() ?? []) activeNote ??= d;
+
   const selected =
     n === 0
       ? 'No bars yet: add one, paste rainfall or draw.'
@@ -505,6 +509,11 @@ export function BarTable() {
           </div>
         </div>
       </div>
+      {activeNote ? (
+        <p className="bars__problem" data-row={at.row + 1}>
+          {activeNote.message}
+        </p>
+      ) : null}
       <p className="visually-hidden" role="status">
         {announce}
       </p>

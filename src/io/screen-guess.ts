@@ -1,11 +1,8 @@
-import type { UnitSystem } from '../../../core';
-import {
-  guessRainSettings,
-  rainHintsFromName,
-  readTable,
-  type ImportHints,
-  type RainImportSettings,
-} from '../../../io';
+import type { UnitSystem } from '../core';
+import { guessRainSettings, rainHintsFromName, type RainImportSettings } from './rain-import';
+import type { ImportHints } from './series';
+import { headOf } from './layout-guess';
+import { readTable } from './table-text';
 
 /** Lines past the skipped ones read to find the header: it is the first non-empty one. */
 const HEAD_LINES = 50;
@@ -22,7 +19,7 @@ export function guessForScreen(text: string, units: UnitSystem, hints: ImportHin
   if (units !== 'us' || guessed.unit === 'in') return guessed;
   let named = false;
   if (guessed.hasHeader) {
-    const head = text.split('\n', guessed.skipLines + HEAD_LINES).join('\n');
+    const head = headOf(text, guessed.skipLines + HEAD_LINES);
     const name = readTable(head, guessed).header?.cells[guessed.valueColumn - 1] ?? '';
     named = rainHintsFromName(name).unit !== undefined;
   }

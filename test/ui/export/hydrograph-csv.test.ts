@@ -1,0 +1,49 @@
+// The hydrograph CSV (issue 13): units in the headings, the caution, the
+// transform and peak in the notes, through the one CSV writer.
+import { describe, expect, it } from 'vitest';
+import { runoffHydrograph } from '../../../src/core';
+import { CAUTION_TEXT } from '../../../src/scenario';
+import type { Scenario } from '../../../src/scenario/types';
+import { hydrographCsv } from '../../../src/ui/export/hydrograph-csv';
+import { FOUR_BARS } from '../../helpers/scenario-fixtures';
+
+const TRANSFORM = { kind: 'triangular', lagH: 2.5 } as const;
+const SCENARIO: Scenario = {
+  ...FOUR_BARS,
+  name: '=HYPERLINK("x")',
+  storm: { durationsH: [1], depthsMm: [12] },
+  method: { kind: 'constant', rateMmH: 2 },
+  hydrograph: { transform: TRANSFORM, transformMemory: {}, fitParameter: null, objective: 'nse' },
+};
+
+describe('the hydrograph CSV', () => {
+  // 10 mm of excess in one 1-hour bar on 1 km² through the triangular unit hydrograph with lag 2.5 h:
+  // Tp = 0.5 + 2.5 = 3 h, base 8 h, hourly samples 0, 1/3, 2/3, 1, 0.8, 0.6, 0.4, 0.2, 0 of the peak,
+  // which sum to 4, so the peak is ¼ × 1e6 m² × 0.010 m / 3600 s = 25/36 = 0.69444 m³/s at 3 h.
+  const hydrograph = runoffHydrograph({ durationsH: [1], excessMm: [10] }, TRANSFORM, 1e6);
+  const text = hydrographCsv({ scenario: SCENARIO, transform: TRANSFORM, hydrograph, comparison: null });
+  const lines = text
+    .replace(/^\ufeff/, '')
+    .trimEnd()
+    .split('\r\n');
+
+  it('carries the caution, the transform and the peak worked by hand in its notes, quotes in the name doubled', () => {
+    // The name is inside the note's text cell, which starts with "Raincut": no formula can start there.
+    expect(lines[0]).toBe('#,"Raincut runoff hydrograph: =HYPERLINK(""x"")"');
+    expect(lines).toContain(`#,"Caution: ${CAUTION_TEXT}"`);
+    expect(lines).toContain('#,"Unit hydrograph: NRCS triangular unit hydrograph; Lag = 2.5 h"');
+    expect(lines).toContain(
+      '#,"Peak discharge 0.6944 m³/s at 3 h after the storm start; direct runoff volume 10000 m³"',
+    );
+  });
+
+  it('has a heading with units and one row per sample, the triangle worked by hand', () => {
+    const head = lines.findIndex((l) => l.startsWith('"Time'));
+    expect(lines[head]).toBe('"Time (h from storm start)","Computed direct runoff (m³/s)"');
+    const rows = lines.slice(head + 1).map((l) => l.split(',').map((c) => Number(c.replace(/"/g, ''))));
+    const peak = 25 / 36;
+    const want = [0, 1 / 3, 2 / 3, 1, 0.8, 0.6, 0.4, 0.2, 0].map((x) => x * peak);
+    expect(rows.map((r) => r[0])).toEqual([0, 1, 2, 3, 4, 5, 6, 7, 8]);
+    rows.forEach((r, i) => expect(r[1]).toBeCloseTo(want[i] as number, 12));
+  });
+});

@@ -1,0 +1,121 @@
+import { describe, expect, it } from 'vitest';
+import { DEFAULT_NUMBER_FORMAT, type ReadOutcome } from '../../../src/io';
+import { startTextReader, type ReadListener } from '../../../src/ui/import-kit/off-thread';
+import { countLines, packColumns, unpackColumns, type ReadRequest } from '../../../src/ui/import-kit/reader-messages';
+
+/** A stand-in for a Worker: records what it was sent and whether it was ended; replies when told. */
+class FakeWorker {
+  sent: ReadRequest[] = [];
+  ended = false;
+  onmessage: ((event: MessageEvent) => void) | null = null;
+  onerror: ((event: { preventDefault: () => void }) => void) | null = null;
+  postMessage(message: ReadRequest): void {
+    this.sent.push(message);
+  }
+  terminate(): void {
+    this.ended = true;
+  }
+  reply(data: unknown): void {
+    this.onmessage?.({ data } as MessageEvent);
+  }
+}
+
+const request = {
+  reader: 'rain',
+  context: { numberFormat: DEFAULT_NUMBER_FORMAT, units: 'si' },
+  corrections: {},
+} as const;
+
+function listen() {
+  const heard: string[] = [];
+  const outcomes: ReadOutcome[] = [];
+  const listener: ReadListener = {
+    stage: (stage, lines) => heard.push(`${stage} ${lines}`),
+    done: (outcome) => outcomes.push(outcome),
+    failed: (message) => heard.push(`failed ${message}`),
+  };
+  return { heard, outcomes, listener };
+}
+
+describe('a text reader in a worker', () => {
+  it('sends the text once, then only the corrections', () => {
+    const workers: FakeWorker[] = [];
+    const reader = startTextReader('1\n2\n', () => {
+      workers.push(new FakeWorker());
+      return workers.at(-1) as unknown as Worker;
+    });
+    const { listener } = listen();
+    reader.read(request, listener);
+    const w = workers[0] as FakeWorker;
+    expect(w.sent[0]?.text).toBe('1\n2\n');
+    w.reply({ type: 'done', job: 1, outcome: { imported: null } });
+    reader.read({ ...request, corrections: { skipLines: 1 } }, listener);
+    expect(w.sent[1]?.text).toBeUndefined();
+    expect(w.sent[1]?.corrections).toEqual({ skipLines: 1 });
+    expect(reader.where).toBe('worker');
+  });
+
+  it('a read asked for while one runs ends that worker and starts another with the text', () => {
+    const workers: FakeWorker[] = [];
+    const reader = startTextReader('abc', () => {
+      workers.push(new FakeWorker());
+      return workers.at(-1) as unknown as Worker;
+    });
+    const { heard, outcomes, listener } = listen();
+    reader.read(request, listener);
+    reader.read({ ...request, corrections: { hasHeader: true } }, listener);
+    expect(workers).toHaveLength(2);
+    expect(workers[0]?.ended).toBe(true);
+    expect(workers[1]?.sent[0]?.text).toBe('abc');
+    // A late reply of the ended job is not heard.
+    workers[1]?.reply({ type: 'stage', job: 1, stage: 'read', lines: 1 });
+    workers[1]?.reply({ type: 'stage', job: 2, stage: 'read', lines: 1 });
+    expect(heard).toEqual(['read 1']);
+    // Columns come back as plain arrays.
+    workers[1]?.reply({ type: 'done', job: 2, outcome: { imported: { depthsMm: new Float64Array([1, 2]) } } });
+    expect(outcomes[0]?.imported).toEqual({ depthsMm: [1, 2] });
+  });
+
+  it('stop ends the worker and nothing more is heard', () => {
+    const w = new FakeWorker();
+    const reader = startTextReader('abc', () => w as unknown as Worker);
+    const { heard, listener } = listen();
+    reader.read(request, listener);
+    reader.stop();
+    expect(w.ended).toBe(true);
+    w.reply({ type: 'stage', job: 1, stage: 'read', lines: 1 });
+    expect(heard).toEqual([]);
+  });
+
+  it('reads on the page when the worker fails to load, and when none can start', async () => {
+    const w = new FakeWorker();
+    const text = '10:15\t0.2\n10:30\t0.4\n10:45\t0.6';
+    const reader = startTextReader(text, () => w as unknown as Worker);
+    const { heard, outcomes, listener } = listen();
+    reader.read(request, listener);
+    w.onerror?.({ preventDefault: () => undefined });
+    expect(reader.where).toBe('page');
+    await new Promise((ok) => setTimeout(ok, 50));
+    expect(heard).toEqual(['guess 3', 'read 3']);
+    // 0.2 + 0.4 + 0.6 mm in three 15-min bars
+    expect((outcomes[0]?.imported as { depthsMm: number[] }).depthsMm).toEqual([0.2, 0.4, 0.6]);
+
+    const none = startTextReader(text, () => null);
+    expect(none.where).toBe('page');
+  });
+});
+
+describe('the messages', () => {
+  it('count lines with and without a last line break', () => {
+    expect(countLines('')).toBe(0);
+    expect(countLines('a')).toBe(1);
+    expect(countLines('a\nb')).toBe(2);
+    expect(countLines('a\nb\n')).toBe(2);
+  });
+
+  it('pack number columns into buffers to hand over, and back', () => {
+    const { value, transfer } = packColumns({ durationsH: [0.25, 0.5], startIso: '2024-01-01T00:00' });
+    expect(transfer).toHaveLength(1);
+    expect(unpackColumns(value)).toEqual({ durationsH: [0.25, 0.5], startIso: '2024-01-01T00:00' });
+  });
+});
