@@ -8,7 +8,9 @@
 //   declare and saw every spec file on disk (the runner fails a spec that
 //   declares none);
 // - skipped or to-do tests fail the run: a skipped check is a defect;
-// - the type check is reported on its own line and not counted as a test.
+// - the type check, the lint rules and the format check are each reported on
+//   a line of their own and not counted as tests; any of them failing fails
+//   the run.
 
 const BROWSER_COUNT = /^browser: (\d+) passed, (\d+) failed$/m;
 const BROWSER_DECLARED = /^browser: (\d+) spec files, (\d+) tests declared, (\d+) run$/m;
@@ -16,6 +18,8 @@ const BROWSER_DECLARED = /^browser: (\d+) spec files, (\d+) tests declared, (\d+
 /**
  * @param {{
  *   typecheck: { status: number | null },
+ *   lint: { status: number | null },
+ *   format: { status: number | null },
  *   vitest: { status: number | null, report: any },
  *   build: { status: number | null },
  *   browser: { status: number | null, stdout: string } | null,
@@ -23,7 +27,7 @@ const BROWSER_DECLARED = /^browser: (\d+) spec files, (\d+) tests declared, (\d+
  * }} stages
  * @returns {{ lines: string[], exitCode: number }}
  */
-export function verdict({ typecheck, vitest, build, browser, specFiles }) {
+export function verdict({ typecheck, lint, format, vitest, build, browser, specFiles }) {
   let passed = 0;
   let failed = 0;
   let skipped = 0;
@@ -34,6 +38,12 @@ export function verdict({ typecheck, vitest, build, browser, specFiles }) {
 
   lines.push(typecheck.status === 0 ? 'type check: passed' : 'type check: FAILED (see the messages above)');
   if (typecheck.status !== 0) failures.push('type check');
+  lines.push(lint.status === 0 ? 'lint: passed' : 'lint: FAILED (see the messages above)');
+  if (lint.status !== 0) failures.push('lint');
+  lines.push(
+    format.status === 0 ? 'format: passed' : 'format: FAILED (npm run format rewrites the files listed above)',
+  );
+  if (format.status !== 0) failures.push('format');
 
   const json = vitest.report;
   if (!json) {

@@ -1,7 +1,9 @@
 // `npm test`: every test. Installs what is missing (npm dependencies,
-// Debian's chromium), then runs the type check, the unit and component tests
+// Debian's chromium), then runs the type check, the lint rules (ESLint, with
+// the layer rules and no import cycles) and the format check (Prettier), the
+// unit and component tests
 // (Vitest), and the browser tests against the built app (chromium). The type
-// check is reported on its own line; the closing line "N passed, N failed"
+// check, lint and format check are each reported on their own line; the closing line "N passed, N failed"
 // counts tests. Exits non-zero on any failure listed above it (the rules are
 // in gate.mjs).
 import { readdirSync, readFileSync, rmSync } from 'node:fs';
@@ -15,6 +17,15 @@ ensureChromium();
 
 console.log('\n== type check (tsc --noEmit)');
 const typecheck = { status: run('npx', ['tsc', '-p', 'tsconfig.json', '--noEmit']) };
+
+console.log('\n== lint (eslint: the layer rules, no import cycles, hook rules, typescript-eslint)');
+// The cache lives in node_modules, so a fresh clone lints everything once.
+const lint = {
+  status: run('npx', ['eslint', '.', '--cache', '--cache-location', join('node_modules', '.cache', 'eslint')]),
+};
+
+console.log('\n== format (prettier --check)');
+const format = { status: run('npx', ['prettier', '--check', '.', '--log-level', 'warn']) };
 
 console.log('\n== unit and component tests (vitest)');
 const reportPath = join(ROOT, 'node_modules', '.raincut-vitest.json');
@@ -43,6 +54,6 @@ if (build.status === 0) {
 }
 const specFiles = readdirSync(join(ROOT, 'test', 'browser')).filter((f) => f.endsWith('.spec.mjs')).length;
 
-const { lines, exitCode } = verdict({ typecheck, vitest, build, browser, specFiles });
+const { lines, exitCode } = verdict({ typecheck, lint, format, vitest, build, browser, specFiles });
 console.log(`\n${lines.join('\n')}`);
 process.exit(exitCode);

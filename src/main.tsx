@@ -10,8 +10,8 @@ import { SKIP_SAVED_KEY, createCrashRecovery } from './store/crash';
 import { startWorkbench } from './store/start';
 import { App } from './ui/App';
 import { ErrorBoundary } from './ui/layout/ErrorBoundary';
-import { downloadBlob } from './ui/export/download';
-import { browserServices } from './ui/share';
+import { downloadBlob } from './ui/services/download';
+import { browserServices } from './ui/services';
 import { startNumberFormat } from './ui/number-format';
 import './styles/app.css';
 

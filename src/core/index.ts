@@ -17,6 +17,8 @@ export type {
   DrySpellRecovery,
   RetentionConversion,
   CapacityFn,
+  LossPart,
+  MethodValue,
 } from './loss/types';
 export {
   METHODS,
@@ -28,6 +30,10 @@ export {
   describeRange,
   validateMethod,
   paramApplies,
+  withSpec,
+  methodValue,
+  methodNumber,
+  withMethodValue,
 } from './loss/methods';
 export { infiltrationCapacity } from './loss/capacity';
 export { DEFAULT_RECOVERY_PER_H, RECOVERY_CEILING_PER_H } from './loss/recovery';

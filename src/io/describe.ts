@@ -31,7 +31,7 @@ export function formatDuration(hours: number, format: NumberFormat = DEFAULT_NUM
 }
 
 /** Smallest and largest of a list of durations. */
-export function durationRange(durations: readonly number[]): { min: number; max: number } {
+function durationRange(durations: readonly number[]): { min: number; max: number } {
   let min = Infinity;
   let max = -Infinity;
   for (const d of durations) {
@@ -42,7 +42,7 @@ export function durationRange(durations: readonly number[]): { min: number; max:
 }
 
 /** Whether two durations are the same step, allowing for the rounding of time arithmetic. */
-export function sameStep(a: number, b: number): boolean {
+function sameStep(a: number, b: number): boolean {
   return Math.abs(a - b) <= 1e-9 * Math.max(Math.abs(a), Math.abs(b));
 }
 

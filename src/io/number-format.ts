@@ -76,9 +76,8 @@ function plainDigits(x: number): string {
 
 function groupDigits(int: string, group: string): string {
   if (int.length <= 3) return int;
-  let out = '';
   const lead = int.length % 3 || 3;
-  out = int.slice(0, lead);
+  let out = int.slice(0, lead);
   for (let i = lead; i < int.length; i += 3) out += group + int.slice(i, i + 3);
   return out;
 }

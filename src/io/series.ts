@@ -220,7 +220,7 @@ function capitalised(field: string): string {
  * be numbers, zero or more: every one that is not adds a problem naming its
  * line, column and field. Assumes the settings passed checkSeriesSettings.
  */
-export function readSeries(text: string, s: SeriesSettings, field: string, problems: ProblemList): Series {
+function readSeries(text: string, s: SeriesSettings, field: string, problems: ProblemList): Series {
   const split = readTable(text, s);
   const along = s.valuesAlong === 'line';
   const table = along ? valuesAlongLines(split) : split;

@@ -181,7 +181,7 @@ const DATA_TOKEN = /^(?:[+-]?[\d.,:/T+-]*\d[\d.,:/T+-]*|-+|na|n\/a|nan)$/i;
  * are none). Each column also takes the blanks to its left, since numbers
  * in such tables stand right-aligned under their names.
  */
-export function fixedColumns(lines: readonly string[], skipLines = 0): { start: number; end: number }[] {
+function fixedColumns(lines: readonly string[], skipLines = 0): { start: number; end: number }[] {
   const body = lines.slice(skipLines).filter((l) => l.trim() !== '');
   const data = body.filter((l) =>
     l

@@ -61,13 +61,13 @@ export function decodeBase64Url(text: string): Base64Result {
     const n = (value(i) << 18) | (value(i + 1) << 12);
     if (n & 0xffff)
       return { ok: false, reason: 'its last character is not one the encoder writes (the link was changed)' };
-    bytes[o++] = n >>> 16;
+    bytes[o] = n >>> 16;
   } else if (rest === 3) {
     const n = (value(i) << 18) | (value(i + 1) << 12) | (value(i + 2) << 6);
     if (n & 0xff)
       return { ok: false, reason: 'its last character is not one the encoder writes (the link was changed)' };
-    bytes[o++] = n >>> 16;
-    bytes[o++] = (n >>> 8) & 255;
+    bytes[o] = n >>> 16;
+    bytes[o + 1] = (n >>> 8) & 255;
   }
   return { ok: true, bytes };
 }

@@ -1,9 +1,9 @@
 // The scenario document layer: schema, versions, share links, files and the
 // browser's list of saved scenarios. Pure TypeScript, no React or DOM.
-export type { Scenario, ScenarioV1, SetEvent, EventSet, EventObserved, DesignPickDoc } from './types';
+export type { Scenario } from './types';
 export type { Problem, ScenarioResult } from './problems';
 export { MAX_LISTED_PROBLEMS } from './problems';
-export { parseScenario, ScenarioSchema, FIELD_HELP, MAX_BARS, MAX_EVENTS } from './schema';
+export { parseScenario, FIELD_HELP } from './schema';
 export {
   CURRENT_SCENARIO_VERSION,
   MIGRATIONS,
@@ -17,7 +17,6 @@ export {
   decodeScenarioLink,
   loadLinkReader,
   isScenarioLink,
-  LINK_FORMAT_VERSION,
   LINK_PREFIX,
   MAX_LINK_CHARS,
   MAX_LINK_JSON_BYTES,
@@ -38,6 +37,5 @@ export {
   type DeletedEntry,
   type LibraryListing,
   type LibraryResult,
-  type LibraryOptions,
   type StorageLike,
 } from './library';

@@ -3,8 +3,6 @@ import { parseScenario } from './schema';
 import { MAX_NAME_LENGTH } from './text-limits';
 import type { Scenario } from './types';
 
-export { MAX_NAME_LENGTH };
-
 /**
  * The part of the Web Storage interface the library uses: `localStorage` in
  * the browser, a plain object in tests. Any method may throw (storage turned

@@ -1,9 +1,8 @@
 import { decodeBase64Url } from './base64url';
 import { crc32 } from './crc32';
 import type { InflateResult } from './inflate-capped';
-import { failure, problem, type Problem, type ScenarioResult } from './problems';
+import { failure, problem, type ScenarioResult } from './problems';
 import { parseScenario } from './schema';
-import type { Scenario } from './types';
 
 /**
  * Share links put the whole scenario in the URL fragment (after '#'), which
@@ -26,7 +25,7 @@ import type { Scenario } from './types';
  * moment the output passes it, which defeats deflate bombs even in links
  * made on purpose with a correct check sum.
  */
-export const LINK_FORMAT_VERSION = 1;
+const LINK_FORMAT_VERSION = 1;
 
 // The decompressor (fflate's inflate) is fetched only when a link is opened, not with the first screen:
 // main.tsx loads it before opening a link in the address, and before each one pasted into it later.

@@ -24,7 +24,7 @@ export const MAX_LISTED_PROBLEMS = 20;
 const IDENTIFIER = /^[A-Za-z_$][A-Za-z0-9_$]*$/;
 
 /** `['storm', 'depthsMm', 12]` → `storm.depthsMm[12]`; odd keys are quoted. */
-export function formatPath(keys: readonly PathKey[]): string {
+function formatPath(keys: readonly PathKey[]): string {
   let out = '';
   for (const key of keys) {
     if (typeof key === 'number') out += `[${key}]`;

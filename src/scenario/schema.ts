@@ -17,10 +17,7 @@ import {
   validateBaseflowMethod,
   validateHydrograph,
   validateStorm,
-  type BaseflowKind,
   type BaseflowMethod,
-  type LossKind,
-  type LossMethod,
 } from '../core';
 import { baseflowRecordProblem, readBaseflowMethod } from './baseflow-check';
 import { isIsoDateTime } from './iso-date-time';
@@ -38,13 +35,12 @@ import {
 } from './problems';
 import { MAX_NAME_LENGTH, MAX_NOTES_LENGTH, tooLongText } from './text-limits';
 import { fittableTransformParameters, readTransform } from './transform-check';
-import type { Scenario } from './types';
 
 /**
  * The most bars a storm may have: a year of one-minute bars is about half
  * of it. Keeps a crafted document from asking for endless work.
  */
-export const MAX_BARS = 1_000_000;
+const MAX_BARS = 1_000_000;
 
 /** What each field holds, for "is missing" messages and the schema page. */
 export const FIELD_HELP: Readonly<Record<string, string>> = {
@@ -93,7 +89,7 @@ export const MAX_EVENTS = 200;
  * The most samples a streamflow record may have: a year of one-minute
  * readings is about half of it, as for bars.
  */
-export const MAX_SAMPLES = 1_000_000;
+const MAX_SAMPLES = 1_000_000;
 
 type Message = (issue: v.BaseIssue<unknown>) => string;
 const must =
@@ -637,7 +633,7 @@ const crossFieldChecks = v.rawCheck<v.InferOutput<v.ObjectSchema<typeof Document
 );
 
 /** The valibot schema of the current scenario version (after migration). */
-export const ScenarioSchema = v.pipe(
+const ScenarioSchema = v.pipe(
   v.custom<Record<string, unknown>>(isRecord, must('a scenario: a JSON object')),
   v.object(DocumentEntries, must('a scenario: a JSON object')),
   crossFieldChecks,
@@ -703,7 +699,7 @@ function toProblem(issue: v.BaseIssue<unknown>): Problem {
 }
 
 /** Validates a document that is already at the current version. */
-export function validateCurrent(doc: RawDocument): ScenarioResult {
+function validateCurrent(doc: RawDocument): ScenarioResult {
   const result = v.safeParse(ScenarioSchema, doc);
   const problems = [...(result.success ? [] : result.issues.map(toProblem)), ...unknownFields(doc)];
   if (result.success && problems.length === 0) return { ok: true, scenario: result.output };

@@ -1,4 +1,5 @@
 import {
+  methodValue,
   calibrate,
   computeLosses,
   separateBaseflow,
@@ -270,7 +271,7 @@ export function createDerived(): Derived {
       const f = fitOf(s);
       const key = s.observed?.parameter;
       if (!f?.ok || key === undefined) return false;
-      return (effectiveMethod(s) as unknown as Record<string, unknown>)[key] === f.value;
+      return methodValue(effectiveMethod(s), key) === f.value;
     },
     results: resultsOf,
     runoffVolumeM3: (s) => {

@@ -1,4 +1,6 @@
 import {
+  methodValue,
+  withMethodValue,
   InputError,
   MAX_RECORD_H,
   LONGEST_SPAN_TEXT,
@@ -216,12 +218,12 @@ export function withMethodKind(s: Scenario, kind: LossKind, leaving: LossMethod 
 
 /** Sets one parameter (numeric or choice) of the active method, checked by the core. */
 export function withParam(s: Scenario, key: string, value: number | boolean | string): Scenario {
-  const current = (s.method as unknown as Record<string, unknown>)[key];
+  const current = methodValue(s.method, key);
   if (current === value) return s;
   const spec = methodSpec(s.method.kind);
   const known = spec.params.some((p) => p.key === key) || (spec.choices ?? []).some((c) => c.key === key);
   if (!known) throw new InputError(key, `${spec.label} has no parameter "${key}".`);
-  const method = { ...s.method, [key]: value } as LossMethod;
+  const method = withMethodValue(s.method, key, value);
   validateMethod(method);
   return { ...s, method };
 }

@@ -11,8 +11,6 @@ export { createDerived, loadHydrographSide, type Derived, type Results, type Sep
 export type { ComputedHydrograph, Outcome, TimeSeries } from './derive-hydrograph';
 // The hydrograph's edits and fit (./hydrograph-edits) are imported by path: the panel that uses them loads on first use.
 export {
-  FIRST_BASEFLOW_KIND,
-  recordOffsetH,
   withBaseflowDefaults,
   withBaseflowKind,
   withBaseflowParam,
@@ -20,12 +18,9 @@ export {
   withSeparationAsObserved,
   withStreamflowRecord,
   withoutStreamflow,
-  type RecordInput,
 } from './streamflow-edits';
-export { hoursBetweenClocks } from '../core';
-export { alignRecord, type Alignment, type AlignmentSource } from './alignment';
-export type { Bar, Observed } from './edits';
-export { readScenario, readScenarioJson, type ReadResult } from './read-scenario';
+export { alignRecord } from './alignment';
+export { readScenario } from './read-scenario';
 export {
   loadScenario,
   persistStore,
@@ -40,9 +35,7 @@ export {
   type StorageLike,
 } from './persistence';
 export { StoreProvider, useActions, useDerived, useScenario, useWorkbench, useWorkbenchStore } from './react';
-export { HISTORY_LIMIT, COALESCE_WINDOW_MS } from './history';
 export {
-  withActiveEventSynced,
   withDesignPick,
   withDesignStormOnWorkbench,
   withEventAdded,

@@ -1,6 +1,7 @@
 import {
   InputError,
   baseflowMethodSpec,
+  baseflowNumber,
   checkSpanH,
   defaultBaseflowMethod,
   isBaseflowKind,
@@ -9,6 +10,7 @@ import {
   separateBaseflow,
   validateBaseflowMethod,
   validateHydrograph,
+  withoutBaseflowParam,
   type BaseflowKind,
   type BaseflowMethod,
   type BaseflowMethodSpec,
@@ -34,14 +36,6 @@ export interface RecordInput {
 /** The separation a new record starts with: a straight line, its end N = A^0.2 days after the peak. */
 export const FIRST_BASEFLOW_KIND: BaseflowKind = 'straight-line';
 
-const paramsOf = (method: BaseflowMethod): Record<string, unknown> => method as unknown as Record<string, unknown>;
-
-/** The method without the optional parameter `key` (which then goes back to automatic). */
-function withoutParam(method: BaseflowMethod, key: string): BaseflowMethod {
-  const { [key]: _gone, ...rest } = paramsOf(method);
-  return rest as unknown as BaseflowMethod;
-}
-
 /**
  * The core's objection to `method` on this record and area that names one of
  * the method's own parameters, or null. Objections that name something else
@@ -59,7 +53,7 @@ function parameterObjection(
   } catch (error) {
     if (!isInputError(error)) throw error;
     const own = baseflowMethodSpec(method.kind).params.some((p) => p.key === error.field);
-    return own && paramsOf(method)[error.field] !== undefined ? error : null;
+    return own && baseflowNumber(method, error.field) !== undefined ? error : null;
   }
 }
 
@@ -79,7 +73,7 @@ function fitToRecord(
     const objection = parameterObjection(record, current, areaM2);
     const param = objection ? spec.params.find((p) => p.key === objection.field) : undefined;
     if (!objection || !param?.optional) return current;
-    current = withoutParam(current, param.key);
+    current = withoutBaseflowParam(current, param.key);
   }
   return current;
 }
@@ -162,13 +156,13 @@ export function withBaseflowParam(s: Scenario, key: string, value: number | unde
   const spec = baseflowMethodSpec(flow.baseflow.kind) as BaseflowMethodSpec;
   const param = spec.params.find((p) => p.key === key);
   if (!param) throw new InputError(key, `${spec.label} has no parameter "${key}".`);
-  if (paramsOf(flow.baseflow)[key] === value) return s;
+  if (baseflowNumber(flow.baseflow, key) === value) return s;
   if (value === undefined && !param.optional) {
     throw new InputError(key, `${param.label} cannot be left empty (${spec.label}).`);
   }
   const baseflow =
     value === undefined
-      ? withoutParam(flow.baseflow, key)
+      ? withoutBaseflowParam(flow.baseflow, key)
       : ({ ...flow.baseflow, [key]: value === 0 ? 0 : value } as BaseflowMethod);
   validateBaseflowMethod(baseflow);
   const objection = parameterObjection(flow, baseflow, s.catchment.areaM2);
@@ -207,9 +201,4 @@ export function withSeparationAsObserved(s: Scenario, on: boolean, depthMm?: num
   const observed =
     s.observed && depth !== undefined ? { ...s.observed, as: 'depth' as const, value: depth } : s.observed;
   return { ...s, observed, streamflow: { ...flow, useAsObserved: false } };
-}
-
-/** Where the record starts on the storm's time axis, h (clocks first, else the stored offset). */
-export function recordOffsetH(s: Scenario): number {
-  return s.streamflow ? alignRecord(s.storm.startIso, s.streamflow.startIso, s.streamflow.offsetH).offsetH : 0;
 }

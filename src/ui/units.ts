@@ -56,7 +56,7 @@ export function fromDisplay(q: Quantity, value: number, system: UnitSystem): num
 }
 
 /** The quantity a method parameter's unit converts as, or null for units that do not change ('1/h', '-'). */
-export function paramQuantity(unit: ParamUnit | string): Quantity | null {
+function paramQuantity(unit: ParamUnit | string): Quantity | null {
   if (unit === 'mm/h') return 'rate';
   if (unit === 'mm') return 'depth';
   return null;

@@ -181,7 +181,7 @@ export const tests = [
         );
         const [link] = await page.evaluate(() => window.copiedLinks);
         check(link?.startsWith(`${pathToFileURL(FILE).href}#`), `the link is ${link?.slice(0, 80)}`);
-        // The reader's decompressor is loaded on demand, in Node as in the page (src/scenario/link.ts).
+        // The link reader's decompressor is fetched on first use (src/scenario/link.ts), here as on the page.
         await scenario.loadLinkReader();
         const decoded = scenario.decodeScenarioLink(link.slice(link.indexOf('#') + 1));
         check(decoded.ok && decoded.scenario.name === 'Copied from a file page (invented)', 'the link does not decode');

@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { validateHydrograph, validateStorm } from '../../src/core';
+import { validateStorm } from '../../src/core';
 import {
   applyFlowImport,
   applyRainImport,

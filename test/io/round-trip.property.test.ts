@@ -9,7 +9,7 @@ import {
   type Separator,
 } from '../../src/io';
 import { expectClose } from '../helpers/tolerance';
-import { formatPaste, type Paste, type PasteSpec, type TimeFormat } from './format-storm';
+import { formatPaste, type Paste, type PasteSpec, type TimeFormat } from '../helpers/format-storm';
 
 // Storms here are random and INVENTED; they stand for no real event.
 

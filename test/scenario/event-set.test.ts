@@ -12,7 +12,7 @@ import {
   scenarioToFileText,
 } from '../../src/scenario';
 import type { Scenario } from '../../src/scenario/types';
-import { inventedEvents, withSet } from './event-set-fixtures';
+import { inventedEvents, withSet } from '../helpers/event-set-fixtures';
 
 /** The demo as a version 2 document: what every link and file made before the event set holds. */
 function versionTwo(): Record<string, unknown> {

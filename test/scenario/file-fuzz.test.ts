@@ -3,8 +3,8 @@
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
 import { DEMO_SCENARIO, FILE_FORMAT_TAG, scenarioFromFileText, scenarioToFileText } from '../../src/scenario';
-import { gaugeStorm24h, scenarioArb } from './arbitraries';
-import { SCENARIO_FIELDS, expectContract, pathName, pickFieldPath, seeded, withField } from './fuzz-helpers';
+import { gaugeStorm24h, scenarioArb } from '../helpers/scenario-arbitraries';
+import { SCENARIO_FIELDS, expectContract, pathName, pickFieldPath, seeded, withField } from '../helpers/fuzz';
 
 // The corpus holds every part of the document: notes, a streamflow record, an event set with records.
 const sampled = fc.sample(scenarioArb, { numRuns: 20, seed: 777 });

@@ -12,7 +12,7 @@ import {
   type ScenarioResult,
 } from '../../src/scenario';
 import { prettyJson } from '../../src/scenario/pretty-json';
-import { gaugeStorm24h, scenarioArb } from './arbitraries';
+import { gaugeStorm24h, scenarioArb } from '../helpers/scenario-arbitraries';
 
 function messages(result: ScenarioResult): string[] {
   if (result.ok) expect.fail('expected the file to be refused');

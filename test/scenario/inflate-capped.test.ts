@@ -1,7 +1,7 @@
 import { deflateSync, inflateSync } from 'fflate';
 import { describe, expect, it } from 'vitest';
 import { inflateRawCapped } from '../../src/scenario/inflate-capped';
-import { zeroBomb } from './fuzz-helpers';
+import { zeroBomb } from '../helpers/fuzz';
 
 describe('inflateRawCapped', () => {
   it('inflates what fflate deflates, in any slice size', () => {

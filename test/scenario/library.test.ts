@@ -10,7 +10,7 @@ import {
   type Scenario,
   type StorageLike,
 } from '../../src/scenario';
-import { scenarioArb } from './arbitraries';
+import { scenarioArb } from '../helpers/scenario-arbitraries';
 
 /** Web Storage in memory, with a quota and switches to make it fail. */
 class MemoryStorage implements StorageLike {

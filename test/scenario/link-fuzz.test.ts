@@ -7,7 +7,7 @@ import { describe, expect, it } from 'vitest';
 import { DEMO_SCENARIO, LINK_PREFIX, decodeScenarioLink, encodeScenarioLink, type Scenario } from '../../src/scenario';
 import { decodeBase64Url, encodeBase64Url } from '../../src/scenario/base64url';
 import { crc32 } from '../../src/scenario/crc32';
-import { gaugeStorm24h, scenarioArb } from './arbitraries';
+import { gaugeStorm24h, scenarioArb } from '../helpers/scenario-arbitraries';
 import {
   BASE64URL,
   SCENARIO_FIELDS,
@@ -17,7 +17,7 @@ import {
   seeded,
   withField,
   zeroBomb,
-} from './fuzz-helpers';
+} from '../helpers/fuzz';
 
 // The corpus holds every part of the document: notes, a streamflow record, an event set with records.
 const sampled = fc.sample(scenarioArb, { numRuns: 30, seed: 424242 });

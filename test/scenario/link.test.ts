@@ -15,8 +15,8 @@ import {
 } from '../../src/scenario';
 import { encodeBase64Url } from '../../src/scenario/base64url';
 import { crc32 } from '../../src/scenario/crc32';
-import { gaugeStorm24h, scenarioArb } from './arbitraries';
-import { zeroBomb } from './fuzz-helpers';
+import { gaugeStorm24h, scenarioArb } from '../helpers/scenario-arbitraries';
+import { zeroBomb } from '../helpers/fuzz';
 
 /** Builds a link by hand from JSON text, with the parts open to tampering. */
 function handLink(json: string, options: { claimed?: number; crcXor?: number; body?: Uint8Array } = {}): string {

@@ -16,7 +16,7 @@ import {
   type ScenarioResult,
 } from '../../src/scenario';
 import type { Streamflow } from '../../src/scenario/types';
-import { scenarioArb } from './arbitraries';
+import { scenarioArb } from '../helpers/scenario-arbitraries';
 
 /** An invented event record: a rise from 0.4 m³/s to a 5.1 m³/s peak and a recession. */
 const RECORD: Streamflow = {

@@ -8,7 +8,7 @@ import {
   type Scenario,
   type StorageLike,
 } from '../../src/scenario';
-import { FOUR_EVENTS } from '../ui/events/fixtures';
+import { FOUR_EVENTS } from '../helpers/event-fixtures';
 
 // Names and notes are capped in the schema (src/scenario/text-limits.ts), as
 // the saved list's rename field already was: 200 characters for a name,

@@ -18,7 +18,7 @@ import {
   scenarioToFileText,
   type Scenario,
 } from '../../src/scenario';
-import { scenarioArb } from './arbitraries';
+import { scenarioArb } from '../helpers/scenario-arbitraries';
 
 // Every way in (link, file, storage) reads through one schema, which holds
 // times to the core's limits (src/core/time-limits.ts). A document past them

@@ -19,6 +19,8 @@ const browserOut = (passed: number, failed: number, declared = passed + failed, 
 
 const good = {
   typecheck: { status: 0 },
+  lint: { status: 0 },
+  format: { status: 0 },
   vitest: { status: 0, report: report(100) },
   build: { status: 0 },
   browser: { status: 0, stdout: browserOut(21, 0) },
@@ -62,6 +64,18 @@ describe('the verdict of npm test', () => {
     expect(v.exitCode).toBe(1);
     expect(v.lines).toContain('type check: FAILED (see the messages above)');
     expect(v.lines.at(-1)).toBe('121 passed, 0 failed');
+  });
+
+  it('fails on a lint error (a layer rule, an import cycle) or an unformatted file, each on its own line', () => {
+    const lint = verdict({ ...good, lint: { status: 1 } });
+    expect(lint.exitCode).toBe(1);
+    expect(lint.lines).toContain('lint: FAILED (see the messages above)');
+    expect(lint.lines).toContain('format: passed');
+    const format = verdict({ ...good, format: { status: 1 } });
+    expect(format.exitCode).toBe(1);
+    expect(format.lines).toContain('lint: passed');
+    expect(format.lines).toContain('format: FAILED (npm run format rewrites the files listed above)');
+    expect(verdict(good).lines).toEqual(expect.arrayContaining(['lint: passed', 'format: passed']));
   });
 
   it('fails when vitest exits non-zero with every test passed (an unhandled error, a file that did not load)', () => {

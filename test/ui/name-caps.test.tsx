@@ -1,9 +1,9 @@
 // @vitest-environment jsdom
 import { screen } from '@testing-library/react';
 import { describe, expect, it } from 'vitest';
-import { lazyPartsLoaded, renderWorkbench } from './render';
-import { FOUR_EVENTS } from './events/fixtures';
-import { FOUR_BARS } from './store/fixtures';
+import { lazyPartsLoaded, renderWorkbench } from '../helpers/render';
+import { FOUR_EVENTS } from '../helpers/event-fixtures';
+import { FOUR_BARS } from '../helpers/scenario-fixtures';
 
 // A name over 200 characters (src/scenario/text-limits.ts) stays in its field
 // with the reason beside it; the stored name is the last one that fitted.

@@ -12,9 +12,9 @@ import {
   formatForLanguage,
   startNumberFormat,
 } from '../../src/ui/number-format';
-import { totalsOf } from '../../src/ui/compare/totals';
-import { lazyPartsLoaded, renderWorkbench } from './render';
-import { FOUR_BARS } from './store/fixtures';
+import { totalsOf } from '../../src/ui/results/totals';
+import { lazyPartsLoaded, renderWorkbench } from '../helpers/render';
+import { FOUR_BARS } from '../helpers/scenario-fixtures';
 
 // FOUR_BARS (invented): four 30-min bars of 2, 6, 10, 2 mm (4, 12, 20, 4 mm/h), 20 mm in all, 1 km², φ = 8 mm/h.
 const CURVE_NUMBER: Scenario = { ...FOUR_BARS, method: { kind: 'curve-number', cn: 75, iaRatio: 0.2 } };

@@ -4,8 +4,8 @@ import { describe, expect, it } from 'vitest';
 import { DEMO_SCENARIO } from '../../src/scenario/demo';
 import { SET_ASIDE_PREFIX, STORAGE_KEY, loadScenario } from '../../src/store';
 import { CAUTION_TEXT } from '../../src/scenario';
-import { renderWorkbench } from './render';
-import { FOUR_BARS, memoryStorage } from './store/fixtures';
+import { renderWorkbench } from '../helpers/render';
+import { FOUR_BARS, memoryStorage } from '../helpers/scenario-fixtures';
 
 const NOW = '2026-03-01T10:00:00.000Z';
 

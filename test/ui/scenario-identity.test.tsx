@@ -7,9 +7,9 @@
 import { screen, waitFor, within } from '@testing-library/react';
 import { describe, expect, it } from 'vitest';
 import { DEMO_SCENARIO } from '../../src/scenario';
-import { FOUR_EVENTS } from './events/fixtures';
-import { renderWorkbench } from './render';
-import { FOUR_BARS } from './store/fixtures';
+import { FOUR_EVENTS } from '../helpers/event-fixtures';
+import { renderWorkbench } from '../helpers/render';
+import { FOUR_BARS } from '../helpers/scenario-fixtures';
 
 // The machine running the tests may be busy: the paste dialog's code loads on first use.
 const SLOW = { timeout: 15_000 };

@@ -5,9 +5,9 @@ import { MAX_RECORD_H } from '../../src/core';
 import type { Scenario } from '../../src/scenario/types';
 import { NO_CLOCK_TEXT, formatClockText, formatWallDate, formatWallTime, wallClockMs } from '../../src/ui/chart/clock';
 import { elapsedText } from '../../src/ui/storm-input/bar-times';
-import { lazyPartsLoaded, renderWorkbench } from './render';
-import { FOUR_BARS } from './store/fixtures';
-import { WITH_TRIANGLE } from './observed/fixtures';
+import { lazyPartsLoaded, renderWorkbench } from '../helpers/render';
+import { FOUR_BARS } from '../helpers/scenario-fixtures';
+import { WITH_TRIANGLE } from '../helpers/flow-fixtures';
 
 // Every typed time or duration is held to its plausible range and, last, to
 // the core's limits of time (src/core/time-limits.ts: a record of at most 500

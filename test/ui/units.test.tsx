@@ -3,8 +3,8 @@ import { screen } from '@testing-library/react';
 import { describe, expect, it } from 'vitest';
 import { convertArea, convertDepth, convertRate, convertVolume, runoffVolumeM3 } from '../../src/core';
 import { formatValue } from '../../src/ui/format';
-import { coreTotals, renderWorkbench } from './render';
-import { FOUR_BARS } from './store/fixtures';
+import { coreTotals, renderWorkbench } from '../helpers/render';
+import { FOUR_BARS } from '../helpers/scenario-fixtures';
 
 describe('the unit switch', () => {
   it('shows every result in US customary units, converted by the core’s exact factors', async () => {

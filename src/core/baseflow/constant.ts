@@ -10,7 +10,7 @@ import type { BaseflowMethodSpec, SeparateFn } from './types';
  * separations, e.g. Chow, Maidment & Mays (1988) Applied Hydrology, §5.1
  * (section cited from memory).
  */
-export const separateConstant: SeparateFn<'constant'> = (timesH, dischargeM3s, method, context) => {
+const separateConstant: SeparateFn<'constant'> = (timesH, dischargeM3s, method, context) => {
   const n = dischargeM3s.length;
   const rise = resolveRiseIndex(dischargeM3s, method.riseIndex, context.peakIndex);
   const level = dischargeM3s[rise] as number;

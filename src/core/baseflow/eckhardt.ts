@@ -54,7 +54,7 @@ export const separateEckhardt: SeparateFn<'eckhardt'> = (timesH, dischargeM3s, m
 };
 
 /** The filter's conventions in words, for the screen and the README. */
-export const ECKHARDT_CONVENTIONS =
+const ECKHARDT_CONVENTIONS =
   'One forward pass. It starts with all flow as baseflow at its first sample (b₀ = Q₀); baseflow is capped at the flow at every step and the capped value carried on, so 0 ≤ baseflow ≤ flow. ' +
   'Without warm-up a record that starts on a recession is taken as all baseflow there; with warm-up, samples are mirrored before the first and dropped after filtering.';
 

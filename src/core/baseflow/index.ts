@@ -23,6 +23,8 @@ export {
   defaultBaseflowMethod,
   describeBaseflowRange,
   validateBaseflowMethod,
+  baseflowNumber,
+  withoutBaseflowParam,
 } from './methods';
 export { separateBaseflow } from './separate';
 export { validateHydrograph, dischargeAtH } from './hydrograph';

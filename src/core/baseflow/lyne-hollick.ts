@@ -31,7 +31,7 @@ import { reflectPad } from './warm-up';
  * irregular records. Published α values are for daily data, so the default
  * stepH is 24 h (the scaling applied to α is our reading of that practice).
  */
-export function lyneHollickPass(
+function lyneHollickPass(
   timesH: ArrayLike<number>,
   input: ArrayLike<number>,
   output: Float64Array,
@@ -79,7 +79,7 @@ export const separateLyneHollick: SeparateFn<'lyne-hollick'> = (timesH, discharg
 };
 
 /** The filter's conventions in words, for the screen and the README. */
-export const LYNE_HOLLICK_CONVENTIONS =
+const LYNE_HOLLICK_CONVENTIONS =
   'Each pass starts with no quickflow (all baseflow) at its first sample. Quickflow is held between 0 and the flow at every step, and the held value is carried on, so 0 ≤ baseflow ≤ flow. ' +
   'Passes alternate: forward, backward, forward… (an even count ends on a backward pass). ' +
   'Without warm-up the first sample of each pass is taken as all baseflow, and a record that starts on a recession stays all baseflow down it; ' +

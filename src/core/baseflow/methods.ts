@@ -47,6 +47,18 @@ export function describeBaseflowRange(param: BaseflowParam): string {
   return kind;
 }
 
+/** The number `method` holds for the parameter `key`, or undefined when it holds none (an optional one left out). */
+export function baseflowNumber(method: BaseflowMethod, key: string): number | undefined {
+  const v: unknown = (method as unknown as Partial<Record<string, unknown>>)[key];
+  return typeof v === 'number' ? v : undefined;
+}
+
+/** A copy of `method` without the optional parameter `key` (which then goes back to automatic). */
+export function withoutBaseflowParam<M extends BaseflowMethod>(method: M, key: string): M {
+  const { [key]: _gone, ...rest } = method as unknown as Partial<Record<string, unknown>>;
+  return rest as unknown as M;
+}
+
 /**
  * Throws an InputError naming the field when a parameter is missing (and not
  * optional), not a finite number, not whole where it must be, or outside its

@@ -26,7 +26,7 @@ export function recessionDays(areaM2: number): number {
  * notice (a fallback of our own, common practice with a short record, no
  * source): a screen must show a separation and say how it was made, not stop.
  */
-export const separateStraightLine: SeparateFn<'straight-line'> = (timesH, dischargeM3s, method, context) => {
+const separateStraightLine: SeparateFn<'straight-line'> = (timesH, dischargeM3s, method, context) => {
   const n = dischargeM3s.length;
   const rise = resolveRiseIndex(dischargeM3s, method.riseIndex, context.peakIndex);
   const riseTimeH = timesH[rise] as number;

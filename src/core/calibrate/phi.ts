@@ -273,7 +273,7 @@ export function exactPhiByBuckets(
  * already known to lie above φ contribute depthAbove and durAbove; φ is known
  * to lie in [lo, hi].
  */
-export function selectPhi(
+function selectPhi(
   depth: Float64Array,
   dur: Float64Array,
   m: number,

@@ -184,6 +184,7 @@ export const constantSpec: MethodSpec<'constant'> = {
   label: 'Constant loss rate (φ-index)',
   summary: 'Every bar loses rain at one constant rate; rain above the rate becomes excess.',
   source: 'Chow, Maidment & Mays (1988) Applied Hydrology, section 5.2 (φ-index).',
+  rateParam: 'rateMmH',
   params: [
     {
       key: 'rateMmH',

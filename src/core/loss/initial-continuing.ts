@@ -53,6 +53,9 @@ export const initialContinuingSpec: MethodSpec<'initial-continuing'> = {
   summary: 'The first rain fills an initial loss; after that, rain loses at a constant continuing rate.',
   source:
     'Initial loss–continuing loss model (Australian Rainfall and Runoff, Book 5; Chow, Maidment & Mays 1988, section 5.2).',
+  rateParam: 'rateMmH',
+  // With no continuing rate the method loses exactly the initial loss, bar by bar.
+  lossPart: { label: 'Initial loss', variant: (m) => ({ ...m, rateMmH: 0 }) },
   params: [
     {
       key: 'initialMm',

@@ -5,7 +5,7 @@ import { proportionalSpec } from './proportional';
 import { hortonSpec } from './horton';
 import { greenAmptSpec } from './green-ampt';
 import { curveNumberSpec } from './curve-number';
-import type { LossKind, LossMethod, MethodOf, MethodSpec, NumericParam } from './types';
+import type { LossKind, LossMethod, MethodOf, MethodSpec, MethodValue, NumericParam } from './types';
 
 /**
  * The one table of loss methods. The UI builds its method picker and
@@ -32,6 +32,43 @@ export function methodSpec<K extends LossKind>(kind: K): MethodSpec<K> {
   const spec = METHODS[kind] as MethodSpec<K> | undefined;
   if (!spec) throw new InputError('kind', `Unknown loss method "${String(kind)}".`);
   return spec;
+}
+
+/**
+ * Calls `fn` with the method and the spec of its kind, typed to the same kind,
+ * so a caller can hand one to the other (`spec.dryBars(method)`). TypeScript
+ * cannot tie a union value to the table entry of its own member: this is the
+ * one place that says so.
+ */
+export function withSpec<R>(
+  method: LossMethod,
+  fn: <K extends LossKind>(spec: MethodSpec<K>, method: MethodOf<K>) => R,
+): R {
+  return fn(methodSpec(method.kind) as MethodSpec, method);
+}
+
+/**
+ * The value `method` holds for the parameter or setting `key` (a key of its
+ * spec's params or choices), or undefined when it holds none there (left out,
+ * or not a number, switch or choice).
+ */
+export function methodValue(method: LossMethod, key: string): MethodValue | undefined {
+  const v: unknown = (method as unknown as Partial<Record<string, unknown>>)[key];
+  return typeof v === 'number' || typeof v === 'boolean' || typeof v === 'string' ? v : undefined;
+}
+
+/** The number `method` holds for the numeric parameter `key`, or undefined. */
+export function methodNumber(method: LossMethod, key: string): number | undefined {
+  const v = methodValue(method, key);
+  return typeof v === 'number' ? v : undefined;
+}
+
+/**
+ * A copy of `method` with the parameter or setting `key` set to `value`. Not
+ * validated: the caller checks it (validateMethod) before it is used.
+ */
+export function withMethodValue<M extends LossMethod>(method: M, key: string, value: MethodValue): M {
+  return { ...method, [key]: value };
 }
 
 /** The numeric parameter `key` of a method kind, or undefined. */
@@ -72,9 +109,8 @@ export function validateMethod(method: LossMethod): void {
   if (!method || typeof method !== 'object') throw new InputError('method', 'No loss method was given.');
   if (!isLossKind(method.kind)) throw new InputError('kind', `Unknown loss method "${String(method.kind)}".`);
   const spec = methodSpec(method.kind) as MethodSpec;
-  const values = method as unknown as Record<string, unknown>;
   for (const param of spec.params) {
-    const v = values[param.key];
+    const v: unknown = (method as unknown as Partial<Record<string, unknown>>)[param.key];
     // Added after callers were written: leaving it out means its stated value.
     if (v === undefined && param.omitted !== undefined) continue;
     const unit = param.unit === '-' ? '' : ` ${param.unit}`;
@@ -90,12 +126,12 @@ export function validateMethod(method: LossMethod): void {
     }
   }
   for (const choice of spec.choices ?? []) {
-    const v = values[choice.key];
+    const v: unknown = (method as unknown as Partial<Record<string, unknown>>)[choice.key];
     if (v === undefined && choice.omitted !== undefined) continue;
     if (!choice.choices.some((c) => c.value === v)) {
       const allowed = choice.choices.map((c) => JSON.stringify(c.value)).join(' or ');
       throw new InputError(choice.key, `${choice.label} must be ${allowed} (got ${JSON.stringify(v)}).`);
     }
   }
-  spec.validateExtra?.(method as never);
+  withSpec(method, (spec, m) => spec.validateExtra?.(m));
 }

@@ -236,10 +236,32 @@ export interface MethodSpec<K extends LossKind = LossKind> {
   readonly totalExcess?: TotalExcessFn<K>;
   /**
    * Optional: the infiltration capacity through the storm, for methods whose
-   * loss follows a capacity curve. See CapacityFn.
+   * loss follows a capacity curve. See CapacityFn. Screens draw it as a curve
+   * over the bars.
    */
   readonly capacity?: CapacityFn<K>;
+  /**
+   * Optional: the parameter that is a constant loss rate, mm/h, for methods
+   * whose loss is capped at one. Screens draw it as a line across the bars
+   * that the user drags.
+   */
+  readonly rateParam?: NumericParam<K>['key'];
+  /** Optional: a part of the loss the same method computes alone. See LossPart. */
+  readonly lossPart?: LossPart<K>;
 }
+
+/**
+ * A part of the loss that a variant of the same method computes on its own,
+ * bar by bar, and screens shade apart: for initial–continuing loss, the same
+ * method with no continuing rate loses exactly the initial loss.
+ */
+export interface LossPart<K extends LossKind> {
+  readonly label: string;
+  readonly variant: (method: MethodOf<K>) => MethodOf<K>;
+}
+
+/** A value a method holds: a number for a parameter, a switch or choice for a setting. */
+export type MethodValue = number | boolean | string;
 
 /**
  * Infiltration capacity, mm/h, at each of `timesH` (hours from the storm

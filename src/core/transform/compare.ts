@@ -49,7 +49,7 @@ export function checkSeries(series: Hydrograph, name: 'computed' | 'observed', v
  * (a computed direct runoff hydrograph starts at the storm start and ends at
  * zero).
  */
-export function dischargeOrZeroAt(series: Hydrograph, tH: number): number {
+function dischargeOrZeroAt(series: Hydrograph, tH: number): number {
   const { timesH, dischargeM3s } = series;
   const first = timesH[0] as number;
   const last = timesH[timesH.length - 1] as number;

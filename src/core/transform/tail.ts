@@ -6,7 +6,7 @@ import { gammaQ, logGamma } from './gamma';
  * rescaling the rest moves that share into the body of the response, far below
  * the 1e-9 volume tolerance and below any discharge a gauge resolves.
  */
-export const RESPONSE_TAIL = 1e-14;
+const RESPONSE_TAIL = 1e-14;
 
 /**
  * The smallest x (to 1e-12 relative) with Q(a, x) ≤ `tail`: where a gamma-
@@ -30,7 +30,7 @@ export function gammaTailEnd(a: number, tail = RESPONSE_TAIL): number {
 }
 
 /** Longest unit response kept, in output steps (2²³, 64 MiB of weights). */
-export const MAX_RESPONSE_STEPS = 2 ** 23;
+const MAX_RESPONSE_STEPS = 2 ** 23;
 
 /**
  * A zeroed array for a unit response of `count` steps, or an InputError naming

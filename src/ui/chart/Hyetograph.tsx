@@ -1,5 +1,5 @@
 import { useMemo } from 'react';
-import { computeLosses, methodSpec, totalDepthMm, type LossMethod } from '../../core';
+import { computeLosses, totalDepthMm, type LossMethod } from '../../core';
 import type { Scenario } from '../../scenario/types';
 import { useDerived, useScenario } from '../../store';
 import { formatCount, formatValue } from '../format';
@@ -8,7 +8,7 @@ import { Axes } from './Axes';
 import { CAPACITY_CURVES } from './capacity';
 import { useChartHeight } from './chart-height';
 import { chartFrame } from './frame';
-import { LINE_PARAM, LOSS_PARTS } from './line-params';
+import { lossPartOf, rateLine } from './method-layers';
 import { LossLayer } from './LossLayer';
 import { LossLine } from './LossLine';
 import { RainLayer } from './RainLayer';
@@ -19,10 +19,10 @@ export { CHART_HEIGHT } from './chart-height';
 
 /** The part of the loss drawn in its own shade (initial loss), computed by the core. */
 function lossPart(storm: Scenario['storm'], method: LossMethod): Float64Array | null {
-  const part = LOSS_PARTS[method.kind];
+  const part = lossPartOf(method);
   if (!part) return null;
   try {
-    return computeLosses(storm, part.variant(method)).lossMm;
+    return computeLosses(storm, part.method).lossMm;
   } catch {
     return null;
   }
@@ -55,11 +55,11 @@ export function Hyetograph() {
   const capacityPath = capacityDrawing?.path ?? null;
   const aboveTop = capacityDrawing?.aboveTopMmH ?? null;
 
-  const spec = methodSpec(method.kind);
-  const lineKey = LINE_PARAM[method.kind];
-  const lineParam = lineKey ? spec.params.find((p) => p.key === lineKey) : undefined;
-  const lineValue = lineKey ? (method as unknown as Record<string, number>)[lineKey] : undefined;
-  const partLabel = LOSS_PARTS[method.kind]?.label ?? null;
+  const line = rateLine(method);
+  const lineParam = line?.param;
+  const lineKey = lineParam?.key;
+  const lineValue = line?.valueMmH;
+  const partLabel = lossPartOf(method)?.label ?? null;
   const n = storm.depthsMm.length;
 
   const depthUnit = unitText(displayUnit('depth', units));

@@ -2,6 +2,8 @@ import { line } from 'd3-shape';
 import {
   barEdgesH,
   infiltrationCapacity,
+  METHOD_KINDS,
+  methodSpec,
   totalDurationH,
   type LossKind,
   type LossMethod,
@@ -57,7 +59,7 @@ function toPath(frame: ChartFrame, tH: ArrayLike<number>, rateMmH: ArrayLike<num
  * every bar edge while bars are wider than that (capacity bends there: rain
  * starts, stops or changes), merged in order.
  */
-export function capacitySampleTimes(frame: ChartFrame, storm: Storm): Float64Array {
+function capacitySampleTimes(frame: ChartFrame, storm: Storm): Float64Array {
   const durationH = totalDurationH(storm);
   const widthPx = Math.max(1, frame.x(durationH) - frame.x(0));
   const samples = Math.max(2, Math.ceil(widthPx / 2));
@@ -87,7 +89,7 @@ const coreCurve = (kind: LossKind): CapacityCurve => ({
   draw: (frame, storm, method) => drawCurve(kind, frame, storm, method),
 });
 
-export const CAPACITY_CURVES: Partial<Record<LossKind, CapacityCurve>> = {
-  horton: coreCurve('horton'),
-  'green-ampt': coreCurve('green-ampt'),
-};
+/** A curve for each method whose spec gives a capacity (src/core/loss/methods.ts): no list of kinds kept here. */
+export const CAPACITY_CURVES: Partial<Record<LossKind, CapacityCurve>> = Object.fromEntries(
+  METHOD_KINDS.filter((kind) => methodSpec(kind).capacity).map((kind) => [kind, coreCurve(kind)]),
+);

@@ -6,13 +6,13 @@ import { useElementWidth } from '../chart/useElementWidth';
 import { methodParametersText } from '../export/bar-table-csv';
 import { StaticChart } from '../export/StaticChart';
 import { formatPercent, formatValue } from '../format';
-import { useServices, usePins } from '../share/services';
+import { useServices, usePins } from '../services/services';
 import { displayUnit, paramToDisplay, paramUnitText, toDisplay, unitText, type Quantity } from '../units';
-import { fittedCellText } from '../matching/fit-words';
+import { fittedCellText } from '../results/fit-words';
 import { commonFrames } from './common-frame';
 import { difference, type Difference } from './difference';
-import { MAX_PINS, type Pin } from './pins';
-import { totalsOf, type Totals } from './totals';
+import { MAX_PINS, type Pin } from '../services/pins';
+import { totalsOf, type Totals } from '../results/totals';
 import './compare.css';
 
 const SMALL_CHART_HEIGHT = 190;

@@ -1,11 +1,19 @@
 import { useEffect, useMemo, useState } from 'react';
-import { computeLosses, isInputError, methodSpec, runoffHydrograph, runoffVolumeM3, type LossMethod } from '../../core';
+import {
+  computeLosses,
+  isInputError,
+  methodNumber,
+  methodSpec,
+  runoffHydrograph,
+  runoffVolumeM3,
+  type LossMethod,
+} from '../../core';
 import { dischargeText } from '../observed/discharge';
-import { hoursMinutes } from '../hydrograph/hours-minutes';
+import { hoursMinutes } from '../results/hours-minutes';
 import { useActions, useDerived, useScenario, useWorkbenchStore, withDesignStormOnWorkbench } from '../../store';
 import { toScenarioStorm } from '../../store/edits';
-import { usePins, useServices } from '../share/services';
-import { MAX_PINS } from '../compare/pins';
+import { usePins, useServices } from '../services/services';
+import { MAX_PINS } from '../services/pins';
 import { designMethod } from '../events/event-fits';
 import { useEventFits } from '../events/use-event-fits';
 import { formatPercent, formatValue } from '../format';
@@ -135,7 +143,7 @@ export function DesignStormView() {
   const depth = (mm: number): string => `${formatValue(toDisplay('depth', mm, units))} ${depthUnit}`;
   const designText =
     fromSet && param
-      ? `${param.label} ${formatValue(paramToDisplay(param.unit, (fromSet as unknown as Record<string, number>)[fits.parameter] ?? NaN, units))} ${paramUnitText(param.unit, units)}`
+      ? `${param.label} ${formatValue(paramToDisplay(param.unit, methodNumber(fromSet, fits.parameter) ?? NaN, units))} ${paramUnitText(param.unit, units)}`
       : null;
   const messageId = 'design-form-problem';
   const badField = built.ok ? null : built.field;

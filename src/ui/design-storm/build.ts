@@ -136,7 +136,7 @@ export function formInUnits(form: DesignForm, system: UnitSystem): DesignForm {
  * 1,234.5 is a day in minutes; where the format groups with a space, put a
  * tab or a semicolon between the values.
  */
-export function parseIdfTable(text: string): { durations: number[]; intensities: number[] } {
+function parseIdfTable(text: string): { durations: number[]; intensities: number[] } {
   const durations: number[] = [];
   const intensities: number[] = [];
   const format = currentNumberFormat();

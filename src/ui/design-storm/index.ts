@@ -2,5 +2,3 @@
 // The view's layout and its summary list are styled with the event set's.
 
 export { DesignStormView } from './DesignStormView';
-export { StormBars } from './StormBars';
-export { buildDesignStorm, parseIdfTable, FIELD_LABELS, type DesignForm, type Built, type FormField } from './build';

@@ -24,7 +24,7 @@ export type EventTarget = { readonly ok: true; readonly mm: number } | { readonl
  * baseflow separation, as the workbench does for the event on it. All
  * arithmetic is the core's.
  */
-export function eventTarget(event: SetEvent, areaM2: number): EventTarget {
+function eventTarget(event: SetEvent, areaM2: number): EventTarget {
   if (event.observed === null) return { ok: false, message: 'No observed runoff is entered for this event.' };
   const flow = event.streamflow;
   if (flow?.useAsObserved) {
@@ -47,7 +47,7 @@ export function eventTarget(event: SetEvent, areaM2: number): EventTarget {
 }
 
 /** The parameter fitted for every event: the set's choice, else the workbench's, else the method's first. */
-export function fittedParameter(s: Scenario): string {
+function fittedParameter(s: Scenario): string {
   const keys: string[] = methodSpec(s.method.kind).params.map((p) => String(p.key));
   const chosen = s.eventSet.parameter;
   if (chosen !== null && keys.includes(chosen)) return chosen;

@@ -1,7 +1,7 @@
 import { CAUTION_TEXT, scenarioFileName } from '../../scenario';
 import { loadHydrographSide, useScenario, useWorkbenchStore } from '../../store';
-import { useBarMessage } from '../share/bar-message';
-import { useServices } from '../share/services';
+import { useBarMessage } from '../services/bar-message';
+import { useServices } from '../services/services';
 import { loadReport } from './PrintReport';
 import { formatCount } from '../format';
 import './export.css';

@@ -3,17 +3,17 @@ import { TRANSFORMS, methodSpec, totalDurationH } from '../../core';
 import { CAUTION_TEXT } from '../../scenario';
 import { useDerived, useScenario } from '../../store';
 import { chartFrame } from '../chart/frame';
-import { LINE_PARAM } from '../chart/line-params';
+import { rateLine } from '../chart/method-layers';
 import { formatWallDate, formatWallTime, wallClockMs } from '../chart/clock';
-import { totalsOf } from '../compare/totals';
-import { fittedCellText } from '../matching/fit-words';
+import { totalsOf } from '../results/totals';
+import { fittedCellText } from '../results/fit-words';
 import { formatCount, formatPercent, formatValue } from '../format';
 import { displayUnit, toDisplay, unitText, type Quantity } from '../units';
-import { useServices } from '../share/services';
+import { useServices } from '../services/services';
 import { methodParametersText } from './bar-table-csv';
 import { transformParametersText } from './hydrograph-csv';
 import { dischargeText } from '../observed/discharge';
-import { hoursMinutes } from '../hydrograph/hours-minutes';
+import { hoursMinutes } from '../results/hours-minutes';
 import { StaticChart } from './StaticChart';
 import './export.css';
 
@@ -34,8 +34,7 @@ export function ReportBody() {
     si === null ? '—' : `${formatValue(toDisplay(q, si, units))} ${unitText(displayUnit(q, units))}`;
   const n = storm.depthsMm.length;
   const startMs = storm.startIso === undefined ? null : wallClockMs(storm.startIso);
-  const lineKey = LINE_PARAM[method.kind];
-  const lineValue = lineKey ? (method as unknown as Record<string, unknown>)[lineKey] : undefined;
+  const lineValue = rateLine(method)?.valueMmH;
   const spec = methodSpec(method.kind);
   const observedParam = spec.params.find((p) => p.key === observed?.parameter);
   const observedText =

@@ -1,4 +1,13 @@
-import { barEdgesH, methodSpec, paramApplies, type LossMethod, type LossResult, type UnitSystem } from '../../core';
+import {
+  barEdgesH,
+  methodNumber,
+  methodSpec,
+  methodValue,
+  paramApplies,
+  type LossMethod,
+  type LossResult,
+  type UnitSystem,
+} from '../../core';
 import { CAUTION_TEXT } from '../../scenario';
 import type { Scenario } from '../../scenario/types';
 import { formatClockText, wallClockMs } from '../chart/clock';
@@ -58,25 +67,24 @@ export function methodParametersText(
   format: (x: number) => string = formatValue,
 ): string {
   const spec = methodSpec(method.kind);
-  const values = method as unknown as Record<string, unknown>;
   const parts: string[] = [];
   // Only what takes part under the other settings (no recovery rate while recovery is off).
   for (const p of spec.params) {
-    const v = values[p.key];
-    if (typeof v !== 'number' || !paramApplies(p, method)) continue;
+    const v = methodNumber(method, p.key);
+    if (v === undefined || !paramApplies(p, method)) continue;
     const unit = paramUnitText(p.unit, units);
     parts.push(`${p.label} = ${format(paramToDisplay(p.unit, v, units))}${unit ? ` ${unit}` : ''}`);
   }
   for (const c of spec.choices ?? []) {
     if (!paramApplies(c, method)) continue;
-    const chosen = c.choices.find((o) => o.value === values[c.key]);
+    const chosen = c.choices.find((o) => o.value === methodValue(method, c.key));
     if (chosen) parts.push(`${c.label}: ${chosen.label}`);
   }
   return parts.join('; ');
 }
 
 /** The column headings, with units, for a unit system and storm. */
-export function barTableHeader(scenario: Scenario): string[] {
+function barTableHeader(scenario: Scenario): string[] {
   const depth = unitText(displayUnit('depth', scenario.units));
   const rate = unitText(displayUnit('rate', scenario.units));
   const head = ['Bar'];

@@ -1,7 +1,7 @@
 import { methodSpec, type LossMethod } from '../../core';
 import type { Scenario } from '../../scenario/types';
 import { CAPACITY_CURVES } from '../chart/capacity';
-import { LINE_PARAM, LOSS_PARTS } from '../chart/line-params';
+import { lossPartOf, rateLine } from '../chart/method-layers';
 import { methodParametersText } from './bar-table-csv';
 import type { LegendEntry } from './chart-svg';
 
@@ -12,9 +12,8 @@ export function chartHeading(scenario: Scenario, method: Scenario['method']): st
 
 /** The chart's legend for a file: the layers the hyetograph draws (data-layer marks them), in the method's words. */
 export function chartLegend(method: LossMethod): LegendEntry[] {
-  const lineKey = LINE_PARAM[method.kind];
-  const line = lineKey ? methodSpec(method.kind).params.find((p) => p.key === lineKey)?.label : undefined;
-  const part = LOSS_PARTS[method.kind]?.label;
+  const line = rateLine(method)?.param.label;
+  const part = lossPartOf(method)?.label;
   const capacity = CAPACITY_CURVES[method.kind]?.label;
   return [
     { selector: '[data-layer="rain"]', label: 'Rainfall excess', kind: 'fill' },

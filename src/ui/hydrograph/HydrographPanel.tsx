@@ -17,7 +17,7 @@ import {
 } from '../../store/hydrograph-edits';
 import { formatValue } from '../format';
 import { dischargeText } from '../observed/discharge';
-import { hoursMinutes } from './hours-minutes';
+import { hoursMinutes } from '../results/hours-minutes';
 import { TransformFields } from './TransformFields';
 import './hydrograph.css';
 

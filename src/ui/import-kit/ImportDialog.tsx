@@ -1,6 +1,6 @@
 import { useDeferredValue, useId, useMemo, useRef, useState, type ComponentType, type ReactNode } from 'react';
 import type { ImportProblem, ReaderContext, ReaderName, SeriesSettings, TextRow } from '../../io';
-import { Modal } from '../storm-input/Modal';
+import { Modal } from '../layout/Modal';
 import { HeldText, isLongText } from './HeldText';
 import { OpenFileButton } from './OpenFileButton';
 import { ReadProgress } from './ReadProgress';

@@ -1,7 +1,7 @@
 import { useRef, type ReactNode } from 'react';
 
 /** What a text import opens: spreadsheet exports and plain text. */
-export const TEXT_FILE_TYPES = '.csv,.txt,.tsv,.dat,text/csv,text/plain';
+const TEXT_FILE_TYPES = '.csv,.txt,.tsv,.dat,text/csv,text/plain';
 
 export interface OpenFileButtonProps {
   /** The button's text, e.g. "Open rainfall file…". */

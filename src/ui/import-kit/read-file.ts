@@ -10,7 +10,7 @@ export type FileText =
   | { readonly ok: false; readonly message: string };
 
 /** Larger files are refused before reading: a rainfall record of a million lines is about 30 MB. */
-export const MAX_FILE_BYTES = 50 * 1024 * 1024;
+const MAX_FILE_BYTES = 50 * 1024 * 1024;
 
 /** The file's text, through FileReader where Blob.text is missing. Rejects when the file cannot be read. */
 export async function readAsText(file: Blob): Promise<string> {

@@ -1,6 +1,6 @@
 import { useEffect, useRef, type KeyboardEvent, type PointerEvent } from 'react';
 import { useActions } from '../../store';
-import { frameThrottle, type FrameThrottle } from '../chart/frame-throttle';
+import { frameThrottle, type FrameThrottle } from './frame-throttle';
 
 export interface DragHandleOptions {
   /** The axis the handle moves along; the pointer is measured from the SVG's left (x) or top (y), px. */

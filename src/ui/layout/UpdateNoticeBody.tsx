@@ -1,7 +1,7 @@
 import { useSyncExternalStore } from 'react';
 import type { UpdateChannel } from '../../offline/updates';
 import { useWorkbench } from '../../store';
-import { useLinkState, useServices } from '../share/services';
+import { useLinkState, useServices } from '../services/services';
 
 /** Why a reload now would lose something on screen, in words, or null when everything is saved. */
 function useUnsavedWork(): string | null {

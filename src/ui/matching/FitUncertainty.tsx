@@ -6,7 +6,7 @@ import { withObservedUncertainty } from '../../store/hydrograph-edits';
 import { NumberField } from '../fields/NumberField';
 import { formatValue } from '../format';
 import { displayUnit, paramToDisplay, paramUnitText, toDisplay, unitText } from '../units';
-import { labelInSentence, paramAmount } from './fit-words';
+import { labelInSentence, paramAmount } from '../results/fit-words';
 import './fit-uncertainty.css';
 
 const W = 300;

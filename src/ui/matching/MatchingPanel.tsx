@@ -15,7 +15,7 @@ import { loadHydrographSide, useActions, useDerived, useScenario } from '../../s
 import { NumberField } from '../fields/NumberField';
 import { formatValue } from '../format';
 import { VOLUME_CHOICES, displayUnit, fromDisplay, toDisplay, unitText } from '../units';
-import { labelInSentence, paramAmount } from './fit-words';
+import { labelInSentence, paramAmount } from '../results/fit-words';
 import { lazyPart } from '../layout/LazyPart';
 
 // How sure the fit is: its interval and calibration chart load on first use (not part of the first screen).

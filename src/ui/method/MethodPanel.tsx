@@ -6,6 +6,9 @@ import {
   methodSpec,
   paramApplies,
   validateMethod,
+  methodValue,
+  withMethodValue,
+  withSpec,
   type ChoiceParam,
   type LossMethod,
   type MethodSpec,
@@ -19,12 +22,10 @@ import { lazyPart } from '../layout/LazyPart';
 // Green–Ampt's soil texture values load when that method is chosen, not with the first screen.
 const SoilPresets = lazyPart('soil texture values', () => import('./SoilPresets').then((m) => m.SoilPresets));
 
-const valueOf = (method: LossMethod, key: string): unknown => (method as unknown as Record<string, unknown>)[key];
-
 /** The core's own message for a candidate parameter value, or null when the core accepts it. */
 function coreProblem(method: LossMethod, key: string, value: number | boolean | string): string | null {
   try {
-    validateMethod({ ...method, [key]: value } as LossMethod);
+    validateMethod(withMethodValue(method, key, value));
     return null;
   } catch (error) {
     if (isInputError(error)) return error.message;
@@ -38,7 +39,7 @@ function ParamField({ param, method, stored }: { param: NumericParam; method: Lo
   const matched = useDerived((d, s) => d.isMatched(s));
   const actions = useActions();
   const locked = matched && observed?.parameter === param.key;
-  const value = valueOf(method, param.key);
+  const value = methodValue(method, param.key);
   return (
     <NumberField
       id={`param-${param.key}`}
@@ -63,7 +64,7 @@ const MAX_RADIOS = 4;
 
 function ChoiceField({ choice, method }: { choice: ChoiceParam; method: LossMethod }) {
   const actions = useActions();
-  const value = valueOf(method, choice.key);
+  const value = methodValue(method, choice.key);
   const id = `choice-${choice.key}`;
   const index = choice.choices.findIndex((c) => c.value === value);
   if (choice.display === 'switch') {
@@ -185,7 +186,7 @@ export function MethodPanel() {
       </div>
       <p className="method__dry" id="method-dry-bars">
         <span className="method__dry-label">In dry bars: </span>
-        {spec.dryBars(method as never)}
+        {withSpec(method, (spec, m) => spec.dryBars(m))}
       </p>
       <div className="method__foot">
         <button type="button" onClick={actions.resetMethodDefaults}>

@@ -5,6 +5,5 @@ export {
   formatForLanguage,
   startNumberFormat,
   useNumberFormat,
-  type PreferenceStorage,
 } from './preference';
 export { NumberFormatPicker } from './NumberFormatPicker';

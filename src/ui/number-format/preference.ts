@@ -54,7 +54,7 @@ export function formatForLanguage(language: string | undefined): NumberFormat {
 /** Sets the format from the saved choice, or from the language when none is saved. Call once at start. */
 export function startNumberFormat(options: { storage: PreferenceStorage | null; language?: string | undefined }): void {
   storage = options.storage;
-  let saved: string | null = null;
+  let saved: string | null;
   try {
     saved = storage?.getItem(NUMBER_FORMAT_KEY) ?? null;
   } catch {

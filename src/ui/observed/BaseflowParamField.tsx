@@ -22,7 +22,7 @@ export interface BaseflowParamFieldProps {
 const shown = (param: BaseflowParam, v: number): number => (param.unit === 'sample' ? v + 1 : v);
 const stored = (param: BaseflowParam, v: number): number => (param.unit === 'sample' ? v - 1 : v);
 
-export function paramUnitWords(param: BaseflowParam): string {
+function paramUnitWords(param: BaseflowParam): string {
   return param.unit === 'h' ? 'h' : param.unit === 'sample' ? 'sample no.' : param.unit === 'samples' ? 'samples' : '';
 }
 

@@ -1,7 +1,7 @@
 import { useMemo } from 'react';
 import type { RunoffHydrograph, UnitSystem } from '../../core';
 import { useDerived, useScenario, type ComputedHydrograph, type TimeSeries } from '../../store';
-import { hoursMinutes } from '../hydrograph/hours-minutes';
+import { hoursMinutes } from '../results/hours-minutes';
 import { dischargeText } from './discharge';
 import type { HydrographFrame } from './hydrograph-frame';
 import { seriesPath } from './hydrograph-paths';

@@ -48,7 +48,7 @@ function SeparationLayer({
       fill: directRunoffPath(flow.timesH, flow.dischargeM3s, result.baseflowM3s, w, frame.offsetH, frame.x, frame.y),
       line: baseflowPath(flow.timesH, result.baseflowM3s, w, frame.offsetH, frame.x, frame.y),
     };
-  }, [flow.timesH, flow.dischargeM3s, frame, result]);
+  }, [flow, frame, result]);
   const rise = result.riseIndex;
   const peak = result.peakIndex;
   return (

@@ -7,7 +7,7 @@ type OffsetUnit = 'h' | 'min';
 const PER_HOUR: Record<OffsetUnit, number> = { h: 1, min: 60 };
 
 /** "1 h 30 min before", "45 min after", "at" the storm start. */
-export function offsetWords(offsetH: number): string {
+function offsetWords(offsetH: number): string {
   if (offsetH === 0) return 'at the storm start';
   const minutes = Math.abs(offsetH) * 60;
   const h = Math.floor(minutes / 60 + 1e-9);

@@ -3,10 +3,10 @@ import {
   BASEFLOW_METHODS,
   UNIT_LABELS,
   baseflowMethodSpec,
+  baseflowNumber,
   convertArea,
   isBaseflowKind,
   recessionDays,
-  type BaseflowMethod,
   type BaseflowMethodSpec,
   type BaseflowParam,
   type UnitSystem,
@@ -31,11 +31,6 @@ import { clockAt, clockParts, hoursText, momentText, recordClock, type RecordClo
 import './observed.css';
 import { labelInSentence } from '../../scenario/label-text';
 
-const valueOf = (method: BaseflowMethod, key: string): number | undefined => {
-  const v = (method as unknown as Record<string, unknown>)[key];
-  return typeof v === 'number' ? v : undefined;
-};
-
 /** The field's hint: the table's help, or for a sample number the table's words in the way the field counts. */
 function hintOf(param: BaseflowParam): string {
   const auto = param.optional ? ` Empty: ${param.optional.auto}.` : '';
@@ -55,7 +50,7 @@ function ParamFields({ flow, spec }: { flow: Streamflow; spec: BaseflowMethodSpe
   return (
     <div className="separation__params" key={method.kind}>
       {spec.params.map((param) => {
-        const value = valueOf(method, param.key);
+        const value = baseflowNumber(method, param.key);
         let note: string | null = null;
         if (param.unit === 'sample' && value !== undefined && value < flow.timesH.length) {
           note = `Sample ${value + 1} is at ${momentText(clock, flow.timesH[value] as number)}, ${dischargeText(flow.dischargeM3s[value] as number, units)}.`;
@@ -273,7 +268,7 @@ export function SeparationPanel() {
             </p>
           ) : null}
           {flow.baseflow.kind === 'straight-line' ? (
-            <RecessionEnd automatic={valueOf(flow.baseflow, 'endTimeH') === undefined} />
+            <RecessionEnd automatic={baseflowNumber(flow.baseflow, 'endTimeH') === undefined} />
           ) : null}
           <div className="method__foot">
             <button type="button" onClick={() => actions.edit('Use default baseflow values', withBaseflowDefaults)}>

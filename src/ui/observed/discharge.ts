@@ -5,7 +5,7 @@ import { formatValue } from '../format';
  * Discharge at the screen's edge: the store holds m³/s, the screen shows
  * m³/s (SI) or ft³/s (US). Factors come from the core's units module.
  */
-export function dischargeUnit(system: UnitSystem): DischargeUnit {
+function dischargeUnit(system: UnitSystem): DischargeUnit {
   return DISPLAY_UNITS[system].discharge;
 }
 

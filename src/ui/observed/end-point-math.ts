@@ -20,7 +20,7 @@ export interface EndBounds {
  * leaves the next sample as the earliest end, since the core needs the end
  * later than the start of rise.
  */
-export function endPointBounds(timesH: ArrayLike<number>, riseIndex: number, peakIndex: number): EndBounds {
+function endPointBounds(timesH: ArrayLike<number>, riseIndex: number, peakIndex: number): EndBounds {
   const n = timesH.length;
   const maxH = timesH[n - 1] as number;
   const from = peakIndex > riseIndex ? peakIndex : Math.min(riseIndex + 1, n - 1);

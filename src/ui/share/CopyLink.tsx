@@ -1,7 +1,7 @@
 import { useEffect, useRef } from 'react';
 import { useWorkbenchStore } from '../../store';
-import { ProblemList, useBarMessage } from './bar-message';
-import { useServices } from './services';
+import { ProblemList, useBarMessage } from '../services/bar-message';
+import { useServices } from '../services/services';
 import { LongLinkOffer, PRACTICAL_LINK_CHARS } from '../events/LongLinkOffer';
 import { formatCount } from '../format';
 

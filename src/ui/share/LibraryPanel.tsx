@@ -6,8 +6,7 @@ import { useActions, useWorkbenchStore } from '../../store';
 import { listSetAside, type SetAsideCopy } from '../../store/set-aside';
 import { ListProblems } from './ListProblems';
 import { SetAsideCopies } from './SetAsideCopies';
-import { LIBRARY_PANEL_ID } from './ScenarioBar';
-import { useServices } from './services';
+import { useServices } from '../services/services';
 import { formatCount } from '../format';
 import './share.css';
 
@@ -68,7 +67,8 @@ function RenameForm({ entry, onDone }: { entry: LibraryEntry; onDone: (name: str
  * library on localStorage): save the current one, open, rename, duplicate
  * and delete, with Undo for a deletion.
  */
-export function LibraryPanel() {
+/** `id` names the region for the button that opens it (ScenarioBar's aria-controls). */
+export function LibraryPanel({ id }: { id: string }) {
   const { link, storage, saveFile, now } = useServices();
   // The saved list lives in this panel's code, loaded when the panel first opens (not with the first screen).
   const library = useMemo(() => (storage ? createScenarioLibrary(storage, { now }) : null), [storage, now]);
@@ -114,7 +114,7 @@ export function LibraryPanel() {
 
   if (!library) {
     return (
-      <section className="panel library" id={LIBRARY_PANEL_ID} aria-labelledby="library-title">
+      <section className="panel library" id={id} aria-labelledby="library-title">
         <h2 id="library-title">Saved scenarios</h2>
         <p className="library__intro">This browser does not allow saving here. Use “Save as file” to keep scenarios.</p>
       </section>
@@ -124,7 +124,7 @@ export function LibraryPanel() {
   const current = currentId === null ? undefined : listing.entries.find((e) => e.id === currentId);
 
   return (
-    <section className="panel library" id={LIBRARY_PANEL_ID} aria-labelledby="library-title">
+    <section className="panel library" id={id} aria-labelledby="library-title">
       <div className="library__head">
         <h2 id="library-title">Saved scenarios</h2>
         <p className="library__intro">Kept in this browser only; save a file to move a scenario to another computer.</p>

@@ -1,5 +1,5 @@
-import { ProblemList } from './bar-message';
-import { useLinkState, useServices } from './services';
+import { ProblemList } from '../services/bar-message';
+import { useLinkState, useServices } from '../services/services';
 import './share.css';
 
 const quoted = (name: string): string => `“${name}”`;

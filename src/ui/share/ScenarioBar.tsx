@@ -1,17 +1,19 @@
 import { useState, type ReactNode } from 'react';
 import { PinButton } from '../compare/PinButton';
 import { ExportButtons } from '../export/ExportButtons';
-import { BarMessageProvider, BarMessageView, type BarMessage } from './bar-message';
+import { BarMessageProvider, BarMessageView, type BarMessage } from '../services/bar-message';
 import { CopyLink } from './CopyLink';
 import { lazyPart } from '../layout/LazyPart';
 import { ScenarioFile } from './ScenarioFile';
 import './share.css';
 
 /** The saved list's region, which the "Saved scenarios" button opens. */
-export const LIBRARY_PANEL_ID = 'saved-scenarios';
+const LIBRARY_PANEL_ID = 'saved-scenarios';
 
 // The saved list loads when first opened (it is not part of the first screen).
-const LibraryPanel = lazyPart('saved scenarios', () => import('./LibraryPanel').then((m) => m.LibraryPanel));
+const LibraryPanel = lazyPart<{ id: string }>('saved scenarios', () =>
+  import('./LibraryPanel').then((m) => m.LibraryPanel),
+);
 
 function Group({ id, label, children }: { id: string; label: string; children: ReactNode }) {
   return (
@@ -59,7 +61,7 @@ export function ScenarioBar() {
           </Group>
         </div>
         <BarMessageView message={message} onDismiss={() => setMessage(null)} />
-        {libraryOpen ? <LibraryPanel /> : null}
+        {libraryOpen ? <LibraryPanel id={LIBRARY_PANEL_ID} /> : null}
       </section>
     </BarMessageProvider>
   );

@@ -4,8 +4,8 @@ import { useActions, useWorkbenchStore } from '../../store';
 // Straight from the modules, not the import kit's index, so the import dialogs' code stays out of the first screen.
 import { OpenFileButton } from '../import-kit/OpenFileButton';
 import { readAsText } from '../import-kit/read-file';
-import { ProblemList, useBarMessage } from './bar-message';
-import { useServices } from './services';
+import { ProblemList, useBarMessage } from '../services/bar-message';
+import { useServices } from '../services/services';
 import { formatValue } from '../format';
 
 const megabytes = (bytes: number): string => `${formatValue(bytes / (1024 * 1024))} MB`;

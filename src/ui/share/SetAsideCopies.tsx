@@ -14,7 +14,7 @@ const WHAT: Readonly<Record<SetAsideKind, string>> = {
 const stampFormat = new Intl.DateTimeFormat(undefined, { dateStyle: 'medium', timeStyle: 'short' });
 
 /** "Saved scenario set aside 1 Mar 2026, 10:00" (the key when it carries no time). */
-export function setAsideLabel(copy: SetAsideCopy): string {
+function setAsideLabel(copy: SetAsideCopy): string {
   const t = copy.setAsideAt === null ? Number.NaN : Date.parse(copy.setAsideAt);
   return Number.isNaN(t)
     ? `${WHAT[copy.kind]} set aside (${copy.key})`

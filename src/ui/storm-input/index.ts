@@ -1,7 +1,7 @@
 // Getting rainfall in: paste or open text (with a preview to correct), draw on
 // the chart, edit the bar table, and whole-storm tools. Mounted by App.tsx.
 
-export { StormInputProvider, useStormInput } from './context';
+export { StormInputProvider } from './context';
 export { RainfallTools } from './RainfallTools';
 export { StormPanels } from './StormPanels';
 export { DrawableChart } from './draw/DrawableChart';

@@ -1,7 +1,8 @@
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
 import { separateBaseflow } from '../../../src/core/baseflow';
-import { fineVolumeAbove, hydrographs, inputErrorOf, triangleOver } from './helpers';
+import { fineVolumeAbove, hydrographs, triangleOver } from '../../helpers/hydrographs';
+import { inputErrorOf } from '../../helpers/input-error';
 import { expectClose } from '../../helpers/tolerance';
 
 const constant = { kind: 'constant' } as const;

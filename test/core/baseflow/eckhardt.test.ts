@@ -2,7 +2,8 @@ import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
 import { separateBaseflow } from '../../../src/core/baseflow';
 import { separateEckhardt } from '../../../src/core/baseflow/eckhardt';
-import { hydrographs, inputErrorOf } from './helpers';
+import { hydrographs } from '../../helpers/hydrographs';
+import { inputErrorOf } from '../../helpers/input-error';
 import { expectClose } from '../../helpers/tolerance';
 
 const eckhardt = (a: number, bfiMax: number, stepH?: number) =>

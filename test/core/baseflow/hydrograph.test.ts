@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import { dischargeAtH, validateHydrograph } from '../../../src/core/baseflow/hydrograph';
-import { inputErrorOf } from './helpers';
+import { inputErrorOf } from '../../helpers/input-error';
 
 describe('validateHydrograph', () => {
   it('accepts a record with irregular, strictly increasing times and zero flows', () => {

@@ -2,7 +2,8 @@ import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
 import { separateBaseflow } from '../../../src/core/baseflow';
 import { separateLyneHollick } from '../../../src/core/baseflow/lyne-hollick';
-import { hydrographs, inputErrorOf } from './helpers';
+import { hydrographs } from '../../helpers/hydrographs';
+import { inputErrorOf } from '../../helpers/input-error';
 import { expectClose } from '../../helpers/tolerance';
 
 const lyneHollick = (alpha: number, passes: number, stepH?: number) =>

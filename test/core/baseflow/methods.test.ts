@@ -11,7 +11,7 @@ import {
   type BaseflowMethod,
   type BaseflowParam,
 } from '../../../src/core/baseflow';
-import { inputErrorOf } from './helpers';
+import { inputErrorOf } from '../../helpers/input-error';
 
 const record = {
   timesH: [0, 6, 12, 18, 24, 36, 48, 72, 96, 120, 144, 168],

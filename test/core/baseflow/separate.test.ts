@@ -2,7 +2,8 @@ import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
 import * as core from '../../../src/core';
 import { separateBaseflow, type BaseflowMethod } from '../../../src/core/baseflow';
-import { hydrographs, inputErrorOf, triangleOver } from './helpers';
+import { hydrographs, triangleOver } from '../../helpers/hydrographs';
+import { inputErrorOf } from '../../helpers/input-error';
 import { expectClose } from '../../helpers/tolerance';
 
 const methods = fc.oneof(

@@ -2,7 +2,8 @@ import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
 import { AREA_UNITS } from '../../../src/core/units';
 import { recessionDays, separateBaseflow } from '../../../src/core/baseflow';
-import { fineVolumeAbove, hydrographs, inputErrorOf, triangleOver } from './helpers';
+import { fineVolumeAbove, hydrographs, triangleOver } from '../../helpers/hydrographs';
+import { inputErrorOf } from '../../helpers/input-error';
 import { expectClose } from '../../helpers/tolerance';
 
 const MI2 = AREA_UNITS.mi2;

@@ -100,8 +100,8 @@ describe('a capacity above the chart’s top is marked, never clipped silently',
     expect(CAPACITY_CURVES.horton?.draw(frame, storm, method)?.aboveTopMmH).toBeNull();
   });
   it('on the workbench the chart says so under the plot and marks the top edge', async () => {
-    const { renderWorkbench } = await import('../render');
-    const { FOUR_BARS } = await import('../store/fixtures');
+    const { renderWorkbench } = await import('../../helpers/render');
+    const { FOUR_BARS } = await import('../../helpers/scenario-fixtures');
     const { screen } = await import('@testing-library/react');
     renderWorkbench({ ...FOUR_BARS, method: { kind: 'horton', f0MmH: 80, fcMmH: 3, kPerH: 1.5, ponding: false } });
     expect(

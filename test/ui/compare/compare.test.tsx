@@ -3,11 +3,11 @@ import { act, cleanup, screen, within } from '@testing-library/react';
 import { describe, expect, it } from 'vitest';
 import { computeLosses, runoffVolumeM3 } from '../../../src/core';
 import type { Scenario } from '../../../src/scenario/types';
-import { PINS_KEY } from '../../../src/ui/compare';
+import { PINS_KEY } from '../../../src/ui/services';
 import { formatPercent, formatValue } from '../../../src/ui/format';
-import { FOUR_BARS, memoryStorage } from '../store/fixtures';
-import { lazyPartsLoaded } from '../render';
-import { SHARED, renderTools } from '../share/render-tools';
+import { FOUR_BARS, memoryStorage } from '../../helpers/scenario-fixtures';
+import { lazyPartsLoaded } from '../../helpers/render';
+import { SHARED, renderTools } from '../../helpers/render-tools';
 
 const MESSAGE = 'Scenario tools message';
 

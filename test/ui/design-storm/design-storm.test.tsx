@@ -3,9 +3,9 @@ import { screen, within } from '@testing-library/react';
 import { describe, expect, it } from 'vitest';
 import { alternatingBlockStorm, computeLosses, uniformStorm } from '../../../src/core';
 import { formatValue } from '../../../src/ui/format';
-import { lazyPartsLoaded, renderWorkbench } from '../render';
-import { FOUR_EVENTS } from '../events/fixtures';
-import { FOUR_BARS } from '../store/fixtures';
+import { lazyPartsLoaded, renderWorkbench } from '../../helpers/render';
+import { FOUR_EVENTS } from '../../helpers/event-fixtures';
+import { FOUR_BARS } from '../../helpers/scenario-fixtures';
 
 async function openDesign(scenario = FOUR_EVENTS) {
   const view = renderWorkbench(scenario);

@@ -1,8 +1,8 @@
 // @vitest-environment jsdom
 import { screen, within } from '@testing-library/react';
 import { describe, expect, it } from 'vitest';
-import { lazyPartsLoaded, renderWorkbench } from '../render';
-import { FOUR_BARS } from '../store/fixtures';
+import { lazyPartsLoaded, renderWorkbench } from '../../helpers/render';
+import { FOUR_BARS } from '../../helpers/scenario-fixtures';
 
 const openEvents = async (user: ReturnType<typeof renderWorkbench>['user']) => {
   await user.click(screen.getByRole('tab', { name: 'Event set' }));

@@ -2,8 +2,8 @@
 import { screen, within } from '@testing-library/react';
 import { describe, expect, it } from 'vitest';
 import { calibrate } from '../../../src/core';
-import { lazyPartsLoaded, renderWorkbench } from '../render';
-import { FOUR_EVENTS, HAND_FITS } from './fixtures';
+import { lazyPartsLoaded, renderWorkbench } from '../../helpers/render';
+import { FOUR_EVENTS, HAND_FITS } from '../../helpers/event-fixtures';
 
 async function openFits() {
   const view = renderWorkbench(FOUR_EVENTS);

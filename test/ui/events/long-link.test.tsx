@@ -6,9 +6,9 @@ import { makeShareLink } from '../../../src/scenario';
 import { createWorkbenchStore } from '../../../src/store';
 import { App } from '../../../src/ui/App';
 import { PRACTICAL_LINK_CHARS } from '../../../src/ui/events/LongLinkOffer';
-import { browserServices } from '../../../src/ui/share';
-import { inventedEvents, withSet } from '../../scenario/event-set-fixtures';
-import { memoryStorage } from '../store/fixtures';
+import { browserServices } from '../../../src/ui/services';
+import { inventedEvents, withSet } from '../../helpers/event-set-fixtures';
+import { memoryStorage } from '../../helpers/scenario-fixtures';
 
 function renderWith(scenario: ReturnType<typeof withSet>) {
   const writeText = vi.fn(async (_text: string) => {});

@@ -5,7 +5,7 @@ import { computeLosses } from '../../../src/core';
 import type { Scenario } from '../../../src/scenario/types';
 import { barTableCsv } from '../../../src/ui/export';
 import { csvField, csvNote, csvRow, neutralise } from '../../../src/ui/export/csv';
-import { FOUR_BARS } from '../store/fixtures';
+import { FOUR_BARS } from '../../helpers/scenario-fixtures';
 
 // CSV injection: a name such as `x,=1+1` was written into an unquoted note
 // line, so a spreadsheet opened a live formula cell, and a stray quote could

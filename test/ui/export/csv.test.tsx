@@ -6,9 +6,9 @@ import { barEdgesH, computeLosses, convertDepth, runoffVolumeM3 } from '../../..
 import { CAUTION_TEXT } from '../../../src/scenario';
 import type { Scenario } from '../../../src/scenario/types';
 import { barTableCsv } from '../../../src/ui/export';
-import { FOUR_BARS } from '../store/fixtures';
-import { LAZY_LOAD_MS } from '../render';
-import { SHARED, renderTools } from '../share/render-tools';
+import { FOUR_BARS } from '../../helpers/scenario-fixtures';
+import { LAZY_LOAD_MS } from '../../helpers/render';
+import { SHARED, renderTools } from '../../helpers/render-tools';
 
 const MESSAGE = 'Scenario tools message';
 
@@ -16,7 +16,7 @@ function bytesOf(blob: Blob): Promise<Uint8Array> {
   return new Promise((resolve, reject) => {
     const reader = new FileReader();
     reader.onload = () => resolve(new Uint8Array(reader.result as ArrayBuffer));
-    reader.onerror = () => reject(reader.error);
+    reader.onerror = () => reject(reader.error ?? new Error('the blob could not be read'));
     reader.readAsArrayBuffer(blob);
   });
 }

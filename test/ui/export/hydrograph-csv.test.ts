@@ -5,7 +5,7 @@ import { runoffHydrograph } from '../../../src/core';
 import { CAUTION_TEXT } from '../../../src/scenario';
 import type { Scenario } from '../../../src/scenario/types';
 import { hydrographCsv } from '../../../src/ui/export/hydrograph-csv';
-import { FOUR_BARS } from '../store/fixtures';
+import { FOUR_BARS } from '../../helpers/scenario-fixtures';
 
 const TRANSFORM = { kind: 'triangular', lagH: 2.5 } as const;
 const SCENARIO: Scenario = {

@@ -5,9 +5,9 @@ import { computeLosses, runoffVolumeM3 } from '../../../src/core';
 import { CAUTION_TEXT } from '../../../src/scenario';
 import { loadReport } from '../../../src/ui/export';
 import { formatPercent, formatValue } from '../../../src/ui/format';
-import { FOUR_BARS } from '../store/fixtures';
-import { LAZY_LOAD_MS } from '../render';
-import { SHARED, renderTools } from '../share/render-tools';
+import { FOUR_BARS } from '../../helpers/scenario-fixtures';
+import { LAZY_LOAD_MS } from '../../helpers/render';
+import { SHARED, renderTools } from '../../helpers/render-tools';
 
 const mm = (v: number): string => `${formatValue(v)} mm`;
 const cell = (table: HTMLElement, row: string): string =>

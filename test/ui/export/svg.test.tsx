@@ -4,9 +4,9 @@ import { describe, expect, it } from 'vitest';
 import { CAUTION_TEXT } from '../../../src/scenario';
 import type { Scenario } from '../../../src/scenario/types';
 import { wrapText } from '../../../src/ui/export';
-import { FOUR_BARS } from '../store/fixtures';
-import { LAZY_LOAD_MS } from '../render';
-import { SHARED, renderTools, savedText } from '../share/render-tools';
+import { FOUR_BARS } from '../../helpers/scenario-fixtures';
+import { LAZY_LOAD_MS } from '../../helpers/render';
+import { SHARED, renderTools, savedText } from '../../helpers/render-tools';
 
 const MESSAGE = 'Scenario tools message';
 const SVG_NS = 'http://www.w3.org/2000/svg';

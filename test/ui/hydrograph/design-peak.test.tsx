@@ -3,8 +3,8 @@
 import { screen, within } from '@testing-library/react';
 import { describe, expect, it } from 'vitest';
 import type { Scenario } from '../../../src/scenario/types';
-import { lazyPartsLoaded, renderWorkbench } from '../render';
-import { FOUR_BARS } from '../store/fixtures';
+import { lazyPartsLoaded, renderWorkbench } from '../../helpers/render';
+import { FOUR_BARS } from '../../helpers/scenario-fixtures';
 
 async function retype(user: ReturnType<typeof renderWorkbench>['user'], name: string, text: string) {
   const field = screen.getByRole('textbox', { name });

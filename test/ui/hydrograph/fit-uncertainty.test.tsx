@@ -4,8 +4,8 @@
 import { screen } from '@testing-library/react';
 import { describe, expect, it } from 'vitest';
 import type { Scenario } from '../../../src/scenario/types';
-import { lazyPartsLoaded, renderWorkbench } from '../render';
-import { FOUR_BARS } from '../store/fixtures';
+import { lazyPartsLoaded, renderWorkbench } from '../../helpers/render';
+import { FOUR_BARS } from '../../helpers/scenario-fixtures';
 
 /** FOUR_BARS (2, 6, 10, 2 mm in half hours: 4, 12, 20, 4 mm/h on 1 km²) with 10 mm observed. */
 const OBSERVED: Scenario = { ...FOUR_BARS, observed: { as: 'depth', value: 10, parameter: 'rateMmH', locked: false } };

@@ -6,8 +6,8 @@ import { fireEvent, screen, within } from '@testing-library/react';
 import { describe, expect, it } from 'vitest';
 import { TRANSFORMS, TRANSFORM_KINDS } from '../../../src/core';
 import type { Scenario } from '../../../src/scenario/types';
-import { LAZY_LOAD_MS, lazyPartsLoaded, renderWorkbench } from '../render';
-import { FOUR_BARS } from '../store/fixtures';
+import { LAZY_LOAD_MS, lazyPartsLoaded, renderWorkbench } from '../../helpers/render';
+import { FOUR_BARS } from '../../helpers/scenario-fixtures';
 
 /**
  * One bar of 1 h and 12 mm under φ = 2 mm/h: 10 mm of excess over 1 km²

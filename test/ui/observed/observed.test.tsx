@@ -17,9 +17,9 @@ import { sharedTimeSpanH } from '../../../src/ui/chart/time-span';
 import { formatForField as formatField, formatValue } from '../../../src/ui/format';
 import { HYDROGRAPH_HEIGHT } from '../../../src/ui/observed';
 import { hydrographFrame } from '../../../src/ui/observed/hydrograph-frame';
-import { LAZY_LOAD_MS, lazyPartsLoaded, renderWorkbench } from '../render';
-import { FOUR_BARS } from '../store/fixtures';
-import { TRIANGLE, TRIANGLE_TEXT, WITH_TRIANGLE } from './fixtures';
+import { LAZY_LOAD_MS, lazyPartsLoaded, renderWorkbench } from '../../helpers/render';
+import { FOUR_BARS } from '../../helpers/scenario-fixtures';
+import { TRIANGLE, TRIANGLE_TEXT, WITH_TRIANGLE } from '../../helpers/flow-fixtures';
 
 const AREA_M2 = FOUR_BARS.catchment.areaM2;
 const flowOf = (s: Scenario) => {

@@ -2,7 +2,7 @@ import { describe, expect, it } from 'vitest';
 import { chartFrame } from '../../../src/ui/chart/frame';
 import { sharedTimeSpanH } from '../../../src/ui/chart/time-span';
 import { hydrographFrame } from '../../../src/ui/observed/hydrograph-frame';
-import { FOUR_BARS } from '../store/fixtures';
+import { FOUR_BARS } from '../../helpers/scenario-fixtures';
 
 const storm = FOUR_BARS.storm; // 2 h of rain
 

@@ -1,8 +1,8 @@
 // @vitest-environment jsdom
 import { screen, waitFor, within } from '@testing-library/react';
 import { describe, expect, it } from 'vitest';
-import { lazyPartsLoaded, LAZY_LOAD_MS, renderWorkbench } from '../render';
-import { FOUR_BARS } from '../store/fixtures';
+import { lazyPartsLoaded, LAZY_LOAD_MS, renderWorkbench } from '../../helpers/render';
+import { FOUR_BARS } from '../../helpers/scenario-fixtures';
 
 // An invented record (no real gauge): eleven bars of 60 min (the paste's step
 // for a column without times), 2, 0, 0, 0, 3, 1, 0, 0, 0, 0, 4 mm.

@@ -4,8 +4,8 @@ import { describe, expect, it } from 'vitest';
 import { MAX_LINK_CHARS, decodeScenarioLink } from '../../../src/scenario';
 import { STORAGE_KEY } from '../../../src/store';
 import { LONG_LINK_CHARS, linkLengthText } from '../../../src/ui/share';
-import { memoryStorage } from '../store/fixtures';
-import { PAGE, SHARED, renderTools } from './render-tools';
+import { memoryStorage } from '../../helpers/scenario-fixtures';
+import { PAGE, SHARED, renderTools } from '../../helpers/render-tools';
 
 const MESSAGE = 'Scenario tools message';
 

@@ -2,9 +2,9 @@
 import { screen, within } from '@testing-library/react';
 import { describe, expect, it } from 'vitest';
 import { LIBRARY_KEY, createScenarioLibrary } from '../../../src/scenario';
-import { FOUR_BARS, memoryStorage } from '../store/fixtures';
-import { lazyPartsLoaded } from '../render';
-import { NOW, SHARED, renderTools } from './render-tools';
+import { FOUR_BARS, memoryStorage } from '../../helpers/scenario-fixtures';
+import { lazyPartsLoaded } from '../../helpers/render';
+import { NOW, SHARED, renderTools } from '../../helpers/render-tools';
 
 const names = (storage: ReturnType<typeof memoryStorage>) =>
   createScenarioLibrary(storage)

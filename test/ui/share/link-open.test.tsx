@@ -4,8 +4,8 @@ import { describe, expect, it } from 'vitest';
 import { LIBRARY_KEY, MAX_LINK_CHARS, createScenarioLibrary, encodeScenarioLink } from '../../../src/scenario';
 import type { Scenario } from '../../../src/scenario/types';
 import { STORAGE_KEY } from '../../../src/store';
-import { FOUR_BARS, memoryStorage } from '../store/fixtures';
-import { SHARED, renderTools } from './render-tools';
+import { FOUR_BARS, memoryStorage } from '../../helpers/scenario-fixtures';
+import { SHARED, renderTools } from '../../helpers/render-tools';
 
 /** A browser that has been used: its own scenario saved. */
 function usedBrowser() {

@@ -3,8 +3,8 @@ import { screen, within } from '@testing-library/react';
 import { describe, expect, it } from 'vitest';
 import { CAUTION_TEXT, scenarioFromFileText, scenarioToFileText } from '../../../src/scenario';
 import { STORAGE_KEY } from '../../../src/store';
-import { FOUR_BARS, memoryStorage } from '../store/fixtures';
-import { SHARED, renderTools, savedText } from './render-tools';
+import { FOUR_BARS, memoryStorage } from '../../helpers/scenario-fixtures';
+import { SHARED, renderTools, savedText } from '../../helpers/render-tools';
 
 const MESSAGE = 'Scenario tools message';
 const jsonFile = (text: string, name = 'colleague.json') => new File([text], name, { type: 'application/json' });

@@ -3,9 +3,9 @@ import { screen, within } from '@testing-library/react';
 import { describe, expect, it } from 'vitest';
 import { LIBRARY_FORMAT_TAG, LIBRARY_KEY, LIBRARY_VERSION, createScenarioLibrary } from '../../../src/scenario';
 import { SET_ASIDE_PREFIX, STORAGE_KEY } from '../../../src/store';
-import { FOUR_BARS, memoryStorage } from '../store/fixtures';
-import { SHARED, renderTools, savedText } from './render-tools';
-import { lazyPartsLoaded } from '../render';
+import { FOUR_BARS, memoryStorage } from '../../helpers/scenario-fixtures';
+import { SHARED, renderTools, savedText } from '../../helpers/render-tools';
+import { lazyPartsLoaded } from '../../helpers/render';
 
 // Saved data Raincut set aside (damaged, past the limits this version reads,
 // or the scenario that stopped the screen) is listed under Saved scenarios,

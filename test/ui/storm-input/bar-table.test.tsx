@@ -3,8 +3,8 @@ import { screen, within } from '@testing-library/react';
 import { describe, expect, it } from 'vitest';
 import type { Scenario } from '../../../src/scenario/types';
 import { formatValue } from '../../../src/ui/format';
-import { coreTotals, lazyPartsLoaded, mmText, renderWorkbench } from '../render';
-import { FOUR_BARS } from '../store/fixtures';
+import { coreTotals, lazyPartsLoaded, mmText, renderWorkbench } from '../../helpers/render';
+import { FOUR_BARS } from '../../helpers/scenario-fixtures';
 
 /** The workbench, once the bar table (loaded just after the first screen) is drawn. */
 async function renderTable(...args: Parameters<typeof renderWorkbench>) {

@@ -5,8 +5,8 @@ import type { Scenario } from '../../../src/scenario/types';
 import { chartFrame } from '../../../src/ui/chart/frame';
 import { chartHeightFor } from '../../../src/ui/chart/chart-height';
 import { expectAllClose } from '../../helpers/tolerance';
-import { lazyPartsLoaded, renderWorkbench } from '../render';
-import { FOUR_BARS } from '../store/fixtures';
+import { lazyPartsLoaded, renderWorkbench } from '../../helpers/render';
+import { FOUR_BARS } from '../../helpers/scenario-fixtures';
 
 /** The chart's height in this window (jsdom's 768 px tall one), as the page draws it. */
 const CHART_HEIGHT = chartHeightFor(window.innerHeight);

@@ -3,8 +3,8 @@
 // FOUR_BARS (invented) has 30-min bars. Expected values are worked by hand.
 import { screen, waitFor, within } from '@testing-library/react';
 import { describe, expect, it } from 'vitest';
-import { lazyPartsLoaded, renderWorkbench } from '../render';
-import { FOUR_BARS } from '../store/fixtures';
+import { lazyPartsLoaded, renderWorkbench } from '../../helpers/render';
+import { FOUR_BARS } from '../../helpers/scenario-fixtures';
 
 async function openPaste(user: ReturnType<typeof renderWorkbench>['user']) {
   await user.click(screen.getByRole('button', { name: 'Paste rainfall…' }));

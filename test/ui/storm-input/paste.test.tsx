@@ -2,8 +2,8 @@
 import { screen, waitFor, within } from '@testing-library/react';
 import { describe, expect, it } from 'vitest';
 import { applyRainImport, guessRainSettings } from '../../../src/io';
-import { coreTotals, LAZY_LOAD_MS, mmText, renderWorkbench } from '../render';
-import { FOUR_BARS } from '../store/fixtures';
+import { coreTotals, LAZY_LOAD_MS, mmText, renderWorkbench } from '../../helpers/render';
+import { FOUR_BARS } from '../../helpers/scenario-fixtures';
 
 // Invented gauge records for these tests (no real gauge or storm).
 const TEN_MINUTE = 'Time\tRain (mm)\n10:10\t0.4\n10:20\t1.6\n10:30\t3.2\n10:40\t5.0\n10:50\t2.2\n11:00\t0.6\n';

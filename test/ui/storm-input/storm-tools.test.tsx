@@ -3,8 +3,8 @@ import { screen, within } from '@testing-library/react';
 import { describe, expect, it } from 'vitest';
 import { totalDepthMm } from '../../../src/core';
 import { expectAllClose, expectClose } from '../../helpers/tolerance';
-import { lazyPartsLoaded, renderWorkbench } from '../render';
-import { FOUR_BARS } from '../store/fixtures';
+import { lazyPartsLoaded, renderWorkbench } from '../../helpers/render';
+import { FOUR_BARS } from '../../helpers/scenario-fixtures';
 
 async function openTools(user: ReturnType<typeof renderWorkbench>['user']) {
   const button = screen.getByRole('button', { name: 'Storm tools' });

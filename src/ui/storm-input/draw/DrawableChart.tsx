@@ -2,7 +2,7 @@ import { useEffect, useLayoutEffect, useRef, useState, type PointerEvent, type R
 import { useActions, useScenario } from '../../../store';
 import { barsPath } from '../../chart/bar-path';
 import { barTopsPx, chartFrame, type ChartFrame } from '../../chart/frame';
-import { frameThrottle, type FrameThrottle } from '../../chart/frame-throttle';
+import { frameThrottle, type FrameThrottle } from '../../interaction/frame-throttle';
 import { useChartHeight } from '../../chart/chart-height';
 import { useTimeSpanH } from '../../chart/time-span';
 import { useStormInput } from '../context';

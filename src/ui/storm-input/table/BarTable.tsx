@@ -8,7 +8,7 @@ import { readCell, type EditableColumn } from './cell-edit';
 import { moveCell, scrollToShow, visibleRows, type CellPos } from './grid-nav';
 
 /** Row height, px (the CSS gives rows this height). */
-export const ROW_PX = 30;
+const ROW_PX = 30;
 /** Rows in view when the table cannot measure itself (no layout, as in tests). */
 const FALLBACK_VIEW_ROWS = 12;
 /** Rows drawn beyond each edge of the view, so a quick scroll shows no gap. */
@@ -161,8 +161,8 @@ function EditorInput({
     input.focus({ preventScroll: true });
     if (editing.select) input.select();
     else input.setSelectionRange(input.value.length, input.value.length);
-    // Once, when the editor opens for this cell.
-  }, [editing.row, editing.col]);
+    // When the editor opens for a cell (or opens again on it asking for its text selected), not as it is typed in.
+  }, [editing.row, editing.col, editing.select]);
   return (
     <input
       ref={ref}
