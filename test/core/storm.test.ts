@@ -74,6 +74,36 @@ describe('validateStormDepthMm', () => {
     expect([e.field, e.index]).toEqual(['depthsMm', PASS_BLOCK + 1]);
     expect(e.message).toMatch(new RegExp(`^Bar ${PASS_BLOCK + 2}: rainfall depth`));
   });
+
+  // The pass compares bars with the lower limits only; the sums show an
+  // infinite depth or a bar past a record's span, and the first bad bar is
+  // then sought from the start.
+  it('names the first bad bar when the one the pass stopped at comes later', () => {
+    const n = 2 * PASS_BLOCK + 5;
+    const storm = { durationsH: new Array<number>(n).fill(0.25), depthsMm: new Array<number>(n).fill(0.5) };
+    storm.depthsMm[3] = Infinity;
+    storm.depthsMm[n - 1] = Number.NaN;
+    const e = rejection(() => validateStormDepthMm(storm));
+    expect([e.field, e.index]).toEqual(['depthsMm', 3]);
+    expect(e.message).toBe(
+      'Bar 4: rainfall depth must be a finite number of millimetres, zero or more (got Infinity).',
+    );
+    // 10⁹ h, about 114,000 years: one bar past the 500-year limit, before the NaN.
+    storm.depthsMm[3] = 0.5;
+    storm.durationsH[PASS_BLOCK] = 1e9;
+    const long = rejection(() => validateStormDepthMm(storm));
+    expect([long.field, long.index]).toEqual(['durationsH', PASS_BLOCK]);
+    expect(long.message).toMatch(new RegExp(`^Bar ${PASS_BLOCK + 1}: duration must be at most 500 years`));
+  });
+
+  it('accepts finite depths that sum past the largest double, and clean bars too long together', () => {
+    // 7e307 mm each (finite; the largest double is about 1.797e308): the sum, 2.1e308, is Infinity.
+    expect(validateStormDepthMm({ durationsH: [1, 1, 1], depthsMm: [7e307, 7e307, 7e307] })).toBe(Infinity);
+    // Two bars of 300 years each are clean; together they pass the 500-year span (bar 2 passes it).
+    const e = rejection(() => validateStormDepthMm({ durationsH: [300 * 8766, 300 * 8766], depthsMm: [1, 1] }));
+    expect([e.field, e.index]).toEqual(['durationsH', 1]);
+    expect(e.message).toMatch(/^Bar 2: the storm would run .* a record spans at most 500 years/);
+  });
 });
 
 describe('storm summaries', () => {

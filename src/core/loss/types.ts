@@ -187,10 +187,13 @@ export interface BarTotals {
 
 /**
  * A compute that checks each bar as it reads it, by storm.ts's isCleanBar (the
- * rule validateStorm enforces), so the public computeLosses reads the storm
- * once instead of twice. The method is already valid; the storm's lists are
- * there and of equal length. Returns the totals, or null at the first bar that
- * fails (the output arrays then hold a partial pass: the caller discards them).
+ * rule validateStorm enforces; a pass that sums durations and depths may test
+ * isCleanBarBelowSums per bar and summedBarsClean on the sums, which together
+ * say the same), so the public computeLosses reads the storm once instead of
+ * twice. The method is already valid; the storm's lists are there and of
+ * equal length. Returns the totals, or null when a bar fails (the output
+ * arrays then hold a partial pass: the caller discards them, validates and
+ * throws the error that names the first bad bar).
  */
 export type CheckedComputeFn<K extends LossKind> = (
   durationsH: ArrayLike<number>,

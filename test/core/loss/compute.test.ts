@@ -152,6 +152,40 @@ describe('computeLosses with the constant rate (checks fused into the pass)', ()
     expect([e.field, e.index]).toEqual(['durationsH', 20_000]);
   });
 
+  // The pass compares each bar against the lower limits only; a bar past a
+  // record's span or an infinite depth shows in the sums at the end, and
+  // validating again must still name the first bad bar, wherever it lies.
+  it('names an infinite depth in an earlier block than a NaN depth', () => {
+    const storm = longStorm(N);
+    storm.depthsMm[5] = Infinity;
+    storm.depthsMm[N - 1] = Number.NaN;
+    const e = rejection(() => computeLosses(storm as unknown as Storm, PHI));
+    expect(fields(e)).toEqual(fields(referenceError(storm as unknown as Storm, PHI)));
+    expect([e.field, e.index]).toEqual(['depthsMm', 5]);
+  });
+  it('names a finite bar longer than a record before a bad depth after it', () => {
+    const storm = longStorm(N);
+    // 10⁹ h is about 114,000 years: past the 500-year limit on its own.
+    storm.durationsH[PASS_BLOCK + 3] = 1e9;
+    storm.depthsMm[N - 2] = -1;
+    const e = rejection(() => computeLosses(storm as unknown as Storm, PHI));
+    expect(fields(e)).toEqual(fields(referenceError(storm as unknown as Storm, PHI)));
+    expect([e.field, e.index]).toEqual(['durationsH', PASS_BLOCK + 3]);
+    expect(e.message).toMatch(new RegExp(`^Bar ${PASS_BLOCK + 4}: duration must be at most 500 years`));
+  });
+  it('accepts finite depths whose sum passes the largest double, as validating first does', () => {
+    // Each depth is finite (7e307 < 1.797e308, the largest double), so every
+    // bar is clean; their sum, 2.1e308, overflows to Infinity. φΔt = 4 mm/h ·
+    // 1 h = 4 mm is lost from each bar (4 is far below an ulp of 7e307, so the
+    // excess P − 4 rounds to P and the loss P − excess is 0 in floating point).
+    const storm: Storm = { durationsH: [1, 1, 1], depthsMm: [7e307, 7e307, 7e307] };
+    expect(() => validateStorm(storm)).not.toThrow();
+    const r = computeLosses(storm, PHI);
+    expect(Array.from(r.excessMm)).toEqual([7e307, 7e307, 7e307]);
+    expect(Array.from(r.lossMm)).toEqual([0, 0, 0]);
+    expect(r.rainMm).toBe(Infinity);
+  });
+
   it('keeps the order of complaints: lists, then bars, then the start, then the method', () => {
     const badMethod = { kind: 'constant', rateMmH: -1 } as const;
     const cases: [Storm, LossMethod, string][] = [
