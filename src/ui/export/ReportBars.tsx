@@ -6,10 +6,12 @@ import { hoursMinutes } from '../results/hours-minutes';
 import { displayUnit, toDisplay, unitText } from '../units';
 
 /**
- * The most bars the printed report lists: one row each at the report's type
- * size (10.5 pt, rows about 5 mm) fill an A4 or US Letter page less its
- * margins and heading at about 48 (our own measure of the print layout).
- * A longer storm's table is in the CSV export, and the report says so.
+ * The most bars the printed report lists: with rows of about 4.5 mm
+ * (export.css), 48 rows and the heading fill a US Letter page less its
+ * margins, the shorter of Letter and A4 (our own measure of the print
+ * layout; test/browser/share.spec.mjs prints 48 bars on both and checks the
+ * page count). A longer storm's table is in the CSV export, and the report
+ * says so.
  */
 export const REPORT_MAX_BARS = 48;
 
