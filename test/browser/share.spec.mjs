@@ -3,7 +3,8 @@
 // (no shared storage) where the same results must show; a damaged link keeps
 // the saved scenario; the CSV export reads back to the same bars, the SVG is
 // valid and carries the page's colours inline, the PNG is drawn at 2×, and the
-// printed report is one page.
+// printed report is a summary page, then the bar table on a page of its own
+// (48 bars fit a Letter and an A4 page).
 import { readFile } from 'node:fs/promises';
 import Papa from 'papaparse';
 import { addAxe, check, loadSourceModules } from './support.mjs';
