@@ -78,8 +78,9 @@ const UI_ORDER = [
   // pieces the panels share
   'import-kit',
   'results',
-  'layout',
+  // the chart loads its mass-curve layer on first use through layout's lazyPart
   'chart',
+  'layout',
   'fields',
   'interaction',
   'services',

@@ -96,3 +96,5 @@ export {
   type IsoReading,
   type WallClockParts,
 } from './wall-clock';
+// Cumulative rainfall, loss and excess at each bar end (issue 16).
+export { massCurve, type MassCurve } from './mass-curve';

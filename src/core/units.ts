@@ -105,3 +105,9 @@ export const DISPLAY_UNITS = {
   UnitSystem,
   { depth: DepthUnit; rate: RateUnit; area: AreaUnit; volume: VolumeUnit; discharge: DischargeUnit }
 >;
+
+/** The area units of each system, its display unit first (the catchment-area field offers these). */
+export const SYSTEM_AREA_UNITS: Readonly<Record<UnitSystem, readonly AreaUnit[]>> = {
+  si: ['ha', 'km2', 'm2'],
+  us: ['acre', 'mi2'],
+};

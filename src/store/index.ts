@@ -20,6 +20,7 @@ export {
   withoutStreamflow,
 } from './streamflow-edits';
 export { alignRecord } from './alignment';
+export { AREA_UNITS_KEY, DEFAULT_AREA_UNITS, readAreaUnits, type AreaUnits } from './area-units';
 export { readScenario } from './read-scenario';
 export {
   loadScenario,

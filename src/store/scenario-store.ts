@@ -5,9 +5,11 @@ import {
   type CalibrationResult,
   type LossKind,
   type LossMethod,
+  type AreaUnit,
   type Storm,
   type UnitSystem,
 } from '../core';
+import { DEFAULT_AREA_UNITS, isAreaUnitOf, type AreaUnits } from './area-units';
 import { blankScenario } from '../scenario/blank';
 import { carriesDemoIdentity, withoutDemoIdentity } from '../scenario/demo';
 import { labelInSentence } from '../scenario/label-text';
@@ -79,6 +81,8 @@ export interface WorkbenchActions {
   newScenario(): void;
   setUnits(units: UnitSystem): void;
   setAreaM2(areaM2: number, options?: EditOptions): void;
+  /** Shows and exports the catchment area in `unit`, for the unit system it belongs to (a preference: not undone). */
+  setAreaUnit(unit: AreaUnit): void;
 
   /** Replaces the whole storm (paste, draw, storm tools) as one undoable edit named `label`. */
   setStorm(storm: Storm, label: string): void;
@@ -138,6 +142,8 @@ export interface WorkbenchState {
   readonly undoLabel: string | null;
   readonly redoLabel: string | null;
   readonly notice: StorageNotice | null;
+  /** The unit the catchment area is shown, typed and exported in, per unit system (see area-units.ts). */
+  readonly areaUnits: AreaUnits;
   readonly actions: WorkbenchActions;
 }
 
@@ -147,6 +153,8 @@ export interface CreateStoreOptions {
   readonly notice?: StorageNotice | null;
   /** Clock for coalescing edits (tests pass their own). */
   readonly now?: () => number;
+  /** The area units chosen before (read from the browser's storage by startWorkbench). */
+  readonly areaUnits?: AreaUnits;
 }
 
 /** The vanilla store: no React here (see ./react.ts for the binding). */
@@ -207,6 +215,10 @@ export function createWorkbenchStore(initial: Scenario, options: CreateStoreOpti
       setUnits: (units) =>
         edit(units === 'us' ? 'Show US customary units' : 'Show SI units', (s) => withUnits(s, units)),
       setAreaM2: (areaM2, opts) => edit('Set catchment area', (s) => withAreaM2(s, areaM2), opts),
+      setAreaUnit: (unit) => {
+        const system: UnitSystem = isAreaUnitOf('us', unit) ? 'us' : 'si';
+        if (get().areaUnits[system] !== unit) set({ areaUnits: { ...get().areaUnits, [system]: unit } });
+      },
 
       setStorm: (storm, label) => edit(label, (s) => withStorm(s, storm)),
       setImportedStorm: (storm, label) =>
@@ -323,6 +335,7 @@ export function createWorkbenchStore(initial: Scenario, options: CreateStoreOpti
       undoLabel: null,
       redoLabel: null,
       notice: options.notice ?? null,
+      areaUnits: options.areaUnits ?? DEFAULT_AREA_UNITS,
       actions,
     };
   });

@@ -1,4 +1,5 @@
 import type { Scenario } from '../scenario/types';
+import { readAreaUnits, writeAreaUnits } from './area-units';
 import { createLinkSession, type LinkSession } from './link-session';
 import { loadScenario, type StorageLike } from './persistence';
 import { createWorkbenchStore, type WorkbenchStore } from './scenario-store';
@@ -33,7 +34,14 @@ export function startWorkbench(options: StartOptions): Started {
   const loaded = loadScenario(options.storage, options.fallback, options.nowIso, {
     skipSaved: options.skipSaved === true,
   });
-  const store = createWorkbenchStore(loaded.scenario, { notice: loaded.notice });
+  const store = createWorkbenchStore(loaded.scenario, {
+    notice: loaded.notice,
+    areaUnits: readAreaUnits(options.storage),
+  });
+  // The area unit is a preference of this browser's: kept whenever it changes, never in the scenario.
+  store.subscribe((state, before) => {
+    if (state.areaUnits !== before.areaUnits) writeAreaUnits(options.storage, state.areaUnits);
+  });
   const link = createLinkSession({
     store,
     storage: options.storage,

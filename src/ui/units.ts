@@ -1,5 +1,6 @@
 import {
   DISPLAY_UNITS,
+  SYSTEM_AREA_UNITS,
   UNIT_LABELS,
   convertArea,
   convertDepth,
@@ -88,10 +89,7 @@ export function paramPlausible(unit: ParamUnit | string): PlausibleQuantity | un
 }
 
 /** Area units offered in the catchment-area field, per system (the display unit first). */
-export const AREA_CHOICES: Readonly<Record<UnitSystem, readonly AreaUnit[]>> = {
-  si: ['ha', 'km2', 'm2'],
-  us: ['acre', 'mi2'],
-};
+export const AREA_CHOICES: Readonly<Record<UnitSystem, readonly AreaUnit[]>> = SYSTEM_AREA_UNITS;
 
 /** Volume units offered for an observed runoff volume. */
 export const VOLUME_CHOICES: readonly VolumeUnit[] = ['m3', 'ML', 'ft3', 'acre-ft'];

@@ -3,7 +3,8 @@
 // (no shared storage) where the same results must show; a damaged link keeps
 // the saved scenario; the CSV export reads back to the same bars, the SVG is
 // valid and carries the page's colours inline, the PNG is drawn at 2×, and the
-// printed report is one page.
+// printed report is a summary page, then the bar table on a page of its own
+// (48 bars fit a Letter and an A4 page).
 import { readFile } from 'node:fs/promises';
 import Papa from 'papaparse';
 import { addAxe, check, loadSourceModules } from './support.mjs';
@@ -79,6 +80,12 @@ async function download(page, button) {
   const path = await file.path();
   check(path, `${button}: the download has no file`);
   return { name: file.suggestedFilename(), bytes: await readFile(path) };
+}
+
+/** The pages of the page printed to PDF in a paper format. */
+async function pdfPages(page, format) {
+  const pdf = await page.pdf({ format, printBackground: true });
+  return (pdf.toString('latin1').match(/\/Type\s*\/Page(?![s\w])/g) ?? []).length;
 }
 
 export const tests = [
@@ -284,7 +291,7 @@ export const tests = [
     },
   },
   {
-    name: 'the printed report is one page with the inputs, chart, results and caution',
+    name: 'the printed report is one page with the inputs, chart, results and caution, then a page with the bar table',
     async run({ baseUrl, newPage }) {
       const page = await newPage();
       await page.goto(baseUrl);
@@ -307,9 +314,60 @@ export const tests = [
         !(await page.getByRole('button', { name: 'Copy link' }).isVisible()),
         'the workbench prints along with the report',
       );
-      const pdf = await page.pdf({ format: 'A4', printBackground: true });
-      const pages = (pdf.toString('latin1').match(/\/Type\s*\/Page(?![s\w])/g) ?? []).length;
-      check(pages === 1, `the report prints on ${pages} pages`);
+      // The demo's 18 bars: the summary on page 1, the bar table on page 2 (issue 16).
+      check(
+        (await report.getByRole('region', { name: 'Bars' }).getByRole('row').count()) === 19,
+        'the report’s bar table does not list the 18 bars',
+      );
+      const pages = await pdfPages(page, 'A4');
+      check(pages === 2, `the report prints on ${pages} pages`);
+    },
+  },
+  {
+    name: 'the report’s bar table of 48 bars fits one A4 and one Letter page; 49 bars point to the CSV instead',
+    async run({ browser, baseUrl }) {
+      for (const [n, expected] of [
+        [48, 2],
+        [49, 1],
+      ]) {
+        const context = await browser.newContext();
+        // A storm with a clock (the longest start cells) and a long name, saved as the page would find it.
+        const scenario = {
+          version: 1,
+          name: `Report page test: ${n} bars of 5 min (invented)`,
+          notes: 'Invented for the print layout test.',
+          storm: {
+            durationsH: new Array(n).fill(1 / 12),
+            depthsMm: Array.from({ length: n }, (_, k) => 0.25 + (k % 7) * 0.55),
+            startIso: '2026-07-14T23:30',
+          },
+          catchment: { name: 'Print test (invented)', areaM2: 2.5e6 },
+          units: 'si',
+          method: { kind: 'constant', rateMmH: 6 },
+          methodMemory: {},
+          observed: null,
+        };
+        await context.addInitScript((text) => {
+          // Only in the app's own page (an opaque document has no storage to read).
+          if (!location.protocol.startsWith('http')) return;
+          if (!localStorage.getItem('raincut.scenario')) localStorage.setItem('raincut.scenario', text);
+        }, JSON.stringify(scenario));
+        const page = await context.newPage();
+        await page.goto(baseUrl);
+        await page.getByText(`${n} bars of 5 min`).first().waitFor();
+        await page.emulateMedia({ media: 'print' });
+        const report = page.getByRole('article', { name: 'Printable report' });
+        await report.waitFor();
+        const bars = report.locator('[data-report="bars"]');
+        await bars.waitFor();
+        if (n > 48) check((await bars.textContent()).includes('in the CSV export'), `${n} bars: no pointer to the CSV`);
+        else check((await bars.getByRole('row').count()) === n + 1, `${n} bars: the table does not list them all`);
+        for (const format of ['A4', 'Letter']) {
+          const pages = await pdfPages(page, format);
+          check(pages === expected, `${n} bars on ${format}: the report prints on ${pages} pages, not ${expected}`);
+        }
+        await context.close();
+      }
     },
   },
   {

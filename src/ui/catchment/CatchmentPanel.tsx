@@ -1,6 +1,5 @@
-import { useState } from 'react';
-import { AREA_UNITS, UNIT_LABELS, convertArea, type AreaUnit, type UnitSystem } from '../../core';
-import { useActions, useScenario } from '../../store';
+import { AREA_UNITS, UNIT_LABELS, convertArea, type AreaUnit } from '../../core';
+import { useActions, useScenario, useWorkbench } from '../../store';
 import { NumberField } from '../fields/NumberField';
 import { TextArea, TextInput } from '../fields/TextInput';
 import { AREA_CHOICES } from '../units';
@@ -14,8 +13,8 @@ export function AreaField() {
     Boolean(s.observed?.locked && (s.observed.as === 'volume' || s.streamflow?.useAsObserved)),
   );
   const actions = useActions();
-  const [unitBySystem, setUnitBySystem] = useState<Record<UnitSystem, AreaUnit>>({ si: 'ha', us: 'acre' });
-  const unit = unitBySystem[units];
+  // The unit is a preference in the store (kept in this browser), so the CSV export and the report use it too.
+  const unit = useWorkbench((s) => s.areaUnits[units]);
   return (
     <NumberField
       id="catchment-area"
@@ -39,9 +38,7 @@ export function AreaField() {
           value={unit}
           onChange={(e) => {
             const next = e.currentTarget.value;
-            if (Object.prototype.hasOwnProperty.call(AREA_UNITS, next)) {
-              setUnitBySystem((u) => ({ ...u, [units]: next as AreaUnit }));
-            }
+            if (Object.prototype.hasOwnProperty.call(AREA_UNITS, next)) actions.setAreaUnit(next as AreaUnit);
           }}
         >
           {AREA_CHOICES[units].map((u) => (

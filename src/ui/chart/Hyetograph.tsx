@@ -1,4 +1,4 @@
-import { useMemo } from 'react';
+import { useMemo, useState } from 'react';
 import { computeLosses, totalDepthMm, type LossMethod } from '../../core';
 import type { Scenario } from '../../scenario/types';
 import { useDerived, useScenario } from '../../store';
@@ -9,13 +9,18 @@ import { CAPACITY_CURVES } from './capacity';
 import { useChartHeight } from './chart-height';
 import { chartFrame } from './frame';
 import { lossPartOf, rateLine } from './method-layers';
+import { lazyPart } from '../layout/LazyPart';
 import { LossLayer } from './LossLayer';
+import type { MassCurveProps } from './MassCurve';
 import { LossLine } from './LossLine';
 import { RainLayer } from './RainLayer';
 import { useTimeSpanH } from './time-span';
 import { useElementWidth } from './useElementWidth';
 
 export { CHART_HEIGHT } from './chart-height';
+
+// The mass curve's code loads the first time it is switched on (it is not part of the first screen).
+const MassCurve = lazyPart<MassCurveProps>('mass curve', () => import('./MassCurve').then((m) => m.MassCurve));
 
 /** The part of the loss drawn in its own shade (initial loss), computed by the core. */
 function lossPart(storm: Scenario['storm'], method: LossMethod): Float64Array | null {
@@ -41,6 +46,7 @@ export function Hyetograph() {
   const matched = useDerived((d, s) => d.isMatched(s));
   const fittedKey = useScenario((s) => s.observed?.parameter ?? null);
   const method = results.method;
+  const [mass, setMass] = useState(false);
 
   // With a streamflow record the axis holds the record too, shared with the hydrograph below.
   const span = useTimeSpanH();
@@ -96,6 +102,9 @@ export function Hyetograph() {
             </li>
           ) : null}
         </ul>
+        <button type="button" className="chart__toggle" aria-pressed={mass} onClick={() => setMass(!mass)}>
+          Mass curve
+        </button>
       </figcaption>
       <div className="chart__box" ref={boxRef}>
         <svg className="chart__svg" width={width} height={height} role="group" aria-labelledby="chart-title">
@@ -140,6 +149,7 @@ export function Hyetograph() {
             />
           ) : null}
         </svg>
+        {mass && results.ok ? <MassCurve frame={frame} storm={storm} result={results.result} units={units} /> : null}
       </div>
       {aboveTop !== null ? (
         <p className="chart__notice" data-note="capacity-clip">

@@ -33,8 +33,14 @@ export function PinButton() {
         Pin to compare
       </button>
       {pins.length > 0 ? (
-        <span id="pin-count" className="scenario-bar__count">
-          {pins.length} of {MAX_PINS} pinned
+        // "1/4" on screen keeps the scenario tools one row at 1280 px (issue 16); the words are read out and shown on hover.
+        <span id="pin-count" className="scenario-bar__count" title={`${pins.length} of ${MAX_PINS} pinned`}>
+          <span aria-hidden="true">
+            {pins.length}/{MAX_PINS}
+          </span>
+          <span className="visually-hidden">
+            {pins.length} of {MAX_PINS} pinned
+          </span>
         </span>
       ) : null}
     </>

@@ -35,7 +35,7 @@ function whenIdle(task: () => void): () => void {
 }
 
 /**
- * The one-page printable report. It is built only while printing (from the
+ * The printable report (a one-page summary, then the bar table). It is built only while printing (from the
  * "Print report" button, the browser's own print command, or print
  * emulation), so editing on screen never pays for it. Printing before its
  * code has arrived prints the screen as it is.

@@ -1,7 +1,7 @@
 import { useMemo } from 'react';
 import { TRANSFORMS, methodSpec, totalDurationH } from '../../core';
 import { CAUTION_TEXT } from '../../scenario';
-import { useDerived, useScenario } from '../../store';
+import { useDerived, useScenario, useWorkbench } from '../../store';
 import { chartFrame } from '../chart/frame';
 import { rateLine } from '../chart/method-layers';
 import { formatWallDate, formatWallTime, wallClockMs } from '../chart/clock';
@@ -10,7 +10,8 @@ import { fittedCellText } from '../results/fit-words';
 import { formatCount, formatPercent, formatValue } from '../format';
 import { displayUnit, toDisplay, unitText, type Quantity } from '../units';
 import { useServices } from '../services/services';
-import { methodParametersText } from './bar-table-csv';
+import { areaText, methodParametersText } from './bar-table-csv';
+import { ReportBars } from './ReportBars';
 import { transformParametersText } from './hydrograph-csv';
 import { dischargeText } from '../observed/discharge';
 import { hoursMinutes } from '../results/hours-minutes';
@@ -25,6 +26,8 @@ export function ReportBody() {
   const derived = useDerived((d) => d);
   const { now } = useServices();
   const { storm, units, catchment, observed } = scenario;
+  // The area in the unit chosen beside the area field (a preference in the store, as the CSV export reads it).
+  const areaUnit = useWorkbench((s) => s.areaUnits[units]);
   const method = derived.effectiveMethod(scenario);
   const results = derived.results(scenario);
   const totals = totalsOf(scenario, derived);
@@ -74,7 +77,7 @@ export function ReportBody() {
           <dt>Catchment</dt>
           <dd>
             {catchment.name === '' ? 'Unnamed' : catchment.name},{' '}
-            {catchment.areaM2 > 0 ? show('area', catchment.areaM2) : 'area not given'}
+            {catchment.areaM2 > 0 ? areaText(catchment.areaM2, units, areaUnit, formatValue) : 'area not given'}
           </dd>
           <dt>Loss method</dt>
           <dd>
@@ -157,9 +160,10 @@ export function ReportBody() {
         </table>
       </section>
       <p className="report__foot">
-        Losses and excess computed by Raincut’s core; method source: {spec.source.replace(/\.$/, '')}. The per-bar table
-        is in the CSV export.
+        Losses and excess computed by Raincut’s core; method source: {spec.source.replace(/\.$/, '')}. The CSV export
+        holds every bar with its cumulative rainfall, loss and excess.
       </p>
+      <ReportBars storm={storm} units={units} result={results.ok ? results.result : null} />
     </>
   );
 }

@@ -1,10 +1,14 @@
 import {
+  UNIT_LABELS,
   barEdgesH,
+  convertArea,
+  massCurve,
   methodNumber,
   methodSpec,
   methodValue,
   paramApplies,
   type LossMethod,
+  type AreaUnit,
   type LossResult,
   type UnitSystem,
 } from '../../core';
@@ -13,7 +17,7 @@ import type { Scenario } from '../../scenario/types';
 import { formatClockText, wallClockMs } from '../chart/clock';
 import { formatValue } from '../format';
 import { csvFile, csvNote, csvRow, type CsvCell } from './csv';
-import { displayUnit, paramToDisplay, paramUnitText, toDisplay, unitText } from '../units';
+import { AREA_CHOICES, displayUnit, paramToDisplay, paramUnitText, toDisplay, unitText } from '../units';
 
 /**
  * The bar table as CSV, written through the one CSV writer (./csv.ts: every
@@ -29,7 +33,10 @@ import { displayUnit, paramToDisplay, paramUnitText, toDisplay, unitText } from 
  * typed, and the binary residue of sums and unit conversions is dropped
  * (2.4000000000000004 h is 144 min). Durations and start times are in
  * minutes, as the bar table on screen types them. Losses and excess per bar
- * are the core's, passed in from the store.
+ * are the core's, passed in from the store; the three cumulative columns are
+ * the storm's mass curve (core `massCurve`: running sums to each bar's end).
+ * The catchment area is written in the unit the user chose beside the area
+ * field (a preference kept in the store, not in the scenario).
  */
 export interface BarTableInput {
   readonly scenario: Scenario;
@@ -38,6 +45,8 @@ export interface BarTableInput {
   readonly result: LossResult;
   /** Runoff volume, m³, or null without a catchment area. */
   readonly volumeM3: number | null;
+  /** The unit the area field shows (the store's `areaUnit`); the system's display unit when left out. */
+  readonly areaUnit?: AreaUnit;
 }
 
 /**
@@ -97,11 +106,26 @@ function barTableHeader(scenario: Scenario): string[] {
     `Rainfall intensity (${rate})`,
     `Loss (${depth})`,
     `Rainfall excess (${depth})`,
+    `Cumulative rainfall (${depth})`,
+    `Cumulative loss (${depth})`,
+    `Cumulative excess (${depth})`,
   );
   return head;
 }
 
-export function barTableCsv({ scenario, method, result, volumeM3 }: BarTableInput): string {
+/** "250 ha" in the unit chosen on screen (the system's display unit when none is given or it is not the system's). */
+export function areaText(
+  areaM2: number,
+  units: UnitSystem,
+  chosen: AreaUnit | undefined,
+  format: (x: number) => string,
+): string {
+  const unit =
+    chosen !== undefined && AREA_CHOICES[units].includes(chosen) ? chosen : (AREA_CHOICES[units][0] as AreaUnit);
+  return `${format(convertArea(areaM2, 'm2', unit))} ${UNIT_LABELS[unit] ?? unit}`;
+}
+
+export function barTableCsv({ scenario, method, result, volumeM3, areaUnit }: BarTableInput): string {
   const { storm, units } = scenario;
   const depthUnit = unitText(displayUnit('depth', units));
   const show = (mm: number): string => `${noteNumber(toDisplay('depth', mm, units))} ${depthUnit}`;
@@ -115,7 +139,7 @@ export function barTableCsv({ scenario, method, result, volumeM3 }: BarTableInpu
   if (scenario.catchment.name !== '' || scenario.catchment.areaM2 > 0) {
     const area =
       scenario.catchment.areaM2 > 0
-        ? `${noteNumber(toDisplay('area', scenario.catchment.areaM2, units))} ${unitText(displayUnit('area', units))}`
+        ? areaText(scenario.catchment.areaM2, units, areaUnit, noteNumber)
         : 'area not given';
     lines.push(csvNote(`Catchment: ${scenario.catchment.name === '' ? 'unnamed' : scenario.catchment.name}; ${area}`));
   }
@@ -134,6 +158,7 @@ export function barTableCsv({ scenario, method, result, volumeM3 }: BarTableInpu
   );
 
   const edges = barEdgesH(storm);
+  const mass = massCurve(storm.depthsMm, result);
   const n = storm.depthsMm.length;
   for (let k = 0; k < n; k++) {
     const depthMm = storm.depthsMm[k] as number;
@@ -148,6 +173,9 @@ export function barTableCsv({ scenario, method, result, volumeM3 }: BarTableInpu
       cellNumber(toDisplay('rate', depthMm / durationH, units)),
       cellNumber(toDisplay('depth', result.lossMm[k] as number, units)),
       cellNumber(toDisplay('depth', result.excessMm[k] as number, units)),
+      cellNumber(toDisplay('depth', mass.rainMm[k] as number, units)),
+      cellNumber(toDisplay('depth', mass.lossMm[k] as number, units)),
+      cellNumber(toDisplay('depth', mass.excessMm[k] as number, units)),
     );
     lines.push(csvRow(row));
   }

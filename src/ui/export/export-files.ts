@@ -5,3 +5,4 @@ export { chartHeading, chartLegend } from './chart-file';
 export { standaloneSvg } from './chart-svg';
 export { svgToPng } from './chart-png';
 export { hydrographCsv, transformParametersText } from './hydrograph-csv';
+export { liveChartSvg, runExport, type ExportKind } from './run-export';

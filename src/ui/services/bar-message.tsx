@@ -3,6 +3,8 @@ import { createContext, useContext, type ReactNode } from 'react';
 /**
  * The one message line under the scenario bar: what the last share, file,
  * export or pin action did, or what stopped it. A new action replaces it.
+ * It floats over the top of the page (share.css) and never pushes the chart
+ * down; screen readers hear it through its live region.
  */
 export interface BarMessage {
   /** 'problem' is announced at once (role alert); 'done' politely (role status). */
@@ -31,6 +33,7 @@ export function BarMessageView({ message, onDismiss }: { message: BarMessage | n
     <div
       className={`bar-message bar-message--${message.tone}`}
       role={problem ? 'alert' : 'status'}
+      aria-live={problem ? 'assertive' : 'polite'}
       aria-label={MESSAGE_LABEL}
     >
       <div className="bar-message__text">

@@ -104,6 +104,21 @@ describe('comparing pinned scenarios', () => {
     expect(text(row('Fitted parameter')[2])).toMatch(/^Runoff coefficient [\d.]+another parameter than pin 1$/);
   });
 
+  it('calls a value fitted only when it is in use: an answer not applied reads "Fit would set", then "Fitted" after Fit', async () => {
+    // Observed 6 mm, not kept matched, φ still 8 mm/h. Bars of 0.5 h at 4, 12, 20, 4 mm/h: with the bars above φ
+    // in (4, 12) the excess is (12 − φ)·0.5 + (20 − φ)·0.5 = 16 − φ, so 6 mm needs φ = 10 mm/h.
+    const observed = { as: 'depth' as const, value: 6, parameter: 'rateMmH', locked: false };
+    const { user, actions } = renderTools({ fallback: { ...FOUR_BARS, observed } });
+    await pin(user);
+    expect(text(row('Fitted parameter')[0])).toBe('— (not in use; Fit would set loss rate φ to 10 mm/h)');
+    act(() => {
+      actions.fitObserved();
+    });
+    await pin(user);
+    expect(text(row('Fitted parameter')[1])).toMatch(/^Loss rate φ 10 mm\/h/);
+    expect(text(row('Fitted parameter')[0])).toBe('— (not in use; Fit would set loss rate φ to 10 mm/h)');
+  });
+
   it('up to four: a fifth pin is refused with a message; Unpin frees a place', async () => {
     const { user } = renderTools({ fallback: FOUR_BARS });
     for (let i = 0; i < 4; i++) await pin(user);

@@ -67,6 +67,9 @@ describe('bar table CSV', () => {
       'Rainfall intensity (mm/h)',
       'Loss (mm)',
       'Rainfall excess (mm)',
+      'Cumulative rainfall (mm)',
+      'Cumulative loss (mm)',
+      'Cumulative excess (mm)',
     ]);
     const rows = parsed.data;
     // Bars of 0.5 h: 30 minutes each.
@@ -95,6 +98,9 @@ describe('bar table CSV', () => {
       'Rainfall intensity (in/h)',
       'Loss (in)',
       'Rainfall excess (in)',
+      'Cumulative rainfall (in)',
+      'Cumulative loss (in)',
+      'Cumulative excess (in)',
     ]);
     const rows = parsed.data;
     expect(rows.map((r) => r['Start (clock)'])).toEqual([
@@ -119,6 +125,17 @@ describe('bar table CSV', () => {
     expect(rows.map((r) => Number(r['Rainfall excess (in)']))).toEqual(
       [...core.excessMm].map((mm) => sig12(convertDepth(mm, 'mm', 'in'))),
     );
+  });
+
+  it('the cumulative columns are the mass curve, worked by hand for four bars at φ = 8 mm/h', async () => {
+    const { text } = await exportedCsv(FOUR_BARS);
+    const rows = parse(text).data;
+    // Bars of 0.5 h with 2, 6, 10 and 2 mm; φ = 8 mm/h loses at most 8 × 0.5 = 4 mm a bar:
+    // loss 2, 4, 4, 2 mm and excess 0, 2, 6, 0 mm. Running sums to each bar's end:
+    // rain 2, 2 + 6 = 8, 8 + 10 = 18, 18 + 2 = 20; loss 2, 6, 10, 12; excess 0, 2, 8, 8 (and 20 = 12 + 8).
+    expect(rows.map((r) => Number(r['Cumulative rainfall (mm)']))).toEqual([2, 8, 18, 20]);
+    expect(rows.map((r) => Number(r['Cumulative loss (mm)']))).toEqual([2, 6, 10, 12]);
+    expect(rows.map((r) => Number(r['Cumulative excess (mm)']))).toEqual([0, 2, 8, 8]);
   });
 
   it('rows carry no binary residue: bars of 0.8 h start at 0, 48, 96 and 144 min, not 144.00000000000003', () => {

@@ -38,7 +38,7 @@ describe('printable report', () => {
 
     expect(within(report).getByRole('img', { name: /^Hyetograph of Four bars/ })).toBeInTheDocument();
 
-    const results = within(report).getByRole('table');
+    const results = within(within(report).getByRole('region', { name: 'Results' })).getByRole('table');
     const core = computeLosses(FOUR_BARS.storm, FOUR_BARS.method);
     expect(cell(results, 'Rainfall depth')).toBe(mm(core.rainMm));
     expect(cell(results, 'Loss depth')).toBe(mm(core.totalLossMm));
@@ -62,10 +62,61 @@ describe('printable report', () => {
       window.dispatchEvent(new Event('beforeprint'));
     });
     const report = screen.getByRole('article', { name: 'Printable report' });
-    const results = within(report).getByRole('table');
+    const results = within(within(report).getByRole('region', { name: 'Results' })).getByRole('table');
     expect(cell(results, 'Rainfall depth')).toMatch(/ in$/);
     expect(cell(results, 'Runoff volume')).toMatch(/ acre-ft$/);
     expect(cell(results, 'Fitted parameter')).toBe('— (no observed runoff to fit)');
     expect(within(report).getByRole('region', { name: 'Inputs' })).toHaveTextContent('from 12 Feb 2026 21:45');
+  });
+
+  it('lists every bar with its start, duration, rainfall, loss and excess, units in the headings (worked by hand)', async () => {
+    renderTools({ fallback: FOUR_BARS });
+    await act(() => loadReport());
+    act(() => {
+      window.dispatchEvent(new Event('beforeprint'));
+    });
+    const report = screen.getByRole('article', { name: 'Printable report' });
+    const bars = within(within(report).getByRole('region', { name: 'Bars' })).getByRole('table');
+    const rows = within(bars)
+      .getAllByRole('row')
+      .map((r) => [...r.querySelectorAll('th, td')].map((c) => c.textContent));
+    // Bars of 30 min with 2, 6, 10, 2 mm; φ = 8 mm/h loses at most 8 × 0.5 = 4 mm a bar, so the loss is
+    // min(P, 4) = 2, 4, 4, 2 mm and the excess P − loss = 0, 2, 6, 0 mm; starts 0:00, 0:30, 1:00, 1:30.
+    expect(rows).toEqual([
+      ['Bar', 'Start (h:mm from storm start)', 'Duration (min)', 'Rainfall (mm)', 'Loss (mm)', 'Excess (mm)'],
+      ['1', '0:00', '30', '2', '2', '0'],
+      ['2', '0:30', '30', '6', '4', '2'],
+      ['3', '1:00', '30', '10', '4', '6'],
+      ['4', '1:30', '30', '2', '2', '0'],
+    ]);
+  });
+
+  it('a storm with a clock lists clock times; up to 48 bars are listed, a longer storm points to the CSV export', async () => {
+    const view = renderTools({ fallback: SHARED });
+    await act(() => loadReport());
+    act(() => {
+      window.dispatchEvent(new Event('beforeprint'));
+    });
+    const region = () =>
+      within(screen.getByRole('article', { name: 'Printable report' })).getByRole('region', { name: 'Bars' });
+    const starts = () =>
+      within(within(region()).getByRole('table'))
+        .getAllByRole('row')
+        .slice(1)
+        .map((r) => r.querySelector('td')?.textContent);
+    expect(within(region()).getAllByRole('columnheader')[1]).toHaveTextContent('Start (clock)');
+    expect(within(region()).getAllByRole('columnheader')[3]).toHaveTextContent('Rainfall (in)');
+    // Bars of 15, 15, 30, 60, 30 min from 21:45: 21:45, 22:00, 22:15, 22:45, 23:45, 00:15.
+    expect(starts()).toEqual(['21:45', '22:00', '22:15', '22:45', '23:45', '00:15']);
+
+    const many = (n: number) => ({ durationsH: Array<number>(n).fill(0.25), depthsMm: Array<number>(n).fill(1) });
+    act(() => view.actions.setStorm(many(48), 'Forty-eight bars'));
+    expect(starts()).toHaveLength(48);
+    act(() => view.actions.setStorm(many(49), 'Forty-nine bars'));
+    const report = screen.getByRole('article', { name: 'Printable report' });
+    expect(within(report).queryByRole('region', { name: 'Bars' })).toBeNull();
+    expect(report.querySelector('[data-report="bars"]')).toHaveTextContent(
+      'The storm has 49 bars, more than the 48 that fit on a printed page: the table of rainfall, loss and excess for each bar is in the CSV export (Export CSV).',
+    );
   });
 });
