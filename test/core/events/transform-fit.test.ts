@@ -6,6 +6,7 @@ import {
   type HydrographEvent,
   type TransformFitSettings,
 } from '../../../src/core';
+import { linearReservoirRecord } from '../../helpers/hydrographs';
 
 // All events in this file are invented.
 //
@@ -19,18 +20,8 @@ const AREA_M2 = 1e6; // 1 km²
 /** Discharge of excess e mm spread evenly over one hour on 1 km²: e·1e6·1e-3 m³ / 3600 s. */
 const inflowM3s = (excessMm: number): number => (excessMm * AREA_M2 * 1e-3) / 3600;
 
-/** A linear reservoir's record: zero up to the start of the wet hour, its peak an hour later, then the recession. */
-function reservoirRecord(wetHourStartH: number, excessMm: number, kH: number, hours: number) {
-  const timesH: number[] = [];
-  const directM3s: number[] = [];
-  const peak = inflowM3s(excessMm) * (1 - Math.exp(-1 / kH));
-  for (let t = 0; t <= hours; t++) {
-    timesH.push(t);
-    const after = t - (wetHourStartH + 1);
-    directM3s.push(t <= wetHourStartH ? 0 : peak * Math.exp(-after / kH));
-  }
-  return { timesH, directM3s };
-}
+const reservoirRecord = (start: number, mm: number, kH: number, hours: number) =>
+  linearReservoirRecord(start, mm, kH, hours, AREA_M2);
 
 const settings = (objective: TransformFitSettings['objective']): TransformFitSettings => ({
   method: defaultMethod('constant'),
