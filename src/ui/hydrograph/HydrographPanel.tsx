@@ -7,7 +7,7 @@ import {
   type TransformObjective,
   type TransformParam,
 } from '../../core';
-import { useActions, useDerived, useScenario, useWorkbenchStore } from '../../store';
+import { useActions, useDeferredDerived, useDerived, useScenario, useWorkbenchStore } from '../../store';
 import {
   fitRunoffTransform,
   fittableTransformKeys,
@@ -51,8 +51,9 @@ interface Row {
 /** Peak and time to peak of the computed hydrograph; against a record, the errors and the efficiency. */
 function HydrographResults() {
   const units = useScenario((s) => s.units);
-  const computed = useDerived((d, s) => d.hydrograph(s));
-  const comparison = useDerived((d, s) => d.comparison(s));
+  // Deferred with the chart's layer (see useDeferredDerived): a drag of the loss line does not wait for the routing.
+  const computed = useDeferredDerived((d, s) => d.hydrograph(s));
+  const comparison = useDeferredDerived((d, s) => d.comparison(s));
   if (computed === null) return null;
   if (!computed.ok) {
     return (

@@ -1,6 +1,6 @@
 import { baseflowMethodSpec } from '../../core';
 import type { Streamflow } from '../../scenario/types';
-import { loadHydrographSide, useDerived, useScenario } from '../../store';
+import { loadHydrographSide, useDeferredDerived, useScenario } from '../../store';
 import { lazyPart } from '../layout/LazyPart';
 import { StreamflowButtons } from './StreamflowButtons';
 import './observed.css';
@@ -23,7 +23,7 @@ const HydrographPlot = lazyPart<{ flow: Streamflow | null }>('hydrograph', () =>
 export function HydrographChart() {
   const flow = useScenario((s) => s.streamflow);
   const computed = useScenario((s) => s.hydrograph.transform !== null);
-  const withTotal = useDerived((d, s) => d.totalFlow(s) !== null);
+  const withTotal = useDeferredDerived((d, s) => d.totalFlow(s) !== null);
   const endLabel =
     flow?.baseflow.kind === 'straight-line'
       ? baseflowMethodSpec('straight-line').params.find((p) => p.key === 'endTimeH')?.label

@@ -8,7 +8,7 @@ import {
   type UnitSystem,
 } from '../../core';
 import type { Streamflow } from '../../scenario/types';
-import { useDerived, useScenario, type Separation } from '../../store';
+import { useDeferredDerived, useDerived, useScenario, type Separation } from '../../store';
 import { Axes } from '../chart/Axes';
 import { useTimeSpanH } from '../chart/time-span';
 import { useElementWidth } from '../chart/useElementWidth';
@@ -105,7 +105,7 @@ export function HydrographPlot({ flow }: { flow: Streamflow | null }) {
   const [boxRef, width] = useElementWidth<HTMLDivElement>(880);
   const storm = useScenario((s) => s.storm);
   const units = useScenario((s) => s.units);
-  const computedTop = useDerived((d, s) => computedPeakM3s(d.hydrograph(s), d.totalFlow(s)));
+  const computedTop = useDeferredDerived((d, s) => computedPeakM3s(d.hydrograph(s), d.totalFlow(s)));
   const span = useTimeSpanH();
   const recordPeakM3s = useMemo(
     () => (flow ? (flow.dischargeM3s[findPeakIndex(flow.dischargeM3s)] as number) : 0),
