@@ -34,15 +34,7 @@ export {
   copyName,
   type StorageLike,
 } from './persistence';
-export {
-  StoreProvider,
-  useActions,
-  useDeferredDerived,
-  useDerived,
-  useScenario,
-  useWorkbench,
-  useWorkbenchStore,
-} from './react';
+export { StoreProvider, useActions, useDerived, useScenario, useWorkbench, useWorkbenchStore } from './react';
 export {
   withDesignPick,
   withDesignStormOnWorkbench,

@@ -7,7 +7,8 @@ import {
   type TransformObjective,
   type TransformParam,
 } from '../../core';
-import { useActions, useDeferredDerived, useDerived, useScenario, useWorkbenchStore } from '../../store';
+import { useActions, useDerived, useScenario, useWorkbenchStore } from '../../store';
+import { useDeferredDerived } from '../../store/deferred';
 import {
   fitRunoffTransform,
   fittableTransformKeys,

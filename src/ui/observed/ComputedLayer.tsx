@@ -1,6 +1,7 @@
 import { useMemo } from 'react';
 import type { RunoffHydrograph, UnitSystem } from '../../core';
-import { useDeferredDerived, useScenario, type ComputedHydrograph, type TimeSeries } from '../../store';
+import { useScenario, type ComputedHydrograph, type TimeSeries } from '../../store';
+import { useDeferredDerived } from '../../store/deferred';
 import { hoursMinutes } from '../results/hours-minutes';
 import { dischargeText } from './discharge';
 import type { HydrographFrame } from './hydrograph-frame';

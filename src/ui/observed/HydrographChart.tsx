@@ -1,6 +1,6 @@
 import { baseflowMethodSpec } from '../../core';
 import type { Streamflow } from '../../scenario/types';
-import { loadHydrographSide, useDeferredDerived, useScenario } from '../../store';
+import { loadHydrographSide, useDerived, useScenario } from '../../store';
 import { lazyPart } from '../layout/LazyPart';
 import { StreamflowButtons } from './StreamflowButtons';
 import './observed.css';
@@ -23,7 +23,13 @@ const HydrographPlot = lazyPart<{ flow: Streamflow | null }>('hydrograph', () =>
 export function HydrographChart() {
   const flow = useScenario((s) => s.streamflow);
   const computed = useScenario((s) => s.hydrograph.transform !== null);
-  const withTotal = useDeferredDerived((d, s) => d.totalFlow(s) !== null);
+  // Whether the chart draws a computed total flow, without routing the excess here (this part is on the first
+  // screen, and the routing is read a render behind, see store/deferred.ts): a transform over a separated record,
+  // with losses and an area to route.
+  const withTotal = useDerived(
+    (d, s) =>
+      s.hydrograph.transform !== null && s.catchment.areaM2 > 0 && d.results(s).ok && d.separation(s)?.ok === true,
+  );
   const endLabel =
     flow?.baseflow.kind === 'straight-line'
       ? baseflowMethodSpec('straight-line').params.find((p) => p.key === 'endTimeH')?.label
