@@ -51,16 +51,22 @@ describe('a series path thinned per pixel column', () => {
           const columns = new Map<number, number[]>();
           qs.forEach((q, i) => {
             const c = Math.round(x(i));
-            columns.set(c, [...(columns.get(c) ?? []), y(q)]);
+            const list = columns.get(c);
+            if (list) list.push(y(q));
+            else columns.set(c, [y(q)]);
           });
           const drawn = new Map<number, number[]>();
           let lastX = -Infinity;
+          let inOrder = true;
           for (const [px, py] of pts) {
-            expect(px).toBeGreaterThanOrEqual(lastX);
+            if (px < lastX) inOrder = false;
             lastX = px;
             const c = Math.round(px);
-            drawn.set(c, [...(drawn.get(c) ?? []), py]);
+            const list = drawn.get(c);
+            if (list) list.push(py);
+            else drawn.set(c, [py]);
           }
+          expect(inOrder).toBe(true);
           for (const [c, ys] of columns) {
             const got = drawn.get(c) ?? [];
             expect(got.length).toBeLessThanOrEqual(4);
@@ -70,8 +76,8 @@ describe('a series path thinned per pixel column', () => {
           cases++;
         },
       ),
-      { numRuns: 60 },
+      { numRuns: 40 },
     );
-    expect(cases).toBe(60);
+    expect(cases).toBe(40);
   });
 });
