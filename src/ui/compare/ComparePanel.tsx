@@ -298,9 +298,7 @@ export function ComparePanel() {
   if (pins.length === 0 && problems.length === 0) return null;
   const totals = pins.map((p) => pinTotals(p, derivedOf(p)));
   const first = totals[0];
-  const tableRows = totals.some((t) => t.hydrograph !== null)
-    ? rows(units).concat(hydrographRows(units))
-    : rows(units);
+  const tableRows = totals.some((t) => t.hydrograph !== null) ? rows(units).concat(hydrographRows(units)) : rows(units);
 
   return (
     <section className="panel compare" aria-labelledby="compare-title">
