@@ -28,6 +28,9 @@ const EventsView = lazyPart('event set', () => import('./events').then((m) => m.
 const DesignStormView = lazyPart('design storm view', () =>
   Promise.all([import('./design-storm'), loadHydrographSide()]).then(([m]) => m.DesignStormView),
 );
+const RainOverRunoff = lazyPart('rain over runoff view', () =>
+  Promise.all([import('./observed/RainOverRunoff'), loadHydrographSide()]).then(([m]) => m.RainOverRunoff),
+);
 const RecordView = lazyPart('long record view', () => import('./record').then((m) => m.RecordView));
 const ComparePanel = lazyPart('comparison', () => import('./compare').then((m) => m.ComparePanel));
 // Parts that show the computed hydrograph wait for its code too (loadHydrographSide), so they draw it at once.
@@ -114,6 +117,15 @@ function Workbench({ rainfallTools, updates }: { rainfallTools?: ReactNode; upda
                 </div>
                 <PinnedComparison />
               </div>
+            ),
+          },
+          {
+            id: 'rain-over-runoff',
+            label: 'Rain over runoff',
+            content: (
+              <Fragment key={format}>
+                <RainOverRunoff />
+              </Fragment>
             ),
           },
           {

@@ -91,7 +91,7 @@ async function installProbe(page) {
     const excess = document.querySelector('[data-result="excess"]');
     const loss = document.querySelector('[data-layer="loss"]');
     const line = document.querySelector('.loss-line__stroke');
-    const probe = { samples: [], frames: [], queue: [], work: [], pending: null, done: 0 };
+    const probe = { samples: [], frames: [], queue: [], work: [], pending: null, done: 0, hydro: [], lastT0: null };
     window.__probe = probe;
     const tryFinish = () => {
       const p = probe.pending;
@@ -116,6 +116,7 @@ async function installProbe(page) {
       (e) => {
         if (e.buttons !== 1) return;
         probe.pending = { t0: e.timeStamp, handled: performance.now(), results: false, chart: false, line: false };
+        probe.lastT0 = e.timeStamp;
       },
       { capture: true },
     );
@@ -131,6 +132,16 @@ async function installProbe(page) {
       if (probe.pending) probe.pending.line = true;
       tryFinish();
     }).observe(line, { attributes: true, attributeFilter: ['y1'] });
+    // The computed hydrograph follows in a render of its own (useDeferredDerived): time from the
+    // pointer event to its path being redrawn, apart from the page's work for the drag itself.
+    const computed = document.querySelector('[data-layer="computed-direct"]');
+    if (computed) {
+      new MutationObserver(() => {
+        if (probe.lastT0 === null) return;
+        probe.hydro.push(performance.now() - probe.lastT0);
+        probe.lastT0 = null;
+      }).observe(computed, { attributes: true, attributeFilter: ['d'] });
+    }
   });
 }
 
@@ -159,19 +170,32 @@ async function dragAcross(page, steps) {
       skipped++;
       await page.evaluate(() => (window.__probe.pending = null));
     }
+    // With a hydrograph on screen, let its deferred redraw land before the next move, as it does between
+    // a pointer's moves a frame apart (a move that leaves it unchanged times out and is not counted).
+    await page
+      .waitForFunction(
+        () => window.__probe.lastT0 === null || !document.querySelector('[data-layer="computed-direct"]'),
+        null,
+        {
+          timeout: 200,
+        },
+      )
+      .catch(() => page.evaluate(() => (window.__probe.lastT0 = null)));
   }
   await page.mouse.up();
-  const { samples, frames, queue, work } = await page.evaluate(() => ({
+  const { samples, frames, queue, work, hydro } = await page.evaluate(() => ({
     samples: window.__probe.samples,
     frames: window.__probe.frames,
     queue: window.__probe.queue,
     work: window.__probe.work,
+    hydro: window.__probe.hydro,
   }));
   return {
     update: summarise(samples),
     frame: summarise(frames),
     queue: summarise(queue),
     work: summarise(work),
+    hydrograph: hydro.length > 0 ? summarise(hydro) : null,
     skipped,
   };
 }
@@ -380,6 +404,12 @@ try {
       `the page's own work: p50 ${ms(dragHydro.work.p50)}, p95 ${ms(dragHydro.work.p95)}, max ${ms(dragHydro.work.max)}` +
       `   (target p95 < ${TARGET_P95_MS} ms: ${verdict(dragHydro.work.p95)})`,
   );
+  if (dragHydro.hydrograph) {
+    console.log(
+      `  the computed hydrograph redrawn after it (a deferred render), from the pointer event's time stamp: ` +
+        `${dragHydro.hydrograph.n} redraws, p50 ${ms(dragHydro.hydrograph.p50)}, p95 ${ms(dragHydro.hydrograph.p95)}`,
+    );
+  }
   console.log('\n100,000-bar record:');
   console.log(`  open and first draw (navigation → chart on screen): ${big.loadMs} ms`);
   console.log(

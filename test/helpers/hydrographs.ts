@@ -85,3 +85,29 @@ export function fineVolumeAbove(
   }
   return { aboveM3: above * 3600, toleranceM3: ((8 / (slices * slices)) * abs + 1e-12 * magnitude) * 3600 + 1e-9 };
 }
+
+/**
+ * The record of a linear reservoir (a Nash cascade of one, storage constant
+ * k) at whole hours, for `excessMm` falling evenly over the hour from
+ * `wetHourStartH` on `areaM2`: zero until then, at the end of the hour
+ * Q = (V/1 h)·(1 − e^(−1/k)), then Q·e^(−(t − end)/k) (Chow, Maidment & Mays
+ * 1988, §7.5, the linear reservoir; written from the formula, not from the
+ * core).
+ */
+export function linearReservoirRecord(
+  wetHourStartH: number,
+  excessMm: number,
+  kH: number,
+  hours: number,
+  areaM2: number,
+): { timesH: number[]; directM3s: number[] } {
+  const timesH: number[] = [];
+  const directM3s: number[] = [];
+  const peak = ((excessMm * areaM2 * 1e-3) / 3600) * (1 - Math.exp(-1 / kH));
+  for (let t = 0; t <= hours; t++) {
+    timesH.push(t);
+    const after = t - (wetHourStartH + 1);
+    directM3s.push(t <= wetHourStartH ? 0 : peak * Math.exp(-after / kH));
+  }
+  return { timesH, directM3s };
+}

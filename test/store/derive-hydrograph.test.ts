@@ -66,3 +66,35 @@ describe('the hydrograph side before its code arrives', () => {
     expect(d.hydrograph({ ...FOUR_BARS, hydrograph: { ...FOUR_BARS.hydrograph, transform: null } })).toBeNull();
   });
 });
+
+describe('the computed total flow', () => {
+  beforeAll(() => loadHydrographSide());
+  it('is the separated baseflow plus the computed direct runoff at each sample of the record, worked by hand', () => {
+    // One 1-hour bar of 12 mm under φ = 2 mm/h: 10 mm of excess on 1 km². Triangular, lag 2.5 h: Tp = 3 h,
+    // base 8 h; hourly samples 0, 1/3, 2/3, 1, 0.8, 0.6, 0.4, 0.2, 0 of the peak, which sum to 4, so the peak
+    // is ¼ × (1e6 m² × 0.010 m) / 3600 s = 0.69444 m³/s (as in design-peak.test.tsx).
+    // The record: hourly from the storm start, 1 m³/s but for a bump at hours 2–4; constant separation from
+    // the start of rise keeps 1 m³/s under it, and is the flow itself elsewhere.
+    const scenario: Scenario = {
+      ...FOUR_BARS,
+      storm: { durationsH: [1], depthsMm: [12] },
+      method: { kind: 'constant', rateMmH: 2 },
+      hydrograph: { ...FOUR_BARS.hydrograph, transform: { kind: 'triangular', lagH: 2.5 } },
+      streamflow: {
+        timesH: [0, 1, 2, 3, 4, 5, 6, 7, 8, 9, 10],
+        dischargeM3s: [1, 1, 2, 3, 2, 1, 1, 1, 1, 1, 1],
+        offsetH: 0,
+        baseflow: { kind: 'constant' },
+        baseflowMemory: {},
+        useAsObserved: false,
+      },
+    };
+    const total = createDerived().totalFlow(scenario);
+    expect(total).not.toBeNull();
+    const peak = 1e4 / 3600 / 4;
+    const shares = [0, 1 / 3, 2 / 3, 1, 0.8, 0.6, 0.4, 0.2, 0, 0, 0];
+    const expected = shares.map((share) => 1 + share * peak);
+    Array.from(total?.dischargeM3s ?? []).forEach((q, i) => expect(q).toBeCloseTo(expected[i] as number, 9));
+    expect(Array.from(total?.timesH ?? [])).toEqual(scenario.streamflow?.timesH);
+  });
+});

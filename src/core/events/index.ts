@@ -3,6 +3,13 @@
 // Re-exported from src/core/index.ts.
 export { validateEventList, type CatchmentEvent } from './event';
 export { fitEvents, type EventFit } from './fit';
-export { summariseFits, type FitSummary } from './summary';
+export { summariseFits, summariseValues, type FitSummary } from './summary';
+export {
+  fitEventTransforms,
+  summariseTransformFits,
+  type EventTransformFit,
+  type HydrographEvent,
+  type TransformFitSettings,
+} from './transform-fit';
 export { pickDesignValue, type DesignPick } from './design-value';
 export { applyDesignValue, type EventRunoff } from './apply';

@@ -18,8 +18,16 @@ export interface FitSummary {
 export function summariseFits(fits: readonly EventFit[]): FitSummary {
   const values: number[] = [];
   for (const fit of fits) if (fit.result.ok) values.push(fit.result.value);
+  return summariseValues(values, fits.length - values.length);
+}
+
+/**
+ * Count, mean, median, min and max of a list of fitted values (sorted in
+ * place), with `withoutAnswer` the events that gave none. Shared by the loss
+ * fits and the transform fits of an event set, so both spreads read alike.
+ */
+export function summariseValues(values: number[], withoutAnswer: number): FitSummary {
   const count = values.length;
-  const withoutAnswer = fits.length - count;
   if (count === 0) {
     return { count, withoutAnswer, mean: null, median: null, min: null, max: null };
   }

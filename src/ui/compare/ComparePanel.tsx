@@ -1,5 +1,5 @@
-import { useMemo, useRef } from 'react';
-import { methodSpec, type UnitSystem } from '../../core';
+import { useEffect, useMemo, useRef, useState } from 'react';
+import { methodSpec, type RunoffHydrograph, type UnitSystem } from '../../core';
 import { createDerived, useScenario, type Derived } from '../../store';
 import type { ChartFrame } from '../chart/frame';
 import { useElementWidth } from '../chart/useElementWidth';
@@ -9,6 +9,9 @@ import { formatPercent, formatValue } from '../format';
 import { useServices, usePins } from '../services/services';
 import { displayUnit, paramToDisplay, paramUnitText, toDisplay, unitText, type Quantity } from '../units';
 import { fittedCellText } from '../results/fit-words';
+import { dischargeText, dischargeToDisplay, dischargeUnitText } from '../observed/discharge';
+import { StaticHydrograph, staticHydrographFrame, visibleEndH } from '../observed/StaticHydrograph';
+import { hoursMinutes } from '../results/hours-minutes';
 import { commonFrames } from './common-frame';
 import { difference, type Difference } from './difference';
 import { MAX_PINS, type Pin } from '../services/pins';
@@ -16,17 +19,55 @@ import { totalsOf, type Totals } from '../results/totals';
 import './compare.css';
 
 const SMALL_CHART_HEIGHT = 190;
+const SMALL_HYDROGRAPH_HEIGHT = 150;
+
+/** A pin's totals with its computed hydrograph (null without a unit hydrograph, or when it cannot be computed). */
+interface PinTotals extends Totals {
+  readonly hydrograph: RunoffHydrograph | null;
+}
+
+function pinTotals(pin: Pin, derived: Derived): PinTotals {
+  const computed = derived.hydrograph(pin.scenario);
+  return { ...totalsOf(pin.scenario, derived), hydrograph: computed?.ok ? computed.hydrograph : null };
+}
 const GAP_PX = 12;
 
 interface Row {
   readonly id: string;
   readonly label: string;
   /** Shown value and the value compared (display units), per pin. */
-  readonly cell: (t: Totals) => { text: string; value: number | null };
+  readonly cell: (t: PinTotals) => { text: string; value: number | null };
   readonly unit: string;
   readonly percentPoints?: boolean;
   /** Only pins whose cell key matches the first's are compared (a fitted value of another parameter is not). */
   readonly key?: (t: Totals) => string;
+}
+
+/** Peak discharge and time to peak, while a pin has a hydrograph (a pinned design storm's, say). */
+function hydrographRows(units: UnitSystem): Row[] {
+  return [
+    {
+      id: 'peak-discharge',
+      label: 'Peak discharge',
+      cell: (t) =>
+        t.hydrograph
+          ? {
+              text: dischargeText(t.hydrograph.peakM3s, units),
+              value: dischargeToDisplay(t.hydrograph.peakM3s, units),
+            }
+          : { text: '—', value: null },
+      unit: dischargeUnitText(units),
+    },
+    {
+      id: 'time-to-peak',
+      label: 'Time to peak',
+      cell: (t) =>
+        t.hydrograph
+          ? { text: `${hoursMinutes(t.hydrograph.timeOfPeakH)} h:mm`, value: t.hydrograph.timeOfPeakH }
+          : { text: '—', value: null },
+      unit: 'h',
+    },
+  ];
 }
 
 function rows(units: UnitSystem): Row[] {
@@ -81,9 +122,11 @@ interface PinnedChartProps {
   readonly frame: ChartFrame;
   readonly units: UnitSystem;
   readonly derived: Derived;
+  /** The discharge axis's top and the time axis's end shared by every pin's hydrograph (null: no pin has one). */
+  readonly hydroScale: { readonly peakM3s: number; readonly endH: number } | null;
 }
 
-function PinnedChart({ pin, index, frame, units, derived }: PinnedChartProps) {
+function PinnedChart({ pin, index, frame, units, derived, hydroScale }: PinnedChartProps) {
   const { pins } = useServices();
   const results = derived.results(pin.scenario);
   const method = derived.effectiveMethod(pin.scenario);
@@ -114,7 +157,42 @@ function PinnedChart({ pin, index, frame, units, derived }: PinnedChartProps) {
         label={`Chart of ${name}`}
         className="compare__chart"
       />
+      {hydroScale ? (
+        <PinnedHydrograph pin={pin} frame={frame} units={units} derived={derived} scale={hydroScale} />
+      ) : null}
     </li>
+  );
+}
+
+/** A pin's computed hydrograph on the scale every pin shares, or a line saying it has none. */
+function PinnedHydrograph({
+  pin,
+  frame,
+  units,
+  derived,
+  scale,
+}: {
+  pin: Pin;
+  frame: ChartFrame;
+  units: UnitSystem;
+  derived: Derived;
+  scale: { readonly peakM3s: number; readonly endH: number };
+}) {
+  const computed = derived.hydrograph(pin.scenario);
+  const h = computed?.ok ? computed.hydrograph : null;
+  const hFrame = useMemo(
+    () =>
+      staticHydrographFrame(pin.scenario.storm, scale.peakM3s, scale.endH, frame.width, SMALL_HYDROGRAPH_HEIGHT, units),
+    [pin.scenario.storm, scale, frame.width, units],
+  );
+  if (!h) return <p className="compare__no-hydrograph">No unit hydrograph chosen in this pin.</p>;
+  return (
+    <StaticHydrograph
+      frame={hFrame}
+      series={h}
+      className="compare__chart"
+      label={`Hydrograph of ${pin.scenario.name}: peak ${dischargeText(h.peakM3s, units)} ${hoursMinutes(h.timeOfPeakH)} after the storm start`}
+    />
   );
 }
 
@@ -141,6 +219,23 @@ function PinnedCharts({
       ),
     [pins, chartWidth, units],
   );
+  // One discharge and time scale over every pin's hydrograph, as the hyetographs share theirs.
+  let peakM3s = 0;
+  let endH = 0;
+  let any = false;
+  for (const pin of pins) {
+    const computed = derivedOf(pin).hydrograph(pin.scenario);
+    if (!computed?.ok) continue;
+    any = true;
+    peakM3s = Math.max(peakM3s, computed.hydrograph.peakM3s);
+    endH = Math.max(endH, visibleEndH(computed.hydrograph));
+  }
+  const hydroKey = any ? `${peakM3s} ${endH}` : '';
+  const hydroScale = useMemo(
+    () => (hydroKey === '' ? null : { peakM3s, endH }),
+    // eslint-disable-next-line react-hooks/exhaustive-deps -- keyed on the two numbers, read through the key
+    [hydroKey],
+  );
   return (
     <div ref={boxRef} className="compare__cards-box">
       <ul
@@ -151,7 +246,15 @@ function PinnedCharts({
         {pins.map((pin, i) => {
           const frame = frames[i];
           return frame ? (
-            <PinnedChart key={pin.id} pin={pin} index={i} frame={frame} units={units} derived={derivedOf(pin)} />
+            <PinnedChart
+              key={pin.id}
+              pin={pin}
+              index={i}
+              frame={frame}
+              units={units}
+              derived={derivedOf(pin)}
+              hydroScale={hydroScale}
+            />
           ) : null;
         })}
       </ul>
@@ -179,10 +282,23 @@ export function ComparePanel() {
     }
     return d;
   };
+  // The pins' hydrographs come from the hydrograph side of the derived values, fetched after the first screen:
+  // draw again once it is here.
+  const [, setHydrographReady] = useState(false);
+  useEffect(() => {
+    let live = true;
+    createDerived().whenHydrographReady(() => {
+      if (live) setHydrographReady(true);
+    });
+    return () => {
+      live = false;
+    };
+  }, []);
 
   if (pins.length === 0 && problems.length === 0) return null;
-  const totals = pins.map((p) => totalsOf(p.scenario, derivedOf(p)));
+  const totals = pins.map((p) => pinTotals(p, derivedOf(p)));
   const first = totals[0];
+  const tableRows = totals.some((t) => t.hydrograph !== null) ? rows(units).concat(hydrographRows(units)) : rows(units);
 
   return (
     <section className="panel compare" aria-labelledby="compare-title">
@@ -228,7 +344,7 @@ export function ComparePanel() {
                 </tr>
               </thead>
               <tbody>
-                {rows(units).map((row) => {
+                {tableRows.map((row) => {
                   const base = first ? row.cell(first) : null;
                   return (
                     <tr key={row.id} data-row={row.id}>

@@ -19,6 +19,7 @@ import { useEventFits } from '../events/use-event-fits';
 import { formatPercent, formatValue } from '../format';
 import { displayUnit, paramToDisplay, paramUnitText, toDisplay, unitText } from '../units';
 import { buildDesignStorm, FIELD_LABELS, FORM_DEPTH_UNIT, formInUnits, type DesignForm, type FormField } from './build';
+import { DesignHydrograph } from './DesignHydrograph';
 import { StormBars } from './StormBars';
 import './design-storm.css';
 import '../events/events.css';
@@ -130,7 +131,7 @@ export function DesignStormView() {
         transform,
         areaM2,
       );
-      return { ok: true as const, peakM3s: h.peakM3s, timeOfPeakH: h.timeOfPeakH };
+      return { ok: true as const, peakM3s: h.peakM3s, timeOfPeakH: h.timeOfPeakH, hydrograph: h };
     } catch (error) {
       if (isInputError(error)) return { ok: false as const, message: error.message };
       throw error;
@@ -340,6 +341,7 @@ export function DesignStormView() {
                 {result.message}
               </p>
             ) : null}
+            {peak?.ok ? <DesignHydrograph storm={built.storm} hydrograph={peak.hydrograph} units={units} /> : null}
             <div className="design-result__actions">
               <button type="button" className="button--primary" onClick={putOnBench}>
                 Put the design storm on the workbench

@@ -12,7 +12,9 @@ import {
   unitText,
 } from '../units';
 import { FitChart } from './FitChart';
+import { TransformSpread, transformCell } from './TransformSpread';
 import { useEventFits } from './use-event-fits';
+import { useEventTransformFits } from './use-event-transform-fits';
 
 const PICKS = [
   { value: 'median', label: 'Median' },
@@ -31,6 +33,7 @@ export function FitAll() {
   const pick = useScenario((s) => s.eventSet.designPick);
   const actions = useActions();
   const { fits, outcome } = useEventFits();
+  const shapes = useEventTransformFits(fits);
   const spec = methodSpec(fits.method.kind);
   const param = spec.params.find((p) => p.key === fits.parameter);
   const paramLabel = param?.label ?? fits.parameter;
@@ -81,6 +84,7 @@ export function FitAll() {
             <th scope="col">Observed runoff</th>
             <th scope="col">Runoff fraction</th>
             <th scope="col">Fitted {paramLabel.toLowerCase()}</th>
+            {shapes ? <th scope="col">Fitted {shapes.param.label.toLowerCase()}</th> : null}
           </tr>
         </thead>
         <tbody>
@@ -90,7 +94,7 @@ export function FitAll() {
               return (
                 <tr key={row.event.id} className="fit-all__row--none">
                   <th scope="row">{name}</th>
-                  <td colSpan={4}>
+                  <td colSpan={shapes ? 5 : 4}>
                     <strong>No answer:</strong> {row.message}
                   </td>
                 </tr>
@@ -112,6 +116,7 @@ export function FitAll() {
                     </>
                   )}
                 </td>
+                {shapes ? <td>{transformCell(shapes, row.event.id)}</td> : null}
               </tr>
             );
           })}
@@ -146,6 +151,8 @@ export function FitAll() {
           <dd>{stat(summary.max)}</dd>
         </div>
       </dl>
+
+      {shapes ? <TransformSpread shapes={shapes} /> : null}
 
       <FitChart
         rows={fits.rows}

@@ -8,6 +8,7 @@ import {
   type TransformParam,
 } from '../../core';
 import { useActions, useDerived, useScenario, useWorkbenchStore } from '../../store';
+import { useDeferredDerived } from '../../store/deferred';
 import {
   fitRunoffTransform,
   fittableTransformKeys,
@@ -51,8 +52,9 @@ interface Row {
 /** Peak and time to peak of the computed hydrograph; against a record, the errors and the efficiency. */
 function HydrographResults() {
   const units = useScenario((s) => s.units);
-  const computed = useDerived((d, s) => d.hydrograph(s));
-  const comparison = useDerived((d, s) => d.comparison(s));
+  // Deferred with the chart's layer (see useDeferredDerived): a drag of the loss line does not wait for the routing.
+  const computed = useDeferredDerived((d, s) => d.hydrograph(s));
+  const comparison = useDeferredDerived((d, s) => d.comparison(s));
   if (computed === null) return null;
   if (!computed.ok) {
     return (

@@ -1,6 +1,7 @@
 import { useMemo } from 'react';
 import type { RunoffHydrograph, UnitSystem } from '../../core';
-import { useDerived, useScenario, type ComputedHydrograph, type TimeSeries } from '../../store';
+import { useScenario, type ComputedHydrograph, type TimeSeries } from '../../store';
+import { useDeferredDerived } from '../../store/deferred';
 import { hoursMinutes } from '../results/hours-minutes';
 import { dischargeText } from './discharge';
 import type { HydrographFrame } from './hydrograph-frame';
@@ -28,8 +29,9 @@ export function computedSummary(h: RunoffHydrograph, units: UnitSystem, withTota
  */
 export function ComputedLayer({ frame }: { frame: HydrographFrame }) {
   const units = useScenario((s) => s.units);
-  const computed = useDerived((d, s) => d.hydrograph(s));
-  const total = useDerived((d, s) => d.totalFlow(s));
+  // A render behind the hyetograph during a drag (see useDeferredDerived), so the drag never waits for the routing.
+  const computed = useDeferredDerived((d, s) => d.hydrograph(s));
+  const total = useDeferredDerived((d, s) => d.totalFlow(s));
   const direct = computed?.ok ? computed.hydrograph : null;
   const d = useMemo(
     () => (direct ? seriesPath(direct.timesH, direct.dischargeM3s, 0, frame.x, frame.y) : ''),

@@ -23,7 +23,13 @@ const HydrographPlot = lazyPart<{ flow: Streamflow | null }>('hydrograph', () =>
 export function HydrographChart() {
   const flow = useScenario((s) => s.streamflow);
   const computed = useScenario((s) => s.hydrograph.transform !== null);
-  const withTotal = useDerived((d, s) => d.totalFlow(s) !== null);
+  // Whether the chart draws a computed total flow, without routing the excess here (this part is on the first
+  // screen, and the routing is read a render behind, see store/deferred.ts): a transform over a separated record,
+  // with losses and an area to route.
+  const withTotal = useDerived(
+    (d, s) =>
+      s.hydrograph.transform !== null && s.catchment.areaM2 > 0 && d.results(s).ok && d.separation(s)?.ok === true,
+  );
   const endLabel =
     flow?.baseflow.kind === 'straight-line'
       ? baseflowMethodSpec('straight-line').params.find((p) => p.key === 'endTimeH')?.label

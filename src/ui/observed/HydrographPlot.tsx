@@ -9,6 +9,7 @@ import {
 } from '../../core';
 import type { Streamflow } from '../../scenario/types';
 import { useDerived, useScenario, type Separation } from '../../store';
+import { useDeferredDerived } from '../../store/deferred';
 import { Axes } from '../chart/Axes';
 import { useTimeSpanH } from '../chart/time-span';
 import { useElementWidth } from '../chart/useElementWidth';
@@ -101,11 +102,18 @@ function summaryOf(flow: Streamflow, sep: Separation | null, clock: RecordClock,
  * the computed direct runoff (and total flow) over it, or the computed
  * hydrograph alone.
  */
-export function HydrographPlot({ flow }: { flow: Streamflow | null }) {
+export function HydrographPlot({
+  flow,
+  labelledBy = 'hydrograph-title',
+}: {
+  flow: Streamflow | null;
+  /** Id of the heading that names the chart (the workbench's, or another view's). */
+  labelledBy?: string;
+}) {
   const [boxRef, width] = useElementWidth<HTMLDivElement>(880);
   const storm = useScenario((s) => s.storm);
   const units = useScenario((s) => s.units);
-  const computedTop = useDerived((d, s) => computedPeakM3s(d.hydrograph(s), d.totalFlow(s)));
+  const computedTop = useDeferredDerived((d, s) => computedPeakM3s(d.hydrograph(s), d.totalFlow(s)));
   const span = useTimeSpanH();
   const recordPeakM3s = useMemo(
     () => (flow ? (flow.dischargeM3s[findPeakIndex(flow.dischargeM3s)] as number) : 0),
@@ -122,13 +130,7 @@ export function HydrographPlot({ flow }: { flow: Streamflow | null }) {
   return (
     <>
       <div className="chart__box" ref={boxRef}>
-        <svg
-          className="chart__svg"
-          width={width}
-          height={HYDROGRAPH_HEIGHT}
-          role="group"
-          aria-labelledby="hydrograph-title"
-        >
+        <svg className="chart__svg" width={width} height={HYDROGRAPH_HEIGHT} role="group" aria-labelledby={labelledBy}>
           <Axes frame={frame} />
           {flow ? <RecordLayers flow={flow} frame={frame} /> : null}
           <ComputedLayer frame={frame} />

@@ -12,29 +12,61 @@ export interface Px {
   (value: number): number;
 }
 
-interface Point {
-  readonly x: number;
-  readonly y: number;
-  /** Order of arrival within the column. */
-  readonly n: number;
-}
-
-/** Builds a path from points in x order (either way), keeping at most four per pixel column. */
+/**
+ * Builds a path from points in x order (either way), keeping at most four per
+ * pixel column: the first, highest, lowest and last, in their order of
+ * arrival. No object per point: a hydrograph redrawn on every drag frame
+ * would otherwise leave thousands for the collector each frame.
+ */
 function thinner() {
   const parts: string[] = [];
   let col = Number.NaN;
   let count = 0;
-  let first: Point | null = null;
-  let top: Point | null = null;
-  let bottom: Point | null = null;
-  let last: Point | null = null;
+  // The column's kept points: arrival number, x and y of the first, top (least y), bottom and last.
+  let fN = -1;
+  let fX = 0;
+  let fY = 0;
+  let tN = -1;
+  let tX = 0;
+  let tY = 0;
+  let bN = -1;
+  let bX = 0;
+  let bY = 0;
+  let lN = -1;
+  let lX = 0;
+  let lY = 0;
+  const keptN = [0, 0, 0, 0];
+  const keptX = [0, 0, 0, 0];
+  const keptY = [0, 0, 0, 0];
+  let k = 0;
+  /** Adds a point to the column's kept ones in order of arrival, each once (a point may be first, top and last at once). */
+  const keep = (n: number, x: number, y: number): void => {
+    let i = k;
+    for (let j = 0; j < k; j++) if (keptN[j] === n) return;
+    while (i > 0 && (keptN[i - 1] as number) > n) {
+      keptN[i] = keptN[i - 1] as number;
+      keptX[i] = keptX[i - 1] as number;
+      keptY[i] = keptY[i - 1] as number;
+      i--;
+    }
+    keptN[i] = n;
+    keptX[i] = x;
+    keptY[i] = y;
+    k++;
+  };
   const flush = (): void => {
-    const kept = [first, top, bottom, last]
-      .filter((p): p is Point => p !== null)
-      .sort((a, b) => a.n - b.n)
-      .filter((p, i, all) => i === 0 || p.n !== (all[i - 1] as Point).n);
-    for (const p of kept) parts.push(`${parts.length === 0 ? 'M' : 'L'}${p.x.toFixed(1)},${p.y.toFixed(1)}`);
-    first = top = bottom = last = null;
+    if (fN < 0) return;
+    k = 0;
+    keep(fN, fX, fY);
+    keep(tN, tX, tY);
+    keep(bN, bX, bY);
+    keep(lN, lX, lY);
+    for (let i = 0; i < k; i++) {
+      parts.push(
+        `${parts.length === 0 ? 'M' : 'L'}${(keptX[i] as number).toFixed(1)},${(keptY[i] as number).toFixed(1)}`,
+      );
+    }
+    fN = tN = bN = lN = -1;
   };
   return {
     add(x: number, y: number): void {
@@ -43,12 +75,27 @@ function thinner() {
         flush();
         col = c;
       }
-      const p: Point = { x, y, n: count++ };
-      if (!first) first = p;
-      // Screen y grows downward.
-      if (!top || y < top.y) top = p;
-      if (!bottom || y > bottom.y) bottom = p;
-      last = p;
+      const n = count++;
+      if (fN < 0) {
+        fN = tN = bN = n;
+        fX = tX = bX = x;
+        fY = tY = bY = y;
+      } else {
+        // Screen y grows downward.
+        if (y < tY) {
+          tN = n;
+          tX = x;
+          tY = y;
+        }
+        if (y > bY) {
+          bN = n;
+          bX = x;
+          bY = y;
+        }
+      }
+      lN = n;
+      lX = x;
+      lY = y;
     },
     end(): string {
       flush();

@@ -3,6 +3,7 @@ import { act, screen, waitFor, within } from '@testing-library/react';
 import { describe, expect, it } from 'vitest';
 import { computeLosses, runoffVolumeM3 } from '../../../src/core';
 import { CAUTION_TEXT } from '../../../src/scenario';
+import { loadHydrographSide } from '../../../src/store';
 import { loadReport } from '../../../src/ui/export';
 import { formatPercent, formatValue } from '../../../src/ui/format';
 import { FOUR_BARS } from '../../helpers/scenario-fixtures';
@@ -52,6 +53,29 @@ describe('printable report', () => {
       window.dispatchEvent(new Event('afterprint'));
     });
     expect(screen.queryByRole('article', { name: 'Printable report' })).toBeNull();
+  });
+
+  it('lists the unit hydrograph with the peak worked by hand', async () => {
+    // One 1-hour bar of 12 mm under φ = 2 mm/h: 10 mm of excess on 1 km². Triangular, lag 2.5 h: Tp = 3 h,
+    // base 8 h; hourly samples of the triangle sum to 4 peaks, so the peak is ¼ × 1e6 m² × 0.010 m / 3600 s
+    // = 0.6944 m³/s at 3:00 (= 0.2083·A·Q/Tp, NEH-630 ch. 16, from memory).
+    renderTools({
+      fallback: {
+        ...FOUR_BARS,
+        storm: { durationsH: [1], depthsMm: [12] },
+        method: { kind: 'constant', rateMmH: 2 },
+        hydrograph: { ...FOUR_BARS.hydrograph, transform: { kind: 'triangular', lagH: 2.5 } },
+      },
+    });
+    await act(() => loadReport());
+    await act(() => loadHydrographSide());
+    act(() => {
+      window.dispatchEvent(new Event('beforeprint'));
+    });
+    const report = screen.getByRole('article', { name: 'Printable report' });
+    expect(within(report).getByRole('region', { name: 'Inputs' })).toHaveTextContent(
+      'NRCS triangular unit hydrograph: Lag = 2.5 h; peak discharge 0.6944 m³/s at 3:00 after the storm start',
+    );
   });
 
   it('shows the scenario’s own units and says when there is nothing to fit', async () => {

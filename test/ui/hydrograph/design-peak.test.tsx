@@ -34,4 +34,38 @@ describe('the design peak', () => {
       '0.6944 m³/s at 3:00 after the storm start',
     );
   });
+
+  it('draws the design hydrograph and pins it to compare, its peak and time to peak in the comparison', async () => {
+    const scenario: Scenario = {
+      ...FOUR_BARS,
+      method: { kind: 'constant', rateMmH: 2 },
+      hydrograph: { ...FOUR_BARS.hydrograph, transform: { kind: 'triangular', lagH: 2.5 } },
+    };
+    const { user } = renderWorkbench(scenario);
+    await user.click(screen.getByRole('tab', { name: 'Design storm' }));
+    await lazyPartsLoaded();
+    await user.click(screen.getByRole('radio', { name: 'Uniform depth' }));
+    await retype(user, 'Storm duration (min)', '60');
+    await retype(user, 'Time step (min)', '60');
+    await retype(user, 'Storm depth (mm)', '12');
+    // The same case as above, worked by hand: peak 0.6944 m³/s at 3 h.
+    const figure = screen.getByRole('figure', { name: 'Design hydrograph' });
+    const chart = within(figure).getByRole('img', { name: /^Design direct runoff hydrograph/ });
+    expect(chart).toHaveAccessibleName('Design direct runoff hydrograph: peak 0.6944 m³/s 3:00 after the storm start.');
+    expect(chart.querySelector('[data-layer="computed-direct"]')?.getAttribute('d')).toMatch(
+      /^M[\d.]+,[\d.]+(L[\d.]+,[\d.]+)+$/,
+    );
+
+    await user.click(screen.getByRole('button', { name: 'Pin the design result to compare' }));
+    await user.click(screen.getByRole('tab', { name: 'Workbench' }));
+    await lazyPartsLoaded();
+    const table = await screen.findByRole('table', { name: /^Totals of the pinned scenarios/ });
+    const cells = (name: string) =>
+      within(within(table).getByRole('rowheader', { name }).closest('tr') as HTMLElement).getAllByRole('cell');
+    expect(cells('Peak discharge')[0]).toHaveTextContent('0.6944 m³/s');
+    expect(cells('Time to peak')[0]).toHaveTextContent('3:00 h:mm');
+    expect(
+      screen.getByRole('img', { name: /^Hydrograph of Design storm: .*peak 0\.6944 m³\/s 3:00/ }),
+    ).toBeInTheDocument();
+  });
 });

@@ -63,7 +63,7 @@ describe('cutting a long record into events', () => {
   it('is a view of its own beside the event set and the design storm', async () => {
     const { user } = renderWorkbench(FOUR_BARS);
     const tabs = screen.getAllByRole('tab').map((t) => t.textContent);
-    expect(tabs).toEqual(['Workbench', 'Event set', 'Design storm', 'Long record']);
+    expect(tabs).toEqual(['Workbench', 'Rain over runoff', 'Event set', 'Design storm', 'Long record']);
     const view = await openView(user);
     expect(within(view).getByText('No rainfall record yet.', { exact: false })).toBeInTheDocument();
   });
