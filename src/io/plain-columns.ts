@@ -90,13 +90,6 @@ export function plainNumberAt(text: string, a: number, b: number, mark: number):
 /** Lines given to the general splitter to find the header and the first data row. */
 const HEAD_LINES = 200;
 
-/** The trimmed bounds of text[a, b). */
-function trimmed(text: string, a: number, b: number): [number, number] {
-  while (a < b && isSpace(text.charCodeAt(a))) a++;
-  while (b > a && isSpace(text.charCodeAt(b - 1))) b--;
-  return [a, b];
-}
-
 /**
  * The value column and the time column of a plainly readable record, or
  * null (see PlainColumns). `settings` must have passed the import's check.
@@ -179,7 +172,9 @@ export function readPlainColumns(raw: string, s: SeriesSettings, headRows: numbe
     if (ended) return null;
     if (cells > columnCount) columnCount = cells;
     if (va < 0) return null;
-    [va, vb] = trimmed(text, va, vb);
+    // Trimmed in place (no pair returned per line: 10⁶ of them showed in the profile).
+    while (va < vb && isSpace(text.charCodeAt(va))) va++;
+    while (vb > va && isSpace(text.charCodeAt(vb - 1))) vb--;
     if (va === vb) return null;
     const v = plainNumberAt(text, va, vb, mark);
     if (Number.isNaN(v)) return null;
@@ -189,7 +184,8 @@ export function readPlainColumns(raw: string, s: SeriesSettings, headRows: numbe
       continue;
     }
     if (ta < 0) return null;
-    [ta, tb] = trimmed(text, ta, tb);
+    while (ta < tb && isSpace(text.charCodeAt(ta))) ta++;
+    while (tb > ta && isSpace(text.charCodeAt(tb - 1))) tb--;
     const ms = plainIsoMsAt(text, ta, tb);
     if (Number.isNaN(ms)) return null;
     // readTimes' checks, in its order and with its arithmetic; any breach is for it to word.
