@@ -31,10 +31,11 @@ export function formatDuration(hours: number, format: NumberFormat = DEFAULT_NUM
 }
 
 /** Smallest and largest of a list of durations. */
-function durationRange(durations: readonly number[]): { min: number; max: number } {
+function durationRange(durations: ArrayLike<number>): { min: number; max: number } {
   let min = Infinity;
   let max = -Infinity;
-  for (const d of durations) {
+  for (let k = 0; k < durations.length; k++) {
+    const d = durations[k] as number;
     if (d < min) min = d;
     if (d > max) max = d;
   }
@@ -47,7 +48,7 @@ function sameStep(a: number, b: number): boolean {
 }
 
 /** "10 min", or "5 min to 1 h (irregular steps)" when the steps differ. */
-export function describeSteps(durations: readonly number[], format: NumberFormat = DEFAULT_NUMBER_FORMAT): string {
+export function describeSteps(durations: ArrayLike<number>, format: NumberFormat = DEFAULT_NUMBER_FORMAT): string {
   const { min, max } = durationRange(durations);
   if (durations.length === 0) return '';
   if (sameStep(min, max)) return formatDuration(min, format);

@@ -5,6 +5,7 @@ export { describeProblem, MAX_LISTED_PROBLEMS, type ImportProblem } from './prob
 export { parseNumber, type Grouping } from './numbers';
 export { DEFAULT_NUMBER_FORMAT, numberFormat } from './number-format';
 export { readTable, type Separator, type TextRow } from './table-text';
+export { plainArray } from './plain-columns';
 export { parseClock, isoAt } from './time-values';
 export type { SeriesSettings, ImportHints } from './series';
 export {

@@ -259,10 +259,19 @@ export function stormBeyondRecords(storm: Storm): { readonly count: number; read
   let count = 0;
   let first: RecordBreach | null = null;
   const n = storm.depthsMm.length;
+  // The envelope is never negative, so a dry bar is never beyond it: most bars of a long record cost no power.
+  // Bars of one length share the envelope's value (one power per step length, not per bar).
+  let lastDurationH = NaN;
+  let lastRecordMm = NaN;
   for (let k = 0; k < n; k++) {
     const depthMm = storm.depthsMm[k] as number;
+    if (!(depthMm > 0)) continue;
     const durationH = storm.durationsH[k] as number;
-    const recordMm = recordDepthMm(durationH);
+    if (durationH !== lastDurationH) {
+      lastDurationH = durationH;
+      lastRecordMm = recordDepthMm(durationH);
+    }
+    const recordMm = lastRecordMm;
     if (depthMm > recordMm) {
       count++;
       first ??= { bar: k, depthMm, durationH, recordMm };

@@ -15,8 +15,9 @@ import {
   type Series,
   type SeriesSettings,
 } from './series';
+import { plainArray, readPlainColumns, type ColumnTimes } from './plain-columns';
 import type { TextRow } from './table-text';
-import { formatTimeOfDay, isoAt, parseClock } from './time-values';
+import { formatTimeOfDay, isoAt, parseClock, type TimeLine } from './time-values';
 
 /**
  * Rainfall from pasted text: one column of values, or a time and a value.
@@ -83,6 +84,21 @@ export interface RainImportSettings extends SeriesSettings {
 export interface ImportedStorm extends Storm {
   readonly durationsH: number[];
   readonly depthsMm: number[];
+}
+
+/** A storm as the readers build it: columns of doubles, SI units (durations h, depths mm). */
+export interface StormColumns extends Storm {
+  readonly durationsH: Float64Array;
+  readonly depthsMm: Float64Array;
+}
+
+/** The storm in plain arrays, as the scenario holds it. */
+export function importedStorm(columns: StormColumns): ImportedStorm {
+  const durationsH = plainArray(columns.durationsH);
+  const depthsMm = plainArray(columns.depthsMm);
+  return columns.startIso === undefined
+    ? { durationsH, depthsMm }
+    : { durationsH, depthsMm, startIso: columns.startIso };
 }
 
 export type RainImportResult =
@@ -255,7 +271,7 @@ const stepKey = (h: number): number => Math.round(h * 3_600_000);
  * (5 min, then 10 min for a while) shows its longer steps as gaps; the
  * preview says so and "keep" leaves them as they are.
  */
-export function findGaps(hours: readonly number[], lineOf: (row: number) => number): RecordGaps | null {
+export function findGaps(hours: ArrayLike<number>, lineOf: (row: number) => number): RecordGaps | null {
   const n = hours.length;
   if (n < 3) return null;
   const counts = new Map<number, number>();
@@ -290,12 +306,12 @@ export function findGaps(hours: readonly number[], lineOf: (row: number) => numb
 }
 
 interface Bars {
-  durationsH: number[];
-  depthsMm: number[];
+  durationsH: Float64Array;
+  depthsMm: Float64Array;
   /** Hours from the first time stamp to the storm's start (0 or negative). */
   startOffsetH: number;
   /** For each bar, the data row it was read from; -1 for a dry bar that fills a gap. */
-  rowOfBar: number[];
+  rowOfBar: Int32Array;
 }
 
 /**
@@ -304,35 +320,36 @@ interface Bars {
  */
 function readingBars(
   n: number,
-  hours: readonly number[] | null,
+  hours: ArrayLike<number> | null,
   s: RainImportSettings,
   problems: ProblemList,
-): { rows: number[]; durationsH: number[]; startOffsetH: number } | null {
+): { rows: Int32Array; durationsH: Float64Array; startOffsetH: number } | null {
   const cumulative = s.valueKind === 'cumulative';
   const fromFirst = cumulative && s.cumulativeFrom === 'first-value';
-  const rows: number[] = [];
-  const durationsH: number[] = [];
+  const first = fromFirst ? 1 : 0;
+  // Columns made at their length: on a record of 10⁶ readings, growing arrays cost more than the reading.
+  const rows = new Int32Array(n - first);
+  const durationsH = new Float64Array(n - first);
   let startOffsetH = 0;
-  for (let k = fromFirst ? 1 : 0; k < n; k++) rows.push(k);
+  for (let k = first; k < n; k++) rows[k - first] = k;
   if (hours === null) {
     if (!checkStep(s, problems)) return null;
-    const dt = s.stepMinutesIfNoTime / 60;
-    for (let k = fromFirst ? 1 : 0; k < n; k++) durationsH.push(dt);
+    durationsH.fill(s.stepMinutesIfNoTime / 60);
   } else if (fromFirst) {
-    for (let k = 1; k < n; k++) durationsH.push((hours[k] as number) - (hours[k - 1] as number));
+    for (let k = 1; k < n; k++) durationsH[k - 1] = (hours[k] as number) - (hours[k - 1] as number);
   } else if (n === 1) {
     // One stamp gives no step: the bar takes the step setting.
     if (!checkStep(s, problems)) return null;
     const dt = s.stepMinutesIfNoTime / 60;
-    durationsH.push(dt);
+    durationsH[0] = dt;
     startOffsetH = s.timeMarks === 'end' || cumulative ? -dt : 0;
   } else if (s.timeMarks === 'end' || cumulative) {
-    durationsH.push((hours[1] as number) - (hours[0] as number));
-    for (let k = 1; k < n; k++) durationsH.push((hours[k] as number) - (hours[k - 1] as number));
+    durationsH[0] = (hours[1] as number) - (hours[0] as number);
+    for (let k = 1; k < n; k++) durationsH[k] = (hours[k] as number) - (hours[k - 1] as number);
     startOffsetH = -(durationsH[0] as number);
   } else {
-    for (let k = 0; k < n - 1; k++) durationsH.push((hours[k + 1] as number) - (hours[k] as number));
-    durationsH.push((hours[n - 1] as number) - (hours[n - 2] as number));
+    for (let k = 0; k < n - 1; k++) durationsH[k] = (hours[k + 1] as number) - (hours[k] as number);
+    durationsH[n - 1] = (hours[n - 1] as number) - (hours[n - 2] as number);
   }
   return { rows, durationsH, startOffsetH };
 }
@@ -346,8 +363,8 @@ function readingBars(
  * whole steps, for a gap that is not a whole number of steps).
  */
 function buildBars(
-  values: readonly number[],
-  hours: readonly number[] | null,
+  values: ArrayLike<number>,
+  hours: ArrayLike<number> | null,
   gaps: RecordGaps | null,
   s: RainImportSettings,
   problems: ProblemList,
@@ -413,32 +430,31 @@ function buildBars(
         filledRows.push(row);
       }
     }
-    durationsH = filledDurations;
-    rowOfBar = filledRows;
+    durationsH = Float64Array.from(filledDurations);
+    rowOfBar = Int32Array.from(filledRows);
   }
-  const depthsMm: number[] = [];
   const bars = durationsH.length;
+  const depthsMm = new Float64Array(bars);
   if (cumulative) {
     const mm = DEPTH_UNITS[s.unit];
     for (let b = 0; b < bars; b++) {
       const k = rowOfBar[b] as number;
-      if (k < 0) depthsMm.push(0);
-      else {
+      if (k >= 0) {
         const before = k === 0 ? (fromFirst ? (values[0] as number) : 0) : (values[k - 1] as number);
-        depthsMm.push(((values[k] as number) - before) * mm);
+        depthsMm[b] = ((values[k] as number) - before) * mm;
       }
     }
   } else if (s.valueKind === 'intensity') {
     const mmH = RATE_UNITS[s.unit === 'mm' ? 'mm/h' : 'in/h'];
     for (let b = 0; b < bars; b++) {
       const k = rowOfBar[b] as number;
-      depthsMm.push(k < 0 ? 0 : (values[k] as number) * mmH * (durationsH[b] as number));
+      depthsMm[b] = k < 0 ? 0 : (values[k] as number) * mmH * (durationsH[b] as number);
     }
   } else {
     const mm = DEPTH_UNITS[s.unit];
     for (let b = 0; b < bars; b++) {
       const k = rowOfBar[b] as number;
-      depthsMm.push(k < 0 ? 0 : (values[k] as number) * mm);
+      depthsMm[b] = k < 0 ? 0 : (values[k] as number) * mm;
     }
   }
   return { durationsH, depthsMm, startOffsetH, rowOfBar };
@@ -471,9 +487,9 @@ function failureSummary(series: Series | null, s: RainImportSettings, count: num
 }
 
 function successSummary(
-  storm: ImportedStorm,
+  storm: StormColumns,
   startOffsetH: number,
-  series: Series,
+  series: RainColumns,
   s: RainImportSettings,
   format: NumberFormat,
   gaps: RecordGaps | null,
@@ -504,7 +520,7 @@ function successSummary(
     notes.push(`${along}no times, so bars are ${formatDuration(s.stepMinutesIfNoTime / 60, format)} apart as set`);
   }
   if (s.valueKind === 'cumulative') {
-    const first = series.table.rows[0];
+    const first = series.rowAt(0);
     if (s.cumulativeFrom === 'zero') notes.push('counted from zero');
     else if (first !== undefined && series.values[0] !== 0) {
       notes.push(`counted from the first reading, ${valueCell(first, s)} on line ${first.line}`);
@@ -512,7 +528,7 @@ function successSummary(
   }
   if (gaps !== null && gaps.longest !== null) notes.push(gapWords(gaps, s, format));
   if (s.skipLines > 0) notes.push(`${plural(s.skipLines, 'line', undefined, format)} skipped at the top`);
-  const blank = series.table.blankLinesSkipped;
+  const blank = series.blankLinesSkipped;
   if (blank > 0) notes.push(`${plural(blank, 'blank line', undefined, format)} inside the data skipped`);
   const beyond = stormBeyondRecords(storm);
   if (beyond.first !== null) {
@@ -548,7 +564,7 @@ function gapWords(gaps: RecordGaps, s: RainImportSettings, format: NumberFormat)
  */
 function checkBarDepths(
   bars: Bars,
-  series: Series,
+  series: RainColumns,
   s: RainImportSettings,
   problems: ProblemList,
   format: NumberFormat,
@@ -557,7 +573,7 @@ function checkBarDepths(
     const depthMm = bars.depthsMm[k] as number;
     const breach = checkPlausible('depth', depthMm);
     if (breach === null) continue;
-    const row = series.table.rows[bars.rowOfBar[k] as number];
+    const row = series.rowAt(bars.rowOfBar[k] as number);
     const column = row?.column ?? s.valueColumn;
     const cell = row === undefined ? '' : valueCell(row, s);
     problems.add(
@@ -589,25 +605,49 @@ function fail(series: Series | null, s: RainImportSettings, problems: ProblemLis
   };
 }
 
-function runRainImport(text: string, settings: RainImportSettings, format: NumberFormat): RainRun {
-  const problems = problemList();
-  const series = openSeries(text, settings, checkRainSettings, (s) => VALUE_KIND_WORDS[s.valueKind], problems);
-  if (series === null) return fail(null, settings, problems, format);
-  if (series.table.rows.length === 0) {
-    problems.add(problem(0, 0, 'text', '', 'no data lines were found; paste a column of values, or times and values.'));
-  }
-  if (settings.valueKind === 'cumulative') checkCumulative(series, settings, problems);
-  if (problems.count > 0) return fail(series, settings, problems, format);
+/**
+ * What the bars are made from, whichever reader read the text (the general
+ * one, series.ts, or the columnar one for long plain records,
+ * plain-columns.ts): the value column, the times, and the rows for messages.
+ */
+interface RainColumns {
+  readonly values: ArrayLike<number>;
+  readonly times: ColumnTimes | TimeLine | null;
+  readonly rowCount: number;
+  readonly blankLinesSkipped: number;
+  /** Data row k as split (its line and cells), for messages and notes. */
+  readonly rowAt: (k: number) => TextRow | undefined;
+  /** Line of data row k. */
+  readonly lineOf: (k: number) => number;
+}
 
-  const hours = series.times?.hours ?? null;
+function seriesColumns(series: Series): RainColumns {
   const rows = series.table.rows;
-  const gaps = hours === null ? null : findGaps(hours, (k) => (rows[k] as TextRow).line);
-  const bars = buildBars(series.values, hours, gaps, settings, problems);
-  if (bars === null) return fail(series, settings, problems, format);
-  checkBarDepths(bars, series, settings, problems, format);
-  if (problems.count > 0) return fail(series, settings, problems, format);
-  const origin = series.times?.origin ?? null;
-  const storm: ImportedStorm =
+  return {
+    values: series.values,
+    times: series.times,
+    rowCount: rows.length,
+    blankLinesSkipped: series.table.blankLinesSkipped,
+    rowAt: (k) => rows[k],
+    lineOf: (k) => (rows[k] as TextRow).line,
+  };
+}
+
+/** From clean columns to the storm and its summary; null when a problem was added. */
+function finishRain(
+  columns: RainColumns,
+  settings: RainImportSettings,
+  format: NumberFormat,
+  problems: ProblemList,
+): { readonly storm: StormColumns; readonly summary: string } | null {
+  const hours = columns.times?.hours ?? null;
+  const gaps = hours === null ? null : findGaps(hours, columns.lineOf);
+  const bars = buildBars(columns.values, hours, gaps, settings, problems);
+  if (bars === null) return null;
+  checkBarDepths(bars, columns, settings, problems, format);
+  if (problems.count > 0) return null;
+  const origin = columns.times?.origin ?? null;
+  const storm: StormColumns =
     origin === null
       ? { durationsH: bars.durationsH, depthsMm: bars.depthsMm }
       : { durationsH: bars.durationsH, depthsMm: bars.depthsMm, startIso: isoAt(origin, bars.startOffsetH) };
@@ -617,16 +657,80 @@ function runRainImport(text: string, settings: RainImportSettings, format: Numbe
   } catch (error) {
     const reason = isInputError(error) ? error.message : String(error);
     problems.add(problem(0, 0, 'text', '', `the storm read from the text is not valid: ${reason}`));
-    return fail(series, settings, problems, format);
+    return null;
   }
-  return {
-    result: {
-      ok: true,
-      storm,
-      summary: successSummary(storm, bars.startOffsetH, series, settings, format, gaps),
-      problems: [],
+  return { storm, summary: successSummary(storm, bars.startOffsetH, columns, settings, format, gaps) };
+}
+
+function runRainImport(text: string, settings: RainImportSettings, format: NumberFormat): RainRun {
+  const problems = problemList();
+  const series = openSeries(text, settings, checkRainSettings, (s) => VALUE_KIND_WORDS[s.valueKind], problems);
+  if (series === null) return fail(null, settings, problems, format);
+  if (series.table.rows.length === 0) {
+    problems.add(problem(0, 0, 'text', '', 'no data lines were found; paste a column of values, or times and values.'));
+  }
+  if (settings.valueKind === 'cumulative') checkCumulative(series, settings, problems);
+  if (problems.count > 0) return fail(series, settings, problems, format);
+  const done = finishRain(seriesColumns(series), settings, format, problems);
+  if (done === null) return fail(series, settings, problems, format);
+  return { result: { ok: true, storm: importedStorm(done.storm), summary: done.summary, problems: [] }, series };
+}
+
+/** What the columnar reader gives a dialog: the storm, its summary and the head of the table. */
+export interface PlainRainRead {
+  readonly storm: StormColumns;
+  readonly summary: string;
+  readonly header: readonly string[] | null;
+  /** The first data rows as split (at most the `headRows` asked for). */
+  readonly rows: readonly TextRow[];
+  readonly rowCount: number;
+  readonly columnCount: number;
+}
+
+/**
+ * A long, plainly written record (plain-columns.ts) read into a storm
+ * without a row object per line; null for any text or setting that the
+ * general reader must read (and word any problem of). What it gives is what
+ * runRainImport gives for the same text and settings.
+ */
+export function readPlainRain(
+  text: string,
+  settings: RainImportSettings,
+  format: NumberFormat,
+  headRows: number,
+): PlainRainRead | null {
+  if (typeof text !== 'string' || settings === null || typeof settings !== 'object') return null;
+  const problems = problemList();
+  checkRainSettings(settings, problems);
+  if (problems.count > 0) return null;
+  const read = readPlainColumns(text, settings, headRows);
+  if (read === null || read.rowCount === 0) return null;
+  const values = read.values;
+  if (settings.valueKind === 'cumulative') {
+    for (let k = 1; k < values.length; k++) if ((values[k] as number) < (values[k - 1] as number)) return null;
+  }
+  const first = read.firstLine;
+  const done = finishRain(
+    {
+      values,
+      times: read.times,
+      rowCount: read.rowCount,
+      blankLinesSkipped: 0,
+      rowAt: (k) => read.headRows[k],
+      lineOf: (k) => first + k,
     },
-    series,
+    settings,
+    format,
+    problems,
+  );
+  if (done === null || problems.count > 0) return null;
+  return {
+    storm: done.storm,
+    summary: done.summary,
+    header: read.header?.cells ?? null,
+    rows: read.headRows,
+    rowCount: read.rowCount,
+    columnCount: read.columnCount,
   };
 }
 
@@ -640,6 +744,8 @@ export function applyRainImport(
   settings: RainImportSettings,
   format: NumberFormat = DEFAULT_NUMBER_FORMAT,
 ): RainImportResult {
+  const plain = readPlainRain(text, settings, format, 0);
+  if (plain !== null) return { ok: true, storm: importedStorm(plain.storm), summary: plain.summary, problems: [] };
   return runRainImport(text, settings, format).result;
 }
 

@@ -2,7 +2,13 @@ import type { UnitSystem } from '../core';
 import { readFlowImport, guessFlowSettings, type FlowImportSettings, type FlowRecord } from './flow-import';
 import type { NumberFormat } from './number-format';
 import type { ImportProblem } from './problems';
-import { readRainImport, type ImportedStorm, type RainImportSettings } from './rain-import';
+import {
+  readPlainRain,
+  readRainImport,
+  type ImportedStorm,
+  type RainImportSettings,
+  type StormColumns,
+} from './rain-import';
 import { guessForScreen } from './screen-guess';
 import type { SeriesSettings } from './series';
 import type { TextRow } from './table-text';
@@ -66,10 +72,21 @@ function outcome<S extends SeriesSettings, R>(
   };
 }
 
-export const RAIN_READER: Reader<RainImportSettings, ImportedStorm> = {
+/**
+ * A long plain record comes back in columns of doubles (handed from a
+ * worker to the page without a copy); the page makes them plain arrays
+ * (src/ui/import-kit/reader-messages.ts, unpackColumns).
+ */
+export const RAIN_READER: Reader<RainImportSettings, ImportedStorm | StormColumns> = {
   guess: (text, context) =>
     guessForScreen(text, context.units, { numberFormat: context.numberFormat, stepMinutes: context.stepMinutes }),
   read: (text, settings, context) => {
+    // A long plain record is read by columns; any other text, or any problem, by the general reader.
+    const plain = readPlainRain(text, settings, context.numberFormat, PREVIEW_ROWS);
+    if (plain !== null) {
+      const { storm, rows, ...rest } = plain;
+      return { settings, ...rest, rows: rows.slice(0, PREVIEW_ROWS), problems: [], imported: storm };
+    }
     const { preview, result } = readRainImport(text, settings, context.numberFormat);
     return outcome(settings, preview, result.ok ? result.storm : null);
   },

@@ -170,6 +170,45 @@ function plainIsoClock(text: string): Parsed<ClockReading> | undefined {
   };
 }
 
+/** Two digits at position i of a text, or -1. */
+function twoDigitsAt(text: string, i: number): number {
+  const a = text.charCodeAt(i) - 48;
+  const b = text.charCodeAt(i + 1) - 48;
+  return a >= 0 && a <= 9 && b >= 0 && b <= 9 ? a * 10 + b : -1;
+}
+
+/**
+ * The cell text[start, end) in plainIsoClock's form, as milliseconds on the
+ * zone-free timeline (what readTimes takes from it: its date's midnight plus
+ * the time of day); NaN for any other cell. Read by position without a
+ * string or an object per cell, for the long-record reader (plain-columns.ts).
+ */
+export function plainIsoMsAt(text: string, start: number, end: number): number {
+  const n = end - start;
+  if (n !== 16 && n !== 19) return NaN;
+  const sep = text.charCodeAt(start + 10);
+  if (
+    text.charCodeAt(start + 4) !== 45 ||
+    text.charCodeAt(start + 7) !== 45 ||
+    text.charCodeAt(start + 13) !== 58 ||
+    (sep !== 32 && sep !== 84) ||
+    (n === 19 && text.charCodeAt(start + 16) !== 58)
+  )
+    return NaN;
+  const century = twoDigitsAt(text, start);
+  const yy = twoDigitsAt(text, start + 2);
+  const month = twoDigitsAt(text, start + 5);
+  const day = twoDigitsAt(text, start + 8);
+  const hour = twoDigitsAt(text, start + 11);
+  const minute = twoDigitsAt(text, start + 14);
+  const second = n === 19 ? twoDigitsAt(text, start + 17) : 0;
+  if (century < 0 || yy < 0 || day < 0 || hour < 0 || minute < 0 || second < 0) return NaN;
+  const year = century * 100 + yy;
+  if (month < 1 || month > 12 || day < 1 || day > daysInMonth(year, month)) return NaN;
+  if (hour > 23 || minute > 59 || second > 59) return NaN;
+  return daysFromCivil(year, month, day) * MS_PER_DAY + ((hour * 60 + minute) * 60 + second) * 1000;
+}
+
 /** Reads one clock cell. Never throws; a cell it cannot read gives a reason. */
 export function parseClock(cell: string, order: DateOrder): Parsed<ClockReading> {
   const text = cell.trim();

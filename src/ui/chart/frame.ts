@@ -5,6 +5,7 @@ import { formatValue } from '../format';
 import { displayUnit, fromDisplay, toDisplay, unitText } from '../units';
 import { formatWallDate, formatWallTime, wallClockMs } from './clock';
 import { elapsedTicksH, formatElapsed } from './elapsed-ticks';
+import { linearMap, mapLinear } from './linear-px';
 import type { TimeSpanH } from './time-span';
 
 /** The bars' one duration, h, or null when they differ (to a part in 10⁹, as the rainfall line reads them). */
@@ -114,9 +115,7 @@ export function chartFrame(
     xTitle = 'Time from storm start (h:mm)';
   }
 
-  const edgesH = barEdgesH(storm);
-  const edgesPx = new Float64Array(edgesH.length);
-  for (let k = 0; k < edgesH.length; k++) edgesPx[k] = x(edgesH[k] as number);
+  const edgesPx = mapLinear(x, barEdgesH(storm));
 
   return {
     width,
@@ -142,6 +141,15 @@ export function barTopsPx(frame: ChartFrame, depthsMm: ArrayLike<number>, durati
   const n = depthsMm.length;
   const tops = new Float64Array(n);
   const { y } = frame;
-  for (let k = 0; k < n; k++) tops[k] = y((depthsMm[k] as number) / (durationsH[k] as number));
+  const m = linearMap(y);
+  if (m === null) {
+    for (let k = 0; k < n; k++) tops[k] = y((depthsMm[k] as number) / (durationsH[k] as number));
+    return tops;
+  }
+  const { d0, span, r0, r1 } = m;
+  for (let k = 0; k < n; k++) {
+    const t = ((depthsMm[k] as number) / (durationsH[k] as number) - d0) / span;
+    tops[k] = r0 * (1 - t) + r1 * t;
+  }
   return tops;
 }

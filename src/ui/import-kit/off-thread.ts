@@ -40,7 +40,7 @@ function pageReader(text: string): TextReader {
           for (let step = steps.next(); ; step = steps.next()) {
             if (mine !== job) return;
             if (step.done) {
-              listener.done(step.value);
+              listener.done({ ...step.value, imported: unpackColumns(step.value.imported) });
               return;
             }
             listener.stage(step.value.stage, step.value.lines);

@@ -1,4 +1,4 @@
-import type { ReadOutcome, ReaderContext, ReaderName, SeriesSettings } from '../../io';
+import { plainArray, type ReadOutcome, type ReaderContext, type ReaderName, type SeriesSettings } from '../../io';
 
 /** What the page asks of a reader: the text (sent once, the first time), the kind of import, the user's corrections. */
 export interface ReadRequest {
@@ -36,7 +36,11 @@ export function packColumns(imported: unknown): { value: unknown; transfer: Arra
   const packed: Record<string, unknown> = {};
   const transfer: ArrayBuffer[] = [];
   for (const [key, v] of Object.entries(imported)) {
-    if (Array.isArray(v) && v.every((x) => typeof x === 'number')) {
+    if (v instanceof Float64Array) {
+      packed[key] = v;
+      // Two columns on one buffer hand it over once.
+      if (!transfer.includes(v.buffer as ArrayBuffer)) transfer.push(v.buffer as ArrayBuffer);
+    } else if (Array.isArray(v) && v.every((x) => typeof x === 'number')) {
       const column = Float64Array.from(v as number[]);
       packed[key] = column;
       transfer.push(column.buffer);
@@ -45,10 +49,10 @@ export function packColumns(imported: unknown): { value: unknown; transfer: Arra
   return { value: packed, transfer };
 }
 
-/** The plain arrays back from packColumns. */
+/** The plain arrays back from packColumns, or from a reader that gave columns of doubles. */
 export function unpackColumns<R>(imported: unknown): R {
   if (imported === null || typeof imported !== 'object') return imported as R;
   const plain: Record<string, unknown> = {};
-  for (const [key, v] of Object.entries(imported)) plain[key] = v instanceof Float64Array ? Array.from(v) : v;
+  for (const [key, v] of Object.entries(imported)) plain[key] = v instanceof Float64Array ? plainArray(v) : v;
   return plain as R;
 }

@@ -62,6 +62,8 @@ export function RainRecordDialog({
         return result.ok ? result.storm : null;
       },
       Settings: ImportSettings,
+      // A year of 5-minute bars is read in a Web Worker, as the workbench's rainfall import is.
+      reader: { name: 'rain', context: { numberFormat: format, units } },
     };
   }, [units]);
   return (

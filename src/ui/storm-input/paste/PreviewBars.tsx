@@ -2,6 +2,7 @@ import { useMemo } from 'react';
 import { scaleLinear } from 'd3-scale';
 import { barEdgesH, peakIntensityMmH, totalDurationH, type Storm, type UnitSystem } from '../../../core';
 import { barsPath } from '../../chart/bar-path';
+import { mapLinear } from '../../chart/linear-px';
 import { formatDuration } from '../../rainfall/RainfallToolbar';
 import { formatCount, formatValue } from '../../format';
 import { LISTED, PreviewSketch, SKETCH_HEIGHT, SKETCH_PAD, SKETCH_WIDTH } from '../../import-kit';
@@ -14,27 +15,27 @@ import { barClock, barTimeText } from '../bar-times';
  */
 export function PreviewBars({ storm, units }: { storm: Storm; units: UnitSystem }) {
   const n = storm.depthsMm.length;
+  // Each pass over the bars once per storm, not per render: a long record has 10⁶ of them.
+  const { edges, totalH, peak } = useMemo(
+    () => ({ edges: barEdgesH(storm), totalH: totalDurationH(storm), peak: peakIntensityMmH(storm) }),
+    [storm],
+  );
   const path = useMemo(() => {
-    const edges = barEdgesH(storm);
     const x = scaleLinear()
-      .domain([0, totalDurationH(storm) || 1])
+      .domain([0, totalH || 1])
       .range([SKETCH_PAD.left, SKETCH_WIDTH - SKETCH_PAD.right]);
-    const peak = peakIntensityMmH(storm);
     const y = scaleLinear()
       .domain([0, peak > 0 ? peak : 1])
       .range([SKETCH_HEIGHT - SKETCH_PAD.bottom, SKETCH_PAD.top]);
-    const edgesPx = new Float64Array(edges.length);
-    for (let k = 0; k < edges.length; k++) edgesPx[k] = x(edges[k] as number);
-    const tops = new Float64Array(n);
-    for (let k = 0; k < n; k++) tops[k] = y((storm.depthsMm[k] as number) / (storm.durationsH[k] as number));
-    return barsPath(edgesPx, tops, SKETCH_HEIGHT - SKETCH_PAD.bottom);
-  }, [storm, n]);
+    const intensities = new Float64Array(n);
+    for (let k = 0; k < n; k++) intensities[k] = (storm.depthsMm[k] as number) / (storm.durationsH[k] as number);
+    return barsPath(mapLinear(x, edges), mapLinear(y, intensities), SKETCH_HEIGHT - SKETCH_PAD.bottom);
+  }, [storm, n, edges, totalH, peak]);
 
-  const clock = barClock(storm.startIso, totalDurationH(storm));
-  const edges = barEdgesH(storm);
+  const clock = barClock(storm.startIso, totalH);
   const depthUnit = unitText(displayUnit('depth', units));
   const rateUnit = unitText(displayUnit('rate', units));
-  const peakText = `${formatValue(toDisplay('rate', peakIntensityMmH(storm), units))} ${rateUnit}`;
+  const peakText = `${formatValue(toDisplay('rate', peak, units))} ${rateUnit}`;
   const listed = Math.min(n, LISTED);
 
   return (
