@@ -34,6 +34,7 @@ export {
   copyName,
   type StorageLike,
 } from './persistence';
+export { createPinBoard, MAX_PINS, PINS_KEY, type Pin, type PinBoard, type PinState } from './pins';
 export { StoreProvider, useActions, useDerived, useScenario, useWorkbench, useWorkbenchStore } from './react';
 export {
   withDesignPick,

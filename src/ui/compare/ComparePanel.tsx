@@ -11,7 +11,7 @@ import { displayUnit, paramToDisplay, paramUnitText, toDisplay, unitText, type Q
 import { fittedCellText } from '../results/fit-words';
 import { commonFrames } from './common-frame';
 import { difference, type Difference } from './difference';
-import { MAX_PINS, type Pin } from '../services/pins';
+import { MAX_PINS, type Pin } from '../../store/pins';
 import { totalsOf, type Totals } from '../results/totals';
 import './compare.css';
 

@@ -1,7 +1,7 @@
 import { useWorkbenchStore } from '../../store';
 import { useBarMessage } from '../services/bar-message';
 import { usePins, useServices } from '../services/services';
-import { MAX_PINS } from '../services/pins';
+import { MAX_PINS } from '../../store/pins';
 import './compare.css';
 
 /** "Pin to compare": a copy of the scenario on screen joins the comparison (up to MAX_PINS). */

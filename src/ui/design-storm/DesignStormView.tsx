@@ -13,7 +13,7 @@ import { hoursMinutes } from '../results/hours-minutes';
 import { useActions, useDerived, useScenario, useWorkbenchStore, withDesignStormOnWorkbench } from '../../store';
 import { toScenarioStorm } from '../../store/edits';
 import { usePins, useServices } from '../services/services';
-import { MAX_PINS } from '../services/pins';
+import { MAX_PINS } from '../../store/pins';
 import { designMethod } from '../events/event-fits';
 import { useEventFits } from '../events/use-event-fits';
 import { formatPercent, formatValue } from '../format';

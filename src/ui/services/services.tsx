@@ -1,7 +1,8 @@
-import { createContext, useContext, useMemo, useSyncExternalStore, type ReactNode } from 'react';
+import { createContext, useContext, useEffect, useMemo, useSyncExternalStore, type ReactNode } from 'react';
 import type { StorageLike } from '../../scenario';
 import type { LinkSession, LinkState } from '../../store/link-session';
-import { createPinBoard, type PinBoard, type PinState } from './pins';
+import { createPinBoard, type PinBoard, type PinState } from '../../store/pins';
+import { windowStorageEvents } from '../../store/other-tabs';
 import { downloadBlob } from './download';
 
 /**
@@ -65,9 +66,11 @@ export function ScenarioServicesProvider({
     const base = services ?? browserServices();
     return {
       ...base,
-      pins: createPinBoard(base.storage, { now: base.now }),
+      pins: createPinBoard(base.storage, { now: base.now, watch: windowStorageEvents }),
     };
   }, [services]);
+  // Another tab's pins show here as soon as that tab writes them.
+  useEffect(() => value.pins.watchOtherTabs(), [value]);
   return <ServicesContext.Provider value={value}>{children}</ServicesContext.Provider>;
 }
 

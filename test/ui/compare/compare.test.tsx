@@ -3,7 +3,7 @@ import { act, cleanup, screen, within } from '@testing-library/react';
 import { describe, expect, it } from 'vitest';
 import { computeLosses, runoffVolumeM3 } from '../../../src/core';
 import type { Scenario } from '../../../src/scenario/types';
-import { PINS_KEY } from '../../../src/ui/services';
+import { PINS_KEY } from '../../../src/store/pins';
 import { formatPercent, formatValue } from '../../../src/ui/format';
 import { FOUR_BARS, memoryStorage } from '../../helpers/scenario-fixtures';
 import { lazyPartsLoaded } from '../../helpers/render';
