@@ -7,9 +7,11 @@ import {
   type StorageLike,
   type StoredSlot,
 } from '../scenario/stored-slot';
-import { MAX_NAME_LENGTH } from '../scenario/text-limits';
 import type { Scenario } from '../scenario/types';
+import { columnNumbers, LARGE_NUMBERS, readLargeMarker } from './large-marker';
+import type { LargeRead } from './large-store';
 import { windowStorageEvents } from './other-tabs';
+import type { OtherTabChoiceHost } from './other-tab-choice';
 import { readScenarioJson } from './read-scenario';
 
 export type { OtherTabWatch, StorageLike } from '../scenario/stored-slot';
@@ -89,7 +91,11 @@ export function loadScenario(
   storage: StorageLike | null,
   fallback: Scenario,
   nowIso: string,
-  options: { readonly skipSaved?: boolean } = {},
+  options: {
+    readonly skipSaved?: boolean;
+    /** The large store's record, read before start-up when the slot held a marker (see ./large-marker.ts). */
+    readonly large?: LargeRead;
+  } = {},
 ): Loaded {
   if (!storage) {
     return {
@@ -127,7 +133,13 @@ export function loadScenario(
     };
   }
   if (read.kind === 'ok') return { scenario: read.value, notice: null, canSave: true };
-  const message = read.kind === 'unreadable' ? read.reason : `it was written by a newer version (${read.version}).`;
+  const marker = readLargeMarker(read.text);
+  if (marker && options.large?.ok) return { scenario: options.large.scenario, notice: null, canSave: true };
+  const message = marker
+    ? `${options.large && !options.large.ok ? options.large.message : 'This browser’s large store was not read.'} The pointer to it is set aside; the record stays in the large store.`
+    : read.kind === 'unreadable'
+      ? read.reason
+      : `it was written by a newer version (${read.version}).`;
 
   const aside = setAsideSaved(storage, nowIso);
   if (!aside.ok || aside.key === null) {
@@ -159,11 +171,18 @@ export interface Persistence {
   stop(): void;
 }
 
-/** The name of this tab's copy when the user keeps it beside the other tab's version. */
-export function copyName(name: string): string {
-  const suffix = ' (this tab’s copy)';
-  return `${name.slice(0, Math.max(0, MAX_NAME_LENGTH - suffix.length))}${suffix}`;
-}
+/** Whether this browser has IndexedDB, where the large store lives (not in a private window of some browsers, nor in Node). */
+const hasLargeStore = (): boolean => typeof indexedDB !== 'undefined';
+/** The other-tab choices' code, fetched when the user makes one. */
+const loadChoice = (): Promise<typeof import('./other-tab-choice')> => import('./other-tab-choice');
+type LargeModule = typeof import('./large-store');
+/** The large store's code (idb-keyval and the packing), fetched only when a scenario needs it. */
+const loadLarge = (): Promise<LargeModule> => import('./large-store');
+/** A failed fetch of the large store's code, in the shape of a failed read. */
+const failedLoad = (error: unknown): { readonly ok: false; readonly message: string } => ({
+  ok: false,
+  message: `The code of this browser’s large store could not be loaded (${describe(error)}).`,
+});
 
 /**
  * Saves the scenario whenever it changes, at most once per `delayMs` of
@@ -190,44 +209,29 @@ export function persistStore(
   // The saved text as this tab finds it at the start is its stamp (see the stored-slot rules).
   slot.acknowledge();
   const changedElsewhere = (): boolean => slot.changedElsewhere();
+  /** Large saves run one after another; a save overtaken by a newer one before it starts is skipped. */
+  let largeQueue: Promise<void> = Promise.resolve();
+  let largeLatest: Scenario | null = null;
+  let stopped = false;
 
-  const takeTheirs = (): void => {
-    const theirs = slot.peek();
-    store.getState().actions.setNotice(null);
-    if (theirs === null) return;
-    const read = readScenarioJson(theirs);
-    if (!read.ok) {
-      store.getState().actions.setNotice({
-        kind: 'save-failed',
-        message: `The other tab's version could not be opened (${read.message}). This tab's scenario stays on screen and is not saved over it; export it to keep it.`,
-      });
-      return;
-    }
-    slot.acknowledge();
-    lastSaved = read.scenario;
-    pending = null;
-    store.getState().actions.replaceScenario(read.scenario, 'Open the other tab’s version');
-    // The edit above is this tab's own view of the saved text: nothing to write.
-    lastSaved = store.getState().scenario;
+  /** What the other-tab choices (./other-tab-choice.ts, loaded when one is made) need of this tab's saving. */
+  const choice: OtherTabChoiceHost = {
+    store,
+    slot,
+    storage,
+    taken: (scenario) => {
+      lastSaved = scenario;
+      pending = null;
+    },
+    keep: (scenario) => {
+      pending = null;
+      save(scenario);
+    },
   };
-
-  const keepMine = async (): Promise<void> => {
-    const mine = store.getState().scenario;
-    // The saved list's code loads here, on this rare path, not with the first screen.
-    const { createScenarioLibrary } = await import('../scenario/library');
-    const saved = createScenarioLibrary(storage).save({ ...mine, name: copyName(mine.name) });
-    if (!saved.ok) {
-      store.getState().actions.setNotice({
-        kind: 'save-failed',
-        message: `This tab's scenario could not be saved as a copy (${saved.problems.map((p) => p.message).join(' ')}). It stays on screen; export it to keep it.`,
-      });
-      return;
-    }
-    slot.acknowledge();
-    store.getState().actions.setNotice(null);
-    pending = null;
-    save(mine);
-  };
+  const takeTheirs = (): void => void loadChoice().then((m) => m.takeTheirs(choice), reportFailedLoad);
+  const keepMine = (): Promise<void> => loadChoice().then((m) => m.keepMine(choice), reportFailedLoad);
+  const reportFailedLoad = (error: unknown): void =>
+    store.getState().actions.setNotice({ kind: 'save-failed', message: failedLoad(error).message });
 
   const tellOtherTab = (): void => {
     if (store.getState().notice?.kind === 'other-tab') return;
@@ -240,7 +244,7 @@ export function persistStore(
     });
   };
 
-  function write(): void {
+  function write(urgent = false): void {
     timer = null;
     const scenario = pending;
     if (!scenario || scenario === lastSaved) {
@@ -253,20 +257,56 @@ export function persistStore(
       return;
     }
     pending = null;
-    save(scenario);
+    save(scenario, urgent);
   }
 
-  function save(scenario: Scenario): void {
+  function save(scenario: Scenario, urgent = false): void {
+    if (columnNumbers(scenario) > LARGE_NUMBERS && hasLargeStore()) {
+      saveLarge(scenario, urgent);
+      return;
+    }
+    const before = readLargeMarker(slot.peek());
     const failed = slot.write(scenario);
     if (failed === null) {
       lastSaved = scenario;
       if (store.getState().notice?.kind === 'save-failed') store.getState().actions.setNotice(null);
+      // Small again: the large record the marker named is no longer anyone's.
+      if (before) void loadLarge().then((large) => large.dropLarge(before.id), failedLoad);
+      return;
+    }
+    // Too large for localStorage after all: the large store takes it.
+    if (/quota/i.test(failed) && hasLargeStore()) {
+      saveLarge(scenario, urgent);
       return;
     }
     store.getState().actions.setNotice({
       kind: 'save-failed',
       message: `The latest change could not be saved in this browser (${failed}). It stays on screen; export it to keep it.`,
     });
+  }
+
+  /** Saves in the large store (IndexedDB) when the page is idle; one save at a time (see ./large-store.ts). */
+  function saveLarge(scenario: Scenario, urgent: boolean): void {
+    largeLatest = scenario;
+    const current = (): boolean => !stopped && scenario === largeLatest;
+    largeQueue = largeQueue
+      .then(loadLarge)
+      .then((large) =>
+        large.saveInTurn({
+          store,
+          slot,
+          scenario,
+          urgent,
+          current,
+          saved: () => (lastSaved = scenario),
+          changed: () => {
+            // Kept pending: written once the user has chosen.
+            pending ??= scenario;
+            tellOtherTab();
+          },
+        }),
+      )
+      .catch(reportFailedLoad);
   }
 
   const unwatch = slot.watch(() => {
@@ -283,9 +323,10 @@ export function persistStore(
   return {
     flush: () => {
       if (timer !== null) clearTimeout(timer);
-      write();
+      write(true);
     },
     stop: () => {
+      stopped = true;
       if (timer !== null) clearTimeout(timer);
       timer = null;
       unsubscribe();

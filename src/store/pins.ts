@@ -8,6 +8,9 @@ import {
   type StorageLike,
 } from '../scenario/stored-slot';
 import type { Scenario } from '../scenario/types';
+import { MAX_PINS, PINS_KEY } from './pin-limits';
+
+export { MAX_PINS, PINS_KEY } from './pin-limits';
 
 /**
  * Scenarios pinned for side-by-side comparison, kept in the browser under
@@ -24,10 +27,8 @@ import type { Scenario } from '../scenario/types';
  * (src/scenario/stored-slot.ts) are the saved list's and the current
  * scenario's too.
  */
-export const PINS_KEY = 'raincut.pins';
 const PINS_FORMAT_TAG = 'raincut-pins';
 const PINS_VERSION = 1;
-export const MAX_PINS = 4;
 
 export interface Pin {
   readonly id: string;

@@ -11,7 +11,8 @@ import { displayUnit, paramToDisplay, paramUnitText, toDisplay, unitText, type Q
 import { fittedCellText } from '../results/fit-words';
 import { commonFrames } from './common-frame';
 import { difference, type Difference } from './difference';
-import { MAX_PINS, type Pin } from '../../store/pins';
+import { MAX_PINS } from '../../store/pin-board';
+import type { Pin } from '../../store/pins';
 import { totalsOf, type Totals } from '../results/totals';
 import './compare.css';
 
@@ -98,7 +99,7 @@ function PinnedChart({ pin, index, frame, units, derived }: PinnedChartProps) {
           type="button"
           className="share-button--small"
           aria-label={`Unpin ${name}`}
-          onClick={() => pins.unpin(pin.id)}
+          onClick={() => void pins.unpin(pin.id)}
         >
           Unpin
         </button>
@@ -193,7 +194,11 @@ export function ComparePanel() {
           Charts share one time and intensity scale; differences are from pin 1.
         </p>
         {pins.length > 1 ? (
-          <button type="button" className="share-button--small" onClick={() => pins.forEach((p) => board.unpin(p.id))}>
+          <button
+            type="button"
+            className="share-button--small"
+            onClick={() => pins.forEach((p) => void board.unpin(p.id))}
+          >
             Unpin all
           </button>
         ) : null}
