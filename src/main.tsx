@@ -5,8 +5,10 @@ import { createUpdateChannel } from './offline/updates';
 import { createRoot } from 'react-dom/client';
 import { DEMO_SCENARIO } from './scenario/demo';
 import { isScenarioLink, loadLinkReader } from './scenario/link';
-import { type StorageLike } from './store';
+import { STORAGE_KEY, type StorageLike } from './store';
 import { SKIP_SAVED_KEY, createCrashRecovery } from './store/crash';
+import { readLargeMarker } from './store/large-marker';
+import type { LargeRead } from './store/large-store';
 import { startWorkbench } from './store/start';
 import { App } from './ui/App';
 import { ErrorBoundary } from './ui/layout/ErrorBoundary';
@@ -38,6 +40,14 @@ const storage = browserStorage();
 // The reader's number format (a browser preference, never part of the scenario).
 startNumberFormat({ storage, language: navigator.language });
 const tab = tabStorage();
+/** The saved slot's text as it is at load, or null. */
+function readSlot(): string | null {
+  try {
+    return storage?.getItem(STORAGE_KEY) ?? null;
+  } catch {
+    return null;
+  }
+}
 /** Set on the error screen when the saved scenario stopped the screen and could not be set aside. */
 function takeSkipSaved(): boolean {
   try {
@@ -46,8 +56,8 @@ function takeSkipSaved(): boolean {
     return false;
   }
 }
-/** Starts the workbench and draws the page. */
-function start(): void {
+/** Starts the workbench and draws the page; `large` is the large store's record when the saved slot named one. */
+function start(large?: LargeRead): void {
   // The saved scenario, and a share link in the address shown over it unsaved until the user chooses (src/store/link-session.ts).
   const { store, link } = startWorkbench({
     storage,
@@ -57,6 +67,7 @@ function start(): void {
     clearFragment: () =>
       window.history.replaceState(window.history.state, '', window.location.pathname + window.location.search),
     skipSaved: takeSkipSaved(),
+    ...(large ? { large } : {}),
   });
   // Save a change made just before the page closes or reloads.
   window.addEventListener('pagehide', () => link.flush());
@@ -93,9 +104,21 @@ function start(): void {
   );
 }
 
-// A share link in the address needs the link reader's decompressor, fetched only then (src/scenario/link.ts).
-if (isScenarioLink(window.location.hash))
-  void loadLinkReader()
-    .catch(() => {})
-    .then(start);
+// A share link in the address needs the link reader's decompressor, fetched only then (src/scenario/link.ts); a
+// scenario kept in the large store (IndexedDB) is read first, only when the saved slot holds its marker.
+const waits: Promise<unknown>[] = [];
+if (isScenarioLink(window.location.hash)) waits.push(loadLinkReader().catch(() => {}));
+let large: LargeRead | undefined;
+const marker = readLargeMarker(readSlot());
+if (marker)
+  waits.push(
+    import('./store/large-store')
+      .then((m) => m.readLarge(marker))
+      .then(
+        (read) => (large = read),
+        (error: unknown) =>
+          (large = { ok: false, message: `The large store’s code could not be loaded (${String(error)}).` }),
+      ),
+  );
+if (waits.length > 0) void Promise.all(waits).then(() => start(large));
 else start();

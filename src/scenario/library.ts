@@ -1,18 +1,10 @@
 import { capProblems, describeValue, problem, type Problem } from './problems';
 import { parseScenario } from './schema';
 import { MAX_NAME_LENGTH } from './text-limits';
+import { createStoredSlot, envelopeCodec, type StorageLike } from './stored-slot';
 import type { Scenario } from './types';
 
-/**
- * The part of the Web Storage interface the library uses: `localStorage` in
- * the browser, a plain object in tests. Any method may throw (storage turned
- * off, quota full); the library catches and reports it.
- */
-export interface StorageLike {
-  getItem(key: string): string | null;
-  setItem(key: string, value: string): void;
-  removeItem(key: string): void;
-}
+export type { StorageLike } from './stored-slot';
 
 /** A saved scenario. `id` is stable across renames; `savedAt` is ISO 8601 (UTC). */
 export interface LibraryEntry {
@@ -85,7 +77,6 @@ interface Loaded {
 }
 
 const isRecord = (x: unknown): x is Record<string, unknown> => x !== null && typeof x === 'object' && !Array.isArray(x);
-const why = (error: unknown): string => (error instanceof Error ? error.message : String(error));
 const ISO_UTC = /^\d{4}-\d{2}-\d{2}T\d{2}:\d{2}:\d{2}(\.\d+)?Z$/;
 const ID = /^s[1-9]\d{0,14}$/;
 
@@ -131,32 +122,9 @@ function readEntry(
   return { id, savedAt, scenario: parsed.scenario, deletedAt, position };
 }
 
-type Parsed =
-  | { readonly kind: 'ok'; readonly state: State; readonly damage: Problem[] }
-  | { readonly kind: 'unreadable'; readonly reason: string }
-  | { readonly kind: 'newer'; readonly version: number };
-
-/** Reads the stored text: whole, partly damaged (damage listed), unreadable, or from a newer build. */
-function parseStored(text: string): Parsed {
-  let json: unknown;
-  try {
-    json = JSON.parse(text);
-  } catch (error) {
-    return { kind: 'unreadable', reason: `it is not valid JSON (${why(error)})` };
-  }
-  if (!isRecord(json) || json['$format'] !== LIBRARY_FORMAT_TAG) {
-    return {
-      kind: 'unreadable',
-      reason: `it is not a Raincut list of scenarios (no "$format": "${LIBRARY_FORMAT_TAG}")`,
-    };
-  }
-  const version = json['version'];
-  if (typeof version === 'number' && Number.isSafeInteger(version) && version > LIBRARY_VERSION) {
-    return { kind: 'newer', version };
-  }
-  if (version !== LIBRARY_VERSION) return { kind: 'unreadable', reason: `its version is ${describeValue(version)}` };
-  if (!Array.isArray(json['entries'])) return { kind: 'unreadable', reason: 'it has no list of entries' };
-
+/** Reads the body of a stored list (the envelope already checked): what could be read, and what was left out. */
+function readBody(json: Record<string, unknown>): { value: State; damage: Problem[] } | { unreadable: string } {
+  if (!Array.isArray(json['entries'])) return { unreadable: 'it has no list of entries' };
   const damage: Problem[] = [];
   const state = emptyState();
   const seen = new Set<string>();
@@ -196,68 +164,76 @@ function parseStored(text: string): Parsed {
         problem(`The id counter was damaged (got ${describeValue(nextId)}); it now starts after the highest id.`),
       );
   }
-  return { kind: 'ok', state, damage };
+  return { value: state, damage };
 }
 
-function serialise(state: State): string {
-  return JSON.stringify({ $format: LIBRARY_FORMAT_TAG, version: LIBRARY_VERSION, ...state });
-}
+/** The stored list's envelope: { "$format": "raincut-library", "version": 1, nextId, entries, deleted, setAside }. */
+const LIBRARY_CODEC = envelopeCodec<State>({
+  format: LIBRARY_FORMAT_TAG,
+  version: LIBRARY_VERSION,
+  noun: 'list of scenarios',
+  readBody,
+  writeBody: (state) => state,
+});
 
 /**
  * The browser's named list of scenarios. Every call reads storage afresh (so
- * two tabs do not undo each other's changes) and writes the whole list in
- * one `setItem`, so a write either happens completely or not at all. Damaged
- * stored data is copied, as it was, to a set-aside key before anything is
- * written over it; if that copy cannot be made, nothing is written at all.
+ * two tabs add to one list instead of undoing each other's changes) and
+ * writes the whole list in one `setItem`, so a write either happens
+ * completely or not at all. Damaged stored data is copied, as it was, to a
+ * set-aside key before anything is written over it; if that copy cannot be
+ * made, nothing is written at all (the stored-slot rules, ./stored-slot.ts).
+ *
+ * Two tabs: an entry this list last showed and another tab has changed
+ * since (updated, renamed, deleted) is never updated, renamed or deleted
+ * here without the user seeing that version first: the call is refused, and
+ * the next `list()` shows the other tab's version.
  * Never throws.
  */
 export function createScenarioLibrary(storage: StorageLike, options: LibraryOptions = {}): ScenarioLibrary {
   const key = options.key ?? LIBRARY_KEY;
   const now = (): string => (options.now ?? (() => new Date()))().toISOString();
+  const slot = createStoredSlot(storage, {
+    key,
+    codec: LIBRARY_CODEC,
+    ...(options.now ? { now: options.now } : {}),
+  });
+  /** Each entry as this list last showed it (its stored JSON), to tell another tab's change of it. */
+  const shown = new Map<string, string>();
+  const remember = (entries: readonly LibraryEntry[]): void => {
+    shown.clear();
+    for (const e of entries) shown.set(e.id, JSON.stringify(e));
+  };
 
   /** Writes the list; undefined on success, else the problem. */
   function write(state: State, what: string): Problem | undefined {
-    try {
-      storage.setItem(key, serialise(state));
-      return undefined;
-    } catch (error) {
-      return problem(
-        `${what} could not be saved: the browser refused to store the list (${why(error)}). ` +
-          'Nothing saved before was changed; save the scenario as a file to keep it.',
-      );
-    }
-  }
-
-  /** A storage key not yet in use, for setting damaged data aside. */
-  function freeKey(stamp: string): string {
-    const base = `${key}.damaged.${stamp}`;
-    let candidate = base;
-    for (let n = 2; storage.getItem(candidate) !== null; n++) candidate = `${base}-${n}`;
-    return candidate;
+    const failed = slot.write(state);
+    return failed === null
+      ? undefined
+      : problem(
+          `${what} could not be saved: the browser refused to store the list (${failed}). ` +
+            'Nothing saved before was changed; save the scenario as a file to keep it.',
+        );
   }
 
   function load(): Loaded {
-    let text: string | null;
-    try {
-      text = storage.getItem(key);
-    } catch (error) {
+    const read = slot.read();
+    if (read.kind === 'blocked') {
       return {
         state: emptyState(),
         canWrite: false,
-        problems: [problem(`The saved scenarios could not be read from this browser (${why(error)}).`)],
+        problems: [problem(`The saved scenarios could not be read from this browser (${read.reason}).`)],
       };
     }
-    if (text === null) return { state: emptyState(), canWrite: true, problems: [] };
-    const parsed = parseStored(text);
-    if (parsed.kind === 'ok' && parsed.damage.length === 0)
-      return { state: parsed.state, canWrite: true, problems: [] };
-    if (parsed.kind === 'newer') {
+    if (read.kind === 'empty') return { state: emptyState(), canWrite: true, problems: [] };
+    if (read.kind === 'ok' && read.damage.length === 0) return { state: read.value, canWrite: true, problems: [] };
+    if (read.kind === 'newer') {
       return {
         state: emptyState(),
         canWrite: false,
         problems: [
           problem(
-            `The saved scenarios were written by a newer version of Raincut (list version ${parsed.version}); ` +
+            `The saved scenarios were written by a newer version of Raincut (list version ${read.version}); ` +
               'reload the page to use it. Nothing will be changed here.',
           ),
         ],
@@ -265,35 +241,55 @@ export function createScenarioLibrary(storage: StorageLike, options: LibraryOpti
     }
 
     // Damaged: keep an exact copy of what was stored, then carry on with what could be read.
-    const state = parsed.kind === 'ok' ? parsed.state : emptyState();
+    const state = read.kind === 'ok' ? read.value : emptyState();
     const details = capProblems(
-      parsed.kind === 'ok' ? parsed.damage : [problem(`The saved list could not be read: ${parsed.reason}.`)],
+      read.kind === 'ok' ? [...read.damage] : [problem(`The saved list could not be read: ${read.reason}.`)],
     );
-    let asideKey: string;
-    try {
-      asideKey = freeKey(now());
-      storage.setItem(asideKey, text);
-    } catch (error) {
+    const aside = slot.setAside(read.text);
+    if (!aside.ok) {
       return {
         state,
         canWrite: false,
         problems: [
           problem(
-            `The saved scenarios are damaged and could not be set aside (${why(error)}). They are left as they are ` +
+            `The saved scenarios are damaged and could not be set aside (${aside.reason}). They are left as they are ` +
               `under "${key}", and nothing will be saved over them.`,
           ),
           ...details,
         ],
       };
     }
-    state.setAside = [...state.setAside, asideKey];
+    state.setAside = [...state.setAside, aside.key];
     const summary = problem(
-      parsed.kind === 'ok'
-        ? `Part of the saved list of scenarios was damaged and is left out (see below). The list as it was is kept under browser storage key "${asideKey}".`
-        : `The saved list of scenarios was damaged and could not be read. It is kept as it was under browser storage key "${asideKey}".`,
+      read.kind === 'ok'
+        ? `Part of the saved list of scenarios was damaged and is left out (see below). The list as it was is kept under browser storage key "${aside.key}".`
+        : `The saved list of scenarios was damaged and could not be read. It is kept as it was under browser storage key "${aside.key}".`,
     );
     const failed = write(state, 'The repaired list');
     return { state, canWrite: true, problems: failed ? [summary, ...details, failed] : [summary, ...details] };
+  }
+
+  /**
+   * Refuses a change of an entry that another tab changed since this list
+   * showed it; undefined when the entry is as shown (or was never shown).
+   */
+  function changedElsewhere(state: State, id: string, notices: readonly Problem[]): LibraryResult<never> | undefined {
+    const seen = shown.get(id);
+    if (seen === undefined) return undefined;
+    const entry = state.entries.find((e) => e.id === id);
+    if (entry && JSON.stringify(entry) === seen) return undefined;
+    const name = (JSON.parse(seen) as LibraryEntry).scenario.name;
+    return {
+      ok: false,
+      problems: [
+        ...notices,
+        problem(
+          entry
+            ? `“${name}” was changed in another tab since this list was shown; nothing was written over it. The list now shows that version.`
+            : `“${name}” was deleted in another tab since this list was shown; nothing was written. The list now shows what is saved.`,
+        ),
+      ],
+    };
   }
 
   function findEntry(state: State, id: string): number {
@@ -325,7 +321,10 @@ export function createScenarioLibrary(storage: StorageLike, options: LibraryOpti
     const result = apply(loaded.state, loaded.problems);
     if (!result.ok) return result;
     const failed = write(loaded.state, what);
-    return failed ? { ok: false, problems: [...loaded.problems, failed] } : result;
+    if (failed) return { ok: false, problems: [...loaded.problems, failed] };
+    // This list's own write is what it has shown from now on.
+    remember(loaded.state.entries);
+    return result;
   }
 
   function copyName(state: State, name: string): string {
@@ -341,6 +340,7 @@ export function createScenarioLibrary(storage: StorageLike, options: LibraryOpti
   return {
     list() {
       const { state, canWrite, problems } = load();
+      remember(state.entries);
       return { entries: state.entries, deleted: state.deleted, setAside: state.setAside, canWrite, problems };
     },
 
@@ -354,6 +354,8 @@ export function createScenarioLibrary(storage: StorageLike, options: LibraryOpti
       const parsed = parseScenario(scenario);
       if (!parsed.ok) return { ok: false, problems: parsed.problems };
       return change<LibraryEntry>('The scenario', (state, notices) => {
+        const conflict = id === undefined ? undefined : changedElsewhere(state, id, notices);
+        if (conflict) return conflict;
         const index = id === undefined ? -1 : findEntry(state, id);
         const entry: LibraryEntry = {
           id: index >= 0 ? (state.entries[index] as LibraryEntry).id : `s${state.nextId++}`,
@@ -379,6 +381,8 @@ export function createScenarioLibrary(storage: StorageLike, options: LibraryOpti
         };
       }
       return change<LibraryEntry>('The new name', (state, notices) => {
+        const conflict = changedElsewhere(state, id, notices);
+        if (conflict) return conflict;
         const index = findEntry(state, id);
         if (index < 0) return missing(id, notices);
         const old = state.entries[index] as LibraryEntry;
@@ -405,6 +409,8 @@ export function createScenarioLibrary(storage: StorageLike, options: LibraryOpti
 
     delete(id) {
       return change<DeletedEntry>('The deletion', (state, notices) => {
+        const conflict = changedElsewhere(state, id, notices);
+        if (conflict) return conflict;
         const index = findEntry(state, id);
         if (index < 0) return missing(id, notices);
         const [entry] = state.entries.splice(index, 1) as [LibraryEntry];

@@ -32,9 +32,11 @@ export {
   type Loaded,
   type Persistence,
   type OtherTabWatch,
-  copyName,
   type StorageLike,
 } from './persistence';
+// The pin board itself (./pins) is imported by path: the screen fetches it after the first frame (./pin-board).
+export { createPinShelf, MAX_PINS, PINS_KEY, type PinShelf } from './pin-board';
+export type { Pin, PinBoard, PinState } from './pins';
 export { StoreProvider, useActions, useDerived, useScenario, useWorkbench, useWorkbenchStore } from './react';
 export {
   withDesignPick,

@@ -1,24 +1,46 @@
-import { MAX_NAME_LENGTH } from '../scenario/text-limits';
+import {
+  createStoredSlot,
+  describeError as describe,
+  SET_ASIDE_MARK,
+  type OtherTabWatch,
+  type SlotCodec,
+  type StorageLike,
+  type StoredSlot,
+} from '../scenario/stored-slot';
 import type { Scenario } from '../scenario/types';
+import { columnNumbers, LARGE_NUMBERS, readLargeMarker } from './large-marker';
+import type { LargeRead } from './large-store';
+import { windowStorageEvents } from './other-tabs';
+import type { OtherTabChoiceHost } from './other-tab-choice';
 import { readScenarioJson } from './read-scenario';
+
+export type { OtherTabWatch, StorageLike } from '../scenario/stored-slot';
 import type { StorageNotice, WorkbenchStore } from './scenario-store';
 
 /** Where the browser keeps the current scenario. */
 export const STORAGE_KEY = 'raincut.scenario';
 /** Damaged saved data is moved to this key plus a time stamp, never deleted. */
-export const SET_ASIDE_PREFIX = 'raincut.scenario.damaged.';
+export const SET_ASIDE_PREFIX = `${STORAGE_KEY}${SET_ASIDE_MARK}`;
 
 /**
- * The part of the Web Storage interface used here (localStorage, or a test
- * double). `length` and `key` let the saved list find set-aside copies
- * (src/store/set-aside.ts); without them there is simply nothing to list.
+ * The current scenario's envelope is the scenario document itself (its own
+ * `version`, upgraded by the schema's migrations): read through the one
+ * schema, written as plain JSON.
  */
-export interface StorageLike {
-  getItem(key: string): string | null;
-  setItem(key: string, value: string): void;
-  removeItem(key: string): void;
-  readonly length?: number;
-  key?(index: number): string | null;
+const SCENARIO_CODEC: SlotCodec<Scenario> = {
+  decode(text) {
+    const read = readScenarioJson(text);
+    return read.ok ? { kind: 'ok', value: read.scenario, damage: [] } : { kind: 'unreadable', reason: read.message };
+  },
+  encode: (scenario) => JSON.stringify(scenario),
+};
+
+/** The browser's slot of the current scenario (the stored-slot rules: set-aside, two tabs). */
+export function currentScenarioSlot(
+  storage: StorageLike,
+  options: { readonly now?: () => Date; readonly watch?: OtherTabWatch } = {},
+): StoredSlot<Scenario> {
+  return createStoredSlot(storage, { key: STORAGE_KEY, codec: SCENARIO_CODEC, ...options });
 }
 
 /** The outcome of setting the saved scenario aside; never an exception. */
@@ -36,21 +58,19 @@ export type SetAsideResult =
  * nothing was saved. Never throws.
  */
 export function setAsideSaved(storage: StorageLike, nowIso: string): SetAsideResult {
+  const slot = currentScenarioSlot(storage, { now: () => new Date(nowIso) });
+  let saved: string | null;
   try {
-    const saved = storage.getItem(STORAGE_KEY);
-    if (saved === null) return { ok: true, key: null };
-    let key = SET_ASIDE_PREFIX + nowIso;
-    for (let n = 2; storage.getItem(key) !== null; n++) key = `${SET_ASIDE_PREFIX}${nowIso}-${n}`;
-    storage.setItem(key, saved);
-    try {
-      storage.removeItem(STORAGE_KEY);
-    } catch {
-      // The copy is made; an original that stays is set aside again next time, never lost.
-    }
-    return { ok: true, key };
+    saved = storage.getItem(STORAGE_KEY);
   } catch (error) {
     return { ok: false, reason: describe(error) };
   }
+  if (saved === null) return { ok: true, key: null };
+  const aside = slot.setAside(saved);
+  if (!aside.ok) return aside;
+  // The copy is made; an original that stays is set aside again next time, never lost.
+  slot.remove();
+  return aside;
 }
 
 export interface Loaded {
@@ -58,15 +78,6 @@ export interface Loaded {
   readonly notice: StorageNotice | null;
   /** False when the saved copy could not be moved aside: saving would overwrite it. */
   readonly canSave: boolean;
-}
-
-/** An error in words: its message, after its name when that says more than "Error" (QuotaExceededError). */
-function describe(error: unknown): string {
-  if (error !== null && typeof error === 'object' && typeof (error as Error).message === 'string') {
-    const { name, message } = error as Error;
-    return typeof name === 'string' && name !== '' && name !== 'Error' ? `${name}: ${message}` : message;
-  }
-  return String(error);
 }
 
 /**
@@ -80,7 +91,11 @@ export function loadScenario(
   storage: StorageLike | null,
   fallback: Scenario,
   nowIso: string,
-  options: { readonly skipSaved?: boolean } = {},
+  options: {
+    readonly skipSaved?: boolean;
+    /** The large store's record, read before start-up when the slot held a marker (see ./large-marker.ts). */
+    readonly large?: LargeRead;
+  } = {},
 ): Loaded {
   if (!storage) {
     return {
@@ -92,20 +107,18 @@ export function loadScenario(
       canSave: false,
     };
   }
-  let saved: string | null;
-  try {
-    saved = storage.getItem(STORAGE_KEY);
-  } catch (error) {
+  const read = currentScenarioSlot(storage).read();
+  if (read.kind === 'blocked') {
     return {
       scenario: fallback,
       notice: {
         kind: 'unavailable',
-        message: `The saved scenario could not be read from this browser (${describe(error)}).`,
+        message: `The saved scenario could not be read from this browser (${read.reason}).`,
       },
       canSave: false,
     };
   }
-  if (saved === null) return { scenario: fallback, notice: null, canSave: true };
+  if (read.kind === 'empty') return { scenario: fallback, notice: null, canSave: true };
   if (options.skipSaved) {
     // After it stopped the screen and could not be set aside: left unopened and unwritten (see crash.ts).
     return {
@@ -119,8 +132,14 @@ export function loadScenario(
       canSave: false,
     };
   }
-  const read = readScenarioJson(saved);
-  if (read.ok) return { scenario: read.scenario, notice: null, canSave: true };
+  if (read.kind === 'ok') return { scenario: read.value, notice: null, canSave: true };
+  const marker = readLargeMarker(read.text);
+  if (marker && options.large?.ok) return { scenario: options.large.scenario, notice: null, canSave: true };
+  const message = marker
+    ? `${options.large && !options.large.ok ? options.large.message : 'This browser’s large store was not read.'} The pointer to it is set aside; the record stays in the large store.`
+    : read.kind === 'unreadable'
+      ? read.reason
+      : `it was written by a newer version (${read.version}).`;
 
   const aside = setAsideSaved(storage, nowIso);
   if (!aside.ok || aside.key === null) {
@@ -129,7 +148,7 @@ export function loadScenario(
       notice: {
         kind: 'unavailable',
         message:
-          `The saved scenario is damaged (${read.message}) and could not be set aside (${aside.ok ? 'it vanished while being read' : aside.reason}). ` +
+          `The saved scenario is damaged (${message}) and could not be set aside (${aside.ok ? 'it vanished while being read' : aside.reason}). ` +
           `It is left untouched under "${STORAGE_KEY}", and nothing will be saved over it in this session.`,
       },
       canSave: false,
@@ -140,7 +159,7 @@ export function loadScenario(
     notice: {
       kind: 'set-aside',
       key: aside.key,
-      message: `The saved scenario could not be opened: ${read.message} It is kept as it was (browser storage key "${aside.key}") and listed under Saved scenarios, “Set-aside copies”, to download or restore; the demo scenario is shown instead.`,
+      message: `The saved scenario could not be opened: ${message} It is kept as it was (browser storage key "${aside.key}") and listed under Saved scenarios, “Set-aside copies”, to download or restore; the demo scenario is shown instead.`,
     },
     canSave: true,
   };
@@ -152,22 +171,18 @@ export interface Persistence {
   stop(): void;
 }
 
-/** Calls back with the storage key another tab changed (null: all cleared); returns how to stop listening. */
-export type OtherTabWatch = (changed: (key: string | null) => void) => () => void;
-
-/** The browser's "storage" events: fired in every other tab of the same origin when one tab writes. */
-const windowStorageEvents: OtherTabWatch = (changed) => {
-  if (typeof window === 'undefined') return () => undefined;
-  const listener = (event: StorageEvent): void => changed(event.key);
-  window.addEventListener('storage', listener);
-  return () => window.removeEventListener('storage', listener);
-};
-
-/** The name of this tab's copy when the user keeps it beside the other tab's version. */
-export function copyName(name: string): string {
-  const suffix = ' (this tab’s copy)';
-  return `${name.slice(0, Math.max(0, MAX_NAME_LENGTH - suffix.length))}${suffix}`;
-}
+/** Whether this browser has IndexedDB, where the large store lives (not in a private window of some browsers, nor in Node). */
+const hasLargeStore = (): boolean => typeof indexedDB !== 'undefined';
+/** The other-tab choices' code, fetched when the user makes one. */
+const loadChoice = (): Promise<typeof import('./other-tab-choice')> => import('./other-tab-choice');
+type LargeModule = typeof import('./large-store');
+/** The large store's code (idb-keyval and the packing), fetched only when a scenario needs it. */
+const loadLarge = (): Promise<LargeModule> => import('./large-store');
+/** A failed fetch of the large store's code, in the shape of a failed read. */
+const failedLoad = (error: unknown): { readonly ok: false; readonly message: string } => ({
+  ok: false,
+  message: `The code of this browser’s large store could not be loaded (${describe(error)}).`,
+});
 
 /**
  * Saves the scenario whenever it changes, at most once per `delayMs` of
@@ -190,59 +205,33 @@ export function persistStore(
   let timer: ReturnType<typeof setTimeout> | null = null;
   let pending: Scenario | null = null;
   let lastSaved: Scenario = store.getState().scenario;
-  let known: string | null = readSlot();
+  const slot = currentScenarioSlot(storage, { watch });
+  // The saved text as this tab finds it at the start is its stamp (see the stored-slot rules).
+  slot.acknowledge();
+  const changedElsewhere = (): boolean => slot.changedElsewhere();
+  /** Large saves run one after another; a save overtaken by a newer one before it starts is skipped. */
+  let largeQueue: Promise<void> = Promise.resolve();
+  let largeLatest: Scenario | null = null;
+  let stopped = false;
 
-  function readSlot(): string | null {
-    try {
-      return storage.getItem(STORAGE_KEY);
-    } catch {
-      return null;
-    }
-  }
-
-  /** True when another tab wrote the saved scenario since this tab last read or wrote it. */
-  const changedElsewhere = (): boolean => {
-    const now = readSlot();
-    return now !== null && now !== known;
+  /** What the other-tab choices (./other-tab-choice.ts, loaded when one is made) need of this tab's saving. */
+  const choice: OtherTabChoiceHost = {
+    store,
+    slot,
+    storage,
+    taken: (scenario) => {
+      lastSaved = scenario;
+      pending = null;
+    },
+    keep: (scenario) => {
+      pending = null;
+      save(scenario);
+    },
   };
-
-  const takeTheirs = (): void => {
-    const theirs = readSlot();
-    store.getState().actions.setNotice(null);
-    if (theirs === null) return;
-    const read = readScenarioJson(theirs);
-    if (!read.ok) {
-      store.getState().actions.setNotice({
-        kind: 'save-failed',
-        message: `The other tab's version could not be opened (${read.message}). This tab's scenario stays on screen and is not saved over it; export it to keep it.`,
-      });
-      return;
-    }
-    known = theirs;
-    lastSaved = read.scenario;
-    pending = null;
-    store.getState().actions.replaceScenario(read.scenario, 'Open the other tab’s version');
-    // The edit above is this tab's own view of the saved text: nothing to write.
-    lastSaved = store.getState().scenario;
-  };
-
-  const keepMine = async (): Promise<void> => {
-    const mine = store.getState().scenario;
-    // The saved list's code loads here, on this rare path, not with the first screen.
-    const { createScenarioLibrary } = await import('../scenario/library');
-    const saved = createScenarioLibrary(storage).save({ ...mine, name: copyName(mine.name) });
-    if (!saved.ok) {
-      store.getState().actions.setNotice({
-        kind: 'save-failed',
-        message: `This tab's scenario could not be saved as a copy (${saved.problems.map((p) => p.message).join(' ')}). It stays on screen; export it to keep it.`,
-      });
-      return;
-    }
-    known = readSlot();
-    store.getState().actions.setNotice(null);
-    pending = null;
-    save(mine);
-  };
+  const takeTheirs = (): void => void loadChoice().then((m) => m.takeTheirs(choice), reportFailedLoad);
+  const keepMine = (): Promise<void> => loadChoice().then((m) => m.keepMine(choice), reportFailedLoad);
+  const reportFailedLoad = (error: unknown): void =>
+    store.getState().actions.setNotice({ kind: 'save-failed', message: failedLoad(error).message });
 
   const tellOtherTab = (): void => {
     if (store.getState().notice?.kind === 'other-tab') return;
@@ -255,7 +244,7 @@ export function persistStore(
     });
   };
 
-  function write(): void {
+  function write(urgent = false): void {
     timer = null;
     const scenario = pending;
     if (!scenario || scenario === lastSaved) {
@@ -268,26 +257,60 @@ export function persistStore(
       return;
     }
     pending = null;
-    save(scenario);
+    save(scenario, urgent);
   }
 
-  function save(scenario: Scenario): void {
-    try {
-      const json = JSON.stringify(scenario);
-      storage.setItem(STORAGE_KEY, json);
-      known = json;
+  function save(scenario: Scenario, urgent = false): void {
+    if (columnNumbers(scenario) > LARGE_NUMBERS && hasLargeStore()) {
+      saveLarge(scenario, urgent);
+      return;
+    }
+    const before = readLargeMarker(slot.peek());
+    const failed = slot.write(scenario);
+    if (failed === null) {
       lastSaved = scenario;
       if (store.getState().notice?.kind === 'save-failed') store.getState().actions.setNotice(null);
-    } catch (error) {
-      store.getState().actions.setNotice({
-        kind: 'save-failed',
-        message: `The latest change could not be saved in this browser (${describe(error)}). It stays on screen; export it to keep it.`,
-      });
+      // Small again: the large record the marker named is no longer anyone's.
+      if (before) void loadLarge().then((large) => large.dropLarge(before.id), failedLoad);
+      return;
     }
+    // Too large for localStorage after all: the large store takes it.
+    if (/quota/i.test(failed) && hasLargeStore()) {
+      saveLarge(scenario, urgent);
+      return;
+    }
+    store.getState().actions.setNotice({
+      kind: 'save-failed',
+      message: `The latest change could not be saved in this browser (${failed}). It stays on screen; export it to keep it.`,
+    });
   }
 
-  const unwatch = watch((key) => {
-    if ((key === STORAGE_KEY || key === null) && changedElsewhere()) tellOtherTab();
+  /** Saves in the large store (IndexedDB) when the page is idle; one save at a time (see ./large-store.ts). */
+  function saveLarge(scenario: Scenario, urgent: boolean): void {
+    largeLatest = scenario;
+    const current = (): boolean => !stopped && scenario === largeLatest;
+    largeQueue = largeQueue
+      .then(loadLarge)
+      .then((large) =>
+        large.saveInTurn({
+          store,
+          slot,
+          scenario,
+          urgent,
+          current,
+          saved: () => (lastSaved = scenario),
+          changed: () => {
+            // Kept pending: written once the user has chosen.
+            pending ??= scenario;
+            tellOtherTab();
+          },
+        }),
+      )
+      .catch(reportFailedLoad);
+  }
+
+  const unwatch = slot.watch(() => {
+    if (changedElsewhere()) tellOtherTab();
   });
 
   const unsubscribe = store.subscribe((state, previous) => {
@@ -300,9 +323,10 @@ export function persistStore(
   return {
     flush: () => {
       if (timer !== null) clearTimeout(timer);
-      write();
+      write(true);
     },
     stop: () => {
+      stopped = true;
       if (timer !== null) clearTimeout(timer);
       timer = null;
       unsubscribe();

@@ -53,6 +53,8 @@ export type StorageNotice =
   | { readonly kind: 'set-aside'; readonly message: string; readonly key: string }
   | { readonly kind: 'save-failed'; readonly message: string }
   | { readonly kind: 'unavailable'; readonly message: string }
+  /** Saved, but in the browser's large store (IndexedDB): said once, so the user knows where the work is. */
+  | { readonly kind: 'large-store'; readonly message: string }
   /** Another tab changed the saved scenario: nothing is written over it until the user chooses. */
   | {
       readonly kind: 'other-tab';

@@ -1,6 +1,7 @@
 import type { Scenario } from '../scenario/types';
 import { readAreaUnits, writeAreaUnits } from './area-units';
 import { createLinkSession, type LinkSession } from './link-session';
+import type { LargeRead } from './large-store';
 import { loadScenario, type StorageLike } from './persistence';
 import { createWorkbenchStore, type WorkbenchStore } from './scenario-store';
 
@@ -17,6 +18,8 @@ export interface StartOptions {
   readonly persistDelayMs?: number;
   /** Leave the saved scenario unopened and unwritten (chosen on the error screen; see crash.ts). */
   readonly skipSaved?: boolean;
+  /** The large store's record, read first when the saved slot held its marker (src/store/large-marker.ts). */
+  readonly large?: LargeRead;
 }
 
 export interface Started {
@@ -33,6 +36,7 @@ export interface Started {
 export function startWorkbench(options: StartOptions): Started {
   const loaded = loadScenario(options.storage, options.fallback, options.nowIso, {
     skipSaved: options.skipSaved === true,
+    ...(options.large ? { large: options.large } : {}),
   });
   const store = createWorkbenchStore(loaded.scenario, {
     notice: loaded.notice,

@@ -190,6 +190,43 @@ describe('the saved-scenario list', () => {
     );
   }, 60_000); // documents of hundreds of bars, records and events: generous on a busy machine
 
+  it('does not write over an entry another tab changed since this list showed it', () => {
+    const storage = new MemoryStorage();
+    const tabA = createScenarioLibrary(storage);
+    const tabB = createScenarioLibrary(storage);
+    const a = value(tabA.save(named('A')));
+    expect(names(tabB)).toEqual(['A']);
+    value(tabA.rename(a.id, 'A, renamed in tab A'));
+    // Tab B still shows "A": its update, rename and delete are refused, and nothing is written.
+    const before = storage.snapshot();
+    for (const attempt of [
+      () => tabB.save({ ...named('B'), notes: 'tab B' }, a.id),
+      () => tabB.rename(a.id, 'A, renamed in tab B'),
+      () => tabB.delete(a.id),
+    ]) {
+      expect(refusal(attempt())).toEqual([
+        '“A” was changed in another tab since this list was shown; nothing was written over it. The list now shows that version.',
+      ]);
+    }
+    expect(storage.snapshot()).toEqual(before);
+    // Once tab B has shown the other tab's version, it may change it.
+    expect(names(tabB)).toEqual(['A, renamed in tab A']);
+    expect(value(tabB.rename(a.id, 'A, renamed in tab B')).scenario.name).toBe('A, renamed in tab B');
+  });
+
+  it('does not bring back an entry another tab deleted since this list showed it', () => {
+    const storage = new MemoryStorage();
+    const tabA = createScenarioLibrary(storage);
+    const tabB = createScenarioLibrary(storage);
+    const a = value(tabA.save(named('A')));
+    tabB.list();
+    value(tabA.delete(a.id));
+    expect(refusal(tabB.save(named('A, edited in tab B'), a.id))).toEqual([
+      '“A” was deleted in another tab since this list was shown; nothing was written. The list now shows what is saved.',
+    ]);
+    expect(names(tabB)).toEqual([]);
+  });
+
   it('does not undo changes made in another tab', () => {
     const storage = new MemoryStorage();
     const tabA = createScenarioLibrary(storage);

@@ -64,7 +64,7 @@ describe('two tabs of the workbench', () => {
     expect(a.store.getState().notice?.kind).toBe('other-tab');
   });
 
-  it('"open the other tab’s version" puts it on screen as one undoable edit, and writes nothing', () => {
+  it('"open the other tab’s version" puts it on screen as one undoable edit, and writes nothing', async () => {
     const { storage, a, b } = twoTabs();
     b.actions.setName('Tab B');
     vi.advanceTimersByTime(10);
@@ -74,6 +74,8 @@ describe('two tabs of the workbench', () => {
     if (notice?.kind !== 'other-tab') throw new Error('tab A was not told');
     const writes = vi.spyOn(storage, 'setItem');
     notice.takeTheirs();
+    // The choices' code is fetched when one is made (src/store/other-tab-choice.ts).
+    await vi.dynamicImportSettled();
     vi.advanceTimersByTime(100);
     expect(a.store.getState().scenario.name).toBe('Tab B');
     expect(a.store.getState().notice).toBeNull();

@@ -14,7 +14,8 @@ import { StaticHydrograph, staticHydrographFrame, visibleEndH } from '../observe
 import { hoursMinutes } from '../results/hours-minutes';
 import { commonFrames } from './common-frame';
 import { difference, type Difference } from './difference';
-import { MAX_PINS, type Pin } from '../services/pins';
+import { MAX_PINS } from '../../store/pin-board';
+import type { Pin } from '../../store/pins';
 import { totalsOf, type Totals } from '../results/totals';
 import './compare.css';
 
@@ -141,7 +142,7 @@ function PinnedChart({ pin, index, frame, units, derived, hydroScale }: PinnedCh
           type="button"
           className="share-button--small"
           aria-label={`Unpin ${name}`}
-          onClick={() => pins.unpin(pin.id)}
+          onClick={() => void pins.unpin(pin.id)}
         >
           Unpin
         </button>
@@ -309,7 +310,11 @@ export function ComparePanel() {
           Charts share one time and intensity scale; differences are from pin 1.
         </p>
         {pins.length > 1 ? (
-          <button type="button" className="share-button--small" onClick={() => pins.forEach((p) => board.unpin(p.id))}>
+          <button
+            type="button"
+            className="share-button--small"
+            onClick={() => pins.forEach((p) => void board.unpin(p.id))}
+          >
             Unpin all
           </button>
         ) : null}

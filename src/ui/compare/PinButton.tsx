@@ -1,7 +1,7 @@
 import { useWorkbenchStore } from '../../store';
 import { useBarMessage } from '../services/bar-message';
 import { usePins, useServices } from '../services/services';
-import { MAX_PINS } from '../services/pins';
+import { MAX_PINS } from '../../store/pin-board';
 import './compare.css';
 
 /** "Pin to compare": a copy of the scenario on screen joins the comparison (up to MAX_PINS). */
@@ -10,8 +10,8 @@ export function PinButton() {
   const { pins: board } = useServices();
   const { pins } = usePins();
   const show = useBarMessage();
-  const pin = (): void => {
-    const result = board.pin(store.getState().scenario);
+  const pin = async (): Promise<void> => {
+    const result = await board.pin(store.getState().scenario);
     if (!result.ok) {
       show({ tone: 'problem', title: result.message });
       return;
@@ -29,7 +29,7 @@ export function PinButton() {
   };
   return (
     <>
-      <button type="button" onClick={pin} aria-describedby={pins.length > 0 ? 'pin-count' : undefined}>
+      <button type="button" onClick={() => void pin()} aria-describedby={pins.length > 0 ? 'pin-count' : undefined}>
         Pin to compare
       </button>
       {pins.length > 0 ? (

@@ -13,7 +13,7 @@ import { hoursMinutes } from '../results/hours-minutes';
 import { useActions, useDerived, useScenario, useWorkbenchStore, withDesignStormOnWorkbench } from '../../store';
 import { toScenarioStorm } from '../../store/edits';
 import { usePins, useServices } from '../services/services';
-import { MAX_PINS } from '../services/pins';
+import { MAX_PINS } from '../../store/pin-board';
 import { designMethod } from '../events/event-fits';
 import { useEventFits } from '../events/use-event-fits';
 import { formatPercent, formatValue } from '../format';
@@ -159,11 +159,11 @@ export function DesignStormView() {
       'The design storm is on the workbench, with the design loss. Undo puts back what was there; the events are unchanged.',
     );
   };
-  const pin = (): void => {
+  const pin = async (): Promise<void> => {
     if (!built.ok) return;
     // A copy of the scenario as it would be with the design storm on the workbench; the screen is not changed.
     const copy = withDesignStormOnWorkbench(store.getState().scenario, toScenarioStorm(built.storm), method);
-    const pinned = board.pin({ ...copy, name: `Design storm: ${built.description}` });
+    const pinned = await board.pin({ ...copy, name: `Design storm: ${built.description}` });
     setSaid(
       pinned.ok
         ? `Pinned the design result (${board.getState().pins.length} of ${MAX_PINS}); the comparison is on the Workbench view, beside the events you pin there.`
@@ -346,7 +346,7 @@ export function DesignStormView() {
               <button type="button" className="button--primary" onClick={putOnBench}>
                 Put the design storm on the workbench
               </button>
-              <button type="button" onClick={pin} disabled={pins.length >= MAX_PINS}>
+              <button type="button" onClick={() => void pin()} disabled={pins.length >= MAX_PINS}>
                 Pin the design result to compare
               </button>
             </div>

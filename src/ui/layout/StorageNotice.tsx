@@ -20,6 +20,18 @@ export function StorageNoticeBar() {
       </div>
     );
   }
+  if (notice.kind === 'large-store') {
+    return (
+      <div className="notice" role="status">
+        <p>
+          <strong>Kept in this browser’s larger store.</strong> {notice.message}
+        </p>
+        <button type="button" onClick={() => actions.setNotice(null)}>
+          Dismiss
+        </button>
+      </div>
+    );
+  }
   const title =
     notice.kind === 'set-aside'
       ? 'Saved scenario set aside'

@@ -1,7 +1,9 @@
-import { createContext, useContext, useMemo, useSyncExternalStore, type ReactNode } from 'react';
+import { createContext, useContext, useEffect, useMemo, useSyncExternalStore, type ReactNode } from 'react';
 import type { StorageLike } from '../../scenario';
 import type { LinkSession, LinkState } from '../../store/link-session';
-import { createPinBoard, type PinBoard, type PinState } from './pins';
+import { createPinShelf, type PinShelf } from '../../store/pin-board';
+import type { PinState } from '../../store/pins';
+import { windowStorageEvents } from '../../store/other-tabs';
 import { downloadBlob } from './download';
 
 /**
@@ -49,7 +51,7 @@ export function browserServices(overrides: Partial<ScenarioServices> = {}): Scen
 }
 
 interface Provided extends ScenarioServices {
-  readonly pins: PinBoard;
+  readonly pins: PinShelf;
 }
 
 const ServicesContext = createContext<Provided | null>(null);
@@ -65,9 +67,11 @@ export function ScenarioServicesProvider({
     const base = services ?? browserServices();
     return {
       ...base,
-      pins: createPinBoard(base.storage, { now: base.now }),
+      pins: createPinShelf(base.storage, { now: base.now, watch: windowStorageEvents }),
     };
   }, [services]);
+  // The pins are read just after the first frame; another tab's show here as soon as that tab writes them.
+  useEffect(() => value.pins.watchOtherTabs(), [value]);
   return <ServicesContext.Provider value={value}>{children}</ServicesContext.Provider>;
 }
 

@@ -3,10 +3,10 @@ import { act, cleanup, screen, within } from '@testing-library/react';
 import { describe, expect, it } from 'vitest';
 import { computeLosses, runoffVolumeM3 } from '../../../src/core';
 import type { Scenario } from '../../../src/scenario/types';
-import { PINS_KEY } from '../../../src/ui/services';
+import { PINS_KEY } from '../../../src/store/pins';
 import { formatPercent, formatValue } from '../../../src/ui/format';
 import { FOUR_BARS, memoryStorage } from '../../helpers/scenario-fixtures';
-import { lazyPartsLoaded } from '../../helpers/render';
+import { LAZY_LOAD_MS, lazyPartsLoaded } from '../../helpers/render';
 import { SHARED, renderTools } from '../../helpers/render-tools';
 
 const MESSAGE = 'Scenario tools message';
@@ -140,6 +140,9 @@ describe('comparing pinned scenarios', () => {
     await pin(first.user);
     cleanup();
     const again = renderTools({ storage, fallback: { ...FOUR_BARS, units: 'si' } as Scenario });
+    // The pin board is read just after the first frame (src/store/pin-board.ts).
+    await screen.findByRole('table', { name: /^Totals of the pinned scenarios/ }, { timeout: LAZY_LOAD_MS });
+    await lazyPartsLoaded();
     expect(
       within(table()).getByRole('columnheader', { name: `1 ${SHARED.name} Horton infiltration` }),
     ).toBeInTheDocument();
@@ -153,7 +156,7 @@ describe('comparing pinned scenarios', () => {
       [PINS_KEY]: '{"$format":"raincut-pins","version":1,"pins":[{"id":"p1","pinnedAt":"x","scenario":{"version":2}}]}',
     });
     const { user } = renderTools({ storage });
-    const alert = screen.getByRole('alert');
+    const alert = await screen.findByRole('alert', {}, { timeout: LAZY_LOAD_MS });
     expect(alert).toHaveTextContent(
       /Part of the pinned scenarios was damaged and left out; the list as it was is kept under browser storage key "raincut\.pins\.damaged\./,
     );

@@ -1,6 +1,16 @@
 import { createStore, type StoreApi } from 'zustand/vanilla';
-import { parseScenario, type Problem, type StorageLike } from '../../scenario';
-import type { Scenario } from '../../scenario/types';
+import { parseScenario, type Problem } from '../scenario';
+import {
+  createStoredSlot,
+  describeError as why,
+  envelopeCodec,
+  type OtherTabWatch,
+  type StorageLike,
+} from '../scenario/stored-slot';
+import type { Scenario } from '../scenario/types';
+import { MAX_PINS, PINS_KEY } from './pin-limits';
+
+export { MAX_PINS, PINS_KEY } from './pin-limits';
 
 /**
  * Scenarios pinned for side-by-side comparison, kept in the browser under
@@ -12,12 +22,13 @@ import type { Scenario } from '../../scenario/types';
  * parseScenario; a damaged list is copied as it was to a set-aside key
  * before anything is written over it, and nothing is written when that copy
  * cannot be made. Each change reads storage afresh, so two tabs add to one
- * list instead of overwriting each other.
+ * list instead of overwriting each other, and a change announced by another
+ * tab is read at once (`watchOtherTabs`). The stored-slot rules
+ * (src/scenario/stored-slot.ts) are the saved list's and the current
+ * scenario's too.
  */
-export const PINS_KEY = 'raincut.pins';
 const PINS_FORMAT_TAG = 'raincut-pins';
 const PINS_VERSION = 1;
-export const MAX_PINS = 4;
 
 export interface Pin {
   readonly id: string;
@@ -40,6 +51,8 @@ export interface PinBoard extends Pick<StoreApi<PinState>, 'getState' | 'subscri
   unpin(id: string): void;
   /** Reads the browser's copy again (another tab may have changed it). */
   reload(): void;
+  /** Reads the browser's copy again whenever another tab changes it; returns how to stop. */
+  watchOtherTabs(): () => void;
 }
 
 interface Stored {
@@ -48,8 +61,6 @@ interface Stored {
 }
 
 const problem = (message: string): Problem => ({ path: '', message });
-const why = (error: unknown): string => (error instanceof Error ? error.message : String(error));
-const isRecord = (x: unknown): x is Record<string, unknown> => x !== null && typeof x === 'object' && !Array.isArray(x);
 
 /** A checked deep copy of a scenario, or the schema's first problem. */
 function copyOf(scenario: unknown): { ok: true; scenario: Scenario } | { ok: false; message: string } {
@@ -63,33 +74,23 @@ function copyOf(scenario: unknown): { ok: true; scenario: Scenario } | { ok: fal
   return parsed.ok ? parsed : { ok: false, message: parsed.problems.map((p) => p.message).join(' ') };
 }
 
-function readStored(text: string): { stored: Stored; damage: Problem[] } | { unreadable: string } {
-  let json: unknown;
-  try {
-    json = JSON.parse(text);
-  } catch (error) {
-    return { unreadable: `it is not valid JSON (${why(error)})` };
-  }
-  if (!isRecord(json) || json['$format'] !== PINS_FORMAT_TAG) return { unreadable: `it is not a Raincut list of pins` };
-  if (json['version'] !== PINS_VERSION)
-    return { unreadable: `its version is ${String(json['version'])}, not ${PINS_VERSION}` };
+/** Reads the stored pins (the envelope already checked): the good ones, and what was left out. */
+function readBody(json: Record<string, unknown>): { value: Stored; damage: Problem[] } | { unreadable: string } {
   const list = json['pins'];
   if (!Array.isArray(list)) return { unreadable: 'it has no list of pins' };
   const damage: Problem[] = [];
   const pins: Pin[] = [];
   let highest = 0;
-  list.forEach((raw, i) => {
+  list.forEach((raw: unknown, i) => {
     const where = `pins[${i}]`;
-    if (
-      !isRecord(raw) ||
-      typeof raw['id'] !== 'string' ||
-      !/^p[1-9]\d{0,14}$/.test(raw['id']) ||
-      typeof raw['pinnedAt'] !== 'string'
-    ) {
+    const item =
+      raw !== null && typeof raw === 'object' && !Array.isArray(raw) ? (raw as Record<string, unknown>) : null;
+    const id = item?.['id'];
+    if (!item || typeof id !== 'string' || !/^p[1-9]\d{0,14}$/.test(id) || typeof item['pinnedAt'] !== 'string') {
       damage.push({ path: where, message: `${where}: is not a pinned scenario, and was left out.` });
       return;
     }
-    const copy = copyOf(raw['scenario']);
+    const copy = copyOf(item['scenario']);
     if (!copy.ok) {
       damage.push({
         path: `${where}.scenario`,
@@ -97,23 +98,34 @@ function readStored(text: string): { stored: Stored; damage: Problem[] } | { unr
       });
       return;
     }
-    if (pins.length >= MAX_PINS || pins.some((p) => p.id === raw['id'])) {
+    if (pins.length >= MAX_PINS || pins.some((p) => p.id === id)) {
       damage.push({ path: where, message: `${where}: an extra or repeated pin was left out.` });
       return;
     }
-    highest = Math.max(highest, Number(raw['id'].slice(1)));
-    pins.push({ id: raw['id'], pinnedAt: raw['pinnedAt'], scenario: copy.scenario });
+    highest = Math.max(highest, Number(id.slice(1)));
+    pins.push({ id, pinnedAt: item['pinnedAt'], scenario: copy.scenario });
   });
   const nextId =
     typeof json['nextId'] === 'number' && Number.isSafeInteger(json['nextId']) && json['nextId'] > highest
       ? json['nextId']
       : highest + 1;
-  return { stored: { nextId, pins }, damage };
+  return { value: { nextId, pins }, damage };
 }
+
+/** { "$format": "raincut-pins", "version": 1, "nextId": n, "pins": [{ "id", "pinnedAt", "scenario" }] } */
+const PINS_CODEC = envelopeCodec<Stored>({
+  format: PINS_FORMAT_TAG,
+  version: PINS_VERSION,
+  noun: 'list of pins',
+  readBody,
+  writeBody: (stored) => stored,
+});
 
 export interface PinBoardOptions {
   readonly key?: string;
   readonly now?: () => Date;
+  /** Where other tabs' writes are heard (the browser's "storage" events; tests pass their own). */
+  readonly watch?: OtherTabWatch;
 }
 
 export function createPinBoard(storage: StorageLike | null, options: PinBoardOptions = {}): PinBoard {
@@ -123,6 +135,9 @@ export function createPinBoard(storage: StorageLike | null, options: PinBoardOpt
   let memory: Stored = { nextId: 1, pins: [] };
   let canWrite = storage !== null;
   const state = createStore<PinState>()(() => ({ pins: [], problems: [] }));
+  const slot = storage
+    ? createStoredSlot(storage, { key, codec: PINS_CODEC, now, ...(options.watch ? { watch: options.watch } : {}) })
+    : null;
 
   /**
    * Reads storage into `memory`; pins made while the browser's copy could
@@ -142,67 +157,68 @@ export function createPinBoard(storage: StorageLike | null, options: PinBoardOpt
 
   /** Reads storage; damaged data is set aside first. */
   function readStorage(): Problem[] {
-    if (!storage) return [];
-    let text: string | null;
-    try {
-      text = storage.getItem(key);
-    } catch (error) {
+    if (!slot) return [];
+    const read = slot.read();
+    if (read.kind === 'blocked') {
       canWrite = false;
       return [
         problem(
-          `The pinned scenarios could not be read from this browser (${why(error)}); pins are kept only until the page closes.`,
+          `The pinned scenarios could not be read from this browser (${read.reason}); pins are kept only until the page closes.`,
         ),
       ];
     }
-    if (text === null) {
+    if (read.kind === 'empty') {
       memory = { nextId: Math.max(memory.nextId, 1), pins: canWrite ? [] : memory.pins };
       return [];
     }
-    const read = readStored(text);
-    if ('stored' in read && read.damage.length === 0) {
-      memory = read.stored;
+    if (read.kind === 'ok' && read.damage.length === 0) {
+      memory = read.value;
       canWrite = true;
       return [];
     }
-    const asideKey = `${key}.damaged.${now().toISOString()}`;
-    try {
-      storage.setItem(asideKey, text);
-    } catch (error) {
+    if (read.kind === 'newer') {
       canWrite = false;
       return [
         problem(
-          `The pinned scenarios in this browser are damaged and could not be set aside (${why(error)}); they are left as they are, and new pins last only until the page closes.`,
+          `The pinned scenarios were written by a newer version of Raincut (pin list version ${read.version}); they are left as they are, and new pins last only until the page closes.`,
+        ),
+      ];
+    }
+    const aside = slot.setAside(read.text);
+    if (!aside.ok) {
+      canWrite = false;
+      return [
+        problem(
+          `The pinned scenarios in this browser are damaged and could not be set aside (${aside.reason}); they are left as they are, and new pins last only until the page closes.`,
         ),
       ];
     }
     canWrite = true;
-    if ('unreadable' in read) {
+    if (read.kind === 'unreadable') {
       memory = { nextId: 1, pins: [] };
       write();
       return [
         problem(
-          `The pinned scenarios could not be read (${read.unreadable}). They were kept as they were under browser storage key "${asideKey}".`,
+          `The pinned scenarios could not be read (${read.reason}). They were kept as they were under browser storage key "${aside.key}".`,
         ),
       ];
     }
-    memory = read.stored;
+    memory = read.value;
     write();
     return [
       problem(
-        `Part of the pinned scenarios was damaged and left out; the list as it was is kept under browser storage key "${asideKey}".`,
+        `Part of the pinned scenarios was damaged and left out; the list as it was is kept under browser storage key "${aside.key}".`,
       ),
       ...read.damage,
     ];
   }
 
   function write(): Problem | null {
-    if (!storage || !canWrite) return null;
-    try {
-      storage.setItem(key, JSON.stringify({ $format: PINS_FORMAT_TAG, version: PINS_VERSION, ...memory }));
-      return null;
-    } catch (error) {
-      return problem(`The pins could not be kept in this browser (${why(error)}); they stay until the page closes.`);
-    }
+    if (!slot || !canWrite) return null;
+    const failed = slot.write(memory);
+    return failed === null
+      ? null
+      : problem(`The pins could not be kept in this browser (${failed}); they stay until the page closes.`);
   }
 
   const publish = (problems: readonly Problem[]): void => state.setState({ pins: [...memory.pins], problems }, true);
@@ -237,6 +253,9 @@ export function createPinBoard(storage: StorageLike | null, options: PinBoardOpt
     },
     reload() {
       publish(load());
+    },
+    watchOtherTabs() {
+      return slot ? slot.watch(() => publish(load())) : () => undefined;
     },
   };
 }

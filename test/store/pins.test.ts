@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
-import { PINS_KEY, createPinBoard, MAX_PINS } from '../../../src/ui/services';
-import { FOUR_BARS, memoryStorage } from '../../helpers/scenario-fixtures';
+import { PINS_KEY, createPinBoard, MAX_PINS } from '../../src/store/pins';
+import { FOUR_BARS, memoryStorage } from '../helpers/scenario-fixtures';
 
 const NOW = () => new Date('2026-03-01T10:00:00.000Z');
 

@@ -1,0 +1,205 @@
+import { createStore, del, get, set, type UseStore } from 'idb-keyval';
+import { parseScenario } from '../scenario';
+import { describeError, type StoredSlot } from '../scenario/stored-slot';
+import type { Scenario } from '../scenario/types';
+import { columnNumbers, LARGE_MARKER_TAG, readLargeMarker, type LargeMarker } from './large-marker';
+import type { WorkbenchStore } from './scenario-store';
+
+/**
+ * The large store: scenarios too large for localStorage, kept in the
+ * browser's IndexedDB through idb-keyval (one object store, key → value).
+ * Loaded on first use: only when a large scenario is saved, or when the
+ * current scenario's slot holds a marker at start-up (./large-marker.ts).
+ *
+ * A record holds the scenario with its long number columns as Float64Array
+ * (`pack`): IndexedDB copies those as whole buffers, where 10⁶ JSON numbers
+ * would have to be written out as 20 MB of text first. A record is read back
+ * through the one schema (`parseScenario`), as every saved scenario is.
+ *
+ * A save writes a new record, then the marker naming it, then deletes the
+ * record the old marker named: the marker always names a whole record.
+ */
+
+/** The database and object store; never renamed (users' work is in them). */
+export const LARGE_DB = 'raincut';
+export const LARGE_OBJECTS = 'scenarios';
+
+let db: UseStore | null = null;
+const open = (): UseStore => (db ??= createStore(LARGE_DB, LARGE_OBJECTS));
+
+/** Columns shorter than this stay plain arrays (not worth a buffer). */
+const PACK_FROM = 1024;
+
+/** A deep copy in which every long array of numbers is a Float64Array (exact: both are IEEE doubles). */
+export function pack(value: unknown): unknown {
+  if (Array.isArray(value)) {
+    const list = value as unknown[];
+    if (list.length >= PACK_FROM) {
+      // A plain indexed loop: Float64Array.from walks the list through its iterator, far slower on 10⁶ numbers.
+      const column = new Float64Array(list.length);
+      let k = 0;
+      for (; k < list.length; k++) {
+        const x = list[k];
+        if (typeof x !== 'number') break;
+        column[k] = x;
+      }
+      if (k === list.length) return column;
+    }
+    return list.map(pack);
+  }
+  if (value !== null && typeof value === 'object') {
+    const out: Record<string, unknown> = {};
+    for (const [k, v] of Object.entries(value)) out[k] = pack(v);
+    return out;
+  }
+  return value;
+}
+
+/** The plain document back from a record: every Float64Array a plain array again. */
+export function unpack(value: unknown): unknown {
+  if (value instanceof Float64Array) {
+    const list = new Array<number>(value.length);
+    for (let k = 0; k < value.length; k++) list[k] = value[k] as number;
+    return list;
+  }
+  if (Array.isArray(value)) return value.map(unpack);
+  if (value !== null && typeof value === 'object') {
+    const out: Record<string, unknown> = {};
+    for (const [k, v] of Object.entries(value)) out[k] = unpack(v);
+    return out;
+  }
+  return value;
+}
+
+export type LargeRead =
+  { readonly ok: true; readonly scenario: Scenario } | { readonly ok: false; readonly message: string };
+
+/** Reads the record a marker names, through the schema. Never throws. */
+export async function readLarge(marker: LargeMarker): Promise<LargeRead> {
+  let raw: unknown;
+  try {
+    raw = await get(marker.id, open());
+  } catch (error) {
+    return { ok: false, message: `This browser’s large store could not be read (${describeError(error)}).` };
+  }
+  if (raw === undefined) {
+    return {
+      ok: false,
+      message: `This browser’s large store holds no record "${marker.id}" (it may have been cleared).`,
+    };
+  }
+  const parsed = parseScenario(unpack(raw));
+  if (parsed.ok) return { ok: true, scenario: parsed.scenario };
+  return {
+    ok: false,
+    message: `The record "${marker.id}" in this browser’s large store is damaged: ${parsed.problems.map((p) => p.message).join(' ')}`,
+  };
+}
+
+export type LargeSaved =
+  | { readonly kind: 'saved'; readonly marker: LargeMarker }
+  | { readonly kind: 'changed' }
+  | { readonly kind: 'failed'; readonly reason: string };
+
+/** Waits for a quiet moment of the page (requestIdleCallback where there is one), so a save never runs inside an input's handling. */
+export function idle(): Promise<void> {
+  return new Promise((resolve) => {
+    if (typeof requestIdleCallback === 'function') requestIdleCallback(() => resolve(), { timeout: 1000 });
+    else setTimeout(resolve, 0);
+  });
+}
+
+let counter = 0;
+
+const largeMarkerText = (marker: LargeMarker): string => JSON.stringify({ $format: LARGE_MARKER_TAG, ...marker });
+
+/**
+ * Saves the scenario in the large store and points the slot's marker at it.
+ * Nothing is written over another tab's newer save (`changed`): the slot's
+ * stamp is checked after the record is written and before the marker is.
+ * Never throws.
+ */
+export async function saveLarge(scenario: Scenario, slot: StoredSlot<Scenario>, now: Date): Promise<LargeSaved> {
+  if (slot.changedElsewhere()) return { kind: 'changed' };
+  const before = readLargeMarker(slot.peek());
+  const marker: LargeMarker = {
+    id: `scenario.${now.toISOString()}.${(counter++).toString(36)}${Math.random().toString(36).slice(2, 8)}`,
+    numbers: columnNumbers(scenario),
+    savedAt: now.toISOString(),
+  };
+  try {
+    // Timed for the browser benchmark (test/browser/storage.spec.mjs): packing on the page's thread, then the whole write.
+    const t0 = performance.now();
+    const packed = pack(scenario);
+    const t1 = performance.now();
+    // IndexedDB copies the value on the page's thread too: packed columns are whole buffers, quick to copy.
+    await set(marker.id, packed, open());
+    performance.measure('raincut:large-pack', { start: t0, end: t1 });
+    performance.measure('raincut:large-save', { start: t0, end: performance.now() });
+  } catch (error) {
+    return { kind: 'failed', reason: describeError(error) };
+  }
+  const drop = (id: string): Promise<void> => del(id, open()).catch(() => undefined);
+  if (slot.changedElsewhere()) {
+    await drop(marker.id);
+    return { kind: 'changed' };
+  }
+  const failed = slot.writeText(largeMarkerText(marker));
+  if (failed !== null) {
+    await drop(marker.id);
+    return { kind: 'failed', reason: failed };
+  }
+  if (before && before.id !== marker.id) await drop(before.id);
+  return { kind: 'saved', marker };
+}
+
+/** Deletes a record no marker names any more. Never throws. */
+export async function dropLarge(id: string): Promise<void> {
+  await del(id, open()).catch(() => undefined);
+}
+
+/** Where a scenario too large for the usual storage is, told once a page when it is first saved there. */
+export const LARGE_STORE_TEXT =
+  'This scenario is too large for the browser’s usual storage, so it is kept in this browser’s larger database (IndexedDB) on this computer, and opens from there next time. Save it as a file to keep a copy elsewhere.';
+let told = false;
+
+export interface SaveTurn {
+  readonly store: WorkbenchStore;
+  readonly slot: StoredSlot<Scenario>;
+  readonly scenario: Scenario;
+  /** The page is closing: no wait for a quiet moment. */
+  readonly urgent: boolean;
+  /** False once a newer change is queued, or saving stopped: this one is then skipped. */
+  readonly current: () => boolean;
+  readonly saved: () => void;
+  /** Another tab saved since this tab last read or wrote. */
+  readonly changed: () => void;
+}
+
+/**
+ * One autosave of the current scenario in the large store, for
+ * persistStore (./persistence.ts), which runs them one at a time. Off the
+ * input path: it waits for a quiet moment of the page first (unless the
+ * page is closing), and a save overtaken by a newer change is skipped.
+ */
+export async function saveInTurn(turn: SaveTurn): Promise<void> {
+  if (!turn.current()) return;
+  if (!turn.urgent) await idle();
+  if (!turn.current()) return;
+  const outcome = await saveLarge(turn.scenario, turn.slot, new Date());
+  if (!turn.current() && outcome.kind !== 'saved') return;
+  const { actions, notice } = turn.store.getState();
+  if (outcome.kind === 'saved') {
+    turn.saved();
+    if (!told || notice?.kind === 'save-failed') {
+      told = true;
+      actions.setNotice({ kind: 'large-store', message: LARGE_STORE_TEXT });
+    }
+  } else if (outcome.kind === 'changed') turn.changed();
+  else {
+    actions.setNotice({
+      kind: 'save-failed',
+      message: `The latest change could not be saved in this browser’s large store (${outcome.reason}). It stays on screen; export it to keep it.`,
+    });
+  }
+}
