@@ -1,4 +1,3 @@
-import { scenarioFileName, scenarioToFileText } from '../../scenario';
 import type { Scenario } from '../../scenario/types';
 import { formatCount } from '../format';
 import './events.css';
@@ -36,7 +35,13 @@ export function LongLinkOffer({
           type="button"
           className="button--primary"
           onClick={() =>
-            saveFile(new Blob([scenarioToFileText(scenario)], { type: 'application/json' }), scenarioFileName(scenario))
+            // The file writer loads on this click: it is not part of the first screen.
+            void import('../../scenario/file').then(({ scenarioFileName, scenarioToFileText }) =>
+              saveFile(
+                new Blob([scenarioToFileText(scenario)], { type: 'application/json' }),
+                scenarioFileName(scenario),
+              ),
+            )
           }
         >
           Save as file instead

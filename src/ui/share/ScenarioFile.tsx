@@ -1,5 +1,4 @@
 import type { ReactNode } from 'react';
-import { MAX_FILE_CHARS, scenarioFileName, scenarioFromFileText, scenarioToFileText } from '../../scenario';
 import { useActions, useWorkbenchStore } from '../../store';
 // Straight from the modules, not the import kit's index, so the import dialogs' code stays out of the first screen.
 import { OpenFileButton } from '../import-kit/OpenFileButton';
@@ -9,6 +8,9 @@ import { useServices } from '../services/services';
 import { formatValue } from '../format';
 
 const megabytes = (bytes: number): string => `${formatValue(bytes / (1024 * 1024))} MB`;
+
+// The file writer and reader load on the first click: they are not part of the first screen.
+const fileCode = () => import('../../scenario/file');
 
 /**
  * "Save as file" writes the scenario as a readable .json file (with the
@@ -22,7 +24,8 @@ export function ScenarioFile() {
   const { saveFile } = useServices();
   const show = useBarMessage();
 
-  const save = (): void => {
+  const save = async (): Promise<void> => {
+    const { scenarioFileName, scenarioToFileText } = await fileCode();
     const scenario = store.getState().scenario;
     const name = scenarioFileName(scenario);
     saveFile(new Blob([scenarioToFileText(scenario)], { type: 'application/json' }), name);
@@ -37,6 +40,7 @@ export function ScenarioFile() {
     const name = file.name || 'The file';
     const refuse = (body: ReactNode): void =>
       show({ tone: 'problem', title: `${name} was not opened; the scenario on screen is unchanged.`, body });
+    const { MAX_FILE_CHARS, scenarioFromFileText } = await fileCode();
     if (file.size > MAX_FILE_CHARS) {
       refuse(
         <p>
@@ -67,7 +71,7 @@ export function ScenarioFile() {
 
   return (
     <>
-      <button type="button" onClick={save}>
+      <button type="button" onClick={() => void save()}>
         Save as file
       </button>
       <OpenFileButton inputLabel="Scenario file to open" accept=".json,application/json" onFile={open}>
