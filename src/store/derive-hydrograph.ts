@@ -17,6 +17,7 @@ import {
   type Transform,
 } from '../core';
 import type { Scenario } from '../scenario/types';
+import { heldKey } from './held-key';
 import { memoLast } from './memo';
 
 /** The computed direct runoff hydrograph, or why there is none (the core's message). */
@@ -208,9 +209,4 @@ export function createHydrographDerived(loss: LossSide): HydrographDerived {
       return curve(s.storm, heldKey(s.method, parameter), parameter);
     },
   };
-}
-
-/** The method without the parameter to fit, as text: equal for two methods that differ only in that value. */
-function heldKey(method: LossMethod, parameter: string | null): string {
-  return JSON.stringify(method, (key, value: unknown) => (key === parameter ? undefined : value));
 }

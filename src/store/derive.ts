@@ -1,11 +1,12 @@
 import {
+  attempt,
   methodValue,
-  calibrate,
-  computeLosses,
+  calibrateUnchecked,
+  computeLossesUnchecked,
   separateBaseflow,
   depthFromVolumeMm,
-  isInputError,
   runoffVolumeM3,
+  type InputError,
   type BaseflowMethod,
   type BaseflowResult,
   type CalibrationResult,
@@ -15,6 +16,7 @@ import {
 } from '../core';
 import type { Scenario } from '../scenario/types';
 import { alignRecord, type Alignment } from './alignment';
+import { methodProblem, stormProblem } from './checked';
 import type { HydrographDerived, TimeSeries } from './derive-hydrograph';
 import { memoLast } from './memo';
 
@@ -30,6 +32,11 @@ export type Results =
 export type Separation =
   | { readonly ok: true; readonly result: BaseflowResult; readonly method: BaseflowMethod }
   | { readonly ok: false; readonly message: string; readonly field: string; readonly method: BaseflowMethod };
+
+/** The core's refusal as the failed form of a derived value. */
+function refused<M>(error: InputError, method: M): { ok: false; message: string; field: string; method: M } {
+  return { ok: false, message: error.message, field: error.field, method };
+}
 
 /**
  * The hydrograph side of the derived values (derive-hydrograph.ts and the
@@ -114,12 +121,8 @@ export function createDerived(): Derived {
       areaM2: number,
     ): Separation | null => {
       if (timesH === null || dischargeM3s === null || method === null) return null;
-      try {
-        return { ok: true, result: separateBaseflow({ timesH, dischargeM3s }, method, { areaM2 }), method };
-      } catch (error) {
-        if (isInputError(error)) return { ok: false, message: error.message, field: error.field, method };
-        throw error;
-      }
+      const r = attempt(() => separateBaseflow({ timesH, dischargeM3s }, method, { areaM2 }));
+      return r.ok ? { ok: true, result: r.value, method } : refused(r.error, method);
     },
   );
   const separationOf = (s: Scenario): Separation | null =>
@@ -170,7 +173,10 @@ export function createDerived(): Derived {
       t: Target | null,
     ): CalibrationResult | null => {
       if (parameter === null || t === null || !t.ok) return null;
-      return calibrate(storm, method, parameter, t.mm);
+      // Checked as they entered the store (checked.ts): calibrate would check both again.
+      const problem = stormProblem(storm) ?? methodProblem(method);
+      if (problem) return { ok: false, reason: 'invalid-input', message: problem.message };
+      return calibrateUnchecked(storm, method, parameter, t.mm);
     },
   );
   const fitOf = (s: Scenario): CalibrationResult | null =>
@@ -183,12 +189,10 @@ export function createDerived(): Derived {
   };
 
   const results = memoLast((storm: Scenario['storm'], method: LossMethod): Results => {
-    try {
-      return { ok: true, result: computeLosses(storm, method), method };
-    } catch (error) {
-      if (isInputError(error)) return { ok: false, message: error.message, field: error.field, method };
-      throw error;
-    }
+    // In computeLosses' order (the storm, then the method), each checked once per object.
+    const problem = stormProblem(storm) ?? methodProblem(method);
+    if (problem) return refused(problem, method);
+    return { ok: true, result: computeLossesUnchecked(storm, method), method };
   });
   const resultsOf = (s: Scenario): Results => results(s.storm, effectiveMethod(s));
 
