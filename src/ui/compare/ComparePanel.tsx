@@ -12,7 +12,7 @@ import { fittedCellText } from '../results/fit-words';
 import { commonFrames } from './common-frame';
 import { difference, type Difference } from './difference';
 import { MAX_PINS, type Pin } from '../services/pins';
-import { totalsOf, type Totals } from '../results/totals';
+import { totalsOf, type Totals } from '../../store/totals';
 import './compare.css';
 
 const SMALL_CHART_HEIGHT = 190;
