@@ -1,6 +1,7 @@
 import {
   attempt,
   methodValue,
+  withSpec,
   calibrateUnchecked,
   computeLossesUnchecked,
   separateBaseflow,
@@ -100,6 +101,13 @@ export interface Derived extends HydrographDerived {
    */
   fitInUse(s: Scenario): boolean;
   results(s: Scenario): Results;
+  /**
+   * The loss of the part the effective method's table entry computes alone
+   * (`lossPart`, the chart's shade), per bar, mm; null when it has none or the
+   * core refuses the input. Keyed on that part's method, so dragging a rate the
+   * part does not read computes it once.
+   */
+  lossPartMm(s: Scenario): Float64Array | null;
   /** Runoff volume, m³, or null when the catchment area is not known. */
   runoffVolumeM3(s: Scenario): number | null;
   /** The separated direct runoff on the storm's time axis (null without a separated record). */
@@ -196,6 +204,16 @@ export function createDerived(): Derived {
   });
   const resultsOf = (s: Scenario): Results => results(s.storm, effectiveMethod(s));
 
+  let part: LossMethod | null = null; // read only when the key below changed
+  const lossPart = memoLast((storm: Scenario['storm'], _partKey: string): Float64Array | null => {
+    if (part === null || (stormProblem(storm) ?? methodProblem(part))) return null;
+    return computeLossesUnchecked(storm, part).lossMm;
+  });
+  const lossPartOf = (s: Scenario): Float64Array | null => {
+    part = withSpec(effectiveMethod(s), (spec, m) => (spec.lossPart ? spec.lossPart.variant(m) : null));
+    return lossPart(s.storm, JSON.stringify(part));
+  };
+
   // The record's samples on the storm's time axis, for the computed hydrograph to be set against.
   const shifted = memoLast((timesH: readonly number[], offsetH: number): Float64Array => {
     const out = new Float64Array(timesH.length);
@@ -278,6 +296,7 @@ export function createDerived(): Derived {
       return methodValue(effectiveMethod(s), key) === f.value;
     },
     results: resultsOf,
+    lossPartMm: lossPartOf,
     runoffVolumeM3: (s) => {
       const r = resultsOf(s);
       if (!r.ok || !(s.catchment.areaM2 > 0)) return null;

@@ -52,6 +52,7 @@ function readAsTheScreenDoes(store: Store): void {
   const { derived } = store;
   const s = store.getState().scenario;
   derived.results(s);
+  derived.lossPartMm(s);
   derived.effectiveMethod(s);
   derived.fit(s);
   derived.isMatched(s);

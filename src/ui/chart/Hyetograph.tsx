@@ -1,6 +1,5 @@
 import { useMemo } from 'react';
-import { computeLosses, totalDepthMm, type LossMethod } from '../../core';
-import type { Scenario } from '../../scenario/types';
+import { totalDepthMm } from '../../core';
 import { useDerived, useScenario } from '../../store';
 import { formatCount, formatValue } from '../format';
 import { displayUnit, toDisplay, unitText } from '../units';
@@ -16,17 +15,6 @@ import { useTimeSpanH } from './time-span';
 import { useElementWidth } from './useElementWidth';
 
 export { CHART_HEIGHT } from './chart-height';
-
-/** The part of the loss drawn in its own shade (initial loss), computed by the core. */
-function lossPart(storm: Scenario['storm'], method: LossMethod): Float64Array | null {
-  const part = lossPartOf(method);
-  if (!part) return null;
-  try {
-    return computeLosses(storm, part.method).lossMm;
-  } catch {
-    return null;
-  }
-}
 
 /**
  * The hyetograph: each bar split into the part lost and the part that runs
@@ -46,7 +34,7 @@ export function Hyetograph() {
   const span = useTimeSpanH();
   const height = useChartHeight();
   const frame = useMemo(() => chartFrame(storm, width, height, units, span), [storm, width, height, units, span]);
-  const part = useMemo(() => lossPart(storm, method), [storm, method]);
+  const part = useDerived((d, s) => d.lossPartMm(s));
   const capacity = CAPACITY_CURVES[method.kind];
   const capacityDrawing = useMemo(
     () => (capacity && results.ok ? capacity.draw(frame, storm, method) : null),
