@@ -18,3 +18,20 @@ export class InputError extends Error {
 export function isInputError(error: unknown): error is InputError {
   return error instanceof InputError;
 }
+
+/** What `attempt` gives back: the value, or the InputError the work threw. */
+export type Attempt<T> = { readonly ok: true; readonly value: T } | { readonly ok: false; readonly error: InputError };
+
+/**
+ * Runs `work` and hands back its value or the InputError it threw, as a value:
+ * the one place a refusal of bad input is caught. Any other error is a defect
+ * and is thrown on.
+ */
+export function attempt<T>(work: () => T): Attempt<T> {
+  try {
+    return { ok: true, value: work() };
+  } catch (error) {
+    if (isInputError(error)) return { ok: false, error };
+    throw error;
+  }
+}

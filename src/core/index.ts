@@ -1,6 +1,6 @@
 // The public surface of the hydrology core. Everything outside src/core imports
 // from here. Pure TypeScript: no React, no DOM.
-export { InputError, isInputError } from './errors';
+export { InputError, isInputError, attempt, type Attempt } from './errors';
 export { validateStorm, totalDepthMm, totalDurationH, peakIntensityMmH, barEdgesH, type Storm } from './storm';
 export type {
   LossMethod,
@@ -38,7 +38,7 @@ export {
 export { infiltrationCapacity } from './loss/capacity';
 export { DEFAULT_RECOVERY_PER_H, RECOVERY_CEILING_PER_H } from './loss/recovery';
 export { computeLosses, computeLossesUnchecked, totalExcessMm, scratchBuffers, type LossBuffers } from './loss/compute';
-export { calibrate, type CalibrationResult, type CalibrationFailure } from './calibrate/calibrate';
+export { calibrate, calibrateUnchecked, type CalibrationResult, type CalibrationFailure } from './calibrate/calibrate';
 export { exactPhi } from './calibrate/phi';
 export { brentRoot } from './calibrate/brent';
 export { solveMonotone, PARAMETER_REL_TOL } from './calibrate/monotone';

@@ -2,6 +2,7 @@ import {
   BASEFLOW_KINDS,
   baseflowMethodSpec,
   isBaseflowKind,
+  attempt,
   isInputError,
   separateBaseflow,
   validateBaseflowMethod,
@@ -101,11 +102,6 @@ export function baseflowRecordProblem(
 ): readonly [field: string, message: string] | null {
   const spec = baseflowMethodSpec(method.kind) as BaseflowMethodSpec;
   if (spec.needsArea(method as never)) return null;
-  try {
-    separateBaseflow(record, method);
-    return null;
-  } catch (error) {
-    if (isInputError(error)) return [error.field, error.message];
-    throw error;
-  }
+  const r = attempt(() => separateBaseflow(record, method));
+  return r.ok ? null : [r.error.field, r.error.message];
 }

@@ -9,6 +9,7 @@ import {
   MAX_RECORD_H,
   SHORTEST_STEP_ACCEPTED_H,
   isBaseflowKind,
+  attempt,
   isInputError,
   isSpanH,
   isLossKind,
@@ -412,10 +413,9 @@ function checkStreamflow(
   )
     return;
   const record = { timesH: timesH as number[], dischargeM3s: dischargeM3s as number[] };
-  try {
-    validateHydrograph(record);
-  } catch (error) {
-    if (!isInputError(error)) throw error;
+  const checked = attempt(() => validateHydrograph(record));
+  if (!checked.ok) {
+    const { error } = checked;
     const keys: PathKey[] = ['streamflow', error.field];
     if (error.index !== undefined) keys.push(error.index);
     add(keys, error.message);

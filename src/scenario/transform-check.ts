@@ -1,7 +1,7 @@
 import {
   TRANSFORM_KINDS,
   TRANSFORMS,
-  isInputError,
+  attempt,
   isTransformKind,
   validateTransform,
   type Transform,
@@ -80,12 +80,10 @@ export function readTransform(input: unknown, report: ReportAt, storedAs?: Trans
     candidate['ordinatesM3sPerMm'] = list.map((x: unknown) => (x === 0 ? 0 : x));
   }
   if (!ok) return undefined;
-  try {
-    validateTransform(candidate as unknown as Transform);
-  } catch (error) {
-    if (!isInputError(error)) throw error;
-    const keys = error.field === 'transform' ? [] : [error.field];
-    report(error.index === undefined ? keys : [...keys, error.index], error.message);
+  const r = attempt(() => validateTransform(candidate as unknown as Transform));
+  if (!r.ok) {
+    const keys = r.error.field === 'transform' ? [] : [r.error.field];
+    report(r.error.index === undefined ? keys : [...keys, r.error.index], r.error.message);
     return undefined;
   }
   return candidate as unknown as Transform;

@@ -2,7 +2,7 @@ import {
   calibrationInterval,
   compareHydrographs,
   dischargeAtH,
-  isInputError,
+  attempt,
   runoffCurve,
   runoffHydrograph,
   unitHydrographVolumeMm,
@@ -17,6 +17,7 @@ import {
   type Transform,
 } from '../core';
 import type { Scenario } from '../scenario/types';
+import { heldKey } from './held-key';
 import { memoLast } from './memo';
 
 /** The computed direct runoff hydrograph, or why there is none (the core's message). */
@@ -58,10 +59,13 @@ export interface HydrographDerived {
   lossCurve(s: Scenario): Outcome<RunoffCurve> | null;
 }
 
-const refusal = (error: unknown): { ok: false; message: string; field: string } => {
-  if (isInputError(error)) return { ok: false, message: error.message, field: error.field };
-  throw error;
-};
+/** The value of `work` as an Outcome, or the core's refusal (any other error is thrown on). */
+function outcome<T>(work: () => T): Outcome<T> {
+  const r = attempt(work);
+  if (r.ok) return r;
+  const refused = { ok: false as const, message: r.error.message, field: r.error.field };
+  return refused;
+}
 
 /** Share of the unit response's volume the time axis shows after the storm (the rest is a long, low tail). */
 const AXIS_VOLUME_SHARE = 0.999;
@@ -92,11 +96,10 @@ export function createHydrographDerived(loss: LossSide): HydrographDerived {
           field: 'areaM2',
         };
       }
-      try {
-        return { ok: true, hydrograph: runoffHydrograph({ durationsH, excessMm }, transform, areaM2), transform };
-      } catch (error) {
-        return refusal(error);
-      }
+      const r = attempt(() => runoffHydrograph({ durationsH, excessMm }, transform, areaM2));
+      return r.ok
+        ? { ok: true, hydrograph: r.value, transform }
+        : { ok: false, message: r.error.message, field: r.error.field };
     },
   );
   const hydrographOf = (s: Scenario): ComputedHydrograph | null =>
@@ -120,12 +123,10 @@ export function createHydrographDerived(loss: LossSide): HydrographDerived {
   const comparison = memoLast(
     (computed: ComputedHydrograph | null, observed: ObservedDirectRunoff | null): HydrographComparison | null => {
       if (!computed?.ok || observed === null) return null;
-      try {
-        return compareHydrographs(computed.hydrograph, { timesH: observed.timesH, dischargeM3s: observed.directM3s });
-      } catch (error) {
-        if (isInputError(error)) return null;
-        throw error;
-      }
+      const r = attempt(() =>
+        compareHydrographs(computed.hydrograph, { timesH: observed.timesH, dischargeM3s: observed.directM3s }),
+      );
+      return r.ok ? r.value : null;
     },
   );
 
@@ -138,26 +139,19 @@ export function createHydrographDerived(loss: LossSide): HydrographDerived {
       stormH += d;
       stepH = Math.min(stepH, d);
     }
-    try {
-      const r = unitResponse(transform, stepH);
-      let sum = 0;
-      let j = 0;
-      while (j < r.length && sum < AXIS_VOLUME_SHARE) sum += r[j++] as number;
-      return stormH + j * stepH;
-    } catch (error) {
-      if (isInputError(error)) return null;
-      throw error;
-    }
+    const response = attempt(() => unitResponse(transform, stepH));
+    if (!response.ok) return null;
+    const r = response.value;
+    let sum = 0;
+    let j = 0;
+    while (j < r.length && sum < AXIS_VOLUME_SHARE) sum += r[j++] as number;
+    return stormH + j * stepH;
   });
 
   const uhDepth = memoLast((transform: Transform | null, areaM2: number): number | null => {
     if (transform?.kind !== 'unit-hydrograph' || !(areaM2 > 0)) return null;
-    try {
-      return unitHydrographVolumeMm(transform, areaM2);
-    } catch (error) {
-      if (isInputError(error)) return null;
-      throw error;
-    }
+    const r = attempt(() => unitHydrographVolumeMm(transform, areaM2));
+    return r.ok ? r.value : null;
   });
 
   // Both hold every parameter but the one fitted, whose value they never read: keyed on the
@@ -173,21 +167,13 @@ export function createHydrographDerived(loss: LossSide): HydrographDerived {
       pct: number,
     ): Outcome<CalibrationInterval> | null => {
       if (method === null || parameter === null || targetMm === null || !(pct > 0)) return null;
-      try {
-        return { ok: true, value: calibrationInterval(storm, method, parameter, targetMm, pct) };
-      } catch (error) {
-        return refusal(error);
-      }
+      return outcome(() => calibrationInterval(storm, method as LossMethod, parameter, targetMm, pct));
     },
   );
 
   const curve = memoLast((storm: Storm, _held: string, parameter: string | null): Outcome<RunoffCurve> | null => {
     if (method === null || parameter === null) return null;
-    try {
-      return { ok: true, value: runoffCurve(storm, method, parameter, { points: 64 }) };
-    } catch (error) {
-      return refusal(error);
-    }
+    return outcome(() => runoffCurve(storm, method as LossMethod, parameter, { points: 64 }));
   });
 
   return {
@@ -208,9 +194,4 @@ export function createHydrographDerived(loss: LossSide): HydrographDerived {
       return curve(s.storm, heldKey(s.method, parameter), parameter);
     },
   };
-}
-
-/** The method without the parameter to fit, as text: equal for two methods that differ only in that value. */
-function heldKey(method: LossMethod, parameter: string | null): string {
-  return JSON.stringify(method, (key, value: unknown) => (key === parameter ? undefined : value));
 }

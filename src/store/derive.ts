@@ -1,11 +1,13 @@
 import {
+  attempt,
   methodValue,
-  calibrate,
-  computeLosses,
+  withSpec,
+  calibrateUnchecked,
+  computeLossesUnchecked,
   separateBaseflow,
   depthFromVolumeMm,
-  isInputError,
   runoffVolumeM3,
+  type InputError,
   type BaseflowMethod,
   type BaseflowResult,
   type CalibrationResult,
@@ -15,6 +17,7 @@ import {
 } from '../core';
 import type { Scenario } from '../scenario/types';
 import { alignRecord, type Alignment } from './alignment';
+import { methodProblem, stormProblem } from './checked';
 import type { HydrographDerived, TimeSeries } from './derive-hydrograph';
 import { memoLast } from './memo';
 
@@ -30,6 +33,11 @@ export type Results =
 export type Separation =
   | { readonly ok: true; readonly result: BaseflowResult; readonly method: BaseflowMethod }
   | { readonly ok: false; readonly message: string; readonly field: string; readonly method: BaseflowMethod };
+
+/** The core's refusal as the failed form of a derived value. */
+function refused<M>(error: InputError, method: M): { ok: false; message: string; field: string; method: M } {
+  return { ok: false, message: error.message, field: error.field, method };
+}
 
 /**
  * The hydrograph side of the derived values (derive-hydrograph.ts and the
@@ -93,6 +101,13 @@ export interface Derived extends HydrographDerived {
    */
   fitInUse(s: Scenario): boolean;
   results(s: Scenario): Results;
+  /**
+   * The loss of the part the effective method's table entry computes alone
+   * (`lossPart`, the chart's shade), per bar, mm; null when it has none or the
+   * core refuses the input. Keyed on that part's method, so dragging a rate the
+   * part does not read computes it once.
+   */
+  lossPartMm(s: Scenario): Float64Array | null;
   /** Runoff volume, m³, or null when the catchment area is not known. */
   runoffVolumeM3(s: Scenario): number | null;
   /** The separated direct runoff on the storm's time axis (null without a separated record). */
@@ -114,12 +129,8 @@ export function createDerived(): Derived {
       areaM2: number,
     ): Separation | null => {
       if (timesH === null || dischargeM3s === null || method === null) return null;
-      try {
-        return { ok: true, result: separateBaseflow({ timesH, dischargeM3s }, method, { areaM2 }), method };
-      } catch (error) {
-        if (isInputError(error)) return { ok: false, message: error.message, field: error.field, method };
-        throw error;
-      }
+      const r = attempt(() => separateBaseflow({ timesH, dischargeM3s }, method, { areaM2 }));
+      return r.ok ? { ok: true, result: r.value, method } : refused(r.error, method);
     },
   );
   const separationOf = (s: Scenario): Separation | null =>
@@ -170,7 +181,10 @@ export function createDerived(): Derived {
       t: Target | null,
     ): CalibrationResult | null => {
       if (parameter === null || t === null || !t.ok) return null;
-      return calibrate(storm, method, parameter, t.mm);
+      // Checked as they entered the store (checked.ts): calibrate would check both again.
+      const problem = stormProblem(storm) ?? methodProblem(method);
+      if (problem) return { ok: false, reason: 'invalid-input', message: problem.message };
+      return calibrateUnchecked(storm, method, parameter, t.mm);
     },
   );
   const fitOf = (s: Scenario): CalibrationResult | null =>
@@ -183,14 +197,22 @@ export function createDerived(): Derived {
   };
 
   const results = memoLast((storm: Scenario['storm'], method: LossMethod): Results => {
-    try {
-      return { ok: true, result: computeLosses(storm, method), method };
-    } catch (error) {
-      if (isInputError(error)) return { ok: false, message: error.message, field: error.field, method };
-      throw error;
-    }
+    // In computeLosses' order (the storm, then the method), each checked once per object.
+    const problem = stormProblem(storm) ?? methodProblem(method);
+    if (problem) return refused(problem, method);
+    return { ok: true, result: computeLossesUnchecked(storm, method), method };
   });
   const resultsOf = (s: Scenario): Results => results(s.storm, effectiveMethod(s));
+
+  let part: LossMethod | null = null; // read only when the key below changed
+  const lossPart = memoLast((storm: Scenario['storm'], _partKey: string): Float64Array | null => {
+    if (part === null || (stormProblem(storm) ?? methodProblem(part))) return null;
+    return computeLossesUnchecked(storm, part).lossMm;
+  });
+  const lossPartOf = (s: Scenario): Float64Array | null => {
+    part = withSpec(effectiveMethod(s), (spec, m) => (spec.lossPart ? spec.lossPart.variant(m) : null));
+    return lossPart(s.storm, JSON.stringify(part));
+  };
 
   // The record's samples on the storm's time axis, for the computed hydrograph to be set against.
   const shifted = memoLast((timesH: readonly number[], offsetH: number): Float64Array => {
@@ -274,6 +296,7 @@ export function createDerived(): Derived {
       return methodValue(effectiveMethod(s), key) === f.value;
     },
     results: resultsOf,
+    lossPartMm: lossPartOf,
     runoffVolumeM3: (s) => {
       const r = resultsOf(s);
       if (!r.ok || !(s.catchment.areaM2 > 0)) return null;

@@ -12,7 +12,6 @@ import {
   totalDurationH,
   isLossKind,
   methodSpec,
-  validateMethod,
   validateStorm,
   type LossKind,
   type LossMethod,
@@ -22,6 +21,7 @@ import {
 import { MAX_NAME_LENGTH, MAX_NOTES_LENGTH, textLengthProblem } from '../scenario/text-limits';
 import type { Scenario } from '../scenario/types';
 import { checkRecordNearStorm } from './alignment';
+import { checkMethod, knownClean } from './checked';
 
 /**
  * Pure edits of the scenario document. Each returns a new Scenario sharing
@@ -99,7 +99,9 @@ export function toScenarioStorm(storm: Storm): ScenarioStorm {
   validateStorm(storm);
   const durationsH = ownCopy(storm.durationsH);
   const depthsMm = ownCopy(storm.depthsMm);
-  return storm.startIso === undefined ? { durationsH, depthsMm } : { durationsH, depthsMm, startIso: storm.startIso };
+  const copy =
+    storm.startIso === undefined ? { durationsH, depthsMm } : { durationsH, depthsMm, startIso: storm.startIso };
+  return knownClean(copy);
 }
 
 export function withStorm(s: Scenario, storm: Storm): Scenario {
@@ -237,7 +239,7 @@ export function withParam(s: Scenario, key: string, value: number | boolean | st
   const known = spec.params.some((p) => p.key === key) || (spec.choices ?? []).some((c) => c.key === key);
   if (!known) throw new InputError(key, `${spec.label} has no parameter "${key}".`);
   const method = withMethodValue(s.method, key, value);
-  validateMethod(method);
+  checkMethod(method);
   return { ...s, method };
 }
 
@@ -248,7 +250,7 @@ export function withMethodDefaults(s: Scenario): Scenario {
 
 /** Sets a whole method (e.g. the fitted one from calibrate), checked by the core. */
 export function withMethod(s: Scenario, method: LossMethod): Scenario {
-  validateMethod(method);
+  checkMethod(method);
   return { ...s, method };
 }
 

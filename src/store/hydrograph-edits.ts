@@ -3,7 +3,7 @@ import {
   TRANSFORMS,
   computeLosses,
   fitTransform,
-  isInputError,
+  attempt,
   validateTransform,
   type LossMethod,
   type Transform,
@@ -121,15 +121,10 @@ export function fitRunoffTransform(s: Scenario, derived: Derived): TransformFitO
   const lossFit = derived.fit(s);
   const useLossFit = Boolean(lossFit?.ok && !derived.fitInUse(s));
   const method: LossMethod = useLossFit && lossFit?.ok ? lossFit.method : derived.effectiveMethod(s);
-  let excessMm: Float64Array;
-  try {
-    excessMm = computeLosses(s.storm, method).excessMm;
-  } catch (error) {
-    if (isInputError(error)) return none(error.message);
-    throw error;
-  }
+  const losses = attempt(() => computeLosses(s.storm, method));
+  if (!losses.ok) return none(losses.error.message);
   const result = fitTransform(
-    { durationsH: s.storm.durationsH, excessMm },
+    { durationsH: s.storm.durationsH, excessMm: losses.value.excessMm },
     transform,
     parameter,
     s.catchment.areaM2,

@@ -4,7 +4,7 @@ import {
   eventFlowWindow,
   eventStorm,
   hoursBetweenClocks,
-  isInputError,
+  attempt,
   separateBaseflow,
   shiftIso,
   type RecordEvent,
@@ -66,15 +66,10 @@ function eventData(
   const eventStart = eventStorm(rain, event).startIso;
   const baseflow = defaultBaseflowMethod(FIRST_BASEFLOW_KIND);
   const offsetH = t0 === 0 ? 0 : t0;
-  let depthMm: number | undefined;
-  let separates = true;
-  try {
-    depthMm = separateBaseflow({ timesH, dischargeM3s }, baseflow, { areaM2 }).directDepthMm;
-  } catch (error) {
-    // A window the first separation cannot take is kept unlinked: the workbench says why once it is opened.
-    if (!isInputError(error)) throw error;
-    separates = false;
-  }
+  // A window the first separation cannot take is kept unlinked: the workbench says why once it is opened.
+  const separated = attempt(() => separateBaseflow({ timesH, dischargeM3s }, baseflow, { areaM2 }).directDepthMm);
+  const separates = separated.ok;
+  const depthMm = separated.ok ? separated.value : undefined;
   const streamflow: Streamflow = {
     timesH,
     dischargeM3s,
@@ -122,12 +117,9 @@ export function withRecordEvents(
     const storm = eventStorm(rain, event);
     let data: { streamflow: Streamflow | null; observed: EventObserved | null } = { streamflow: null, observed: null };
     if (flow !== null) {
-      try {
-        data = eventData(rain, event, flow, s.catchment.areaM2);
-      } catch (error) {
-        if (!isInputError(error)) throw error;
-        throw new InputError(error.field, `${name}: ${error.message}`);
-      }
+      const r = attempt(() => eventData(rain, event, flow, s.catchment.areaM2));
+      if (!r.ok) throw new InputError(r.error.field, `${name}: ${r.error.message}`);
+      data = r.value;
     }
     added.push({
       id,

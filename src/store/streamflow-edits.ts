@@ -5,7 +5,7 @@ import {
   checkSpanH,
   defaultBaseflowMethod,
   isBaseflowKind,
-  isInputError,
+  attempt,
   methodSpec,
   separateBaseflow,
   validateBaseflowMethod,
@@ -47,14 +47,11 @@ function parameterObjection(
   method: BaseflowMethod,
   areaM2: number,
 ): InputError | null {
-  try {
-    separateBaseflow(record, method, { areaM2 });
-    return null;
-  } catch (error) {
-    if (!isInputError(error)) throw error;
-    const own = baseflowMethodSpec(method.kind).params.some((p) => p.key === error.field);
-    return own && baseflowNumber(method, error.field) !== undefined ? error : null;
-  }
+  const r = attempt(() => separateBaseflow(record, method, { areaM2 }));
+  if (r.ok) return null;
+  const { error } = r;
+  const own = baseflowMethodSpec(method.kind).params.some((p) => p.key === error.field);
+  return own && baseflowNumber(method, error.field) !== undefined ? error : null;
 }
 
 /**

@@ -12,7 +12,7 @@ import {
   formatForLanguage,
   startNumberFormat,
 } from '../../src/ui/number-format';
-import { totalsOf } from '../../src/ui/results/totals';
+import { totalsOf } from '../../src/store/totals';
 import { lazyPartsLoaded, renderWorkbench } from '../helpers/render';
 import { FOUR_BARS } from '../helpers/scenario-fixtures';
 

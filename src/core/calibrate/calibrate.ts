@@ -1,8 +1,8 @@
-import { isInputError } from '../errors';
+import { attempt } from '../errors';
 import { totalExcessMm } from '../loss/compute';
 import { describeRange, methodSpec, numericParam, validateMethod } from '../loss/methods';
 import type { LossMethod, NumericParam } from '../loss/types';
-import { validateStormDepthMm, type Storm } from '../storm';
+import { totalDepthMm, validateStormDepthMm, type Storm } from '../storm';
 import { EXACT_CALIBRATORS } from './exact';
 import { PARAMETER_REL_TOL, solveMonotone } from './monotone';
 import { SCAN_POINTS, solveByScan } from './scan';
@@ -51,14 +51,29 @@ export function calibrate(
   parameter: string,
   targetExcessMm: number,
 ): CalibrationResult {
-  let rainMm: number;
-  try {
-    rainMm = validateStormDepthMm(storm);
+  const checked = attempt(() => {
+    const rainMm = validateStormDepthMm(storm);
     validateMethod(method);
-  } catch (error) {
-    if (isInputError(error)) return { ok: false, reason: 'invalid-input', message: error.message };
-    throw error;
-  }
+    return rainMm;
+  });
+  if (!checked.ok) return { ok: false, reason: 'invalid-input', message: checked.error.message };
+  return calibrateUnchecked(storm, method, parameter, targetExcessMm, checked.value);
+}
+
+/**
+ * calibrate without checking the storm and the method, for callers that
+ * checked them once and fit again as other inputs change (the store, whose
+ * documents are checked as they enter it). `rainMm` is the storm's total
+ * depth when the caller has it. The target and the parameter are still
+ * checked: they come with each call.
+ */
+export function calibrateUnchecked(
+  storm: Storm,
+  method: LossMethod,
+  parameter: string,
+  targetExcessMm: number,
+  rainMm: number = totalDepthMm(storm),
+): CalibrationResult {
   const spec = methodSpec(method.kind);
   const param = numericParam(method.kind, parameter);
   if (!param) {

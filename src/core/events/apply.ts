@@ -1,4 +1,4 @@
-import { InputError, isInputError } from '../errors';
+import { InputError, attempt } from '../errors';
 import { computeLossesUnchecked } from '../loss/compute';
 import { methodSpec, numericParam, validateMethod } from '../loss/methods';
 import type { LossMethod } from '../loss/types';
@@ -55,12 +55,8 @@ export function applyDesignValue(
   validateMethod(design);
 
   return events.map((event): EventRunoff => {
-    try {
-      validateStorm(event.storm);
-    } catch (error) {
-      if (isInputError(error)) return { id: event.id, ok: false, field: error.field, message: error.message };
-      throw error;
-    }
+    const checked = attempt(() => validateStorm(event.storm));
+    if (!checked.ok) return { id: event.id, ok: false, field: checked.error.field, message: checked.error.message };
     const observedMm = event.observedExcessMm;
     if (typeof observedMm !== 'number' || !Number.isFinite(observedMm) || observedMm < 0) {
       return {

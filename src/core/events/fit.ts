@@ -1,5 +1,5 @@
 import { calibrate, type CalibrationResult } from '../calibrate/calibrate';
-import { isInputError } from '../errors';
+import { attempt } from '../errors';
 import type { LossMethod } from '../loss/types';
 import { totalDepthMm, validateStorm, type Storm } from '../storm';
 import { validateEventList, type CatchmentEvent } from './event';
@@ -18,13 +18,7 @@ export interface EventFit {
 }
 
 function rainOf(storm: Storm): number | null {
-  try {
-    validateStorm(storm);
-  } catch (error) {
-    if (isInputError(error)) return null;
-    throw error;
-  }
-  return totalDepthMm(storm);
+  return attempt(() => validateStorm(storm)).ok ? totalDepthMm(storm) : null;
 }
 
 /**

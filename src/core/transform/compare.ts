@@ -1,4 +1,4 @@
-import { InputError, isInputError } from '../errors';
+import { InputError, attempt } from '../errors';
 import { dischargeAtH, validateHydrograph } from '../baseflow/hydrograph';
 import { findPeakIndex } from '../baseflow/peak';
 import type { Hydrograph } from '../baseflow/types';
@@ -31,10 +31,9 @@ export interface HydrographComparison {
 
 /** Validates one series, naming it in the field and the message. */
 export function checkSeries(series: Hydrograph, name: 'computed' | 'observed', valuesField: string): void {
-  try {
-    validateHydrograph(series);
-  } catch (error) {
-    if (!isInputError(error)) throw error;
+  const r = attempt(() => validateHydrograph(series));
+  if (!r.ok) {
+    const { error } = r;
     const field = error.field === 'dischargeM3s' ? valuesField : error.field;
     const message = error.message.startsWith('The streamflow record')
       ? error.message.replace('The streamflow record', `The ${name} hydrograph`)

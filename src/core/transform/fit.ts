@@ -1,6 +1,6 @@
 import { findPeakIndex } from '../baseflow/peak';
 import { solveMonotone } from '../calibrate/monotone';
-import { InputError, isInputError } from '../errors';
+import { InputError, attempt } from '../errors';
 import type { Hydrograph } from '../baseflow/types';
 import { brentMinimize } from './brent-min';
 import { checkSeries, compareClean, nashSutcliffe, type HydrographComparison } from './compare';
@@ -145,8 +145,7 @@ export function fitTransform(
 ): TransformFitResult {
   const observedHydrograph = { timesH: observed?.timesH, dischargeM3s: observed?.directM3s } as Hydrograph;
   const stepOption = options?.stepH === undefined ? {} : { stepH: options.stepH };
-  let param: TransformParam | undefined;
-  try {
+  const checked = attempt(() => {
     // One full computation validates the excess, transform, area and step.
     runoffHydrograph(excess, transform, areaM2, stepOption);
     if (excess.durationsH.length === 0) throw new InputError('durationsH', 'The excess has no bars to route.');
@@ -154,14 +153,12 @@ export function fitTransform(
     if (!TRANSFORM_OBJECTIVES.includes(objective)) {
       throw new InputError('objective', `Unknown objective "${String(objective)}"; use peak, time-of-peak or nse.`);
     }
-    param = (TRANSFORMS[transform.kind].params as readonly TransformParam[]).find((p) => p.key === parameter);
-    if (param?.fit) checkOptions(options ?? {}, param);
-  } catch (error) {
-    if (isInputError(error)) {
-      return { ok: false, reason: 'invalid-input', message: error.message };
-    }
-    throw error;
-  }
+    const found = (TRANSFORMS[transform.kind].params as readonly TransformParam[]).find((p) => p.key === parameter);
+    if (found?.fit) checkOptions(options ?? {}, found);
+    return found;
+  });
+  if (!checked.ok) return { ok: false, reason: 'invalid-input', message: checked.error.message };
+  const param = checked.value;
   const spec = TRANSFORMS[transform.kind];
   if (!param?.fit) {
     const fittable = (spec.params as readonly TransformParam[]).filter((p) => p.fit).map((p) => p.key);
@@ -174,14 +171,12 @@ export function fitTransform(
           : `${spec.label} has no parameter "${parameter}" to fit; it has ${fittable.join(', ')}.`,
     };
   }
-  try {
-    return solveFit(excess, transform, param, areaM2, observedHydrograph, objective, options ?? {}, stepOption);
-  } catch (error) {
-    // A value in the range that the transform cannot take at this step (a
-    // response too long for it) is bad input too.
-    if (isInputError(error)) return { ok: false, reason: 'invalid-input', message: error.message };
-    throw error;
-  }
+  // A value in the range that the transform cannot take at this step (a
+  // response too long for it) is bad input too.
+  const solved = attempt(() =>
+    solveFit(excess, transform, param, areaM2, observedHydrograph, objective, options ?? {}, stepOption),
+  );
+  return solved.ok ? solved.value : { ok: false, reason: 'invalid-input', message: solved.error.message };
 }
 
 /** The fit itself, on validated input (see fitTransform). */

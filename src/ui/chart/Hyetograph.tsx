@@ -1,6 +1,5 @@
 import { useMemo, useState } from 'react';
-import { computeLosses, totalDepthMm, type LossMethod } from '../../core';
-import type { Scenario } from '../../scenario/types';
+import { totalDepthMm } from '../../core';
 import { useDerived, useScenario } from '../../store';
 import { formatCount, formatValue } from '../format';
 import { displayUnit, toDisplay, unitText } from '../units';
@@ -22,17 +21,6 @@ export { CHART_HEIGHT } from './chart-height';
 // The mass curve's code loads the first time it is switched on (it is not part of the first screen).
 const MassCurve = lazyPart<MassCurveProps>('mass curve', () => import('./MassCurve').then((m) => m.MassCurve));
 
-/** The part of the loss drawn in its own shade (initial loss), computed by the core. */
-function lossPart(storm: Scenario['storm'], method: LossMethod): Float64Array | null {
-  const part = lossPartOf(method);
-  if (!part) return null;
-  try {
-    return computeLosses(storm, part.method).lossMm;
-  } catch {
-    return null;
-  }
-}
-
 /**
  * The hyetograph: each bar split into the part lost and the part that runs
  * off, axes with units (clock times when the storm has a start), and for
@@ -52,7 +40,7 @@ export function Hyetograph() {
   const span = useTimeSpanH();
   const height = useChartHeight();
   const frame = useMemo(() => chartFrame(storm, width, height, units, span), [storm, width, height, units, span]);
-  const part = useMemo(() => lossPart(storm, method), [storm, method]);
+  const part = useDerived((d, s) => d.lossPartMm(s));
   const capacity = CAPACITY_CURVES[method.kind];
   const capacityDrawing = useMemo(
     () => (capacity && results.ok ? capacity.draw(frame, storm, method) : null),

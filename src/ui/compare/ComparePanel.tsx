@@ -16,7 +16,7 @@ import { commonFrames } from './common-frame';
 import { difference, type Difference } from './difference';
 import { MAX_PINS } from '../../store/pin-board';
 import type { Pin } from '../../store/pins';
-import { totalsOf, type Totals } from '../results/totals';
+import { totalsOf, type Totals } from '../../store/totals';
 import './compare.css';
 
 const SMALL_CHART_HEIGHT = 190;

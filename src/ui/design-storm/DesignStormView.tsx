@@ -1,20 +1,13 @@
 import { useEffect, useMemo, useState } from 'react';
-import {
-  computeLosses,
-  isInputError,
-  methodNumber,
-  methodSpec,
-  runoffHydrograph,
-  runoffVolumeM3,
-  type LossMethod,
-} from '../../core';
+import { methodNumber, methodSpec, runoffVolumeM3, type LossMethod } from '../../core';
 import { dischargeText } from '../observed/discharge';
 import { hoursMinutes } from '../results/hours-minutes';
 import { useActions, useDerived, useScenario, useWorkbenchStore, withDesignStormOnWorkbench } from '../../store';
 import { toScenarioStorm } from '../../store/edits';
 import { usePins, useServices } from '../services/services';
 import { MAX_PINS } from '../../store/pin-board';
-import { designMethod } from '../events/event-fits';
+import { designDerived } from '../../store/derive-design';
+import { eventDerived } from '../../store/derive-events';
 import { useEventFits } from '../events/use-event-fits';
 import { formatPercent, formatValue } from '../format';
 import { displayUnit, paramToDisplay, paramUnitText, toDisplay, unitText } from '../units';
@@ -102,8 +95,8 @@ export function DesignStormView() {
   ): void => setForm((f) => ({ ...f, [field]: value }));
   const areaM2 = useScenario((s) => s.catchment.areaM2);
   const benchMethod = useDerived((d, s) => d.effectiveMethod(s));
-  const { fits, outcome } = useEventFits();
-  const fromSet = designMethod(fits, outcome);
+  const { fits } = useEventFits();
+  const fromSet = useDerived((d, s) => eventDerived(d).designMethod(s));
   const method: LossMethod = loss === 'design' && fromSet ? fromSet : benchMethod;
   const actions = useActions();
   const store = useWorkbenchStore();
@@ -111,32 +104,13 @@ export function DesignStormView() {
   const { pins } = usePins();
 
   const built = useMemo(() => buildDesignStorm(form), [form]);
-  const result = useMemo(() => {
-    if (!built.ok) return null;
-    try {
-      return { ok: true as const, r: computeLosses(built.storm, method) };
-    } catch (error) {
-      if (isInputError(error)) return { ok: false as const, message: error.message };
-      throw error;
-    }
-  }, [built, method]);
+  // Derived in the store (store/derive-design.ts), checked once per storm and method.
+  const design = designDerived(store.derived);
+  const result = built.ok ? design.losses(built.storm, method) : null;
 
   // The design peak, through the workbench's unit hydrograph (issue 13), when one is chosen.
   const transform = useScenario((s) => s.hydrograph.transform);
-  const peak = useMemo(() => {
-    if (!result?.ok || !built.ok || transform === null || !(areaM2 > 0)) return null;
-    try {
-      const h = runoffHydrograph(
-        { durationsH: built.storm.durationsH, excessMm: result.r.excessMm },
-        transform,
-        areaM2,
-      );
-      return { ok: true as const, peakM3s: h.peakM3s, timeOfPeakH: h.timeOfPeakH, hydrograph: h };
-    } catch (error) {
-      if (isInputError(error)) return { ok: false as const, message: error.message };
-      throw error;
-    }
-  }, [result, built, transform, areaM2]);
+  const peak = built.ok && result ? design.peak(built.storm, result, transform, areaM2) : null;
 
   const spec = methodSpec(method.kind);
   const param = spec.params.find((p) => p.key === fits.parameter);

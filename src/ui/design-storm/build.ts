@@ -1,5 +1,6 @@
 import {
   alternatingBlockStorm,
+  attempt,
   isInputError,
   scaleStormToDepth,
   uniformStorm,
@@ -214,12 +215,9 @@ export function buildDesignStorm(form: DesignForm): Built {
     }
     if (form.scale) {
       const to = num(form, 'scaleMm', system);
-      try {
-        storm = scaleStormToDepth(storm, to);
-      } catch (error) {
-        if (isInputError(error)) throw new FieldProblem('scaleMm', `${FIELD_LABELS.scaleMm}: ${error.message}`);
-        throw error;
-      }
+      const scaled = attempt(() => scaleStormToDepth(storm, to));
+      if (!scaled.ok) throw new FieldProblem('scaleMm', `${FIELD_LABELS.scaleMm}: ${scaled.error.message}`);
+      storm = scaled.value;
       description += `, scaled to ${form.scaleMm} ${form.depthUnit ?? 'mm'}`;
     }
     return { ok: true, storm, description };

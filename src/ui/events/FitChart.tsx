@@ -1,6 +1,6 @@
 import { scaleLinear } from 'd3-scale';
 import { formatCount, formatValue } from '../format';
-import type { FitRow } from './event-fits';
+import type { FitRow } from '../../store/event-fits';
 
 export interface FitChartProps {
   readonly rows: readonly FitRow[];

@@ -13,7 +13,7 @@ import {
 import { alignRecord } from '../../store/alignment';
 import { transformFitParameter } from '../../store/hydrograph-edits';
 import type { Scenario, SetEvent } from '../../scenario/types';
-import type { EventFits } from './event-fits';
+import type { EventFits } from '../../store/event-fits';
 
 /** The transform fitted for every event: the parameter, each event's fit by id, and their spread. */
 export interface EventTransformFits {

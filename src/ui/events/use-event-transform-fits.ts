@@ -1,6 +1,6 @@
 import { useMemo } from 'react';
 import { useScenario } from '../../store';
-import type { EventFits } from './event-fits';
+import type { EventFits } from '../../store/event-fits';
 import { fitAllEventTransforms, type EventTransformFits } from './event-transform-fits';
 
 /** The transform fitted for every event, recomputed only when the loss fits or the hydrograph settings change. */

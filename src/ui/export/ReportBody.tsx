@@ -5,7 +5,7 @@ import { useDerived, useScenario, useWorkbench } from '../../store';
 import { chartFrame } from '../chart/frame';
 import { rateLine } from '../chart/method-layers';
 import { formatWallDate, formatWallTime, wallClockMs } from '../chart/clock';
-import { totalsOf } from '../results/totals';
+import { totalsOf } from '../../store/totals';
 import { fittedCellText } from '../results/fit-words';
 import { formatCount, formatPercent, formatValue } from '../format';
 import { displayUnit, toDisplay, unitText, type Quantity } from '../units';

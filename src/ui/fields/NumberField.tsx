@@ -1,5 +1,5 @@
 import { useEffect, useRef, useState, type ReactNode } from 'react';
-import { isInputError } from '../../core';
+import { attempt } from '../../core';
 import type { PlausibleQuantity } from '../../io/plausible';
 import { formatForField, formatValue } from '../format';
 import { FieldFrame, fieldDescribedBy } from './FieldFrame';
@@ -154,17 +154,15 @@ export function NumberField({
   const restore = (session: Draft): boolean => {
     if (!session.committed) return true;
     if (history?.withdraw(session.key)) return true;
-    try {
+    const r = attempt(() => {
       if (session.base === 'empty') {
         if (empty && 'store' in empty) empty.store({ coalesceKey: session.key, session: true });
         else return false;
       } else if (session.base !== null) onCommit(session.base, { coalesceKey: session.key, session: true });
       else return false;
       return true;
-    } catch (error) {
-      if (!isInputError(error)) throw error;
-      return false;
-    }
+    });
+    return r.ok && r.value;
   };
 
   const refuse = (session: Draft, typed: string, reason: string): void => {
@@ -175,13 +173,9 @@ export function NumberField({
 
   /** Stores what the text means; an InputError from the store is refused like any other. */
   const store = (session: Draft, typed: string, stored: number | 'empty', commit: () => void): void => {
-    try {
-      commit();
-      setDraft({ ...session, text: typed, stored, message: null, committed: true });
-    } catch (error) {
-      if (!isInputError(error)) throw error;
-      refuse(session, typed, error.message);
-    }
+    const r = attempt(commit);
+    if (r.ok) setDraft({ ...session, text: typed, stored, message: null, committed: true });
+    else refuse(session, typed, r.error.message);
   };
 
   const onChange = (typed: string): void => {

@@ -1,5 +1,5 @@
 import { useState, type InputHTMLAttributes, type TextareaHTMLAttributes } from 'react';
-import { isInputError } from '../../core';
+import { attempt } from '../../core';
 
 type Owned = 'id' | 'value' | 'onChange' | 'aria-invalid' | 'aria-describedby';
 
@@ -28,13 +28,8 @@ function useRefusable(value: string, onCommit: (text: string) => void) {
   const [refused, setRefused] = useState<Refused | null>(null);
   const live = refused !== null && refused.over === value ? refused : null;
   const onChange = (text: string): void => {
-    try {
-      onCommit(text);
-      setRefused(null);
-    } catch (error) {
-      if (!isInputError(error)) throw error;
-      setRefused({ text, message: error.message, over: value });
-    }
+    const r = attempt(() => onCommit(text));
+    setRefused(r.ok ? null : { text, message: r.error.message, over: value });
   };
   return { shown: live ? live.text : value, message: live?.message, invalid: live ? true : undefined, onChange };
 }

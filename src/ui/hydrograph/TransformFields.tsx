@@ -1,6 +1,6 @@
 import {
   TRANSFORMS,
-  isInputError,
+  attempt,
   lagFromTimeOfConcentration,
   validateTransform,
   type Transform,
@@ -18,13 +18,8 @@ function coreProblem(transform: Transform, key: string, value: number | undefine
   const next: Record<string, unknown> = { ...transform };
   if (value === undefined) delete next[key];
   else next[key] = value;
-  try {
-    validateTransform(next as unknown as Transform);
-    return null;
-  } catch (error) {
-    if (isInputError(error)) return error.message;
-    throw error;
-  }
+  const r = attempt(() => validateTransform(next as unknown as Transform));
+  return r.ok ? null : r.error.message;
 }
 
 function ParamField({ transform, param }: { transform: Transform; param: TransformParam }) {
@@ -120,15 +115,12 @@ export function TransformFields({ transform }: { transform: Transform }) {
             transform={transform}
             onCommit={(values) => {
               const next: UnitHydrographTransform = { ...transform, ordinatesM3sPerMm: values };
-              try {
+              const r = attempt(() =>
                 actions.edit('Set unit hydrograph ordinates', (s) => withTransform(s, next), {
                   coalesceKey: 'uh-ordinates',
-                });
-                return null;
-              } catch (error) {
-                if (isInputError(error)) return error.message;
-                throw error;
-              }
+                }),
+              );
+              return r.ok ? null : r.error.message;
             }}
           />
           <UnitHydrographNote />

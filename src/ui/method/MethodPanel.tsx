@@ -1,7 +1,7 @@
 import {
   METHOD_KINDS,
   METHODS,
-  isInputError,
+  attempt,
   isLossKind,
   methodSpec,
   paramApplies,
@@ -24,13 +24,8 @@ const SoilPresets = lazyPart('soil texture values', () => import('./SoilPresets'
 
 /** The core's own message for a candidate parameter value, or null when the core accepts it. */
 function coreProblem(method: LossMethod, key: string, value: number | boolean | string): string | null {
-  try {
-    validateMethod(withMethodValue(method, key, value));
-    return null;
-  } catch (error) {
-    if (isInputError(error)) return error.message;
-    throw error;
-  }
+  const r = attempt(() => validateMethod(withMethodValue(method, key, value)));
+  return r.ok ? null : r.error.message;
 }
 
 function ParamField({ param, method, stored }: { param: NumericParam; method: LossMethod; stored: LossMethod }) {

@@ -1,5 +1,5 @@
 import { useState } from 'react';
-import { SOIL_TEXTURES, greenAmptForTexture, isInputError, type SoilTextureName } from '../../core';
+import { SOIL_TEXTURES, greenAmptForTexture, attempt, type SoilTextureName } from '../../core';
 import { useActions, useScenario } from '../../store';
 import { NumberField } from '../fields/NumberField';
 
@@ -50,14 +50,11 @@ export function SoilPresets() {
       <button
         type="button"
         onClick={() => {
-          try {
+          const r = attempt(() => {
             const soil = greenAmptForTexture(texture, saturation);
             actions.setMethod(recovers === undefined ? soil : { ...soil, recovers }, `Use ${texture} soil values`);
-            setProblem(null);
-          } catch (error) {
-            if (!isInputError(error)) throw error;
-            setProblem(error.message);
-          }
+          });
+          setProblem(r.ok ? null : r.error.message);
         }}
       >
         Use soil values

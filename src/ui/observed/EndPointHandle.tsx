@@ -1,4 +1,4 @@
-import { isInputError, type UnitSystem } from '../../core';
+import { attempt, type UnitSystem } from '../../core';
 import { useActions, withBaseflowParam } from '../../store';
 import { valueAfterKey } from '../chart/drag-math';
 import { formatValue } from '../format';
@@ -50,16 +50,14 @@ export function EndPointHandle({
   const { step, coarse } = endPointSteps(bounds);
 
   const setEnd = (tH: number, coalesceKey?: string): void => {
-    try {
+    // The bounds keep the handle where the core accepts it; a refusal leaves the record as it was.
+    attempt(() =>
       actions.edit(
         `Move ${labelInSentence(label)}`,
         (s) => withBaseflowParam(s, paramKey, tH),
         coalesceKey ? { coalesceKey } : {},
-      );
-    } catch (error) {
-      // The bounds keep the handle where the core accepts it; anything else is a bug to see.
-      if (!isInputError(error)) throw error;
-    }
+      ),
+    );
   };
 
   const handlers = useDragHandle({

@@ -1,5 +1,5 @@
 import { useMemo, useState } from 'react';
-import { isInputError, splitEvents, totalDepthMm, type RecordEvent } from '../../core';
+import { attempt, splitEvents, totalDepthMm, type RecordEvent } from '../../core';
 import type { FlowImportSettings, FlowRecord, ImportedStorm, RainImportSettings } from '../../io';
 import { useActions, useScenario } from '../../store';
 import { withRecordEvents, type RecordPick } from '../../store/record-edits';
@@ -89,13 +89,13 @@ export function RecordView() {
       name: `Event from ${barTimeText(clock, startsH[event.firstBar] as number)}`,
     }));
     const n = picks.length;
-    try {
+    const r = attempt(() =>
       actions.edit(`Add ${n} event${n === 1 ? '' : 's'} from the long record`, (s) =>
         withRecordEvents(s, storm, picks, flow ? { record: flow.record, afterH } : null),
-      );
-    } catch (error) {
-      if (!isInputError(error)) throw error;
-      setSaid({ ok: false, text: `Nothing was added: ${error.message}` });
+      ),
+    );
+    if (!r.ok) {
+      setSaid({ ok: false, text: `Nothing was added: ${r.error.message}` });
       return;
     }
     setSaid({

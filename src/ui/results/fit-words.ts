@@ -1,5 +1,5 @@
 import type { NumericParam, UnitSystem } from '../../core';
-import type { Totals } from './totals';
+import type { Totals } from '../../store/totals';
 import { formatValue } from '../format';
 import { paramToDisplay, paramUnitText } from '../units';
 

@@ -6,7 +6,7 @@ import {
   type FlowImportSettings,
   type FlowRecord,
 } from '../../../io';
-import { isInputError } from '../../../core';
+import { attempt } from '../../../core';
 import { useActions, useScenario, withStreamflowRecord } from '../../../store';
 import { formatCount } from '../../format';
 import { ImportDialog, type ImportDraft, type ImportKind } from '../../import-kit';
@@ -91,16 +91,13 @@ export function FlowPasteDialog({ initial, onClose }: FlowPasteDialogProps) {
       renderPreview={(record) => <FlowPreview record={record} units={units} />}
       keepText={currentText}
       onUse={(record, fileName) => {
-        try {
+        const r = attempt(() =>
           actions.edit(fileName ? `Open streamflow file ${fileName}` : 'Paste streamflow', (s) =>
             withStreamflowRecord(s, record),
-          );
-        } catch (error) {
-          // The import layer checks what the core checks; should they ever differ, say so and keep the dialog.
-          if (!isInputError(error)) throw error;
-          return `The record could not be used: ${error.message}`;
-        }
-        return null;
+          ),
+        );
+        // The import layer checks what the core checks; should they ever differ, say so and keep the dialog.
+        return r.ok ? null : `The record could not be used: ${r.error.message}`;
       }}
     />
   );

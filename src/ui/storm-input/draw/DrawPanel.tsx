@@ -1,5 +1,5 @@
 import { useState, type FormEvent } from 'react';
-import { isInputError } from '../../../core';
+import { attempt } from '../../../core';
 import { emptyStorm } from '../../../core/storm-tools';
 import { useActions, useScenario } from '../../../store';
 import { fineStep } from '../../chart/drag-math';
@@ -49,17 +49,15 @@ export function DrawPanel() {
     setStepMessage(stepBad);
     setCountMessage(countBad);
     if (stepBad || countBad || !step.ok || !count.ok) return;
-    try {
-      const fresh = emptyStorm(step.value / 60, count.value, storm.startIso);
-      actions.setStorm(fresh, 'New empty storm');
+    const r = attempt(() =>
+      actions.setStorm(emptyStorm(step.value / 60, count.value, storm.startIso), 'New empty storm'),
+    );
+    if (r.ok) {
       setStatus(
         `${formatCount(count.value)} dry bars of ${formatValue(step.value)} min, ready to draw on. Undo brings back the storm before.`,
       );
-    } catch (error) {
-      if (!isInputError(error)) throw error;
-      if (error.field === 'count') setCountMessage(error.message);
-      else setStepMessage(error.message);
-    }
+    } else if (r.error.field === 'count') setCountMessage(r.error.message);
+    else setStepMessage(r.error.message);
   };
 
   return (

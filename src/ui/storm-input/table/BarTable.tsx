@@ -1,5 +1,5 @@
 import { useEffect, useLayoutEffect, useMemo, useRef, useState, type KeyboardEvent } from 'react';
-import { barEdgesH, isInputError, totalDurationH, type UnitSystem } from '../../../core';
+import { barEdgesH, attempt, totalDurationH, type UnitSystem } from '../../../core';
 import { useActions, useDerived, useScenario } from '../../../store';
 import { formatCount, formatForField, formatValue } from '../../format';
 import { displayUnit, toDisplay, unitText } from '../../units';
@@ -300,15 +300,13 @@ export function BarTable() {
     const edit = readCell(storm, k, key, text, units, clock);
     let message: string | null = edit.ok ? null : edit.message;
     if (edit.ok) {
-      try {
+      const r = attempt(() => {
         if (edit.kind === 'depth') actions.setBarDepth(k, edit.depthMm);
         else if (edit.kind === 'duration') actions.setBarDuration(k, edit.durationH);
         else if (edit.kind === 'storm') actions.setStorm(edit.storm, edit.label);
         else if (edit.kind === 'start') actions.setStartIso(edit.startIso);
-      } catch (error) {
-        if (!isInputError(error)) throw error;
-        message = error.message;
-      }
+      });
+      if (!r.ok) message = r.error.message;
     }
     if (message !== null) {
       setDraft(k, col, { text, message });

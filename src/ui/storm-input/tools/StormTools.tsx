@@ -1,5 +1,5 @@
 import { useEffect, useRef, useState, type FormEvent } from 'react';
-import { isInputError, scaleStormToDepth, totalDepthMm, type Storm } from '../../../core';
+import { attempt as attemptInput, scaleStormToDepth, totalDepthMm, type Storm } from '../../../core';
 import { resampleStorm, scaleStormByFactor } from '../../../core/storm-tools';
 import { useActions, useScenario } from '../../../store';
 import { formatDuration } from '../../rainfall/RainfallToolbar';
@@ -54,12 +54,9 @@ export function StormTools() {
   };
   /** Runs a storm edit; an InputError from the core becomes the field's message and changes nothing. */
   const attempt = (key: keyof Messages, run: () => string): void => {
-    try {
-      done(key, run());
-    } catch (error) {
-      if (!isInputError(error)) throw error;
-      fail(key, error.message);
-    }
+    const r = attemptInput(run);
+    if (r.ok) done(key, r.value);
+    else fail(key, r.error.message);
   };
   const needBars = (key: keyof Messages): boolean => {
     if (n > 0) return true;

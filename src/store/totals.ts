@@ -1,11 +1,12 @@
-import { methodSpec, type NumericParam } from '../../core';
-import type { Scenario } from '../../scenario/types';
-import type { Derived } from '../../store';
+import { methodSpec, type NumericParam } from '../core';
+import type { Scenario } from '../scenario/types';
+import type { Derived } from './derive';
 
 /**
  * A scenario's totals as the comparison and the report show them, all in SI
  * and all from the core through the store's derived selectors (results,
- * runoff volume, fit); nothing is computed here.
+ * runoff volume, fit); nothing is computed here. Loaded with the comparison
+ * and the report, not the first screen.
  */
 export interface Totals {
   readonly rainMm: number | null;
@@ -28,7 +29,19 @@ export interface Totals {
   readonly error: string | null;
 }
 
+// Per store (its Derived) and per document: a pin's totals are worked out once, not at every render.
+const remembered = new WeakMap<Derived, WeakMap<Scenario, Totals>>();
+
+/** The totals of `scenario` from `derived` (the store's or a pin's selectors), kept while both are the same objects. */
 export function totalsOf(scenario: Scenario, derived: Derived): Totals {
+  let byScenario = remembered.get(derived);
+  if (!byScenario) remembered.set(derived, (byScenario = new WeakMap()));
+  let totals = byScenario.get(scenario);
+  if (!totals) byScenario.set(scenario, (totals = totalsNow(scenario, derived)));
+  return totals;
+}
+
+function totalsNow(scenario: Scenario, derived: Derived): Totals {
   const results = derived.results(scenario);
   const r = results.ok ? results.result : null;
   const fit = derived.fit(scenario);
