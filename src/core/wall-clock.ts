@@ -9,7 +9,8 @@
  */
 /** Any ISO 8601 date-time or date, read field by field; the zone, when written, is "Z" or "±hh:mm". */
 const ISO = /^(\d{4})-(\d{2})-(\d{2})(?:T(\d{2}):(\d{2})(?::(\d{2})(\.\d{1,9})?)?)?(Z|[+-]\d{2}:\d{2})?$/;
-const ZONE = /(?:Z|[+-]\d{2}:\d{2})$/;
+/** A zone written at the end of a date-time: "Z" or "±hh:mm". */
+export const ZONE_AT_END = /(?:Z|[+-]\d{2}:\d{2})$/;
 const MS_PER_DAY = 86_400_000;
 
 /** True for a leap year of the Gregorian calendar (every 4th year, not every 100th, every 400th). */
@@ -81,39 +82,7 @@ export function readIsoDateTime(text: string): IsoReading | null {
 
 /** True when the text ends in a zone ("Z", "+10:00"). */
 export function namesZone(iso: string): boolean {
-  return ZONE.test(iso);
-}
-
-/** The zone as written at the end of the text ("Z", "+10:00"), or "" when none is written. */
-export function zoneSuffix(iso: string): string {
-  return ZONE.exec(iso)?.[0] ?? '';
-}
-
-const pad = (n: number, width = 2): string => String(n).padStart(width, '0');
-
-/**
- * The date-time that readIsoDateTime reads back as `wallMs`, written
- * "2024-05-01T10:00:00" (".250" when the milliseconds are not whole
- * seconds) followed by `zone` as given ("", "Z", "+10:00"). The writer
- * beside the one reader, so a written start always reads back.
- */
-export function writeIsoDateTime(wallMs: number, zone: string): string {
-  const p = wallClockParts(wallMs);
-  if (p === null) throw new RangeError(`${String(wallMs)} ms is outside the calendar's range.`);
-  return (
-    `${pad(p.year, 4)}-${pad(p.month)}-${pad(p.day)}` +
-    `T${pad(p.hour)}:${pad(p.minute)}:${pad(p.second)}` +
-    (p.millisecond === 0 ? '' : `.${pad(p.millisecond, 3)}`) +
-    zone
-  );
-}
-
-/** A zone offset in minutes written as readIsoDateTime reads it: "Z" for 0, "+10:00", "-03:30"; "" for none. */
-export function zoneText(zoneMinutes: number | null): string {
-  if (zoneMinutes === null) return '';
-  if (zoneMinutes === 0) return 'Z';
-  const abs = Math.abs(zoneMinutes);
-  return `${zoneMinutes < 0 ? '-' : '+'}${pad(Math.floor(abs / 60))}:${pad(abs % 60)}`;
+  return ZONE_AT_END.test(iso);
 }
 
 /** Milliseconds of the wall-clock reading of `iso` on a zone-free axis, or null when it is not a date-time (readIsoDateTime). */

@@ -1,5 +1,6 @@
 import { InputError } from '../errors';
-import { readIsoDateTime, writeIsoDateTime, zoneSuffix } from '../wall-clock';
+import { writeIsoDateTime, zoneSuffix } from '../iso-write';
+import { readIsoDateTime } from '../wall-clock';
 
 const MS_PER_H = 3_600_000;
 
