@@ -96,5 +96,6 @@ export {
   type IsoReading,
   type WallClockParts,
 } from './wall-clock';
+export { writeIsoDateTime, zoneSuffix, zoneText } from './iso-write';
 // Cumulative rainfall, loss and excess at each bar end (issue 16).
 export { massCurve, type MassCurve } from './mass-curve';

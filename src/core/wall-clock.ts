@@ -9,7 +9,8 @@
  */
 /** Any ISO 8601 date-time or date, read field by field; the zone, when written, is "Z" or "±hh:mm". */
 const ISO = /^(\d{4})-(\d{2})-(\d{2})(?:T(\d{2}):(\d{2})(?::(\d{2})(\.\d{1,9})?)?)?(Z|[+-]\d{2}:\d{2})?$/;
-const ZONE = /(?:Z|[+-]\d{2}:\d{2})$/;
+/** A zone written at the end of a date-time: "Z" or "±hh:mm". */
+export const ZONE_AT_END = /(?:Z|[+-]\d{2}:\d{2})$/;
 const MS_PER_DAY = 86_400_000;
 
 /** True for a leap year of the Gregorian calendar (every 4th year, not every 100th, every 400th). */
@@ -81,7 +82,7 @@ export function readIsoDateTime(text: string): IsoReading | null {
 
 /** True when the text ends in a zone ("Z", "+10:00"). */
 export function namesZone(iso: string): boolean {
-  return ZONE.test(iso);
+  return ZONE_AT_END.test(iso);
 }
 
 /** Milliseconds of the wall-clock reading of `iso` on a zone-free axis, or null when it is not a date-time (readIsoDateTime). */

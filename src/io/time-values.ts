@@ -8,6 +8,8 @@ import {
   describeHours,
   isBelowMinStep,
   wallClockParts,
+  writeIsoDateTime,
+  zoneText,
 } from '../core';
 import { formatDuration } from './describe';
 import { notANumberReason, parseNumber, type DecimalMark, type Grouping } from './numbers';
@@ -297,18 +299,7 @@ const pad = (n: number, width = 2): string => String(n).padStart(width, '0');
  * written), "2024-05-01T10:00:00+10:00" or "…Z" with one.
  */
 export function isoAt(origin: CalendarOrigin, offsetH: number): string {
-  const d = new Date(origin.wallMs + Math.round(offsetH * MS_PER_HOUR));
-  const ms = d.getUTCMilliseconds();
-  let text =
-    `${pad(d.getUTCFullYear(), 4)}-${pad(d.getUTCMonth() + 1)}-${pad(d.getUTCDate())}` +
-    `T${pad(d.getUTCHours())}:${pad(d.getUTCMinutes())}:${pad(d.getUTCSeconds())}` +
-    (ms === 0 ? '' : `.${pad(ms, 3)}`);
-  const z = origin.zoneMinutes;
-  if (z !== null) {
-    const abs = Math.abs(z);
-    text += z === 0 ? 'Z' : `${z < 0 ? '-' : '+'}${pad(Math.floor(abs / 60))}:${pad(abs % 60)}`;
-  }
-  return text;
+  return writeIsoDateTime(origin.wallMs + Math.round(offsetH * MS_PER_HOUR), zoneText(origin.zoneMinutes));
 }
 
 /** A time of day in milliseconds as HH:MM (or HH:MM:SS when seconds are set). */

@@ -1,3 +1,4 @@
+import { readIsoDateTime } from '../core';
 import { capProblems, describeValue, problem, type Problem } from './problems';
 import { parseScenario } from './schema';
 import { MAX_NAME_LENGTH } from './text-limits';
@@ -78,6 +79,8 @@ interface Loaded {
 
 const isRecord = (x: unknown): x is Record<string, unknown> => x !== null && typeof x === 'object' && !Array.isArray(x);
 const ISO_UTC = /^\d{4}-\d{2}-\d{2}T\d{2}:\d{2}:\d{2}(\.\d+)?Z$/;
+/** A stamp as toISOString writes it, every field in range (the core's one reader: no 30 February). */
+const isUtcStamp = (text: string): boolean => ISO_UTC.test(text) && readIsoDateTime(text) !== null;
 const ID = /^s[1-9]\d{0,14}$/;
 
 function emptyState(): State {
@@ -98,7 +101,7 @@ function readEntry(
   if (!isRecord(raw)) return fail(`is not a saved scenario (got ${describeValue(raw)}).`);
   const { id, savedAt, scenario } = raw;
   if (typeof id !== 'string' || !ID.test(id)) return fail(`has no proper id (got ${describeValue(id)}).`);
-  if (typeof savedAt !== 'string' || !ISO_UTC.test(savedAt))
+  if (typeof savedAt !== 'string' || !isUtcStamp(savedAt))
     return fail(`has no proper savedAt time (got ${describeValue(savedAt)}).`);
   const parsed = parseScenario(scenario);
   if (!parsed.ok) {
@@ -114,7 +117,7 @@ function readEntry(
   }
   if (!deleted) return { id, savedAt, scenario: parsed.scenario };
   const { deletedAt, position } = raw;
-  if (typeof deletedAt !== 'string' || !ISO_UTC.test(deletedAt))
+  if (typeof deletedAt !== 'string' || !isUtcStamp(deletedAt))
     return fail(`has no proper deletedAt time (got ${describeValue(deletedAt)}).`);
   if (typeof position !== 'number' || !Number.isSafeInteger(position) || position < 0) {
     return fail(`has no proper position (got ${describeValue(position)}).`);

@@ -12,6 +12,7 @@ import {
   totalDurationH,
   isLossKind,
   methodSpec,
+  readIsoDateTime,
   validateStorm,
   type LossKind,
   type LossMethod,
@@ -199,7 +200,7 @@ export function withStartIso(s: Scenario, startIso: string | undefined): Scenari
   if (startIso === s.storm.startIso) return s;
   const { startIso: _old, ...rest } = s.storm;
   if (startIso === undefined) return { ...s, storm: rest };
-  if (typeof startIso !== 'string' || Number.isNaN(Date.parse(startIso))) {
+  if (typeof startIso !== 'string' || readIsoDateTime(startIso)?.hasTime !== true) {
     throw new InputError('startIso', `The storm start "${String(startIso)}" is not an ISO 8601 date-time.`);
   }
   const year = clockYearProblem('The storm start', startIso);

@@ -6,6 +6,7 @@ import {
   attempt,
   validateTransform,
   type LossMethod,
+  withTransformValue,
   type Transform,
   type TransformFitResult,
   type TransformKind,
@@ -65,10 +66,7 @@ export function withTransformKind(s: Scenario, kind: TransformKind | null): Scen
 export function withTransformParam(s: Scenario, key: string, value: number | undefined): Scenario {
   const t = s.hydrograph.transform;
   if (t === null) throw new InputError('transform', 'Choose a unit hydrograph before setting its parameters.');
-  const next: Record<string, unknown> = { ...t };
-  if (value === undefined) delete next[key];
-  else next[key] = value;
-  return withTransform(s, next as unknown as Transform);
+  return withTransform(s, withTransformValue(t, key, value));
 }
 
 export function withTransformFit(

@@ -1,3 +1,4 @@
+import { readIsoDateTime } from '../core';
 import { parseScenario, type Problem } from '../scenario';
 import type { Scenario } from '../scenario/types';
 import type { StorageLike } from './persistence';
@@ -70,7 +71,7 @@ export function listSetAside(storage: StorageLike): {
     copies.push({
       key,
       kind: KINDS[key.slice(0, at)] ?? 'other',
-      setAsideAt: stamp ? (stamp[1] as string) : null,
+      setAsideAt: stamp && readIsoDateTime(stamp[1] as string) !== null ? (stamp[1] as string) : null,
       chars: text.length,
     });
   }

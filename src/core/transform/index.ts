@@ -17,6 +17,8 @@ export {
   TRANSFORM_OBJECTIVES,
   NRCS_PEAK_RATE_FACTOR,
   isTransformKind,
+  transformValue,
+  withTransformValue,
   type TransformObjective,
   type TransformParam,
   type TransformSpec,

@@ -1,4 +1,4 @@
-import type { TransformKind, TransformOf } from './types';
+import type { Transform, TransformKind, TransformOf } from './types';
 
 /** The peak rate factor of the published table, in cfs per (mi²·in/h) (NEH-630 ch. 16, from memory). */
 export const NRCS_PEAK_RATE_FACTOR = 484;
@@ -160,4 +160,28 @@ export const TRANSFORM_KINDS = Object.keys(TRANSFORMS) as TransformKind[];
 
 export function isTransformKind(kind: unknown): kind is TransformKind {
   return typeof kind === 'string' && Object.prototype.hasOwnProperty.call(TRANSFORMS, kind);
+}
+
+/**
+ * The number `transform` holds for the parameter `key` (a key of its
+ * spec's params), or undefined when it holds none there (left out, or not a
+ * number). With withTransformValue, the one place that reads a parameter by
+ * its table key: TypeScript cannot tie a key of the union's table to the
+ * member that holds it, so the cast lives here, as methodValue's does.
+ */
+export function transformValue(transform: Transform, key: string): number | undefined {
+  const v: unknown = (transform as unknown as Partial<Record<string, unknown>>)[key];
+  return typeof v === 'number' ? v : undefined;
+}
+
+/**
+ * A copy of `transform` with the parameter `key` set to `value`, or left
+ * out when `value` is undefined (an optional parameter's default). Not
+ * validated: the caller checks it (validateTransform) before it is used.
+ */
+export function withTransformValue<T extends Transform>(transform: T, key: string, value: number | undefined): T {
+  const next: Partial<Record<string, unknown>> = { ...transform };
+  if (value === undefined) delete next[key];
+  else next[key] = value;
+  return next as unknown as T;
 }

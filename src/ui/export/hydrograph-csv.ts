@@ -1,4 +1,10 @@
-import { TRANSFORMS, type HydrographComparison, type RunoffHydrograph, type Transform } from '../../core';
+import {
+  TRANSFORMS,
+  transformValue,
+  type HydrographComparison,
+  type RunoffHydrograph,
+  type Transform,
+} from '../../core';
 import { CAUTION_TEXT } from '../../scenario';
 import type { Scenario } from '../../scenario/types';
 import { formatClockText, wallClockMs } from '../chart/clock';
@@ -10,11 +16,10 @@ const note = (x: number): string => (Number.isFinite(x) ? sig4.format(Object.is(
 
 /** "Lag = 0.75 h; peak rate factor = 484": a transform's parameters for notes and the report. */
 export function transformParametersText(transform: Transform, format: (x: number) => string = note): string {
-  const values = transform as unknown as Record<string, unknown>;
   const parts: string[] = [];
   for (const p of TRANSFORMS[transform.kind].params) {
-    const v = values[p.key];
-    if (typeof v !== 'number') continue;
+    const v = transformValue(transform, p.key);
+    if (v === undefined) continue;
     parts.push(`${p.label} = ${format(v)}${p.unit === 'h' ? ' h' : ''}`);
   }
   if (transform.kind === 'unit-hydrograph') parts.push(`${transform.ordinatesM3sPerMm.length} ordinates (m³/s per mm)`);

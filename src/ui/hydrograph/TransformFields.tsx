@@ -2,7 +2,9 @@ import {
   TRANSFORMS,
   attempt,
   lagFromTimeOfConcentration,
+  transformValue,
   validateTransform,
+  withTransformValue,
   type Transform,
   type TransformParam,
   type UnitHydrographTransform,
@@ -15,16 +17,13 @@ import { OrdinatesField } from './OrdinatesField';
 
 /** The core's message for a candidate transform, or null when the core accepts it. */
 function coreProblem(transform: Transform, key: string, value: number | undefined): string | null {
-  const next: Record<string, unknown> = { ...transform };
-  if (value === undefined) delete next[key];
-  else next[key] = value;
-  const r = attempt(() => validateTransform(next as unknown as Transform));
+  const r = attempt(() => validateTransform(withTransformValue(transform, key, value)));
   return r.ok ? null : r.error.message;
 }
 
 function ParamField({ transform, param }: { transform: Transform; param: TransformParam }) {
   const actions = useActions();
-  const value = (transform as unknown as Record<string, unknown>)[param.key];
+  const value = transformValue(transform, param.key);
   const label = param.label;
   const set = (v: number | undefined, edit?: { coalesceKey: string; session: true }) =>
     actions.edit(`Set ${label.toLowerCase()}`, (s) => withTransformParam(s, param.key, v), edit);
@@ -33,7 +32,7 @@ function ParamField({ transform, param }: { transform: Transform; param: Transfo
       id={`transform-${param.key}`}
       label={label}
       {...(param.unit === 'h' ? { unit: 'h' } : {})}
-      value={typeof value === 'number' ? value : null}
+      value={value ?? null}
       plausible={param.unit === 'h' ? 'responseTime' : undefined}
       check={(v) => coreProblem(transform, param.key, v)}
       onCommit={(v, edit) => set(v, edit)}

@@ -1,4 +1,6 @@
 import { useId, useState } from 'react';
+// Straight from the module, not the io index: the one reader of a typed date (core's calendar, wall-clock.ts).
+import { parseIsoDate } from '../../io/time-values';
 
 /** A YYYY-MM-DD field that stores only a well-formed date (or none when emptied); bad text stays with its reason. */
 export function DateField({
@@ -30,11 +32,16 @@ export function DateField({
           if (t === '') {
             setDraft(null);
             onChange(null);
-          } else if (/^\d{4}-\d{2}-\d{2}$/.test(t)) {
-            setDraft(null);
-            onChange(t);
-          } else {
+          } else if (!/^\d{4}-\d{2}-\d{2}$/.test(t)) {
             setDraft({ text: typed, message: `“${t}” is not a date; write it as YYYY-MM-DD, for example 2024-05-01.` });
+          } else {
+            const read = parseIsoDate(t);
+            if (read.ok) {
+              setDraft(null);
+              onChange(t);
+            } else {
+              setDraft({ text: typed, message: `“${t}” is not a date; ${read.reason}` });
+            }
           }
         }}
       />

@@ -1,5 +1,5 @@
 import { useMemo, useCallback, useEffect, useState, type FormEvent, type KeyboardEvent } from 'react';
-import { methodSpec } from '../../core';
+import { instantMs, methodSpec } from '../../core';
 import type { DeletedEntry, LibraryEntry, LibraryListing, LibraryResult, Problem } from '../../scenario';
 import { createScenarioLibrary } from '../../scenario/library';
 import { useActions, useWorkbenchStore } from '../../store';
@@ -14,8 +14,8 @@ const savedAtFormat = new Intl.DateTimeFormat(undefined, { dateStyle: 'medium', 
 const quoted = (name: string): string => `“${name}”`;
 
 function savedAtText(iso: string): string {
-  const t = Date.parse(iso);
-  return Number.isNaN(t) ? iso : savedAtFormat.format(t);
+  const t = instantMs(iso);
+  return t === null ? iso : savedAtFormat.format(t);
 }
 
 function summary(entry: LibraryEntry): string {

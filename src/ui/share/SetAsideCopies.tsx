@@ -1,4 +1,5 @@
 import { useState } from 'react';
+import { instantMs } from '../../core';
 import type { ScenarioLibrary } from '../../scenario';
 import { recoverScenarios, type SetAsideCopy, type SetAsideKind } from '../../store/set-aside';
 import type { StorageLike } from '../../store';
@@ -15,8 +16,8 @@ const stampFormat = new Intl.DateTimeFormat(undefined, { dateStyle: 'medium', ti
 
 /** "Saved scenario set aside 1 Mar 2026, 10:00" (the key when it carries no time). */
 function setAsideLabel(copy: SetAsideCopy): string {
-  const t = copy.setAsideAt === null ? Number.NaN : Date.parse(copy.setAsideAt);
-  return Number.isNaN(t)
+  const t = copy.setAsideAt === null ? null : instantMs(copy.setAsideAt);
+  return t === null
     ? `${WHAT[copy.kind]} set aside (${copy.key})`
     : `${WHAT[copy.kind]} set aside ${stampFormat.format(t)}`;
 }

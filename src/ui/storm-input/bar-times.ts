@@ -1,5 +1,6 @@
 // Straight from the module, not the io index, so the first screen does not pull in the whole text import.
-import { isoAt, parseClock } from '../../io/time-values';
+import { readIsoDateTime } from '../../core';
+import { dateMs, isoAt, parseClock } from '../../io/time-values';
 import { NO_CLOCK_TEXT, formatClockText, wallClockMs } from '../chart/clock';
 
 /**
@@ -88,20 +89,16 @@ export function readBarTime(clock: BarClock, text: string, nearH: number): TimeT
     const nearMs = clock.startMs + nearH * MS_PER_HOUR;
     dayMs = Math.floor(nearMs / MS_PER_DAY) * MS_PER_DAY;
   } else {
-    const d = new Date(0);
-    d.setUTCFullYear(date.year, date.month - 1, date.day);
-    dayMs = d.getTime();
+    dayMs = dateMs(date);
   }
   return { ok: true, hours: (dayMs + msOfDay - clock.startMs) / MS_PER_HOUR };
 }
 
 /** The start written `hours` later than `startIso`, in the same zone as it was written (or none). */
 export function shiftStartIso(startIso: string, hours: number): string | null {
-  const wallMs = wallClockMs(startIso);
-  if (wallMs === null) return null;
-  const read = parseClock(startIso.replace('T', ' '), 'day-month');
-  const zoneMinutes = read.ok ? read.value.zoneMinutes : null;
-  return isoAt({ wallMs, zoneMinutes }, hours);
+  const read = readIsoDateTime(startIso);
+  if (read === null) return null;
+  return isoAt(read, hours);
 }
 
 /**
@@ -122,9 +119,7 @@ export function readStartText(text: string): { ok: true; iso: string } | { ok: f
   if (!read.ok) return { ok: false, message: `“${t}”: ${read.reason.charAt(0).toUpperCase()}${read.reason.slice(1)}` };
   const { date, hasTime, msOfDay, zoneMinutes } = read.value;
   if (date === null || !hasTime) return { ok: false, message: `“${t}” needs both a date and a time of day.` };
-  const d = new Date(0);
-  d.setUTCFullYear(date.year, date.month - 1, date.day);
-  return { ok: true, iso: isoAt({ wallMs: d.getTime() + msOfDay, zoneMinutes }, 0) };
+  return { ok: true, iso: isoAt({ wallMs: dateMs(date) + msOfDay, zoneMinutes }, 0) };
 }
 
 /** The start as the start field shows it: "2024-05-01 09:50" (seconds and zone kept when set). */
