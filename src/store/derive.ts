@@ -20,6 +20,7 @@ import { alignRecord, type Alignment } from './alignment';
 import { methodProblem, stormProblem } from './checked';
 import type { HydrographDerived, TimeSeries } from './derive-hydrograph';
 import { memoLast } from './memo';
+import { lossRing } from './loss-ring';
 
 /** The observed runoff as a depth to match, or why it cannot be one. */
 export type Target = { readonly ok: true; readonly mm: number } | { readonly ok: false; readonly message: string };
@@ -196,11 +197,12 @@ export function createDerived(): Derived {
     return f?.ok ? f.method : s.method;
   };
 
+  const buffersFor = lossRing();
   const results = memoLast((storm: Scenario['storm'], method: LossMethod): Results => {
     // In computeLosses' order (the storm, then the method), each checked once per object.
     const problem = stormProblem(storm) ?? methodProblem(method);
     if (problem) return refused(problem, method);
-    return { ok: true, result: computeLossesUnchecked(storm, method), method };
+    return { ok: true, result: computeLossesUnchecked(storm, method, buffersFor(storm)), method };
   });
   const resultsOf = (s: Scenario): Results => results(s.storm, effectiveMethod(s));
 

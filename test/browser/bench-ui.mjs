@@ -337,7 +337,18 @@ async function workbenchImport(browser, baseUrl, file) {
   // The autosave writes 400 ms after the last change: wait for it, and see what it held the page for.
   await page.waitForTimeout(3000);
   const all = await longTasks(page);
+  let cdp = null;
+  if (process.env.BENCH_UI_PROFILE) {
+    cdp = await context.newCDPSession(page);
+    await cdp.send('Profiler.enable');
+    await cdp.send('Profiler.setSamplingInterval', { interval: 200 });
+    await cdp.send('Profiler.start');
+  }
   const drag = await dragAcross(page, 60);
+  if (cdp) {
+    const { profile } = await cdp.send('Profiler.stop');
+    await writeFile(process.env.BENCH_UI_PROFILE, JSON.stringify(profile));
+  }
   await context.close();
   return { dialogMs, useMs, duringRead, all, drag };
 }
@@ -429,118 +440,136 @@ const { browser, close } = await launchBrowser();
 try {
   console.log(`chromium ${browser.version()}, viewport 1400×900\n`);
 
-  const small = await openWith(browser, server.baseUrl, syntheticScenario(10_000, 1 / 12, 7));
-  const drag10k = await dragAcross(small.page, 300);
-  await small.context.close();
-
-  // The same storm with a runoff hydrograph shown (issue 13): a drag also routes the excess through a
-  // Nash cascade and redraws the computed hydrograph.
-  const withHydrograph = await openWith(browser, server.baseUrl, {
-    ...syntheticScenario(10_000, 1 / 12, 7),
-    name: 'Benchmark: 10,000 synthetic bars with a hydrograph (invented)',
-    hydrograph: { transform: { kind: 'nash', n: 3, kH: 1 }, transformMemory: {}, fitParameter: null, objective: 'nse' },
-  });
-  await withHydrograph.page.waitForSelector('[data-layer="computed-direct"]');
-  const dragHydro = await dragAcross(withHydrograph.page, 300);
-  await withHydrograph.context.close();
-
-  const big = await openWith(browser, server.baseUrl, syntheticScenario(100_000, 0.25, 11));
-  const pathCount = await big.page.evaluate(() => document.querySelectorAll('.chart__svg path').length);
-  const subpaths = await big.page.evaluate(() =>
-    [...document.querySelectorAll('.chart__svg path[data-layer]')].map(
-      (p) => (p.getAttribute('d') ?? '').split('M').length - 1,
-    ),
-  );
-  const redraw100k = await redrawTimes(big.page, 10);
-  const drag100k = await dragAcross(big.page, 100);
-  await big.context.close();
-
-  const files = await mkdtemp(join(tmpdir(), 'raincut-bench-'));
-  const timedFile = join(files, 'gauge-5min-1e6.csv');
-  await writeFile(timedFile, timedGaugeText(1_000_000, 5));
-  const plainFile = join(files, 'gauge-depths-1e6.txt');
-  await writeFile(plainFile, gaugeText(1_000_000, 5));
-  const imports = [];
-  for (let i = 0; i < 3; i++) imports.push(await workbenchImport(browser, server.baseUrl, timedFile));
-  const record = await longRecord(browser, server.baseUrl, timedFile, 10);
-  const recordPlain = await longRecord(browser, server.baseUrl, plainFile, 3);
-  await rm(files, { recursive: true, force: true });
-
-  const verdict = (x) => (x < TARGET_P95_MS ? 'met' : 'NOT met');
-  console.log('Drag the loss-rate line across a 10,000-bar storm, results and chart updated on the page:');
-  console.log(
-    `  from the pointer event's time stamp: ${drag10k.update.n} moves, p50 ${ms(drag10k.update.p50)}, p95 ${ms(drag10k.update.p95)}, max ${ms(drag10k.update.max)}` +
-      `   (target p95 < ${TARGET_P95_MS} ms: ${verdict(drag10k.update.p95)})`,
-  );
-  console.log(
-    `    of which chromium held the event before dispatching it (pointermove is aligned to frames): p50 ${ms(drag10k.queue.p50)}, p95 ${ms(drag10k.queue.p95)}`,
-  );
-  console.log(
-    `  from the event reaching the page (the page's own work): p50 ${ms(drag10k.work.p50)}, p95 ${ms(drag10k.work.p95)}, max ${ms(drag10k.work.max)}` +
-      `   (target p95 < ${TARGET_P95_MS} ms: ${verdict(drag10k.work.p95)})`,
-  );
-  console.log(
-    `  to the frame after: p50 ${ms(drag10k.frame.p50)}, p95 ${ms(drag10k.frame.p95)}` +
-      (drag10k.skipped ? `  (${drag10k.skipped} moves changed nothing shown)` : ''),
-  );
-  console.log('\nThe same drag with a runoff hydrograph shown (Nash cascade, n 3, k 1 h):');
-  console.log(
-    `  from the pointer event's time stamp: p50 ${ms(dragHydro.update.p50)}, p95 ${ms(dragHydro.update.p95)}; ` +
-      `the page's own work: p50 ${ms(dragHydro.work.p50)}, p95 ${ms(dragHydro.work.p95)}, max ${ms(dragHydro.work.max)}` +
-      `   (target p95 < ${TARGET_P95_MS} ms: ${verdict(dragHydro.work.p95)})`,
-  );
-  if (dragHydro.hydrograph) {
+  // BENCH_UI_ONLY=drag1e6 runs the 10⁶-bar drag alone (a file opened on the workbench, then the loss line dragged).
+  if (process.env.BENCH_UI_ONLY === 'drag1e6') {
+    const files = await mkdtemp(join(tmpdir(), 'raincut-bench-'));
+    const timedFile = join(files, 'gauge-5min-1e6.csv');
+    await writeFile(timedFile, timedGaugeText(1_000_000, 5));
+    const { drag } = await workbenchImport(browser, server.baseUrl, timedFile);
+    await rm(files, { recursive: true, force: true });
     console.log(
-      `  the computed hydrograph redrawn after it (a deferred render), from the pointer event's time stamp: ` +
-        `${dragHydro.hydrograph.n} redraws, p50 ${ms(dragHydro.hydrograph.p50)}, p95 ${ms(dragHydro.hydrograph.p95)}`,
+      `The loss line dragged over 10⁶ bars: page's own work p50 ${ms(drag.work.p50)}, p95 ${ms(drag.work.p95)}, max ${ms(drag.work.max)} (${drag.work.n} moves)` +
+        `   (target p95 < ${TARGET_P95_MS} ms: ${drag.work.p95 < TARGET_P95_MS ? 'met' : 'NOT met'}); from the event's time stamp p50 ${ms(drag.update.p50)}, p95 ${ms(drag.update.p95)}`,
+    );
+  } else {
+    const small = await openWith(browser, server.baseUrl, syntheticScenario(10_000, 1 / 12, 7));
+    const drag10k = await dragAcross(small.page, 300);
+    await small.context.close();
+
+    // The same storm with a runoff hydrograph shown (issue 13): a drag also routes the excess through a
+    // Nash cascade and redraws the computed hydrograph.
+    const withHydrograph = await openWith(browser, server.baseUrl, {
+      ...syntheticScenario(10_000, 1 / 12, 7),
+      name: 'Benchmark: 10,000 synthetic bars with a hydrograph (invented)',
+      hydrograph: {
+        transform: { kind: 'nash', n: 3, kH: 1 },
+        transformMemory: {},
+        fitParameter: null,
+        objective: 'nse',
+      },
+    });
+    await withHydrograph.page.waitForSelector('[data-layer="computed-direct"]');
+    const dragHydro = await dragAcross(withHydrograph.page, 300);
+    await withHydrograph.context.close();
+
+    const big = await openWith(browser, server.baseUrl, syntheticScenario(100_000, 0.25, 11));
+    const pathCount = await big.page.evaluate(() => document.querySelectorAll('.chart__svg path').length);
+    const subpaths = await big.page.evaluate(() =>
+      [...document.querySelectorAll('.chart__svg path[data-layer]')].map(
+        (p) => (p.getAttribute('d') ?? '').split('M').length - 1,
+      ),
+    );
+    const redraw100k = await redrawTimes(big.page, 10);
+    const drag100k = await dragAcross(big.page, 100);
+    await big.context.close();
+
+    const files = await mkdtemp(join(tmpdir(), 'raincut-bench-'));
+    const timedFile = join(files, 'gauge-5min-1e6.csv');
+    await writeFile(timedFile, timedGaugeText(1_000_000, 5));
+    const plainFile = join(files, 'gauge-depths-1e6.txt');
+    await writeFile(plainFile, gaugeText(1_000_000, 5));
+    const imports = [];
+    for (let i = 0; i < 3; i++) imports.push(await workbenchImport(browser, server.baseUrl, timedFile));
+    const record = await longRecord(browser, server.baseUrl, timedFile, 10);
+    const recordPlain = await longRecord(browser, server.baseUrl, plainFile, 3);
+    await rm(files, { recursive: true, force: true });
+
+    const verdict = (x) => (x < TARGET_P95_MS ? 'met' : 'NOT met');
+    console.log('Drag the loss-rate line across a 10,000-bar storm, results and chart updated on the page:');
+    console.log(
+      `  from the pointer event's time stamp: ${drag10k.update.n} moves, p50 ${ms(drag10k.update.p50)}, p95 ${ms(drag10k.update.p95)}, max ${ms(drag10k.update.max)}` +
+        `   (target p95 < ${TARGET_P95_MS} ms: ${verdict(drag10k.update.p95)})`,
+    );
+    console.log(
+      `    of which chromium held the event before dispatching it (pointermove is aligned to frames): p50 ${ms(drag10k.queue.p50)}, p95 ${ms(drag10k.queue.p95)}`,
+    );
+    console.log(
+      `  from the event reaching the page (the page's own work): p50 ${ms(drag10k.work.p50)}, p95 ${ms(drag10k.work.p95)}, max ${ms(drag10k.work.max)}` +
+        `   (target p95 < ${TARGET_P95_MS} ms: ${verdict(drag10k.work.p95)})`,
+    );
+    console.log(
+      `  to the frame after: p50 ${ms(drag10k.frame.p50)}, p95 ${ms(drag10k.frame.p95)}` +
+        (drag10k.skipped ? `  (${drag10k.skipped} moves changed nothing shown)` : ''),
+    );
+    console.log('\nThe same drag with a runoff hydrograph shown (Nash cascade, n 3, k 1 h):');
+    console.log(
+      `  from the pointer event's time stamp: p50 ${ms(dragHydro.update.p50)}, p95 ${ms(dragHydro.update.p95)}; ` +
+        `the page's own work: p50 ${ms(dragHydro.work.p50)}, p95 ${ms(dragHydro.work.p95)}, max ${ms(dragHydro.work.max)}` +
+        `   (target p95 < ${TARGET_P95_MS} ms: ${verdict(dragHydro.work.p95)})`,
+    );
+    if (dragHydro.hydrograph) {
+      console.log(
+        `  the computed hydrograph redrawn after it (a deferred render), from the pointer event's time stamp: ` +
+          `${dragHydro.hydrograph.n} redraws, p50 ${ms(dragHydro.hydrograph.p50)}, p95 ${ms(dragHydro.hydrograph.p95)}`,
+      );
+    }
+    console.log('\n100,000-bar record:');
+    console.log(`  open and first draw (navigation → chart on screen): ${big.loadMs} ms`);
+    console.log(
+      `  chart elements: ${pathCount} paths; bar layers hold ${subpaths.join(' and ')} subpaths (merged per pixel column)`,
+    );
+    console.log(`  full redraw (unit switch → next frame): p50 ${ms(redraw100k.p50)}, p95 ${ms(redraw100k.p95)}`);
+    console.log(
+      `  drag, from the event's time stamp: p50 ${ms(drag100k.update.p50)}, p95 ${ms(drag100k.update.p95)}; the page's own work: p50 ${ms(drag100k.work.p50)}, p95 ${ms(drag100k.work.p95)}; to the frame after: p95 ${ms(drag100k.frame.p95)}`,
+    );
+    const median = (xs) => summarise(xs).p50;
+    const longest = (tasks) => tasks.reduce((m, [, d]) => Math.max(m, d), 0);
+    const totals = imports.map((r) => r.dialogMs + r.useMs);
+    console.log(
+      '\nIssue 11: a 10⁶-line timed gauge file (21 MB) opened on the workbench, read in the worker, bars drawn (3 runs, medians):',
+    );
+    console.log(
+      `  file chosen → "Use these bars" ready: ${ms(median(imports.map((r) => r.dialogMs)))}; click → bars drawn, next frame: ${ms(median(imports.map((r) => r.useMs)))}`,
+    );
+    console.log(
+      `  file → bars on the workbench: ${ms(median(totals))} (runs: ${totals.map((t) => t.toFixed(0)).join(', ')} ms)   (target < 3000 ms: ${median(totals) < 3000 ? 'met' : 'NOT met'})`,
+    );
+    console.log(
+      `  longest main-thread task while the file was read (input waits at most this): ${ms(median(imports.map((r) => longest(r.duringRead))))}   (target < 100 ms: ${median(imports.map((r) => longest(r.duringRead))) < 100 ? 'met' : 'NOT met'})`,
+    );
+    console.log(`  long tasks of the first run [start, ms]: ${JSON.stringify(imports[0].all)}`);
+    console.log(
+      `  longest task overall, autosave included: ${ms(median(imports.map((r) => longest(r.all))))} (the autosave serialises the 10⁶-bar scenario on the page; see the storage work)`,
+    );
+    const d6 = imports[0].drag;
+    console.log(
+      `  then the loss line dragged over the 10⁶ bars: page's own work p50 ${ms(d6.work.p50)}, p95 ${ms(d6.work.p95)} (${d6.work.n} moves)   (target p95 < ${TARGET_P95_MS} ms: ${verdict(d6.work.p95)}); from the event's time stamp p95 ${ms(d6.update.p95)}`,
+    );
+    console.log('\nLong-record view, 10⁶ five-minute bars opened as a file (21 MB, times and depths):');
+    console.log(`  file chosen → import dialog ready to use (the import kit's reading): ${record.dialogMs} ms`);
+    console.log(
+      `  "Use this record" → overview on screen, next frame: ${ms(record.useMs)} (includes closing the import dialog); longest main-thread task from the file on: ${ms(longest(record.tasks))}`,
+    );
+    console.log(
+      `  the same for 10⁶ depths alone (2.4 MB): ready ${recordPlain.dialogMs} ms, use → overview ${ms(recordPlain.useMs)}, longest task ${ms(longest(recordPlain.tasks))}`,
+    );
+    console.log(
+      `  overview draw at a new width (level of detail: ${record.marks} column marks from 10⁶ bars), to the next frame: p50 ${ms(record.redraw.p50)}, p95 ${ms(record.redraw.p95)}   (target first draw < 300 ms: ${record.redraw.p95 < 300 ? 'met' : 'NOT met'})`,
+    );
+    console.log(
+      `  dry spell changed → events, bands and table updated, next frame: p50 ${ms(record.split.p50)}, p95 ${ms(record.split.p95)} (${record.events})`,
     );
   }
-  console.log('\n100,000-bar record:');
-  console.log(`  open and first draw (navigation → chart on screen): ${big.loadMs} ms`);
-  console.log(
-    `  chart elements: ${pathCount} paths; bar layers hold ${subpaths.join(' and ')} subpaths (merged per pixel column)`,
-  );
-  console.log(`  full redraw (unit switch → next frame): p50 ${ms(redraw100k.p50)}, p95 ${ms(redraw100k.p95)}`);
-  console.log(
-    `  drag, from the event's time stamp: p50 ${ms(drag100k.update.p50)}, p95 ${ms(drag100k.update.p95)}; the page's own work: p50 ${ms(drag100k.work.p50)}, p95 ${ms(drag100k.work.p95)}; to the frame after: p95 ${ms(drag100k.frame.p95)}`,
-  );
-  const median = (xs) => summarise(xs).p50;
-  const longest = (tasks) => tasks.reduce((m, [, d]) => Math.max(m, d), 0);
-  const totals = imports.map((r) => r.dialogMs + r.useMs);
-  console.log(
-    '\nIssue 11: a 10⁶-line timed gauge file (21 MB) opened on the workbench, read in the worker, bars drawn (3 runs, medians):',
-  );
-  console.log(
-    `  file chosen → "Use these bars" ready: ${ms(median(imports.map((r) => r.dialogMs)))}; click → bars drawn, next frame: ${ms(median(imports.map((r) => r.useMs)))}`,
-  );
-  console.log(
-    `  file → bars on the workbench: ${ms(median(totals))} (runs: ${totals.map((t) => t.toFixed(0)).join(', ')} ms)   (target < 3000 ms: ${median(totals) < 3000 ? 'met' : 'NOT met'})`,
-  );
-  console.log(
-    `  longest main-thread task while the file was read (input waits at most this): ${ms(median(imports.map((r) => longest(r.duringRead))))}   (target < 100 ms: ${median(imports.map((r) => longest(r.duringRead))) < 100 ? 'met' : 'NOT met'})`,
-  );
-  console.log(`  long tasks of the first run [start, ms]: ${JSON.stringify(imports[0].all)}`);
-  console.log(
-    `  longest task overall, autosave included: ${ms(median(imports.map((r) => longest(r.all))))} (the autosave serialises the 10⁶-bar scenario on the page; see the storage work)`,
-  );
-  const d6 = imports[0].drag;
-  console.log(
-    `  then the loss line dragged over the 10⁶ bars: page's own work p50 ${ms(d6.work.p50)}, p95 ${ms(d6.work.p95)} (${d6.work.n} moves)   (target p95 < ${TARGET_P95_MS} ms: ${verdict(d6.work.p95)}); from the event's time stamp p95 ${ms(d6.update.p95)}`,
-  );
-  console.log('\nLong-record view, 10⁶ five-minute bars opened as a file (21 MB, times and depths):');
-  console.log(`  file chosen → import dialog ready to use (the import kit's reading): ${record.dialogMs} ms`);
-  console.log(
-    `  "Use this record" → overview on screen, next frame: ${ms(record.useMs)} (includes closing the import dialog); longest main-thread task from the file on: ${ms(longest(record.tasks))}`,
-  );
-  console.log(
-    `  the same for 10⁶ depths alone (2.4 MB): ready ${recordPlain.dialogMs} ms, use → overview ${ms(recordPlain.useMs)}, longest task ${ms(longest(recordPlain.tasks))}`,
-  );
-  console.log(
-    `  overview draw at a new width (level of detail: ${record.marks} column marks from 10⁶ bars), to the next frame: p50 ${ms(record.redraw.p50)}, p95 ${ms(record.redraw.p95)}   (target first draw < 300 ms: ${record.redraw.p95 < 300 ? 'met' : 'NOT met'})`,
-  );
-  console.log(
-    `  dry spell changed → events, bands and table updated, next frame: p50 ${ms(record.split.p50)}, p95 ${ms(record.split.p95)} (${record.events})`,
-  );
 } finally {
   await close();
   await server.close();

@@ -1,5 +1,5 @@
 import { memo, useMemo } from 'react';
-import type { Scenario } from '../../scenario/types';
+import type { Storm } from '../../core';
 import { barsPath } from './bar-path';
 import { barTopsPx, type ChartFrame } from './frame';
 
@@ -8,7 +8,7 @@ import { barTopsPx, type ChartFrame } from './frame';
  * layer is drawn over it. Depends on the storm and the frame only: memoised
  * apart from the moving line, so a drag never rebuilds it.
  */
-export const RainLayer = memo(function RainLayer({ frame, storm }: { frame: ChartFrame; storm: Scenario['storm'] }) {
+export const RainLayer = memo(function RainLayer({ frame, storm }: { frame: ChartFrame; storm: Storm }) {
   const d = useMemo(
     () => barsPath(frame.edgesPx, barTopsPx(frame, storm.depthsMm, storm.durationsH), frame.plot.bottom),
     [frame, storm],

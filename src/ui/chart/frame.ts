@@ -133,13 +133,19 @@ export function chartFrame(
   };
 }
 
+let scratch = new Float64Array(0);
+
 /**
  * Pixel tops of bars whose height is a depth per bar spread over its
  * duration: the bar's intensity, drawn (a hyetograph's defining picture).
+ * In one shared buffer, valid until the next call (every caller hands it
+ * straight to barsPath): a fresh array of 10⁶ bars costs tens of ms in
+ * chromium to zero and page in, on every move of a drag.
  */
 export function barTopsPx(frame: ChartFrame, depthsMm: ArrayLike<number>, durationsH: ArrayLike<number>): Float64Array {
   const n = depthsMm.length;
-  const tops = new Float64Array(n);
+  if (scratch.length < n) scratch = new Float64Array(n);
+  const tops = scratch.subarray(0, n);
   const { y } = frame;
   const m = linearMap(y);
   if (m === null) {

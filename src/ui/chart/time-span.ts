@@ -1,6 +1,6 @@
 import { useMemo } from 'react';
-import { totalDurationH } from '../../core';
 import type { Scenario } from '../../scenario/types';
+import { totalDurationH, type Storm } from '../../core';
 import { useDerived, type Derived } from '../../store';
 
 /**
@@ -27,13 +27,21 @@ export function sharedTimeSpanH(
   return endH > startH ? { startH, endH } : undefined;
 }
 
+// The storm's length, once per storm object: not a pass over every bar on each move of a drag.
+const hours = new WeakMap<Storm, number>();
+export function stormHours(storm: Storm): number {
+  let h = hours.get(storm);
+  if (h === undefined) hours.set(storm, (h = totalDurationH(storm)));
+  return h;
+}
+
 function spanOf(d: Derived, s: Scenario): TimeSpanH | undefined {
   const flow = s.streamflow;
   const aligned = d.alignment(s);
   // A computed hydrograph (issue 13) runs on after the storm: the axis holds its recession too. Its end
   // depends on the storm and the unit hydrograph only, so a drag of the loss line leaves the axis put.
   const computedEndH = d.hydrographEndH(s);
-  const stormH = totalDurationH(s.storm);
+  const stormH = stormHours(s.storm);
   if (!flow || !aligned) {
     return computedEndH === null ? undefined : sharedTimeSpanH(stormH, { firstH: 0, lastH: computedEndH });
   }
