@@ -2,7 +2,6 @@ import { useEffect, useRef } from 'react';
 import { useWorkbenchStore } from '../../store';
 import { ProblemList, useBarMessage } from '../services/bar-message';
 import { useServices } from '../services/services';
-import { LongLinkOffer, PRACTICAL_LINK_CHARS } from '../events/LongLinkOffer';
 import { formatCount } from '../format';
 
 /** Mail and chat programs are known to cut or wrap links past about this length. */
@@ -60,10 +59,14 @@ export function CopyLink() {
 
   const copy = async (anyway = false): Promise<void> => {
     const scenario = store.getState().scenario;
-    // The link maker (and its compressor) loads on the first click, not with the first screen.
+    // The link maker (and its compressor) and the long-link offer load on the first click, not with the first screen.
     let makeShareLink: (typeof import('../../scenario/link-make'))['makeShareLink'];
+    let long: typeof import('../events/LongLinkOffer');
     try {
-      ({ makeShareLink } = await import('../../scenario/link-make'));
+      [{ makeShareLink }, long] = await Promise.all([
+        import('../../scenario/link-make'),
+        import('../events/LongLinkOffer'),
+      ]);
     } catch (error) {
       show({ tone: 'problem', title: `No link was made: ${reason(error)}.` });
       return;
@@ -79,12 +82,12 @@ export function CopyLink() {
     }
     const url = `${pageAddress()}#${made.fragment}`;
     // A link too long to send (an event set of long storms): offer the file instead, and say why.
-    if (url.length > PRACTICAL_LINK_CHARS && !anyway) {
+    if (url.length > long.PRACTICAL_LINK_CHARS && !anyway) {
       show({
         tone: 'problem',
         title: 'This scenario is too large for a practical link.',
         body: (
-          <LongLinkOffer
+          <long.LongLinkOffer
             chars={url.length}
             scenario={scenario}
             saveFile={saveFile}
