@@ -1,3 +1,4 @@
+import { readLargeMarker, type LargeMarker } from './large-marker';
 import type { LinkSession } from './link-session';
 import { STORAGE_KEY, setAsideSaved, type StorageLike } from './persistence';
 import type { WorkbenchStore } from './scenario-store';
@@ -16,13 +17,19 @@ import type { WorkbenchStore } from './scenario-store';
  * - `older`: the change that failed was not saved; the saved scenario is the
  *   one before it, and a reload opens that.
  * - `nothing`: nothing is saved in this browser (or it cannot save).
+ * - `large`: the saved scenario is in the large store (./large-store.ts) and
+ *   has not been read yet; `checkLarge` reads it and says `saved` or `older`.
+ * - `gone`: the large store cannot give the record the saved marker names;
+ *   a reload sets the marker aside (listed) and opens the demo.
  */
-export type SavedState = 'shared' | 'saved' | 'older' | 'nothing';
+export type SavedState = 'shared' | 'saved' | 'older' | 'nothing' | 'large' | 'gone';
 
 export interface CrashReport {
   readonly state: SavedState;
   /** One or two plain sentences on what was and was not saved, and what a reload will show. */
   readonly text: string;
+  /** The large-store marker the saved slot held, when the saved scenario is kept there. */
+  readonly large?: LargeMarker;
 }
 
 export type CrashSetAside =
@@ -33,8 +40,18 @@ export interface CrashRecovery {
   report(): CrashReport;
   /** Moves the saved scenario to a set-aside copy, so a reload starts from the demo. Never throws. */
   setAside(): CrashSetAside;
-  /** The saved scenario's text, for a download, or null. */
+  /** The saved scenario's text, for a download, or null (for a scenario in the large store, the marker: see `largeText`). */
   savedText(): string | null;
+  /**
+   * When the saved scenario is in the large store: reads its record and says
+   * truthfully whether it is the scenario on screen (`saved`), an older one
+   * (`older`), or cannot be read (`gone`); null when it is not there.
+   */
+  checkLarge(): Promise<CrashReport> | null;
+  /** The large store's saved scenario as a document's text, for a download; null when it is not there. */
+  largeText(): Promise<
+    { readonly ok: true; readonly text: string } | { readonly ok: false; readonly text: string }
+  > | null;
   /** Marks this tab to start without opening the saved scenario (when it could not be set aside); false when it cannot. */
   skipSavedNextTime(): boolean;
 }
@@ -50,6 +67,18 @@ export interface CrashRecoveryOptions {
 
 /** The tab-only key that asks the next start to leave the saved scenario unopened. */
 export const SKIP_SAVED_KEY = 'raincut.skip-saved';
+
+/** The large store's code, fetched only when the saved scenario is there. */
+const loadLarge = (): Promise<typeof import('./large-store')> => import('./large-store');
+
+const SAVED_TEXT =
+  'The scenario that stopped the screen is the one saved in this browser, so reloading would stop it again. ' +
+  'Set it aside to start from the demo: it is kept, as it was, under Saved scenarios, “Set-aside copies”.';
+const OLDER_TEXT =
+  'The change that stopped the screen was not saved: the scenario saved in this browser is the one from before it, ' +
+  'and reloading opens that.';
+const IN_LARGE =
+  ' It is kept in this browser’s larger database (IndexedDB), where the Download button below fetches it from.';
 
 function readSaved(storage: StorageLike | null): string | null {
   try {
@@ -80,20 +109,61 @@ export function createCrashRecovery(options: CrashRecoveryOptions): CrashRecover
           text: 'Nothing is saved in this browser, so reloading starts again from the demo scenario.',
         };
       }
-      if (saved === JSON.stringify(store.getState().scenario)) {
+      const large = readLargeMarker(saved);
+      if (large) {
         return {
-          state: 'saved',
-          text:
-            'The scenario that stopped the screen is the one saved in this browser, so reloading would stop it again. ' +
-            'Set it aside to start from the demo: it is kept, as it was, under Saved scenarios, “Set-aside copies”.',
+          state: 'large',
+          large,
+          text: 'The scenario saved in this browser is kept in its larger database (IndexedDB); checking whether it is the one that stopped the screen…',
         };
       }
-      return {
-        state: 'older',
-        text:
-          'The change that stopped the screen was not saved: the scenario saved in this browser is the one from before it, ' +
-          'and reloading opens that.',
-      };
+      if (saved === JSON.stringify(store.getState().scenario)) return { state: 'saved', text: SAVED_TEXT };
+      return { state: 'older', text: OLDER_TEXT };
+    },
+
+    checkLarge() {
+      const large = readLargeMarker(readSaved(storage));
+      if (!large) return null;
+      return loadLarge()
+        .then((m) => m.readLargeText(large))
+        .catch((error: unknown) => ({
+          ok: false as const,
+          message: `The code of this browser’s large store could not be loaded (${error instanceof Error ? error.message : String(error)}).`,
+        }))
+        .then((read): CrashReport => {
+          if (!read.ok) {
+            return {
+              state: 'gone',
+              large,
+              text:
+                `The saved scenario is meant to be in this browser’s larger database (IndexedDB), but it cannot be had: ${read.message} ` +
+                'Reloading keeps the pointer to it under Saved scenarios, “Set-aside copies”, and starts from the demo scenario.',
+            };
+          }
+          return read.text === JSON.stringify(store.getState().scenario)
+            ? { state: 'saved', large, text: SAVED_TEXT + IN_LARGE }
+            : { state: 'older', large, text: OLDER_TEXT + IN_LARGE };
+        });
+    },
+
+    largeText() {
+      const large = readLargeMarker(readSaved(storage));
+      if (!large) return null;
+      return loadLarge()
+        .then((m) => m.readLargeText(large))
+        .then(
+          (read) =>
+            read.ok
+              ? read
+              : {
+                  ok: false as const,
+                  text: `The saved scenario could not be fetched from the larger database: ${read.message}`,
+                },
+          (error: unknown) => ({
+            ok: false as const,
+            text: `The code of this browser’s large store could not be loaded (${error instanceof Error ? error.message : String(error)}).`,
+          }),
+        );
     },
 
     setAside() {

@@ -74,8 +74,10 @@ export function unpack(value: unknown): unknown {
 export type LargeRead =
   { readonly ok: true; readonly scenario: Scenario } | { readonly ok: false; readonly message: string };
 
-/** Reads the record a marker names, through the schema. Never throws. */
-export async function readLarge(marker: LargeMarker): Promise<LargeRead> {
+/** The record a marker names, as stored; or why it cannot be had. Never throws. */
+async function readRecord(
+  marker: LargeMarker,
+): Promise<{ readonly ok: true; readonly raw: unknown } | { readonly ok: false; readonly message: string }> {
   let raw: unknown;
   try {
     raw = await get(marker.id, open());
@@ -88,12 +90,36 @@ export async function readLarge(marker: LargeMarker): Promise<LargeRead> {
       message: `This browser’s large store holds no record "${marker.id}" (it may have been cleared).`,
     };
   }
-  const parsed = parseScenario(unpack(raw));
+  return { ok: true, raw };
+}
+
+/** Reads the record a marker names, through the schema. Never throws. */
+export async function readLarge(marker: LargeMarker): Promise<LargeRead> {
+  const record = await readRecord(marker);
+  if (!record.ok) return record;
+  const parsed = parseScenario(unpack(record.raw));
   if (parsed.ok) return { ok: true, scenario: parsed.scenario };
   return {
     ok: false,
     message: `The record "${marker.id}" in this browser’s large store is damaged: ${parsed.problems.map((p) => p.message).join(' ')}`,
   };
+}
+
+export type LargeText = { readonly ok: true; readonly text: string } | { readonly ok: false; readonly message: string };
+
+/**
+ * The record a marker names as a scenario document's text, exactly as it was
+ * kept (not read through the schema: a damaged or newer record is given back
+ * as it is, for a download). Never throws.
+ */
+export async function readLargeText(marker: LargeMarker): Promise<LargeText> {
+  const record = await readRecord(marker);
+  if (!record.ok) return record;
+  try {
+    return { ok: true, text: JSON.stringify(unpack(record.raw)) };
+  } catch (error) {
+    return { ok: false, message: `The record "${marker.id}" could not be written out (${describeError(error)}).` };
+  }
 }
 
 export type LargeSaved =
