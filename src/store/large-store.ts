@@ -179,6 +179,16 @@ export async function saveLarge(scenario: Scenario, slot: StoredSlot<Scenario>, 
   return { kind: 'saved', marker };
 }
 
+/** The record under `id` exactly as kept (undefined when there is none), so a delete can be undone. May throw. */
+export async function keptRecord(id: string): Promise<unknown> {
+  return get(id, open());
+}
+
+/** Puts back a record taken by `keptRecord` (before its marker is put back: a marker always names a whole record). May throw. */
+export async function putRecord(id: string, raw: unknown): Promise<void> {
+  await set(id, raw, open());
+}
+
 /** Deletes a record no marker names any more. Never throws. */
 export async function dropLarge(id: string): Promise<void> {
   await del(id, open()).catch(() => undefined);
