@@ -205,6 +205,8 @@ export interface SaveTurn {
   readonly scenario: Scenario;
   /** The page is closing: no wait for a quiet moment. */
   readonly urgent: boolean;
+  /** Settles when the page starts to close later: a save already waiting for a quiet moment (which a hidden page may never have) then goes at once. */
+  readonly hurried: Promise<void>;
   /** False once a newer change is queued, or saving stopped: this one is then skipped. */
   readonly current: () => boolean;
   readonly saved: () => void;
@@ -220,7 +222,7 @@ export interface SaveTurn {
  */
 export async function saveInTurn(turn: SaveTurn): Promise<void> {
   if (!turn.current()) return;
-  if (!turn.urgent) await idle();
+  if (!turn.urgent) await Promise.race([idle(), turn.hurried]);
   if (!turn.current()) return;
   const outcome = await saveLarge(turn.scenario, turn.slot, new Date());
   if (!turn.current() && outcome.kind !== 'saved') return;
