@@ -1,3 +1,4 @@
+import { OLDER_TEXT, SAVED_TEXT } from './crash-text';
 import { readLargeMarker, type LargeMarker } from './large-marker';
 import type { LinkSession } from './link-session';
 import { STORAGE_KEY, setAsideSaved, type StorageLike } from './persistence';
@@ -68,17 +69,9 @@ export interface CrashRecoveryOptions {
 /** The tab-only key that asks the next start to leave the saved scenario unopened. */
 export const SKIP_SAVED_KEY = 'raincut.skip-saved';
 
-/** The large store's code, fetched only when the saved scenario is there. */
-const loadLarge = (): Promise<typeof import('./large-store')> => import('./large-store');
-
-const SAVED_TEXT =
-  'The scenario that stopped the screen is the one saved in this browser, so reloading would stop it again. ' +
-  'Set it aside to start from the demo: it is kept, as it was, under Saved scenarios, “Set-aside copies”.';
-const OLDER_TEXT =
-  'The change that stopped the screen was not saved: the scenario saved in this browser is the one from before it, ' +
-  'and reloading opens that.';
-const IN_LARGE =
-  ' It is kept in this browser’s larger database (IndexedDB), where the Download button below fetches it from.';
+/** The large store's side of this screen (./crash-large.ts), fetched only when the saved scenario is there. */
+const loadCrashLarge = (): Promise<typeof import('./crash-large')> => import('./crash-large');
+const notLoaded = (error: unknown): string => `The large store’s code did not load (${String(error)}).`;
 
 function readSaved(storage: StorageLike | null): string | null {
   try {
@@ -114,7 +107,7 @@ export function createCrashRecovery(options: CrashRecoveryOptions): CrashRecover
         return {
           state: 'large',
           large,
-          text: 'The scenario saved in this browser is kept in its larger database (IndexedDB); checking whether it is the one that stopped the screen…',
+          text: 'Reading the saved scenario from this browser’s larger database (IndexedDB)…',
         };
       }
       if (saved === JSON.stringify(store.getState().scenario)) return { state: 'saved', text: SAVED_TEXT };
@@ -124,46 +117,19 @@ export function createCrashRecovery(options: CrashRecoveryOptions): CrashRecover
     checkLarge() {
       const large = readLargeMarker(readSaved(storage));
       if (!large) return null;
-      return loadLarge()
-        .then((m) => m.readLargeText(large))
-        .catch((error: unknown) => ({
-          ok: false as const,
-          message: `The code of this browser’s large store could not be loaded (${error instanceof Error ? error.message : String(error)}).`,
-        }))
-        .then((read): CrashReport => {
-          if (!read.ok) {
-            return {
-              state: 'gone',
-              large,
-              text:
-                `The saved scenario is meant to be in this browser’s larger database (IndexedDB), but it cannot be had: ${read.message} ` +
-                'Reloading keeps the pointer to it under Saved scenarios, “Set-aside copies”, and starts from the demo scenario.',
-            };
-          }
-          return read.text === JSON.stringify(store.getState().scenario)
-            ? { state: 'saved', large, text: SAVED_TEXT + IN_LARGE }
-            : { state: 'older', large, text: OLDER_TEXT + IN_LARGE };
-        });
+      return loadCrashLarge().then(
+        (m) => m.checkLarge(large, store.getState().scenario),
+        (error: unknown): CrashReport => ({ state: 'gone', large, text: notLoaded(error) }),
+      );
     },
 
     largeText() {
       const large = readLargeMarker(readSaved(storage));
       if (!large) return null;
-      return loadLarge()
-        .then((m) => m.readLargeText(large))
-        .then(
-          (read) =>
-            read.ok
-              ? read
-              : {
-                  ok: false as const,
-                  text: `The saved scenario could not be fetched from the larger database: ${read.message}`,
-                },
-          (error: unknown) => ({
-            ok: false as const,
-            text: `The code of this browser’s large store could not be loaded (${error instanceof Error ? error.message : String(error)}).`,
-          }),
-        );
+      return loadCrashLarge().then(
+        (m) => m.largeText(large),
+        (error: unknown) => ({ ok: false as const, text: notLoaded(error) }),
+      );
     },
 
     setAside() {
