@@ -1,3 +1,5 @@
+import { OLDER_TEXT, SAVED_TEXT } from './crash-text';
+import { readLargeMarker, type LargeMarker } from './large-marker';
 import type { LinkSession } from './link-session';
 import { STORAGE_KEY, setAsideSaved, type StorageLike } from './persistence';
 import type { WorkbenchStore } from './scenario-store';
@@ -16,13 +18,19 @@ import type { WorkbenchStore } from './scenario-store';
  * - `older`: the change that failed was not saved; the saved scenario is the
  *   one before it, and a reload opens that.
  * - `nothing`: nothing is saved in this browser (or it cannot save).
+ * - `large`: the saved scenario is in the large store (./large-store.ts) and
+ *   has not been read yet; `checkLarge` reads it and says `saved` or `older`.
+ * - `gone`: the large store cannot give the record the saved marker names;
+ *   a reload sets the marker aside (listed) and opens the demo.
  */
-export type SavedState = 'shared' | 'saved' | 'older' | 'nothing';
+export type SavedState = 'shared' | 'saved' | 'older' | 'nothing' | 'large' | 'gone';
 
 export interface CrashReport {
   readonly state: SavedState;
   /** One or two plain sentences on what was and was not saved, and what a reload will show. */
   readonly text: string;
+  /** The large-store marker the saved slot held, when the saved scenario is kept there. */
+  readonly large?: LargeMarker;
 }
 
 export type CrashSetAside =
@@ -33,8 +41,18 @@ export interface CrashRecovery {
   report(): CrashReport;
   /** Moves the saved scenario to a set-aside copy, so a reload starts from the demo. Never throws. */
   setAside(): CrashSetAside;
-  /** The saved scenario's text, for a download, or null. */
+  /** The saved scenario's text, for a download, or null (for a scenario in the large store, the marker: see `largeText`). */
   savedText(): string | null;
+  /**
+   * When the saved scenario is in the large store: reads its record and says
+   * truthfully whether it is the scenario on screen (`saved`), an older one
+   * (`older`), or cannot be read (`gone`); null when it is not there.
+   */
+  checkLarge(): Promise<CrashReport> | null;
+  /** The large store's saved scenario as a document's text, for a download; null when it is not there. */
+  largeText(): Promise<
+    { readonly ok: true; readonly text: string } | { readonly ok: false; readonly text: string }
+  > | null;
   /** Marks this tab to start without opening the saved scenario (when it could not be set aside); false when it cannot. */
   skipSavedNextTime(): boolean;
 }
@@ -50,6 +68,10 @@ export interface CrashRecoveryOptions {
 
 /** The tab-only key that asks the next start to leave the saved scenario unopened. */
 export const SKIP_SAVED_KEY = 'raincut.skip-saved';
+
+/** The large store's side of this screen (./crash-large.ts), fetched only when the saved scenario is there. */
+const loadCrashLarge = (): Promise<typeof import('./crash-large')> => import('./crash-large');
+const notLoaded = (error: unknown): string => `The large store’s code did not load (${String(error)}).`;
 
 function readSaved(storage: StorageLike | null): string | null {
   try {
@@ -80,20 +102,34 @@ export function createCrashRecovery(options: CrashRecoveryOptions): CrashRecover
           text: 'Nothing is saved in this browser, so reloading starts again from the demo scenario.',
         };
       }
-      if (saved === JSON.stringify(store.getState().scenario)) {
+      const large = readLargeMarker(saved);
+      if (large) {
         return {
-          state: 'saved',
-          text:
-            'The scenario that stopped the screen is the one saved in this browser, so reloading would stop it again. ' +
-            'Set it aside to start from the demo: it is kept, as it was, under Saved scenarios, “Set-aside copies”.',
+          state: 'large',
+          large,
+          text: 'Reading the saved scenario from this browser’s larger database (IndexedDB)…',
         };
       }
-      return {
-        state: 'older',
-        text:
-          'The change that stopped the screen was not saved: the scenario saved in this browser is the one from before it, ' +
-          'and reloading opens that.',
-      };
+      if (saved === JSON.stringify(store.getState().scenario)) return { state: 'saved', text: SAVED_TEXT };
+      return { state: 'older', text: OLDER_TEXT };
+    },
+
+    checkLarge() {
+      const large = readLargeMarker(readSaved(storage));
+      if (!large) return null;
+      return loadCrashLarge().then(
+        (m) => m.checkLarge(large, store.getState().scenario),
+        (error: unknown): CrashReport => ({ state: 'gone', large, text: notLoaded(error) }),
+      );
+    },
+
+    largeText() {
+      const large = readLargeMarker(readSaved(storage));
+      if (!large) return null;
+      return loadCrashLarge().then(
+        (m) => m.largeText(large),
+        (error: unknown) => ({ ok: false as const, text: notLoaded(error) }),
+      );
     },
 
     setAside() {

@@ -74,8 +74,10 @@ export function unpack(value: unknown): unknown {
 export type LargeRead =
   { readonly ok: true; readonly scenario: Scenario } | { readonly ok: false; readonly message: string };
 
-/** Reads the record a marker names, through the schema. Never throws. */
-export async function readLarge(marker: LargeMarker): Promise<LargeRead> {
+/** The record a marker names, as stored; or why it cannot be had. Never throws. */
+async function readRecord(
+  marker: LargeMarker,
+): Promise<{ readonly ok: true; readonly raw: unknown } | { readonly ok: false; readonly message: string }> {
   let raw: unknown;
   try {
     raw = await get(marker.id, open());
@@ -88,12 +90,36 @@ export async function readLarge(marker: LargeMarker): Promise<LargeRead> {
       message: `This browser’s large store holds no record "${marker.id}" (it may have been cleared).`,
     };
   }
-  const parsed = parseScenario(unpack(raw));
+  return { ok: true, raw };
+}
+
+/** Reads the record a marker names, through the schema. Never throws. */
+export async function readLarge(marker: LargeMarker): Promise<LargeRead> {
+  const record = await readRecord(marker);
+  if (!record.ok) return record;
+  const parsed = parseScenario(unpack(record.raw));
   if (parsed.ok) return { ok: true, scenario: parsed.scenario };
   return {
     ok: false,
     message: `The record "${marker.id}" in this browser’s large store is damaged: ${parsed.problems.map((p) => p.message).join(' ')}`,
   };
+}
+
+export type LargeText = { readonly ok: true; readonly text: string } | { readonly ok: false; readonly message: string };
+
+/**
+ * The record a marker names as a scenario document's text, exactly as it was
+ * kept (not read through the schema: a damaged or newer record is given back
+ * as it is, for a download). Never throws.
+ */
+export async function readLargeText(marker: LargeMarker): Promise<LargeText> {
+  const record = await readRecord(marker);
+  if (!record.ok) return record;
+  try {
+    return { ok: true, text: JSON.stringify(unpack(record.raw)) };
+  } catch (error) {
+    return { ok: false, message: `The record "${marker.id}" could not be written out (${describeError(error)}).` };
+  }
 }
 
 export type LargeSaved =
@@ -153,6 +179,16 @@ export async function saveLarge(scenario: Scenario, slot: StoredSlot<Scenario>, 
   return { kind: 'saved', marker };
 }
 
+/** The record under `id` exactly as kept (undefined when there is none), so a delete can be undone. May throw. */
+export async function keptRecord(id: string): Promise<unknown> {
+  return get(id, open());
+}
+
+/** Puts back a record taken by `keptRecord` (before its marker is put back: a marker always names a whole record). May throw. */
+export async function putRecord(id: string, raw: unknown): Promise<void> {
+  await set(id, raw, open());
+}
+
 /** Deletes a record no marker names any more. Never throws. */
 export async function dropLarge(id: string): Promise<void> {
   await del(id, open()).catch(() => undefined);
@@ -169,6 +205,8 @@ export interface SaveTurn {
   readonly scenario: Scenario;
   /** The page is closing: no wait for a quiet moment. */
   readonly urgent: boolean;
+  /** Settles when the page starts to close later: a save already waiting for a quiet moment (which a hidden page may never have) then goes at once. */
+  readonly hurried: Promise<void>;
   /** False once a newer change is queued, or saving stopped: this one is then skipped. */
   readonly current: () => boolean;
   readonly saved: () => void;
@@ -184,7 +222,7 @@ export interface SaveTurn {
  */
 export async function saveInTurn(turn: SaveTurn): Promise<void> {
   if (!turn.current()) return;
-  if (!turn.urgent) await idle();
+  if (!turn.urgent) await Promise.race([idle(), turn.hurried]);
   if (!turn.current()) return;
   const outcome = await saveLarge(turn.scenario, turn.slot, new Date());
   if (!turn.current() && outcome.kind !== 'saved') return;

@@ -213,6 +213,10 @@ export function persistStore(
   let largeQueue: Promise<void> = Promise.resolve();
   let largeLatest: Scenario | null = null;
   let stopped = false;
+  /** Settled by flush (the page is closing), so large saves waiting for a quiet moment go at once; then a fresh one. */
+  let hurry: () => void = () => undefined;
+  const nextHurried = (): Promise<void> => new Promise<void>((resolve) => (hurry = resolve));
+  let hurried = nextHurried();
 
   /** What the other-tab choices (./other-tab-choice.ts, loaded when one is made) need of this tab's saving. */
   const choice: OtherTabChoiceHost = {
@@ -289,6 +293,7 @@ export function persistStore(
   function saveLarge(scenario: Scenario, urgent: boolean): void {
     largeLatest = scenario;
     const current = (): boolean => !stopped && scenario === largeLatest;
+    const closing = hurried;
     largeQueue = largeQueue
       .then(loadLarge)
       .then((large) =>
@@ -297,6 +302,7 @@ export function persistStore(
           slot,
           scenario,
           urgent,
+          hurried: closing,
           current,
           saved: () => (lastSaved = scenario),
           changed: () => {
@@ -323,6 +329,8 @@ export function persistStore(
   return {
     flush: () => {
       if (timer !== null) clearTimeout(timer);
+      hurry();
+      hurried = nextHurried();
       write(true);
     },
     stop: () => {

@@ -1,6 +1,7 @@
 import { readIsoDateTime } from '../core';
 import { parseScenario, type Problem } from '../scenario';
 import type { Scenario } from '../scenario/types';
+import { readLargeMarker, type LargeMarker } from './large-marker';
 import type { StorageLike } from './persistence';
 
 /**
@@ -22,6 +23,8 @@ export interface SetAsideCopy {
   readonly setAsideAt: string | null;
   /** Length of the stored text, characters. */
   readonly chars: number;
+  /** When the copy is a large-store marker: the record it names (the scenario is there, not in the text). */
+  readonly large?: LargeMarker;
 }
 
 const MARK = '.damaged.';
@@ -68,11 +71,13 @@ export function listSetAside(storage: StorageLike): {
     }
     if (text === null) continue;
     const stamp = STAMP.exec(key.slice(at + MARK.length));
+    const large = readLargeMarker(text);
     copies.push({
       key,
       kind: KINDS[key.slice(0, at)] ?? 'other',
       setAsideAt: stamp && readIsoDateTime(stamp[1] as string) !== null ? (stamp[1] as string) : null,
       chars: text.length,
+      ...(large ? { large } : {}),
     });
   }
   copies.sort((a, b) => (a.setAsideAt ?? '').localeCompare(b.setAsideAt ?? '') || a.key.localeCompare(b.key));

@@ -39,7 +39,12 @@ export class ErrorBoundary extends Component<ErrorBoundaryProps, State> {
 
   override componentDidCatch(error: unknown, info: ErrorInfo): void {
     console.error('Raincut could not draw the workbench:', error, info.componentStack);
-    if (this.props.recovery && this.state.report === null) this.setState({ report: this.props.recovery.report() });
+    const recovery = this.props.recovery;
+    if (!recovery || this.state.report !== null) return;
+    const report = recovery.report();
+    this.setState({ report });
+    // A saved scenario in the large store is read before the screen says whether it is the one that failed.
+    if (report.state === 'large') void recovery.checkLarge()?.then((checked) => this.setState({ report: checked }));
   }
 
   private readonly setAside = (): void => {
@@ -51,8 +56,16 @@ export class ErrorBoundary extends Component<ErrorBoundaryProps, State> {
   };
 
   private readonly download = (): void => {
-    const text = this.props.recovery?.savedText();
-    if (text != null) this.props.download?.(text);
+    const { recovery, download } = this.props;
+    if (!recovery || !download) return;
+    // The slot holds only a marker for a scenario in the large store: the scenario itself is fetched from there.
+    const large = this.state.report?.large ? recovery.largeText() : null;
+    if (large) {
+      void large.then((read) => (read.ok ? download(read.text) : this.setState({ setAside: read })));
+      return;
+    }
+    const text = recovery.savedText();
+    if (text != null) download(text);
   };
 
   private readonly startWithout = (): void => {

@@ -3,6 +3,7 @@ import { instantMs } from '../../core';
 import type { ScenarioLibrary } from '../../scenario';
 import { recoverScenarios, type SetAsideCopy, type SetAsideKind } from '../../store/set-aside';
 import type { StorageLike } from '../../store';
+import { readLargeMarker, type LargeMarker } from '../../store/large-marker';
 import { ListProblems } from './ListProblems';
 
 const WHAT: Readonly<Record<SetAsideKind, string>> = {
@@ -35,6 +36,13 @@ function fileNameOf(copy: SetAsideCopy): string {
   return `raincut-set-aside-${copy.kind}-${stamp}.json`;
 }
 
+/** The large store's code (idb-keyval), fetched when a set-aside marker is acted on. */
+const loadLarge = (): Promise<typeof import('../../store/large-store')> => import('../../store/large-store');
+
+/** Where a set-aside marker's scenario is: its record in the larger database, not the marker's own text. */
+const largeWhere = (marker: LargeMarker): string =>
+  `kept in this browser’s larger database (IndexedDB) as record “${marker.id}”`;
+
 type Verb = 'Restore' | 'Download' | 'Delete';
 const ACTIONS: readonly { readonly verb: Verb; readonly danger: boolean }[] = [
   { verb: 'Restore', danger: false },
@@ -44,7 +52,13 @@ const ACTIONS: readonly { readonly verb: Verb; readonly danger: boolean }[] = [
 
 export type SetAsideStatus =
   | { readonly kind: 'done'; readonly text: string }
-  | { readonly kind: 'deleted'; readonly copy: SetAsideCopy; readonly kept: string }
+  | {
+      readonly kind: 'deleted';
+      readonly copy: SetAsideCopy;
+      readonly kept: string;
+      /** For a set-aside marker: the record it named, deleted with it and put back by Undo. */
+      readonly record?: { readonly id: string; readonly raw: unknown };
+    }
   | { readonly kind: 'problem'; readonly text: string; readonly details: readonly string[] };
 
 export interface SetAsideCopiesProps {
@@ -77,12 +91,40 @@ export function SetAsideCopies({ copies, storage, library, saveFile, onChanged }
     }
   };
 
+  const unreadable = (copy: SetAsideCopy): void =>
+    setStatus({ kind: 'problem', text: `${setAsideLabel(copy)} could not be read.`, details: [] });
+
+  /** A set-aside marker's record, as a document's text; a plain problem when the record is gone or unreadable. */
+  const largeTextOf = async (copy: SetAsideCopy, marker: LargeMarker): Promise<string | null> => {
+    const read = await loadLarge()
+      .then((large) => large.readLargeText(marker))
+      .catch((error: unknown) => ({
+        ok: false as const,
+        message: `The code of this browser’s large store could not be loaded (${why(error)}).`,
+      }));
+    if (read.ok) return read.text;
+    setStatus({
+      kind: 'problem',
+      text: `${setAsideLabel(copy)} is only a pointer to a record in this browser’s larger database, and that record cannot be had: ${read.message} Delete the pointer if the record is gone for good.`,
+      details: [],
+    });
+    return null;
+  };
+
   const restore = (copy: SetAsideCopy): void => {
     const text = textOf(copy);
-    if (text === null) {
-      setStatus({ kind: 'problem', text: `${setAsideLabel(copy)} could not be read.`, details: [] });
+    if (text === null) return unreadable(copy);
+    const marker = readLargeMarker(text);
+    if (marker) {
+      void largeTextOf(copy, marker).then((record) => {
+        if (record !== null) restoreText(copy, record);
+      });
       return;
     }
+    restoreText(copy, text);
+  };
+
+  const restoreText = (copy: SetAsideCopy, text: string): void => {
     const { scenarios, problems } = recoverScenarios(text);
     const saved: string[] = [];
     const failed: string[] = problems.map((p) => p.message);
@@ -108,28 +150,88 @@ export function SetAsideCopies({ copies, storage, library, saveFile, onChanged }
 
   const download = (copy: SetAsideCopy): void => {
     const text = textOf(copy);
-    if (text === null) {
-      setStatus({ kind: 'problem', text: `${setAsideLabel(copy)} could not be read.`, details: [] });
+    if (text === null) return unreadable(copy);
+    const marker = readLargeMarker(text);
+    if (marker) {
+      // The scenario the marker names, from the larger database: the marker alone holds none of the user's work.
+      void largeTextOf(copy, marker).then((record) => {
+        if (record !== null) downloadText(copy, record, ` from this browser’s larger database (record “${marker.id}”)`);
+      });
       return;
     }
+    downloadText(copy, text, '');
+  };
+
+  const downloadText = (copy: SetAsideCopy, text: string, from: string): void => {
     const name = fileNameOf(copy);
     saveFile(new Blob([text], { type: 'application/json' }), name);
-    setStatus({ kind: 'done', text: `Downloaded ${name}, exactly as it was kept.` });
+    setStatus({ kind: 'done', text: `Downloaded ${name}, exactly as it was kept${from}.` });
+  };
+
+  const removeKey = (copy: SetAsideCopy): boolean => {
+    try {
+      storage.removeItem(copy.key);
+      return true;
+    } catch (error) {
+      setStatus({ kind: 'problem', text: `${setAsideLabel(copy)} could not be deleted (${why(error)}).`, details: [] });
+      return false;
+    }
   };
 
   const remove = (copy: SetAsideCopy): void => {
     const text = textOf(copy);
-    try {
-      storage.removeItem(copy.key);
-    } catch (error) {
-      setStatus({ kind: 'problem', text: `${setAsideLabel(copy)} could not be deleted (${why(error)}).`, details: [] });
+    const marker = readLargeMarker(text);
+    if (text !== null && marker) {
+      void removeLarge(copy, text, marker);
       return;
     }
+    if (!removeKey(copy)) return;
     onChanged();
     setStatus(text === null ? null : { kind: 'deleted', copy, kept: text });
   };
 
-  const undoDelete = (copy: SetAsideCopy, text: string): void => {
+  /** A set-aside marker and the record it names go together: the record is kept in memory for Undo while the panel is open. */
+  const removeLarge = async (copy: SetAsideCopy, text: string, marker: LargeMarker): Promise<void> => {
+    let raw: unknown;
+    let large: Awaited<ReturnType<typeof loadLarge>>;
+    try {
+      large = await loadLarge();
+      raw = await large.keptRecord(marker.id);
+    } catch (error) {
+      setStatus({
+        kind: 'problem',
+        text: `${setAsideLabel(copy)} was not deleted: the record it names in this browser’s larger database could not be read (${why(error)}).`,
+        details: [],
+      });
+      return;
+    }
+    // The pointer goes first, so no copy is ever listed that names a deleted record.
+    if (!removeKey(copy)) return;
+    await large.dropLarge(marker.id);
+    onChanged();
+    setStatus({ kind: 'deleted', copy, kept: text, ...(raw === undefined ? {} : { record: { id: marker.id, raw } }) });
+  };
+
+  const undoDelete = (
+    copy: SetAsideCopy,
+    text: string,
+    record?: { readonly id: string; readonly raw: unknown },
+  ): void => {
+    if (record) {
+      // The record first, then the marker naming it.
+      void loadLarge()
+        .then((large) => large.putRecord(record.id, record.raw))
+        .then(
+          () => undoDelete(copy, text),
+          (error: unknown) =>
+            setStatus({
+              kind: 'problem',
+              text: `${setAsideLabel(copy)} could not be put back in this browser’s larger database (${why(error)}).`,
+              details: [],
+            }),
+        );
+      return;
+    }
     try {
       storage.setItem(copy.key, text);
     } catch (error) {
@@ -157,7 +259,11 @@ export function SetAsideCopies({ copies, storage, library, saveFile, onChanged }
         {status?.kind === 'deleted' ? (
           <p>
             Deleted {lowerFirst(setAsideLabel(status.copy))} —{' '}
-            <button type="button" className="share-button--small" onClick={() => undoDelete(status.copy, status.kept)}>
+            <button
+              type="button"
+              className="share-button--small"
+              onClick={() => undoDelete(status.copy, status.kept, status.record)}
+            >
               Undo
             </button>
           </p>
@@ -173,7 +279,7 @@ export function SetAsideCopies({ copies, storage, library, saveFile, onChanged }
                 <div className="library__name">
                   <strong>{label}</strong>
                   <span className="library__meta">
-                    {sizeText(copy.chars)} · browser storage key “{copy.key}”
+                    {copy.large ? largeWhere(copy.large) : sizeText(copy.chars)} · browser storage key “{copy.key}”
                   </span>
                 </div>
                 <div className="library__buttons" role="group" aria-label={`Actions for ${label}`}>
