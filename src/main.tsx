@@ -6,7 +6,7 @@ import { createRoot } from 'react-dom/client';
 import { DEMO_SCENARIO } from './scenario/demo';
 import { isScenarioLink, loadLinkReader } from './scenario/link';
 import { STORAGE_KEY, type StorageLike } from './store';
-import { SKIP_SAVED_KEY, createCrashRecovery } from './store/crash';
+import { SKIP_SAVED_KEY } from './store/crash-keys';
 import { readLargeMarker } from './store/large-marker';
 import type { LargeRead } from './store/large-store';
 import { startWorkbench } from './store/start';
@@ -82,7 +82,14 @@ function start(large?: LargeRead): void {
   });
   const services = browserServices({ storage, link });
   // After a crash: what was saved, and a way out that loses nothing (src/store/crash.ts).
-  const recovery = createCrashRecovery({ store, link, storage, now: () => new Date(), tabStorage: tab });
+  // Its code loads only when drawing fails; the autosave is stopped at once, before that load, so the change that
+  // broke the screen is never written while it arrives.
+  const recovery = () => {
+    link.halt();
+    return import('./store/crash').then((m) =>
+      m.createCrashRecovery({ store, link, storage, now: () => new Date(), tabStorage: tab }),
+    );
+  };
   const downloadSaved = (text: string): void =>
     downloadBlob(new Blob([text], { type: 'application/json' }), 'raincut-saved-scenario.json');
   // After the first visit the app runs with no network: a service worker keeps it (build/offline-app.ts). A new

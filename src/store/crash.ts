@@ -67,7 +67,8 @@ export interface CrashRecoveryOptions {
 }
 
 /** The tab-only key that asks the next start to leave the saved scenario unopened. */
-export const SKIP_SAVED_KEY = 'raincut.skip-saved';
+export { SKIP_SAVED_KEY } from './crash-keys';
+import { SKIP_SAVED_KEY } from './crash-keys';
 
 /** The large store's side of this screen (./crash-large.ts), fetched only when the saved scenario is there. */
 const loadCrashLarge = (): Promise<typeof import('./crash-large')> => import('./crash-large');

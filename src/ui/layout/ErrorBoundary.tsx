@@ -5,9 +5,10 @@ export interface ErrorBoundaryProps {
   readonly children?: ReactNode;
   /**
    * What was saved and what can be done about it (src/store/crash.ts). Without
-   * it the screen says only what happened and offers a reload.
+   * it the screen says only what happened and offers a reload. A function
+   * loads it when drawing fails (its code is not part of the first screen).
    */
-  readonly recovery?: CrashRecovery;
+  readonly recovery?: CrashRecovery | (() => Promise<CrashRecovery>);
   /** Reloads the page (tests pass their own). */
   readonly reload?: () => void;
   /** Hands the saved scenario's text to the user as a file. */
@@ -19,6 +20,8 @@ interface State {
   readonly report: CrashReport | null;
   /** What setting aside did, when it was tried. */
   readonly setAside: { readonly ok: boolean; readonly text: string } | null;
+  /** The recovery in use, once given or loaded. */
+  readonly recovery: CrashRecovery | null;
 }
 
 const reloadPage = (): void => window.location.reload();
@@ -31,7 +34,7 @@ const reloadPage = (): void => window.location.reload();
  * scenario aside (kept under Saved scenarios), or download it first.
  */
 export class ErrorBoundary extends Component<ErrorBoundaryProps, State> {
-  override state: State = { error: null, report: null, setAside: null };
+  override state: State = { error: null, report: null, setAside: null, recovery: null };
 
   static getDerivedStateFromError(error: unknown): Partial<State> {
     return { error: error instanceof Error ? error : new Error(String(error)) };
@@ -39,16 +42,33 @@ export class ErrorBoundary extends Component<ErrorBoundaryProps, State> {
 
   override componentDidCatch(error: unknown, info: ErrorInfo): void {
     console.error('Raincut could not draw the workbench:', error, info.componentStack);
-    const recovery = this.props.recovery;
-    if (!recovery || this.state.report !== null) return;
+    const given = this.props.recovery;
+    if (!given || this.state.report !== null || this.state.recovery !== null) return;
+    if (typeof given !== 'function') {
+      this.caught(given);
+      return;
+    }
+    void given().then(
+      (recovery) => this.caught(recovery),
+      (loadError: unknown) =>
+        this.setState({
+          setAside: {
+            ok: false,
+            text: `What is saved could not be checked: the code for it did not load (${String(loadError)}). Reloading is safe; the autosave has been stopped.`,
+          },
+        }),
+    );
+  }
+
+  private caught(recovery: CrashRecovery): void {
     const report = recovery.report();
-    this.setState({ report });
+    this.setState({ report, recovery });
     // A saved scenario in the large store is read before the screen says whether it is the one that failed.
     if (report.state === 'large') void recovery.checkLarge()?.then((checked) => this.setState({ report: checked }));
   }
 
   private readonly setAside = (): void => {
-    const recovery = this.props.recovery;
+    const recovery = this.state.recovery;
     if (!recovery) return;
     const result = recovery.setAside();
     if (result.ok) (this.props.reload ?? reloadPage)();
@@ -56,7 +76,8 @@ export class ErrorBoundary extends Component<ErrorBoundaryProps, State> {
   };
 
   private readonly download = (): void => {
-    const { recovery, download } = this.props;
+    const { download } = this.props;
+    const recovery = this.state.recovery;
     if (!recovery || !download) return;
     // The slot holds only a marker for a scenario in the large store: the scenario itself is fetched from there.
     const large = this.state.report?.large ? recovery.largeText() : null;
@@ -69,7 +90,7 @@ export class ErrorBoundary extends Component<ErrorBoundaryProps, State> {
   };
 
   private readonly startWithout = (): void => {
-    if (this.props.recovery?.skipSavedNextTime()) (this.props.reload ?? reloadPage)();
+    if (this.state.recovery?.skipSavedNextTime()) (this.props.reload ?? reloadPage)();
     else
       this.setState({
         setAside: {

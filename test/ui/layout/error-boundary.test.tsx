@@ -98,4 +98,40 @@ describe('when drawing fails', () => {
     );
     expect(screen.getByText('fine')).toBeInTheDocument();
   });
+
+  it('with its code loaded on failure (as main.tsx gives it), says the same and sets aside the same', async () => {
+    const saved = JSON.stringify(FOUR_BARS);
+    const storage = memoryStorage({ [STORAGE_KEY]: saved });
+    const { recovery } = page(storage);
+    const reload = vi.fn();
+    render(
+      <ErrorBoundary recovery={() => Promise.resolve(recovery)} reload={reload} download={vi.fn()}>
+        <Broken />
+      </ErrorBoundary>,
+    );
+    expect(
+      await screen.findByText(
+        /^The scenario that stopped the screen is the one saved in this browser, so reloading would stop it again\./,
+      ),
+    ).toBeInTheDocument();
+    await userEvent
+      .setup()
+      .click(screen.getByRole('button', { name: 'Set the saved scenario aside and start from the demo' }));
+    expect(reload).toHaveBeenCalledOnce();
+    expect(storage.data.has(STORAGE_KEY)).toBe(false);
+  });
+
+  it('when that code cannot load, says so, claims nothing about what is saved, and still offers a reload', async () => {
+    render(
+      <ErrorBoundary recovery={() => Promise.reject(new Error('offline'))} reload={vi.fn()} download={vi.fn()}>
+        <Broken />
+      </ErrorBoundary>,
+    );
+    expect(await screen.findByRole('status')).toHaveTextContent(
+      'What is saved could not be checked: the code for it did not load (Error: offline).',
+    );
+    expect(screen.queryByText(/has not been changed/)).toBeNull();
+    expect(screen.queryByRole('button', { name: /Set the saved scenario aside/ })).toBeNull();
+    expect(screen.getByRole('button', { name: 'Reload' })).toBeInTheDocument();
+  });
 });

@@ -52,8 +52,11 @@ describe('a set-aside copy that points into the large store', { timeout: 20_000 
     expect(item()).toHaveTextContent(`kept in this browser’s larger database (IndexedDB) as record “${id}”`);
     await user.click(within(item()).getByRole('button', { name: /^Restore Saved scenario set aside/ }));
     await vi.waitFor(() => expect(savedNames(storage)).toEqual(['Kept in the larger database']));
-    expect(within(panel).getAllByRole('status')[1]).toHaveTextContent(
-      'Restored “Kept in the larger database” to the saved list',
+    // The list is written before the message is drawn: wait for the message too.
+    await vi.waitFor(() =>
+      expect(within(panel).getAllByRole('status')[1]).toHaveTextContent(
+        'Restored “Kept in the larger database” to the saved list',
+      ),
     );
   });
 
