@@ -75,6 +75,17 @@ export const tests = SIZES.map(({ width, height }) => ({
       const r = await inView(page, page.locator(`[data-result="${id}"]`), `the ${id} result`);
       check(r.inside, `scrolled down 400 px: ${r.text}`);
     }
+
+    // With a unit hydrograph chosen the export group gains "Export hydrograph CSV": the tools still stay one row.
+    await page.getByLabel('Unit hydrograph').selectOption({ label: 'NRCS triangular unit hydrograph' });
+    await page.getByRole('button', { name: 'Export hydrograph CSV' }).waitFor();
+    const withHydrograph = await page
+      .locator('.scenario-bar__group')
+      .evaluateAll((els) => els.map((e) => Math.round(e.getBoundingClientRect().top)));
+    check(
+      Math.max(...withHydrograph) - Math.min(...withHydrograph) <= 4,
+      `with a hydrograph's CSV the scenario tools wrap at ${width} px: group tops ${withHydrograph}`,
+    );
     await context.close();
   },
 }));
