@@ -46,14 +46,23 @@ export const tests = [
       const dir = await mkdtemp(join(tmpdir(), 'raincut-storage-'));
       const file = join(dir, 'million.json');
       await writeFile(file, text);
+      // The page reads the file after setInputFiles returns: it is removed only once the scenario is saved.
       try {
         await page.getByLabel('Scenario file to open').setInputFiles(file, { timeout: 120_000 });
+        await page.waitForFunction((m) => localStorage.getItem('raincut.scenario')?.startsWith(m), MARKER, {
+          timeout: 120_000,
+        });
+      } catch (error) {
+        // What the page says instead (its notices and the slot's start), so a failure here can be read.
+        const seen = await page.evaluate(() => ({
+          slot: localStorage.getItem('raincut.scenario')?.slice(0, 120) ?? null,
+          name: document.querySelector('#scenario-name')?.value ?? null,
+          said: [...document.querySelectorAll('[role=status],[role=alert]')].map((e) => e.textContent).join(' | '),
+        }));
+        throw new Error(`${error.message}\nthe page: ${JSON.stringify(seen)}`);
       } finally {
         await rm(dir, { recursive: true, force: true });
       }
-      await page.waitForFunction((m) => localStorage.getItem('raincut.scenario')?.startsWith(m), MARKER, {
-        timeout: 120_000,
-      });
       await page.getByText('Kept in this browser’s larger store.').waitFor();
       // Autosaves of the 10⁶ bars: each edit of the name saves it again (packing, then the IndexedDB write).
       const name = page.getByLabel('Scenario name');
