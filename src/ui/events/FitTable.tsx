@@ -12,6 +12,7 @@ import {
   unitText,
 } from '../units';
 import { FitChart } from './FitChart';
+import { SpreadList } from './SpreadList';
 import { TransformSpread, transformCell } from './TransformSpread';
 import { useEventFits } from './use-event-fits';
 import { useEventTransformFits } from './use-event-transform-fits';
@@ -125,32 +126,13 @@ export function FitAll() {
       {fits.rows.length === 0 ? <p>Add events to fit them.</p> : null}
 
       <h3>Spread of the fitted values</h3>
-      <dl className="fit-all__summary" aria-label="Spread of the fitted values">
-        <div>
-          <dt>Events fitted</dt>
-          <dd>{summary.count}</dd>
-        </div>
-        <div>
-          <dt>Without an answer</dt>
-          <dd>{without}</dd>
-        </div>
-        <div>
-          <dt>Mean</dt>
-          <dd>{stat(summary.mean)}</dd>
-        </div>
-        <div>
-          <dt>Median</dt>
-          <dd>{stat(summary.median)}</dd>
-        </div>
-        <div>
-          <dt>Smallest</dt>
-          <dd>{stat(summary.min)}</dd>
-        </div>
-        <div>
-          <dt>Largest</dt>
-          <dd>{stat(summary.max)}</dd>
-        </div>
-      </dl>
+      <SpreadList
+        label="Spread of the fitted values"
+        summary={summary}
+        withoutLabel="Without an answer"
+        without={without}
+        stat={stat}
+      />
 
       {shapes ? <TransformSpread shapes={shapes} /> : null}
 

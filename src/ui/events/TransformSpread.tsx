@@ -1,6 +1,7 @@
 import type { ReactNode } from 'react';
 import { formatValue } from '../format';
 import type { EventTransformFits } from './event-transform-fits';
+import { SpreadList } from './SpreadList';
 
 /** A fitted transform value with its unit (hours for lag and k; none for n). */
 function valueText(shapes: EventTransformFits, value: number): string {
@@ -34,32 +35,13 @@ export function TransformSpread({ shapes }: { readonly shapes: EventTransformFit
         The workbench’s unit hydrograph fitted to each event’s own streamflow record, with the loss matched to that
         event’s observed volume first, as “Fit the hydrograph” does on the workbench.
       </p>
-      <dl className="fit-all__summary" aria-label={`Spread of the fitted ${name}`}>
-        <div>
-          <dt>Events fitted</dt>
-          <dd>{summary.count}</dd>
-        </div>
-        <div>
-          <dt>Without a fit</dt>
-          <dd>{summary.withoutAnswer}</dd>
-        </div>
-        <div>
-          <dt>Median</dt>
-          <dd>{stat(summary.median)}</dd>
-        </div>
-        <div>
-          <dt>Mean</dt>
-          <dd>{stat(summary.mean)}</dd>
-        </div>
-        <div>
-          <dt>Smallest</dt>
-          <dd>{stat(summary.min)}</dd>
-        </div>
-        <div>
-          <dt>Largest</dt>
-          <dd>{stat(summary.max)}</dd>
-        </div>
-      </dl>
+      <SpreadList
+        label={`Spread of the fitted ${name}`}
+        summary={summary}
+        withoutLabel="Without a fit"
+        without={summary.withoutAnswer}
+        stat={stat}
+      />
     </>
   );
 }

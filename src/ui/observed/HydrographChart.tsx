@@ -40,24 +40,7 @@ export function HydrographChart() {
         <h2 id="hydrograph-title">Hydrograph</h2>
         {flow || computed ? (
           <ul className="legend" aria-label="Hydrograph legend">
-            {flow ? (
-              <>
-                <li>
-                  <span className="swatch swatch--discharge" aria-hidden="true" /> Discharge
-                </li>
-                <li>
-                  <span className="swatch swatch--baseflow" aria-hidden="true" /> Baseflow
-                </li>
-                <li>
-                  <span className="swatch swatch--direct" aria-hidden="true" /> Direct runoff
-                </li>
-              </>
-            ) : null}
-            {computed ? (
-              <li>
-                <span className="swatch swatch--computed" aria-hidden="true" /> Computed direct runoff
-              </li>
-            ) : null}
+            <HydrographLegendItems flow={flow !== null} computed={computed} />
             {withTotal ? (
               <li>
                 <span className="swatch swatch--total" aria-hidden="true" /> Computed total flow
@@ -81,5 +64,31 @@ export function HydrographChart() {
         </p>
       )}
     </figure>
+  );
+}
+
+/** The hydrograph's legend entries: the record's three lines with a record, the computed one with a transform. */
+export function HydrographLegendItems({ flow, computed }: { readonly flow: boolean; readonly computed: boolean }) {
+  return (
+    <>
+      {flow ? (
+        <>
+          <li>
+            <span className="swatch swatch--discharge" aria-hidden="true" /> Discharge
+          </li>
+          <li>
+            <span className="swatch swatch--baseflow" aria-hidden="true" /> Baseflow
+          </li>
+          <li>
+            <span className="swatch swatch--direct" aria-hidden="true" /> Direct runoff
+          </li>
+        </>
+      ) : null}
+      {computed ? (
+        <li>
+          <span className="swatch swatch--computed" aria-hidden="true" /> Computed direct runoff
+        </li>
+      ) : null}
+    </>
   );
 }

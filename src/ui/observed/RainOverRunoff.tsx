@@ -9,6 +9,7 @@ import { useTimeSpanH } from '../chart/time-span';
 import { useElementWidth } from '../chart/useElementWidth';
 import { formatValue } from '../format';
 import { displayUnit, toDisplay, unitText } from '../units';
+import { HydrographLegendItems } from './HydrographChart';
 import { HydrographPlot } from './HydrographPlot';
 import './observed.css';
 
@@ -115,24 +116,7 @@ export function RainOverRunoff() {
         <li>
           <span className="swatch swatch--loss" aria-hidden="true" /> Loss
         </li>
-        {flow ? (
-          <>
-            <li>
-              <span className="swatch swatch--discharge" aria-hidden="true" /> Discharge
-            </li>
-            <li>
-              <span className="swatch swatch--baseflow" aria-hidden="true" /> Baseflow
-            </li>
-            <li>
-              <span className="swatch swatch--direct" aria-hidden="true" /> Direct runoff
-            </li>
-          </>
-        ) : null}
-        {hasTransform ? (
-          <li>
-            <span className="swatch swatch--computed" aria-hidden="true" /> Computed direct runoff
-          </li>
-        ) : null}
+        <HydrographLegendItems flow={flow !== null} computed={hasTransform} />
         {withTotal ? (
           <li>
             <span className="swatch swatch--total" aria-hidden="true" /> Computed total flow
