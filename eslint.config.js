@@ -58,7 +58,7 @@ const NO_JSX = {
  * belongs lower down: move the piece, or this entry, rather than turn the
  * rule off.
  */
-const UI_ORDER = [
+export const UI_ORDER = [
   'App.tsx',
   // views and the scenario bar, which hold panels
   'design-storm',
