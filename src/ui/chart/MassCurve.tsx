@@ -1,6 +1,6 @@
-import { useMemo } from 'react';
 import { scaleLinear } from 'd3-scale';
-import { massCurve, type LossResult, type Storm, type UnitSystem } from '../../core';
+import type { LossResult, Storm, UnitSystem } from '../../core';
+import { massCurveOf } from '../../store/mass-curve';
 import { formatValue } from '../format';
 import { displayUnit, toDisplay, unitText } from '../units';
 import type { ChartFrame } from './frame';
@@ -28,7 +28,7 @@ const CURVES = [
  * first time it is switched on.
  */
 export function MassCurve({ frame, storm, result, units }: MassCurveProps) {
-  const curve = useMemo(() => massCurve(storm.depthsMm, result), [storm, result]);
+  const curve = massCurveOf(storm.depthsMm, result);
   const n = curve.rainMm.length;
   const depthUnit = unitText(displayUnit('depth', units));
   const totalDisplay = n === 0 ? 0 : toDisplay('depth', curve.rainMm[n - 1] as number, units);

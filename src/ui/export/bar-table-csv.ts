@@ -2,7 +2,6 @@ import {
   UNIT_LABELS,
   barEdgesH,
   convertArea,
-  massCurve,
   methodNumber,
   methodSpec,
   methodValue,
@@ -13,6 +12,7 @@ import {
   type UnitSystem,
 } from '../../core';
 import { CAUTION_TEXT } from '../../scenario';
+import { massCurveOf } from '../../store/mass-curve';
 import type { Scenario } from '../../scenario/types';
 import { formatClockText, wallClockMs } from '../chart/clock';
 import { formatValue } from '../format';
@@ -158,7 +158,7 @@ export function barTableCsv({ scenario, method, result, volumeM3, areaUnit }: Ba
   );
 
   const edges = barEdgesH(storm);
-  const mass = massCurve(storm.depthsMm, result);
+  const mass = massCurveOf(storm.depthsMm, result);
   const n = storm.depthsMm.length;
   for (let k = 0; k < n; k++) {
     const depthMm = storm.depthsMm[k] as number;

@@ -1,8 +1,9 @@
 import { useMemo, useState } from 'react';
-import { attempt, splitEvents, totalDepthMm, type RecordEvent } from '../../core';
+import { attempt, totalDepthMm, type RecordEvent } from '../../core';
 import type { FlowImportSettings, FlowRecord, ImportedStorm, RainImportSettings } from '../../io';
 import { useActions, useScenario } from '../../store';
 import { withRecordEvents, type RecordPick } from '../../store/record-edits';
+import { recordEvents } from '../../store/record-split';
 import { NumberField } from '../fields/NumberField';
 import { formatCount, formatValue } from '../format';
 import { OpenFileButton } from '../import-kit/OpenFileButton';
@@ -58,10 +59,7 @@ export function RecordView() {
 
   const storm = rain?.record ?? null;
   const startsH = useMemo(() => (storm ? barStartsH(storm) : new Float64Array(1)), [storm]);
-  const events = useMemo(
-    () => (storm ? splitEvents(storm, { minDryH, minDepthMm }) : []),
-    [storm, minDryH, minDepthMm],
-  );
+  const events = recordEvents(storm, minDryH, minDepthMm);
   const { picked, unpicked } = useMemo(() => {
     const on: RecordEvent[] = [];
     const off: RecordEvent[] = [];
