@@ -50,3 +50,12 @@ export function memoryStorage(initial: Record<string, string> = {}) {
     key: (index: number) => [...data.keys()][index] ?? null,
   };
 }
+
+/** Freezes a document and everything inside it, so a migration or reader that writes into its input throws. */
+export function deepFreeze<T>(value: T): T {
+  if (value && typeof value === 'object') {
+    for (const inner of Object.values(value)) deepFreeze(inner);
+    Object.freeze(value);
+  }
+  return value;
+}

@@ -15,14 +15,7 @@ import {
   scenarioToFileText,
 } from '../../src/scenario';
 import type { Scenario } from '../../src/scenario/types';
-
-function deepFreeze<T>(value: T): T {
-  if (value && typeof value === 'object') {
-    for (const inner of Object.values(value)) deepFreeze(inner);
-    Object.freeze(value);
-  }
-  return value;
-}
+import { deepFreeze } from '../helpers/scenario-fixtures';
 
 /** A version 3 document as Raincut wrote it before issue 10: the curve number on the 0.05 basis, two methods remembered. */
 function versionThree(): Record<string, unknown> {

@@ -8,14 +8,7 @@ import {
   type Migration,
   type RawDocument,
 } from '../../src/scenario';
-
-function deepFreeze<T>(value: T): T {
-  if (value && typeof value === 'object') {
-    for (const inner of Object.values(value)) deepFreeze(inner);
-    Object.freeze(value);
-  }
-  return value;
-}
+import { deepFreeze } from '../helpers/scenario-fixtures';
 
 const versionMessage = (doc: RawDocument): string => {
   const result = migrate(doc);

@@ -15,14 +15,7 @@ import {
   scenarioToFileText,
 } from '../../src/scenario';
 import type { Scenario } from '../../src/scenario/types';
-
-function deepFreeze<T>(value: T): T {
-  if (value && typeof value === 'object') {
-    for (const inner of Object.values(value)) deepFreeze(inner);
-    Object.freeze(value);
-  }
-  return value;
-}
+import { deepFreeze } from '../helpers/scenario-fixtures';
 
 /** A version 4 document as Raincut wrote it before issue 13. */
 function versionFour(): Record<string, unknown> {
