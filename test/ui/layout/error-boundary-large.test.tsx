@@ -1,9 +1,8 @@
 // @vitest-environment jsdom
 import 'fake-indexeddb/auto';
-import { render, screen } from '@testing-library/react';
-import userEvent from '@testing-library/user-event';
+import { screen } from '@testing-library/react';
 import { createStore, del, get, set } from 'idb-keyval';
-import { afterEach, beforeEach, describe, expect, it, vi } from 'vitest';
+import { describe, expect, it, vi } from 'vitest';
 import { DEMO_SCENARIO } from '../../../src/scenario';
 import { STORAGE_KEY } from '../../../src/store';
 import { createCrashRecovery } from '../../../src/store/crash';
@@ -11,16 +10,12 @@ import { readLargeMarker } from '../../../src/store/large-marker';
 import { LARGE_DB, LARGE_OBJECTS, pack, readLarge } from '../../../src/store/large-store';
 import { listSetAside } from '../../../src/store/set-aside';
 import { startWorkbench } from '../../../src/store/start';
-import { ErrorBoundary } from '../../../src/ui/layout/ErrorBoundary';
+import { quietConsoleErrors, showErrorScreen } from '../../helpers/error-screen';
 import { FOUR_BARS, memoryStorage } from '../../helpers/scenario-fixtures';
 
 // Issue 11: the error screen tells the truth about what was saved, also when
 // the saved scenario is in the large store (IndexedDB, here fake-indexeddb)
 // and the current scenario's slot holds only a marker naming its record.
-
-function Broken(): never {
-  throw new Error('bar 3 has no depth');
-}
 
 const NOW = new Date('2026-03-01T10:00:00.000Z');
 const records = createStore(LARGE_DB, LARGE_OBJECTS);
@@ -51,29 +46,14 @@ async function page(storage: ReturnType<typeof memoryStorage>) {
   return { store, recovery };
 }
 
-function show(recovery: ReturnType<typeof createCrashRecovery>) {
-  const reload = vi.fn();
-  const download = vi.fn();
-  render(
-    <ErrorBoundary recovery={recovery} reload={reload} download={download}>
-      <Broken />
-    </ErrorBoundary>,
-  );
-  return { reload, download, user: userEvent.setup() };
-}
-
 describe('when drawing fails and the saved scenario is in the large store', () => {
-  let quiet: ReturnType<typeof vi.spyOn>;
-  beforeEach(() => {
-    quiet = vi.spyOn(console, 'error').mockImplementation(() => {});
-  });
-  afterEach(() => quiet.mockRestore());
+  quietConsoleErrors();
 
   it('says it is the saved one, downloads the scenario itself (not the marker), and sets the marker aside with the record kept', async () => {
     const { id, markerText, storage } = await savedLarge();
     const { store, recovery } = await page(storage);
     expect(store.getState().scenario).toStrictEqual(FOUR_BARS);
-    const { reload, download, user } = show(recovery);
+    const { reload, download, user } = showErrorScreen(recovery);
     expect(
       await screen.findByText(
         /^The scenario that stopped the screen is the one saved in this browser, so reloading would stop it again\..*larger database \(IndexedDB\)/,
@@ -99,7 +79,7 @@ describe('when drawing fails and the saved scenario is in the large store', () =
     const { storage } = await savedLarge();
     const { store, recovery } = await page(storage);
     store.getState().actions.setName('Broken by this edit');
-    show(recovery);
+    showErrorScreen(recovery);
     expect(await screen.findByText(/^The change that stopped the screen was not saved/)).toBeInTheDocument();
     expect(screen.queryByRole('button', { name: 'Set the saved scenario aside and start from the demo' })).toBeNull();
   });
@@ -108,7 +88,7 @@ describe('when drawing fails and the saved scenario is in the large store', () =
     const { id, storage } = await savedLarge();
     const { recovery } = await page(storage);
     await del(id, records);
-    show(recovery);
+    showErrorScreen(recovery);
     expect(
       await screen.findByText(
         new RegExp(

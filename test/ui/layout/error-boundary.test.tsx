@@ -1,18 +1,14 @@
 // @vitest-environment jsdom
 import { render, screen } from '@testing-library/react';
-import userEvent from '@testing-library/user-event';
-import { afterEach, beforeEach, describe, expect, it, vi } from 'vitest';
+import { describe, expect, it } from 'vitest';
 import { DEMO_SCENARIO } from '../../../src/scenario';
 import { STORAGE_KEY } from '../../../src/store';
-import { createCrashRecovery, type CrashRecovery } from '../../../src/store/crash';
+import { createCrashRecovery } from '../../../src/store/crash';
 import { listSetAside } from '../../../src/store/set-aside';
 import { startWorkbench } from '../../../src/store/start';
 import { ErrorBoundary } from '../../../src/ui/layout/ErrorBoundary';
+import { quietConsoleErrors, showErrorScreen } from '../../helpers/error-screen';
 import { FOUR_BARS, memoryStorage } from '../../helpers/scenario-fixtures';
-
-function Broken(): never {
-  throw new Error('bar 3 has no depth');
-}
 
 const NOW = new Date('2026-03-01T10:00:00.000Z');
 
@@ -29,26 +25,11 @@ function page(storage: ReturnType<typeof memoryStorage>) {
   return { recovery: createCrashRecovery({ store, link, storage, now: () => NOW, tabStorage: tab }), tab };
 }
 
-function show(recovery: CrashRecovery | undefined) {
-  const reload = vi.fn();
-  const download = vi.fn();
-  render(
-    <ErrorBoundary {...(recovery ? { recovery } : {})} reload={reload} download={download}>
-      <Broken />
-    </ErrorBoundary>,
-  );
-  return { reload, download, user: userEvent.setup() };
-}
-
 describe('when drawing fails', () => {
-  let quiet: ReturnType<typeof vi.spyOn>;
-  beforeEach(() => {
-    quiet = vi.spyOn(console, 'error').mockImplementation(() => {});
-  });
-  afterEach(() => quiet.mockRestore());
+  quietConsoleErrors();
 
   it('the screen says so plainly instead of going blank, and offers a reload', async () => {
-    const { reload, user } = show(undefined);
+    const { reload, user } = showErrorScreen(undefined);
     expect(screen.getByRole('alert')).toHaveTextContent('Something went wrong on this screen: bar 3 has no depth.');
     await user.click(screen.getByRole('button', { name: 'Reload' }));
     expect(reload).toHaveBeenCalledOnce();
@@ -59,7 +40,7 @@ describe('when drawing fails', () => {
   it('says the saved scenario is the one that broke, and sets it aside (listed, not lost) before reloading', async () => {
     const saved = JSON.stringify(FOUR_BARS);
     const storage = memoryStorage({ [STORAGE_KEY]: saved });
-    const { reload, user } = show(page(storage).recovery);
+    const { reload, user } = showErrorScreen(page(storage).recovery);
     expect(
       screen.getByText(
         /^The scenario that stopped the screen is the one saved in this browser, so reloading would stop it again\./,
@@ -76,7 +57,7 @@ describe('when drawing fails', () => {
     const storage = memoryStorage({ [STORAGE_KEY]: saved });
     const { recovery, tab } = page(storage);
     storage.failNextWrites(new DOMException('The quota has been exceeded.', 'QuotaExceededError'));
-    const { reload, download, user } = show(recovery);
+    const { reload, download, user } = showErrorScreen(recovery);
     await user.click(screen.getByRole('button', { name: 'Set the saved scenario aside and start from the demo' }));
     expect(reload).not.toHaveBeenCalled();
     expect(screen.getByRole('status')).toHaveTextContent(
@@ -103,30 +84,19 @@ describe('when drawing fails', () => {
     const saved = JSON.stringify(FOUR_BARS);
     const storage = memoryStorage({ [STORAGE_KEY]: saved });
     const { recovery } = page(storage);
-    const reload = vi.fn();
-    render(
-      <ErrorBoundary recovery={() => Promise.resolve(recovery)} reload={reload} download={vi.fn()}>
-        <Broken />
-      </ErrorBoundary>,
-    );
+    const { reload, user } = showErrorScreen(() => Promise.resolve(recovery));
     expect(
       await screen.findByText(
         /^The scenario that stopped the screen is the one saved in this browser, so reloading would stop it again\./,
       ),
     ).toBeInTheDocument();
-    await userEvent
-      .setup()
-      .click(screen.getByRole('button', { name: 'Set the saved scenario aside and start from the demo' }));
+    await user.click(screen.getByRole('button', { name: 'Set the saved scenario aside and start from the demo' }));
     expect(reload).toHaveBeenCalledOnce();
     expect(storage.data.has(STORAGE_KEY)).toBe(false);
   });
 
   it('when that code cannot load, says so, claims nothing about what is saved, and still offers a reload', async () => {
-    render(
-      <ErrorBoundary recovery={() => Promise.reject(new Error('offline'))} reload={vi.fn()} download={vi.fn()}>
-        <Broken />
-      </ErrorBoundary>,
-    );
+    showErrorScreen(() => Promise.reject(new Error('offline')));
     expect(await screen.findByRole('status')).toHaveTextContent(
       'What is saved could not be checked: the code for it did not load (Error: offline).',
     );
