@@ -1,4 +1,4 @@
-import { memo, useMemo } from 'react';
+import { memo, useId, useMemo } from 'react';
 import {
   baseflowMethodSpec,
   dischargeAtH,
@@ -96,6 +96,9 @@ function summaryOf(flow: Streamflow, sep: Separation | null, clock: RecordClock,
     : `${head}; baseflow not separated.`;
 }
 
+/** Room above and below the plot inside the clip, so a line along the top or the zero line keeps its full stroke. */
+const CLIP_LINE_PX = 2;
+
 /**
  * The chart itself, mounted with the record or a computed hydrograph so it
  * measures its own width: the record and its separation when there is one,
@@ -111,6 +114,8 @@ export function HydrographPlot({
   labelledBy?: string;
 }) {
   const [boxRef, width] = useElementWidth<HTMLDivElement>(880);
+  // An id fit for url(#…): React's own ids carry characters that need escaping there.
+  const clipId = `hydro-plot-${useId().replace(/[^\w-]/g, '')}`;
   const storm = useScenario((s) => s.storm);
   const units = useScenario((s) => s.units);
   const computedTop = useDeferredDerived((d, s) => computedPeakM3s(d.hydrograph(s), d.totalFlow(s)));
@@ -133,7 +138,21 @@ export function HydrographPlot({
         <svg className="chart__svg" width={width} height={HYDROGRAPH_HEIGHT} role="group" aria-labelledby={labelledBy}>
           <Axes frame={frame} />
           {flow ? <RecordLayers flow={flow} frame={frame} /> : null}
-          <ComputedLayer frame={frame} />
+          {/* The axis ends where the unit hydrograph's recession has given nearly all its volume
+              (derive-hydrograph's endH); the computed line's last, near-zero tail is cut at the plot's edge. */}
+          <defs>
+            <clipPath id={clipId}>
+              <rect
+                x={frame.plot.left}
+                y={frame.plot.top - CLIP_LINE_PX}
+                width={frame.plot.right - frame.plot.left}
+                height={frame.plot.bottom - frame.plot.top + 2 * CLIP_LINE_PX}
+              />
+            </clipPath>
+          </defs>
+          <g clipPath={`url(#${clipId})`} data-clip="plot">
+            <ComputedLayer frame={frame} />
+          </g>
         </svg>
       </div>
       {flow ? <RecordNotes /> : null}

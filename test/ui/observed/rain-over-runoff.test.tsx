@@ -45,6 +45,25 @@ describe('rain over runoff', () => {
     expect(tickX.map(Number)).toEqual(labelX.map(Number));
   });
 
+  it('cuts the computed line’s near-zero tail at the plot’s right edge (it ran past the axis and off the chart)', async () => {
+    // Nash's cascade has a long recession: the axis ends once 99.9 % of the unit hydrograph's volume is in.
+    await openView({ ...FOUR_BARS, hydrograph: { ...FOUR_BARS.hydrograph, transform: { kind: 'nash', n: 3, kH: 1 } } });
+    const plot = document.querySelector('.rain-over-runoff__figure svg[aria-labelledby="rain-over-runoff-title"]');
+    const line = plot?.querySelector('[data-layer="computed-direct"]');
+    const xs = [...(line?.getAttribute('d') ?? '').matchAll(/[ML]([\d.]+),/g)].map((m) => Number(m[1]));
+    const clipped = line?.closest('g[clip-path]');
+    const id = /^url\(#([\w-]+)\)$/.exec(clipped?.getAttribute('clip-path') ?? '')?.[1];
+    const rect = id ? plot?.querySelector(`clipPath#${id} rect`) : null;
+    expect(rect).toBeTruthy();
+    const right = Number(rect?.getAttribute('x')) + Number(rect?.getAttribute('width'));
+    // The series runs on past the axis (its last samples carry the last of the volume), so the clip is what stops it.
+    expect(Math.max(...xs)).toBeGreaterThan(right); // spread-ok: one path's points, a few hundred at most
+    const ticks = [...(plot?.querySelectorAll('line.axes__tick') ?? [])].map((l) =>
+      Number(/translate\(([\d.]+),/.exec(l.parentElement?.getAttribute('transform') ?? '')?.[1]),
+    );
+    expect(right).toBeGreaterThanOrEqual(Math.max(...ticks)); // spread-ok: the axis's ticks, a dozen or so
+  });
+
   it('says what to do when there is neither a unit hydrograph nor a record', async () => {
     const region = await openView(FOUR_BARS);
     expect(region.getByText(/No hydrograph to hang the storm over yet/)).toBeInTheDocument();
