@@ -1,5 +1,6 @@
 import fc from 'fast-check';
 import { METHODS, validateMethod, type LossMethod, type Storm } from '../../src/core';
+import { MAX_RECORD_H, SHORTEST_STEP_ACCEPTED_H } from '../../src/core/time-limits';
 
 /**
  * Random storms of 1 to `maxBars` bars (hundreds by default) with unequal bar
@@ -22,6 +23,36 @@ export function stormArb(maxBars = 300): fc.Arbitrary<{ durationsH: number[]; de
     durationsH: bars.map((b) => b.durationH),
     depthsMm: bars.map((b) => b.depthMm),
   }));
+}
+
+/** The largest double, 1.7976931348623157e308: the largest depth the core accepts. */
+const LARGEST = Number.MAX_VALUE;
+
+/**
+ * Random storms at the edges of what validateStorm accepts: bars from the
+ * shortest step accepted (a second, less a little slack) to long ones, the
+ * whole within a record's longest span; depths of 0, subnormal (down to
+ * 5e-324), tiny, ordinary, and up to the largest double, so sums may pass
+ * it. No zero or negative durations: those are refused, not computed.
+ */
+export function extremeStormArb(maxBars = 300): fc.Arbitrary<{ durationsH: number[]; depthsMm: number[] }> {
+  const durationH = fc.oneof(
+    { arbitrary: fc.constant(SHORTEST_STEP_ACCEPTED_H), weight: 1 },
+    { arbitrary: fc.double({ min: SHORTEST_STEP_ACCEPTED_H, max: 3, noNaN: true }), weight: 4 },
+    { arbitrary: fc.double({ min: 3, max: 1e5, noNaN: true }), weight: 1 },
+  );
+  const depthMm = fc.oneof(
+    { arbitrary: fc.constant(0), weight: 2 },
+    { arbitrary: fc.constant(Number.MIN_VALUE), weight: 1 },
+    { arbitrary: fc.double({ min: Number.MIN_VALUE, max: 1e-300, noNaN: true }), weight: 1 },
+    { arbitrary: fc.double({ min: 1e-6, max: 80, noNaN: true }), weight: 4 },
+    { arbitrary: fc.double({ min: 1e150, max: LARGEST, noNaN: true }), weight: 1 },
+    { arbitrary: fc.constant(LARGEST), weight: 1 },
+  );
+  return fc
+    .array(fc.record({ durationH, depthMm }), { minLength: 1, maxLength: maxBars, size: 'max' })
+    .map((bars) => ({ durationsH: bars.map((b) => b.durationH), depthsMm: bars.map((b) => b.depthMm) }))
+    .filter((storm) => storm.durationsH.reduce((a, b) => a + b, 0) <= MAX_RECORD_H);
 }
 
 /** Largest value tried for a parameter with no upper bound: past the storm's reach. */
