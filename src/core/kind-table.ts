@@ -62,8 +62,7 @@ export function kindTable<U extends { readonly kind: string }, S extends SpecsOf
   specs: S,
   noun: string,
 ): KindTable<U, S> {
-  const isKind = (kind: unknown): kind is U['kind'] =>
-    typeof kind === 'string' && Object.prototype.hasOwnProperty.call(specs, kind);
+  const isKind = (kind: unknown): kind is U['kind'] => typeof kind === 'string' && Object.hasOwn(specs, kind);
   const spec = <K extends U['kind']>(kind: K): S[K] => {
     if (!isKind(kind)) throw new InputError('kind', `Unknown ${noun} "${String(kind)}".`);
     return specs[kind];

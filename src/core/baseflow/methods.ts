@@ -211,20 +211,16 @@ export const FIRST_BASEFLOW_KIND: BaseflowKind = 'straight-line';
 
 export const isBaseflowKind: (kind: unknown) => kind is BaseflowKind = BASEFLOW_TABLE.isKind;
 
-export function baseflowMethodSpec<K extends BaseflowKind>(kind: K): BaseflowMethodSpec<K> {
-  return BASEFLOW_TABLE.spec(kind);
-}
+export const baseflowMethodSpec: <K extends BaseflowKind>(kind: K) => BaseflowMethodSpec<K> = BASEFLOW_TABLE.spec;
 
 /**
  * Calls `fn` with the method and the spec of its kind, typed to the same
  * kind, so a caller can hand one to the other (`spec.needsArea(method)`).
  */
-export function withBaseflowSpec<R>(
+export const withBaseflowSpec: <R>(
   method: BaseflowMethod,
   fn: <K extends BaseflowKind>(spec: BaseflowMethodSpec<K>, method: BaseflowMethodOf<K>) => R,
-): R {
-  return BASEFLOW_TABLE.dispatch(method, fn);
-}
+) => R = BASEFLOW_TABLE.dispatch;
 
 /** A method's end point as a screen reads it: the key of its parameter, and the rule used without one. */
 export interface EndPointFacts {
@@ -238,9 +234,7 @@ export function baseflowEndPoint(method: BaseflowMethod): EndPointFacts | undefi
 }
 
 /** Default parameters for a method kind (a fresh object). */
-export function defaultBaseflowMethod<K extends BaseflowKind>(kind: K): BaseflowMethodOf<K> {
-  return BASEFLOW_TABLE.defaults(kind);
-}
+export const defaultBaseflowMethod: <K extends BaseflowKind>(kind: K) => BaseflowMethodOf<K> = BASEFLOW_TABLE.defaults;
 
 /** The allowed range of a parameter in words, e.g. "at least 0 and less than 1". */
 export function describeBaseflowRange(param: BaseflowParam): string {
@@ -256,18 +250,15 @@ export function describeBaseflowRange(param: BaseflowParam): string {
 }
 
 /** The number `method` holds for the parameter `key`, or undefined when it holds none (an optional one left out). */
-export function baseflowNumber(method: BaseflowMethod, key: string): number | undefined {
-  return BASEFLOW_TABLE.number(method, key);
-}
+export const baseflowNumber: (method: BaseflowMethod, key: string) => number | undefined = BASEFLOW_TABLE.number;
 
 /**
  * A copy of `method` with the parameter `key` set to `value`, or left out
  * when `value` is undefined (back to automatic). Not validated: the caller
  * checks it (validateBaseflowMethod) before it is used.
  */
-export function withBaseflowValue<M extends BaseflowMethod>(method: M, key: string, value: number | undefined): M {
-  return BASEFLOW_TABLE.withValue(method, key, value);
-}
+export const withBaseflowValue: <M extends BaseflowMethod>(method: M, key: string, value: number | undefined) => M =
+  BASEFLOW_TABLE.withValue;
 
 /** A copy of `method` without the optional parameter `key` (which then goes back to automatic). */
 export function withoutBaseflowParam<M extends BaseflowMethod>(method: M, key: string): M {

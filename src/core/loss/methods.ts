@@ -34,42 +34,33 @@ export const METHOD_KINDS = LOSS_TABLE.kinds as LossKind[];
 
 export const isLossKind: (kind: unknown) => kind is LossKind = LOSS_TABLE.isKind;
 
-export function methodSpec<K extends LossKind>(kind: K): MethodSpec<K> {
-  return LOSS_TABLE.spec(kind);
-}
+export const methodSpec: <K extends LossKind>(kind: K) => MethodSpec<K> = LOSS_TABLE.spec;
 
 /**
  * Calls `fn` with the method and the spec of its kind, typed to the same kind,
  * so a caller can hand one to the other (`spec.dryBars(method)`).
  */
-export function withSpec<R>(
+export const withSpec: <R>(
   method: LossMethod,
   fn: <K extends LossKind>(spec: MethodSpec<K>, method: MethodOf<K>) => R,
-): R {
-  return LOSS_TABLE.dispatch(method, fn);
-}
+) => R = LOSS_TABLE.dispatch;
 
 /**
  * The value `method` holds for the parameter or setting `key` (a key of its
  * spec's params or choices), or undefined when it holds none there (left out,
  * or not a number, switch or choice).
  */
-export function methodValue(method: LossMethod, key: string): MethodValue | undefined {
-  return LOSS_TABLE.value(method, key);
-}
+export const methodValue: (method: LossMethod, key: string) => MethodValue | undefined = LOSS_TABLE.value;
 
 /** The number `method` holds for the numeric parameter `key`, or undefined. */
-export function methodNumber(method: LossMethod, key: string): number | undefined {
-  return LOSS_TABLE.number(method, key);
-}
+export const methodNumber: (method: LossMethod, key: string) => number | undefined = LOSS_TABLE.number;
 
 /**
  * A copy of `method` with the parameter or setting `key` set to `value`. Not
  * validated: the caller checks it (validateMethod) before it is used.
  */
-export function withMethodValue<M extends LossMethod>(method: M, key: string, value: MethodValue): M {
-  return LOSS_TABLE.withValue(method, key, value);
-}
+export const withMethodValue: <M extends LossMethod>(method: M, key: string, value: MethodValue) => M =
+  LOSS_TABLE.withValue;
 
 /** The numeric parameter `key` of a method kind, or undefined. */
 export function numericParam<K extends LossKind>(kind: K, key: string): NumericParam<K> | undefined {
@@ -77,9 +68,7 @@ export function numericParam<K extends LossKind>(kind: K, key: string): NumericP
 }
 
 /** Default parameters for a method kind (a fresh object). */
-export function defaultMethod<K extends LossKind>(kind: K): MethodOf<K> {
-  return LOSS_TABLE.defaults(kind);
-}
+export const defaultMethod: <K extends LossKind>(kind: K) => MethodOf<K> = LOSS_TABLE.defaults;
 
 /**
  * Whether a parameter or setting takes part under the method's other

@@ -174,20 +174,15 @@ export const isTransformKind: (kind: unknown) => kind is TransformKind = TRANSFO
  * spec's params), or undefined when it holds none there (left out, or not a
  * number).
  */
-export function transformValue(transform: Transform, key: string): number | undefined {
-  return TRANSFORM_TABLE.number(transform, key);
-}
+export const transformValue: (transform: Transform, key: string) => number | undefined = TRANSFORM_TABLE.number;
 
 /**
  * A copy of `transform` with the parameter `key` set to `value`, or left
  * out when `value` is undefined (an optional parameter's default). Not
  * validated: the caller checks it (validateTransform) before it is used.
  */
-export function withTransformValue<T extends Transform>(transform: T, key: string, value: number | undefined): T {
-  return TRANSFORM_TABLE.withValue(transform, key, value);
-}
+export const withTransformValue: <T extends Transform>(transform: T, key: string, value: number | undefined) => T =
+  TRANSFORM_TABLE.withValue;
 
 /** Whatever `transform` holds for `key`, unchecked: for validation, which says what it got. */
-export function readTransformValue(transform: Transform, key: string): unknown {
-  return TRANSFORM_TABLE.read(transform, key);
-}
+export const readTransformValue: (transform: Transform, key: string) => unknown = TRANSFORM_TABLE.read;
