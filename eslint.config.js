@@ -104,8 +104,8 @@ const LAYER_ZONES = [
   {
     target: './src/core/baseflow',
     from: './src/core',
-    except: ['./baseflow', './errors.ts', './units.ts', './time-limits.ts'],
-    message: 'Baseflow separation uses only its own folder, errors, units and time limits.',
+    except: ['./baseflow', './errors.ts', './units.ts', './time-limits.ts', './kind-table.ts'],
+    message: 'Baseflow separation uses only its own folder, errors, units, time limits and the kind-table factory.',
   },
   { target: './src/io', from: './src', except: ['./io', './core'], message: 'io imports only itself and the core.' },
   {

@@ -6,6 +6,7 @@ import {
   isInputError,
   separateBaseflow,
   validateBaseflowMethod,
+  withBaseflowSpec,
   type BaseflowKind,
   type BaseflowMethod,
   type BaseflowMethodSpec,
@@ -54,7 +55,7 @@ export function readBaseflowMethod(
     return undefined;
   }
 
-  const spec = baseflowMethodSpec(kind) as BaseflowMethodSpec;
+  const spec: BaseflowMethodSpec = baseflowMethodSpec(kind);
   const keys: string[] = spec.params.map((p) => p.key);
   let ok = true;
   for (const key of Object.keys(raw)) {
@@ -100,8 +101,7 @@ export function baseflowRecordProblem(
   record: { readonly timesH: readonly number[]; readonly dischargeM3s: readonly number[] },
   method: BaseflowMethod,
 ): readonly [field: string, message: string] | null {
-  const spec = baseflowMethodSpec(method.kind) as BaseflowMethodSpec;
-  if (spec.needsArea(method as never)) return null;
+  if (withBaseflowSpec(method, (spec, m) => spec.needsArea(m))) return null;
   const r = attempt(() => separateBaseflow(record, method));
   return r.ok ? null : [r.error.field, r.error.message];
 }

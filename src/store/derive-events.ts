@@ -9,12 +9,14 @@ import {
   type DesignOutcome,
   type EventFits,
 } from './event-fits';
+import { fitAllEventTransforms, type EventTransformFits } from './event-transform-fits';
 import { heldKey } from './held-key';
+import { transformFitParameter } from './hydrograph-edits';
 import { memoLast } from './memo';
 
 /**
- * The event set's derived values: every event's fit, the design value and
- * the design method. Apart from derive.ts because only the event set and
+ * The event set's derived values: every event's fit, the design value, the
+ * design method and the workbench's transform fitted to every event. Apart from derive.ts because only the event set and
  * design storm views (loaded on first use) read them; one set per store,
  * found by the store's Derived (`eventDerived`).
  */
@@ -23,6 +25,8 @@ export interface EventDerived {
   outcome(s: Scenario): DesignOutcome;
   /** The fitted method with the design value, or null when there is none. */
   designMethod(s: Scenario): LossMethod | null;
+  /** The workbench's transform parameter fitted to every event, or null when no transform has one to fit. */
+  transformFits(s: Scenario): EventTransformFits | null;
 }
 
 const perStore = new WeakMap<Derived, EventDerived>();
@@ -59,9 +63,31 @@ function createEventDerived(derived: Derived): EventDerived {
     return outcome(f, s.eventSet.designPick);
   };
   const design = memoLast(designMethod);
+  // Keyed on what the fits read: the loss fits (which carry the events with a target and the held method),
+  // the events (their records), the area and the transform settings. A rename, a drag on the workbench
+  // (its storm, loss line or record) or another hydrograph setting fits no event again.
+  const transformFits = memoLast(
+    (
+      f: EventFits,
+      events: Scenario['eventSet']['events'],
+      areaM2: number,
+      transform: Scenario['hydrograph']['transform'],
+      parameter: string | null,
+      objective: Scenario['hydrograph']['objective'],
+    ): EventTransformFits | null => fitAllEventTransforms({ events, areaM2, transform, parameter, objective }, f),
+  );
   return {
     fits: fitsOf,
     outcome: outcomeOf,
     designMethod: (s) => design(fitsOf(s), outcomeOf(s)),
+    transformFits: (s) =>
+      transformFits(
+        fitsOf(s),
+        s.eventSet.events,
+        s.catchment.areaM2,
+        s.hydrograph.transform,
+        transformFitParameter(s.hydrograph),
+        s.hydrograph.objective,
+      ),
   };
 }

@@ -1,4 +1,5 @@
 import {
+  FIRST_BASEFLOW_KIND,
   InputError,
   baseflowMethodSpec,
   baseflowNumber,
@@ -11,6 +12,7 @@ import {
   validateBaseflowMethod,
   validateHydrograph,
   withoutBaseflowParam,
+  withBaseflowValue,
   type BaseflowKind,
   type BaseflowMethod,
   type BaseflowMethodSpec,
@@ -33,8 +35,8 @@ export interface RecordInput {
   readonly startIso?: string | undefined;
 }
 
-/** The separation a new record starts with: a straight line, its end N = A^0.2 days after the peak. */
-export const FIRST_BASEFLOW_KIND: BaseflowKind = 'straight-line';
+/** The separation a new record starts with (the core's choice: a straight line, its end N = A^0.2 days after the peak). */
+export { FIRST_BASEFLOW_KIND };
 
 /**
  * The core's objection to `method` on this record and area that names one of
@@ -65,7 +67,7 @@ function fitToRecord(
   areaM2: number,
 ): BaseflowMethod {
   let current = method;
-  const spec = baseflowMethodSpec(method.kind) as BaseflowMethodSpec;
+  const spec: BaseflowMethodSpec = baseflowMethodSpec(method.kind);
   for (let i = 0; i < spec.params.length; i++) {
     const objection = parameterObjection(record, current, areaM2);
     const param = objection ? spec.params.find((p) => p.key === objection.field) : undefined;
@@ -150,17 +152,14 @@ export function withBaseflowKind(s: Scenario, kind: BaseflowKind): Scenario {
  */
 export function withBaseflowParam(s: Scenario, key: string, value: number | undefined): Scenario {
   const flow = requireRecord(s, key);
-  const spec = baseflowMethodSpec(flow.baseflow.kind) as BaseflowMethodSpec;
+  const spec: BaseflowMethodSpec = baseflowMethodSpec(flow.baseflow.kind);
   const param = spec.params.find((p) => p.key === key);
   if (!param) throw new InputError(key, `${spec.label} has no parameter "${key}".`);
   if (baseflowNumber(flow.baseflow, key) === value) return s;
   if (value === undefined && !param.optional) {
     throw new InputError(key, `${param.label} cannot be left empty (${spec.label}).`);
   }
-  const baseflow =
-    value === undefined
-      ? withoutBaseflowParam(flow.baseflow, key)
-      : ({ ...flow.baseflow, [key]: value === 0 ? 0 : value } as BaseflowMethod);
+  const baseflow = withBaseflowValue(flow.baseflow, key, value === 0 ? 0 : value);
   validateBaseflowMethod(baseflow);
   const objection = parameterObjection(flow, baseflow, s.catchment.areaM2);
   if (objection) throw objection;

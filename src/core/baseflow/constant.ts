@@ -1,6 +1,5 @@
 import { resolveRiseIndex } from './peak';
-import { START_OF_RISE_PARAM } from './rise-param';
-import type { BaseflowMethodSpec, SeparateFn } from './types';
+import type { SeparateFn } from './types';
 
 /**
  * Constant-discharge separation: baseflow stays at the discharge of the start
@@ -10,7 +9,7 @@ import type { BaseflowMethodSpec, SeparateFn } from './types';
  * separations, e.g. Chow, Maidment & Mays (1988) Applied Hydrology, §5.1
  * (section cited from memory).
  */
-const separateConstant: SeparateFn<'constant'> = (timesH, dischargeM3s, method, context) => {
+export const separateConstant: SeparateFn<'constant'> = (timesH, dischargeM3s, method, context) => {
   const n = dischargeM3s.length;
   const rise = resolveRiseIndex(dischargeM3s, method.riseIndex, context.peakIndex);
   const level = dischargeM3s[rise] as number;
@@ -28,16 +27,4 @@ const separateConstant: SeparateFn<'constant'> = (timesH, dischargeM3s, method, 
     }
   }
   return { lineM3s: new Float64Array(n).fill(level), startIndex: rise, endTimeH, endLineM3s: level };
-};
-
-export const constantSpec: BaseflowMethodSpec<'constant'> = {
-  kind: 'constant',
-  label: 'Constant discharge',
-  summary:
-    'Baseflow holds at the discharge of the start of rise until the recession falls back to it; the flow above that level is direct runoff.',
-  source: 'Graphical separation, e.g. Chow, Maidment & Mays (1988) Applied Hydrology, §5.1.',
-  params: [{ key: 'riseIndex', ...START_OF_RISE_PARAM }],
-  defaults: { kind: 'constant' },
-  needsArea: () => false,
-  separate: separateConstant,
 };

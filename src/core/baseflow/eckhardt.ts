@@ -1,4 +1,4 @@
-import type { BaseflowMethodSpec, SeparateFn } from './types';
+import type { SeparateFn } from './types';
 import { reflectPad } from './warm-up';
 
 /**
@@ -51,67 +51,4 @@ export const separateEckhardt: SeparateFn<'eckhardt'> = (timesH, dischargeM3s, m
   }
   const lineM3s = padded.offset === 0 ? all : all.slice(padded.offset, padded.offset + n);
   return { lineM3s, startIndex: 0, endTimeH: timesH[n - 1] as number, endLineM3s: lineM3s[n - 1] as number };
-};
-
-/** The filter's conventions in words, for the screen and the README. */
-const ECKHARDT_CONVENTIONS =
-  'One forward pass. It starts with all flow as baseflow at its first sample (b₀ = Q₀); baseflow is capped at the flow at every step and the capped value carried on, so 0 ≤ baseflow ≤ flow. ' +
-  'Without warm-up a record that starts on a recession is taken as all baseflow there; with warm-up, samples are mirrored before the first and dropped after filtering.';
-
-export const eckhardtSpec: BaseflowMethodSpec<'eckhardt'> = {
-  kind: 'eckhardt',
-  label: 'Eckhardt filter',
-  summary:
-    'A two-parameter recursive filter: the recession constant shapes the baseflow, and BFImax caps the share of flow it can take over the long run.',
-  source: 'Eckhardt (2005) Hydrological Processes 19(2), 507–515.',
-  params: [
-    {
-      key: 'a',
-      label: 'Recession constant a',
-      unit: '-',
-      min: 0,
-      max: 1,
-      maxExclusive: true,
-      step: 0.005,
-      help: 'Ratio of discharge from one step to the next in a pure recession; best taken from recession analysis. 0.98 is common practice for daily data.',
-    },
-    {
-      key: 'bfiMax',
-      label: 'BFImax',
-      unit: '-',
-      min: 0,
-      max: 1,
-      step: 0.05,
-      help: 'Largest baseflow index the filter allows. Eckhardt (2005) suggests about 0.80 for perennial streams on porous aquifers, 0.50 for ephemeral streams on porous aquifers, 0.25 for perennial streams on hard rock.',
-    },
-    {
-      key: 'stepH',
-      label: 'Time step of a',
-      unit: 'h',
-      min: 0,
-      minExclusive: true,
-      max: Infinity,
-      optional: { auto: 'a applies to each sample step, as published' },
-      step: 1,
-      help:
-        'Step a was found for: 24 h for daily values, so a 15-minute record uses a^(0.25/24) per step, the same recession per hour (Tallaksen 1995, from memory). ' +
-        'Leave empty to apply a to each sample as it stands.',
-    },
-    {
-      key: 'warmUpSamples',
-      label: 'Warm-up (samples mirrored before the start)',
-      unit: 'samples',
-      min: 0,
-      max: Infinity,
-      integer: true,
-      optional: { auto: 'no warm-up: the filter starts at the first sample' },
-      step: 1,
-      help: 'Mirror this many samples before the first, so the start-up guess (all baseflow) fades before the record begins; as for the Lyne & Hollick filter (Ladson et al. 2013, from memory). Empty: none.',
-    },
-  ],
-  // a for daily data, scaled to the record's step (stepH 24 h); no warm-up.
-  defaults: { kind: 'eckhardt', a: 0.98, bfiMax: 0.8, stepH: 24 },
-  conventions: ECKHARDT_CONVENTIONS,
-  needsArea: () => false,
-  separate: separateEckhardt,
 };

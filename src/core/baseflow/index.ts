@@ -10,6 +10,7 @@ export type {
   BaseflowMethodSpec,
   BaseflowParam,
   BaseflowParamUnit,
+  BaseflowEndPoint,
   ConstantBaseflow,
   StraightLineBaseflow,
   LyneHollickBaseflow,
@@ -25,8 +26,13 @@ export {
   validateBaseflowMethod,
   baseflowNumber,
   withoutBaseflowParam,
+  withBaseflowValue,
+  withBaseflowSpec,
+  baseflowEndPoint,
+  FIRST_BASEFLOW_KIND,
+  type EndPointFacts,
 } from './methods';
 export { separateBaseflow } from './separate';
 export { validateHydrograph, dischargeAtH } from './hydrograph';
 export { findPeakIndex, findStartOfRise } from './peak';
-export { recessionDays } from './straight-line';
+export { recessionDays } from './recession-days';

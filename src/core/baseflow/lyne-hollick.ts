@@ -1,4 +1,4 @@
-import type { BaseflowMethodSpec, SeparateFn } from './types';
+import type { SeparateFn } from './types';
 import { reflectPad } from './warm-up';
 
 /**
@@ -76,73 +76,4 @@ export const separateLyneHollick: SeparateFn<'lyne-hollick'> = (timesH, discharg
   }
   const lineM3s = padded.offset === 0 && size === n ? current : current.slice(padded.offset, padded.offset + n);
   return { lineM3s, startIndex: 0, endTimeH: timesH[n - 1] as number, endLineM3s: lineM3s[n - 1] as number };
-};
-
-/** The filter's conventions in words, for the screen and the README. */
-const LYNE_HOLLICK_CONVENTIONS =
-  'Each pass starts with no quickflow (all baseflow) at its first sample. Quickflow is held between 0 and the flow at every step, and the held value is carried on, so 0 ≤ baseflow ≤ flow. ' +
-  'Passes alternate: forward, backward, forward… (an even count ends on a backward pass). ' +
-  'Without warm-up the first sample of each pass is taken as all baseflow, and a record that starts on a recession stays all baseflow down it; ' +
-  'with warm-up, samples are mirrored about each end first, and dropped after the passes.';
-
-export const lyneHollickSpec: BaseflowMethodSpec<'lyne-hollick'> = {
-  kind: 'lyne-hollick',
-  label: 'Lyne & Hollick filter',
-  summary:
-    'A recursive digital filter takes the quick, high-frequency part of the record as direct runoff; more passes give a smoother baseflow.',
-  source:
-    'Lyne & Hollick (1979), Hydrology and Water Resources Symposium, IEAust, Perth; as applied by Nathan & McMahon (1990), Water Resources Research 26(7); warm-up by reflection as in Ladson et al. (2013), Australian Journal of Water Resources 17(1).',
-  params: [
-    {
-      key: 'alpha',
-      label: 'Filter parameter α',
-      unit: '-',
-      min: 0,
-      max: 1,
-      maxExclusive: true,
-      step: 0.005,
-      help: 'Higher α gives a smoother, lower baseflow. 0.925 is common practice for daily data (Nathan & McMahon 1990); it applies per time step below.',
-    },
-    {
-      key: 'passes',
-      label: 'Passes',
-      unit: '-',
-      min: 1,
-      max: 9,
-      integer: true,
-      step: 1,
-      help: 'Passes over the record, alternating forward and backward; 3 is usual.',
-    },
-    {
-      key: 'stepH',
-      label: 'Time step of α',
-      unit: 'h',
-      min: 0,
-      minExclusive: true,
-      max: Infinity,
-      optional: { auto: 'α applies to each sample step, as published' },
-      step: 1,
-      help:
-        'Step α was chosen for: 24 h for the published daily values, so a 15-minute record uses α^(0.25/24) per step and forgets at the same rate in hours. ' +
-        'Leave empty to apply α to each sample as it stands.',
-    },
-    {
-      key: 'warmUpSamples',
-      label: 'Warm-up (samples mirrored at each end)',
-      unit: 'samples',
-      min: 0,
-      max: Infinity,
-      integer: true,
-      optional: { auto: 'no warm-up: the filter starts at the first sample' },
-      step: 1,
-      help:
-        'Mirror this many samples about each end of the record before filtering, so the start-up guess fades before the record begins; 30 is the published practice for daily data (Ladson et al. 2013, from memory). ' +
-        'Matters most for a record that starts on a recession. Empty: none.',
-    },
-  ],
-  // α for daily data, scaled to the record's step (stepH 24 h); no warm-up.
-  defaults: { kind: 'lyne-hollick', alpha: 0.925, passes: 3, stepH: 24 },
-  conventions: LYNE_HOLLICK_CONVENTIONS,
-  needsArea: () => false,
-  separate: separateLyneHollick,
 };

@@ -1,9 +1,11 @@
 import { InputError } from '../errors';
 import { depthFromVolumeMm } from '../units';
 import { validateHydrograph } from './hydrograph';
-import { baseflowMethodSpec, validateBaseflowMethod } from './methods';
+import { byKind } from '../kind-table';
+import { validateBaseflowMethod } from './methods';
 import { findPeakIndex } from './peak';
-import type { BaseflowMethod, BaseflowMethodSpec, BaseflowOptions, BaseflowResult, Hydrograph } from './types';
+import { BASEFLOW_SEPARATORS } from './separators';
+import type { BaseflowMethod, BaseflowOptions, BaseflowResult, Hydrograph } from './types';
 import { recordVolumeM3, volumeAboveLineM3 } from './volume';
 
 /**
@@ -25,11 +27,9 @@ export function separateBaseflow(
   const { timesH, dischargeM3s } = hydrograph;
   const n = dischargeM3s.length;
   const peakIndex = findPeakIndex(dischargeM3s);
-  const spec = baseflowMethodSpec(method.kind) as BaseflowMethodSpec;
-  const { lineM3s, startIndex, endTimeH, endLineM3s, notice } = spec.separate(timesH, dischargeM3s, method as never, {
-    peakIndex,
-    areaM2,
-  });
+  const { lineM3s, startIndex, endTimeH, endLineM3s, notice } = byKind(BASEFLOW_SEPARATORS, method, (separate, m) =>
+    separate(timesH, dischargeM3s, m, { peakIndex, areaM2 }),
+  );
 
   const baseflowM3s = new Float64Array(n);
   const directM3s = new Float64Array(n);

@@ -1,18 +1,8 @@
 import { InputError } from '../errors';
-import { AREA_UNITS } from '../units';
 import { dischargeAtH } from './hydrograph';
 import { resolveRiseIndex } from './peak';
-import { START_OF_RISE_PARAM } from './rise-param';
-import type { BaseflowMethodSpec, SeparateFn } from './types';
-
-/**
- * Days from the peak to the end of direct runoff, N = A^0.2 with A in mi²
- * (Linsley, Kohler & Paulhus, Hydrology for Engineers). The area comes in m²
- * and is converted here, since the formula is empirical in US units.
- */
-export function recessionDays(areaM2: number): number {
-  return Math.pow(areaM2 / AREA_UNITS.mi2, 0.2);
-}
+import { recessionDays } from './recession-days';
+import type { SeparateFn } from './types';
 
 /**
  * Straight-line separation: baseflow runs straight from the start of rise
@@ -26,7 +16,7 @@ export function recessionDays(areaM2: number): number {
  * notice (a fallback of our own, common practice with a short record, no
  * source): a screen must show a separation and say how it was made, not stop.
  */
-const separateStraightLine: SeparateFn<'straight-line'> = (timesH, dischargeM3s, method, context) => {
+export const separateStraightLine: SeparateFn<'straight-line'> = (timesH, dischargeM3s, method, context) => {
   const n = dischargeM3s.length;
   const rise = resolveRiseIndex(dischargeM3s, method.riseIndex, context.peakIndex);
   const riseTimeH = timesH[rise] as number;
@@ -70,30 +60,4 @@ const separateStraightLine: SeparateFn<'straight-line'> = (timesH, dischargeM3s,
   const lineM3s = new Float64Array(n);
   for (let k = 0; k < n; k++) lineM3s[k] = riseQ + slope * ((timesH[k] as number) - riseTimeH);
   return { lineM3s, startIndex: rise, endTimeH, endLineM3s: endQ, ...(notice === undefined ? {} : { notice }) };
-};
-
-export const straightLineSpec: BaseflowMethodSpec<'straight-line'> = {
-  kind: 'straight-line',
-  label: 'Straight line',
-  summary:
-    'Baseflow runs in a straight line from the start of rise to an end point on the recession; the flow above the line is direct runoff.',
-  source: 'Linsley, Kohler & Paulhus, Hydrology for Engineers (McGraw-Hill): N = A^0.2 days, A in mi².',
-  params: [
-    { key: 'riseIndex', ...START_OF_RISE_PARAM },
-    {
-      key: 'endTimeH',
-      label: 'End of direct runoff',
-      unit: 'h',
-      min: -Infinity,
-      max: Infinity,
-      optional: {
-        auto: 'N = A^0.2 days after the peak (A in mi², needs the catchment area), or the last sample when that is after the record',
-      },
-      step: 0.25,
-      help: 'Time where the line meets the recession; leave empty to use N = A^0.2 days after the peak (the last sample when that falls after the record).',
-    },
-  ],
-  defaults: { kind: 'straight-line' },
-  needsArea: (method) => method.endTimeH === undefined,
-  separate: separateStraightLine,
 };

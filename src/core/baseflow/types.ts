@@ -55,8 +55,8 @@ export interface EckhardtBaseflow {
 
 /**
  * Every baseflow separation method the core knows, as a discriminated union on
- * `kind`. Adding one: its interface here, a file in this folder, one entry in
- * `methods.ts`.
+ * `kind`. Adding one: its interface here, a file in this folder (its
+ * separation), its entry in `methods.ts` (the facts) and in `separators.ts`.
  */
 export type BaseflowMethod = ConstantBaseflow | StraightLineBaseflow | LyneHollickBaseflow | EckhardtBaseflow;
 export type BaseflowKind = BaseflowMethod['kind'];
@@ -166,7 +166,31 @@ export interface BaseflowParam<K extends BaseflowKind = BaseflowKind> {
   readonly help: string;
 }
 
-/** Everything the core and the UI need to know about one baseflow method. */
+/**
+ * The end of a line method's window that a screen lets the user drag along
+ * the recession: the parameter that holds it (h after the first sample), and
+ * the rule used when it is left out, as a time after the peak from the
+ * catchment area.
+ */
+export interface BaseflowEndPoint<K extends BaseflowKind = BaseflowKind> {
+  readonly key: BaseflowParam<K>['key'];
+  readonly rule: {
+    /** What a button that puts the end back to the rule says, e.g. "End at N = A^0.2 days after the peak". */
+    readonly action: string;
+    /** The rule's symbol for the days it gives, e.g. "N". */
+    readonly symbol: string;
+    /** The unit of area the rule is stated in (its days are then shown beside the area in that unit). */
+    readonly areaUnit: 'mi2' | 'km2';
+    /** Days from the peak to the end for a catchment of `areaM2` (m²). */
+    readonly daysAfterPeak: (areaM2: number) => number;
+  };
+}
+
+/**
+ * Everything the core and the UI need to know about one baseflow method,
+ * declared apart from the code that separates (separators.ts), so the first
+ * screen reads these facts without it.
+ */
 export interface BaseflowMethodSpec<K extends BaseflowKind = BaseflowKind> {
   readonly kind: K;
   readonly label: string;
@@ -182,5 +206,6 @@ export interface BaseflowMethodSpec<K extends BaseflowKind = BaseflowKind> {
   readonly conventions?: string;
   /** True when these parameters need the catchment area to run. */
   readonly needsArea: (method: BaseflowMethodOf<K>) => boolean;
-  readonly separate: SeparateFn<K>;
+  /** Optional: the end point screens draw on the hydrograph for the user to drag. See BaseflowEndPoint. */
+  readonly endPoint?: BaseflowEndPoint<K>;
 }

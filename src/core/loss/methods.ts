@@ -1,4 +1,5 @@
 import { InputError } from '../errors';
+import { kindTable } from '../kind-table';
 import { constantSpec } from './constant';
 import { initialContinuingSpec } from './initial-continuing';
 import { proportionalSpec } from './proportional';
@@ -10,66 +11,56 @@ import type { LossKind, LossMethod, MethodOf, MethodSpec, MethodValue, NumericPa
 /**
  * The one table of loss methods. The UI builds its method picker and
  * parameter fields from it; calibration reads bounds from it. Adding a method
- * touches this table and nothing else outside its own file.
+ * touches this table and nothing else outside its own file. Built by the
+ * core's one factory of kind tables (kind-table.ts), as the transforms and
+ * baseflow methods are.
  */
-export const METHODS: { readonly [K in LossKind]: MethodSpec<K> } = {
-  constant: constantSpec,
-  'initial-continuing': initialContinuingSpec,
-  proportional: proportionalSpec,
-  horton: hortonSpec,
-  'green-ampt': greenAmptSpec,
-  'curve-number': curveNumberSpec,
-};
+const LOSS_TABLE = kindTable<LossMethod, { readonly [K in LossKind]: MethodSpec<K> }>(
+  {
+    constant: constantSpec,
+    'initial-continuing': initialContinuingSpec,
+    proportional: proportionalSpec,
+    horton: hortonSpec,
+    'green-ampt': greenAmptSpec,
+    'curve-number': curveNumberSpec,
+  },
+  'loss method',
+);
+
+export const METHODS = LOSS_TABLE.specs;
 
 /** Method kinds in the order a picker shows them. */
-export const METHOD_KINDS = Object.keys(METHODS) as LossKind[];
+export const METHOD_KINDS = LOSS_TABLE.kinds as LossKind[];
 
-export function isLossKind(kind: unknown): kind is LossKind {
-  return typeof kind === 'string' && Object.prototype.hasOwnProperty.call(METHODS, kind);
-}
+export const isLossKind: (kind: unknown) => kind is LossKind = LOSS_TABLE.isKind;
 
-export function methodSpec<K extends LossKind>(kind: K): MethodSpec<K> {
-  const spec = METHODS[kind] as MethodSpec<K> | undefined;
-  if (!spec) throw new InputError('kind', `Unknown loss method "${String(kind)}".`);
-  return spec;
-}
+export const methodSpec: <K extends LossKind>(kind: K) => MethodSpec<K> = LOSS_TABLE.spec;
 
 /**
  * Calls `fn` with the method and the spec of its kind, typed to the same kind,
- * so a caller can hand one to the other (`spec.dryBars(method)`). TypeScript
- * cannot tie a union value to the table entry of its own member: this is the
- * one place that says so.
+ * so a caller can hand one to the other (`spec.dryBars(method)`).
  */
-export function withSpec<R>(
+export const withSpec: <R>(
   method: LossMethod,
   fn: <K extends LossKind>(spec: MethodSpec<K>, method: MethodOf<K>) => R,
-): R {
-  return fn(methodSpec(method.kind) as MethodSpec, method);
-}
+) => R = LOSS_TABLE.dispatch;
 
 /**
  * The value `method` holds for the parameter or setting `key` (a key of its
  * spec's params or choices), or undefined when it holds none there (left out,
  * or not a number, switch or choice).
  */
-export function methodValue(method: LossMethod, key: string): MethodValue | undefined {
-  const v: unknown = (method as unknown as Partial<Record<string, unknown>>)[key];
-  return typeof v === 'number' || typeof v === 'boolean' || typeof v === 'string' ? v : undefined;
-}
+export const methodValue: (method: LossMethod, key: string) => MethodValue | undefined = LOSS_TABLE.value;
 
 /** The number `method` holds for the numeric parameter `key`, or undefined. */
-export function methodNumber(method: LossMethod, key: string): number | undefined {
-  const v = methodValue(method, key);
-  return typeof v === 'number' ? v : undefined;
-}
+export const methodNumber: (method: LossMethod, key: string) => number | undefined = LOSS_TABLE.number;
 
 /**
  * A copy of `method` with the parameter or setting `key` set to `value`. Not
  * validated: the caller checks it (validateMethod) before it is used.
  */
-export function withMethodValue<M extends LossMethod>(method: M, key: string, value: MethodValue): M {
-  return { ...method, [key]: value };
-}
+export const withMethodValue: <M extends LossMethod>(method: M, key: string, value: MethodValue) => M =
+  LOSS_TABLE.withValue;
 
 /** The numeric parameter `key` of a method kind, or undefined. */
 export function numericParam<K extends LossKind>(kind: K, key: string): NumericParam<K> | undefined {
@@ -77,9 +68,7 @@ export function numericParam<K extends LossKind>(kind: K, key: string): NumericP
 }
 
 /** Default parameters for a method kind (a fresh object). */
-export function defaultMethod<K extends LossKind>(kind: K): MethodOf<K> {
-  return { ...methodSpec(kind).defaults };
-}
+export const defaultMethod: <K extends LossKind>(kind: K) => MethodOf<K> = LOSS_TABLE.defaults;
 
 /**
  * Whether a parameter or setting takes part under the method's other
@@ -110,7 +99,7 @@ export function validateMethod(method: LossMethod): void {
   if (!isLossKind(method.kind)) throw new InputError('kind', `Unknown loss method "${String(method.kind)}".`);
   const spec = methodSpec(method.kind) as MethodSpec;
   for (const param of spec.params) {
-    const v: unknown = (method as unknown as Partial<Record<string, unknown>>)[param.key];
+    const v = LOSS_TABLE.read(method, param.key);
     // Added after callers were written: leaving it out means its stated value.
     if (v === undefined && param.omitted !== undefined) continue;
     const unit = param.unit === '-' ? '' : ` ${param.unit}`;
@@ -126,7 +115,7 @@ export function validateMethod(method: LossMethod): void {
     }
   }
   for (const choice of spec.choices ?? []) {
-    const v: unknown = (method as unknown as Partial<Record<string, unknown>>)[choice.key];
+    const v = LOSS_TABLE.read(method, choice.key);
     if (v === undefined && choice.omitted !== undefined) continue;
     if (!choice.choices.some((c) => c.value === v)) {
       const allowed = choice.choices.map((c) => JSON.stringify(c.value)).join(' or ');

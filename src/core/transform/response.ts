@@ -1,3 +1,4 @@
+import { byKind } from '../kind-table';
 import { TRANSFORM_WEIGHTS } from './weights';
 import type { Transform } from './types';
 
@@ -10,8 +11,7 @@ import type { Transform } from './types';
  * trimmed after their last non-zero value.
  */
 export function unitResponse(transform: Transform, stepH: number): Float64Array {
-  const weights = TRANSFORM_WEIGHTS[transform.kind] as (t: Transform, stepH: number) => Float64Array;
-  const w = weights(transform, stepH);
+  const w = byKind(TRANSFORM_WEIGHTS, transform, (weights, t) => weights(t, stepH));
   let sum = 0;
   let last = -1;
   for (let j = 0; j < w.length; j++) {

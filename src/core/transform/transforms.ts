@@ -1,3 +1,4 @@
+import { kindTable } from '../kind-table';
 import type { Transform, TransformKind, TransformOf } from './types';
 
 /** The peak rate factor of the published table, in cfs per (mi²·in/h) (NEH-630 ch. 16, from memory). */
@@ -53,135 +54,135 @@ const lagParam = {
 
 /**
  * The one table of transforms, in the order a picker shows them. Validation,
- * fitting and a screen's fields are all read from it.
+ * fitting and a screen's fields are all read from it; built by the core's one
+ * factory of kind tables (kind-table.ts), as the loss and baseflow methods
+ * are. The unit responses are computed apart from it (weights.ts), so the
+ * first screen reads these facts without that code.
  */
-export const TRANSFORMS: { readonly [K in TransformKind]: TransformSpec<K> } = {
-  'nrcs-dimensionless': {
-    kind: 'nrcs-dimensionless',
-    label: 'NRCS dimensionless unit hydrograph',
-    summary: 'The curvilinear unit hydrograph of the published ratio table; Tp = D/2 + lag.',
-    source: 'USDA NRCS (2007) National Engineering Handbook Part 630, ch. 16, Table 16-1',
-    params: [
-      lagParam,
-      {
-        key: 'peakRateFactor',
-        label: 'Peak rate factor',
-        unit: 'US',
-        min: 100,
-        max: 1000,
-        optional: true,
-        step: 1,
-        help:
-          '484 (the default) gives the published table; other values a gamma-shaped hydrograph with the same volume ' +
-          '(flatter below 484, steeper above).',
-      },
-    ],
-    defaults: { kind: 'nrcs-dimensionless', lagH: 1 },
-  },
-  triangular: {
-    kind: 'triangular',
-    label: 'NRCS triangular unit hydrograph',
-    summary: 'Straight rise to the peak at Tp = D/2 + lag, straight fall to 8/3·Tp.',
-    source: 'USDA NRCS (2007) National Engineering Handbook Part 630, ch. 16',
-    params: [lagParam],
-    defaults: { kind: 'triangular', lagH: 1 },
-  },
-  nash: {
-    kind: 'nash',
-    label: 'Nash cascade',
-    summary: 'n equal linear reservoirs in series; the unit hydrograph is gamma-shaped, peaking at (n − 1)·k.',
-    source: 'Nash (1957) The form of the instantaneous unit hydrograph, IASH Publ. 45',
-    params: [
-      {
-        key: 'n',
-        label: 'Number of reservoirs n',
-        unit: '-',
-        min: 0,
-        max: 100,
-        minExclusive: true,
-        fit: { searchMin: 0.5, searchMax: 50 },
-        step: 0.1,
-        help: 'Need not be a whole number; larger n gives a more peaked, more delayed hydrograph.',
-      },
-      {
-        key: 'kH',
-        label: 'Storage constant k',
-        unit: 'h',
-        min: 0,
-        max: 1000,
-        minExclusive: true,
-        fit: { searchMin: 0.01, searchMax: 1000 },
-        step: 0.05,
-        help: 'Storage over outflow of each reservoir; the mean delay of the cascade is n·k.',
-      },
-    ],
-    defaults: { kind: 'nash', n: 3, kH: 0.5 },
-  },
-  'unit-hydrograph': {
-    kind: 'unit-hydrograph',
-    label: 'Unit hydrograph of my own',
-    summary: 'Ordinates of a unit hydrograph of a stated duration, converted to the output step by the S-curve.',
-    source: 'S-curve method: Chow, Maidment & Mays (1988) Applied Hydrology, §7.6',
-    params: [
-      {
-        key: 'durationH',
-        label: 'Duration of the unit excess',
-        unit: 'h',
-        min: 0,
-        max: Infinity,
-        minExclusive: true,
-        step: 0.25,
-        help: 'The time over which the 1 mm of excess fell.',
-      },
-      {
-        key: 'stepH',
-        label: 'Time between ordinates',
-        unit: 'h',
-        min: 0,
-        max: Infinity,
-        minExclusive: true,
-        step: 0.25,
-        help: 'The first ordinate is at the start of the excess.',
-      },
-    ],
-    defaults: {
+const TRANSFORM_TABLE = kindTable<Transform, { readonly [K in TransformKind]: TransformSpec<K> }>(
+  {
+    'nrcs-dimensionless': {
+      kind: 'nrcs-dimensionless',
+      label: 'NRCS dimensionless unit hydrograph',
+      summary: 'The curvilinear unit hydrograph of the published ratio table; Tp = D/2 + lag.',
+      source: 'USDA NRCS (2007) National Engineering Handbook Part 630, ch. 16, Table 16-1',
+      params: [
+        lagParam,
+        {
+          key: 'peakRateFactor',
+          label: 'Peak rate factor',
+          unit: 'US',
+          min: 100,
+          max: 1000,
+          optional: true,
+          step: 1,
+          help:
+            '484 (the default) gives the published table; other values a gamma-shaped hydrograph with the same volume ' +
+            '(flatter below 484, steeper above).',
+        },
+      ],
+      defaults: { kind: 'nrcs-dimensionless', lagH: 1 },
+    },
+    triangular: {
+      kind: 'triangular',
+      label: 'NRCS triangular unit hydrograph',
+      summary: 'Straight rise to the peak at Tp = D/2 + lag, straight fall to 8/3·Tp.',
+      source: 'USDA NRCS (2007) National Engineering Handbook Part 630, ch. 16',
+      params: [lagParam],
+      defaults: { kind: 'triangular', lagH: 1 },
+    },
+    nash: {
+      kind: 'nash',
+      label: 'Nash cascade',
+      summary: 'n equal linear reservoirs in series; the unit hydrograph is gamma-shaped, peaking at (n − 1)·k.',
+      source: 'Nash (1957) The form of the instantaneous unit hydrograph, IASH Publ. 45',
+      params: [
+        {
+          key: 'n',
+          label: 'Number of reservoirs n',
+          unit: '-',
+          min: 0,
+          max: 100,
+          minExclusive: true,
+          fit: { searchMin: 0.5, searchMax: 50 },
+          step: 0.1,
+          help: 'Need not be a whole number; larger n gives a more peaked, more delayed hydrograph.',
+        },
+        {
+          key: 'kH',
+          label: 'Storage constant k',
+          unit: 'h',
+          min: 0,
+          max: 1000,
+          minExclusive: true,
+          fit: { searchMin: 0.01, searchMax: 1000 },
+          step: 0.05,
+          help: 'Storage over outflow of each reservoir; the mean delay of the cascade is n·k.',
+        },
+      ],
+      defaults: { kind: 'nash', n: 3, kH: 0.5 },
+    },
+    'unit-hydrograph': {
       kind: 'unit-hydrograph',
-      durationH: 1,
-      stepH: 1,
-      // Invented: a smooth 1-hour unit hydrograph for a 1 km² catchment; it holds
-      // 0.278 m³/s·h = 1000.8 m³ = 1.0008 mm over 1 km².
-      ordinatesM3sPerMm: [0, 0.05, 0.09, 0.06, 0.035, 0.02, 0.0118, 0.0062, 0.0033, 0.0012, 0.0005, 0],
+      label: 'Unit hydrograph of my own',
+      summary: 'Ordinates of a unit hydrograph of a stated duration, converted to the output step by the S-curve.',
+      source: 'S-curve method: Chow, Maidment & Mays (1988) Applied Hydrology, §7.6',
+      params: [
+        {
+          key: 'durationH',
+          label: 'Duration of the unit excess',
+          unit: 'h',
+          min: 0,
+          max: Infinity,
+          minExclusive: true,
+          step: 0.25,
+          help: 'The time over which the 1 mm of excess fell.',
+        },
+        {
+          key: 'stepH',
+          label: 'Time between ordinates',
+          unit: 'h',
+          min: 0,
+          max: Infinity,
+          minExclusive: true,
+          step: 0.25,
+          help: 'The first ordinate is at the start of the excess.',
+        },
+      ],
+      defaults: {
+        kind: 'unit-hydrograph',
+        durationH: 1,
+        stepH: 1,
+        // Invented: a smooth 1-hour unit hydrograph for a 1 km² catchment; it holds
+        // 0.278 m³/s·h = 1000.8 m³ = 1.0008 mm over 1 km².
+        ordinatesM3sPerMm: [0, 0.05, 0.09, 0.06, 0.035, 0.02, 0.0118, 0.0062, 0.0033, 0.0012, 0.0005, 0],
+      },
     },
   },
-};
+  'transform',
+);
+
+export const TRANSFORMS = TRANSFORM_TABLE.specs;
 
 /** Transform kinds in the order a picker shows them. */
-export const TRANSFORM_KINDS = Object.keys(TRANSFORMS) as TransformKind[];
+export const TRANSFORM_KINDS = TRANSFORM_TABLE.kinds as TransformKind[];
 
-export function isTransformKind(kind: unknown): kind is TransformKind {
-  return typeof kind === 'string' && Object.prototype.hasOwnProperty.call(TRANSFORMS, kind);
-}
+export const isTransformKind: (kind: unknown) => kind is TransformKind = TRANSFORM_TABLE.isKind;
 
 /**
  * The number `transform` holds for the parameter `key` (a key of its
  * spec's params), or undefined when it holds none there (left out, or not a
- * number). With withTransformValue, the one place that reads a parameter by
- * its table key: TypeScript cannot tie a key of the union's table to the
- * member that holds it, so the cast lives here, as methodValue's does.
+ * number).
  */
-export function transformValue(transform: Transform, key: string): number | undefined {
-  const v: unknown = (transform as unknown as Partial<Record<string, unknown>>)[key];
-  return typeof v === 'number' ? v : undefined;
-}
+export const transformValue: (transform: Transform, key: string) => number | undefined = TRANSFORM_TABLE.number;
 
 /**
  * A copy of `transform` with the parameter `key` set to `value`, or left
  * out when `value` is undefined (an optional parameter's default). Not
  * validated: the caller checks it (validateTransform) before it is used.
  */
-export function withTransformValue<T extends Transform>(transform: T, key: string, value: number | undefined): T {
-  const next: Partial<Record<string, unknown>> = { ...transform };
-  if (value === undefined) delete next[key];
-  else next[key] = value;
-  return next as unknown as T;
-}
+export const withTransformValue: <T extends Transform>(transform: T, key: string, value: number | undefined) => T =
+  TRANSFORM_TABLE.withValue;
+
+/** Whatever `transform` holds for `key`, unchecked: for validation, which says what it got. */
+export const readTransformValue: (transform: Transform, key: string) => unknown = TRANSFORM_TABLE.read;

@@ -1,5 +1,5 @@
 import { InputError } from '../errors';
-import { TRANSFORMS, isTransformKind, type TransformParam } from './transforms';
+import { TRANSFORMS, isTransformKind, readTransformValue, type TransformParam } from './transforms';
 import type { Excess, Transform, UnitHydrographTransform } from './types';
 
 const isFiniteNumber = (v: unknown): v is number => typeof v === 'number' && Number.isFinite(v);
@@ -19,9 +19,8 @@ export function validateTransform(transform: Transform): void {
   if (!isTransformKind(transform.kind)) {
     throw new InputError('kind', `Unknown transform "${String(transform.kind)}".`);
   }
-  const values = transform as unknown as Record<string, unknown>;
   for (const param of TRANSFORMS[transform.kind].params as readonly TransformParam[]) {
-    const v = values[param.key];
+    const v = readTransformValue(transform, param.key);
     if (v === undefined && param.optional) continue;
     const unit = param.unit === 'h' ? ' h' : '';
     if (!isFiniteNumber(v)) {

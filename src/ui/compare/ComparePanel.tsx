@@ -1,6 +1,6 @@
-import { useEffect, useMemo, useRef, useState } from 'react';
-import { methodSpec, type RunoffHydrograph, type UnitSystem } from '../../core';
-import { createDerived, useScenario, type Derived } from '../../store';
+import { useEffect, useMemo, useState } from 'react';
+import { methodSpec, type UnitSystem } from '../../core';
+import { useScenario } from '../../store';
 import type { ChartFrame } from '../chart/frame';
 import { useElementWidth } from '../chart/useElementWidth';
 import { methodParametersText } from '../export/bar-table-csv';
@@ -15,22 +15,14 @@ import { hoursMinutes } from '../results/hours-minutes';
 import { commonFrames } from './common-frame';
 import { difference, type Difference } from './difference';
 import { MAX_PINS } from '../../store/pin-board';
+import { pinTotals, whenPinHydrographsReady, type PinTotals } from '../../store/pin-totals';
 import type { Pin } from '../../store/pins';
-import { totalsOf, type Totals } from '../../store/totals';
+import type { Totals } from '../../store/totals';
 import './compare.css';
 
 const SMALL_CHART_HEIGHT = 190;
 const SMALL_HYDROGRAPH_HEIGHT = 150;
 
-/** A pin's totals with its computed hydrograph (null without a unit hydrograph, or when it cannot be computed). */
-interface PinTotals extends Totals {
-  readonly hydrograph: RunoffHydrograph | null;
-}
-
-function pinTotals(pin: Pin, derived: Derived): PinTotals {
-  const computed = derived.hydrograph(pin.scenario);
-  return { ...totalsOf(pin.scenario, derived), hydrograph: computed?.ok ? computed.hydrograph : null };
-}
 const GAP_PX = 12;
 
 interface Row {
@@ -122,15 +114,14 @@ interface PinnedChartProps {
   readonly index: number;
   readonly frame: ChartFrame;
   readonly units: UnitSystem;
-  readonly derived: Derived;
+  readonly values: PinTotals;
   /** The discharge axis's top and the time axis's end shared by every pin's hydrograph (null: no pin has one). */
   readonly hydroScale: { readonly peakM3s: number; readonly endH: number } | null;
 }
 
-function PinnedChart({ pin, index, frame, units, derived, hydroScale }: PinnedChartProps) {
+function PinnedChart({ pin, index, frame, units, values, hydroScale }: PinnedChartProps) {
   const { pins } = useServices();
-  const results = derived.results(pin.scenario);
-  const method = derived.effectiveMethod(pin.scenario);
+  const { method } = values;
   const name = pin.scenario.name;
   return (
     <li className="compare__card">
@@ -153,13 +144,13 @@ function PinnedChart({ pin, index, frame, units, derived, hydroScale }: PinnedCh
       <StaticChart
         frame={frame}
         storm={pin.scenario.storm}
-        lossMm={results.ok ? results.result.lossMm : null}
+        lossMm={values.barLossMm}
         lineMmH={null}
         label={`Chart of ${name}`}
         className="compare__chart"
       />
       {hydroScale ? (
-        <PinnedHydrograph pin={pin} frame={frame} units={units} derived={derived} scale={hydroScale} />
+        <PinnedHydrograph pin={pin} frame={frame} units={units} hydrograph={values.hydrograph} scale={hydroScale} />
       ) : null}
     </li>
   );
@@ -170,17 +161,15 @@ function PinnedHydrograph({
   pin,
   frame,
   units,
-  derived,
+  hydrograph: h,
   scale,
 }: {
   pin: Pin;
   frame: ChartFrame;
   units: UnitSystem;
-  derived: Derived;
+  hydrograph: PinTotals['hydrograph'];
   scale: { readonly peakM3s: number; readonly endH: number };
 }) {
-  const computed = derived.hydrograph(pin.scenario);
-  const h = computed?.ok ? computed.hydrograph : null;
   const hFrame = useMemo(
     () =>
       staticHydrographFrame(pin.scenario.storm, scale.peakM3s, scale.endH, frame.width, SMALL_HYDROGRAPH_HEIGHT, units),
@@ -200,12 +189,13 @@ function PinnedHydrograph({
 /** The small charts, each as wide as a share of the panel, on frames with one scale. */
 function PinnedCharts({
   pins,
+  values,
   units,
-  derivedOf,
 }: {
   pins: readonly Pin[];
+  /** Each pin's derived values, in the order of `pins`. */
+  values: readonly PinTotals[];
   units: UnitSystem;
-  derivedOf: (pin: Pin) => Derived;
 }) {
   const [boxRef, width] = useElementWidth<HTMLDivElement>(1000);
   const n = Math.max(1, pins.length);
@@ -224,12 +214,11 @@ function PinnedCharts({
   let peakM3s = 0;
   let endH = 0;
   let any = false;
-  for (const pin of pins) {
-    const computed = derivedOf(pin).hydrograph(pin.scenario);
-    if (!computed?.ok) continue;
+  for (const { hydrograph } of values) {
+    if (!hydrograph) continue;
     any = true;
-    peakM3s = Math.max(peakM3s, computed.hydrograph.peakM3s);
-    endH = Math.max(endH, visibleEndH(computed.hydrograph));
+    peakM3s = Math.max(peakM3s, hydrograph.peakM3s);
+    endH = Math.max(endH, visibleEndH(hydrograph));
   }
   const hydroKey = any ? `${peakM3s} ${endH}` : '';
   const hydroScale = useMemo(
@@ -246,14 +235,15 @@ function PinnedCharts({
       >
         {pins.map((pin, i) => {
           const frame = frames[i];
-          return frame ? (
+          const own = values[i];
+          return frame && own ? (
             <PinnedChart
               key={pin.id}
               pin={pin}
               index={i}
               frame={frame}
               units={units}
-              derived={derivedOf(pin)}
+              values={own}
               hydroScale={hydroScale}
             />
           ) : null;
@@ -273,22 +263,12 @@ export function ComparePanel() {
   const { pins: board } = useServices();
   const { pins, problems } = usePins();
   const units = useScenario((s) => s.units);
-  // One set of memoised selectors per pin, so pins do not evict each other's results.
-  const deriveds = useRef(new Map<string, Derived>());
-  const derivedOf = (pin: Pin): Derived => {
-    let d = deriveds.current.get(pin.id);
-    if (!d) {
-      d = createDerived();
-      deriveds.current.set(pin.id, d);
-    }
-    return d;
-  };
   // The pins' hydrographs come from the hydrograph side of the derived values, fetched after the first screen:
   // draw again once it is here.
   const [, setHydrographReady] = useState(false);
   useEffect(() => {
     let live = true;
-    createDerived().whenHydrographReady(() => {
+    whenPinHydrographsReady(() => {
       if (live) setHydrographReady(true);
     });
     return () => {
@@ -297,7 +277,7 @@ export function ComparePanel() {
   }, []);
 
   if (pins.length === 0 && problems.length === 0) return null;
-  const totals = pins.map((p) => pinTotals(p, derivedOf(p)));
+  const totals = pins.map((p) => pinTotals(p.scenario));
   const first = totals[0];
   const tableRows = totals.some((t) => t.hydrograph !== null) ? rows(units).concat(hydrographRows(units)) : rows(units);
 
@@ -330,7 +310,7 @@ export function ComparePanel() {
       ) : null}
       {pins.length > 0 ? (
         <>
-          <PinnedCharts pins={pins} units={units} derivedOf={derivedOf} />
+          <PinnedCharts pins={pins} values={totals} units={units} />
           <div className="compare__table-box">
             <table className="compare__table">
               <caption>

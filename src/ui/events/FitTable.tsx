@@ -14,8 +14,7 @@ import {
 import { FitChart } from './FitChart';
 import { SpreadList } from './SpreadList';
 import { TransformSpread, transformCell } from './TransformSpread';
-import { useEventFits } from './use-event-fits';
-import { useEventTransformFits } from './use-event-transform-fits';
+import { useEventFits, useEventTransformFits } from './use-event-fits';
 
 const PICKS = [
   { value: 'median', label: 'Median' },
@@ -34,7 +33,7 @@ export function FitAll() {
   const pick = useScenario((s) => s.eventSet.designPick);
   const actions = useActions();
   const { fits, outcome } = useEventFits();
-  const shapes = useEventTransformFits(fits);
+  const shapes = useEventTransformFits();
   const spec = methodSpec(fits.method.kind);
   const param = spec.params.find((p) => p.key === fits.parameter);
   const paramLabel = param?.label ?? fits.parameter;

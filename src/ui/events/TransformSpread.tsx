@@ -1,6 +1,6 @@
 import type { ReactNode } from 'react';
 import { formatValue } from '../format';
-import type { EventTransformFits } from './event-transform-fits';
+import type { EventTransformFits } from '../../store/event-transform-fits';
 import { SpreadList } from './SpreadList';
 
 /** A fitted transform value with its unit (hours for lag and k; none for n). */

@@ -1,4 +1,4 @@
-import { baseflowMethodSpec } from '../../core';
+import { baseflowEndPoint, baseflowMethodSpec } from '../../core';
 import type { Streamflow } from '../../scenario/types';
 import { loadHydrographSide, useDerived, useScenario } from '../../store';
 import { lazyPart } from '../layout/LazyPart';
@@ -30,10 +30,9 @@ export function HydrographChart() {
     (d, s) =>
       s.hydrograph.transform !== null && s.catchment.areaM2 > 0 && d.results(s).ok && d.separation(s)?.ok === true,
   );
+  const endKey = flow ? baseflowEndPoint(flow.baseflow)?.key : undefined;
   const endLabel =
-    flow?.baseflow.kind === 'straight-line'
-      ? baseflowMethodSpec('straight-line').params.find((p) => p.key === 'endTimeH')?.label
-      : undefined;
+    flow && endKey ? baseflowMethodSpec(flow.baseflow.kind).params.find((p) => p.key === endKey)?.label : undefined;
   return (
     <figure className="chart hydro" aria-labelledby="hydrograph-title">
       <figcaption className="chart__head hydro__head">

@@ -1,10 +1,11 @@
 import { memo, useId, useMemo } from 'react';
 import {
+  baseflowEndPoint,
   baseflowMethodSpec,
+  baseflowNumber,
   dischargeAtH,
   findPeakIndex,
   type BaseflowResult,
-  type StraightLineBaseflow,
   type UnitSystem,
 } from '../../core';
 import type { Streamflow } from '../../scenario/types';
@@ -168,14 +169,16 @@ function RecordLayers({ flow, frame }: { flow: Streamflow; frame: HydrographFram
   const offsetH = frame.offsetH;
   const clock = recordClock(flow.startIso, storm.startIso, offsetH);
   const method = flow.baseflow;
+  const endKey = baseflowEndPoint(method)?.key;
   const endParam =
-    method.kind === 'straight-line'
-      ? baseflowMethodSpec('straight-line').params.find((p) => p.key === 'endTimeH')
-      : undefined;
-  const handle =
-    method.kind === 'straight-line' && endParam
-      ? placeEndHandle(flow, method as StraightLineBaseflow, separation?.ok ? separation.result : null)
-      : null;
+    endKey === undefined ? undefined : baseflowMethodSpec(method.kind).params.find((p) => p.key === endKey);
+  const handle = endParam
+    ? placeEndHandle(
+        flow,
+        { riseIndex: baseflowNumber(method, 'riseIndex'), endTimeH: baseflowNumber(method, endParam.key) },
+        separation?.ok ? separation.result : null,
+      )
+    : null;
 
   return (
     <>

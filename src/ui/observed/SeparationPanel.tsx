@@ -2,13 +2,14 @@ import {
   BASEFLOW_KINDS,
   BASEFLOW_METHODS,
   UNIT_LABELS,
+  baseflowEndPoint,
   baseflowMethodSpec,
   baseflowNumber,
   convertArea,
   isBaseflowKind,
-  recessionDays,
   type BaseflowMethodSpec,
   type BaseflowParam,
+  type EndPointFacts,
   type UnitSystem,
 } from '../../core';
 import type { Streamflow } from '../../scenario/types';
@@ -81,18 +82,25 @@ function ParamFields({ flow, spec }: { flow: Streamflow; spec: BaseflowMethodSpe
   );
 }
 
-/** N = A^0.2 days after the peak (Linsley, Kohler & Paulhus), from the core, and the button that uses it. */
-function RecessionEnd({ automatic }: { automatic: boolean }) {
+/**
+ * The rule that places the end point when none is set (for the straight
+ * line, N = A^0.2 days after the peak), from the core's table: its days for
+ * this catchment, and the button that goes back to it.
+ */
+function EndPointRule({ endPoint, automatic }: { endPoint: EndPointFacts; automatic: boolean }) {
   const actions = useActions();
   const areaM2 = useScenario((s) => s.catchment.areaM2);
   const units = useScenario((s) => s.units);
+  const { rule } = endPoint;
   const areaUnit = units === 'us' ? 'mi2' : 'km2';
-  const days = areaM2 > 0 ? recessionDays(areaM2) : null;
+  const days = areaM2 > 0 ? rule.daysAfterPeak(areaM2) : null;
   const words =
     days === null
       ? 'Needs the catchment area (under Results).'
-      : `N = ${formatValue(days)} days (${formatValue(days * 24)} h) for A = ${formatValue(convertArea(areaM2, 'm2', 'mi2'))} mi²` +
-        (areaUnit === 'mi2' ? '.' : ` (${formatValue(convertArea(areaM2, 'm2', areaUnit))} ${UNIT_LABELS[areaUnit]}).`);
+      : `${rule.symbol} = ${formatValue(days)} days (${formatValue(days * 24)} h) for A = ${formatValue(convertArea(areaM2, 'm2', rule.areaUnit))} ${UNIT_LABELS[rule.areaUnit]}` +
+        (areaUnit === rule.areaUnit
+          ? '.'
+          : ` (${formatValue(convertArea(areaM2, 'm2', areaUnit))} ${UNIT_LABELS[areaUnit]}).`);
   return (
     <div className="separation__recession">
       <button
@@ -100,11 +108,9 @@ function RecessionEnd({ automatic }: { automatic: boolean }) {
         aria-pressed={automatic}
         aria-describedby="recession-days"
         disabled={days === null}
-        onClick={() =>
-          actions.edit('End at N = A^0.2 days after the peak', (s) => withBaseflowParam(s, 'endTimeH', undefined))
-        }
+        onClick={() => actions.edit(rule.action, (s) => withBaseflowParam(s, endPoint.key, undefined))}
       >
-        End at N = A^0.2 days after the peak
+        {rule.action}
       </button>
       <p className="field__hint" id="recession-days">
         {words} {automatic && days !== null ? 'In use: the end follows the area.' : ''}
@@ -227,7 +233,8 @@ export function SeparationPanel() {
   const offsetH = useDerived((d, s) => d.alignment(s)?.offsetH ?? 0);
   const actions = useActions();
   if (!flow) return null;
-  const spec = baseflowMethodSpec(flow.baseflow.kind) as BaseflowMethodSpec;
+  const spec: BaseflowMethodSpec = baseflowMethodSpec(flow.baseflow.kind);
+  const endPoint = baseflowEndPoint(flow.baseflow);
   const clock = recordClock(flow.startIso, stormStart, offsetH);
   const tiles = tilesOf(separation, units, clock);
 
@@ -267,8 +274,8 @@ export function SeparationPanel() {
               {spec.conventions}
             </p>
           ) : null}
-          {flow.baseflow.kind === 'straight-line' ? (
-            <RecessionEnd automatic={baseflowNumber(flow.baseflow, 'endTimeH') === undefined} />
+          {endPoint ? (
+            <EndPointRule endPoint={endPoint} automatic={baseflowNumber(flow.baseflow, endPoint.key) === undefined} />
           ) : null}
           <div className="method__foot">
             <button type="button" onClick={() => actions.edit('Use default baseflow values', withBaseflowDefaults)}>

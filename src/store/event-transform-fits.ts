@@ -1,7 +1,7 @@
 import {
   TRANSFORMS,
+  attempt,
   fitEventTransforms,
-  isInputError,
   separateBaseflow,
   summariseTransformFits,
   type EventTransformFit,
@@ -9,11 +9,10 @@ import {
   type HydrographEvent,
   type ObservedDirectRunoff,
   type TransformParam,
-} from '../../core';
-import { alignRecord } from '../../store/alignment';
-import { transformFitParameter } from '../../store/hydrograph-edits';
-import type { Scenario, SetEvent } from '../../scenario/types';
-import type { EventFits } from '../../store/event-fits';
+} from '../core';
+import type { Scenario, SetEvent } from '../scenario/types';
+import { alignRecord } from './alignment';
+import type { EventFits } from './event-fits';
 
 /** The transform fitted for every event: the parameter, each event's fit by id, and their spread. */
 export interface EventTransformFits {
@@ -33,16 +32,24 @@ const withoutTarget = (summary: FitSummary, more: number): FitSummary =>
 function observedDirect(event: SetEvent, areaM2: number): ObservedDirectRunoff | null {
   const flow = event.streamflow;
   if (flow === null) return null;
-  try {
+  const r = attempt(() => {
     const sep = separateBaseflow({ timesH: flow.timesH, dischargeM3s: flow.dischargeM3s }, flow.baseflow, { areaM2 });
     const { offsetH } = alignRecord(event.storm.startIso, flow.startIso, flow.offsetH);
     const timesH = new Float64Array(flow.timesH.length);
     for (let i = 0; i < timesH.length; i++) timesH[i] = (flow.timesH[i] as number) + offsetH;
     return { timesH, directM3s: sep.directM3s };
-  } catch (error) {
-    if (isInputError(error)) return null;
-    throw error;
-  }
+  });
+  return r.ok ? r.value : null;
+}
+
+/** What the transform fits read of a scenario: the events, the area and the hydrograph's transform settings. */
+export interface TransformFitInputs {
+  readonly events: Scenario['eventSet']['events'];
+  readonly areaM2: number;
+  readonly transform: Scenario['hydrograph']['transform'];
+  /** The transform parameter fitted (store `transformFitParameter`), or null. */
+  readonly parameter: string | null;
+  readonly objective: Scenario['hydrograph']['objective'];
 }
 
 /**
@@ -52,20 +59,19 @@ function observedDirect(event: SetEvent, areaM2: number): ObservedDirectRunoff |
  * workbench's objective), or null when no transform with a parameter to fit
  * is chosen.
  */
-export function fitAllEventTransforms(s: Scenario, fits: EventFits): EventTransformFits | null {
-  const transform = s.hydrograph.transform;
-  const key = transformFitParameter(s.hydrograph);
+export function fitAllEventTransforms(inputs: TransformFitInputs, fits: EventFits): EventTransformFits | null {
+  const { transform, parameter: key, areaM2 } = inputs;
   if (transform === null || key === null) return null;
   const param = (TRANSFORMS[transform.kind].params as readonly TransformParam[]).find((p) => p.key === key);
   if (param === undefined) return null;
-  const byEvent = new Map(s.eventSet.events.map((e) => [e.id, e]));
+  const byEvent = new Map(inputs.events.map((e) => [e.id, e]));
   const events: HydrographEvent[] = fits.calibratable.map((c) => {
     const event = byEvent.get(c.id);
     return {
       id: c.id,
       storm: c.storm,
       observedExcessMm: c.observedExcessMm,
-      observed: event ? observedDirect(event, s.catchment.areaM2) : null,
+      observed: event ? observedDirect(event, areaM2) : null,
     };
   });
   const results = fitEventTransforms(events, {
@@ -73,8 +79,8 @@ export function fitAllEventTransforms(s: Scenario, fits: EventFits): EventTransf
     lossParameter: fits.parameter,
     transform,
     parameter: key,
-    areaM2: s.catchment.areaM2,
-    objective: s.hydrograph.objective,
+    areaM2,
+    objective: inputs.objective,
   });
   return {
     param,
