@@ -3,6 +3,14 @@ import type { LossBuffers, Storm } from '../core';
 /** Storms from this many bars on take their results' arrays from a ring (below); smaller ones fresh arrays. */
 export const RING_FROM_BARS = 1 << 16;
 
+/** Values paged in per task while the ring warms (2 MB): each task a few ms, so input is never held up. */
+const WARM_CHUNK = 1 << 18;
+
+/** Runs a task later, after what the page is doing now. */
+export type Later = (task: () => void) => void;
+
+const afterNow: Later = (task) => void setTimeout(task, 0);
+
 /**
  * Loss and excess arrays for one storm's results, taken in turn from a ring
  * of three pairs. Fresh arrays for 10⁶ bars cost about 65 ms in chromium per
@@ -10,15 +18,44 @@ export const RING_FROM_BARS = 1 << 16;
  * once per storm. A result stays intact through the two results that follow
  * it (a deferred render may still show the one before the latest); the ring
  * starts anew for another storm object.
+ *
+ * The first result takes the first pair; the other two are made and paged in
+ * (written once) in small tasks `later`, while the storm is only on screen:
+ * made at the first moves of a drag instead, they held each of those moves
+ * for 50 to 230 ms on 10⁶ bars (measured, bench:ui drag1e6). A pair a result
+ * has taken is never written by the warming.
  */
-export function lossRing(): (storm: Storm) => LossBuffers | undefined {
+export function lossRing(later: Later = afterNow): (storm: Storm) => LossBuffers | undefined {
   let owner: Storm | null = null;
   let ring: LossBuffers[] = [];
   let turn = 0;
+  const pair = (n: number): LossBuffers => ({ lossMm: new Float64Array(n), excessMm: new Float64Array(n) });
+
+  const warm = (storm: Storm, n: number): void => {
+    // Values paged in so far, counted over the slots' arrays in order (slot s's loss from 2n·s, its excess from
+    // 2n·s + n): slot 0 is the first result's, so warming starts at slot 1.
+    let at = 2 * n;
+    const step = (): void => {
+      let slot = Math.floor(at / (2 * n));
+      // A slot is taken once the turns have passed it (the ring hands slots out in order).
+      if (turn > slot) at = 2 * n * (slot = turn);
+      if (storm !== owner || slot > 2) return;
+      const from = at % n;
+      const to = Math.min(n, from + WARM_CHUNK);
+      (ring[slot] ??= pair(n))[at % (2 * n) < n ? 'lossMm' : 'excessMm'].fill(0, from, to);
+      at += to - from;
+      later(step);
+    };
+    later(step);
+  };
+
   return (storm) => {
     const n = storm.depthsMm.length;
     if (n < RING_FROM_BARS) return undefined;
-    if (storm !== owner) [owner, ring, turn] = [storm, [], 0];
-    return (ring[turn++ % 3] ??= { lossMm: new Float64Array(n), excessMm: new Float64Array(n) });
+    if (storm !== owner) {
+      [owner, ring, turn] = [storm, [], 0];
+      warm(storm, n);
+    }
+    return (ring[turn++ % 3] ??= pair(n));
   };
 }

@@ -31,6 +31,60 @@ describe('lossRing', () => {
   });
 });
 
+describe('lossRing warming its other pairs while the storm is only shown', () => {
+  /** A `later` that keeps its tasks until run() is called. */
+  function queue(): { later: (task: () => void) => void; run: () => number } {
+    const tasks: (() => void)[] = [];
+    return {
+      later: (task) => void tasks.push(task),
+      run: () => {
+        let ran = 0;
+        for (let task = tasks.shift(); task; task = tasks.shift()) {
+          ran++;
+          task();
+        }
+        return ran;
+      },
+    };
+  }
+
+  it('makes the two other pairs ahead of the drag, in small tasks, and hands them out in turn', () => {
+    const q = queue();
+    const next = lossRing(q.later);
+    const n = RING_FROM_BARS * 8; // 2^19 bars
+    const storm = longStorm(n);
+    const a = next(storm);
+    // n = 2^19 values an array; chunks of 2^18: 2 tasks an array, 4 a pair, 8 for the two pairs, then one that
+    // finds nothing left to warm.
+    expect(q.run()).toBe(9);
+    const [b, c] = [next(storm), next(storm)];
+    expect(b?.lossMm.length).toBe(n);
+    expect(new Set([a, b, c]).size).toBe(3);
+    expect(next(storm)).toBe(a);
+  });
+
+  it('never writes a pair a result has taken, and stops for another storm', () => {
+    const q = queue();
+    const next = lossRing(q.later);
+    const storm = longStorm(RING_FROM_BARS * 2);
+    next(storm);
+    const b = next(storm); // slot 1 taken before any warming ran
+    b?.lossMm.fill(7);
+    b?.excessMm.fill(3);
+    q.run();
+    expect(b?.lossMm.every((v) => v === 7)).toBe(true);
+    expect(b?.excessMm.every((v) => v === 3)).toBe(true);
+    // A new storm: the old storm's warming does nothing more (the queue holds the new storm's alone).
+    const warmOld = queue();
+    const next2 = lossRing(warmOld.later);
+    next2(storm);
+    next2(longStorm(RING_FROM_BARS));
+    // The old storm's one task finds it gone (1); the new storm's 2^16 values are one chunk an array, 2 a pair,
+    // 4 for the two pairs (4), and one more finds nothing left (1).
+    expect(warmOld.run()).toBe(1 + 4 + 1);
+  });
+});
+
 describe('the store’s results of a large storm', () => {
   it('match fresh computeLosses for every method, from buffers another method wrote', () => {
     const n = RING_FROM_BARS + 10;

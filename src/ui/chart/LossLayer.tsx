@@ -1,7 +1,6 @@
 import { memo, useMemo } from 'react';
 import type { Scenario } from '../../scenario/types';
-import { barsPath } from './bar-path';
-import { barTopsPx, type ChartFrame } from './frame';
+import { intensityPath, type ChartFrame } from './frame';
 
 /**
  * The lost part of each bar (from the core's per-bar loss), drawn over the
@@ -19,14 +18,8 @@ export const LossLayer = memo(function LossLayer({
   lossMm: Float64Array;
   partMm: Float64Array | null;
 }) {
-  const loss = useMemo(
-    () => barsPath(frame.edgesPx, barTopsPx(frame, lossMm, storm.durationsH), frame.plot.bottom),
-    [frame, storm, lossMm],
-  );
-  const part = useMemo(
-    () => (partMm ? barsPath(frame.edgesPx, barTopsPx(frame, partMm, storm.durationsH), frame.plot.bottom) : null),
-    [frame, storm, partMm],
-  );
+  const loss = useMemo(() => intensityPath(frame, lossMm, storm.durationsH), [frame, storm, lossMm]);
+  const part = useMemo(() => (partMm ? intensityPath(frame, partMm, storm.durationsH) : null), [frame, storm, partMm]);
   return (
     <g>
       <path className="layer layer--loss" d={loss} data-layer="loss" />

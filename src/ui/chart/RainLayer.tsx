@@ -1,7 +1,6 @@
 import { memo, useMemo } from 'react';
 import type { Storm } from '../../core';
-import { barsPath } from './bar-path';
-import { barTopsPx, type ChartFrame } from './frame';
+import { intensityPath, type ChartFrame } from './frame';
 
 /**
  * Every bar at its full rainfall intensity, in the excess colour; the loss
@@ -9,9 +8,6 @@ import { barTopsPx, type ChartFrame } from './frame';
  * apart from the moving line, so a drag never rebuilds it.
  */
 export const RainLayer = memo(function RainLayer({ frame, storm }: { frame: ChartFrame; storm: Storm }) {
-  const d = useMemo(
-    () => barsPath(frame.edgesPx, barTopsPx(frame, storm.depthsMm, storm.durationsH), frame.plot.bottom),
-    [frame, storm],
-  );
+  const d = useMemo(() => intensityPath(frame, storm.depthsMm, storm.durationsH), [frame, storm]);
   return <path className="layer layer--excess" d={d} data-layer="rain" />;
 });

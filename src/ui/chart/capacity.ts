@@ -1,4 +1,3 @@
-import { line } from 'd3-shape';
 import {
   barEdgesH,
   infiltrationCapacity,
@@ -43,15 +42,25 @@ export function capacityAboveTop(frame: ChartFrame, rateMmH: ArrayLike<number>):
   return high;
 }
 
-/** Points are clipped to the top of the axis, so an unbounded capacity (dry soil) runs along it. */
-function toPath(frame: ChartFrame, tH: ArrayLike<number>, rateMmH: ArrayLike<number>): string {
+/** A coordinate to 0.001 px, as d3-shape's line() writes it by default (its digits(3)). */
+const px3 = (v: number): number => Math.round(v * 1000) / 1000;
+
+/**
+ * The polyline through the samples, written as d3-shape's line() writes it
+ * (test/ui/chart/capacity.test.ts compares the two): a dozen lines here kept
+ * d3-shape and d3-path, about 1.5 kB of gzip, off the first screen. Points
+ * are clipped to the top of the axis, so an unbounded capacity (dry soil)
+ * runs along it.
+ */
+export function capacityPath(frame: ChartFrame, tH: ArrayLike<number>, rateMmH: ArrayLike<number>): string {
   const { x, y, topMmH } = frame;
-  const points: [number, number][] = [];
+  let d = '';
   for (let i = 0; i < tH.length; i++) {
     const r = rateMmH[i] as number;
-    points.push([x(tH[i] as number), y(Number.isFinite(r) ? Math.min(r, topMmH) : topMmH)]);
+    const py = y(Number.isFinite(r) ? Math.min(r, topMmH) : topMmH);
+    d += `${i ? 'L' : 'M'}${px3(x(tH[i] as number))},${px3(py)}`;
   }
-  return line()(points) ?? '';
+  return d;
 }
 
 /**
@@ -80,7 +89,7 @@ function drawCurve(kind: LossKind, frame: ChartFrame, storm: Storm, method: Loss
   if (method.kind !== kind || storm.depthsMm.length === 0) return null;
   const tH = capacitySampleTimes(frame, storm);
   const rate = infiltrationCapacity(storm, method, tH);
-  return rate ? { path: toPath(frame, tH, rate), aboveTopMmH: capacityAboveTop(frame, rate) } : null;
+  return rate ? { path: capacityPath(frame, tH, rate), aboveTopMmH: capacityAboveTop(frame, rate) } : null;
 }
 
 const coreCurve = (kind: LossKind): CapacityCurve => ({

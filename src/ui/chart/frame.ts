@@ -5,7 +5,8 @@ import { formatValue } from '../format';
 import { displayUnit, fromDisplay, toDisplay, unitText } from '../units';
 import { formatWallDate, formatWallTime, wallClockMs } from './clock';
 import { elapsedTicksH, formatElapsed } from './elapsed-ticks';
-import { linearMap, mapLinear } from './linear-px';
+import { intensityBarsPath } from './bar-path';
+import { mapLinear } from './linear-px';
 import type { TimeSpanH } from './time-span';
 
 /** The bars' one duration, h, or null when they differ (to a part in 10⁹, as the rainfall line reads them). */
@@ -133,29 +134,10 @@ export function chartFrame(
   };
 }
 
-let scratch = new Float64Array(0);
-
 /**
- * Pixel tops of bars whose height is a depth per bar spread over its
- * duration: the bar's intensity, drawn (a hyetograph's defining picture).
- * In one shared buffer, valid until the next call (every caller hands it
- * straight to barsPath): a fresh array of 10⁶ bars costs tens of ms in
- * chromium to zero and page in, on every move of a drag.
+ * Bars whose height is a depth per bar spread over its duration (the bar's
+ * intensity, a hyetograph's defining picture) as one path on the frame.
  */
-export function barTopsPx(frame: ChartFrame, depthsMm: ArrayLike<number>, durationsH: ArrayLike<number>): Float64Array {
-  const n = depthsMm.length;
-  if (scratch.length < n) scratch = new Float64Array(n);
-  const tops = scratch.subarray(0, n);
-  const { y } = frame;
-  const m = linearMap(y);
-  if (m === null) {
-    for (let k = 0; k < n; k++) tops[k] = y((depthsMm[k] as number) / (durationsH[k] as number));
-    return tops;
-  }
-  const { d0, span, r0, r1 } = m;
-  for (let k = 0; k < n; k++) {
-    const t = ((depthsMm[k] as number) / (durationsH[k] as number) - d0) / span;
-    tops[k] = r0 * (1 - t) + r1 * t;
-  }
-  return tops;
+export function intensityPath(frame: ChartFrame, depthsMm: ArrayLike<number>, durationsH: ArrayLike<number>): string {
+  return intensityBarsPath(frame.edgesPx, depthsMm, durationsH, frame.y, frame.plot.bottom);
 }

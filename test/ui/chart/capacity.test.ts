@@ -1,7 +1,9 @@
 // @vitest-environment jsdom
+import { line } from 'd3-shape';
+import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
 import { computeLosses, greenAmptRateMmH, hortonCapacityMmH, type LossMethod } from '../../../src/core';
-import { CAPACITY_CURVES } from '../../../src/ui/chart/capacity';
+import { CAPACITY_CURVES, capacityPath } from '../../../src/ui/chart/capacity';
 import { chartFrame } from '../../../src/ui/chart/frame';
 
 const storm = { durationsH: [0.5, 0.5, 0.5, 0.5], depthsMm: [2, 6, 10, 2] };
@@ -108,5 +110,28 @@ describe('a capacity above the chart’s top is marked, never clipped silently',
       screen.getByText(/The infiltration capacity runs above the top of the chart.*up to 80 mm\/h\./),
     ).toBeInTheDocument();
     expect(screen.getByText('▲ capacity above the chart')).toBeInTheDocument();
+  });
+});
+
+describe('the capacity polyline', () => {
+  it('is written as d3-shape’s line() writes the same points (the reference library, at its default 3 digits)', () => {
+    fc.assert(
+      fc.property(
+        fc.array(
+          fc.record({
+            tH: fc.double({ min: 0, max: 2, noNaN: true }),
+            rateMmH: fc.oneof(fc.double({ min: 0, max: 80, noNaN: true }), fc.constant(Infinity)),
+          }),
+          { minLength: 2, maxLength: 60 },
+        ),
+        (samples) => {
+          const tH = samples.map((p) => p.tH);
+          const rate = samples.map((p) => p.rateMmH);
+          const clipped = rate.map((r) => (Number.isFinite(r) ? Math.min(r, frame.topMmH) : frame.topMmH));
+          const reference = line()(tH.map((t, i) => [frame.x(t), frame.y(clipped[i] as number)]));
+          expect(capacityPath(frame, tH, rate)).toBe(reference);
+        },
+      ),
+    );
   });
 });

@@ -1,7 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import { convertRate } from '../../../src/core';
 import { formatWallTime, wallClockMs } from '../../../src/ui/chart/clock';
-import { MARGIN, barTopsPx, chartFrame } from '../../../src/ui/chart/frame';
+import { MARGIN, chartFrame, intensityPath } from '../../../src/ui/chart/frame';
 
 const storm = { durationsH: [0.5, 0.5, 0.5, 0.5], depthsMm: [2, 6, 10, 2] }; // peak 20 mm/h
 
@@ -22,9 +22,12 @@ describe('chart frame', () => {
     const f = chartFrame(storm, 800, 300, 'si');
     expect(f.edgesPx[0]).toBe(MARGIN.left);
     expect(f.edgesPx[4]).toBe(800 - MARGIN.right);
-    const tops = barTopsPx(f, storm.depthsMm, storm.durationsH);
-    expect(tops[2]).toBeCloseTo(f.y(20), 12);
-    expect(tops[0]).toBeCloseTo(f.y(4), 12);
+    // 718 px over 2 h: bars 179.5 px wide, each its own rectangle at its intensity (2 mm / 0.5 h = 4 mm/h, 12, 20, 4).
+    const r = (v: number): number => Math.round(v * 100) / 100;
+    const tops = [...intensityPath(f, storm.depthsMm, storm.durationsH).matchAll(/V([\d.]+)H/g)].map((m) =>
+      Number(m[1]),
+    );
+    expect(tops).toEqual([4, 12, 20, 4].map((mmH) => r(f.y(mmH))));
   });
 
   it('without a start the time axis is hours and minutes from the start', () => {

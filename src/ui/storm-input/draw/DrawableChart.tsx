@@ -1,7 +1,6 @@
 import { useEffect, useLayoutEffect, useRef, useState, type PointerEvent, type ReactNode, type RefObject } from 'react';
 import { useActions, useScenario } from '../../../store';
-import { barsPath } from '../../chart/bar-path';
-import { barTopsPx, chartFrame, type ChartFrame } from '../../chart/frame';
+import { chartFrame, intensityPath, type ChartFrame } from '../../chart/frame';
 import { frameThrottle, type FrameThrottle } from '../../interaction/frame-throttle';
 import { useChartHeight } from '../../chart/chart-height';
 import { useTimeSpanH } from '../../chart/time-span';
@@ -198,9 +197,7 @@ function DrawLayer({ wrapRef }: { wrapRef: RefObject<HTMLDivElement | null> }) {
   const s = stroke.current;
   const shown = s ? s.frame : frame;
   const at = s ? s.box : box;
-  const preview = s
-    ? barsPath(s.frame.edgesPx, barTopsPx(s.frame, s.depthsMm, s.durationsH), s.frame.plot.bottom)
-    : null;
+  const preview = s ? intensityPath(s.frame, s.depthsMm, s.durationsH) : null;
 
   return (
     <div
