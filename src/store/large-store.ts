@@ -57,9 +57,11 @@ export function pack(value: unknown): unknown {
 
 /** The plain document back from a record: every Float64Array a plain array again. */
 export function unpack(value: unknown): unknown {
-  if (value instanceof Float64Array) {
-    const list = new Array<number>(value.length);
-    for (let k = 0; k < value.length; k++) list[k] = value[k] as number;
+  // ArrayBuffer.isView, not instanceof: a record's copy may come from another realm (a test's IndexedDB double under jsdom).
+  if (ArrayBuffer.isView(value) && !(value instanceof DataView)) {
+    const column = value as unknown as ArrayLike<number>;
+    const list = new Array<number>(column.length);
+    for (let k = 0; k < column.length; k++) list[k] = column[k] as number;
     return list;
   }
   if (Array.isArray(value)) return value.map(unpack);
