@@ -110,6 +110,16 @@ export function LibraryPanel({ id }: { id: string }) {
     };
   }, [refresh, link]);
 
+  const usesLarge = listing.entries.some((e) => 'large' in e) || aside.some((c) => c.large !== undefined);
+  useEffect(() => {
+    // The large store is in use here: records nothing names are deleted later, at a quiet moment (src/store/large-sweep.ts).
+    if (usesLarge)
+      void import('../../store/large-store').then(
+        (m) => m.sweepSoon(storage),
+        () => undefined,
+      );
+  }, [usesLarge, storage]);
+
   /** Runs a library call; its problems (or its notices) show as the status. */
   function run<T>(result: LibraryResult<T>, done: (value: T) => Status | null): void {
     refresh();
