@@ -120,7 +120,8 @@ const marker = readLargeMarker(readSlot());
 if (marker)
   waits.push(
     import('./store/large-store')
-      .then((m) => m.readLarge(marker))
+      // The large store is in use: records nothing names are deleted later, at a quiet moment (src/store/large-sweep.ts).
+      .then((m) => (m.sweepSoon(storage), m.readLarge(marker)))
       .then(
         (read) => (large = read),
         (error: unknown) =>

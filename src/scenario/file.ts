@@ -20,7 +20,7 @@ export function scenarioToFileText(scenario: Scenario): string {
 }
 
 /** A file name for saving: the scenario name made safe for file systems. */
-export function scenarioFileName(scenario: Scenario): string {
+export function scenarioFileName(scenario: Pick<Scenario, 'name'>): string {
   const base = scenario.name
     .normalize('NFKD')
     .replace(/[\u0300-\u036f]/g, '')

@@ -1,9 +1,10 @@
-import { readIsoDateTime } from '../core';
+import { isLossKind, readIsoDateTime } from '../core';
 import { capProblems, describeValue, problem, type Problem } from './problems';
 import { parseScenario } from './schema';
 import { MAX_NAME_LENGTH } from './text-limits';
 import { createStoredSlot, envelopeCodec, type StorageLike } from './stored-slot';
 import type { Scenario } from './types';
+import type { LossKind } from '../core';
 
 export type { StorageLike } from './stored-slot';
 
@@ -14,15 +15,47 @@ export interface LibraryEntry {
   readonly scenario: Scenario;
 }
 
+/**
+ * Where a saved scenario too large for the list's localStorage key is:
+ * its numbers are a record in the browser's large store (IndexedDB,
+ * src/store/large-store.ts, read by src/store/large-library.ts), and the list
+ * holds only this pointer with what the list shows. The record is written
+ * before the entry naming it, so an entry always names a whole record; the
+ * name here wins over the record's (a rename changes only the entry).
+ */
+export interface LargeRef {
+  /** The record's key in the large store. */
+  readonly record: string;
+  /** How many numbers its columns hold (src/store/large-marker.ts, `columnNumbers`). */
+  readonly numbers: number;
+  readonly name: string;
+  /** The storm's bars and the loss method, for the list's summary line. */
+  readonly bars: number;
+  readonly method: LossKind;
+}
+
+/** A saved scenario kept in the large store: the list holds its pointer, not its numbers. */
+export interface LargeLibraryEntry {
+  readonly id: string;
+  readonly savedAt: string;
+  readonly large: LargeRef;
+}
+
+/** An entry of the list, either kind. */
+export type SavedEntry = LibraryEntry | LargeLibraryEntry;
+
 /** A deleted scenario kept for undo, with where it stood in the list. */
-export interface DeletedEntry extends LibraryEntry {
+export type DeletedEntry = SavedEntry & {
   readonly deletedAt: string;
   readonly position: number;
-}
+};
+
+/** The scenario's name as the list shows it. */
+export const entryName = (entry: SavedEntry): string => ('large' in entry ? entry.large.name : entry.scenario.name);
 
 export interface LibraryListing {
   /** Saved scenarios in the user's order. */
-  readonly entries: readonly LibraryEntry[];
+  readonly entries: readonly SavedEntry[];
   /** Deleted scenarios that can be restored, most recently deleted first. */
   readonly deleted: readonly DeletedEntry[];
   /** Storage keys under which damaged saved data was set aside, oldest first. */
@@ -33,22 +66,34 @@ export interface LibraryListing {
   readonly problems: readonly Problem[];
 }
 
-/** `problems` on success are notices (e.g. damaged data set aside while reading). */
+/**
+ * `problems` on success are notices (e.g. damaged data set aside while
+ * reading). `freed`: large-store records that no entry (saved or deleted)
+ * names after this change, for the caller to delete (records left behind
+ * are deleted later by src/store/large-sweep.ts).
+ */
 export type LibraryResult<T> =
-  | { readonly ok: true; readonly value: T; readonly problems: readonly Problem[] }
+  | {
+      readonly ok: true;
+      readonly value: T;
+      readonly problems: readonly Problem[];
+      readonly freed?: readonly string[];
+    }
   | { readonly ok: false; readonly problems: readonly Problem[] };
 
 export interface ScenarioLibrary {
   list(): LibraryListing;
-  get(id: string): LibraryResult<LibraryEntry>;
+  get(id: string): LibraryResult<SavedEntry>;
   /** Saves a new entry, or replaces entry `id` when it is still in the list. */
   save(scenario: Scenario, id?: string): LibraryResult<LibraryEntry>;
-  rename(id: string, name: string): LibraryResult<LibraryEntry>;
-  /** A copy placed right after the original, named "… (copy)". */
-  duplicate(id: string): LibraryResult<LibraryEntry>;
+  /** As `save`, for a scenario whose record is already written in the large store. */
+  saveLarge(ref: LargeRef, id?: string): LibraryResult<LargeLibraryEntry>;
+  rename(id: string, name: string): LibraryResult<SavedEntry>;
+  /** A copy placed right after the original, named "… (copy)" (a large entry's copy names the same record). */
+  duplicate(id: string): LibraryResult<SavedEntry>;
   /** Moves the entry to the deleted list, from which `restore` brings it back. */
   delete(id: string): LibraryResult<DeletedEntry>;
-  restore(id: string): LibraryResult<LibraryEntry>;
+  restore(id: string): LibraryResult<SavedEntry>;
 }
 
 export interface LibraryOptions {
@@ -66,7 +111,7 @@ export const MAX_DELETED = 20;
 
 interface State {
   nextId: number;
-  entries: LibraryEntry[];
+  entries: SavedEntry[];
   deleted: DeletedEntry[];
   setAside: string[];
 }
@@ -82,6 +127,8 @@ const ISO_UTC = /^\d{4}-\d{2}-\d{2}T\d{2}:\d{2}:\d{2}(\.\d+)?Z$/;
 /** A stamp as toISOString writes it, every field in range (the core's one reader: no 30 February). */
 const isUtcStamp = (text: string): boolean => ISO_UTC.test(text) && readIsoDateTime(text) !== null;
 const ID = /^s[1-9]\d{0,14}$/;
+/** A large-store record's key: letters, digits and . : _ - (src/store/large-library.ts writes "library.<time>.<random>"). */
+const RECORD = /^[\w.:-]{1,200}$/;
 
 function emptyState(): State {
   return { nextId: 1, entries: [], deleted: [], setAside: [] };
@@ -93,7 +140,7 @@ function readEntry(
   where: string,
   deleted: boolean,
   problems: Problem[],
-): DeletedEntry | LibraryEntry | undefined {
+): DeletedEntry | SavedEntry | undefined {
   const fail = (text: string): undefined => {
     problems.push({ path: where, message: `${where}: ${text}` });
     return undefined;
@@ -103,26 +150,57 @@ function readEntry(
   if (typeof id !== 'string' || !ID.test(id)) return fail(`has no proper id (got ${describeValue(id)}).`);
   if (typeof savedAt !== 'string' || !isUtcStamp(savedAt))
     return fail(`has no proper savedAt time (got ${describeValue(savedAt)}).`);
-  const parsed = parseScenario(scenario);
-  if (!parsed.ok) {
-    const name =
-      isRecord(scenario) && typeof scenario['name'] === 'string' ? ` "${scenario['name'].slice(0, 60)}"` : '';
-    for (const p of parsed.problems) {
-      problems.push({
-        path: `${where}.scenario${p.path === '' ? '' : `.${p.path}`}`,
-        message: `${where}${name}: ${p.message}`,
-      });
+  let entry: SavedEntry;
+  if ('large' in raw) {
+    const large = readLargeRef(raw['large']);
+    if (typeof large === 'string') return fail(`its pointer into this browser’s larger database is damaged: ${large}`);
+    entry = { id, savedAt, large };
+  } else {
+    const parsed = parseScenario(scenario);
+    if (!parsed.ok) {
+      const name =
+        isRecord(scenario) && typeof scenario['name'] === 'string' ? ` "${scenario['name'].slice(0, 60)}"` : '';
+      for (const p of parsed.problems) {
+        problems.push({
+          path: `${where}.scenario${p.path === '' ? '' : `.${p.path}`}`,
+          message: `${where}${name}: ${p.message}`,
+        });
+      }
+      return undefined;
     }
-    return undefined;
+    entry = { id, savedAt, scenario: parsed.scenario };
   }
-  if (!deleted) return { id, savedAt, scenario: parsed.scenario };
+  if (!deleted) return entry;
   const { deletedAt, position } = raw;
   if (typeof deletedAt !== 'string' || !isUtcStamp(deletedAt))
     return fail(`has no proper deletedAt time (got ${describeValue(deletedAt)}).`);
   if (typeof position !== 'number' || !Number.isSafeInteger(position) || position < 0) {
     return fail(`has no proper position (got ${describeValue(position)}).`);
   }
-  return { id, savedAt, scenario: parsed.scenario, deletedAt, position };
+  return { ...entry, deletedAt, position };
+}
+
+const isCount = (x: unknown): x is number => typeof x === 'number' && Number.isSafeInteger(x) && x >= 0;
+
+/** A stored pointer into the large store, or what is wrong with it. */
+export function readLargeRef(raw: unknown): LargeRef | string {
+  if (!isRecord(raw)) return `it is not a pointer (got ${describeValue(raw)}).`;
+  const { record, numbers, name, bars, method } = raw;
+  if (typeof record !== 'string' || !RECORD.test(record))
+    return `it names no proper record (got ${describeValue(record)}).`;
+  if (typeof name !== 'string' || name.trim() === '' || name.length > MAX_NAME_LENGTH)
+    return `it has no proper name (got ${describeValue(name)}).`;
+  if (!isCount(numbers) || !isCount(bars))
+    return `its counts are not whole numbers (got ${describeValue(numbers)}, ${describeValue(bars)}).`;
+  if (!isLossKind(method)) return `its loss method is not one this version knows (got ${describeValue(method)}).`;
+  return { record, numbers, name, bars, method };
+}
+
+/** The large-store records the entries name. */
+function namedRecords(state: State): Set<string> {
+  const names = new Set<string>();
+  for (const e of [...state.entries, ...state.deleted]) if ('large' in e) names.add(e.large.record);
+  return names;
 }
 
 /** Reads the body of a stored list (the envelope already checked): what could be read, and what was left out. */
@@ -203,7 +281,7 @@ export function createScenarioLibrary(storage: StorageLike, options: LibraryOpti
   });
   /** Each entry as this list last showed it (its stored JSON), to tell another tab's change of it. */
   const shown = new Map<string, string>();
-  const remember = (entries: readonly LibraryEntry[]): void => {
+  const remember = (entries: readonly SavedEntry[]): void => {
     shown.clear();
     for (const e of entries) shown.set(e.id, JSON.stringify(e));
   };
@@ -281,7 +359,7 @@ export function createScenarioLibrary(storage: StorageLike, options: LibraryOpti
     if (seen === undefined) return undefined;
     const entry = state.entries.find((e) => e.id === id);
     if (entry && JSON.stringify(entry) === seen) return undefined;
-    const name = (JSON.parse(seen) as LibraryEntry).scenario.name;
+    const name = entryName(JSON.parse(seen) as SavedEntry);
     return {
       ok: false,
       problems: [
@@ -321,23 +399,39 @@ export function createScenarioLibrary(storage: StorageLike, options: LibraryOpti
         problems: [...loaded.problems, problem(`${what} was not done: the saved list cannot be written safely now.`)],
       };
     }
+    const before = namedRecords(loaded.state);
     const result = apply(loaded.state, loaded.problems);
     if (!result.ok) return result;
     const failed = write(loaded.state, what);
     if (failed) return { ok: false, problems: [...loaded.problems, failed] };
     // This list's own write is what it has shown from now on.
     remember(loaded.state.entries);
-    return result;
+    const after = namedRecords(loaded.state);
+    const freed = [...before].filter((r) => !after.has(r));
+    return freed.length > 0 ? { ...result, freed } : result;
   }
 
   function copyName(state: State, name: string): string {
-    const names = new Set(state.entries.map((e) => e.scenario.name));
+    const names = new Set(state.entries.map(entryName));
     const base = name.replace(/ \(copy( \d+)?\)$/, '');
     // The copy's name keeps within the cap: the original's is shortened to make room for the suffix.
     const named = (suffix: string): string => `${base.slice(0, MAX_NAME_LENGTH - suffix.length)}${suffix}`;
     let candidate = named(' (copy)');
     for (let n = 2; names.has(candidate); n++) candidate = named(` (copy ${n})`);
     return candidate;
+  }
+
+  /** Saves a new entry, or replaces entry `id` when it is still in the list (and was not changed in another tab). */
+  function put<E extends SavedEntry>(id: string | undefined, make: (id: string, savedAt: string) => E) {
+    return change<E>('The scenario', (state, notices) => {
+      const conflict = id === undefined ? undefined : changedElsewhere(state, id, notices);
+      if (conflict) return conflict;
+      const index = id === undefined ? -1 : findEntry(state, id);
+      const entry = make(index >= 0 ? (state.entries[index] as SavedEntry).id : `s${state.nextId++}`, now());
+      if (index >= 0) state.entries[index] = entry;
+      else state.entries.push(entry);
+      return { ok: true, value: entry, problems: notices };
+    });
   }
 
   return {
@@ -356,19 +450,13 @@ export function createScenarioLibrary(storage: StorageLike, options: LibraryOpti
     save(scenario, id) {
       const parsed = parseScenario(scenario);
       if (!parsed.ok) return { ok: false, problems: parsed.problems };
-      return change<LibraryEntry>('The scenario', (state, notices) => {
-        const conflict = id === undefined ? undefined : changedElsewhere(state, id, notices);
-        if (conflict) return conflict;
-        const index = id === undefined ? -1 : findEntry(state, id);
-        const entry: LibraryEntry = {
-          id: index >= 0 ? (state.entries[index] as LibraryEntry).id : `s${state.nextId++}`,
-          savedAt: now(),
-          scenario: parsed.scenario,
-        };
-        if (index >= 0) state.entries[index] = entry;
-        else state.entries.push(entry);
-        return { ok: true, value: entry, problems: notices };
-      });
+      return put(id, (entryId, savedAt) => ({ id: entryId, savedAt, scenario: parsed.scenario }));
+    },
+
+    saveLarge(ref, id) {
+      const read = readLargeRef(ref);
+      if (typeof read === 'string') return { ok: false, problems: [problem(`The pointer to the scenario: ${read}`)] };
+      return put(id, (entryId, savedAt) => ({ id: entryId, savedAt, large: read }));
     },
 
     rename(id, name) {
@@ -383,28 +471,32 @@ export function createScenarioLibrary(storage: StorageLike, options: LibraryOpti
           ],
         };
       }
-      return change<LibraryEntry>('The new name', (state, notices) => {
+      return change<SavedEntry>('The new name', (state, notices) => {
         const conflict = changedElsewhere(state, id, notices);
         if (conflict) return conflict;
         const index = findEntry(state, id);
         if (index < 0) return missing(id, notices);
-        const old = state.entries[index] as LibraryEntry;
-        const entry: LibraryEntry = { ...old, scenario: { ...old.scenario, name: trimmed } };
+        const old = state.entries[index] as SavedEntry;
+        const entry: SavedEntry =
+          'large' in old
+            ? { ...old, large: { ...old.large, name: trimmed } }
+            : { ...old, scenario: { ...old.scenario, name: trimmed } };
         state.entries[index] = entry;
         return { ok: true, value: entry, problems: notices };
       });
     },
 
     duplicate(id) {
-      return change<LibraryEntry>('The copy', (state, notices) => {
+      return change<SavedEntry>('The copy', (state, notices) => {
         const index = findEntry(state, id);
         if (index < 0) return missing(id, notices);
-        const original = state.entries[index] as LibraryEntry;
-        const entry: LibraryEntry = {
-          id: `s${state.nextId++}`,
-          savedAt: now(),
-          scenario: { ...original.scenario, name: copyName(state, original.scenario.name) },
-        };
+        const original = state.entries[index] as SavedEntry;
+        const base = { id: `s${state.nextId++}`, savedAt: now() };
+        const name = copyName(state, entryName(original));
+        const entry: SavedEntry =
+          'large' in original
+            ? { ...base, large: { ...original.large, name } }
+            : { ...base, scenario: { ...original.scenario, name } };
         state.entries.splice(index + 1, 0, entry);
         return { ok: true, value: entry, problems: notices };
       });
@@ -416,7 +508,7 @@ export function createScenarioLibrary(storage: StorageLike, options: LibraryOpti
         if (conflict) return conflict;
         const index = findEntry(state, id);
         if (index < 0) return missing(id, notices);
-        const [entry] = state.entries.splice(index, 1) as [LibraryEntry];
+        const [entry] = state.entries.splice(index, 1) as [SavedEntry];
         const gone: DeletedEntry = { ...entry, deletedAt: now(), position: index };
         state.deleted = [gone, ...state.deleted].slice(0, MAX_DELETED);
         return { ok: true, value: gone, problems: notices };
@@ -424,7 +516,7 @@ export function createScenarioLibrary(storage: StorageLike, options: LibraryOpti
     },
 
     restore(id) {
-      return change<LibraryEntry>('The restore', (state, notices) => {
+      return change<SavedEntry>('The restore', (state, notices) => {
         const index = state.deleted.findIndex((e) => e.id === id);
         if (index < 0) {
           return {
@@ -433,7 +525,7 @@ export function createScenarioLibrary(storage: StorageLike, options: LibraryOpti
           };
         }
         const [gone] = state.deleted.splice(index, 1) as [DeletedEntry];
-        const entry: LibraryEntry = { id: gone.id, savedAt: gone.savedAt, scenario: gone.scenario };
+        const { deletedAt: _at, position: _position, ...entry } = gone;
         state.entries.splice(Math.min(gone.position, state.entries.length), 0, entry);
         return { ok: true, value: entry, problems: notices };
       });

@@ -1,6 +1,6 @@
-import { createStore, del, get, set, type UseStore } from 'idb-keyval';
+import { createStore, del, get, keys, set, type UseStore } from 'idb-keyval';
 import { parseScenario } from '../scenario';
-import { describeError, type StoredSlot } from '../scenario/stored-slot';
+import { describeError, type StorageLike, type StoredSlot } from '../scenario/stored-slot';
 import type { Scenario } from '../scenario/types';
 import { columnNumbers, LARGE_MARKER_TAG, readLargeMarker, type LargeMarker } from './large-marker';
 import type { WorkbenchStore } from './scenario-store';
@@ -57,9 +57,11 @@ export function pack(value: unknown): unknown {
 
 /** The plain document back from a record: every Float64Array a plain array again. */
 export function unpack(value: unknown): unknown {
-  if (value instanceof Float64Array) {
-    const list = new Array<number>(value.length);
-    for (let k = 0; k < value.length; k++) list[k] = value[k] as number;
+  // ArrayBuffer.isView, not instanceof: a record's copy may come from another realm (a test's IndexedDB double under jsdom).
+  if (ArrayBuffer.isView(value) && !(value instanceof DataView)) {
+    const column = value as unknown as ArrayLike<number>;
+    const list = new Array<number>(column.length);
+    for (let k = 0; k < column.length; k++) list[k] = column[k] as number;
     return list;
   }
   if (Array.isArray(value)) return value.map(unpack);
@@ -192,6 +194,32 @@ export async function putRecord(id: string, raw: unknown): Promise<void> {
 /** Deletes a record no marker names any more. Never throws. */
 export async function dropLarge(id: string): Promise<void> {
   await del(id, open()).catch(() => undefined);
+}
+
+/** Every record's key in the large store (./large-sweep.ts). May throw. */
+export async function recordKeys(): Promise<IDBValidKey[]> {
+  return keys(open());
+}
+
+/** A start-up delay before the sweep (./large-sweep.ts), so it never competes with the first screen's work. */
+const SWEEP_AFTER_MS = 10_000;
+let sweeping = false;
+
+/**
+ * Deletes, once a page, the large store's records nothing names (./large-sweep.ts):
+ * some seconds after start-up, at a quiet moment. Called where the large
+ * store is already in use (its code loaded), so a page that never had a
+ * large scenario never loads it for this. Never throws.
+ */
+export function sweepSoon(storage: StorageLike | null): void {
+  if (sweeping || !storage) return;
+  sweeping = true;
+  setTimeout(() => {
+    void idle()
+      .then(() => import('./large-sweep'))
+      .then((m) => m.sweepLarge(storage, new Date(), { keys: recordKeys, drop: dropLarge }))
+      .catch(() => undefined);
+  }, SWEEP_AFTER_MS);
 }
 
 /** Where a scenario too large for the usual storage is, told once a page when it is first saved there. */

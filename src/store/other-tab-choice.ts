@@ -57,8 +57,18 @@ export async function takeTheirs(host: OtherTabChoiceHost): Promise<void> {
 export async function keepMine(host: OtherTabChoiceHost): Promise<void> {
   const { store, slot } = host;
   const mine = store.getState().scenario;
-  const { createScenarioLibrary } = await import('../scenario/library');
-  const saved = createScenarioLibrary(host.storage).save({ ...mine, name: copyName(mine.name) });
+  const [{ createScenarioLibrary }, { saveToList }] = await Promise.all([
+    import('../scenario/library'),
+    import('./large-library'),
+  ]);
+  // A scenario too large for the list's localStorage key goes to the large store (./large-library.ts).
+  const saved = await saveToList(
+    createScenarioLibrary(host.storage),
+    { ...mine, name: copyName(mine.name) },
+    {
+      now: new Date(),
+    },
+  );
   if (!saved.ok) {
     store.getState().actions.setNotice({
       kind: 'save-failed',

@@ -1,4 +1,5 @@
 import type { Scenario } from '../../src/scenario/types';
+import type { SavedEntry } from '../../src/scenario/library';
 import { readScenario } from '../../src/store';
 
 /**
@@ -58,4 +59,26 @@ export function deepFreeze<T>(value: T): T {
     Object.freeze(value);
   }
   return value;
+}
+
+/** The scenario of a saved-list entry held in the list itself (a large-store entry holds only a pointer: the test fails). */
+export function scenarioOf(entry: SavedEntry): Scenario {
+  if ('large' in entry) throw new Error(`entry ${entry.id} is kept in the large store, not in the list`);
+  return entry.scenario;
+}
+
+/**
+ * `memoryStorage` that refuses, as a browser's full localStorage does (a
+ * QuotaExceededError), any one text longer than `maxChars`.
+ */
+export function quotaStorage(maxChars: number, initial: Record<string, string> = {}) {
+  const storage = memoryStorage(initial);
+  const setItem = storage.setItem;
+  storage.setItem = (key: string, value: string) => {
+    if (value.length > maxChars) {
+      throw new DOMException(`Setting "${key}" exceeded the quota.`, 'QuotaExceededError');
+    }
+    setItem(key, value);
+  };
+  return storage;
 }

@@ -11,6 +11,7 @@ import {
   type StorageLike,
 } from '../../src/scenario';
 import { scenarioArb } from '../helpers/scenario-arbitraries';
+import { scenarioOf } from '../helpers/scenario-fixtures';
 
 /** Web Storage in memory, with a quota and switches to make it fail. */
 class MemoryStorage implements StorageLike {
@@ -64,7 +65,7 @@ function refusal<T>(result: LibraryResult<T>): string[] {
 
 const named = (name: string): Scenario => ({ ...DEMO_SCENARIO, name });
 const names = (library: ReturnType<typeof setup>['library']): string[] =>
-  library.list().entries.map((e) => e.scenario.name);
+  library.list().entries.map((e) => scenarioOf(e).name);
 
 describe('the saved-scenario list', () => {
   it('starts empty, with nothing wrong', () => {
@@ -93,7 +94,7 @@ describe('the saved-scenario list', () => {
     value(library.save(named('B')));
     const again = value(library.save({ ...named('A'), notes: 'second try' }, a.id));
     expect(again.id).toBe(a.id);
-    expect(library.list().entries.map((e) => [e.id, e.scenario.notes])).toEqual([
+    expect(library.list().entries.map((e) => [e.id, scenarioOf(e).notes])).toEqual([
       ['s1', 'second try'],
       ['s2', DEMO_SCENARIO.notes],
     ]);
@@ -117,7 +118,7 @@ describe('the saved-scenario list', () => {
     const { library } = setup();
     const a = value(library.save(named('A')));
     value(library.save(named('B')));
-    expect(value(library.rename(a.id, '  Event of 14 July  ')).scenario.name).toBe('Event of 14 July');
+    expect(scenarioOf(value(library.rename(a.id, '  Event of 14 July  '))).name).toBe('Event of 14 July');
     expect(names(library)).toEqual(['Event of 14 July', 'B']);
     expect(library.list().entries[0]?.id).toBe(a.id);
   });
@@ -184,7 +185,7 @@ describe('the saved-scenario list', () => {
       fc.property(scenarioArb, (scenario) => {
         const { library, storage } = setup();
         const id = value(library.save(scenario)).id;
-        expect(value(createScenarioLibrary(storage).get(id)).scenario).toStrictEqual(scenario);
+        expect(scenarioOf(value(createScenarioLibrary(storage).get(id)))).toStrictEqual(scenario);
       }),
       { numRuns: 150, seed: 32 },
     );
@@ -211,7 +212,7 @@ describe('the saved-scenario list', () => {
     expect(storage.snapshot()).toEqual(before);
     // Once tab B has shown the other tab's version, it may change it.
     expect(names(tabB)).toEqual(['A, renamed in tab A']);
-    expect(value(tabB.rename(a.id, 'A, renamed in tab B')).scenario.name).toBe('A, renamed in tab B');
+    expect(scenarioOf(value(tabB.rename(a.id, 'A, renamed in tab B'))).name).toBe('A, renamed in tab B');
   });
 
   it('does not bring back an entry another tab deleted since this list showed it', () => {
@@ -263,7 +264,7 @@ describe('the saved-scenario list with damaged or failing storage', () => {
     const text = JSON.stringify(stored);
     storage.items.set(LIBRARY_KEY, text);
     const listing = library.list();
-    expect(listing.entries.map((e) => e.scenario.name)).toEqual(['A']);
+    expect(listing.entries.map((e) => scenarioOf(e).name)).toEqual(['A']);
     expect(listing.problems.map((p) => p.path)).toEqual(['', 'entries[1].scenario.storm.depthsMm[0]']);
     expect(listing.problems[1]?.message).toBe(
       'entries[1] "B": storm.depthsMm[0] (bar 1): must be a number ≥ 0 (rain depth, mm) (got -3).',

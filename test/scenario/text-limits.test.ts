@@ -9,6 +9,7 @@ import {
   type StorageLike,
 } from '../../src/scenario';
 import { FOUR_EVENTS } from '../helpers/event-fixtures';
+import { scenarioOf } from '../helpers/scenario-fixtures';
 
 // Names and notes are capped in the schema (src/scenario/text-limits.ts), as
 // the saved list's rename field already was: 200 characters for a name,
@@ -62,7 +63,7 @@ describe('the saved list keeps names within the cap', () => {
     const copy = library.duplicate(saved.value.id);
     if (!copy.ok) throw new Error(copy.problems.map((p) => p.message).join(' '));
     // 200 − 7 = 193 characters of the name, then " (copy)".
-    expect(copy.value.scenario.name).toBe(`${'n'.repeat(193)} (copy)`);
+    expect(scenarioOf(copy.value).name).toBe(`${'n'.repeat(193)} (copy)`);
     expect(library.list().problems).toEqual([]);
   });
 });

@@ -1,7 +1,7 @@
 import { afterEach, beforeEach, describe, expect, it, vi } from 'vitest';
 import { createScenarioLibrary } from '../../src/scenario/library';
 import { STORAGE_KEY, createWorkbenchStore, persistStore, type OtherTabWatch } from '../../src/store';
-import { FOUR_BARS, memoryStorage } from '../helpers/scenario-fixtures';
+import { FOUR_BARS, memoryStorage, scenarioOf } from '../helpers/scenario-fixtures';
 
 // Two tabs of the workbench share one browser storage. The browser tells
 // every other tab when one writes (the "storage" event); here a small bus
@@ -94,7 +94,7 @@ describe('two tabs of the workbench', () => {
     if (notice?.kind !== 'other-tab') throw new Error('tab A was not told');
     await notice.keepMine();
     const list = createScenarioLibrary(storage).list();
-    expect(list.entries.map((e) => e.scenario.name)).toEqual(['Tab A (this tab’s copy)']);
+    expect(list.entries.map((e) => scenarioOf(e).name)).toEqual(['Tab A (this tab’s copy)']);
     expect(saved(storage).name).toBe('Tab A');
     expect(a.store.getState().notice).toBeNull();
     expect(b.store.getState().notice?.kind).toBe('other-tab');

@@ -1,8 +1,11 @@
 import { useMemo, useCallback, useEffect, useState, type FormEvent, type KeyboardEvent } from 'react';
 import { instantMs, methodSpec } from '../../core';
-import type { DeletedEntry, LibraryEntry, LibraryListing, LibraryResult, Problem } from '../../scenario';
-import { createScenarioLibrary } from '../../scenario/library';
+import type { DeletedEntry, LibraryListing, LibraryResult, Problem, SavedEntry } from '../../scenario';
+import { scenarioFileName } from '../../scenario/file';
+import { createScenarioLibrary, entryName } from '../../scenario/library';
+import { problem } from '../../scenario/problems';
 import { useActions, useWorkbenchStore } from '../../store';
+import { entryFileText, largeWhere, LIST_LARGE_TEXT, openEntry, saveToList } from '../../store/large-library';
 import { listSetAside, type SetAsideCopy } from '../../store/set-aside';
 import { ListProblems } from './ListProblems';
 import { SetAsideCopies } from './SetAsideCopies';
@@ -18,10 +21,18 @@ function savedAtText(iso: string): string {
   return t === null ? iso : savedAtFormat.format(t);
 }
 
-function summary(entry: LibraryEntry): string {
-  const n = entry.scenario.storm.depthsMm.length;
-  return `${formatCount(n)} bar${n === 1 ? '' : 's'} · ${methodSpec(entry.scenario.method.kind).label}`;
+function summary(entry: SavedEntry): string {
+  const [n, kind] =
+    'large' in entry
+      ? [entry.large.bars, entry.large.method]
+      : [entry.scenario.storm.depthsMm.length, entry.scenario.method.kind];
+  const where = 'large' in entry ? ` · ${largeWhere(entry.large.record)}` : '';
+  return `${formatCount(n)} bar${n === 1 ? '' : 's'} · ${methodSpec(kind).label}${where}`;
 }
+
+/** What saving said: where a large entry is kept. */
+const savedText = (entry: SavedEntry, verb: string): string =>
+  `${verb} ${quoted(entryName(entry))}${verb === 'Saved' ? ' to the list' : ' in the list with the scenario on screen'}.${'large' in entry ? ` ${LIST_LARGE_TEXT}` : ''}`;
 
 type Status =
   | { readonly kind: 'done'; readonly text: string }
@@ -30,8 +41,8 @@ type Status =
 
 const EMPTY: LibraryListing = { entries: [], deleted: [], setAside: [], canWrite: false, problems: [] };
 
-function RenameForm({ entry, onDone }: { entry: LibraryEntry; onDone: (name: string | null) => void }) {
-  const [name, setName] = useState(entry.scenario.name);
+function RenameForm({ entry, onDone }: { entry: SavedEntry; onDone: (name: string | null) => void }) {
+  const [name, setName] = useState(entryName(entry));
   const submit = (e: FormEvent): void => {
     e.preventDefault();
     onDone(name);
@@ -46,7 +57,7 @@ function RenameForm({ entry, onDone }: { entry: LibraryEntry; onDone: (name: str
     <form className="library__rename" onSubmit={submit}>
       <input
         type="text"
-        aria-label={`New name for ${entry.scenario.name}`}
+        aria-label={`New name for ${entryName(entry)}`}
         value={name}
         autoFocus
         onChange={(e) => setName(e.currentTarget.value)}
@@ -81,6 +92,8 @@ export function LibraryPanel({ id }: { id: string }) {
   const [renaming, setRenaming] = useState<string | null>(null);
   /** The entry the scenario on screen was opened from or saved as, offered for "Update". */
   const [currentId, setCurrentId] = useState<string | null>(null);
+  /** A save, open or download of a large entry under way (they wait for the browser's larger database). */
+  const [busy, setBusy] = useState(false);
 
   const refresh = useCallback(() => {
     // Reading the list may itself set damaged data aside, so the copies are read after it.
@@ -97,6 +110,16 @@ export function LibraryPanel({ id }: { id: string }) {
     };
   }, [refresh, link]);
 
+  const usesLarge = listing.entries.some((e) => 'large' in e) || aside.some((c) => c.large !== undefined);
+  useEffect(() => {
+    // The large store is in use here: records nothing names are deleted later, at a quiet moment (src/store/large-sweep.ts).
+    if (usesLarge)
+      void import('../../store/large-store').then(
+        (m) => m.sweepSoon(storage),
+        () => undefined,
+      );
+  }, [usesLarge, storage]);
+
   /** Runs a library call; its problems (or its notices) show as the status. */
   function run<T>(result: LibraryResult<T>, done: (value: T) => Status | null): void {
     refresh();
@@ -111,6 +134,52 @@ export function LibraryPanel({ id }: { id: string }) {
         : next,
     );
   }
+
+  /** Saves the scenario on screen (as a new entry, or over `id`): large ones wait for the larger database. */
+  const saveCurrent = (id: string | undefined, verb: 'Saved' | 'Updated'): void => {
+    setBusy(true);
+    setStatus({ kind: 'done', text: `Saving ${quoted(store.getState().scenario.name)}…` });
+    void saveToList(library as NonNullable<typeof library>, store.getState().scenario, {
+      ...(id === undefined ? {} : { id }),
+      now: now(),
+    }).then((result) => {
+      setBusy(false);
+      run(result, (entry) => {
+        setCurrentId(entry.id);
+        return { kind: 'done', text: savedText(entry, verb) };
+      });
+    });
+  };
+
+  const open = (entry: SavedEntry): void => {
+    const name = entryName(entry);
+    if ('large' in entry) {
+      setBusy(true);
+      setStatus({ kind: 'done', text: `Opening ${quoted(name)} from this browser’s larger database…` });
+    }
+    void openEntry(entry).then((read) => {
+      setBusy(false);
+      if (!read.ok) {
+        setStatus({ kind: 'problem', text: 'That was not opened.', problems: [problem(read.message)] });
+        return;
+      }
+      actions.replaceScenario(read.scenario, `Open ${quoted(name)} from the saved list`);
+      setCurrentId(entry.id);
+      setStatus({ kind: 'done', text: `Opened ${quoted(name)}. Undo brings back the scenario you had before.` });
+    });
+  };
+
+  const download = (entry: SavedEntry): void => {
+    void entryFileText(entry).then((file) => {
+      if (!file.ok) {
+        setStatus({ kind: 'problem', text: 'That was not downloaded.', problems: [problem(file.message)] });
+        return;
+      }
+      const name = scenarioFileName({ name: entryName(entry) });
+      saveFile(new Blob([file.text], { type: 'application/json' }), name);
+      setStatus({ kind: 'done', text: `Downloaded ${name}.${file.note}` });
+    });
+  };
 
   if (!library) {
     return (
@@ -132,26 +201,14 @@ export function LibraryPanel({ id }: { id: string }) {
           <button
             type="button"
             className="button--primary"
-            onClick={() =>
-              run(library.save(store.getState().scenario), (entry) => {
-                setCurrentId(entry.id);
-                return { kind: 'done', text: `Saved ${quoted(entry.scenario.name)} to the list.` };
-              })
-            }
+            disabled={busy}
+            onClick={() => saveCurrent(undefined, 'Saved')}
           >
             Save current scenario to list
           </button>
           {current ? (
-            <button
-              type="button"
-              onClick={() =>
-                run(library.save(store.getState().scenario, current.id), (entry) => ({
-                  kind: 'done',
-                  text: `Updated ${quoted(entry.scenario.name)} in the list with the scenario on screen.`,
-                }))
-              }
-            >
-              Update {quoted(current.scenario.name)}
+            <button type="button" disabled={busy} onClick={() => saveCurrent(current.id, 'Updated')}>
+              Update {quoted(entryName(current))}
             </button>
           ) : null}
         </div>
@@ -163,14 +220,14 @@ export function LibraryPanel({ id }: { id: string }) {
         {status?.kind === 'done' ? <p>{status.text}</p> : null}
         {status?.kind === 'deleted' ? (
           <p>
-            Deleted {quoted(status.entry.scenario.name)} —{' '}
+            Deleted {quoted(entryName(status.entry))} —{' '}
             <button
               type="button"
               className="share-button--small"
               onClick={() =>
                 run(library.restore(status.entry.id), (entry) => ({
                   kind: 'done',
-                  text: `Brought back ${quoted(entry.scenario.name)}.`,
+                  text: `Brought back ${quoted(entryName(entry))}.`,
                 }))
               }
             >
@@ -188,7 +245,7 @@ export function LibraryPanel({ id }: { id: string }) {
       ) : (
         <ul className="library__list" aria-label="Scenarios saved in this browser">
           {listing.entries.map((entry) => {
-            const name = entry.scenario.name;
+            const name = entryName(entry);
             return (
               <li
                 key={entry.id}
@@ -202,7 +259,7 @@ export function LibraryPanel({ id }: { id: string }) {
                       if (next === null) return;
                       run(library.rename(entry.id, next), (renamed) => ({
                         kind: 'done',
-                        text: `Renamed to ${quoted(renamed.scenario.name)}.`,
+                        text: `Renamed to ${quoted(entryName(renamed))}.`,
                       }));
                     }}
                   />
@@ -219,16 +276,18 @@ export function LibraryPanel({ id }: { id: string }) {
                     type="button"
                     className="share-button--small"
                     aria-label={`Open ${name}`}
-                    onClick={() => {
-                      actions.replaceScenario(entry.scenario, `Open ${quoted(name)} from the saved list`);
-                      setCurrentId(entry.id);
-                      setStatus({
-                        kind: 'done',
-                        text: `Opened ${quoted(name)}. Undo brings back the scenario you had before.`,
-                      });
-                    }}
+                    disabled={busy}
+                    onClick={() => open(entry)}
                   >
                     Open
+                  </button>
+                  <button
+                    type="button"
+                    className="share-button--small"
+                    aria-label={`Download ${name}`}
+                    onClick={() => download(entry)}
+                  >
+                    Download
                   </button>
                   <button
                     type="button"
@@ -245,7 +304,7 @@ export function LibraryPanel({ id }: { id: string }) {
                     onClick={() =>
                       run(library.duplicate(entry.id), (copy) => ({
                         kind: 'done',
-                        text: `Made ${quoted(copy.scenario.name)}.`,
+                        text: `Made ${quoted(entryName(copy))}.`,
                       }))
                     }
                   >

@@ -2,7 +2,7 @@
 import { screen, waitFor, within } from '@testing-library/react';
 import { describe, expect, it } from 'vitest';
 import { LIBRARY_KEY, createScenarioLibrary } from '../../../src/scenario';
-import { FOUR_BARS, memoryStorage } from '../../helpers/scenario-fixtures';
+import { FOUR_BARS, memoryStorage, scenarioOf } from '../../helpers/scenario-fixtures';
 import { lazyPartsLoaded } from '../../helpers/render';
 import { renderTools } from '../../helpers/render-tools';
 
@@ -49,7 +49,7 @@ describe('the saved list with another tab open', () => {
     expect(
       createScenarioLibrary(storage)
         .list()
-        .entries.map((e) => e.scenario.name),
+        .entries.map((e) => scenarioOf(e).name),
     ).toEqual(['Base case, renamed elsewhere']);
   });
 });

@@ -2,14 +2,14 @@
 import { screen, within } from '@testing-library/react';
 import { describe, expect, it } from 'vitest';
 import { LIBRARY_KEY, createScenarioLibrary } from '../../../src/scenario';
-import { FOUR_BARS, memoryStorage } from '../../helpers/scenario-fixtures';
+import { FOUR_BARS, memoryStorage, scenarioOf } from '../../helpers/scenario-fixtures';
 import { lazyPartsLoaded } from '../../helpers/render';
 import { NOW, SHARED, renderTools } from '../../helpers/render-tools';
 
 const names = (storage: ReturnType<typeof memoryStorage>) =>
   createScenarioLibrary(storage)
     .list()
-    .entries.map((e) => e.scenario.name);
+    .entries.map((e) => scenarioOf(e).name);
 
 async function openPanel(user: ReturnType<typeof renderTools>['user']) {
   const toggle = screen.getByRole('button', { name: 'Saved scenarios' });
@@ -85,7 +85,7 @@ describe('the saved list in this browser', () => {
     actions.setBarDepth(0, 9.75);
     await user.click(within(panel).getByRole('button', { name: `Update “${SHARED.name}”` }));
     const entry = library.list().entries[0];
-    expect(entry?.scenario.storm.depthsMm[0]).toBe(9.75);
+    expect((entry && scenarioOf(entry))?.storm.depthsMm[0]).toBe(9.75);
     expect(library.list().entries).toHaveLength(1);
 
     await user.click(screen.getByRole('button', { name: 'Undo' }));

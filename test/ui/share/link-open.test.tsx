@@ -4,7 +4,7 @@ import { describe, expect, it } from 'vitest';
 import { LIBRARY_KEY, MAX_LINK_CHARS, createScenarioLibrary, encodeScenarioLink } from '../../../src/scenario';
 import type { Scenario } from '../../../src/scenario/types';
 import { STORAGE_KEY } from '../../../src/store';
-import { FOUR_BARS, memoryStorage } from '../../helpers/scenario-fixtures';
+import { FOUR_BARS, memoryStorage, scenarioOf } from '../../helpers/scenario-fixtures';
 import { SHARED, renderTools } from '../../helpers/render-tools';
 
 /** A browser that has been used: its own scenario saved. */
@@ -55,7 +55,7 @@ describe('opening a share link', () => {
     expect(scenario().storm.depthsMm[1]).toBe(5.5);
     const listed = createScenarioLibrary(storage)
       .list()
-      .entries.map((e) => e.scenario);
+      .entries.map((e) => scenarioOf(e));
     expect(listed).toEqual([own]);
     expect(
       screen.getByText(

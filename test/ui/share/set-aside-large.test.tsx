@@ -6,7 +6,7 @@ import { describe, expect, it, vi } from 'vitest';
 import { createScenarioLibrary } from '../../../src/scenario';
 import { SET_ASIDE_PREFIX } from '../../../src/store';
 import { LARGE_DB, LARGE_OBJECTS, pack } from '../../../src/store/large-store';
-import { FOUR_BARS, memoryStorage } from '../../helpers/scenario-fixtures';
+import { FOUR_BARS, memoryStorage, scenarioOf } from '../../helpers/scenario-fixtures';
 import { renderTools, savedText } from '../../helpers/render-tools';
 import { lazyPartsLoaded } from '../../helpers/render';
 
@@ -41,7 +41,7 @@ async function openCopy(user: ReturnType<typeof renderTools>['user']) {
 const savedNames = (storage: ReturnType<typeof memoryStorage>) =>
   createScenarioLibrary(storage)
     .list()
-    .entries.map((e) => e.scenario.name);
+    .entries.map((e) => scenarioOf(e).name);
 
 describe('a set-aside copy that points into the large store', { timeout: 20_000 }, () => {
   it('is listed with where its scenario is, and Restore reads the record it names into the saved list', async () => {

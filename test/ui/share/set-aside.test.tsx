@@ -3,7 +3,7 @@ import { screen, within } from '@testing-library/react';
 import { describe, expect, it } from 'vitest';
 import { LIBRARY_FORMAT_TAG, LIBRARY_KEY, LIBRARY_VERSION, createScenarioLibrary } from '../../../src/scenario';
 import { SET_ASIDE_PREFIX, STORAGE_KEY } from '../../../src/store';
-import { FOUR_BARS, memoryStorage } from '../../helpers/scenario-fixtures';
+import { FOUR_BARS, memoryStorage, scenarioOf } from '../../helpers/scenario-fixtures';
 import { SHARED, renderTools, savedText } from '../../helpers/render-tools';
 import { lazyPartsLoaded } from '../../helpers/render';
 
@@ -46,7 +46,7 @@ async function openCopies(user: ReturnType<typeof renderTools>['user']) {
 const savedNames = (storage: ReturnType<typeof memoryStorage>) =>
   createScenarioLibrary(storage)
     .list()
-    .entries.map((e) => e.scenario.name);
+    .entries.map((e) => scenarioOf(e).name);
 
 // A generous time limit: the whole workbench renders in each test, on a shared, busy machine.
 describe('set-aside copies in Saved scenarios', { timeout: 20_000 }, () => {
