@@ -10,6 +10,20 @@
  */
 export function barsPath(edgesPx: ArrayLike<number>, topPx: ArrayLike<number>, basePx: number): string {
   const n = topPx.length;
+  const path = barsPathWriter(basePx);
+  for (let k = 0; k < n; k++) path.bar(edgesPx[k] as number, edgesPx[k + 1] as number, topPx[k] as number);
+  return path.end();
+}
+
+/**
+ * barsPath one bar at a time, for a caller that works out each bar's pixels
+ * as it goes (no column of 10⁶ edges or tops made first): `bar` in order of
+ * increasing x, then `end` for the path.
+ */
+export function barsPathWriter(basePx: number): {
+  bar: (x0: number, x1: number, top: number) => void;
+  end: () => string;
+} {
   const parts: string[] = [];
   const r = (v: number): number => Math.round(v * 100) / 100;
   const rect = (x0: number, x1: number, top: number): void => {
@@ -24,15 +38,12 @@ export function barsPath(edgesPx: ArrayLike<number>, topPx: ArrayLike<number>, b
     column = NaN;
     columnTop = basePx;
   };
-  for (let k = 0; k < n; k++) {
-    const x0 = edgesPx[k] as number;
-    const x1 = edgesPx[k + 1] as number;
-    const top = topPx[k] as number;
+  const bar = (x0: number, x1: number, top: number): void => {
     if (x1 - x0 >= 1) {
       flush();
       const gap = x1 - x0 >= 6 ? 1 : 0;
       rect(x0, x1 - gap, top);
-      continue;
+      return;
     }
     const c = Math.floor(x0);
     if (c !== column) {
@@ -41,7 +52,12 @@ export function barsPath(edgesPx: ArrayLike<number>, topPx: ArrayLike<number>, b
       columnEnd = x1;
     } else if (x1 > columnEnd) columnEnd = x1;
     if (top < columnTop) columnTop = top;
-  }
-  flush();
-  return parts.join('');
+  };
+  return {
+    bar,
+    end: () => {
+      flush();
+      return parts.join('');
+    },
+  };
 }
