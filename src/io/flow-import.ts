@@ -14,6 +14,7 @@ import {
   type Series,
   type SeriesSettings,
 } from './series';
+import { readPlainColumns } from './plain-columns';
 import type { TextRow } from './table-text';
 import { formatTimeOfDay, isoAt } from './time-values';
 
@@ -32,6 +33,13 @@ export interface FlowRecord {
   readonly timesH: number[];
   readonly dischargeM3s: number[];
   /** ISO 8601 date-time of the first sample, when the times carry dates (or a date was given for times of day). */
+  readonly startIso?: string;
+}
+
+/** A FlowRecord as the columnar reader gives it: columns of doubles (handed from a worker without a copy). */
+export interface FlowColumns {
+  readonly timesH: Float64Array;
+  readonly dischargeM3s: Float64Array;
   readonly startIso?: string;
 }
 
@@ -116,7 +124,26 @@ function failureSummary(series: Series | null, s: FlowImportSettings, count: num
   return `Read ${plural(series.table.rows.length, 'data line', undefined, format)} as discharge in ${unitLabel(s.unit)} ${describeTimes(s, format)}; ${text}`;
 }
 
-function successSummary(record: FlowRecord, series: Series, s: FlowImportSettings, format: NumberFormat): string {
+/** What a summary needs of the lines read: by the general reader (a Series) or by columns (plain-columns.ts). */
+interface FlowLines {
+  readonly times: { readonly firstTimeOfDayMs: number | null } | null;
+  readonly blankLinesSkipped: number;
+  /** The text's line number of data row k. */
+  readonly lineOf: (k: number) => number | undefined;
+}
+
+const seriesLines = (series: Series): FlowLines => ({
+  times: series.times,
+  blankLinesSkipped: series.table.blankLinesSkipped,
+  lineOf: (k) => series.table.rows[k]?.line,
+});
+
+function successSummary(
+  record: FlowRecord | FlowColumns,
+  lines: FlowLines,
+  s: FlowImportSettings,
+  format: NumberFormat,
+): string {
   const { timesH, dischargeM3s } = record;
   const n = timesH.length;
   const steps: number[] = [];
@@ -128,22 +155,22 @@ function successSummary(record: FlowRecord, series: Series, s: FlowImportSetting
     : `${describeSteps(steps, format).replace(' (irregular steps)', '')} apart (irregular steps)`;
   let head = `${plural(n, 'sample', undefined, format)} ${spacing}`;
   if (record.startIso !== undefined) head += ` from ${formatIsoForPeople(record.startIso)}`;
-  else if (series.times !== null && series.times.firstTimeOfDayMs !== null) {
-    head += ` from ${formatTimeOfDay(series.times.firstTimeOfDayMs)} (time of day; no date given)`;
+  else if (lines.times !== null && lines.times.firstTimeOfDayMs !== null) {
+    head += ` from ${formatTimeOfDay(lines.times.firstTimeOfDayMs)} (time of day; no date given)`;
   }
   head += `, spanning ${formatDuration(timesH[n - 1] as number, format)}`;
   const peak = (dischargeM3s[peakAt] as number) / DISCHARGE_UNITS[s.unit];
-  const peakRow = series.table.rows[peakAt];
+  const peakLine = lines.lineOf(peakAt);
   const parts = [
     head,
     `discharge in ${unitLabel(s.unit)}`,
-    `peak ${formatAmount(peak, format)} ${unitLabel(s.unit)}${peakRow ? ` on line ${peakRow.line}` : ''}`,
+    `peak ${formatAmount(peak, format)} ${unitLabel(s.unit)}${peakLine !== undefined ? ` on line ${peakLine}` : ''}`,
   ];
   const notes: string[] = [];
-  if (series.times === null)
+  if (lines.times === null)
     notes.push(`no times, so samples are ${formatDuration(s.stepMinutesIfNoTime / 60, format)} apart as set`);
   if (s.skipLines > 0) notes.push(`${plural(s.skipLines, 'line', undefined, format)} skipped at the top`);
-  const blank = series.table.blankLinesSkipped;
+  const blank = lines.blankLinesSkipped;
   if (blank > 0) notes.push(`${plural(blank, 'blank line', undefined, format)} inside the data skipped`);
   return `${parts.join(', ')}${notes.length > 0 ? `; ${notes.join('; ')}` : ''}.`;
 }
@@ -182,7 +209,7 @@ function runFlowImport(text: string, settings: FlowImportSettings, format: Numbe
   const record: FlowRecord =
     origin === null ? { timesH, dischargeM3s } : { timesH, dischargeM3s, startIso: isoAt(origin, 0) };
   return {
-    result: { ok: true, record, summary: successSummary(record, series, settings, format), problems: [] },
+    result: { ok: true, record, summary: successSummary(record, seriesLines(series), settings, format), problems: [] },
     series,
   };
 }
@@ -223,4 +250,66 @@ export function guessFlowImport(text: string, hints: ImportHints = {}): FlowImpo
     guessFlowSettings(typeof text === 'string' ? text : '', hints),
     hints.numberFormat ?? DEFAULT_NUMBER_FORMAT,
   );
+}
+
+/** What the columnar reader gives a dialog: the record, its summary and the head of the table. */
+export interface PlainFlowRead {
+  readonly record: FlowColumns;
+  readonly summary: string;
+  readonly header: readonly string[] | null;
+  /** The first data rows as split (at most the `headRows` asked for). */
+  readonly rows: readonly TextRow[];
+  readonly rowCount: number;
+  readonly columnCount: number;
+}
+
+/**
+ * A long, plainly written streamflow record (plain-columns.ts) read into
+ * columns without a row object per line; null for any text or setting that
+ * the general reader must read (and word any problem of). What it gives is
+ * what applyFlowImport gives for the same text and settings
+ * (test/io/plain-columns-flow.test.ts checks that on random records).
+ */
+export function readPlainFlow(
+  text: string,
+  settings: FlowImportSettings,
+  format: NumberFormat,
+  headRows: number,
+): PlainFlowRead | null {
+  if (typeof text !== 'string' || settings === null || typeof settings !== 'object') return null;
+  const problems = problemList();
+  checkFlowSettings(settings, problems);
+  if (problems.count > 0) return null;
+  const read = readPlainColumns(text, settings, headRows);
+  // No line or one line is a problem for the general reader to word.
+  if (read === null || read.rowCount < 2) return null;
+  const n = read.rowCount;
+  const factor = DISCHARGE_UNITS[settings.unit];
+  const dischargeM3s = new Float64Array(n);
+  for (let k = 0; k < n; k++) dischargeM3s[k] = (read.values[k] as number) * factor;
+  let timesH: Float64Array;
+  if (read.times === null) {
+    if (!checkStep(settings, problems)) return null;
+    const dt = settings.stepMinutesIfNoTime / 60;
+    timesH = new Float64Array(n);
+    for (let k = 0; k < n; k++) timesH[k] = k * dt;
+  } else timesH = read.times.hours;
+  const origin = read.times?.origin ?? null;
+  const record: FlowColumns =
+    origin === null ? { timesH, dischargeM3s } : { timesH, dischargeM3s, startIso: isoAt(origin, 0) };
+  const first = read.firstLine;
+  const summary = successSummary(
+    record,
+    { times: read.times, blankLinesSkipped: 0, lineOf: (k) => first + k },
+    settings,
+    format,
+  );
+  return {
+    record,
+    summary,
+    header: read.header?.cells ?? null,
+    rows: read.headRows,
+    rowCount: n,
+    columnCount: read.columnCount,
+  };
 }

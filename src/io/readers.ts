@@ -1,5 +1,12 @@
 import type { UnitSystem } from '../core';
-import { readFlowImport, guessFlowSettings, type FlowImportSettings, type FlowRecord } from './flow-import';
+import {
+  readFlowImport,
+  readPlainFlow,
+  guessFlowSettings,
+  type FlowColumns,
+  type FlowImportSettings,
+  type FlowRecord,
+} from './flow-import';
 import type { NumberFormat } from './number-format';
 import type { ImportProblem } from './problems';
 import {
@@ -92,9 +99,15 @@ export const RAIN_READER: Reader<RainImportSettings, ImportedStorm | StormColumn
   },
 };
 
-export const FLOW_READER: Reader<FlowImportSettings, FlowRecord> = {
+export const FLOW_READER: Reader<FlowImportSettings, FlowRecord | FlowColumns> = {
   guess: (text, context) => guessFlowSettings(text, { numberFormat: context.numberFormat }),
   read: (text, settings, context) => {
+    // As for rainfall: a long plain record by columns; any other text, or any problem, by the general reader.
+    const plain = readPlainFlow(text, settings, context.numberFormat, PREVIEW_ROWS);
+    if (plain !== null) {
+      const { record, rows, ...rest } = plain;
+      return { settings, ...rest, rows: rows.slice(0, PREVIEW_ROWS), problems: [], imported: record };
+    }
     const { preview, result } = readFlowImport(text, settings, context.numberFormat);
     return outcome(settings, preview, result.ok ? result.record : null);
   },

@@ -3,6 +3,7 @@ import { parseScenario } from '../scenario';
 import { describeError, type StorageLike, type StoredSlot } from '../scenario/stored-slot';
 import type { Scenario } from '../scenario/types';
 import { columnNumbers, LARGE_MARKER_TAG, readLargeMarker, type LargeMarker } from './large-marker';
+import { nextTask, SLICE } from './next-task';
 import type { WorkbenchStore } from './scenario-store';
 
 /**
@@ -30,26 +31,66 @@ const open = (): UseStore => (db ??= createStore(LARGE_DB, LARGE_OBJECTS));
 /** Columns shorter than this stay plain arrays (not worth a buffer). */
 const PACK_FROM = 1024;
 
+/**
+ * Copies list[from, to) into column while the entries are numbers; returns
+ * where it stopped (to when all were numbers). A plain indexed loop:
+ * Float64Array.from walks the list through its iterator, far slower on 10⁶ numbers.
+ */
+function copyNumbers(list: readonly unknown[], column: Float64Array, from: number, to: number): number {
+  for (let k = from; k < to; k++) {
+    const x = list[k];
+    if (typeof x !== 'number') return k;
+    column[k] = x;
+  }
+  return to;
+}
+
 /** A deep copy in which every long array of numbers is a Float64Array (exact: both are IEEE doubles). */
 export function pack(value: unknown): unknown {
   if (Array.isArray(value)) {
     const list = value as unknown[];
     if (list.length >= PACK_FROM) {
-      // A plain indexed loop: Float64Array.from walks the list through its iterator, far slower on 10⁶ numbers.
       const column = new Float64Array(list.length);
-      let k = 0;
-      for (; k < list.length; k++) {
-        const x = list[k];
-        if (typeof x !== 'number') break;
-        column[k] = x;
-      }
-      if (k === list.length) return column;
+      if (copyNumbers(list, column, 0, list.length) === list.length) return column;
     }
     return list.map(pack);
   }
   if (value !== null && typeof value === 'object') {
     const out: Record<string, unknown> = {};
     for (const [k, v] of Object.entries(value)) out[k] = pack(v);
+    return out;
+  }
+  return value;
+}
+
+/**
+ * `pack`, with long columns copied a slice at a time and a pause for the
+ * page between slices: the autosave of 10⁶ bars held the page ~100 ms in one
+ * task otherwise (issue 11). `value` must not change meanwhile (a scenario
+ * never does: every edit makes a new one).
+ */
+export async function packInSlices(value: unknown): Promise<unknown> {
+  if (Array.isArray(value)) {
+    const list = value as unknown[];
+    if (list.length >= PACK_FROM) {
+      const n = list.length;
+      const column = new Float64Array(n);
+      let done = 0;
+      while (done < n) {
+        if (done > 0) await nextTask();
+        const to = Math.min(n, done + SLICE);
+        if (copyNumbers(list, column, done, to) < to) break;
+        done = to;
+      }
+      if (done === n) return column;
+    }
+    const out: unknown[] = [];
+    for (const v of list) out.push(await packInSlices(v));
+    return out;
+  }
+  if (value !== null && typeof value === 'object') {
+    const out: Record<string, unknown> = {};
+    for (const [k, v] of Object.entries(value)) out[k] = await packInSlices(v);
     return out;
   }
   return value;
@@ -156,9 +197,10 @@ export async function saveLarge(scenario: Scenario, slot: StoredSlot<Scenario>, 
     savedAt: now.toISOString(),
   };
   try {
-    // Timed for the browser benchmark (test/browser/storage.spec.mjs): packing on the page's thread, then the whole write.
+    // Timed for the browser benchmark (test/browser/storage.spec.mjs): packing on the page's thread (in slices, pauses
+    // included), then the whole write.
     const t0 = performance.now();
-    const packed = pack(scenario);
+    const packed = await packInSlices(scenario);
     const t1 = performance.now();
     // IndexedDB copies the value on the page's thread too: packed columns are whole buffers, quick to copy.
     await set(marker.id, packed, open());

@@ -331,12 +331,29 @@ async function workbenchImport(browser, baseUrl, file) {
   await page.goto(baseUrl);
   await page.locator('[data-layer="loss"]').waitFor({ state: 'attached' });
   await watchLongTasks(page);
+  // BENCH_UI_IMPORT_PROFILE=file.cpuprofile: a CPU profile of the page from the file's choice to the autosave done.
+  let importCdp = null;
+  if (process.env.BENCH_UI_IMPORT_PROFILE) {
+    importCdp = await context.newCDPSession(page);
+    await importCdp.send('Profiler.enable');
+    await importCdp.send('Profiler.setSamplingInterval', { interval: 500 });
+    await importCdp.send('Profiler.start');
+  }
   const dialogMs = await openUntilReady(page, 'Rainfall file to open', file, 'Use these bars');
   const duringRead = await longTasks(page);
   const useMs = await clickUntilDrawn(page, 'Use these bars', '[data-layer="rain"]');
   // The autosave writes 400 ms after the last change: wait for it, and see what it held the page for.
   await page.waitForTimeout(3000);
   const all = await longTasks(page);
+  if (importCdp) {
+    const { profile } = await importCdp.send('Profiler.stop');
+    await writeFile(process.env.BENCH_UI_IMPORT_PROFILE, JSON.stringify(profile));
+    await importCdp.detach();
+  }
+  if (process.env.BENCH_UI_ONLY === 'import1e6') {
+    await context.close();
+    return { dialogMs, useMs, duringRead, all, drag: null };
+  }
   let cdp = null;
   if (process.env.BENCH_UI_PROFILE) {
     cdp = await context.newCDPSession(page);
@@ -435,13 +452,39 @@ async function longRecord(browser, baseUrl, file, rounds) {
   return { dialogMs, useMs, tasks, marks, redraw: summarise(redraw), split: summarise(split), events };
 }
 
-const server = await serveDist();
+// BENCH_UI_DIST=dir serves another build (a before-and-after comparison in one session).
+const server = await serveDist(process.env.BENCH_UI_DIST);
 const { browser, close } = await launchBrowser();
 try {
   console.log(`chromium ${browser.version()}, viewport 1400×900\n`);
 
-  // BENCH_UI_ONLY=drag1e6 runs the 10⁶-bar drag alone (a file opened on the workbench, then the loss line dragged).
-  if (process.env.BENCH_UI_ONLY === 'drag1e6') {
+  // BENCH_UI_ONLY=import1e6 runs issue 11's workbench import alone (5 runs): file → bars, and the page's long tasks.
+  if (process.env.BENCH_UI_ONLY === 'import1e6') {
+    const files = await mkdtemp(join(tmpdir(), 'raincut-bench-'));
+    const timedFile = join(files, 'gauge-5min-1e6.csv');
+    await writeFile(timedFile, timedGaugeText(1_000_000, 5));
+    const runs = [];
+    for (let i = 0; i < Number(process.env.BENCH_UI_RUNS ?? 5); i++)
+      runs.push(await workbenchImport(browser, server.baseUrl, timedFile));
+    await rm(files, { recursive: true, force: true });
+    const median = (xs) => summarise(xs).p50;
+    const longest = (tasks) => tasks.reduce((m, [, d]) => Math.max(m, d), 0);
+    const totals = runs.map((r) => r.dialogMs + r.useMs);
+    console.log(
+      `Issue 11: a 10⁶-line timed gauge file (21 MB) opened on the workbench (${runs.length} runs, medians):`,
+    );
+    console.log(
+      `  file → bars on the workbench: ${ms(median(totals))} (runs: ${totals.map((t) => t.toFixed(0)).join(', ')} ms)`,
+    );
+    console.log(
+      `  longest task while the file was read: ${ms(median(runs.map((r) => longest(r.duringRead))))} (runs: ${runs.map((r) => longest(r.duringRead)).join(', ')} ms)`,
+    );
+    console.log(
+      `  longest task from the file's choice to the autosave done: ${ms(median(runs.map((r) => longest(r.all))))} (runs: ${runs.map((r) => longest(r.all)).join(', ')} ms)`,
+    );
+    for (const r of runs) console.log(`  long tasks [start, ms]: ${JSON.stringify(r.all)}`);
+    // BENCH_UI_ONLY=drag1e6 runs the 10⁶-bar drag alone (a file opened on the workbench, then the loss line dragged).
+  } else if (process.env.BENCH_UI_ONLY === 'drag1e6') {
     const files = await mkdtemp(join(tmpdir(), 'raincut-bench-'));
     const timedFile = join(files, 'gauge-5min-1e6.csv');
     await writeFile(timedFile, timedGaugeText(1_000_000, 5));

@@ -3,7 +3,8 @@ import { get, set, createStore } from 'idb-keyval';
 import { afterEach, describe, expect, it, vi } from 'vitest';
 import { createWorkbenchStore, loadScenario, persistStore, STORAGE_KEY, type OtherTabWatch } from '../../src/store';
 import { LARGE_NUMBERS, readLargeMarker } from '../../src/store/large-marker';
-import { LARGE_DB, LARGE_OBJECTS, pack, readLarge, unpack } from '../../src/store/large-store';
+import { LARGE_DB, LARGE_OBJECTS, pack, packInSlices, readLarge, unpack } from '../../src/store/large-store';
+import { SLICE } from '../../src/store/next-task';
 import type { Scenario } from '../../src/scenario/types';
 import { FOUR_BARS, memoryStorage } from '../helpers/scenario-fixtures';
 
@@ -48,6 +49,17 @@ describe('packing a scenario for the large store', () => {
     expect(unpack(packed)).toStrictEqual(scenario);
     // Short lists stay plain arrays.
     expect(Array.isArray((pack(FOUR_BARS) as Scenario).storm.depthsMm)).toBe(true);
+  });
+
+  it('packs in slices to the same record, however many slices a column takes', async () => {
+    // 2.5 slices of bars, a column with a non-number past the first slice (stays a list), and a short one.
+    const scenario = barsOf(Math.floor(SLICE * 2.5));
+    expect(await packInSlices(scenario)).toStrictEqual(pack(scenario));
+    const mixed = { long: [...new Array<number>(SLICE + 5).fill(0.1), 'x'], short: [1, 2] };
+    const packed = (await packInSlices(mixed)) as { long: unknown[]; short: unknown };
+    expect(Array.isArray(packed.long)).toBe(true);
+    expect(packed).toStrictEqual(pack(mixed));
+    expect(await packInSlices(FOUR_BARS)).toStrictEqual(pack(FOUR_BARS));
   });
 });
 

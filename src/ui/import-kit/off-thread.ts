@@ -40,7 +40,8 @@ function pageReader(text: string): TextReader {
           for (let step = steps.next(); ; step = steps.next()) {
             if (mine !== job) return;
             if (step.done) {
-              listener.done({ ...step.value, imported: unpackColumns(step.value.imported) });
+              const imported = await unpackColumns(step.value.imported);
+              if (mine === job) listener.done({ ...step.value, imported });
               return;
             }
             listener.stage(step.value.stage, step.value.lines);
@@ -82,7 +83,12 @@ export function startTextReader(text: string, start: () => Worker | null = start
       if (reply.type === 'stage') listener.stage(reply.stage, reply.lines);
       else if (reply.type === 'done') {
         busy = false;
-        listener.done({ ...reply.outcome, imported: unpackColumns(reply.outcome.imported) });
+        const mine = job;
+        const { outcome } = reply;
+        void unpackColumns(outcome.imported).then((imported) => {
+          // A read asked for while the columns were copied replaces this one.
+          if (mine === job && listener !== null) listener.done({ ...outcome, imported });
+        });
       } else {
         busy = false;
         listener.failed(reply.message);

@@ -12,8 +12,12 @@ export type FileText =
 /** Larger files are refused before reading: a rainfall record of a million lines is about 30 MB. */
 const MAX_FILE_BYTES = 50 * 1024 * 1024;
 
+/** Files longer than this are decoded in slices (./decode-slices.ts, loaded when first needed). */
+const SLICED_FROM = 1 << 20;
+
 /** The file's text, through FileReader where Blob.text is missing. Rejects when the file cannot be read. */
 export async function readAsText(file: Blob): Promise<string> {
+  if (file.size > SLICED_FROM) return (await import('./decode-slices')).decodeInSlices(file);
   if (typeof file.text === 'function') return file.text();
   return new Promise((resolve, reject) => {
     const reader = new FileReader();

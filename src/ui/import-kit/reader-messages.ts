@@ -1,4 +1,5 @@
-import { plainArray, type ReadOutcome, type ReaderContext, type ReaderName, type SeriesSettings } from '../../io';
+import { plainArrayInSlices } from '../../store/next-task';
+import { type ReadOutcome, type ReaderContext, type ReaderName, type SeriesSettings } from '../../io';
 
 /** What the page asks of a reader: the text (sent once, the first time), the kind of import, the user's corrections. */
 export interface ReadRequest {
@@ -49,10 +50,15 @@ export function packColumns(imported: unknown): { value: unknown; transfer: Arra
   return { value: packed, transfer };
 }
 
-/** The plain arrays back from packColumns, or from a reader that gave columns of doubles. */
-export function unpackColumns<R>(imported: unknown): R {
+/**
+ * The plain arrays back from packColumns, or from a reader that gave columns
+ * of doubles: copied a slice at a time with a pause between slices, so 10⁶
+ * numbers never hold the page for one long task (issue 11).
+ */
+export async function unpackColumns<R>(imported: unknown): Promise<R> {
   if (imported === null || typeof imported !== 'object') return imported as R;
   const plain: Record<string, unknown> = {};
-  for (const [key, v] of Object.entries(imported)) plain[key] = v instanceof Float64Array ? plainArray(v) : v;
+  for (const [key, v] of Object.entries(imported))
+    plain[key] = v instanceof Float64Array ? await plainArrayInSlices(v) : v;
   return plain as R;
 }

@@ -1,7 +1,8 @@
-import { describe, expect, it } from 'vitest';
+import { describe, expect, it, vi } from 'vitest';
 import { DEFAULT_NUMBER_FORMAT, type ReadOutcome } from '../../../src/io';
 import { startTextReader, type ReadListener } from '../../../src/ui/import-kit/off-thread';
 import { countLines, packColumns, unpackColumns, type ReadRequest } from '../../../src/ui/import-kit/reader-messages';
+import { SLICE } from '../../../src/store/next-task';
 
 /** A stand-in for a Worker: records what it was sent and whether it was ended; replies when told. */
 class FakeWorker {
@@ -55,7 +56,7 @@ describe('a text reader in a worker', () => {
     expect(reader.where).toBe('worker');
   });
 
-  it('a read asked for while one runs ends that worker and starts another with the text', () => {
+  it('a read asked for while one runs ends that worker and starts another with the text', async () => {
     const workers: FakeWorker[] = [];
     const reader = startTextReader('abc', () => {
       workers.push(new FakeWorker());
@@ -71,9 +72,23 @@ describe('a text reader in a worker', () => {
     workers[1]?.reply({ type: 'stage', job: 1, stage: 'read', lines: 1 });
     workers[1]?.reply({ type: 'stage', job: 2, stage: 'read', lines: 1 });
     expect(heard).toEqual(['read 1']);
-    // Columns come back as plain arrays.
+    // Columns come back as plain arrays (copied in slices, so the outcome follows a task later).
     workers[1]?.reply({ type: 'done', job: 2, outcome: { imported: { depthsMm: new Float64Array([1, 2]) } } });
-    expect(outcomes[0]?.imported).toEqual({ depthsMm: [1, 2] });
+    await vi.waitFor(() => expect(outcomes[0]?.imported).toEqual({ depthsMm: [1, 2] }));
+  });
+
+  it('an outcome whose columns are still being copied when a new read is asked for is not heard', async () => {
+    const workers: FakeWorker[] = [];
+    const reader = startTextReader('abc', () => {
+      workers.push(new FakeWorker());
+      return workers.at(-1) as unknown as Worker;
+    });
+    const { outcomes, listener } = listen();
+    reader.read(request, listener);
+    workers[0]?.reply({ type: 'done', job: 1, outcome: { imported: { depthsMm: new Float64Array([1, 2]) } } });
+    reader.read({ ...request, corrections: { hasHeader: true } }, listener);
+    await new Promise((resolve) => setTimeout(resolve, 20));
+    expect(outcomes).toEqual([]);
   });
 
   it('stop ends the worker and nothing more is heard', () => {
@@ -113,9 +128,19 @@ describe('the messages', () => {
     expect(countLines('a\nb\n')).toBe(2);
   });
 
-  it('pack number columns into buffers to hand over, and back', () => {
+  it('pack number columns into buffers to hand over, and back', async () => {
     const { value, transfer } = packColumns({ durationsH: [0.25, 0.5], startIso: '2024-01-01T00:00' });
     expect(transfer).toHaveLength(1);
-    expect(unpackColumns(value)).toEqual({ durationsH: [0.25, 0.5], startIso: '2024-01-01T00:00' });
+    expect(await unpackColumns(value)).toEqual({ durationsH: [0.25, 0.5], startIso: '2024-01-01T00:00' });
+  });
+
+  it('unpack a column longer than a slice exactly, every value in its place', async () => {
+    // 2.5 slices of numbers that no two neighbours share (k / 7 + 0.1: not representable exactly, so a rounding slip shows).
+    const n = Math.floor(SLICE * 2.5);
+    const depths = Array.from({ length: n }, (_, k) => k / 7 + 0.1);
+    const { value } = packColumns({ depthsMm: depths });
+    const back = await unpackColumns<{ depthsMm: number[] }>(value);
+    expect(Array.isArray(back.depthsMm)).toBe(true);
+    expect(back.depthsMm).toEqual(depths);
   });
 });

@@ -1,13 +1,11 @@
 import { useMemo } from 'react';
-import { scaleLinear } from 'd3-scale';
-import { barEdgesH, peakIntensityMmH, totalDurationH, type Storm, type UnitSystem } from '../../../core';
-import { barsPath } from '../../chart/bar-path';
-import { mapLinear } from '../../chart/linear-px';
+import { peakIntensityMmH, totalDurationH, type Storm, type UnitSystem } from '../../../core';
 import { formatDuration } from '../../rainfall/RainfallToolbar';
 import { formatCount, formatValue } from '../../format';
-import { LISTED, PreviewSketch, SKETCH_HEIGHT, SKETCH_PAD, SKETCH_WIDTH } from '../../import-kit';
+import { LISTED, PreviewSketch } from '../../import-kit';
 import { displayUnit, toDisplay, unitText } from '../../units';
 import { barClock, barTimeText } from '../bar-times';
+import { sketchPath } from './sketch-path';
 
 /**
  * What the paste would become: a sketch of the bars (one path, however many)
@@ -16,21 +14,14 @@ import { barClock, barTimeText } from '../bar-times';
 export function PreviewBars({ storm, units }: { storm: Storm; units: UnitSystem }) {
   const n = storm.depthsMm.length;
   // Each pass over the bars once per storm, not per render: a long record has 10⁶ of them.
-  const { edges, totalH, peak } = useMemo(
-    () => ({ edges: barEdgesH(storm), totalH: totalDurationH(storm), peak: peakIntensityMmH(storm) }),
-    [storm],
-  );
-  const path = useMemo(() => {
-    const x = scaleLinear()
-      .domain([0, totalH || 1])
-      .range([SKETCH_PAD.left, SKETCH_WIDTH - SKETCH_PAD.right]);
-    const y = scaleLinear()
-      .domain([0, peak > 0 ? peak : 1])
-      .range([SKETCH_HEIGHT - SKETCH_PAD.bottom, SKETCH_PAD.top]);
-    const intensities = new Float64Array(n);
-    for (let k = 0; k < n; k++) intensities[k] = (storm.depthsMm[k] as number) / (storm.durationsH[k] as number);
-    return barsPath(mapLinear(x, edges), mapLinear(y, intensities), SKETCH_HEIGHT - SKETCH_PAD.bottom);
-  }, [storm, n, edges, totalH, peak]);
+  const { totalH, peak } = useMemo(() => ({ totalH: totalDurationH(storm), peak: peakIntensityMmH(storm) }), [storm]);
+  const path = useMemo(() => sketchPath(storm, totalH, peak), [storm, totalH, peak]);
+  // Start times of the bars listed only (the table shows the first LISTED).
+  const starts = useMemo(() => {
+    const listed = new Float64Array(Math.min(n, LISTED));
+    for (let k = 1; k < listed.length; k++) listed[k] = (listed[k - 1] as number) + (storm.durationsH[k - 1] as number);
+    return listed;
+  }, [storm, n]);
 
   const clock = barClock(storm.startIso, totalH);
   const depthUnit = unitText(displayUnit('depth', units));
@@ -57,7 +48,7 @@ export function PreviewBars({ storm, units }: { storm: Storm; units: UnitSystem 
       {Array.from({ length: listed }, (_, k) => (
         <tr key={k}>
           <th scope="row">{k + 1}</th>
-          <td>{barTimeText(clock, edges[k] as number)}</td>
+          <td>{barTimeText(clock, starts[k] as number)}</td>
           <td>{formatDuration(storm.durationsH[k] as number)}</td>
           <td>{formatValue(toDisplay('depth', storm.depthsMm[k] as number, units))}</td>
         </tr>
