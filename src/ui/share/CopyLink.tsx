@@ -1,133 +1,27 @@
-import { useEffect, useRef } from 'react';
 import { useWorkbenchStore } from '../../store';
-import { ProblemList, useBarMessage } from '../services/bar-message';
+import { useBarMessage } from '../services/bar-message';
 import { useServices } from '../services/services';
-import { formatCount } from '../format';
-
-/** Mail and chat programs are known to cut or wrap links past about this length. */
-export const LONG_LINK_CHARS = 2000;
-
-/** "535 characters", with advice when the link is long enough to be cut on the way. */
-export function linkLengthText(chars: number): string {
-  const base = `The link is ${formatCount(chars)} characters long and holds the whole scenario; nothing is sent to a server.`;
-  return chars > LONG_LINK_CHARS
-    ? `${base} Some mail programs cut links longer than about ${formatCount(LONG_LINK_CHARS)} characters: if it does not open for your colleague, send the scenario as a file.`
-    : base;
-}
-
-/** Said with a link made in a page opened from a file (the single-file build): the link names that file's place. */
-export const FILE_PAGE_NOTE =
-  'This page was opened from a file, so the link opens the scenario only where that file is at the same place (on this computer, for instance). To send the scenario to a colleague, use Save as file.';
-
-/** The words of a refusal (a DOMException is not an Error in every realm). */
-function reason(error: unknown): string {
-  const message = typeof error === 'object' && error !== null && 'message' in error ? String(error.message) : '';
-  return message !== '' ? message : 'the browser refused';
-}
-
-/** The link in a box to copy by hand, selected as soon as it shows. */
-function ManualCopy({ url }: { url: string }) {
-  const ref = useRef<HTMLInputElement | null>(null);
-  useEffect(() => {
-    ref.current?.focus();
-    ref.current?.select();
-  }, [url]);
-  return (
-    <div className="share-link__manual">
-      <label htmlFor="share-link-text">Share link</label>
-      <input
-        id="share-link-text"
-        ref={ref}
-        type="text"
-        readOnly
-        value={url}
-        onFocus={(e) => e.currentTarget.select()}
-      />
-    </div>
-  );
-}
 
 /**
- * "Copy link": the whole scenario, checked and packed into the address's
- * fragment (makeShareLink), on the clipboard. When the browser refuses the
- * clipboard, the link is shown in a box to copy by hand.
+ * "Copy link": the whole scenario in a link, on the clipboard. What it does
+ * (copy-link-run.tsx, with the link maker and its compressor) loads on the
+ * first click, not with the first screen.
  */
 export function CopyLink() {
   const store = useWorkbenchStore();
-  const { clipboard, pageAddress, saveFile } = useServices();
+  const services = useServices();
   const show = useBarMessage();
-
-  const copy = async (anyway = false): Promise<void> => {
-    const scenario = store.getState().scenario;
-    // The link maker (and its compressor) and the long-link offer load on the first click, not with the first screen.
-    let makeShareLink: (typeof import('../../scenario/link-make'))['makeShareLink'];
-    let long: typeof import('../events/LongLinkOffer');
+  const copy = async (): Promise<void> => {
+    let run: typeof import('./copy-link-run');
     try {
-      [{ makeShareLink }, long] = await Promise.all([
-        import('../../scenario/link-make'),
-        import('../events/LongLinkOffer'),
-      ]);
+      run = await import('./copy-link-run');
     } catch (error) {
-      show({ tone: 'problem', title: `No link was made: ${reason(error)}.` });
+      const message = error instanceof Error && error.message !== '' ? error.message : 'the browser refused';
+      show({ tone: 'problem', title: `No link was made: ${message}.` });
       return;
     }
-    const made = makeShareLink(scenario);
-    if (!made.ok) {
-      show({
-        tone: 'problem',
-        title: 'No link was made.',
-        body: <ProblemList problems={made.problems} label="Why no link was made" />,
-      });
-      return;
-    }
-    const url = `${pageAddress()}#${made.fragment}`;
-    // A link too long to send (an event set of long storms): offer the file instead, and say why.
-    if (url.length > long.PRACTICAL_LINK_CHARS && !anyway) {
-      show({
-        tone: 'problem',
-        title: 'This scenario is too large for a practical link.',
-        body: (
-          <long.LongLinkOffer
-            chars={url.length}
-            scenario={scenario}
-            saveFile={saveFile}
-            onCopyAnyway={() => void copy(true)}
-          />
-        ),
-      });
-      return;
-    }
-    const length = (
-      <>
-        <p>{linkLengthText(url.length)}</p>
-        {url.startsWith('file:') ? <p>{FILE_PAGE_NOTE}</p> : null}
-      </>
-    );
-    let refused: string | null = null;
-    if (!clipboard) refused = 'this browser gives the page no clipboard';
-    else {
-      try {
-        await clipboard.writeText(url);
-      } catch (error) {
-        refused = reason(error);
-      }
-    }
-    if (refused === null) {
-      show({ tone: 'done', title: 'Link copied.', body: length });
-      return;
-    }
-    show({
-      tone: 'problem',
-      title: `The link could not be put on the clipboard (${refused}). Copy it from the box below (Ctrl+C).`,
-      body: (
-        <>
-          <ManualCopy url={url} />
-          {length}
-        </>
-      ),
-    });
+    await run.copyLink(store.getState().scenario, services, show);
   };
-
   return (
     <button type="button" onClick={() => void copy()} title="Put the whole scenario in a link and copy it">
       Copy link

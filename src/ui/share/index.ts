@@ -2,6 +2,5 @@
 // and the bar that holds them with the export and compare buttons. Mounted by App.tsx.
 
 export { ScenarioBar } from './ScenarioBar';
-export { linkLengthText, LONG_LINK_CHARS } from './CopyLink';
 // LibraryPanel and LinkNotice are not exported here: ScenarioBar and App.tsx load them when first needed.
 // The page's services (storage, clipboard, downloads, pins) live in ../services, below this panel.

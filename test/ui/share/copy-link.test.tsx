@@ -3,7 +3,7 @@ import { screen, waitFor, within } from '@testing-library/react';
 import { describe, expect, it } from 'vitest';
 import { MAX_LINK_CHARS, decodeScenarioLink } from '../../../src/scenario';
 import { STORAGE_KEY } from '../../../src/store';
-import { LONG_LINK_CHARS, linkLengthText } from '../../../src/ui/share';
+import { LONG_LINK_CHARS, linkLengthText } from '../../../src/ui/share/copy-link-run';
 import { memoryStorage } from '../../helpers/scenario-fixtures';
 import { PAGE, SHARED, renderTools } from '../../helpers/render-tools';
 
