@@ -41,6 +41,30 @@ const onlyPackages = (allowed, layer) => ({
   ],
 });
 
+/**
+ * The core's computations over a storm, a record or an event set: called by
+ * the store's derive layer, never by the UI. (Drawing samples the capacity
+ * curve at the chart's own pixel times, and a design storm form builds its
+ * storm at the edge: neither is here.)
+ */
+const CORE_COMPUTATIONS = [
+  'computeLosses',
+  'computeLossesUnchecked',
+  'calibrate',
+  'calibrateUnchecked',
+  'separateBaseflow',
+  'runoffHydrograph',
+  'fitTransform',
+  'fitEvents',
+  'fitEventTransforms',
+  'summariseTransformFits',
+  'splitEvents',
+  'massCurve',
+  'calibrationInterval',
+  'runoffCurve',
+  'compareHydrographs',
+];
+
 /** No JSX outside the UI: a .tsx file there would pull in React's runtime. */
 const NO_JSX = {
   'no-restricted-syntax': [
@@ -179,6 +203,25 @@ export default defineConfig(
   {
     files: ['src/core/**', 'src/io/**', 'src/scenario/**'],
     rules: { 'no-restricted-globals': ['error', ...BROWSER_ONLY], ...NO_JSX },
+  },
+  {
+    // Components read derived values (src/store/derive*.ts); the core's computations are called there, once.
+    files: ['src/ui/**'],
+    rules: {
+      'no-restricted-imports': [
+        'error',
+        {
+          patterns: [
+            {
+              regex: '(^|/)core(/|$)',
+              importNames: CORE_COMPUTATIONS,
+              message:
+                'The UI reads derived values from the store (src/store/derive*.ts); it does not call the core’s computations.',
+            },
+          ],
+        },
+      ],
+    },
   },
   { files: ['src/core/**'], rules: onlyPackages([], 'The core') },
   { files: ['src/io/**'], rules: onlyPackages(['papaparse'], 'io') },

@@ -99,6 +99,17 @@ describe('the layer rules, as ESLint applies them', { timeout: LINT_TIMEOUT_MS }
     );
   });
 
+  it('refuse a call of the core’s computations from the UI, which reads derived values', async () => {
+    const path = 'src/ui/services/download.ts';
+    const text = `${source(path)}\nimport { computeLosses } from '../../core';\nexport const c = computeLosses;\n`;
+    expect(await errors(path, text)).toContainEqual(
+      expect.stringMatching(/^no-restricted-imports: .*The UI reads derived values from the store/),
+    );
+    // A type or a helper of the core stays open to the UI.
+    const allowed = `${source(path)}\nimport { totalDepthMm } from '../../core';\nexport const t = totalDepthMm;\n`;
+    expect(await errors(path, allowed)).toEqual([]);
+  });
+
   it('refuse an import cycle, even inside one layer', async () => {
     // src/core/loss/horton.ts imports src/core/errors.ts, so errors.ts importing horton.ts closes a loop.
     const path = 'src/core/errors.ts';
