@@ -1,3 +1,4 @@
+import type { SetEvent } from '../../src/scenario/types';
 import fc from 'fast-check';
 import type { Hydrograph } from '../../src/core/baseflow/types';
 
@@ -110,4 +111,36 @@ export function linearReservoirRecord(
     directM3s.push(t <= wetHourStartH ? 0 : peak * Math.exp(-after / kH));
   }
   return { timesH, directM3s };
+}
+
+/**
+ * An invented event of hourly bars (`depthsMm`) with `observedMm` of runoff
+ * observed and its own streamflow record: the linear reservoir's (k = `kH`)
+ * response to that depth of excess from `startH`, over 24 h, on no baseflow
+ * (constant baseflow separation finds none).
+ */
+export function eventWithReservoirRecord(
+  id: string,
+  name: string,
+  depthsMm: number[],
+  observedMm: number,
+  startH: number,
+  kH: number,
+  areaM2: number,
+): SetEvent {
+  const { timesH, directM3s } = linearReservoirRecord(startH, observedMm, kH, 24, areaM2);
+  return {
+    id,
+    name,
+    storm: { durationsH: depthsMm.map(() => 1), depthsMm },
+    observed: { as: 'depth', value: observedMm },
+    streamflow: {
+      timesH,
+      dischargeM3s: directM3s,
+      offsetH: 0,
+      baseflow: { kind: 'constant' },
+      baseflowMemory: {},
+      useAsObserved: false,
+    },
+  };
 }

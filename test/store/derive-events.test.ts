@@ -19,7 +19,7 @@ const { createWorkbenchStore } = await import('../../src/store');
 const { eventDerived } = await import('../../src/store/derive-events');
 const { withTransformFit, withTransformParam } = await import('../../src/store/hydrograph-edits');
 const { FOUR_BARS } = await import('../helpers/scenario-fixtures');
-const { linearReservoirRecord } = await import('../helpers/hydrographs');
+const { eventWithReservoirRecord } = await import('../helpers/hydrographs');
 type Scenario = import('../../src/scenario/types').Scenario;
 type SetEvent = import('../../src/scenario/types').SetEvent;
 
@@ -29,21 +29,7 @@ type SetEvent = import('../../src/scenario/types').SetEvent;
 // excess is 10 mm in the one hour; fitting k to the record's peak gives back
 // k = 2 h (the record is the Nash cascade's n = 1 response).
 const AREA = 1e6;
-const { timesH, directM3s } = linearReservoirRecord(0, 10, 2, 24, AREA);
-const EVENT: SetEvent = {
-  id: 'a',
-  name: 'One hour (invented)',
-  storm: { durationsH: [1], depthsMm: [30] },
-  observed: { as: 'depth', value: 10 },
-  streamflow: {
-    timesH,
-    dischargeM3s: directM3s,
-    offsetH: 0,
-    baseflow: { kind: 'constant' },
-    baseflowMemory: {},
-    useAsObserved: false,
-  },
-};
+const EVENT: SetEvent = eventWithReservoirRecord('a', 'One hour (invented)', [30], 10, 0, 2, AREA);
 const SET: Scenario = {
   ...FOUR_BARS,
   hydrograph: {

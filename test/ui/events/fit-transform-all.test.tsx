@@ -2,7 +2,7 @@
 import { screen, within } from '@testing-library/react';
 import { describe, expect, it } from 'vitest';
 import type { Scenario, SetEvent } from '../../../src/scenario/types';
-import { linearReservoirRecord } from '../../helpers/hydrographs';
+import { eventWithReservoirRecord } from '../../helpers/hydrographs';
 import { lazyPartsLoaded, renderWorkbench } from '../../helpers/render';
 import { FOUR_BARS } from '../../helpers/scenario-fixtures';
 
@@ -16,23 +16,8 @@ import { FOUR_BARS } from '../../helpers/scenario-fixtures';
 // k = 1 h. Fitting k to each observed peak gives back 2 h and 1 h: median
 // (1 + 2)/2 = 1.5 h. "No record" has no record and so no fit.
 const AREA = 1e6;
-const withRecord = (id: string, name: string, depths: number[], mm: number, start: number, kH: number): SetEvent => {
-  const { timesH, directM3s } = linearReservoirRecord(start, mm, kH, 24, AREA);
-  return {
-    id,
-    name,
-    storm: { durationsH: depths.map(() => 1), depthsMm: depths },
-    observed: { as: 'depth', value: mm },
-    streamflow: {
-      timesH,
-      dischargeM3s: directM3s,
-      offsetH: 0,
-      baseflow: { kind: 'constant' },
-      baseflowMemory: {},
-      useAsObserved: false,
-    },
-  };
-};
+const withRecord = (id: string, name: string, depths: number[], mm: number, start: number, kH: number): SetEvent =>
+  eventWithReservoirRecord(id, name, depths, mm, start, kH, AREA);
 
 const SET: Scenario = {
   ...FOUR_BARS,
