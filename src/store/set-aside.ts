@@ -1,5 +1,5 @@
 import { readIsoDateTime } from '../core';
-import { parseScenario, type Problem } from '../scenario';
+import { parseScenario, readLargeRef, type LargeLibraryEntry, type Problem } from '../scenario';
 import type { Scenario } from '../scenario/types';
 import { readLargeMarker, type LargeMarker } from './large-marker';
 import type { StorageLike } from './persistence';
@@ -90,6 +90,12 @@ const isRecord = (x: unknown): x is Record<string, unknown> => x !== null && typ
 /** What a copy gives back: the scenarios in it that this version reads, and why the others do not. */
 export interface Recovered {
   readonly scenarios: Scenario[];
+  /**
+   * Entries of a saved list that point into the large store: their scenarios
+   * are records there (read by ../store/large-library.ts `openEntry`), not
+   * text in the copy.
+   */
+  readonly pointers: LargeLibraryEntry[];
   readonly problems: Problem[];
 }
 
@@ -97,35 +103,56 @@ export interface Recovered {
  * The scenarios held in a set-aside text: a scenario document itself, or the
  * `scenario` of each item in a saved list's `entries` and `deleted` or the
  * pins' `pins`. Each is read through the schema; what does not read is said,
- * by where it stood. Never throws.
+ * by where it stood. A list's entry holding a large-store pointer instead of
+ * a scenario is given back as that pointer. Never throws.
  */
 export function recoverScenarios(text: string): Recovered {
   let json: unknown;
   try {
     json = JSON.parse(text);
   } catch (error) {
-    return { scenarios: [], problems: [{ path: '', message: `The copy is not valid JSON (${why(error)}).` }] };
+    return {
+      scenarios: [],
+      pointers: [],
+      problems: [{ path: '', message: `The copy is not valid JSON (${why(error)}).` }],
+    };
   }
   const found: { where: string; doc: unknown }[] = [];
+  const pointers: LargeLibraryEntry[] = [];
+  const problems: Problem[] = [];
   if (isRecord(json) && 'version' in json && 'storm' in json) found.push({ where: 'the scenario', doc: json });
   else if (isRecord(json)) {
     for (const list of ['entries', 'deleted', 'pins']) {
       const items = json[list];
       if (!Array.isArray(items)) continue;
       items.forEach((item: unknown, k: number) => {
-        if (isRecord(item)) found.push({ where: `${list}[${k}]`, doc: item['scenario'] });
+        if (!isRecord(item)) return;
+        const where = `${list}[${k}]`;
+        if (!('large' in item)) {
+          found.push({ where, doc: item['scenario'] });
+          return;
+        }
+        const ref = readLargeRef(item['large']);
+        const { id, savedAt } = item;
+        if (typeof ref === 'string') problems.push({ path: where, message: `${where}: ${ref}` });
+        else if (typeof id !== 'string' || typeof savedAt !== 'string' || readIsoDateTime(savedAt) === null)
+          problems.push({ path: where, message: `${where}: its pointer has no proper id or time saved.` });
+        else pointers.push({ id, savedAt, large: ref });
       });
     }
   }
-  if (found.length === 0) {
-    return { scenarios: [], problems: [{ path: '', message: 'The copy holds no scenario that can be found.' }] };
+  if (found.length === 0 && pointers.length === 0 && problems.length === 0) {
+    return {
+      scenarios: [],
+      pointers: [],
+      problems: [{ path: '', message: 'The copy holds no scenario that can be found.' }],
+    };
   }
   const scenarios: Scenario[] = [];
-  const problems: Problem[] = [];
   for (const { where, doc } of found) {
     const read = parseScenario(doc);
     if (read.ok) scenarios.push(read.scenario);
     else problems.push({ path: where, message: `${where}: ${read.problems.map((p) => p.message).join(' ')}` });
   }
-  return { scenarios, problems };
+  return { scenarios, pointers, problems };
 }

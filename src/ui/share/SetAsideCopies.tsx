@@ -2,6 +2,8 @@ import { useState } from 'react';
 import { instantMs } from '../../core';
 import type { ScenarioLibrary } from '../../scenario';
 import { recoverScenarios, type SetAsideCopy, type SetAsideKind } from '../../store/set-aside';
+import { openEntry, saveToList } from '../../store/large-library';
+import type { Scenario } from '../../scenario/types';
 import type { StorageLike } from '../../store';
 import { readLargeMarker, type LargeMarker } from '../../store/large-marker';
 import { ListProblems } from './ListProblems';
@@ -116,22 +118,32 @@ export function SetAsideCopies({ copies, storage, library, saveFile, onChanged }
     if (text === null) return unreadable(copy);
     const marker = readLargeMarker(text);
     if (marker) {
-      void largeTextOf(copy, marker).then((record) => {
-        if (record !== null) restoreText(copy, record);
-      });
+      void largeTextOf(copy, marker).then((record) => (record === null ? undefined : restoreText(copy, record)));
       return;
     }
-    restoreText(copy, text);
+    void restoreText(copy, text);
   };
 
-  const restoreText = (copy: SetAsideCopy, text: string): void => {
-    const { scenarios, problems } = recoverScenarios(text);
+  /**
+   * Each scenario the copy gives back joins the saved list the way a save
+   * does (a large one through the large store, in a record of its own); a
+   * saved list's pointer is read from the record it names first. The copy,
+   * and any record it names, is kept as it was.
+   */
+  const restoreText = async (copy: SetAsideCopy, text: string): Promise<void> => {
+    const { scenarios, pointers, problems } = recoverScenarios(text);
     const saved: string[] = [];
     const failed: string[] = problems.map((p) => p.message);
-    for (const scenario of scenarios) {
-      const result = library.save(scenario);
-      if (result.ok) saved.push(`“${result.value.scenario.name}”`);
+    const keep = async (scenario: Scenario): Promise<void> => {
+      const result = await saveToList(library, scenario, { now: new Date() });
+      if (result.ok) saved.push(`“${'large' in result.value ? result.value.large.name : result.value.scenario.name}”`);
       else for (const p of result.problems) failed.push(p.message);
+    };
+    for (const scenario of scenarios) await keep(scenario);
+    for (const pointer of pointers) {
+      const opened = await openEntry(pointer);
+      if (opened.ok) await keep(opened.scenario);
+      else failed.push(opened.message);
     }
     onChanged();
     if (saved.length === 0) {

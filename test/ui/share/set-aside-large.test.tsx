@@ -3,10 +3,12 @@ import 'fake-indexeddb/auto';
 import { screen, within } from '@testing-library/react';
 import { createStore, get, set } from 'idb-keyval';
 import { describe, expect, it, vi } from 'vitest';
-import { createScenarioLibrary } from '../../../src/scenario';
+import { LIBRARY_KEY, createScenarioLibrary, type SavedEntry } from '../../../src/scenario';
 import { SET_ASIDE_PREFIX } from '../../../src/store';
+import { LARGE_NUMBERS } from '../../../src/store/large-marker';
 import { LARGE_DB, LARGE_OBJECTS, pack } from '../../../src/store/large-store';
-import { FOUR_BARS, memoryStorage, scenarioOf } from '../../helpers/scenario-fixtures';
+import type { Scenario } from '../../../src/scenario/types';
+import { FOUR_BARS, memoryStorage, quotaStorage, scenarioOf } from '../../helpers/scenario-fixtures';
 import { renderTools, savedText } from '../../helpers/render-tools';
 import { lazyPartsLoaded } from '../../helpers/render';
 
@@ -102,4 +104,76 @@ describe('a set-aside copy that points into the large store', { timeout: 20_000 
     await new Promise((r) => setTimeout(r, 50));
     expect(saved).toHaveLength(0);
   });
+
+  it('Restore of a set-aside saved list reads its large entries from their records into the saved list', async () => {
+    // A saved list set aside (e.g. by a newer version's write) whose first entry is a pointer
+    // into the large store. Before, Restore read only entries holding a scenario and said of
+    // this one "cannot be opened", though its record was there.
+    const id = `library.set-aside-test.${count++}`;
+    await set(id, pack(BIG), records);
+    const old = memoryStorage();
+    const oldList = createScenarioLibrary(old);
+    const pointed = oldList.saveLarge({ record: id, numbers: 8, name: 'Pointed at', bars: 4, method: 'constant' });
+    expect(pointed.ok).toBe(true);
+    expect(oldList.save({ ...FOUR_BARS, name: 'Held in the list' }).ok).toBe(true);
+    const listKey = `${LIBRARY_KEY}.damaged.${AT}`;
+    const storage = memoryStorage({ [listKey]: old.data.get(LIBRARY_KEY) as string });
+    const { user } = renderTools({ storage });
+    await lazyPartsLoaded();
+    const { panel, item } = await openCopy(user);
+    await user.click(within(item()).getByRole('button', { name: /^Restore Saved list of scenarios/ }));
+    await vi.waitFor(() =>
+      expect(within(panel).getAllByRole('status')[1]).toHaveTextContent(
+        /Restored “(Pointed at|Held in the list)”, “(Pointed at|Held in the list)” to the saved list/,
+      ),
+    );
+    // The pointer's scenario under the entry's name (a rename changes only the entry), with the record's numbers.
+    const restored = createScenarioLibrary(storage).list().entries;
+    expect(restored.map((e) => ('large' in e ? e.large.name : e.scenario.name)).sort()).toEqual([
+      'Held in the list',
+      'Pointed at',
+    ]);
+    const fromRecord = restored.find((e) => !('large' in e) && e.scenario.name === 'Pointed at') as Extract<
+      SavedEntry,
+      { scenario: object }
+    >;
+    expect(fromRecord.scenario.storm).toStrictEqual(BIG.storm);
+    // The copy is kept, and so is the record it names.
+    expect(storage.data.has(listKey)).toBe(true);
+    expect(await get(id, records)).toBeDefined();
+  });
+
+  it('Restore of a marker whose scenario is too large for localStorage puts it in the saved list through the large store', async () => {
+    // Over the large store's threshold: 2 numbers a bar (invented depths 0 to 2.9 mm).
+    const bars = LARGE_NUMBERS / 2 + 1;
+    const huge: Scenario = {
+      ...FOUR_BARS,
+      name: 'A long set-aside record (invented)',
+      storm: {
+        durationsH: new Array<number>(bars).fill(5 / 60),
+        depthsMm: Array.from({ length: bars }, (_, i) => (i % 30) / 10),
+      },
+    };
+    const id = `scenario.set-aside-test.${count++}`;
+    await set(id, pack(huge), records);
+    const markerText = JSON.stringify({ $format: 'raincut-large-store', id, numbers: 2 * bars, savedAt: AT });
+    // Takes the list of pointers, not 10⁵ bars (about 2 M characters). Before, Restore's one
+    // setItem was refused: "Nothing in … can be opened", with the quota error beneath.
+    const storage = quotaStorage(200_000, { [KEY]: markerText });
+    const { user } = renderTools({ storage });
+    await lazyPartsLoaded();
+    const { panel, item } = await openCopy(user);
+    await user.click(within(item()).getByRole('button', { name: /^Restore Saved scenario set aside/ }));
+    await vi.waitFor(
+      () =>
+        expect(within(panel).getAllByRole('status')[1]).toHaveTextContent(
+          'Restored “A long set-aside record (invented)” to the saved list',
+        ),
+      { timeout: 50_000 },
+    );
+    const [entry] = createScenarioLibrary(storage).list().entries;
+    expect(entry && 'large' in entry ? entry.large : null).toMatchObject({ name: huge.name, bars, numbers: 2 * bars });
+    // A record of its own, so deleting the restored entry never takes the set-aside copy's record.
+    expect(entry && 'large' in entry ? entry.large.record : id).not.toBe(id);
+  }, 60_000);
 });
