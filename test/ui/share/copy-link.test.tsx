@@ -32,6 +32,8 @@ describe('Copy link', () => {
     actions.setBarDepth(2, 20.5);
     actions.setUnits('si');
     await user.click(screen.getByRole('button', { name: 'Copy link' }));
+    // Copy link's work loads on the first click: wait for its answer before reading the clipboard.
+    await screen.findByRole('status', { name: MESSAGE });
     const decoded = decodeScenarioLink(fragmentOf(copied[0] as string));
     expect(decoded.ok && decoded.scenario.storm.depthsMm[2]).toBe(20.5);
     expect(decoded.ok && decoded.scenario.units).toBe('si');
