@@ -122,7 +122,7 @@ export function FitAll() {
           })}
         </tbody>
       </table>
-      {fits.rows.length === 0 ? <p>Add events to fit them.</p> : null}
+      {fits.rows.length === 0 ? <p className="fit-all__empty">Add events to fit them.</p> : null}
 
       <h3>Spread of the fitted values</h3>
       <SpreadList
@@ -186,7 +186,9 @@ export function FitAll() {
           history={actions}
         />
       </fieldset>
-      {outcome.ok ? (
+      {fits.rows.length === 0 && !outcome.ok ? (
+        <p className="fit-all__design">The design value is chosen from the fitted values once events are added.</p>
+      ) : outcome.ok ? (
         <p className="fit-all__design" role="status">
           Design {paramLabel.toLowerCase()}: <strong>{withUnit(outcome.value)}</strong>
         </p>

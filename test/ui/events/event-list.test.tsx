@@ -19,6 +19,10 @@ describe('the event list', () => {
     await openEvents(user);
     expect(screen.getByRole('tabpanel', { name: 'Event set' })).toBeVisible();
     expect(screen.getByText('No events yet.')).toBeInTheDocument();
+    // An empty set is not an error: no alert until there are events to fit (it said, in red,
+    // "Design value: No event has a fitted value…" before a single event was added).
+    expect(screen.queryByRole('alert')).toBeNull();
+    expect(screen.getByText('The design value is chosen from the fitted values once events are added.')).toBeVisible();
   });
 
   it('adds the workbench storm as an event, which follows later workbench edits', async () => {
