@@ -27,7 +27,7 @@ export function HeldText({ summary, label, fileName, onClear }: HeldTextProps) {
       </span>
       <p className="paste__held-size">
         {summary === null
-          ? `Opening the text${from}…`
+          ? `Opening ${fileName ?? 'the pasted text'}…`
           : `${formatCount(summary.lines)} lines (${formatValue(summary.chars / 1e6)} million characters)${from}; too long to edit here. The first ${HELD_LINES} lines:`}
       </p>
       {summary === null ? null : (

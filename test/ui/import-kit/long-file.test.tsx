@@ -72,9 +72,12 @@ afterEach(() => {
   vi.unstubAllGlobals();
 });
 
-/** The first worker started, once the dialog (a lazy part) has asked it to read. */
+/** The dialog, a lazy part: its first load in a test file is slow on a loaded machine (the whole suite running). */
+const DIALOG_MS = 5 * LAZY_LOAD_MS;
+
+/** The first worker started, once the dialog has asked it to read. */
 async function firstWorker(): Promise<FakeWorker> {
-  await waitFor(() => expect(FakeWorker.started[0]?.sent.length).toBeGreaterThan(0), { timeout: LAZY_LOAD_MS });
+  await waitFor(() => expect(FakeWorker.started[0]?.sent.length).toBeGreaterThan(0), { timeout: DIALOG_MS });
   return FakeWorker.started[0] as FakeWorker;
 }
 
@@ -88,13 +91,13 @@ describe('a long file opened on the workbench', () => {
     expect(text.length).toBeGreaterThanOrEqual(LONG_TEXT_CHARS);
     const file = watchedFile(text, 'gauge-invented.csv');
     await user.upload(screen.getByLabelText('Rainfall file to open'), file);
-    const dialog = await screen.findByRole('dialog', { name: 'Paste rainfall' }, { timeout: LAZY_LOAD_MS });
+    const dialog = await screen.findByRole('dialog', { name: 'Paste rainfall' }, { timeout: DIALOG_MS });
     const worker = await firstWorker();
     const first = worker.sent[0] as ReadRequest;
     // The File itself crosses (in a browser, a handle to the same bytes), named for the worker's refusals.
     expect(first.source).toEqual({ file, name: 'gauge-invented.csv', what: 'the rainfall' });
     expect((first.source as { file: Blob }).file).toBe(file);
-    expect(within(dialog).getByText(/^Opening the text from gauge-invented\.csv/)).toBeInTheDocument();
+    expect(within(dialog).getByText('Opening gauge-invented.csv…')).toBeInTheDocument();
     expect(within(dialog).queryByRole('textbox', { name: 'Rainfall text' })).toBeNull();
 
     // The worker's side, as reader.worker.ts does it, from the text the test holds (never from the page's file).
@@ -128,7 +131,7 @@ describe('a long file opened on the workbench', () => {
     const before = scenario().storm;
     const file = watchedFile('x'.repeat(LONG_TEXT_CHARS), 'sheet-invented.csv');
     await user.upload(screen.getByLabelText('Rainfall file to open'), file);
-    const dialog = await screen.findByRole('dialog', { name: 'Paste rainfall' }, { timeout: LAZY_LOAD_MS });
+    const dialog = await screen.findByRole('dialog', { name: 'Paste rainfall' }, { timeout: DIALOG_MS });
     const worker = await firstWorker();
     const message = 'sheet-invented.csv is not a text file; save the rainfall as .csv or .txt and open that.';
     worker.reply({ type: 'refused', job: 1, message });
@@ -137,5 +140,5 @@ describe('a long file opened on the workbench', () => {
     expect(within(dialog).queryByText(/Read from/)).toBeNull();
     expect(scenario().storm).toBe(before);
     expect(pageReads).toEqual([]);
-  });
+  }, 60_000);
 });

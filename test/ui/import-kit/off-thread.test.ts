@@ -112,7 +112,7 @@ describe('a text reader in a worker', () => {
     reader.read(request, listener);
     w.onerror?.({ preventDefault: () => undefined });
     expect(reader.where).toBe('page');
-    await new Promise((ok) => setTimeout(ok, 50));
+    await vi.waitFor(() => expect(outcomes).toHaveLength(1));
     expect(heard).toEqual(['open 0', `opened 3 lines, ${text.length} characters: ${text}`, 'guess 3', 'read 3']);
     // 0.2 + 0.4 + 0.6 mm in three 15-min bars
     expect((outcomes[0]?.imported as { depthsMm: number[] }).depthsMm).toEqual([0.2, 0.4, 0.6]);
