@@ -1,17 +1,21 @@
 import { useDeferredValue, useId, useMemo, useRef, useState, type ComponentType, type ReactNode } from 'react';
 import type { ImportProblem, ReaderContext, ReaderName, SeriesSettings, TextRow } from '../../io';
 import { Modal } from '../layout/Modal';
-import { HeldText, isLongText } from './HeldText';
+import { HeldText } from './HeldText';
 import { OpenFileButton } from './OpenFileButton';
 import { ReadProgress } from './ReadProgress';
 import { useLongRead } from './use-long-read';
 import { ProblemTable } from './ProblemTable';
 import type { SettingsPanelProps } from './settings-panel';
+import { isLongText } from './read-file';
+import type { ReadSource } from './reader-messages';
 import { useTextFile } from './use-text-file';
 
-/** What an import dialog opens on: empty for a paste, a file's text for an opened file. */
+/** What an import dialog opens on: empty for a paste, a file's text for an opened file, or a long file unread. */
 export interface ImportDraft<Patch> {
   readonly text: string;
+  /** A long file held unread (text empty): its reader decodes it off the page's thread. */
+  readonly file?: Blob | null;
   /** The file the text came from, or null for pasted text. */
   readonly fileName: string | null;
   /** The guesses the user corrected; every other setting is guessed afresh from the text. */
@@ -53,11 +57,11 @@ export interface ImportKind<S extends SeriesSettings, R> {
   /** How the problem table names this import's settings, where it differs from the default. */
   readonly problemWords?: Readonly<Record<string, string>>;
   /**
-   * The same import by name, for long texts (isLongText): they are read in
-   * a Web Worker (src/io/readers.ts names the readers), so the page keeps
-   * answering. A kind without one reads long texts on the page.
+   * The same import by name, for long texts and files (isLongText, read-file.ts):
+   * they are read in a Web Worker (src/io/readers.ts names the readers), so
+   * the page keeps answering.
    */
-  readonly reader?: { readonly name: ReaderName; readonly context: ReaderContext };
+  readonly reader: { readonly name: ReaderName; readonly context: ReaderContext };
 }
 
 export interface ImportDialogProps<S extends SeriesSettings, R> {
@@ -96,21 +100,28 @@ export function ImportDialog<S extends SeriesSettings, R>({
   const id = useId();
   const titleId = `${id}-title`;
   const [text, setText] = useState(initial.text);
+  const [heldFile, setHeldFile] = useState<Blob | null>(initial.file ?? null);
   const [fileName, setFileName] = useState(initial.fileName);
   const [corrections, setCorrections] = useState<Partial<S>>(initial.corrections);
   const [note, setNote] = useState<string | null>(null);
   const textRef = useRef<HTMLTextAreaElement | null>(null);
-  const file = useTextFile(words.fileWhat, (read, name) => {
-    setText(read);
+  const file = useTextFile(words.fileWhat, (chosen, name) => {
+    setText(chosen.text);
+    setHeldFile(chosen.file);
     setFileName(name);
     setCorrections({});
     setNote(null);
   });
 
-  // A long text (megabytes) never goes into the text area, and is read off the page's thread when the kind can be.
-  const held = isLongText(text);
-  const offThread = held && kind.reader !== undefined;
-  const long = useLongRead<S, R>(offThread ? text : null, kind.reader, corrections);
+  // A long text (megabytes) or file never goes into the text area, and is read off the page's thread.
+  const what = words.fileWhat;
+  const source: ReadSource | null = useMemo(
+    () =>
+      heldFile !== null ? { file: heldFile, name: fileName ?? 'the file', what } : isLongText(text) ? { text } : null,
+    [heldFile, fileName, text, what],
+  );
+  const offThread = source !== null;
+  const long = useLongRead<S, R>(source, kind.reader, corrections, (message) => letGo(null, message));
 
   // Reading a short record takes a moment: the text area stays responsive and the preview follows.
   const shownText = useDeferredValue(offThread ? '' : text);
@@ -148,12 +159,14 @@ export function ImportDialog<S extends SeriesSettings, R>({
       : null
     : syncImported;
 
-  /** Drops the held text: the dialog is as it opened empty, ready for a paste. */
-  const letGo = (why: string | null): void => {
+  /** Drops the held text or file: the dialog is as it opened empty, ready for a paste; `refused` says why a file was not used. */
+  const letGo = (why: string | null, refused: string | null = null): void => {
     setText('');
+    setHeldFile(null);
     setFileName(null);
     setCorrections({});
     setNote(why);
+    if (refused !== null) file.setMessage(refused);
   };
 
   const correct = (patch: Partial<S>): void => setCorrections((c) => ({ ...c, ...patch }));
@@ -188,8 +201,8 @@ export function ImportDialog<S extends SeriesSettings, R>({
       </div>
       <div className="paste__body">
         <div className="paste__source">
-          {held ? (
-            <HeldText text={text} label={words.textLabel} fileName={fileName} onClear={() => letGo(null)} />
+          {offThread ? (
+            <HeldText summary={long.summary} label={words.textLabel} fileName={fileName} onClear={() => letGo(null)} />
           ) : (
             <div className="field">
               <label htmlFor={`${id}-text`}>{words.textLabel}</label>
@@ -210,6 +223,7 @@ export function ImportDialog<S extends SeriesSettings, R>({
                   if (!isLongText(pasted)) return;
                   e.preventDefault();
                   setText(pasted);
+                  setHeldFile(null);
                   setFileName(null);
                   setCorrections({});
                   setNote(null);

@@ -24,7 +24,7 @@ export interface ImportLauncherOptions<S> {
   readonly beforeOpen?: () => void;
 }
 
-const BLANK = { text: '', fileName: null, corrections: {} } as const;
+const BLANK = { text: '', file: null, fileName: null, corrections: {} } as const;
 
 /**
  * The buttons that lead to an import dialog ("Paste …", "Open … file…") and
@@ -40,7 +40,7 @@ export function useImportLauncher<S>({
 }: ImportLauncherOptions<S>): ImportLauncher<S> {
   const [dialog, setDialog] = useState<ImportDraft<Partial<S>> | null>(null);
 
-  const file = useTextFile(fileWhat, (text, name) => openWith({ text, fileName: name, corrections: {} }));
+  const file = useTextFile(fileWhat, (chosen, name) => openWith({ ...chosen, fileName: name, corrections: {} }));
 
   const openWith = (draft: ImportDraft<Partial<S>>): void => {
     beforeOpen?.();

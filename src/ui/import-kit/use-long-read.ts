@@ -1,7 +1,7 @@
-import { useEffect, useRef, useState } from 'react';
+import { useEffect, useEffectEvent, useRef, useState } from 'react';
 import type { ReadOutcome, ReaderContext, ReaderName, SeriesSettings } from '../../io';
 import { startTextReader, type TextReader } from './off-thread';
-import type { ReadStage } from './reader-messages';
+import type { HeldSummary, ReadSource, ReadStage } from './reader-messages';
 
 export type LongReadState<S extends SeriesSettings, R> =
   | { readonly phase: 'idle' }
@@ -11,51 +11,70 @@ export type LongReadState<S extends SeriesSettings, R> =
 
 export interface LongRead<S extends SeriesSettings, R> {
   readonly state: LongReadState<S, R>;
-  /** Stops the read under way (the reader lets the text go). */
+  /** The first lines and the size of the text, once the reader has opened it; null before. */
+  readonly summary: HeldSummary | null;
+  /** Stops the read under way (the reader lets the source go). */
   readonly stop: () => void;
 }
 
 /**
- * Reads a long text with a reader off the page's thread (off-thread.ts),
- * again whenever the corrections change. `text` null: nothing to read.
+ * Reads a long text or file with a reader off the page's thread
+ * (off-thread.ts), again whenever the corrections change. `source` null:
+ * nothing to read. `onRefused` hears why a file cannot be used.
  */
 export function useLongRead<S extends SeriesSettings, R>(
-  text: string | null,
-  reader: { readonly name: ReaderName; readonly context: ReaderContext } | undefined,
+  source: ReadSource | null,
+  reader: { readonly name: ReaderName; readonly context: ReaderContext },
   corrections: Partial<S>,
+  onRefused: (message: string) => void,
 ): LongRead<S, R> {
   const [state, setState] = useState<LongReadState<S, R>>({ phase: 'idle' });
+  const [summary, setSummary] = useState<{ of: ReadSource; summary: HeldSummary } | null>(null);
   const readerRef = useRef<TextReader | null>(null);
+  // Whether the reader under way has opened its source (later reads start at the guess).
+  const openedRef = useRef(false);
+  const refused = useEffectEvent(onRefused);
 
   useEffect(() => {
-    if (text === null || reader === undefined) {
+    if (source === null) {
       setState({ phase: 'idle' });
       return;
     }
-    const started = startTextReader(text);
+    const started = startTextReader(source);
     readerRef.current = started;
+    openedRef.current = false;
     return () => {
       started.stop();
       if (readerRef.current === started) readerRef.current = null;
     };
-  }, [text, reader]);
+  }, [source, reader]);
 
   useEffect(() => {
     const current = readerRef.current;
-    if (current === null || reader === undefined) return;
-    setState({ phase: 'reading', stage: 'guess', lines: 0 });
+    if (current === null || source === null) return;
+    setState({ phase: 'reading', stage: openedRef.current ? 'guess' : 'open', lines: 0 });
     current.read(
       { reader: reader.name, context: reader.context, corrections },
       {
         stage: (stage, lines) => setState({ phase: 'reading', stage, lines }),
+        opened: (held) => {
+          openedRef.current = true;
+          setSummary({ of: source, summary: held });
+        },
+        refused: (message) => {
+          setState({ phase: 'idle' });
+          refused(message);
+        },
         done: (outcome) => setState({ phase: 'done', outcome: outcome as ReadOutcome<S, R> }),
         failed: (message) => setState({ phase: 'failed', message }),
       },
     );
-  }, [text, reader, corrections]);
+  }, [source, reader, corrections]);
 
   return {
     state,
+    // A summary of an earlier source is never shown for this one.
+    summary: summary !== null && summary.of === source ? summary.summary : null,
     stop: () => {
       readerRef.current?.stop();
       setState({ phase: 'idle' });

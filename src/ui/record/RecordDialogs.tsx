@@ -108,8 +108,10 @@ export function FlowRecordDialog({
       },
       Settings: FlowSettings,
       problemWords: { valueColumn: 'Discharge column', unit: 'Discharge unit' },
+      // Long records are read in a worker, told the number format rather than reading it from the page.
+      reader: { name: 'flow', context: { numberFormat: format, units } },
     };
-  }, []);
+  }, [units]);
   return (
     <ImportDialog
       kind={kind}

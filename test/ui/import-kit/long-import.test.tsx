@@ -1,7 +1,7 @@
 // @vitest-environment jsdom
 import { fireEvent, screen, waitFor, within } from '@testing-library/react';
 import { describe, expect, it } from 'vitest';
-import { LONG_TEXT_CHARS } from '../../../src/ui/import-kit/HeldText';
+import { LONG_TEXT_CHARS } from '../../../src/ui/import-kit/read-file';
 import { LAZY_LOAD_MS, renderWorkbench } from '../../helpers/render';
 
 // Invented gauge records for these tests (no real gauge or storm).

@@ -32,6 +32,8 @@ function listen() {
   const outcomes: ReadOutcome[] = [];
   const listener: ReadListener = {
     stage: (stage, lines) => heard.push(`${stage} ${lines}`),
+    opened: (summary) => heard.push(`opened ${summary.lines} lines, ${summary.chars} characters: ${summary.head}`),
+    refused: (message) => heard.push(`refused ${message}`),
     done: (outcome) => outcomes.push(outcome),
     failed: (message) => heard.push(`failed ${message}`),
   };
@@ -39,26 +41,26 @@ function listen() {
 }
 
 describe('a text reader in a worker', () => {
-  it('sends the text once, then only the corrections', () => {
+  it('sends the source once, then only the corrections', () => {
     const workers: FakeWorker[] = [];
-    const reader = startTextReader('1\n2\n', () => {
+    const reader = startTextReader({ text: '1\n2\n' }, () => {
       workers.push(new FakeWorker());
       return workers.at(-1) as unknown as Worker;
     });
     const { listener } = listen();
     reader.read(request, listener);
     const w = workers[0] as FakeWorker;
-    expect(w.sent[0]?.text).toBe('1\n2\n');
+    expect(w.sent[0]?.source).toEqual({ text: '1\n2\n' });
     w.reply({ type: 'done', job: 1, outcome: { imported: null } });
     reader.read({ ...request, corrections: { skipLines: 1 } }, listener);
-    expect(w.sent[1]?.text).toBeUndefined();
+    expect(w.sent[1]?.source).toBeUndefined();
     expect(w.sent[1]?.corrections).toEqual({ skipLines: 1 });
     expect(reader.where).toBe('worker');
   });
 
   it('a read asked for while one runs ends that worker and starts another with the text', async () => {
     const workers: FakeWorker[] = [];
-    const reader = startTextReader('abc', () => {
+    const reader = startTextReader({ text: 'abc' }, () => {
       workers.push(new FakeWorker());
       return workers.at(-1) as unknown as Worker;
     });
@@ -67,7 +69,7 @@ describe('a text reader in a worker', () => {
     reader.read({ ...request, corrections: { hasHeader: true } }, listener);
     expect(workers).toHaveLength(2);
     expect(workers[0]?.ended).toBe(true);
-    expect(workers[1]?.sent[0]?.text).toBe('abc');
+    expect(workers[1]?.sent[0]?.source).toEqual({ text: 'abc' });
     // A late reply of the ended job is not heard.
     workers[1]?.reply({ type: 'stage', job: 1, stage: 'read', lines: 1 });
     workers[1]?.reply({ type: 'stage', job: 2, stage: 'read', lines: 1 });
@@ -79,7 +81,7 @@ describe('a text reader in a worker', () => {
 
   it('an outcome whose columns are still being copied when a new read is asked for is not heard', async () => {
     const workers: FakeWorker[] = [];
-    const reader = startTextReader('abc', () => {
+    const reader = startTextReader({ text: 'abc' }, () => {
       workers.push(new FakeWorker());
       return workers.at(-1) as unknown as Worker;
     });
@@ -93,7 +95,7 @@ describe('a text reader in a worker', () => {
 
   it('stop ends the worker and nothing more is heard', () => {
     const w = new FakeWorker();
-    const reader = startTextReader('abc', () => w as unknown as Worker);
+    const reader = startTextReader({ text: 'abc' }, () => w as unknown as Worker);
     const { heard, listener } = listen();
     reader.read(request, listener);
     reader.stop();
@@ -105,18 +107,55 @@ describe('a text reader in a worker', () => {
   it('reads on the page when the worker fails to load, and when none can start', async () => {
     const w = new FakeWorker();
     const text = '10:15\t0.2\n10:30\t0.4\n10:45\t0.6';
-    const reader = startTextReader(text, () => w as unknown as Worker);
+    const reader = startTextReader({ text }, () => w as unknown as Worker);
     const { heard, outcomes, listener } = listen();
     reader.read(request, listener);
     w.onerror?.({ preventDefault: () => undefined });
     expect(reader.where).toBe('page');
-    await new Promise((ok) => setTimeout(ok, 50));
-    expect(heard).toEqual(['guess 3', 'read 3']);
+    await vi.waitFor(() => expect(outcomes).toHaveLength(1));
+    expect(heard).toEqual(['open 0', `opened 3 lines, ${text.length} characters: ${text}`, 'guess 3', 'read 3']);
     // 0.2 + 0.4 + 0.6 mm in three 15-min bars
     expect((outcomes[0]?.imported as { depthsMm: number[] }).depthsMm).toEqual([0.2, 0.4, 0.6]);
 
-    const none = startTextReader(text, () => null);
+    const none = startTextReader({ text }, () => null);
     expect(none.where).toBe('page');
+  });
+
+  it('hands a file to the worker as it is (a handle, never its text), and again to a fresh worker', () => {
+    const workers: FakeWorker[] = [];
+    const file = new Blob(['10:15\t0.2\n']);
+    const reader = startTextReader({ file, name: 'g.csv', what: 'the rainfall' }, () => {
+      workers.push(new FakeWorker());
+      return workers.at(-1) as unknown as Worker;
+    });
+    const { heard, listener } = listen();
+    reader.read(request, listener);
+    const sent = workers[0]?.sent[0]?.source as { file: Blob };
+    expect(sent.file).toBe(file);
+    workers[0]?.reply({ type: 'opened', job: 1, summary: { head: '10:15\t0.2', lines: 1, chars: 10 } });
+    expect(heard).toEqual(['opened 1 lines, 10 characters: 10:15\t0.2']);
+    reader.read({ ...request, corrections: { hasHeader: false } }, listener);
+    expect((workers[1]?.sent[0]?.source as { file: Blob }).file).toBe(file);
+  });
+
+  it('on the page, decodes a file itself, or refuses it by name, and reads no further', async () => {
+    const file = new Blob(['10:15\t0.2\n10:30\t0.4\n']);
+    const { heard, outcomes, listener } = listen();
+    startTextReader({ file, name: 'g.csv', what: 'the rainfall' }, () => null).read(request, listener);
+    await vi.waitFor(() => expect(outcomes).toHaveLength(1));
+    expect(heard).toEqual(['open 0', 'opened 2 lines, 20 characters: 10:15\t0.2\n10:30\t0.4', 'guess 2', 'read 2']);
+    // 0.2 + 0.4 mm in two 15-min bars
+    expect((outcomes[0]?.imported as { depthsMm: number[] }).depthsMm).toEqual([0.2, 0.4]);
+
+    const refusal = listen();
+    startTextReader({ file: new Blob(['\n\n']), name: 'blank.csv', what: 'the rainfall' }, () => null).read(
+      request,
+      refusal.listener,
+    );
+    await vi.waitFor(() => expect(refusal.heard).toContain('refused blank.csv is empty.'));
+    await new Promise((ok) => setTimeout(ok, 20));
+    expect(refusal.heard).toEqual(['open 0', 'refused blank.csv is empty.']);
+    expect(refusal.outcomes).toEqual([]);
   });
 });
 

@@ -24,7 +24,7 @@ function recordOf(text: string, settings: FlowImportSettings): FlowRecord | null
   return result.ok ? result.record : null;
 }
 
-const FLOW_KIND: ImportKind<FlowImportSettings, FlowRecord> = {
+const FLOW_KIND: Omit<ImportKind<FlowImportSettings, FlowRecord>, 'reader'> = {
   words: {
     title: 'Paste streamflow',
     intro:
