@@ -6,10 +6,11 @@ import { NumberField } from '../fields/NumberField';
 const DEFAULT_TEXTURE: SoilTextureName = 'loam';
 
 /**
- * Green–Ampt values (shown for a method whose spec has `soilPresets`) from a soil texture (the core's table of Rawls,
+ * Green–Ampt values from a soil texture (the core's table of Rawls,
  * Brakensiek & Miller 1983) and the soil's initial effective saturation:
  * one click sets K, ψ and Δθ together, with Sᵢ and λ for recovery in dry
- * spells, as one undoable edit. The recovery switch stays as it was.
+ * spells, as one undoable edit. The recovery switch stays as it was. Shown
+ * for a method whose spec says `soilPresets`.
  */
 export function SoilPresets() {
   const actions = useActions();
