@@ -14,6 +14,7 @@ import {
   isSpanH,
   isLossKind,
   isTransformKind,
+  fittableTransformKeys,
   TRANSFORM_OBJECTIVES,
   validateBaseflowMethod,
   validateHydrograph,
@@ -35,7 +36,7 @@ import {
   type ScenarioResult,
 } from './problems';
 import { MAX_NAME_LENGTH, MAX_NOTES_LENGTH, tooLongText } from './text-limits';
-import { fittableTransformParameters, readTransform } from './transform-check';
+import { readTransform } from './transform-check';
 
 /**
  * The most bars a storm may have: a year of one-minute bars is about half
@@ -605,7 +606,7 @@ const crossFieldChecks = v.rawCheck<v.InferOutput<v.ObjectSchema<typeof Document
     const hydrograph = doc['hydrograph'] as { transform?: unknown; fitParameter?: unknown } | undefined;
     const transformKind = (hydrograph?.transform as { kind?: unknown } | null | undefined)?.kind;
     if (isTransformKind(transformKind) && typeof hydrograph?.fitParameter === 'string') {
-      const keys = fittableTransformParameters(transformKind);
+      const keys = fittableTransformKeys(transformKind);
       if (!keys.includes(hydrograph.fitParameter)) {
         add(
           ['hydrograph', 'fitParameter'],

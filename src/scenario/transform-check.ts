@@ -49,7 +49,8 @@ export function readTransform(input: unknown, report: ReportAt, storedAs?: Trans
     return undefined;
   }
   const params = TRANSFORMS[kind].params as readonly TransformParam[];
-  const known = ['kind', ...params.map((p) => p.key), ...(kind === 'unit-hydrograph' ? ['ordinatesM3sPerMm'] : [])];
+  const ordinates = TRANSFORMS[kind].ordinates === true;
+  const known = ['kind', ...params.map((p) => p.key), ...(ordinates ? ['ordinatesM3sPerMm'] : [])];
   let ok = true;
   for (const key of Object.keys(raw)) {
     if (!known.includes(key)) {
@@ -64,7 +65,7 @@ export function readTransform(input: unknown, report: ReportAt, storedAs?: Trans
     // -0 and 0 are one amount; keep one so that documents compare equal.
     candidate[p.key] = v === 0 ? 0 : v;
   }
-  if (kind === 'unit-hydrograph') {
+  if (ordinates) {
     const list = own('ordinatesM3sPerMm');
     if (!Array.isArray(list)) {
       report(['ordinatesM3sPerMm'], `must be a list of discharges in m³/s per mm (got ${describeValue(list)}).`);
@@ -87,9 +88,4 @@ export function readTransform(input: unknown, report: ReportAt, storedAs?: Trans
     return undefined;
   }
   return candidate as unknown as Transform;
-}
-
-/** Keys of the parameters of a transform kind that `fitTransform` can fit. */
-export function fittableTransformParameters(kind: TransformKind): string[] {
-  return (TRANSFORMS[kind].params as readonly TransformParam[]).filter((p) => p.fit).map((p) => p.key);
 }

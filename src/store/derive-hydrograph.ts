@@ -3,6 +3,7 @@ import {
   compareHydrographs,
   dischargeAtH,
   attempt,
+  hasOrdinates,
   runoffCurve,
   runoffHydrograph,
   unitHydrographVolumeMm,
@@ -149,7 +150,7 @@ export function createHydrographDerived(loss: LossSide): HydrographDerived {
   });
 
   const uhDepth = memoLast((transform: Transform | null, areaM2: number): number | null => {
-    if (transform?.kind !== 'unit-hydrograph' || !(areaM2 > 0)) return null;
+    if (transform === null || !hasOrdinates(transform) || !(areaM2 > 0)) return null;
     const r = attempt(() => unitHydrographVolumeMm(transform, areaM2));
     return r.ok ? r.value : null;
   });

@@ -4,6 +4,8 @@ import {
   computeLosses,
   fitTransform,
   attempt,
+  fittableTransformKeys,
+  hasOrdinates,
   validateTransform,
   type LossMethod,
   withTransformValue,
@@ -11,7 +13,6 @@ import {
   type TransformFitResult,
   type TransformKind,
   type TransformObjective,
-  type TransformParam,
 } from '../core';
 import type { HydrographSettings, Scenario } from '../scenario/types';
 import type { Derived } from './derive';
@@ -19,24 +20,18 @@ import { withMethod } from './edits';
 
 /** A transform as the document holds it: plain lists, so it serialises as it is. */
 function plain(transform: Transform): Transform {
-  return transform.kind === 'unit-hydrograph'
+  return hasOrdinates(transform)
     ? { ...transform, ordinatesM3sPerMm: Array.from(transform.ordinatesM3sPerMm) }
     : transform;
 }
 
-/** Parameters of a transform kind that `fitTransform` can fit, in the table's order. */
-export function fittableTransformKeys(kind: TransformKind): string[] {
-  return (TRANSFORMS[kind].params as readonly TransformParam[]).filter((p) => p.fit).map((p) => p.key);
-}
-
-/** The parameter the Fit sets: the one chosen, else the kind's first fittable one (lag, or Nash's k with n held). */
+/** The parameter the Fit sets: the one chosen, else the kind's `fitFirst` or first fittable one (lag, or Nash's k with n held). */
 export function transformFitParameter(settings: HydrographSettings): string | null {
   const t = settings.transform;
   if (t === null) return null;
   const keys = fittableTransformKeys(t.kind);
   if (settings.fitParameter !== null && keys.includes(settings.fitParameter)) return settings.fitParameter;
-  if (t.kind === 'nash') return 'kH';
-  return keys[0] ?? null;
+  return TRANSFORMS[t.kind].fitFirst ?? keys[0] ?? null;
 }
 
 function withSettings(s: Scenario, patch: Partial<HydrographSettings>): Scenario {

@@ -501,6 +501,7 @@ export const greenAmptSpec: MethodSpec<'green-ampt'> = {
         'Runoff need not rise or fall steadily with λ (faster drainage, but less pull into the drained zone), so a fit of it may find one of two values.',
     },
   ],
+  soilPresets: true,
   choices: [
     recoverySwitch<'green-ampt'>(
       'Off: a dry spell leaves the wetted zone as the rain left it, so the next burst meets the same wet soil. ' +

@@ -251,6 +251,14 @@ export interface MethodSpec<K extends LossKind = LossKind> {
   readonly rateParam?: NumericParam<K>['key'];
   /** Optional: a part of the loss the same method computes alone. See LossPart. */
   readonly lossPart?: LossPart<K>;
+  /**
+   * Optional: the soil values can be set from a texture of the published soil
+   * table (soils.ts, `greenAmptForTexture`), keeping the recovery switch as it
+   * is; screens offer the textures beside the parameters. Only a method whose
+   * type is Green–Ampt's may say so: the table gives its K, ψ and Δθ
+   * (checked kind by kind, so the spec of any method may hold it).
+   */
+  readonly soilPresets?: K extends LossKind ? (MethodOf<K> extends GreenAmptLoss ? true : never) : never;
 }
 
 /**

@@ -17,11 +17,14 @@ export {
   TRANSFORM_OBJECTIVES,
   NRCS_PEAK_RATE_FACTOR,
   isTransformKind,
+  hasOrdinates,
+  fittableTransformKeys,
   transformValue,
   withTransformValue,
   type TransformObjective,
   type TransformParam,
   type TransformSpec,
+  type OrdinatesTransform,
 } from './transforms';
 export { TRANSFORM_WEIGHTS } from './weights';
 export { validateTransform, validateExcess } from './validate';

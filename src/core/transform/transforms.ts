@@ -22,6 +22,13 @@ export interface TransformParam<K extends TransformKind = TransformKind> {
   readonly optional?: boolean;
   /** Can be fitted to an observed hydrograph by `fitTransform`; then its search range. */
   readonly fit?: { readonly searchMin: number; readonly searchMax: number };
+  /** Its letter in the equations, for short phrases ("n held"); absent: its label. */
+  readonly symbol?: string;
+  /**
+   * A lag that a time of concentration sets, lag = 0.6·Tc (NEH-630 ch. 15):
+   * screens offer Tc beside it.
+   */
+  readonly fromTimeOfConcentration?: true;
   readonly step: number;
   readonly help: string;
 }
@@ -35,7 +42,23 @@ export interface TransformSpec<K extends TransformKind = TransformKind> {
   readonly source: string;
   readonly params: readonly TransformParam<K>[];
   readonly defaults: TransformOf<K>;
+  /**
+   * With more than one parameter to fit, the one the Fit sets unless the user
+   * chose another; absent: the first that can be fitted.
+   */
+  readonly fitFirst?: TransformParam<K>['key'];
+  /**
+   * The transform is given by a list of unit hydrograph ordinates
+   * (`ordinatesM3sPerMm`) besides its parameters: validation checks each
+   * ordinate, screens offer the list and the volume it holds, exports count
+   * it. Only a kind whose type holds the list may say so (checked kind by
+   * kind, so the spec of any transform may hold it).
+   */
+  readonly ordinates?: K extends TransformKind ? (TransformOf<K> extends OrdinatesTransform ? true : never) : never;
 }
+
+/** A transform given by its unit hydrograph's ordinates. */
+export type OrdinatesTransform = Extract<Transform, { readonly ordinatesM3sPerMm: ArrayLike<number> }>;
 
 const LAG_HELP =
   'Time from the centre of the excess to the peak of the unit hydrograph; 0.6 × the time of concentration (NEH-630 ch. 15).';
@@ -50,6 +73,7 @@ const lagParam = {
   fit: { searchMin: 0.01, searchMax: 1000 },
   step: 0.05,
   help: LAG_HELP,
+  fromTimeOfConcentration: true,
 } as const;
 
 /**
@@ -105,6 +129,7 @@ const TRANSFORM_TABLE = kindTable<Transform, { readonly [K in TransformKind]: Tr
           max: 100,
           minExclusive: true,
           fit: { searchMin: 0.5, searchMax: 50 },
+          symbol: 'n',
           step: 0.1,
           help: 'Need not be a whole number; larger n gives a more peaked, more delayed hydrograph.',
         },
@@ -116,11 +141,14 @@ const TRANSFORM_TABLE = kindTable<Transform, { readonly [K in TransformKind]: Tr
           max: 1000,
           minExclusive: true,
           fit: { searchMin: 0.01, searchMax: 1000 },
+          symbol: 'k',
           step: 0.05,
           help: 'Storage over outflow of each reservoir; the mean delay of the cascade is n·k.',
         },
       ],
       defaults: { kind: 'nash', n: 3, kH: 0.5 },
+      // k with n held: the storage constant moves the timing and keeps the shape.
+      fitFirst: 'kH',
     },
     'unit-hydrograph': {
       kind: 'unit-hydrograph',
@@ -157,6 +185,7 @@ const TRANSFORM_TABLE = kindTable<Transform, { readonly [K in TransformKind]: Tr
         // 0.278 m³/s·h = 1000.8 m³ = 1.0008 mm over 1 km².
         ordinatesM3sPerMm: [0, 0.05, 0.09, 0.06, 0.035, 0.02, 0.0118, 0.0062, 0.0033, 0.0012, 0.0005, 0],
       },
+      ordinates: true,
     },
   },
   'transform',
@@ -186,3 +215,13 @@ export const withTransformValue: <T extends Transform>(transform: T, key: string
 
 /** Whatever `transform` holds for `key`, unchecked: for validation, which says what it got. */
 export const readTransformValue: (transform: Transform, key: string) => unknown = TRANSFORM_TABLE.read;
+
+/** Whether `transform` is given by its ordinates (its spec's `ordinates`). */
+export function hasOrdinates(transform: Transform): transform is OrdinatesTransform {
+  return TRANSFORMS[transform.kind].ordinates === true;
+}
+
+/** Keys of the parameters of a transform kind that `fitTransform` can fit, in the table's order. */
+export function fittableTransformKeys(kind: TransformKind): string[] {
+  return (TRANSFORMS[kind].params as readonly TransformParam[]).filter((p) => p.fit).map((p) => p.key);
+}

@@ -1,4 +1,5 @@
 import { InputError } from '../errors';
+import { hasOrdinates } from './transforms';
 import type { UnitHydrographTransform } from './types';
 import { unitHydrographDepthMm } from './unit-hydrograph';
 import { validateAreaM2, validateTransform } from './validate';
@@ -12,11 +13,9 @@ import { validateAreaM2, validateTransform } from './validate';
  */
 export function unitHydrographVolumeMm(uh: UnitHydrographTransform, areaM2: number): number {
   validateTransform(uh);
-  if (uh.kind !== 'unit-hydrograph') {
-    throw new InputError(
-      'kind',
-      `Only a unit hydrograph of your own has a volume to check (got "${String(uh.kind)}").`,
-    );
+  const kind: string = uh.kind;
+  if (!hasOrdinates(uh)) {
+    throw new InputError('kind', `Only a unit hydrograph of your own has a volume to check (got "${kind}").`);
   }
   validateAreaM2(areaM2);
   return unitHydrographDepthMm(uh, areaM2);

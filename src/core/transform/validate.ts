@@ -1,6 +1,13 @@
 import { InputError } from '../errors';
-import { TRANSFORMS, isTransformKind, readTransformValue, type TransformParam } from './transforms';
-import type { Excess, Transform, UnitHydrographTransform } from './types';
+import {
+  TRANSFORMS,
+  hasOrdinates,
+  isTransformKind,
+  readTransformValue,
+  type OrdinatesTransform,
+  type TransformParam,
+} from './transforms';
+import type { Excess, Transform } from './types';
 
 const isFiniteNumber = (v: unknown): v is number => typeof v === 'number' && Number.isFinite(v);
 
@@ -34,10 +41,10 @@ export function validateTransform(transform: Transform): void {
       throw new InputError(param.key, `${param.label} must be ${describeRange(param)}${unit} (got ${v}).`);
     }
   }
-  if (transform.kind === 'unit-hydrograph') validateOrdinates(transform);
+  if (hasOrdinates(transform)) validateOrdinates(transform);
 }
 
-function validateOrdinates(uh: UnitHydrographTransform): void {
+function validateOrdinates(uh: OrdinatesTransform): void {
   const u = uh.ordinatesM3sPerMm;
   const field = 'ordinatesM3sPerMm';
   if (!u || typeof u.length !== 'number') throw new InputError(field, 'The unit hydrograph has no list of ordinates.');

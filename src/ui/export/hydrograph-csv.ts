@@ -1,5 +1,6 @@
 import {
   TRANSFORMS,
+  hasOrdinates,
   transformValue,
   type HydrographComparison,
   type RunoffHydrograph,
@@ -22,7 +23,7 @@ export function transformParametersText(transform: Transform, format: (x: number
     if (v === undefined) continue;
     parts.push(`${p.label} = ${format(v)}${p.unit === 'h' ? ' h' : ''}`);
   }
-  if (transform.kind === 'unit-hydrograph') parts.push(`${transform.ordinatesM3sPerMm.length} ordinates (m³/s per mm)`);
+  if (hasOrdinates(transform)) parts.push(`${transform.ordinatesM3sPerMm.length} ordinates (m³/s per mm)`);
   return parts.join('; ');
 }
 

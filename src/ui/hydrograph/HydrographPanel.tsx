@@ -3,6 +3,7 @@ import {
   TRANSFORMS,
   TRANSFORM_KINDS,
   TRANSFORM_OBJECTIVES,
+  fittableTransformKeys,
   isTransformKind,
   type TransformObjective,
   type TransformParam,
@@ -11,7 +12,6 @@ import { useActions, useDerived, useScenario, useWorkbenchStore } from '../../st
 import { useDeferredDerived } from '../../store/deferred';
 import {
   fitRunoffTransform,
-  fittableTransformKeys,
   transformFitParameter,
   withTransformFit,
   withTransformKind,
@@ -114,6 +114,12 @@ function HydrographFit() {
   const parameter = transformFitParameter(settings);
   const params = TRANSFORMS[transform.kind].params as readonly TransformParam[];
   const labelOf = (key: string): string => params.find((p) => p.key === key)?.label ?? key;
+  // Fitting one of several parameters holds the others: "(n held)".
+  const held = (key: string): string =>
+    params
+      .filter((p) => p.fit && p.key !== key)
+      .map((p) => p.symbol ?? p.label.toLowerCase())
+      .join(', ');
   return (
     <div className="hydrograph__fit" role="group" aria-labelledby="hydro-fit-title">
       <h3 id="hydro-fit-title">Fit to the record</h3>
@@ -131,7 +137,7 @@ function HydrographFit() {
             {keys.map((key) => (
               <option key={key} value={key}>
                 {labelOf(key)}
-                {transform.kind === 'nash' ? (key === 'kH' ? ' (n held)' : ' (k held)') : ''}
+                {` (${held(key)} held)`}
               </option>
             ))}
           </select>

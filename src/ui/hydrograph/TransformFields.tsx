@@ -1,13 +1,14 @@
 import {
   TRANSFORMS,
   attempt,
+  hasOrdinates,
   lagFromTimeOfConcentration,
   transformValue,
   validateTransform,
   withTransformValue,
+  type OrdinatesTransform,
   type Transform,
   type TransformParam,
-  type UnitHydrographTransform,
 } from '../../core';
 import { useActions, useDerived } from '../../store';
 import { withTransform, withTransformParam } from '../../store/hydrograph-edits';
@@ -48,10 +49,11 @@ function ParamField({ transform, param }: { transform: Transform; param: Transfo
   );
 }
 
-/** Lag from a time of concentration, lag = 0.6·Tc (NEH-630 ch. 15): a helper that sets the lag. */
-function TimeOfConcentration({ transform }: { transform: Transform & { lagH: number } }) {
+/** Lag from a time of concentration, lag = 0.6·Tc (NEH-630 ch. 15): a helper that sets the lag (`lagKey`). */
+function TimeOfConcentration({ transform, lagKey }: { transform: Transform; lagKey: string }) {
   const actions = useActions();
-  const tcH = transform.lagH / lagFromTimeOfConcentration(1);
+  const lagH = transformValue(transform, lagKey);
+  const tcH = lagH === undefined ? null : lagH / lagFromTimeOfConcentration(1);
   return (
     <NumberField
       id="transform-tc"
@@ -59,11 +61,11 @@ function TimeOfConcentration({ transform }: { transform: Transform & { lagH: num
       unit="h"
       value={tcH}
       plausible="responseTime"
-      check={(tc) => coreProblem(transform, 'lagH', lagFromTimeOfConcentration(tc))}
+      check={(tc) => coreProblem(transform, lagKey, lagFromTimeOfConcentration(tc))}
       onCommit={(tc, edit) =>
         actions.edit(
           'Set lag from time of concentration',
-          (s) => withTransformParam(s, 'lagH', lagFromTimeOfConcentration(tc)),
+          (s) => withTransformParam(s, lagKey, lagFromTimeOfConcentration(tc)),
           edit,
         )
       }
@@ -100,20 +102,19 @@ export function TransformFields({ transform }: { transform: Transform }) {
   const actions = useActions();
   const spec = TRANSFORMS[transform.kind];
   const params = spec.params as readonly TransformParam[];
+  const lagKey = params.find((p) => p.fromTimeOfConcentration)?.key;
   return (
     <div className="hydrograph__params" key={transform.kind}>
       {params.map((param) => (
         <ParamField key={param.key} transform={transform} param={param} />
       ))}
-      {transform.kind === 'triangular' || transform.kind === 'nrcs-dimensionless' ? (
-        <TimeOfConcentration transform={transform} />
-      ) : null}
-      {transform.kind === 'unit-hydrograph' ? (
+      {lagKey === undefined ? null : <TimeOfConcentration transform={transform} lagKey={lagKey} />}
+      {hasOrdinates(transform) ? (
         <>
           <OrdinatesField
             transform={transform}
             onCommit={(values) => {
-              const next: UnitHydrographTransform = { ...transform, ordinatesM3sPerMm: values };
+              const next: OrdinatesTransform = { ...transform, ordinatesM3sPerMm: values };
               const r = attempt(() =>
                 actions.edit('Set unit hydrograph ordinates', (s) => withTransform(s, next), {
                   coalesceKey: 'uh-ordinates',

@@ -177,7 +177,7 @@ export function MethodPanel() {
           .map((param) => (
             <ParamField key={param.key} param={param} method={method} stored={stored} />
           ))}
-        {method.kind === 'green-ampt' ? <SoilPresets /> : null}
+        {spec.soilPresets ? <SoilPresets /> : null}
       </div>
       <p className="method__dry" id="method-dry-bars">
         <span className="method__dry-label">In dry bars: </span>

@@ -1,5 +1,5 @@
 import { useState } from 'react';
-import { SOIL_TEXTURES, greenAmptForTexture, attempt, type SoilTextureName } from '../../core';
+import { SOIL_TEXTURES, greenAmptForTexture, attempt, methodValue, type SoilTextureName } from '../../core';
 import { useActions, useScenario } from '../../store';
 import { NumberField } from '../fields/NumberField';
 
@@ -9,11 +9,15 @@ const DEFAULT_TEXTURE: SoilTextureName = 'loam';
  * Green–Ampt values from a soil texture (the core's table of Rawls,
  * Brakensiek & Miller 1983) and the soil's initial effective saturation:
  * one click sets K, ψ and Δθ together, with Sᵢ and λ for recovery in dry
- * spells, as one undoable edit. The recovery switch stays as it was.
+ * spells, as one undoable edit. The recovery switch stays as it was. Shown
+ * for a method whose spec says `soilPresets`.
  */
 export function SoilPresets() {
   const actions = useActions();
-  const recovers = useScenario((s) => (s.method.kind === 'green-ampt' ? s.method.recovers : undefined));
+  const recovers = useScenario((s) => {
+    const v = methodValue(s.method, 'recovers');
+    return typeof v === 'boolean' ? v : undefined;
+  });
   const [texture, setTexture] = useState<SoilTextureName>(DEFAULT_TEXTURE);
   const [saturation, setSaturation] = useState(0.3);
   const [problem, setProblem] = useState<string | null>(null);

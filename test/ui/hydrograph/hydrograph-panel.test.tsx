@@ -144,6 +144,29 @@ describe('the runoff hydrograph panel', () => {
     expect(scenario().hydrograph.transform).toEqual({ kind: 'triangular', lagH: 3 });
   });
 
+  it('offers Tc beside a lag only: for the triangular and NRCS unit hydrographs, not for the Nash cascade', async () => {
+    const { user } = await open(ONE_BAR);
+    const picker = screen.getByRole('combobox', { name: 'Unit hydrograph' });
+    const tc = () => screen.queryByRole('textbox', { name: 'Time of concentration Tc (h)' });
+    expect(tc()).not.toBeNull();
+    await user.selectOptions(picker, 'nrcs-dimensionless');
+    expect(tc()).not.toBeNull();
+    await user.selectOptions(picker, 'nash');
+    expect(tc()).toBeNull();
+  });
+
+  it("fits the Nash cascade's k with n held unless n is chosen, and says which one each choice holds", async () => {
+    const { user } = await open(WITH_RECORD);
+    await user.selectOptions(screen.getByRole('combobox', { name: 'Unit hydrograph' }), 'nash');
+    const fitPicker = screen.getByRole('combobox', { name: 'Hydrograph parameter to fit' });
+    expect(
+      within(fitPicker)
+        .getAllByRole('option')
+        .map((o) => o.textContent),
+    ).toEqual(['Number of reservoirs n (k held)', 'Storage constant k (n held)']);
+    expect(fitPicker).toHaveValue('kH');
+  });
+
   it('reads pasted ordinates with the number reader, says how far their volume is from 1 mm, and refuses a bad one by number', async () => {
     const { user, scenario } = await open(ONE_BAR);
     await user.selectOptions(screen.getByRole('combobox', { name: 'Unit hydrograph' }), 'unit-hydrograph');
