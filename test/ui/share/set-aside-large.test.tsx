@@ -88,7 +88,8 @@ describe('a set-aside copy that points into the large store', { timeout: 20_000 
     await user.click(await within(panel).findByRole('button', { name: 'Undo' }));
     await vi.waitFor(() => expect(storage.data.get(KEY)).toBe(markerText));
     expect(await get(id, records)).toBeDefined();
-    expect(within(list() as HTMLElement).getAllByRole('listitem')).toHaveLength(1);
+    // The list is drawn again after the write: wait for it (read at once, it raced the render on a loaded machine).
+    await vi.waitFor(() => expect(within(list() as HTMLElement).getAllByRole('listitem')).toHaveLength(1));
   });
 
   it('when the record is gone, Restore and Download say so plainly and give nothing', async () => {
