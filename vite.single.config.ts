@@ -19,9 +19,17 @@ function withoutServiceWorker(options: readonly PluginOption[]): Plugin[] {
 
 // The one page has no file beside it to start a worker from: long imports are read on the page instead.
 const pageReader = fileURLToPath(new URL('./src/ui/import-kit/start-worker.page.ts', import.meta.url));
+// Nor the large store's writer: its records are put from the page.
+const pageWriter = fileURLToPath(new URL('./src/store/start-large-writer.page.ts', import.meta.url));
 
 export default defineConfig({
   ...served,
-  resolve: { ...served.resolve, alias: [{ find: /^\.\/start-worker$/, replacement: pageReader }] },
+  resolve: {
+    ...served.resolve,
+    alias: [
+      { find: /^\.\/start-worker$/, replacement: pageReader },
+      { find: /^\.\/start-large-writer$/, replacement: pageWriter },
+    ],
+  },
   plugins: [...withoutServiceWorker(served.plugins ?? []), ...singleFileBuild()],
 });

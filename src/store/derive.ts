@@ -102,6 +102,8 @@ export interface Derived extends HydrographDerived {
    */
   fitInUse(s: Scenario): boolean;
   results(s: Scenario): Results;
+  /** Readies the results' arrays for a long storm about to enter the store, in small tasks (loss-ring.ts). */
+  prepareStorm(storm: Scenario['storm']): Promise<void>;
   /**
    * The loss of the part the effective method's table entry computes alone
    * (`lossPart`, the chart's shade), per bar, mm; null when it has none or the
@@ -298,6 +300,7 @@ export function createDerived(): Derived {
       return methodValue(effectiveMethod(s), key) === f.value;
     },
     results: resultsOf,
+    prepareStorm: (storm) => buffersFor.prepare(storm),
     lossPartMm: lossPartOf,
     runoffVolumeM3: (s) => {
       const r = resultsOf(s);

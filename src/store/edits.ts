@@ -96,7 +96,17 @@ function ownCopy(column: ArrayLike<number>): number[] {
   return copy;
 }
 
+// Copies made for the document ahead of an edit (place-storm.ts), checked: taken as they are.
+const owned = new WeakSet<Storm>();
+
+/** Marks a checked copy, made for the document and shared with no one, to be taken without copying again. */
+export function ownedStorm(copy: ScenarioStorm): ScenarioStorm {
+  owned.add(copy);
+  return knownClean(copy);
+}
+
 export function toScenarioStorm(storm: Storm): ScenarioStorm {
+  if (owned.has(storm)) return storm as ScenarioStorm;
   validateStorm(storm);
   const durationsH = ownCopy(storm.durationsH);
   const depthsMm = ownCopy(storm.depthsMm);

@@ -25,20 +25,31 @@ const afterNow: Later = (task) => void setTimeout(task, 0);
  * for 50 to 230 ms on 10⁶ bars (measured, bench:ui drag1e6). A pair a result
  * has taken is never written by the warming.
  */
-export function lossRing(later: Later = afterNow): (storm: Storm) => LossBuffers | undefined {
+export interface LossRing {
+  (storm: Storm): LossBuffers | undefined;
+  /**
+   * Starts the ring for a storm about to enter the store and pages in its
+   * first pair in small tasks, so the first result's arrays are not made in
+   * the task that shows the storm (issue 11: 16 MB for 10⁶ bars, 60 ms of it
+   * measured); settles once that pair is ready (or taken).
+   */
+  prepare(storm: Storm): Promise<void>;
+}
+
+export function lossRing(later: Later = afterNow): LossRing {
   let owner: Storm | null = null;
   let ring: LossBuffers[] = [];
   let turn = 0;
   const pair = (n: number): LossBuffers => ({ lossMm: new Float64Array(n), excessMm: new Float64Array(n) });
 
-  const warm = (storm: Storm, n: number): void => {
-    // Values paged in so far, counted over the slots' arrays in order (slot s's loss from 2n·s, its excess from
-    // 2n·s + n): slot 0 is the first result's, so warming starts at slot 1.
-    let at = 2 * n;
+  // Values paged in so far, counted over the slots' arrays in order (slot s's loss from 2n·s, its excess from
+  // 2n·s + n): slot 0 is the first result's, so warming starts at slot 1 unless the ring is prepared.
+  const warm = (storm: Storm, n: number, at = 2 * n, firstReady?: () => void): void => {
     const step = (): void => {
       let slot = Math.floor(at / (2 * n));
       // A slot is taken once the turns have passed it (the ring hands slots out in order).
       if (turn > slot) at = 2 * n * (slot = turn);
+      if (slot > 0 || storm !== owner) firstReady?.();
       if (storm !== owner || slot > 2) return;
       const from = at % n;
       const to = Math.min(n, from + WARM_CHUNK);
@@ -49,7 +60,7 @@ export function lossRing(later: Later = afterNow): (storm: Storm) => LossBuffers
     later(step);
   };
 
-  return (storm) => {
+  const take = (storm: Storm): LossBuffers | undefined => {
     const n = storm.depthsMm.length;
     if (n < RING_FROM_BARS) return undefined;
     if (storm !== owner) {
@@ -58,4 +69,12 @@ export function lossRing(later: Later = afterNow): (storm: Storm) => LossBuffers
     }
     return (ring[turn++ % 3] ??= pair(n));
   };
+  const prepare = (storm: Storm): Promise<void> =>
+    new Promise((ready) => {
+      const n = storm.depthsMm.length;
+      if (n < RING_FROM_BARS || storm === owner) return ready();
+      [owner, ring, turn] = [storm, [], 0];
+      warm(storm, n, 0, ready);
+    });
+  return Object.assign(take, { prepare });
 }

@@ -111,3 +111,35 @@ describe('the store’s results of a large storm', () => {
     expect(before?.result.lossMm).toEqual(before?.loss);
   });
 });
+
+describe('lossRing readied for a storm about to enter the store', () => {
+  it('pages in the first pair in small tasks, and the first result then takes that pair', async () => {
+    const tasks: (() => void)[] = [];
+    const next = lossRing((task) => void tasks.push(task));
+    const storm = longStorm(RING_FROM_BARS * 4); // 2^18 values an array: one chunk each
+    let ready = false;
+    const prepared = next.prepare(storm).then(() => (ready = true));
+    // Nothing is written in the call itself: the first chunk waits for a task.
+    expect(tasks.length).toBe(1);
+    // The first pair: one chunk of its loss array, one of its excess; the next task finds it done and says so.
+    for (let i = 0; i < 3; i++) tasks.shift()?.();
+    await prepared;
+    expect(ready).toBe(true);
+    const a = next(storm);
+    expect(a?.lossMm.length).toBe(RING_FROM_BARS * 4);
+    // The warming goes on to the two other pairs, which the next results take.
+    for (let task = tasks.shift(); task; task = tasks.shift()) task();
+    expect(new Set([a, next(storm), next(storm)]).size).toBe(3);
+    expect(next(storm)).toBe(a);
+  });
+
+  it('settles at once for a short storm, and when another storm takes the ring meanwhile', async () => {
+    const tasks: (() => void)[] = [];
+    const next = lossRing((task) => void tasks.push(task));
+    await next.prepare(longStorm(10));
+    const prepared = next.prepare(longStorm(RING_FROM_BARS * 2));
+    next(longStorm(RING_FROM_BARS)); // another storm's result before the warming ran
+    tasks.shift()?.();
+    await prepared;
+  });
+});

@@ -6,7 +6,7 @@ import { displayUnit, toDisplay, unitText } from '../units';
 import { Axes } from './Axes';
 import { CAPACITY_CURVES } from './capacity';
 import { useChartHeight } from './chart-height';
-import { chartFrame } from './frame';
+import { useChartFrame } from './staged-frame';
 import { lossPartOf, rateLine } from './method-layers';
 import { lazyPart } from '../layout/LazyPart';
 import { LossLayer } from './LossLayer';
@@ -39,11 +39,12 @@ export function Hyetograph() {
   // With a streamflow record the axis holds the record too, shared with the hydrograph below.
   const span = useTimeSpanH();
   const height = useChartHeight();
-  const frame = useMemo(() => chartFrame(storm, width, height, units, span), [storm, width, height, units, span]);
+  // Null while a long storm's frame is worked out in steps (staged-frame.ts): the chart says it is drawing.
+  const frame = useChartFrame(storm, width, height, units, span);
   const part = useDerived((d, s) => d.lossPartMm(s));
   const capacity = CAPACITY_CURVES[method.kind];
   const capacityDrawing = useMemo(
-    () => (capacity && results.ok ? capacity.draw(frame, storm, method) : null),
+    () => (frame && capacity && results.ok ? capacity.draw(frame, storm, method) : null),
     [capacity, frame, storm, method, results.ok],
   );
   const capacityPath = capacityDrawing?.path ?? null;
@@ -102,20 +103,30 @@ export function Hyetograph() {
               <line className="hatch__line" x1="0" y1="0" x2="0" y2="6" />
             </pattern>
           </defs>
-          <Axes frame={frame} />
-          <g role="img" aria-label={`Bars: ${summary}`}>
-            <RainLayer frame={frame} storm={storm} />
-            {results.ok ? <LossLayer frame={frame} storm={storm} lossMm={results.result.lossMm} partMm={part} /> : null}
-          </g>
+          {frame ? (
+            <>
+              <Axes frame={frame} />
+              <g role="img" aria-label={`Bars: ${summary}`}>
+                <RainLayer frame={frame} storm={storm} />
+                {results.ok ? (
+                  <LossLayer frame={frame} storm={storm} lossMm={results.result.lossMm} partMm={part} />
+                ) : null}
+              </g>
+            </>
+          ) : (
+            <text className="chart__empty" x={width / 2} y={height / 2} textAnchor="middle" role="status">
+              Drawing {formatCount(n)} bars…
+            </text>
+          )}
           {capacityPath ? (
             <path className="capacity" d={capacityPath} data-layer="capacity" aria-hidden="true" />
           ) : null}
-          {aboveTop !== null ? (
+          {frame && aboveTop !== null ? (
             <text className="capacity__clip" x={frame.plot.left + 6} y={frame.plot.top + 12} aria-hidden="true">
               ▲ capacity above the chart
             </text>
           ) : null}
-          {n === 0 ? (
+          {frame && n === 0 ? (
             <text
               className="chart__empty"
               x={(frame.plot.left + frame.plot.right) / 2}
@@ -125,7 +136,7 @@ export function Hyetograph() {
               No rainfall bars yet
             </text>
           ) : null}
-          {lineKey && lineParam && typeof lineValue === 'number' ? (
+          {frame && lineKey && lineParam && typeof lineValue === 'number' ? (
             <LossLine
               frame={frame}
               paramKey={lineKey}
@@ -137,7 +148,9 @@ export function Hyetograph() {
             />
           ) : null}
         </svg>
-        {mass && results.ok ? <MassCurve frame={frame} storm={storm} result={results.result} units={units} /> : null}
+        {frame && mass && results.ok ? (
+          <MassCurve frame={frame} storm={storm} result={results.result} units={units} />
+        ) : null}
       </div>
       {aboveTop !== null ? (
         <p className="chart__notice" data-note="capacity-clip">

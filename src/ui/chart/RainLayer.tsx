@@ -1,6 +1,6 @@
 import { memo, useMemo } from 'react';
 import type { Storm } from '../../core';
-import { intensityPath, type ChartFrame } from './frame';
+import { rainPath, type ChartFrame } from './frame';
 
 /**
  * Every bar at its full rainfall intensity, in the excess colour; the loss
@@ -8,6 +8,6 @@ import { intensityPath, type ChartFrame } from './frame';
  * apart from the moving line, so a drag never rebuilds it.
  */
 export const RainLayer = memo(function RainLayer({ frame, storm }: { frame: ChartFrame; storm: Storm }) {
-  const d = useMemo(() => intensityPath(frame, storm.depthsMm, storm.durationsH), [frame, storm]);
+  const d = useMemo(() => rainPath(frame, storm), [frame, storm]);
   return <path className="layer layer--excess" d={d} data-layer="rain" />;
 });

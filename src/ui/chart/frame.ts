@@ -65,6 +65,18 @@ export function chartFrame(
   system: UnitSystem,
   span?: TimeSpanH,
 ): ChartFrame {
+  const frame = frameScales(storm, width, height, system, span);
+  return { ...frame, edgesPx: mapLinear(frame.x, barEdgesH(storm)) };
+}
+
+/** The frame but its bar edges: a few passes over the bars, no column written (frame-steps.ts adds the edges in steps). */
+export function frameScales(
+  storm: Storm,
+  width: number,
+  height: number,
+  system: UnitSystem,
+  span?: TimeSpanH,
+): Omit<ChartFrame, 'edgesPx'> {
   const plot = {
     left: MARGIN.left,
     right: Math.max(MARGIN.left + 40, width - MARGIN.right),
@@ -116,8 +128,6 @@ export function chartFrame(
     xTitle = 'Time from storm start (h:mm)';
   }
 
-  const edgesPx = mapLinear(x, barEdgesH(storm));
-
   return {
     width,
     height,
@@ -130,7 +140,6 @@ export function chartFrame(
     yTicks,
     xTitle,
     yTitle: `Rainfall intensity (${unitText(rateUnit)})`,
-    edgesPx,
   };
 }
 
@@ -140,4 +149,16 @@ export function chartFrame(
  */
 export function intensityPath(frame: ChartFrame, depthsMm: ArrayLike<number>, durationsH: ArrayLike<number>): string {
   return intensityBarsPath(frame.edgesPx, depthsMm, durationsH, frame.y, frame.plot.bottom);
+}
+
+// The rainfall layer's path per frame, so one worked out ahead (frame-steps.ts) is drawn, not worked out again.
+const rainPaths = new WeakMap<ChartFrame, { readonly storm: Storm; readonly d: string }>();
+
+/** The path of every bar at its full intensity on the frame (the rainfall layer). */
+export function rainPath(frame: ChartFrame, storm: Storm): string {
+  const kept = rainPaths.get(frame);
+  if (kept?.storm === storm) return kept.d;
+  const d = intensityPath(frame, storm.depthsMm, storm.durationsH);
+  rainPaths.set(frame, { storm, d });
+  return d;
 }

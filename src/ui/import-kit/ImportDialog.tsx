@@ -73,8 +73,13 @@ export interface ImportDialogProps<S extends SeriesSettings, R> {
   readonly renderPreview: (imported: R) => ReactNode;
   /** What accepting does to what is on screen, and how to undo it. */
   readonly keepText: string;
-  /** Applies the import as one undoable edit; returns why it could not, to show while the dialog stays open. */
-  readonly onUse: (imported: R, fileName: string | null) => string | null;
+  /**
+   * Applies the import as one undoable edit; returns why it could not, to show while the dialog stays open.
+   * A promise when the edit is made in steps (a long import): the dialog says so and waits for it. The
+   * caller then closes the dialog itself, in the task of its edit (a render between the two would read the
+   * text again for the new screen), and the promise gives null; or it gives why it could not.
+   */
+  readonly onUse: (imported: R, fileName: string | null) => string | null | Promise<string | null>;
 }
 
 const inWords = (
@@ -104,6 +109,7 @@ export function ImportDialog<S extends SeriesSettings, R>({
   const [fileName, setFileName] = useState(initial.fileName);
   const [corrections, setCorrections] = useState<Partial<S>>(initial.corrections);
   const [note, setNote] = useState<string | null>(null);
+  const [using, setUsing] = useState(false);
   const textRef = useRef<HTMLTextAreaElement | null>(null);
   const file = useTextFile(words.fileWhat, (chosen, name) => {
     setText(chosen.text);
@@ -174,15 +180,23 @@ export function ImportDialog<S extends SeriesSettings, R>({
     long.stop();
     letGo('Reading stopped. Nothing was changed; paste or open the record again when you are ready.');
   };
-  const cancel = (): void => onClose();
+  // Once the import is being put on the workbench it goes through: closing waits for it.
+  const cancel = (): void => {
+    if (!using) onClose();
+  };
+  const refuse = (refused: string | null): void => {
+    if (refused === null) return;
+    setUsing(false);
+    file.setMessage(refused);
+  };
   const accept = (): void => {
-    if (imported === null || stale) return;
-    const refused = onUse(imported, fileName);
-    if (refused !== null) {
-      file.setMessage(refused);
-      return;
-    }
-    onClose();
+    if (imported === null || stale || using) return;
+    const outcome = onUse(imported, fileName);
+    if (outcome instanceof Promise) {
+      setUsing(true);
+      void outcome.then(refuse);
+    } else if (outcome === null) onClose();
+    else refuse(outcome);
   };
 
   return (
@@ -297,11 +311,18 @@ export function ImportDialog<S extends SeriesSettings, R>({
         </div>
       </div>
       <div className="paste__foot">
-        <p className="paste__keep">{keepText}</p>
-        <button type="button" onClick={cancel}>
+        <p className="paste__keep" role={using ? 'status' : undefined}>
+          {using ? 'Putting it on the workbench…' : keepText}
+        </p>
+        <button type="button" onClick={cancel} disabled={using}>
           Cancel
         </button>
-        <button type="button" className="button--primary" onClick={accept} disabled={imported === null || stale}>
+        <button
+          type="button"
+          className="button--primary"
+          onClick={accept}
+          disabled={imported === null || stale || using}
+        >
           {words.acceptLabel}
         </button>
       </div>

@@ -1,5 +1,5 @@
 import { useMemo } from 'react';
-import { totalDepthMm } from '../../../core';
+import { isInputError, totalDepthMm } from '../../../core';
 import {
   applyRainImport,
   guessForScreen,
@@ -7,7 +7,8 @@ import {
   type ImportedStorm,
   type RainImportSettings,
 } from '../../../io';
-import { useActions, useScenario } from '../../../store';
+import { useActions, useScenario, useWorkbenchStore } from '../../../store';
+import { placeImportedStorm, PLACE_IN_STEPS_FROM } from '../../../store/place-storm';
 import { formatCount, formatValue } from '../../format';
 import { currentNumberFormat } from '../../number-format';
 import { ImportDialog, type ImportDraft, type ImportKind, type ImportWords } from '../../import-kit';
@@ -36,6 +37,12 @@ const RAIN_WORDS: ImportWords = {
   acceptLabel: 'Use these bars',
 };
 
+/** The core's refusal of a storm placed in steps, in words for the dialog (anything else is a fault, thrown on). */
+function refusal(error: unknown): string {
+  if (isInputError(error)) return error.message;
+  throw error;
+}
+
 function stormOf(text: string, settings: RainImportSettings): ImportedStorm | null {
   const result = applyRainImport(text, settings, currentNumberFormat());
   return result.ok ? result.storm : null;
@@ -48,6 +55,7 @@ function stormOf(text: string, settings: RainImportSettings): ImportedStorm | nu
  */
 export function PasteDialog({ initial, onClose }: PasteDialogProps) {
   const actions = useActions();
+  const store = useWorkbenchStore();
   const storm = useScenario((s) => s.storm);
   const units = useScenario((s) => s.units);
   // Without times in the text, bars are guessed to be as long as the storm's on screen.
@@ -81,7 +89,15 @@ export function PasteDialog({ initial, onClose }: PasteDialogProps) {
       renderPreview={(imported) => <PreviewBars storm={imported} units={units} />}
       keepText={`Replaces the storm now on screen (${currentText}); Undo brings it back.${consequences ? ` ${consequences}` : ''}`}
       onUse={(imported, fileName) => {
-        actions.setImportedStorm(imported, fileName ? `Open rainfall file ${fileName}` : 'Paste rainfall');
+        const label = fileName ? `Open rainfall file ${fileName}` : 'Paste rainfall';
+        // A long storm is copied and checked in steps before the edit, the page answering meanwhile (issue 11).
+        if (imported.depthsMm.length >= PLACE_IN_STEPS_FROM) {
+          return placeImportedStorm(store, imported, label, onClose).then(
+            () => null,
+            (error: unknown) => refusal(error),
+          );
+        }
+        actions.setImportedStorm(imported, label);
         return null;
       }}
     />

@@ -1,9 +1,10 @@
 import { useEffect, useLayoutEffect, useMemo, useRef, useState, type KeyboardEvent } from 'react';
-import { barEdgesH, attempt, totalDurationH, type UnitSystem } from '../../../core';
+import { attempt, totalDurationH, type UnitSystem } from '../../../core';
 import { useActions, useDerived, useScenario } from '../../../store';
 import { formatCount, formatForField, formatValue } from '../../format';
 import { displayUnit, toDisplay, unitText } from '../../units';
 import { barClock, barTimeText } from '../bar-times';
+import { barStarts } from './bar-starts';
 import { readCell, type EditableColumn } from './cell-edit';
 import { moveCell, scrollToShow, visibleRows, type CellPos } from './grid-nav';
 
@@ -203,7 +204,7 @@ export function BarTable() {
   const results = useDerived((d, s) => d.results(s));
   const n = storm.depthsMm.length;
 
-  const edges = useMemo(() => barEdgesH(storm), [storm]);
+  const startH = useMemo(() => barStarts(storm), [storm]);
   const clock = useMemo(() => barClock(storm.startIso, totalDurationH(storm)), [storm]);
   const heads = headings(units, clock.heading);
 
@@ -268,7 +269,7 @@ export function BarTable() {
       case 'bar':
         return String(k + 1);
       case 'start':
-        return barTimeText(clock, edges[k] as number);
+        return barTimeText(clock, startH(k));
       case 'duration':
         return formatForField(d * 60);
       case 'depth':
