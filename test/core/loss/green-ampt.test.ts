@@ -208,6 +208,21 @@ describe('Green–Ampt under variable rainfall', () => {
     );
   });
 
+  it('solves steps short against F₁ (u = x/(F₁ + M) on both sides of 1e-3, where ln(1 + u) is summed as a series) to 1e-15 of 200-bit roots', () => {
+    // Roots of x − M ln(1 + x/(F₁ + M)) = K t for this file's silt loam (K = 6.5 mm/h,
+    // M = ψΔθ = 56.74536 mm as a double), found with mpmath's findroot at 200 bits,
+    // independently of the library, and written to the nearest double; [F₁ mm, t h, x mm].
+    for (const [f1, t, x] of [
+      [300, 0.25, 1.9313853405814689], // u = 0.0054
+      [3000, 0.5, 3.311440236840393], // u = 0.0011
+      [3000, 0.25, 1.655728591064186], // u = 0.00054
+      [30000, 1, 6.512293493734191], // u = 0.00022
+      [300000, 0.1, 0.6501229481467811], // u = 2.2e-6
+    ] as const) {
+      expectClose(greenAmptPondedIncrementMm(6.5, M, f1, t), x, 1e-15, 0);
+    }
+  });
+
   it('stays finite and exact when ψΔθ or K·t underflow (subnormal inputs)', () => {
     for (const [k, m, f1, t] of [
       [1e-6, 5e-324, 0, 1.65],
