@@ -55,3 +55,16 @@ export function recordText(
   const text = lines.join(r.crlf ? '\r\n' : '\n') + r.trailing;
   return text;
 }
+
+/**
+ * A header and n readings of an invented 15-min gauge record from 2024-01-01 00:15, 0.2 mm every third
+ * one: 21 characters a line (the long-import tests' file).
+ */
+export function gaugeRecordText(n: number): string {
+  const lines: string[] = ['Time,Rain (mm)'];
+  for (let k = 1; k <= n; k++) {
+    const stamp = new Date(Date.UTC(2024, 0, 1) + k * 900_000).toISOString().slice(0, 16).replace('T', ' ');
+    lines.push(`${stamp},${k % 3 === 0 ? '0.2' : '0.0'}`);
+  }
+  return lines.join('\n');
+}

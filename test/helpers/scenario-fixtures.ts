@@ -1,6 +1,7 @@
 import type { Scenario } from '../../src/scenario/types';
 import type { SavedEntry } from '../../src/scenario/library';
 import { readScenario } from '../../src/store';
+import { LARGE_NUMBERS } from '../../src/store/large-marker';
 
 /**
  * A small test scenario: four bars of 30 min, 2/6/10/2 mm (intensities 4, 12,
@@ -82,3 +83,30 @@ export function quotaStorage(maxChars: number, initial: Record<string, string> =
   };
   return storage;
 }
+
+/** Bars in `largeScenario`: just over the large store's threshold (2 numbers a bar). */
+export const LARGE_BARS = LARGE_NUMBERS / 2 + 1;
+
+/**
+ * An invented scenario too large for localStorage's usual room, so it goes to the
+ * large store: LARGE_BARS bars of 5 min, 0 to 2.9 mm in steps of 0.1 mm.
+ */
+export function largeScenario(name: string): Scenario {
+  return {
+    ...FOUR_BARS,
+    name,
+    storm: {
+      durationsH: new Array<number>(LARGE_BARS).fill(5 / 60),
+      depthsMm: Array.from({ length: LARGE_BARS }, (_, i) => (i % 30) / 10),
+    },
+  };
+}
+
+/** A saved list's pointer into the large store (src/scenario/library.ts, LargeRef), to an invented four-bar record. */
+export const SAMPLE_LARGE_REF = {
+  record: 'library.2026-02-20T08:30:00.000Z.a1',
+  numbers: 8,
+  name: 'Pointed at',
+  bars: 4,
+  method: 'constant',
+} as const;

@@ -5,10 +5,9 @@ import { createScenarioLibrary, type SavedEntry } from '../../src/scenario';
 import type { StoredSlot } from '../../src/scenario/stored-slot';
 import type { Scenario } from '../../src/scenario/types';
 import { createWorkbenchStore } from '../../src/store';
-import { LARGE_NUMBERS } from '../../src/store/large-marker';
 import { LARGE_DB, LARGE_OBJECTS, unpack } from '../../src/store/large-store';
 import { copyName, keepMine } from '../../src/store/other-tab-choice';
-import { FOUR_BARS, quotaStorage } from '../helpers/scenario-fixtures';
+import { FOUR_BARS, LARGE_BARS, largeScenario, quotaStorage } from '../helpers/scenario-fixtures';
 
 // Issue 11 and 14: "Keep this one", when another tab changed the saved
 // scenario, saves this tab's scenario as a copy in the saved list before
@@ -17,16 +16,8 @@ import { FOUR_BARS, quotaStorage } from '../helpers/scenario-fixtures';
 // not fail on the list's quota and leave the user with only "export it".
 
 const records = createStore(LARGE_DB, LARGE_OBJECTS);
-/** Over the large store's threshold: 2 numbers a bar (invented depths 0 to 2.9 mm). */
-const BARS = LARGE_NUMBERS / 2 + 1;
-const BIG: Scenario = {
-  ...FOUR_BARS,
-  name: 'A long record in this tab (invented)',
-  storm: {
-    durationsH: new Array<number>(BARS).fill(5 / 60),
-    depthsMm: Array.from({ length: BARS }, (_, i) => (i % 30) / 10),
-  },
-};
+const BARS = LARGE_BARS;
+const BIG = largeScenario('A long record in this tab (invented)');
 
 function hostFor(scenario: Scenario) {
   const storage = quotaStorage(200_000);

@@ -5,20 +5,11 @@ import { LONG_TEXT_CHARS } from '../../../src/ui/import-kit/read-file';
 import { packColumns, type ReadReply, type ReadRequest } from '../../../src/ui/import-kit/reader-messages';
 import { readSteps } from '../../../src/ui/import-kit/run-read';
 import { LAZY_LOAD_MS, renderWorkbench } from '../../helpers/render';
+import { gaugeRecordText } from '../../helpers/plain-records';
 
 // Issue 11: a long file's text is never decoded on the page's thread (21 MB held it 150–300 ms and its copy
 // to the worker 30–50 ms more); the File goes to the reader's worker, which sends back what the page shows.
 // Invented gauge records for these tests (no real gauge or storm).
-
-/** A header and n readings of a 15-min record from 2024-01-01 00:15, 0.2 mm every third one: 21 characters a line. */
-function record(n: number): string {
-  const lines: string[] = ['Time,Rain (mm)'];
-  for (let k = 1; k <= n; k++) {
-    const stamp = new Date(Date.UTC(2024, 0, 1) + k * 900_000).toISOString().slice(0, 16).replace('T', ' ');
-    lines.push(`${stamp},${k % 3 === 0 ? '0.2' : '0.0'}`);
-  }
-  return lines.join('\n');
-}
 
 /** Stands in for the reader's worker: records what the page sent it; the test answers for it. */
 class FakeWorker {
@@ -86,7 +77,7 @@ describe('a long file opened on the workbench', () => {
     const { user, store } = renderWorkbench();
     // A 14-character header, then 10,000 readings of 20 characters each after a line break: 14 + 10,000 × 21 =
     // 210,014 bytes (ASCII), over the limit.
-    const text = record(10_000);
+    const text = gaugeRecordText(10_000);
     expect(text.length).toBe(210_014);
     expect(text.length).toBeGreaterThanOrEqual(LONG_TEXT_CHARS);
     const file = watchedFile(text, 'gauge-invented.csv');

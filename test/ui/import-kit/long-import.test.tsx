@@ -3,6 +3,7 @@ import { fireEvent, screen, waitFor, within } from '@testing-library/react';
 import { describe, expect, it } from 'vitest';
 import { LONG_TEXT_CHARS } from '../../../src/ui/import-kit/read-file';
 import { LAZY_LOAD_MS, renderWorkbench } from '../../helpers/render';
+import { gaugeRecordText } from '../../helpers/plain-records';
 
 // Invented gauge records for these tests (no real gauge or storm).
 
@@ -11,22 +12,12 @@ async function openPaste(user: ReturnType<typeof renderWorkbench>['user']) {
   return screen.findByRole('dialog', { name: 'Paste rainfall' }, { timeout: LAZY_LOAD_MS });
 }
 
-/** A header and n readings of a 15-min record from 2024-01-01 00:15, 0.2 mm every third one: 21 characters a line. */
-function record(n: number): string {
-  const lines: string[] = ['Time,Rain (mm)'];
-  for (let k = 1; k <= n; k++) {
-    const stamp = new Date(Date.UTC(2024, 0, 1) + k * 900_000).toISOString().slice(0, 16).replace('T', ' ');
-    lines.push(`${stamp},${k % 3 === 0 ? '0.2' : '0.0'}`);
-  }
-  return lines.join('\n');
-}
-
 describe('a long paste', () => {
   it('is held beside the dialog (first lines and the count), never put in the text area, and read into bars', async () => {
     const { user, store } = renderWorkbench();
     const dialog = await openPaste(user);
     // 10,000 readings of 21 characters (with the line break): 210,014 characters, over the limit.
-    const text = record(10_000);
+    const text = gaugeRecordText(10_000);
     expect(text.length).toBeGreaterThanOrEqual(LONG_TEXT_CHARS);
     const box = within(dialog).getByRole('textbox', { name: 'Rainfall text' });
     fireEvent.paste(box, { clipboardData: { getData: () => text } });

@@ -4,10 +4,8 @@ import { screen, waitFor, within } from '@testing-library/react';
 import { createStore, get, set } from 'idb-keyval';
 import { describe, expect, it } from 'vitest';
 import { LIBRARY_KEY, createScenarioLibrary, type SavedEntry } from '../../../src/scenario';
-import { LARGE_NUMBERS } from '../../../src/store/large-marker';
 import { LARGE_DB, LARGE_OBJECTS } from '../../../src/store/large-store';
-import type { Scenario } from '../../../src/scenario/types';
-import { FOUR_BARS, quotaStorage } from '../../helpers/scenario-fixtures';
+import { FOUR_BARS, LARGE_BARS, largeScenario, quotaStorage } from '../../helpers/scenario-fixtures';
 import { lazyPartsLoaded } from '../../helpers/render';
 import { renderTools } from '../../helpers/render-tools';
 
@@ -17,16 +15,8 @@ import { renderTools } from '../../helpers/render-tools';
 // database (fake-indexeddb here) and the list holds a pointer to it.
 
 const records = createStore(LARGE_DB, LARGE_OBJECTS);
-/** Over the large store's threshold: 2 numbers a bar; 0 to 2.9 mm in steps of 0.1 (invented). */
-const BARS = LARGE_NUMBERS / 2 + 1;
-const BIG: Scenario = {
-  ...FOUR_BARS,
-  name: 'A long record (invented)',
-  storm: {
-    durationsH: new Array<number>(BARS).fill(5 / 60),
-    depthsMm: Array.from({ length: BARS }, (_, i) => (i % 30) / 10),
-  },
-};
+const BARS = LARGE_BARS;
+const BIG = largeScenario('A long record (invented)');
 /** A localStorage that takes the small list and the current scenario's marker, not 10⁵ bars (about 2 M characters). */
 const QUOTA = 200_000;
 

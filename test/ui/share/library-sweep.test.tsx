@@ -2,7 +2,7 @@
 import { screen, within } from '@testing-library/react';
 import { beforeEach, describe, expect, it, vi } from 'vitest';
 import { createScenarioLibrary } from '../../../src/scenario';
-import { FOUR_BARS, memoryStorage } from '../../helpers/scenario-fixtures';
+import { FOUR_BARS, memoryStorage, SAMPLE_LARGE_REF } from '../../helpers/scenario-fixtures';
 import { lazyPartsLoaded } from '../../helpers/render';
 import { renderTools } from '../../helpers/render-tools';
 
@@ -17,14 +17,6 @@ vi.mock('../../../src/store/large-store', async (original) => ({
   ...(await original<typeof import('../../../src/store/large-store')>()),
   sweepSoon,
 }));
-
-const REF = {
-  record: 'library.2026-02-20T08:30:00.000Z.a1',
-  numbers: 8,
-  name: 'Pointed at',
-  bars: 4,
-  method: 'constant',
-} as const;
 
 async function openList(storage: ReturnType<typeof memoryStorage>) {
   const { user } = renderTools({ storage });
@@ -51,7 +43,7 @@ describe('the sweep of the large store starts only where the large store is in u
 
   it('a saved list with a pointer into the large store starts it, with the page’s storage', async () => {
     const storage = memoryStorage();
-    expect(createScenarioLibrary(storage).saveLarge(REF).ok).toBe(true);
+    expect(createScenarioLibrary(storage).saveLarge(SAMPLE_LARGE_REF).ok).toBe(true);
     await openList(storage);
     await vi.waitFor(() => expect(sweepSoon).toHaveBeenCalledWith(storage));
   });

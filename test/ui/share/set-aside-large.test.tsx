@@ -5,10 +5,15 @@ import { createStore, get, set } from 'idb-keyval';
 import { describe, expect, it, vi } from 'vitest';
 import { LIBRARY_KEY, createScenarioLibrary, type SavedEntry } from '../../../src/scenario';
 import { SET_ASIDE_PREFIX } from '../../../src/store';
-import { LARGE_NUMBERS } from '../../../src/store/large-marker';
 import { LARGE_DB, LARGE_OBJECTS, pack } from '../../../src/store/large-store';
-import type { Scenario } from '../../../src/scenario/types';
-import { FOUR_BARS, memoryStorage, quotaStorage, scenarioOf } from '../../helpers/scenario-fixtures';
+import {
+  FOUR_BARS,
+  LARGE_BARS,
+  largeScenario,
+  memoryStorage,
+  quotaStorage,
+  scenarioOf,
+} from '../../helpers/scenario-fixtures';
 import { renderTools, savedText } from '../../helpers/render-tools';
 import { lazyPartsLoaded } from '../../helpers/render';
 
@@ -145,16 +150,8 @@ describe('a set-aside copy that points into the large store', { timeout: 20_000 
   });
 
   it('Restore of a marker whose scenario is too large for localStorage puts it in the saved list through the large store', async () => {
-    // Over the large store's threshold: 2 numbers a bar (invented depths 0 to 2.9 mm).
-    const bars = LARGE_NUMBERS / 2 + 1;
-    const huge: Scenario = {
-      ...FOUR_BARS,
-      name: 'A long set-aside record (invented)',
-      storm: {
-        durationsH: new Array<number>(bars).fill(5 / 60),
-        depthsMm: Array.from({ length: bars }, (_, i) => (i % 30) / 10),
-      },
-    };
+    const bars = LARGE_BARS;
+    const huge = largeScenario('A long set-aside record (invented)');
     const id = `scenario.set-aside-test.${count++}`;
     await set(id, pack(huge), records);
     const markerText = JSON.stringify({ $format: 'raincut-large-store', id, numbers: 2 * bars, savedAt: AT });
