@@ -183,6 +183,30 @@ let counter = 0;
 const largeMarkerText = (marker: LargeMarker): string => JSON.stringify({ $format: LARGE_MARKER_TAG, ...marker });
 
 /**
+ * Packs the scenario (in slices, ./large-store.ts `packInSlices`) and puts it
+ * in the large store under `id`. IndexedDB copies a value on the thread that
+ * puts it (90 to 145 ms of one task for 10⁶ bars on the page), so the writer
+ * worker puts it, its columns handed over (./large-writer.ts); the page puts
+ * it itself when there is no writer, when the writer failed to start, or
+ * when asked (`fromPage`). Returns when packing ended (performance.now()),
+ * for the benchmarks' measures. Throws IndexedDB's refusal.
+ */
+export async function putScenario(
+  id: string,
+  scenario: Scenario,
+  options: { readonly fromPage?: boolean } = {},
+): Promise<number> {
+  let packed = await packInSlices(scenario);
+  const packedAt = performance.now();
+  const off = options.fromPage ? 'none' : await putOffPage(id, packed);
+  if (off !== 'put') {
+    if (off === 'lost') packed = await packInSlices(scenario);
+    await set(id, packed, open());
+  }
+  return packedAt;
+}
+
+/**
  * Saves the scenario in the large store and points the slot's marker at it.
  * Nothing is written over another tab's newer save (`changed`): the slot's
  * stamp is checked after the record is written and before the marker is.
@@ -205,16 +229,8 @@ export async function saveLarge(
     // Timed for the browser benchmark (test/browser/storage.spec.mjs): packing on the page's thread (in slices, pauses
     // included), then the whole write.
     const t0 = performance.now();
-    let packed = await packInSlices(scenario);
-    const t1 = performance.now();
-    // IndexedDB copies the value on the thread that puts it (90 to 145 ms of one task for 10⁶ bars on the page):
-    // the writer worker puts it, its columns handed over; from the page when there is none, or the page is closing
-    // (a worker may not outlive it).
-    const off = options.offPage ? await putOffPage(marker.id, packed) : 'none';
-    if (off !== 'put') {
-      if (off === 'lost') packed = await packInSlices(scenario);
-      await set(marker.id, packed, open());
-    }
+    // From the page when it is closing (a worker may not outlive it).
+    const t1 = await putScenario(marker.id, scenario, { fromPage: !options.offPage });
     performance.measure('raincut:large-pack', { start: t0, end: t1 });
     performance.measure('raincut:large-save', { start: t0, end: performance.now() });
   } catch (error) {

@@ -1,4 +1,6 @@
+import 'fake-indexeddb/auto';
 import { afterEach, describe, expect, it, vi } from 'vitest';
+import { LARGE_BARS, largeScenario, quotaStorage } from '../helpers/scenario-fixtures';
 
 /** A stand-in for the writer worker: keeps what it was sent, answers when told. */
 class FakeWorker {
@@ -64,5 +66,29 @@ describe('the large store’s writer', () => {
     vi.stubGlobal('Worker', undefined);
     const { putOffPage } = await import('../../src/store/large-writer');
     await expect(putOffPage('a', { n: 1 })).resolves.toBe('none');
+  });
+
+  it('a save to the saved list puts its record through the writer too, not from the page', async () => {
+    // Before, the list's save packed 10⁶ bars in one go and put them from the page (pack + write
+    // 319 ms at the last measure); now it packs in slices and hands the columns to the writer.
+    vi.resetModules();
+    vi.stubGlobal('Worker', FakeWorker);
+    const [{ saveToList }, { createScenarioLibrary }] = await Promise.all([
+      import('../../src/store/large-library'),
+      import('../../src/scenario/library'),
+    ]);
+    const library = createScenarioLibrary(quotaStorage(200_000));
+    const saving = saveToList(library, largeScenario('A long record for the list (invented)'), {
+      now: new Date('2026-02-20T08:30:00Z'),
+    });
+    await vi.waitFor(() => expect(FakeWorker.last?.sent).toHaveLength(1));
+    const { message, transfer } = FakeWorker.last?.sent[0] ?? { message: null, transfer: [] };
+    expect(message?.key).toMatch(/^library\.2026-02-20T08:30:00\.000Z\./);
+    // Both columns of the storm handed over, not copied.
+    expect(transfer).toHaveLength(2);
+    expect(transfer.every((b) => b.byteLength === 8 * LARGE_BARS)).toBe(true);
+    FakeWorker.last?.onmessage?.({ data: { job: message?.job, ok: true } });
+    const saved = await saving;
+    expect(saved.ok && 'large' in saved.value ? saved.value.large.record : null).toBe(message?.key);
   });
 });
