@@ -2,8 +2,8 @@ import { attempt } from '../errors';
 import { totalExcessMm } from '../loss/compute';
 import { describeRange, methodSpec, numericParam, validateMethod } from '../loss/methods';
 import type { LossMethod, NumericParam } from '../loss/types';
-import { totalDepthMm, validateStormDepthMm, type Storm } from '../storm';
-import { EXACT_CALIBRATORS } from './exact';
+import { totalDepthMm, validateStormDepthMm, validateStormLists, validateStormStart, type Storm } from '../storm';
+import { CHECKED_EXACT_CALIBRATORS, EXACT_CALIBRATORS } from './exact';
 import { PARAMETER_REL_TOL, solveMonotone } from './monotone';
 import { SCAN_POINTS, solveByScan } from './scan';
 
@@ -51,6 +51,8 @@ export function calibrate(
   parameter: string,
   targetExcessMm: number,
 ): CalibrationResult {
+  const fused = checkedExactFit(storm, method, parameter, targetExcessMm);
+  if (fused) return fused;
   const checked = attempt(() => {
     const rainMm = validateStormDepthMm(storm);
     validateMethod(method);
@@ -59,6 +61,43 @@ export function calibrate(
   if (!checked.ok) return { ok: false, reason: 'invalid-input', message: checked.error.message };
   return calibrateUnchecked(storm, method, parameter, targetExcessMm, checked.value);
 }
+
+/**
+ * calibrate in one read of the storm, for a fit with a checked exact
+ * calibrator (the constant rate: the exact φ's bracket pass checks each bar
+ * as it reads it and sums the rain), so the storm is not validated first
+ * (issue 12: a second read of 10⁶ bars). Undefined when the fit has no such
+ * calibrator, when anything fails a
+ * check, or when the target exceeds the rain: calibrate then takes its
+ * ordinary road, which validates in validateStorm's order and words the
+ * refusal. The answer is the one calibrateUnchecked gives (exactPhi on the
+ * same bars and target; the target is clamped to the rain in the same way).
+ */
+function checkedExactFit(
+  storm: Storm,
+  method: LossMethod,
+  parameter: string,
+  targetExcessMm: number,
+): CalibrationResult | undefined {
+  const solve = CHECKED_EXACT_CALIBRATORS[`${method?.kind}.${parameter}`];
+  if (!solve) return undefined;
+  if (!(typeof targetExcessMm === 'number' && targetExcessMm >= 0 && targetExcessMm < Infinity)) return undefined;
+  const checked = attempt(() => {
+    validateStormLists(storm);
+    validateStormStart(storm);
+    validateMethod(method);
+  });
+  if (!checked.ok) return undefined;
+  const solved = solve(storm, method, targetExcessMm);
+  if (!solved) return undefined;
+  const rainMm = solved.rainMm;
+  if (targetExcessMm > rainMm + rainSlackMm(rainMm)) return undefined;
+  const fitted = { ...method, [parameter]: solved.value } as LossMethod;
+  return { ok: true, value: solved.value, method: fitted, excessMm: totalExcessMm(storm, fitted) };
+}
+
+/** Rounding allowed when a target was itself summed from the bars. */
+const rainSlackMm = (rainMm: number): number => 1e-12 * Math.max(rainMm, 1);
 
 /**
  * calibrate without checking the storm and the method, for callers that
@@ -94,9 +133,7 @@ export function calibrateUnchecked(
   if (targetExcessMm < 0) {
     return { ok: false, reason: 'negative-target', message: 'The observed runoff cannot be negative.' };
   }
-  // Allow for rounding when the target was itself summed from the bars.
-  const slack = 1e-12 * Math.max(rainMm, 1);
-  if (targetExcessMm > rainMm + slack) {
+  if (targetExcessMm > rainMm + rainSlackMm(rainMm)) {
     return {
       ok: false,
       reason: 'exceeds-rainfall',

@@ -1,6 +1,6 @@
 import type { Storm } from '../storm';
 import type { CurveNumberLoss, LossMethod } from '../loss/types';
-import { exactPhi } from './phi';
+import { exactPhi, exactPhiChecked } from './phi';
 import { curveNumberFromRunoff } from './curve-number';
 import { conversionOf } from '../loss/curve-number';
 
@@ -20,5 +20,26 @@ export const EXACT_CALIBRATORS: Readonly<Record<string, ExactCalibrator>> = {
   'curve-number.cn': (_storm, method, target, rain) => {
     const cnMethod = method as CurveNumberLoss;
     return rain > 0 ? curveNumberFromRunoff(rain, target, cnMethod.iaRatio, conversionOf(cnMethod)) : cnMethod.cn;
+  },
+};
+
+/**
+ * An exact calibration that checks the bars as it reads them, for a storm
+ * not yet validated: the value with the storm's total depth (mm), or null
+ * when a bar is not clean (the caller validates, which names the bar). The
+ * bar lists must match one to one and the method be valid; a target above
+ * the rain gives what the calibrator gives for the whole rain.
+ */
+export type CheckedExactCalibrator = (
+  storm: Storm,
+  method: LossMethod,
+  targetMm: number,
+) => { readonly value: number; readonly rainMm: number } | null;
+
+/** Keyed as EXACT_CALIBRATORS; each gives the same value as its entry there. */
+export const CHECKED_EXACT_CALIBRATORS: Readonly<Record<string, CheckedExactCalibrator>> = {
+  'constant.rateMmH': (storm, _method, target) => {
+    const solved = exactPhiChecked(storm.durationsH, storm.depthsMm, target);
+    return solved && { value: solved.phi, rainMm: solved.rainMm };
   },
 };

@@ -1,3 +1,5 @@
+import { isCleanBarBelowSums, PASS_BLOCK, summedBarsClean } from '../storm';
+
 /**
  * Exact φ-index for a target excess, without iteration on φ or sorting.
  *
@@ -10,10 +12,12 @@
  *
  * - Short storms (< 16,384 bars): quickselect over every bar.
  * - Long storms: a fixed pseudo-random sample of 8,192 bars estimates φ and a
- *   bracket around it; one branch-light pass sums the bars above the bracket,
+ *   bracket around it; one branch-free pass sums the bars above the bracket,
  *   gathers the few inside it, and checks R at both ends. If the bracket holds
- *   φ (nearly always), quickselect decides the gathered bars. About 7 ms on
- *   10⁶ bars here.
+ *   φ (nearly always), quickselect decides the gathered bars. calibrate on
+ *   10⁶ bars, which checks the bars in that pass and sums the excess at the
+ *   answer once more: 5.5–6.5 ms here, 0.30–0.35 of scipy's brentq in the
+ *   same run (test/bench/peer.bench.ts).
  * - If the bracket misses, the bucket route: one pass finds the peak
  *   intensity; a second sorts bars into equal-width intensity buckets, summing
  *   depth and duration per bucket. R at every bucket edge follows from those
@@ -42,8 +46,13 @@ let workBucketOf = new Uint16Array(0);
 /** Below this many bars the sampling step is not worth it: select on all of them. */
 const SAMPLE_FROM = 16384;
 const SAMPLE_SIZE = 8192;
+// The sample's bars, kept between calls (three new arrays a call were a tenth of the sampling's time).
+const sampleDepth = new Float64Array(SAMPLE_SIZE);
+const sampleDur = new Float64Array(SAMPLE_SIZE);
+const sampleIntensity = new Float64Array(SAMPLE_SIZE);
 let workDepth = new Float64Array(0);
 let workDur = new Float64Array(0);
+let workGatheredIntensity = new Float64Array(0);
 
 export function exactPhi(durationsH: ArrayLike<number>, depthsMm: ArrayLike<number>, targetMm: number): number {
   const n = depthsMm.length;
@@ -64,6 +73,7 @@ export function exactPhiBySelection(
   const n = depthsMm.length;
   const depth = new Float64Array(n);
   const dur = new Float64Array(n);
+  const intensity = new Float64Array(n);
   let total = 0;
   let peak = 0;
   for (let k = 0; k < n; k++) {
@@ -73,11 +83,12 @@ export function exactPhiBySelection(
     dur[k] = d;
     total += p;
     const i = p / d;
+    intensity[k] = i;
     if (i > peak) peak = i;
   }
   if (peak === 0 || targetMm >= total) return 0;
   if (targetMm <= 0) return peak;
-  return selectPhi(depth, dur, n, targetMm, 0, 0, 0, peak);
+  return selectPhi(depth, dur, intensity, n, targetMm, 0, 0, 0, peak);
 }
 
 /**
@@ -91,9 +102,9 @@ function sampledBracket(
   targetMm: number,
 ): { lo: number; hi: number } {
   const n = depthsMm.length;
-  const depth = new Float64Array(SAMPLE_SIZE);
-  const dur = new Float64Array(SAMPLE_SIZE);
-  const intensity = new Float64Array(SAMPLE_SIZE);
+  const depth = sampleDepth;
+  const dur = sampleDur;
+  const intensity = sampleIntensity;
   let seed = 0x2545f491 ^ n;
   let sampleRain = 0;
   for (let j = 0; j < SAMPLE_SIZE; j++) {
@@ -111,7 +122,7 @@ function sampledBracket(
   if (sampleTarget < sampleRain) {
     let peak = 0;
     for (let j = 0; j < SAMPLE_SIZE; j++) if ((intensity[j] as number) > peak) peak = intensity[j] as number;
-    estimate = sampleTarget <= 0 ? peak : selectPhi(depth, dur, SAMPLE_SIZE, sampleTarget, 0, 0, 0, peak);
+    estimate = sampleTarget <= 0 ? peak : selectPhi(depth, dur, intensity, SAMPLE_SIZE, sampleTarget, 0, 0, 0, peak);
   }
   intensity.sort();
   // Rank of the estimate among the sample, then ± 4·√S ranks (about ±4.4 %).
@@ -141,34 +152,106 @@ export function exactPhiInBracket(
   lo: number,
   hi: number,
 ): number | null {
+  const phi = phiInBracket(durationsH, depthsMm, targetMm, lo, hi);
+  return phi >= 0 ? phi : null;
+}
+
+/** phiInBracket's answer when a bar is not clean (the bracket pass checks each bar as it reads it). */
+const UNCLEAN = -2;
+/** phiInBracket's answer when the bracket does not hold φ. */
+const MISSED = -1;
+
+/**
+ * φ for a storm not yet validated, in one read of the bars: the checks of
+ * validateStorm's loop (isCleanBarBelowSums on each bar, summedBarsClean on
+ * the sums) ride in the bracket pass, which sums the depths anyway. Returns
+ * the storm's depth with φ, or null when a bar is not clean: the caller then
+ * validates, and the validation names the bar. The lists must match one to
+ * one (validateStormLists); a target above the returned rain gives φ = 0, and
+ * the caller refuses it. Calibration's own pass (calibrate.ts): validating
+ * first read all 10⁶ bars of a long storm once more (1.1 ms of 9).
+ */
+export function exactPhiChecked(
+  durationsH: ArrayLike<number>,
+  depthsMm: ArrayLike<number>,
+  targetMm: number,
+): { readonly phi: number; readonly rainMm: number } | null {
+  const n = depthsMm.length;
+  if (n < SAMPLE_FROM) {
+    // Short storms: the check is a small share of the work; validate as the
+    // long route's pass would, then select over every bar.
+    let span = 0;
+    let rain = 0;
+    for (let k = 0; k < n; k++) {
+      const p = depthsMm[k] as number;
+      const d = durationsH[k] as number;
+      if (!cleanBar(d, p)) return null;
+      span += d;
+      rain += p;
+    }
+    if (!cleanSums(span, rain)) return null;
+    return { phi: exactPhiBySelection(durationsH, depthsMm, targetMm), rainMm: rain };
+  }
+  const bracket = sampledBracket(durationsH, depthsMm, targetMm);
+  const inBracket = phiInBracket(durationsH, depthsMm, targetMm, bracket.lo, bracket.hi);
+  if (inBracket === UNCLEAN) return null;
+  // The pass read every bar and found them clean, so the bucket route may run.
+  const phi = inBracket === MISSED ? exactPhiByBuckets(durationsH, depthsMm, targetMm) : inBracket;
+  return { phi, rainMm: passTotal };
+}
+
+// The bracket pass in blocks of PASS_BLOCK bars, for the reasons given in
+// loss/constant.ts: a function whose loop runs 10⁶ bars once per call stays
+// in on-stack-replacement code (the unblocked pass took 4.7 of calibrate's
+// 9 ms on 10⁶ bars); one block for Float64Array columns and one for other
+// lists, so neither sees both kinds of element read; the sums pass from
+// block to block in module variables; the check is called through a local
+// name. The bars are summed in order across blocks, as in one loop.
+const BLOCK = PASS_BLOCK;
+const cleanBar = isCleanBarBelowSums;
+const cleanSums = summedBarsClean;
+let passTotal = 0;
+let passSpan = 0;
+let passDepthAbove = 0;
+let passDurAbove = 0;
+let passGathered = 0;
+
+/** exactPhiInBracket's pass and selection: φ, or MISSED, or UNCLEAN. */
+function phiInBracket(
+  durationsH: ArrayLike<number>,
+  depthsMm: ArrayLike<number>,
+  targetMm: number,
+  lo: number,
+  hi: number,
+): number {
   const n = depthsMm.length;
   if (workDepth.length < n) {
     workDepth = new Float64Array(n);
     workDur = new Float64Array(n);
+    workGatheredIntensity = new Float64Array(n);
   }
   const depth = workDepth;
   const dur = workDur;
-  let depthAbove = 0;
-  let durAbove = 0;
-  let total = 0;
-  let m = 0;
-  for (let k = 0; k < n; k++) {
-    const p = depthsMm[k] as number;
-    const d = durationsH[k] as number;
-    total += p;
-    // Sums by a 0/1 factor rather than a branch: the share of bars above hi
-    // is large and unpredictable. Bars inside the bracket are few, so one
-    // test on "inside" predicts well (two tests joined by && did not: each
-    // half alone is a coin toss, and the pass took twice as long).
-    const above = +(p > hi * d);
-    depthAbove += above * p;
-    durAbove += above * d;
-    if (+(p > lo * d) - above !== 0) {
-      depth[m] = p;
-      dur[m] = d;
-      m++;
-    }
+  const intensity = workGatheredIntensity;
+  const typed = durationsH instanceof Float64Array && depthsMm instanceof Float64Array;
+  passTotal = 0;
+  passSpan = 0;
+  passDepthAbove = 0;
+  passDurAbove = 0;
+  passGathered = 0;
+  for (let start = 0; start < n; start += BLOCK) {
+    const end = Math.min(n, start + BLOCK);
+    const clean = typed
+      ? bracketBlockTyped(durationsH, depthsMm, lo, hi, depth, dur, start, end)
+      : bracketBlockListed(durationsH, depthsMm, lo, hi, depth, dur, start, end);
+    if (!clean) return UNCLEAN;
   }
+  if (!cleanSums(passSpan, passTotal)) return UNCLEAN;
+  const total = passTotal;
+  const depthAbove = passDepthAbove;
+  const durAbove = passDurAbove;
+  const m = passGathered;
+  for (let j = 0; j < m; j++) intensity[j] = (depth[j] as number) / (dur[j] as number);
   if (targetMm >= total) return 0;
   let depthMid = 0;
   let durMid = 0;
@@ -178,16 +261,95 @@ export function exactPhiInBracket(
   }
   const runoffAtHi = hi === Infinity ? 0 : depthAbove - hi * durAbove;
   const runoffAtLo = depthAbove + depthMid - lo * (durAbove + durMid);
-  if (!(runoffAtLo > targetMm) || !(runoffAtHi <= targetMm)) return null;
+  if (!(runoffAtLo > targetMm) || !(runoffAtHi <= targetMm)) return MISSED;
   let upper = hi;
   if (upper === Infinity) {
     upper = 0;
-    for (let j = 0; j < m; j++) {
-      const i = (depth[j] as number) / (dur[j] as number);
-      if (i > upper) upper = i;
-    }
+    for (let j = 0; j < m; j++) if ((intensity[j] as number) > upper) upper = intensity[j] as number;
   }
-  return selectPhi(depth, dur, m, targetMm, depthAbove, durAbove, lo, upper);
+  return selectPhi(depth, dur, intensity, m, targetMm, depthAbove, durAbove, lo, upper);
+}
+
+/**
+ * Bars start to end − 1 of the bracket pass: false at a bar that fails
+ * isCleanBarBelowSums. No branch on where a bar lies: the share of bars above
+ * hi is large and unpredictable, so their sums take a 0/1 factor; and every
+ * bar is written at the gathered end, which moves on only past a bar inside
+ * the bracket (a branch on "inside", true for some 9 % of bars on the bench
+ * storm, mispredicted often enough to cost more than the two stores). The
+ * gathered bars' intensities are formed after the pass, one division each.
+ */
+function bracketBlockTyped(
+  durationsH: Float64Array,
+  depthsMm: Float64Array,
+  lo: number,
+  hi: number,
+  depth: Float64Array,
+  dur: Float64Array,
+  start: number,
+  end: number,
+): boolean {
+  let total = passTotal;
+  let span = passSpan;
+  let depthAbove = passDepthAbove;
+  let durAbove = passDurAbove;
+  let m = passGathered;
+  for (let k = start; k < end; k++) {
+    const p = depthsMm[k] as number;
+    const d = durationsH[k] as number;
+    if (!cleanBar(d, p)) return false;
+    total += p;
+    span += d;
+    const above = +(p > hi * d);
+    depthAbove += above * p;
+    durAbove += above * d;
+    depth[m] = p;
+    dur[m] = d;
+    m += +(p > lo * d) - above;
+  }
+  passTotal = total;
+  passSpan = span;
+  passDepthAbove = depthAbove;
+  passDurAbove = durAbove;
+  passGathered = m;
+  return true;
+}
+
+/** bracketBlockTyped for plain arrays and other array-likes; the two must stay alike. */
+function bracketBlockListed(
+  durationsH: ArrayLike<number>,
+  depthsMm: ArrayLike<number>,
+  lo: number,
+  hi: number,
+  depth: Float64Array,
+  dur: Float64Array,
+  start: number,
+  end: number,
+): boolean {
+  let total = passTotal;
+  let span = passSpan;
+  let depthAbove = passDepthAbove;
+  let durAbove = passDurAbove;
+  let m = passGathered;
+  for (let k = start; k < end; k++) {
+    const p = depthsMm[k] as number;
+    const d = durationsH[k] as number;
+    if (!cleanBar(d, p)) return false;
+    total += p;
+    span += d;
+    const above = +(p > hi * d);
+    depthAbove += above * p;
+    durAbove += above * d;
+    depth[m] = p;
+    dur[m] = d;
+    m += +(p > lo * d) - above;
+  }
+  passTotal = total;
+  passSpan = span;
+  passDepthAbove = depthAbove;
+  passDurAbove = durAbove;
+  passGathered = m;
+  return true;
 }
 
 /** The bucket route (module comment), used when the sampled bracket misses. */
@@ -257,25 +419,30 @@ export function exactPhiByBuckets(
   const m = bucketCount[b] as number;
   const depth = new Float64Array(m);
   const dur = new Float64Array(m);
+  const gathered = new Float64Array(m);
   let j = 0;
   for (let k = 0; k < n && j < m; k++) {
     if (bucketOf[k] === b) {
       depth[j] = depthsMm[k] as number;
       dur[j] = durationsH[k] as number;
+      gathered[j] = intensity[k] as number;
       j++;
     }
   }
-  return selectPhi(depth, dur, j, targetMm, depthAbove, durAbove, lo, hi);
+  return selectPhi(depth, dur, gathered, j, targetMm, depthAbove, durAbove, lo, hi);
 }
 
 /**
- * Weighted quickselect over m undecided bars (arrays are reordered). Bars
- * already known to lie above φ contribute depthAbove and durAbove; φ is known
- * to lie in [lo, hi].
+ * Weighted quickselect over m undecided bars (arrays are reordered). Each bar
+ * comes with its intensity, depth / duration formed once when it was
+ * gathered (the same division everywhere in this file), so no pass divides.
+ * Bars already known to lie above φ contribute depthAbove and durAbove; φ is
+ * known to lie in [lo, hi].
  */
 function selectPhi(
   depth: Float64Array,
   dur: Float64Array,
+  intensity: Float64Array,
   m: number,
   targetMm: number,
   depthAbove: number,
@@ -290,24 +457,31 @@ function selectPhi(
     // A pseudo-random pivot keeps the expected work linear on sorted input.
     seed = (Math.imul(seed, 1664525) + 1013904223) >>> 0;
     const pick = start + (seed % (end - start));
-    const pivot = (depth[pick] as number) / (dur[pick] as number);
+    const pivot = intensity[pick] as number;
 
-    // Partition [start, end): bars above the pivot first.
+    // Partition [start, end): bars above the pivot first. Branch-free: every
+    // bar is swapped with the one at `split`, which moves on only past a bar
+    // above the pivot (swapping two bars not above it changes nothing that
+    // matters). Whether a bar lies above the pivot is a coin toss on a real
+    // storm, and a branch on it mispredicted half the time: the partitions
+    // took 2.7 of calibrate's 9 ms on 10⁶ bars.
     let split = start;
     let partDepth = 0;
     let partDur = 0;
     for (let j = start; j < end; j++) {
+      const ij = intensity[j] as number;
       const pj = depth[j] as number;
       const dj = dur[j] as number;
-      if (pj / dj > pivot) {
-        partDepth += pj;
-        partDur += dj;
-        depth[j] = depth[split] as number;
-        dur[j] = dur[split] as number;
-        depth[split] = pj;
-        dur[split] = dj;
-        split++;
-      }
+      const above = +(ij > pivot);
+      partDepth += above * pj;
+      partDur += above * dj;
+      intensity[j] = intensity[split] as number;
+      depth[j] = depth[split] as number;
+      dur[j] = dur[split] as number;
+      intensity[split] = ij;
+      depth[split] = pj;
+      dur[split] = dj;
+      split += above;
     }
     const runoffAtPivot = depthAbove + partDepth - pivot * (durAbove + partDur);
     if (runoffAtPivot > targetMm) {
@@ -322,11 +496,14 @@ function selectPhi(
       hi = pivot;
       depthAbove += partDepth;
       durAbove += partDur;
+      // Nearly every bar here lies below the pivot (ties are rare): a branch predicts well.
       let keep = split;
       for (let j = split; j < end; j++) {
+        const ij = intensity[j] as number;
         const pj = depth[j] as number;
         const dj = dur[j] as number;
-        if (pj / dj < pivot) {
+        if (ij < pivot) {
+          intensity[keep] = ij;
           depth[keep] = pj;
           dur[keep] = dj;
           keep++;

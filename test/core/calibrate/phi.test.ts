@@ -2,7 +2,16 @@
 // agreement with a brute-force bisection on random storms of unequal bars.
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
-import { calibrate, computeLosses, exactPhi, peakIntensityMmH, totalDepthMm, type Storm } from '../../../src/core';
+import {
+  calibrate,
+  calibrateUnchecked,
+  computeLosses,
+  exactPhi,
+  peakIntensityMmH,
+  totalDepthMm,
+  type Storm,
+} from '../../../src/core';
+import { validateStormDepthMm } from '../../../src/core/storm';
 import { exactPhiByBuckets, exactPhiBySelection, exactPhiInBracket } from '../../../src/core/calibrate/phi';
 import { stormArb } from '../../helpers/arbitraries';
 import { expectClose } from '../../helpers/tolerance';
@@ -171,5 +180,83 @@ describe('the three routes to the exact φ on long storms', () => {
     const inside = exactPhiInBracket(s.durationsH, s.depthsMm, target, phi * 0.9, phi * 1.1);
     expect(inside).not.toBeNull();
     expect(Math.abs((inside as number) - phi)).toBeLessThanOrEqual(1e-9 * phi);
+  });
+});
+
+describe('calibrate checks the bars in the exact φ pass itself', () => {
+  // calibrate reads a long storm once for the constant rate: the bracket pass
+  // checks each bar as it reads it (exactPhiChecked), where it used to
+  // validate the storm first. The answer and every refusal must be what the
+  // validated road gives: calibrateUnchecked after validateStormDepthMm.
+  const validatedRoad = (s: Storm, target: number) => {
+    try {
+      const rain = validateStormDepthMm(s);
+      return calibrateUnchecked(s, { kind: 'constant', rateMmH: 1 }, 'rateMmH', target, rain);
+    } catch (error) {
+      return { ok: false, message: (error as Error).message };
+    }
+  };
+  const gaugeLike = (n: number, seed: number): { durationsH: number[]; depthsMm: number[] } => {
+    let s = seed >>> 0 || 1;
+    const rand = (): number => {
+      s = (Math.imul(s, 1664525) + 1013904223) >>> 0;
+      return s / 4294967296;
+    };
+    const durationsH: number[] = [];
+    const depthsMm: number[] = [];
+    for (let k = 0; k < n; k++) {
+      durationsH.push(rand() < 0.9 ? 1 / 12 : 1 / 4);
+      depthsMm.push(rand() < 0.3 ? 0 : -Math.log(rand() + 1e-12) * 2);
+    }
+    return { durationsH, depthsMm };
+  };
+
+  it.each([
+    [300, 1],
+    [20000, 2],
+    [40000, 3],
+  ])('%i bars: the same φ and excess as the validated road, plain lists and Float64Array', (n, seed) => {
+    const plain = gaugeLike(n, seed);
+    const typed = { durationsH: Float64Array.from(plain.durationsH), depthsMm: Float64Array.from(plain.depthsMm) };
+    const rain = totalDepthMm(plain);
+    for (const target of [0, 0.2 * rain, 0.65 * rain, rain, rain * (1 + 1e-13)]) {
+      const expected = validatedRoad(plain, target);
+      expect(expected.ok).toBe(true);
+      expect(calibrate(plain, { kind: 'constant', rateMmH: 1 }, 'rateMmH', target)).toEqual(expected);
+      expect(calibrate(typed, { kind: 'constant', rateMmH: 1 }, 'rateMmH', target)).toEqual(expected);
+    }
+  });
+
+  it('refuses every unclean storm with the message of the validated road, naming the bar', () => {
+    const base = gaugeLike(20000, 7);
+    const at = 12345; // a bar well inside the bracket pass, far from its first block
+    const bad: [string, (s: { durationsH: unknown[]; depthsMm: unknown[] }) => void][] = [
+      ['NaN depth', (s) => (s.depthsMm[at] = NaN)],
+      ['negative depth', (s) => (s.depthsMm[at] = -0.1)],
+      ['infinite depth', (s) => (s.depthsMm[at] = Infinity)],
+      ['depth as text', (s) => (s.depthsMm[at] = '1.5')],
+      ['missing depth', (s) => (s.depthsMm[at] = undefined)],
+      ['zero duration', (s) => (s.durationsH[at] = 0)],
+      ['duration past a record', (s) => (s.durationsH[at] = 1e9)],
+      ['duration as text', (s) => (s.durationsH[at] = '0.25')],
+      ['one depth too few', (s) => s.depthsMm.pop()],
+    ];
+    for (const [what, spoil] of bad) {
+      const s = { durationsH: [...base.durationsH] as unknown[], depthsMm: [...base.depthsMm] as unknown[] };
+      spoil(s);
+      const storm = s as unknown as Storm;
+      const expected = validatedRoad(storm, 10);
+      if (expected.ok) throw new Error(`${what}: the validated road accepted the storm`);
+      const got = calibrate(storm, { kind: 'constant', rateMmH: 1 }, 'rateMmH', 10);
+      expect(got, what).toMatchObject({ ok: false, reason: 'invalid-input', message: expected.message });
+    }
+  });
+
+  it('a target above the rain is refused as before, with the rain in the message', () => {
+    const s = gaugeLike(20000, 9);
+    const rain = totalDepthMm(s);
+    const got = calibrate(s, { kind: 'constant', rateMmH: 1 }, 'rateMmH', rain * 1.01);
+    expect(got).toEqual(validatedRoad(s, rain * 1.01));
+    expect(got).toMatchObject({ ok: false, reason: 'exceeds-rainfall' });
   });
 });
