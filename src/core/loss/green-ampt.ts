@@ -402,6 +402,7 @@ function runGreenAmpt(
           if (loss > p) loss = p;
           st.depth = joined + (loss - taken);
           st.sat = 1;
+          st.satPow = 1;
           st.fresh = 0;
         }
       } else {

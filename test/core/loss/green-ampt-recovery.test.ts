@@ -145,6 +145,29 @@ describe('Green–Ampt with recovery in dry spells (Ogden & Saghafian 1997; from
     }
   });
 
+  it('starts the next spell from saturation once the fronts have joined (checked by the same quadrature)', () => {
+    // Burst 1, a spell, a burst whose new front reaches the old zone (one front again, S = 1
+    // above it), a second spell, burst 3. The second spell redistributes a zone at S = 1
+    // holding everything taken so far, as the first did. (Until this test the zone kept
+    // S₀^(1/λ) from before the meeting, so the second spell drained from a wrong S^ε:
+    // 0.17 mm off on loam after 0.5 h.) Spells after which 30 mm in 1 h reaches the old zone:
+    for (const [soil, spells] of [
+      [loam, [0.5, 6]],
+      [clay, [0.5, 6]],
+      [sand, [0.5]],
+    ] as const) {
+      for (const hours of spells) {
+        const storm = { durationsH: [1, hours, 1, hours, 0.5], depthsMm: [40, 0, 30, 0, 20] };
+        const r = computeLosses(storm, recovering(soil));
+        const depth = r.lossMm[0] as number;
+        expect(r.lossMm[2]).toBeGreaterThan(afterSpell(soil, depth, hours).join);
+        const joined = depth + (r.lossMm[2] as number);
+        const expected = burstAfterSpell(soil, joined, afterSpell(soil, joined, hours), [[0.5, 20]]);
+        expectClose(r.lossMm[4] as number, expected[0] as number, 1e-9, 1e-9);
+      }
+    }
+  });
+
   it('spreads rain that stopped before its new front reached the old zone over the old zone’s depth, water kept', () => {
     // Loam: burst 1 of 40 mm, 24 dry hours, 0.5 mm in 15 min (all soaks in, short of the meeting
     // point), 12 dry hours, then 20 mm in 30 min. After the light rain the zone holds I' = I + 0.5 mm
