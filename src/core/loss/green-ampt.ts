@@ -168,13 +168,15 @@ function solvePonded(): void {
   const curve = series && quick ? m / (2 * (base + x) * (startMm + x)) : Infinity;
   for (let iter = 0; iter < 60; iter++) {
     let lx: number;
-    const ux = x / base;
-    if (series && ux <= 1e-3 && ux >= 0) {
-      lx = log1pSeries(ux);
+    // The anchor first: it saves the division x/B on the steps after the first
+    // (an anchor is only ever set where x/B > 1e-3).
+    const v = (x - anchor) * anchorScale;
+    if (series && quick && v <= 1e-3 && v >= -1e-3) {
+      lx = anchorLog + log1pSeries(v);
     } else {
-      const v = (x - anchor) * anchorScale;
-      if (series && quick && v <= 1e-3 && v >= -1e-3) {
-        lx = anchorLog + log1pSeries(v);
+      const ux = x / base;
+      if (series && ux <= 1e-3 && ux >= 0) {
+        lx = log1pSeries(ux);
       } else {
         lx = growth(x, base);
         anchor = x;
@@ -471,17 +473,18 @@ function runGreenAmpt(
         const freshKm = k * st.freshM;
         const i = p / dt;
         // No need to time the meeting when the front cannot reach the old zone in
-        // this bar: it takes at most the bar's rain, at most its capacity at the
-        // bar's start, K(1 + M₂/F₂), for the whole bar (the capacity only falls),
-        // and at most what it would take ponded from a dry surface in the bar,
-        // K·t + √(2M₂K·t) (see greenAmptPondedIncrementMm); the last bounds the
-        // first bar after a spell (F₂ = 0), where half the meetings were timed in
-        // vain, and is held a hair (1e-12) below the meeting point so that
-        // rounding cannot skip one that happens.
+        // this bar: it takes at most the bar's rain, and at most its capacity at
+        // the bar's start, K(1 + M₂/F₂), for the whole bar (the capacity only
+        // falls). On the first bar after a spell (F₂ = 0, capacity unbounded), at
+        // most what it would take ponded from a dry surface, K·t + √(2M₂K·t) (see
+        // greenAmptPondedIncrementMm): half the meetings there were timed in vain.
+        // That bound is held a hair (1e-12) below the meeting point, so that
+        // rounding cannot skip a meeting that happens.
         const joinH =
           st.fresh + p <= st.join ||
-          st.fresh + (k + freshKm / st.fresh) * dt < st.join ||
-          st.fresh + k * dt + Math.sqrt(2 * freshKm * dt) < st.join * (1 - 1e-12)
+          (st.fresh > 0
+            ? st.fresh + (k + freshKm / st.fresh) * dt < st.join
+            : k * dt + Math.sqrt(2 * freshKm * dt) < st.join * (1 - 1e-12))
             ? dt
             : hoursToTake(k, st.freshM, freshKm, st.fresh, st.join, i);
         if (joinH >= dt) {
