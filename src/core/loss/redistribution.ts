@@ -46,7 +46,7 @@ import { shortcuts } from './shortcuts';
  * term is below 1e-16 of the sum and the one before below 1e-12; where the series would not
  * converge over the whole spell it is restarted from an intermediate point
  * inside its radius of convergence. (The short spells of a long record, most
- * of them, take the Taylor series of S₀ itself to order 3 or 4, in a few
+ * of them, take the Taylor series of S₀ itself to order 3 to 5, in a few
  * pieces where one will not do: `shortSpell`.) It is written in y = (S₀/σ)^(−ε), σ the
  * value at the expansion point: there the leading drainage term is linear in
  * τ (exactly so for Sᵢ = 0 without capillarity), so the series converges fast
@@ -287,7 +287,7 @@ export function redistributeBySeries(soil: RedistributionSoil, zone: WettedZone,
 /**
  * A spell short against the zone's pace (most of them, deep into a long
  * record: τ = K·t/I is small once I has grown): the Taylor series of S₀(τ)
- * itself, to order 3 or 4, from the derivatives of the right-hand side
+ * itself, to order 3, 4 or 5, from the derivatives of the right-hand side
  *   f(S) = −x·[P + b·x·D],  x = S − Sᵢ,  P = S^ε,  D = S^c − Sᵢ^c,
  *   f′ = −P − x·P′ − 2b·x·D − b·x²·C′,
  *   f″ = −2P′ − x·P″ − 2b·D − 4b·x·C′ − b·x²·C″,
@@ -299,7 +299,7 @@ export function redistributeBySeries(soil: RedistributionSoil, zone: WettedZone,
  * at a fraction of the work and with one division; the series ends by the
  * same test (its last term below TERM_TOL of S₀, the one before below
  * PREVIOUS_TOL). S₀^(1/λ) follows by `scaledSaturationPower`. Returns false,
- * leaving `zone` alone, when order 4 is not enough; `redistribute` then
+ * leaving `zone` alone, when order 5 is not enough; `redistribute` then
  * tries shorter pieces, and the general series takes what they leave.
  */
 function shortSpell(soil: RedistributionSoil, zone: WettedZone, h: number, b: number): boolean {
@@ -332,8 +332,20 @@ function shortSpell(soil: RedistributionSoil, zone: WettedZone, h: number, b: nu
     const c3 = (c - 2) * c2 * inv;
     const f3 = -3 * p2 - x * p3 - b * (6 * c1 + x * (6 * c2 + x * c3));
     const s4 = (f * (f * (f3 * f + 4 * f2 * f1) + f1 * f1 * f1)) / 24;
-    if (!(Math.abs(s4) * h3 * h <= tol && Math.abs(s3) * h3 <= PREVIOUS_TOL * sigma)) return false;
-    delta = h * (f + h * (s2 + h * (s3 + h * s4)));
+    const h4 = h3 * h;
+    if (Math.abs(s4) * h4 <= tol && Math.abs(s3) * h3 <= PREVIOUS_TOL * sigma) {
+      delta = h * (f + h * (s2 + h * (s3 + h * s4)));
+    } else {
+      // Order 5: S⁽⁵⁾ = f⁗f⁴ + 7f‴f′f³ + 4f″²f³ + 11f″f′²f² + f′⁴f,
+      // f⁗ = −4P‴ − x·P⁗ − 12b·C″ − 8b·x·C‴ − b·x²·C⁗.
+      const p4 = (eps - 3) * p3 * inv;
+      const c4 = (c - 3) * c3 * inv;
+      const f4 = -4 * p3 - x * p4 - b * (12 * c2 + x * (8 * c3 + x * c4));
+      const ff = f * f;
+      const s5 = (f * (ff * (f4 * f + 7 * f3 * f1 + 4 * f2 * f2) + f1 * f1 * (11 * f2 * f + f1 * f1))) / 120;
+      if (!(Math.abs(s5) * h4 * h <= tol && Math.abs(s4) * h4 <= PREVIOUS_TOL * sigma)) return false;
+      delta = h * (f + h * (s2 + h * (s3 + h * (s4 + h * s5))));
+    }
   }
   const sum = sigma + delta;
   if (!(sum > si)) return false;

@@ -126,8 +126,9 @@ describe('redistribution of the wetted zone in a dry spell', () => {
     // of S and the one before below 1e-12 (what is left then is smaller still), so each
     // piece differs by at most about 4e-16 (that, and a few roundings of numbers ≤ 1);
     // with at most 24 pieces, 24 × 4e-16 < 1e-14. S^(1/λ), kept beside S, goes by the
-    // binomial series (1.4e-21 left out) or the general series' own: 1e-14 of itself
-    // likewise. (Measured over 200,000 random cases: 6.7e-16 and 1.7e-15.)
+    // binomial series (1.4e-21 left out) or the general series' own, so it follows S:
+    // 1e-14 of itself, and 1/λ times S's own 1e-14/S besides. (Measured over 200,000
+    // random cases, before order 5 came: 6.7e-16 and 1.7e-15.)
     fc.assert(
       fc.property(
         fc.double({ min: 0, max: 0.99, noNaN: true }),
@@ -143,7 +144,9 @@ describe('redistribution of the wetted zone in a dry spell', () => {
             redistribute(soil, quick, 10 ** logTau, b);
             redistributeBySeries(soil, general, 10 ** logTau, b);
             expect(Math.abs(quick.sat - general.sat)).toBeLessThanOrEqual(1e-14);
-            expect(Math.abs(quick.satPow - general.satPow)).toBeLessThanOrEqual(1e-14 * general.satPow);
+            // P = S^(1/λ) moves by dP/P = (1/λ)·dS/S with S, in either solve.
+            const slack = 1e-14 * (1 + 1 / (lambda * general.sat));
+            expect(Math.abs(quick.satPow - general.satPow)).toBeLessThanOrEqual(slack * general.satPow);
           }
         },
       ),
