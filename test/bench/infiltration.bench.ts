@@ -63,7 +63,12 @@ const BENCHES: readonly Bench[] = [
   },
   {
     // Redistribution in every dry spell (Ogden & Saghafian 1997): one solve of the
-    // redistribution equation per spell, some 210,000 spells in 10⁶ bars here.
+    // redistribution equation per spell, some 210,000 spells in 10⁶ bars here, and
+    // a new front after each. Spells take the series of S₀ written out and the new
+    // front's ponded solve one logarithm (shortcuts.ts lists them): computeLosses
+    // on this storm went from 96.7 to 70.3 ms median CPU time (0.73; core bundles
+    // before and after, separate processes alternated five times, 2 cores at load
+    // 4–5), still over the 60 ms target.
     name: 'green-ampt (recovery)',
     method: {
       kind: 'green-ampt',

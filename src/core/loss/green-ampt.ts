@@ -3,9 +3,11 @@ import {
   REDISTRIBUTION_SHAPE_FACTOR,
   redistribute,
   redistributionSoil,
+  scaledSaturationPower,
   type RedistributionSoil,
 } from './redistribution';
 import { recoverySwitch } from './recovery';
+import { shortcuts } from './shortcuts';
 import { sampleCapacity } from './sample-capacity';
 import type { BarTotals, CapacityFn, ComputeFn, GreenAmptLoss, MethodSpec } from './types';
 
@@ -72,9 +74,30 @@ export function greenAmptPondedIncrementMm(
   startMm: number,
   hours: number,
 ): number {
-  const kt = ksMmH * hours;
-  const m = suctionDeficitMm;
-  if (m === 0 || kt === 0) return kt;
+  PONDED[0] = ksMmH;
+  PONDED[1] = suctionDeficitMm;
+  PONDED[2] = startMm;
+  PONDED[3] = hours;
+  solvePonded();
+  return PONDED[0];
+}
+
+/**
+ * K, ψΔθ, F₁ and t for `solvePonded`, which leaves x in the first slot. The
+ * bar loop calls it half a million times on a long storm, and a call that is
+ * not inlined (this one is too large to be) passes and returns its numbers
+ * boxed: five allocations a call, which showed in the profile as allocation
+ * and collection. Numbers in a typed array are not boxed.
+ */
+const PONDED = new Float64Array(4);
+
+/** greenAmptPondedIncrementMm on the numbers in PONDED (see there). */
+function solvePonded(): void {
+  const startMm = PONDED[2] as number;
+  const kt = (PONDED[0] as number) * (PONDED[3] as number);
+  const m = PONDED[1] as number;
+  PONDED[0] = kt;
+  if (m === 0 || kt === 0) return;
   const base = startMm + m;
   let root = Math.sqrt(startMm * startMm + 2 * m * kt);
   // Squares of tiny depths can underflow; then take the same root without squaring.
@@ -91,52 +114,88 @@ export function greenAmptPondedIncrementMm(
   // the root lies within (M·u³/3)/g′(low) above `low`. On the short steps of a
   // long storm (u ~ 1e-6) that is below 1e-15 of the answer: no iteration needed.
   const u = low / base;
-  if (m * u * u * u <= 3e-15 * low * ((startMm + low) / (base + low))) return low < high ? low : high;
-  if (u < 1) return solveIncrement(kt, m, startMm, base, low, high);
-  // Far beyond F₁ + M (a new front after a dry spell, a dry start) the quadratic
-  // bound is poor; K·t + M·ln(1 + K·t/(F₁ + M)) is another lower bound (x ≥ K·t
-  // inside the logarithm) and close to the root there.
-  const far = kt + m * growth(kt, base);
-  return solveIncrement(kt, m, startMm, base, far > low ? (far < high ? far : high) : low, high);
-}
-
-/** ln(1 + x/base); for a tiny base x/base can overflow, and then ln x − ln base is exact enough. */
-function growth(x: number, base: number): number {
-  const ratio = x / base;
-  return ratio < 1e300 ? Math.log1p(ratio) : Math.log(x) - Math.log(base);
-}
-
-/**
- * ln(1 + u), u = x/base, by its Taylor series u − u²(1/2 − u/3 + u²/4 − u³/5
- * + u⁴/6) for 0 ≤ u ≤ 1e-3 (the next term, u⁷/7, is below 2e-19 of the sum),
- * else as `growth`. There it is as accurate as Math.log1p (within half a unit
- * in the last place, and the same double in all but about 1 in 6,000, from a
- * 200-bit check of 30,000 ratios) and several times cheaper: most bars of a
- * long storm come here, F₁ having grown far past a bar's increment.
- */
-function shortGrowth(x: number, base: number): number {
-  const u = x / base;
-  if (u <= 1e-3 && u >= 0) return u - u * u * (0.5 - u * (1 / 3 - u * (0.25 - u * (0.2 - u / 6))));
-  return growth(x, base);
-}
-
-function solveIncrement(kt: number, m: number, startMm: number, base: number, low: number, high: number): number {
-  // With F₁ ≥ M the slope g′ = (F₁ + x)/(F₁ + M + x) is at least 1/2, so the
-  // root moves by at most twice a change of M·ln(1 + u) in the last place and
-  // the series may stand in for log1p; below, g′ can be small, rounding in the
-  // residual is magnified, and log1p's own rounding is kept.
-  const series = startMm >= m;
+  if (m * u * u * u <= 3e-15 * low * ((startMm + low) / (base + low))) {
+    PONDED[0] = low < high ? low : high;
+    return;
+  }
+  // Newton's method from a lower bound, here rather than in a helper of its
+  // own: a call that is not inlined passes its numbers boxed, and eight of
+  // them on every solve showed in the profile (as allocation and collection).
   let x = low;
+  // L(a) at an anchor a for the steps below (none yet: NaN fails every test).
+  let anchor = NaN;
+  let anchorLog = 0;
+  let anchorScale = 0; // 1/(B + a)
+  if (!(u < 1)) {
+    // Far beyond F₁ + M (a new front after a dry spell, a dry start) the quadratic
+    // bound is poor; K·t + M·ln(1 + K·t/(F₁ + M)) is another lower bound (x ≥ K·t
+    // inside the logarithm) and close to the root there. Its logarithm at K·t
+    // anchors the ones the steps need next.
+    anchor = kt;
+    anchorLog = growth(kt, base);
+    anchorScale = 1 / (base + kt);
+    const far = kt + m * anchorLog;
+    if (far > low) x = far < high ? far : high;
+  }
+  // Each step needs L(x) = ln(1 + x/B), B = F₁ + M. Three ways, cheapest first:
+  // - x/B ≤ 1e-3 (most bars of a long storm, F₁ having grown far past a bar's
+  //   increment): the series of ln(1 + u) itself, no logarithm at all;
+  // - x close to an anchor a where L(a) is known: L(x) = L(a) + ln(1 + v),
+  //   v = (x − a)/(B + a), by the series when |v| ≤ 1e-3. Newton's iterates
+  //   after the first lie that close to each other (and on a new front after a
+  //   dry spell the first lies that close to K·t): one logarithm per solve
+  //   instead of one per step;
+  // - else Math.log1p, which becomes the new anchor.
+  // The anchored sum rounds once more than log1p alone (and v once more than
+  // x/B), so L may be a unit or two in the last place further off; that moves
+  // the root by at most M·L·3ε/g′. With F₁ + x ≥ M the slope g′ = (F₁ + x)/(F₁
+  // + M + x) is at least 1/2 and M·L ≤ x − K·t, so the root moves by at most
+  // 6ε of itself: the series are used only there (x only grows past `low`, bar
+  // the last step's rounding). Below, g′ can be small, rounding in the residual
+  // is magnified, and log1p's own rounding is kept.
+  // (Without the shortcuts: the series only where F₁ ≥ M, log1p elsewhere, no
+  // anchor, and the loop ends only on a step below 1e-15 of x.)
+  const quick = shortcuts.on;
+  const series = quick ? startMm + low >= m : startMm >= m;
+  // Newton's error after a step s is at most 2C·s², C = max g″/(2·min g′) over
+  // the iterates, which all lie at or above the start x₀ (the first step goes
+  // up from a lower bound, the rest stay above the root): g″ = M/(B + x)² falls
+  // and g′ rises with x, so C = M/(2(B + x₀)(F₁ + x₀)). When 2C·s² is below
+  // 1e-16 of x the next step could not move x past rounding, so the loop ends
+  // a step sooner than by waiting for a step that small (the result differs
+  // from that by at most 1e-16 of itself). Only where g′ ≥ 1/2 (C·x ≤ 1/2),
+  // so that s ≪ x makes C·s small and the bound holds.
+  const curve = series && quick ? m / (2 * (base + x) * (startMm + x)) : Infinity;
   for (let iter = 0; iter < 60; iter++) {
-    const residual = x - m * (series ? shortGrowth(x, base) : growth(x, base)) - kt;
+    let lx: number;
+    // The anchor first: it saves the division x/B on the steps after the first
+    // (an anchor is only ever set where x/B > 1e-3).
+    const v = (x - anchor) * anchorScale;
+    if (series && quick && v <= 1e-3 && v >= -1e-3) {
+      lx = anchorLog + log1pSeries(v);
+    } else {
+      const ux = x / base;
+      if (series && ux <= 1e-3 && ux >= 0) {
+        lx = log1pSeries(ux);
+      } else {
+        lx = growth(x, base);
+        anchor = x;
+        anchorLog = lx;
+        anchorScale = 1 / (base + x);
+      }
+    }
+    const residual = x - m * lx - kt;
     const step = (residual * (base + x)) / (startMm + x); // residual / g′(x), g′ = (F₁ + x)/(F₁ + M + x)
     x -= step;
     // The first step may go up (from the lower bound); after it every step goes
     // down, so a step that does not (rounding noise at the root) means done.
-    if (iter === 0 ? !(Math.abs(step) > 1e-15 * x) : !(step > 1e-15 * x)) {
+    if ((iter === 0 ? !(Math.abs(step) > 1e-15 * x) : !(step > 1e-15 * x)) || 2 * curve * step * step <= 1e-16 * x) {
       // Settled: inside the bracket up to rounding (the start is often exact
       // to the last bit, and a step of noise may leave it by one), else fall back.
-      if (x >= low * (1 - 1e-12) && x <= high * (1 + 1e-12)) return x < low ? low : x > high ? high : x;
+      if (x >= low * (1 - 1e-12) && x <= high * (1 + 1e-12)) {
+        PONDED[0] = x < low ? low : x > high ? high : x;
+        return;
+      }
       break;
     }
   }
@@ -148,7 +207,24 @@ function solveIncrement(kt: number, m: number, startMm: number, base: number, lo
     if (mid - m * growth(mid, base) - kt > 0) b = mid;
     else a = mid;
   }
-  return 0.5 * (a + b);
+  PONDED[0] = 0.5 * (a + b);
+}
+
+/** ln(1 + x/base); for a tiny base x/base can overflow, and then ln x − ln base is exact enough. */
+function growth(x: number, base: number): number {
+  const ratio = x / base;
+  return ratio < 1e300 ? Math.log1p(ratio) : Math.log(x) - Math.log(base);
+}
+
+/**
+ * ln(1 + u) for |u| ≤ 1e-3 by its Taylor series u − u²(1/2 − u/3 + u²/4 −
+ * u³/5 + u⁴/6): the next term, u⁷/7, is below 2e-19 of the sum. There it is
+ * as accurate as Math.log1p (within half a unit in the last place, and the
+ * same double in all but about 1 in 6,000, from a 200-bit check of 30,000
+ * ratios in [0, 1e-3]) and several times cheaper.
+ */
+function log1pSeries(u: number): number {
+  return u - u * u * (0.5 - u * (1 / 3 - u * (0.25 - u * (0.2 - u / 6))));
 }
 
 /**
@@ -270,7 +346,16 @@ function barLoss(k: number, m: number, km: number, depth: number, p: number, dt:
     pondedH = dt - before / i;
     from = pondDepth;
   }
-  const loss = before + (pondedH > 0 ? greenAmptPondedIncrementMm(k, m, from, pondedH) : 0);
+  let ponded = 0;
+  if (pondedH > 0) {
+    PONDED[0] = k;
+    PONDED[1] = m;
+    PONDED[2] = from;
+    PONDED[3] = pondedH;
+    solvePonded();
+    ponded = PONDED[0] as number;
+  }
+  const loss = before + ponded;
   return loss > p ? p : loss;
 }
 
@@ -320,9 +405,17 @@ function hoursToTake(k: number, m: number, km: number, from: number, to: number,
 function endDrySpell(c: GreenAmptConstants, st: GreenAmptState): void {
   const si = c.soil.si;
   if (st.fresh > 0) {
-    const grown = st.sat < 1 ? si + (st.sat - si) * ((st.depth + st.fresh) / st.depth) : 1;
+    const sat = st.sat;
+    const grown = sat < 1 ? si + (sat - si) * ((st.depth + st.fresh) / st.depth) : 1;
+    // S₀ grows by the factor 1 + d, d = (S₀ − Sᵢ)·F₂/(I·S₀), written so as not to cancel.
+    const d = ((sat - si) * (st.fresh / st.depth)) / sat;
+    st.satPow =
+      grown < 1
+        ? shortcuts.on
+          ? scaledSaturationPower(c.soil, st.satPow, d, grown)
+          : Math.pow(grown, c.soil.invLambda)
+        : 1;
     st.sat = grown < 1 ? grown : 1;
-    st.satPow = grown < 1 ? Math.pow(grown, c.soil.invLambda) : 1;
     st.depth += st.fresh;
     st.fresh = 0;
   }
@@ -381,9 +474,17 @@ function runGreenAmpt(
         const i = p / dt;
         // No need to time the meeting when the front cannot reach the old zone in
         // this bar: it takes at most the bar's rain, and at most its capacity at
-        // the bar's start, K(1 + M₂/F₂), for the whole bar (the capacity only falls).
+        // the bar's start, K(1 + M₂/F₂), for the whole bar (the capacity only
+        // falls). On the first bar after a spell (F₂ = 0, capacity unbounded), at
+        // most what it would take ponded from a dry surface, K·t + √(2M₂K·t) (see
+        // greenAmptPondedIncrementMm): half the meetings there were timed in vain.
+        // That bound is held a hair (1e-12) below the meeting point, so that
+        // rounding cannot skip a meeting that happens.
         const joinH =
-          st.fresh + p <= st.join || st.fresh + (k + freshKm / st.fresh) * dt < st.join
+          st.fresh + p <= st.join ||
+          (st.fresh > 0
+            ? st.fresh + (k + freshKm / st.fresh) * dt < st.join
+            : k * dt + Math.sqrt(2 * freshKm * dt) < st.join * (1 - 1e-12))
             ? dt
             : hoursToTake(k, st.freshM, freshKm, st.fresh, st.join, i);
         if (joinH >= dt) {
@@ -402,6 +503,7 @@ function runGreenAmpt(
           if (loss > p) loss = p;
           st.depth = joined + (loss - taken);
           st.sat = 1;
+          st.satPow = 1;
           st.fresh = 0;
         }
       } else {

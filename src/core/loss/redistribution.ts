@@ -1,3 +1,5 @@
+import { shortcuts } from './shortcuts';
+
 /**
  * Redistribution of a Green–Ampt wetted zone while no rain falls, for the
  * Green–Ampt method's recovery in dry spells (green-ampt.ts holds the storm
@@ -43,8 +45,9 @@
  * (automatic differentiation of the right-hand side), summed until the last
  * term is below 1e-16 of the sum and the one before below 1e-12; where the series would not
  * converge over the whole spell it is restarted from an intermediate point
- * inside its radius of convergence (the short spells of a long record, most
- * of them, take the same series written out to order 4). It is written in y = (S₀/σ)^(−ε), σ the
+ * inside its radius of convergence. (The short spells of a long record, most
+ * of them, take the Taylor series of S₀ itself to order 3 to 5, in a few
+ * pieces where one will not do: `shortSpell`.) It is written in y = (S₀/σ)^(−ε), σ the
  * value at the expansion point: there the leading drainage term is linear in
  * τ (exactly so for Sᵢ = 0 without capillarity), so the series converges fast
  * and cannot overflow. The whole spell is one solve from the state where the
@@ -77,6 +80,11 @@ export interface RedistributionSoil {
   readonly siC: number;
   /** 1/λ. */
   readonly invLambda: number;
+  /**
+   * (a − 1)/2, (a − 2)/3, (a − 3)/4, (a − 4)/5 for a = 1/λ: the factors of the
+   * binomial series of (1 + d)^(1/λ) (see `scaledSaturationPower`).
+   */
+  readonly binomial: readonly [number, number, number, number];
 }
 
 export function redistributionSoil(initialSaturation: number, poreSizeIndex: number): RedistributionSoil {
@@ -87,7 +95,32 @@ export function redistributionSoil(initialSaturation: number, poreSizeIndex: num
     c,
     siC: initialSaturation > 0 ? Math.pow(initialSaturation, c) : 0,
     invLambda: 1 / poreSizeIndex,
+    binomial: [
+      (1 / poreSizeIndex - 1) / 2,
+      (1 / poreSizeIndex - 2) / 3,
+      (1 / poreSizeIndex - 3) / 4,
+      (1 / poreSizeIndex - 4) / 5,
+    ],
   };
+}
+
+/**
+ * S₁^(1/λ) from S₀^(1/λ) (`satPow`) and S₁ = S₀(1 + d), for the small steps
+ * of S a dry spell or a light burst makes: S₀^(1/λ)·(1 + d)^a, a = 1/λ, by
+ * the binomial series 1 + a·d(1 + (a − 1)/2·d(1 + (a − 2)/3·d(1 + (a − 3)/4·d
+ * (1 + (a − 4)/5·d)))) while (a + 5)|d| ≤ 1e-3: each factor (a − j)/(j + 1)·d
+ * is then below 1e-3/(j + 1) in size, so the first term left out,
+ * C(a, 6)·d⁶, is below (1e-3)⁶/6! ≈ 1.4e-21 of the sum. Otherwise (a long
+ * spell, a heavy burst on a thin zone) Math.pow of S₁ itself. Either way
+ * within a unit or two in the last place of S₁^(1/λ).
+ */
+export function scaledSaturationPower(soil: RedistributionSoil, satPow: number, d: number, sat: number): number {
+  const a = soil.invLambda;
+  if (!((a + 5) * Math.abs(d) <= 1e-3)) return Math.pow(sat, a);
+  const c = soil.binomial;
+  const tail =
+    1 + (c[0] as number) * d * (1 + (c[1] as number) * d * (1 + (c[2] as number) * d * (1 + (c[3] as number) * d)));
+  return satPow + satPow * (a * d * tail);
 }
 
 /** The wetted zone's effective saturation S₀ and S₀^(1/λ) (kept together: S₀^ε and S₀^c follow without a power). */
@@ -112,9 +145,35 @@ const G = new Float64Array(ORDER + 2);
  * when there is nothing to drain (x ≤ 0) or τ ≤ 0.
  */
 export function redistribute(soil: RedistributionSoil, zone: WettedZone, tau: number, b: number): void {
+  if (!(zone.sat > soil.si) || !(tau > 0)) return;
+  if (!shortcuts.on) {
+    redistributeBySeries(soil, zone, tau, b);
+    return;
+  }
+  // In one piece by `shortSpell` when it converges; else in pieces it can take
+  // (halving until one does), the equation being autonomous: the state after
+  // τ₁ + τ₂ is the state after τ₂ from the state after τ₁. What a few dozen
+  // tries leave goes to the general series. Pieces are at least as short as a
+  // whole spell the test accepts, so each is as exact.
+  let left = tau;
+  let h = tau;
+  for (let tries = 0; left > 0 && tries < 24; tries++) {
+    const last = h >= left;
+    const step = last ? left : h;
+    if (shortSpell(soil, zone, step, b)) left = last ? 0 : left - step;
+    else h = 0.5 * step;
+  }
+  if (left > 0) redistributeBySeries(soil, zone, left, b);
+}
+
+/**
+ * `redistribute` by the general series alone, for every spell (the tests
+ * hold the short spells' shortcut to it): the Taylor series in y described
+ * in the file comment, restarted where it would not converge over the spell.
+ */
+export function redistributeBySeries(soil: RedistributionSoil, zone: WettedZone, tau: number, b: number): void {
   const { si, eps, siC } = soil;
   if (!(zone.sat > si) || !(tau > 0)) return;
-  if (shortSpell(soil, zone, tau, b)) return;
   const toS = -1 / eps; // S = σ·Y^(−1/ε)
   const q = 1 / (3 / soil.invLambda + 2); // Y^(1 − c/ε) = Y^(1/(3λ + 2)): S^c·y = σ^c·Y^q
   let sigma = zone.sat;
@@ -226,95 +285,72 @@ export function redistribute(soil: RedistributionSoil, zone: WettedZone, tau: nu
 }
 
 /**
- * The general series of `redistribute` written out to order 4 in local
- * variables, for the spells short against the zone's pace (most of them deep
- * into a long record): the same coefficients and the same test for
- * convergence. Returns false, leaving `zone` alone, when the series needs more
- * terms; the general loop then starts again.
+ * A spell short against the zone's pace (most of them, deep into a long
+ * record: τ = K·t/I is small once I has grown): the Taylor series of S₀(τ)
+ * itself, to order 3, 4 or 5, from the derivatives of the right-hand side
+ *   f(S) = −x·[P + b·x·D],  x = S − Sᵢ,  P = S^ε,  D = S^c − Sᵢ^c,
+ *   f′ = −P − x·P′ − 2b·x·D − b·x²·C′,
+ *   f″ = −2P′ − x·P″ − 2b·D − 4b·x·C′ − b·x²·C″,
+ *   f‴ = −3P″ − x·P‴ − 6b·C′ − 6b·x·C″ − b·x²·C‴,
+ * with P⁽ᵏ⁾ = ε(ε − 1)…(ε − k + 1)·P/S^k and likewise C = S^c; for an
+ * autonomous equation S″ = f′f, S‴ = f″f² + f′²f, S⁗ = f‴f³ + 4f″f′f² + f′³f.
+ * These are the coefficients the general series of `redistribute` finds
+ * through y (the same function of τ, so the same Taylor coefficients of S),
+ * at a fraction of the work and with one division; the series ends by the
+ * same test (its last term below TERM_TOL of S₀, the one before below
+ * PREVIOUS_TOL). S₀^(1/λ) follows by `scaledSaturationPower`. Returns false,
+ * leaving `zone` alone, when order 5 is not enough; `redistribute` then
+ * tries shorter pieces, and the general series takes what they leave.
  */
 function shortSpell(soil: RedistributionSoil, zone: WettedZone, h: number, b: number): boolean {
-  const { si, eps, siC } = soil;
-  const a = -1 / eps; // S = σ·Y^a
-  const q = 1 / (3 / soil.invLambda + 2); // Q = Y^q
+  const { si, eps, c, siC } = soil;
   const sigma = zone.sat;
-  const sigmaC = sigma * sigma * sigma * zone.satPow;
-  const sigmaEps = sigmaC * zone.satPow;
-  const x0 = sigma - si;
-  const tol = TERM_TOL;
-  const before = PREVIOUS_TOL;
-  // Order 0 (y = 1).
-  const s0 = sigma;
-  const r0 = 1 / sigma;
-  const d0 = sigmaC - siC;
-  const a0 = 1 - si * r0;
-  const g0 = sigmaEps + b * x0 * d0;
-  const y1 = eps * a0 * g0;
-  // Order 1.
-  const s1 = a * y1 * s0;
-  const r1 = -a * y1 * r0;
-  const q1 = q * y1;
-  const d1 = sigmaC * q1 - siC * y1;
-  const a1 = -si * r1;
-  const g1 = b * (x0 * d1 + s1 * d0);
-  const y2 = (eps * (a0 * g1 + a1 * g0)) / 2;
+  const satPow = zone.satPow;
+  const inv = 1 / sigma;
+  const cc = sigma * sigma * sigma * satPow; // S^c
+  const pp = cc * satPow; // S^ε
+  const x = sigma - si;
+  const d = cc - siC;
+  const p1 = eps * pp * inv;
+  const p2 = (eps - 1) * p1 * inv;
+  const c1 = c * cc * inv;
+  const c2 = (c - 1) * c1 * inv;
+  const bx = b * x;
+  const f = -x * (pp + bx * d);
+  const f1 = -pp - x * p1 - bx * (2 * d + x * c1);
+  const f2 = -2 * p1 - x * p2 - b * (2 * d + x * (4 * c1 + x * c2));
   const h2 = h * h;
   const h3 = h2 * h;
-  const h4 = h3 * h;
-  // Order 2.
-  const s2 = ((a - 1) * y1 * s1 + 2 * a * y2 * s0) / 2;
-  const r2 = ((-a - 1) * y1 * r1 - 2 * a * y2 * r0) / 2;
-  const q2 = ((q - 1) * y1 * q1 + 2 * q * y2) / 2;
-  const d2 = sigmaC * q2 - siC * y2;
-  const a2 = -si * r2;
-  const g2 = b * (x0 * d2 + s1 * d1 + s2 * d0);
-  const y3 = (eps * (a0 * g2 + a1 * g1 + a2 * g0)) / 3;
-  // Order 3.
-  const s3 = ((a - 2) * y1 * s2 + (2 * a - 1) * y2 * s1 + 3 * a * y3 * s0) / 3;
-  const r3 = ((-a - 2) * y1 * r2 + (-2 * a - 1) * y2 * r1 - 3 * a * y3 * r0) / 3;
-  const q3 = ((q - 2) * y1 * q2 + (2 * q - 1) * y2 * q1 + 3 * q * y3) / 3;
-  const d3 = sigmaC * q3 - siC * y3;
-  const a3 = -si * r3;
-  const g3 = b * (x0 * d3 + s1 * d2 + s2 * d1 + s3 * d0);
-  const y4 = (eps * (a0 * g3 + a1 * g2 + a2 * g1 + a3 * g0)) / 4;
-  let sum: number;
-  let qSum: number;
-  // Converged at order 3: terms of orders 2 and 3 (4 for y) below the tolerance.
-  if (
-    Math.abs(y4) * h4 <= tol &&
-    Math.abs(y3) * h3 <= before &&
-    (Math.abs(s3) * h3) / sigma <= tol &&
-    (Math.abs(s2) * h2) / sigma <= before &&
-    Math.abs(q3) * h3 <= tol &&
-    Math.abs(q2) * h2 <= before
-  ) {
-    sum = s0 + h * (s1 + h * (s2 + h * s3));
-    qSum = 1 + h * (q1 + h * (q2 + h * q3));
+  const tol = TERM_TOL * sigma;
+  const s2 = (f * f1) / 2;
+  const s3 = (f * (f2 * f + f1 * f1)) / 6;
+  let delta: number;
+  if (Math.abs(s3) * h3 <= tol && Math.abs(s2) * h2 <= PREVIOUS_TOL * sigma) {
+    delta = h * (f + h * (s2 + h * s3));
   } else {
-    // Order 4.
-    const s4 = ((a - 3) * y1 * s3 + (2 * a - 2) * y2 * s2 + (3 * a - 1) * y3 * s1 + 4 * a * y4 * s0) / 4;
-    const r4 = ((-a - 3) * y1 * r3 + (-2 * a - 2) * y2 * r2 + (-3 * a - 1) * y3 * r1 - 4 * a * y4 * r0) / 4;
-    const q4 = ((q - 3) * y1 * q3 + (2 * q - 2) * y2 * q2 + (3 * q - 1) * y3 * q1 + 4 * q * y4) / 4;
-    const d4 = sigmaC * q4 - siC * y4;
-    const a4 = -si * r4;
-    const g4 = b * (x0 * d4 + s1 * d3 + s2 * d2 + s3 * d1 + s4 * d0);
-    const y5 = (eps * (a0 * g4 + a1 * g3 + a2 * g2 + a3 * g1 + a4 * g0)) / 5;
-    const h5 = h4 * h;
-    if (!(
-      Math.abs(y5) * h5 <= tol &&
-      Math.abs(y4) * h4 <= before &&
-      (Math.abs(s4) * h4) / sigma <= tol &&
-      (Math.abs(s3) * h3) / sigma <= before &&
-      Math.abs(q4) * h4 <= tol &&
-      Math.abs(q3) * h3 <= before
-    )) {
-      return false;
+    const p3 = (eps - 2) * p2 * inv;
+    const c3 = (c - 2) * c2 * inv;
+    const f3 = -3 * p2 - x * p3 - b * (6 * c1 + x * (6 * c2 + x * c3));
+    const s4 = (f * (f * (f3 * f + 4 * f2 * f1) + f1 * f1 * f1)) / 24;
+    const h4 = h3 * h;
+    if (Math.abs(s4) * h4 <= tol && Math.abs(s3) * h3 <= PREVIOUS_TOL * sigma) {
+      delta = h * (f + h * (s2 + h * (s3 + h * s4)));
+    } else {
+      // Order 5: S⁽⁵⁾ = f⁗f⁴ + 7f‴f′f³ + 4f″²f³ + 11f″f′²f² + f′⁴f,
+      // f⁗ = −4P‴ − x·P⁗ − 12b·C″ − 8b·x·C‴ − b·x²·C⁗.
+      const p4 = (eps - 3) * p3 * inv;
+      const c4 = (c - 3) * c3 * inv;
+      const f4 = -4 * p3 - x * p4 - b * (12 * c2 + x * (8 * c3 + x * c4));
+      const ff = f * f;
+      const s5 = (f * (ff * (f4 * f + 7 * f3 * f1 + 4 * f2 * f2) + f1 * f1 * (11 * f2 * f + f1 * f1))) / 120;
+      if (!(Math.abs(s5) * h4 * h <= tol && Math.abs(s4) * h4 <= PREVIOUS_TOL * sigma)) return false;
+      delta = h * (f + h * (s2 + h * (s3 + h * (s4 + h * s5))));
     }
-    sum = s0 + h * (s1 + h * (s2 + h * (s3 + h * s4)));
-    qSum = 1 + h * (q1 + h * (q2 + h * (q3 + h * q4)));
   }
+  const sum = sigma + delta;
   if (!(sum > si)) return false;
   zone.sat = sum;
-  zone.satPow /= qSum;
+  zone.satPow = scaledSaturationPower(soil, satPow, delta * inv, sum);
   return true;
 }
 

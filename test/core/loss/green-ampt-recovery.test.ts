@@ -7,6 +7,7 @@
 // redistribution.test.ts; here the storm around it: the new front after a spell,
 // its meeting with the old zone, the spread rule, and the behaviour the model
 // must show.
+import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
 import {
   computeLosses,
@@ -17,6 +18,8 @@ import {
 } from '../../../src/core';
 import { computeLossesUnchecked } from '../../../src/core/loss/compute';
 import { redistributedSaturation } from '../../../src/core/loss/redistribution';
+import { shortcuts } from '../../../src/core/loss/shortcuts';
+import { stormArb } from '../../helpers/arbitraries';
 import { expectClose } from '../../helpers/tolerance';
 import { expectInputError } from '../../helpers/input-error';
 
@@ -145,6 +148,29 @@ describe('Green–Ampt with recovery in dry spells (Ogden & Saghafian 1997; from
     }
   });
 
+  it('starts the next spell from saturation once the fronts have joined (checked by the same quadrature)', () => {
+    // Burst 1, a spell, a burst whose new front reaches the old zone (one front again, S = 1
+    // above it), a second spell, burst 3. The second spell redistributes a zone at S = 1
+    // holding everything taken so far, as the first did. (Until this test the zone kept
+    // S₀^(1/λ) from before the meeting, so the second spell drained from a wrong S^ε:
+    // 0.17 mm off on loam after 0.5 h.) Spells after which 30 mm in 1 h reaches the old zone:
+    for (const [soil, spells] of [
+      [loam, [0.5, 6]],
+      [clay, [0.5, 6]],
+      [sand, [0.5]],
+    ] as const) {
+      for (const hours of spells) {
+        const storm = { durationsH: [1, hours, 1, hours, 0.5], depthsMm: [40, 0, 30, 0, 20] };
+        const r = computeLosses(storm, recovering(soil));
+        const depth = r.lossMm[0] as number;
+        expect(r.lossMm[2]).toBeGreaterThan(afterSpell(soil, depth, hours).join);
+        const joined = depth + (r.lossMm[2] as number);
+        const expected = burstAfterSpell(soil, joined, afterSpell(soil, joined, hours), [[0.5, 20]]);
+        expectClose(r.lossMm[4] as number, expected[0] as number, 1e-9, 1e-9);
+      }
+    }
+  });
+
   it('spreads rain that stopped before its new front reached the old zone over the old zone’s depth, water kept', () => {
     // Loam: burst 1 of 40 mm, 24 dry hours, 0.5 mm in 15 min (all soaks in, short of the meeting
     // point), 12 dry hours, then 20 mm in 30 min. After the light rain the zone holds I' = I + 0.5 mm
@@ -199,6 +225,44 @@ describe('Green–Ampt with recovery in dry spells (Ogden & Saghafian 1997; from
       const on = computeLossesUnchecked(storm, recovering(soil)).lossMm[2] as number;
       expect(Math.abs(on - off)).toBeLessThanOrEqual(1e-5);
     }
+  });
+
+  it('gives within 1e-12 of the rain what it gives without the solvers’ shortcuts, over random storms and soils', () => {
+    // The shortcuts (shortcuts.ts) move S₀ after a spell by at most 1e-14 and each ponded
+    // increment by at most 1e-15 of itself (redistribution.test.ts, green-ampt.test.ts).
+    // A bar's loss moves with S₀ through the new front's M₂ ∝ 1 − S₀ and the meeting depth
+    // I(1 − S₀)/(S₀ − Sᵢ), whose leverage on S₀ is I(1 − Sᵢ)/(S₀ − Sᵢ)², the water I in the
+    // zone being at most the storm's rain ΣP; 1e-12·ΣP allows that leverage up to 100
+    // (S₀ − Sᵢ down to 0.1 at Sᵢ = 0) over the 1e-14 on S₀. Measured over 1,500 such
+    // storms: 6.4e-17 of ΣP.
+    const soilArb = fc.record({
+      ksMmH: fc.double({ min: 1e-3, max: 150, noNaN: true }),
+      suctionMm: fc.double({ min: 0, max: 400, noNaN: true }),
+      moistureDeficit: fc.double({ min: 0, max: 1, noNaN: true }),
+      initialSaturation: fc.double({ min: 0, max: 0.99, noNaN: true }),
+      poreSizeIndex: fc.double({ min: 0.01, max: 10, noNaN: true }),
+    });
+    fc.assert(
+      fc.property(stormArb(300), soilArb, (storm, soil) => {
+        const method: GreenAmptLoss = { kind: 'green-ampt', recovers: true, ...soil };
+        const fast = computeLossesUnchecked(storm, method);
+        shortcuts.on = false;
+        let exact;
+        try {
+          exact = computeLossesUnchecked(storm, method);
+        } finally {
+          shortcuts.on = true;
+        }
+        const scale = Math.max(
+          1,
+          storm.depthsMm.reduce((a, b) => a + b, 0),
+        );
+        for (let j = 0; j < storm.depthsMm.length; j++) {
+          expect(Math.abs((fast.lossMm[j] as number) - (exact.lossMm[j] as number))).toBeLessThanOrEqual(1e-12 * scale);
+        }
+      }),
+      { numRuns: 300 },
+    );
   });
 
   it('does nothing with the option off, or without suction', () => {

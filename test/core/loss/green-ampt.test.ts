@@ -10,6 +10,7 @@ import {
   validateMethod,
   type GreenAmptLoss,
 } from '../../../src/core';
+import { shortcuts } from '../../../src/core/loss/shortcuts';
 import { stormArb } from '../../helpers/arbitraries';
 import { expectClose } from '../../helpers/tolerance';
 import { expectInputError } from '../../helpers/input-error';
@@ -221,6 +222,47 @@ describe('Green–Ampt under variable rainfall', () => {
     ] as const) {
       expectClose(greenAmptPondedIncrementMm(6.5, M, f1, t), x, 1e-15, 0);
     }
+  });
+
+  it('solves steps far beyond F₁ + M (a new front after a dry spell, a dry start; u = K t/(F₁ + M) from 10 to 14,000) to 1e-15 of 200-bit roots', () => {
+    // Roots of x − M ln(1 + x/(F₁ + M)) = K t found with mpmath's findroot at 200 bits from
+    // the doubles shown, independently of the library, written to the nearest double;
+    // [K mm/h, M mm, F₁ mm, t h, x mm]. The first is a new front after a short spell:
+    // M₂ = 1e-4 mm, ponded from F₁ = K·M₂/(i − K) at i = 20 mm/h.
+    for (const [k, m, f1, t, x] of [
+      [3.4, 1e-4, 3.4e-4 / 16.6, 0.15, 0.5108352538478506],
+      [3.4, 0.01, 0, 0.25, 0.895054096237677],
+      [6.5, 0.5, 0.1, 1, 7.820763034813045],
+      [0.3, 2e-6, 1e-7, 0.1, 0.030019135445827405],
+      [117.8, 0.03, 0.002, 0.05, 6.047407799982943],
+    ] as const) {
+      expectClose(greenAmptPondedIncrementMm(k, m, f1, t), x, 1e-15, 0);
+    }
+  });
+
+  it('takes shortcuts (ln(1 + u) by a series about an anchor, Newton stopped by its error bound) that stay within 1e-15 of the exact path', () => {
+    // With the shortcuts off every step takes Math.log1p and the loop ends on a step
+    // below 1e-15 of x, as before they came. Bound (green-ampt.ts): the anchored
+    // logarithm moves the root by at most 6ε (ε = 2⁻⁵³ ≈ 1.1e-16) and the early stop by
+    // at most 1e-16 of it; the exact path's own rounding is within 2ε: 1e-15 holds both.
+    fc.assert(
+      fc.property(
+        fc.double({ min: 1e-3, max: 500, noNaN: true }),
+        fc.double({ min: 1e-9, max: 1e4, noNaN: true }),
+        fc.oneof(fc.constant(0), fc.double({ min: 1e-9, max: 1e6, noNaN: true })),
+        fc.double({ min: 1e-6, max: 100, noNaN: true }),
+        (k, m, f1, t) => {
+          const fast = greenAmptPondedIncrementMm(k, m, f1, t);
+          shortcuts.on = false;
+          try {
+            expectClose(fast, greenAmptPondedIncrementMm(k, m, f1, t), 1e-15, 0);
+          } finally {
+            shortcuts.on = true;
+          }
+        },
+      ),
+      { numRuns: 3000 },
+    );
   });
 
   it('stays finite and exact when ψΔθ or K·t underflow (subnormal inputs)', () => {
