@@ -240,6 +240,11 @@ function recoverDepth(c: HortonConstants, st: DepthState): void {
   if (st.depth === 0) return;
   if (!st.onCurve) settle(c, st);
   const lost = (1 - st.decay) * Math.exp(-c.kr * dt); // 1 − D after the spell
+  // No recovery to the last bit (D too small to hold, e^(−k_r Δt) rounding
+  // to 1): the state stays as it is. τ from −ln(1 − lost) would be infinite,
+  // and F with it (NaN a bar later), where the curve had only decayed past
+  // what a double holds (e^(−kτ) underflows beyond kτ ≈ 745).
+  if (lost === 1) return;
   const tau = -Math.log1p(-lost) / c.k;
   st.decay = 1 - lost;
   st.tau = tau;

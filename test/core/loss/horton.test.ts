@@ -183,6 +183,35 @@ describe('Horton with capacity recovery in dry spells (f₀ − f = (f₀ − f_
     }
   });
 
+  it('keeps a curve decayed past what a double holds through a dry spell that recovers nothing measurable', () => {
+    // A 200 h bar at 100 mm/h rides the curve to τ = 200 h, kτ = 800: e^(−kτ) underflows to 0 (D = 0).
+    // k_r = 5e-324 /h regains nothing in the dry hour (e^(−k_r·1 h) rounds to 1), so the capacity stays
+    // f_c = 5 mm/h and the last bar (20 mm in 1 h) loses 5 mm. Bar 1 loses F(200 h) =
+    // 5·200 + (50 − 5)/4·(1 − e^(−800)) = 1000 + 11.25 = 1011.25 mm. (By infiltrated depth the
+    // recovery once gave τ = −ln(1 − 1)/k = ∞, F = ∞ and NaN from the next bar: found by the
+    // bar-splitting property on a random seed, with f₀ = f_c, where the curve is flat.)
+    const storm = { durationsH: [200, 1, 1], depthsMm: [20000, 0, 20] };
+    for (const ponding of [true, false]) {
+      const method: HortonLoss = {
+        kind: 'horton',
+        f0MmH: 50,
+        fcMmH: 5,
+        kPerH: 4,
+        ponding,
+        recovers: true,
+        recoveryPerH: 5e-324,
+      };
+      const r = computeLosses(storm, method);
+      expectClose(r.lossMm[0] as number, 1011.25, 1e-14);
+      expect(r.lossMm[1]).toBe(0);
+      expectClose(r.lossMm[2] as number, 5, 1e-14);
+      // f₀ = f_c: a flat curve at 5 mm/h whatever τ, recovery or not: 5 mm an hour.
+      const flat = computeLosses(storm, { ...method, f0MmH: 5 });
+      expectClose(flat.lossMm[0] as number, 1000, 1e-14);
+      expectClose(flat.lossMm[2] as number, 5, 1e-14);
+    }
+  });
+
   it('ignores the recovery rate while the option is off (the same as leaving both out)', () => {
     const storm = { durationsH: [0.5, 2, 0.5], depthsMm: [40, 0, 40] };
     for (const ponding of [false, true]) {
