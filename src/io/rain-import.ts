@@ -264,6 +264,18 @@ export const GAP_LINES_LISTED = 5;
 const stepKey = (h: number): number => Math.round(h * 3_600_000);
 
 /**
+ * A step longer than the record's by less than this share of a step is the
+ * rounding of the stamps, not a gap: elapsed hours written to 4 decimals
+ * step by 0.0833 or 0.0834 h at 5 min, and a spreadsheet's day numbers to 6
+ * decimals by 0.086 s either way. No reading can be missed in a twentieth of
+ * a step (our rule, no source).
+ */
+const ROUNDING_SHARE = 0.05;
+
+/** Whether a step of lengthH is a gap in a record of stepH: longer by more than the stamps' rounding. */
+const isGap = (lengthH: number, stepH: number): boolean => lengthH - stepH > ROUNDING_SHARE * stepH;
+
+/**
  * The record's step (the most frequent step between successive stamps; the
  * shortest of equally frequent ones) and the steps longer than it; null
  * when fewer than half the steps are the most frequent one (a record of
@@ -295,7 +307,7 @@ export function findGaps(hours: ArrayLike<number>, lineOf: (row: number) => numb
   const endLines: number[] = [];
   for (let k = 1; k < n; k++) {
     const lengthH = (hours[k] as number) - (hours[k - 1] as number);
-    if (stepKey(lengthH) <= stepKeyMs) continue;
+    if (!isGap(lengthH, stepH)) continue;
     count++;
     if (endLines.length < GAP_LINES_LISTED) endLines.push(lineOf(k));
     if (longest === null || lengthH > longest.lengthH) {
@@ -399,7 +411,7 @@ function buildBars(
       const row = rowOfBar[b] as number;
       // The first bar of end stamps (and the last of start stamps) has no stamp of its own on the far side: it takes the step.
       const edge = hours !== null && !fromFirst && (wetFirst ? b === last : b === 0);
-      if (stepKey(d) <= stepKey(step)) {
+      if (!isGap(d, step)) {
         filledDurations.push(d);
         filledRows.push(row);
         continue;
@@ -413,11 +425,14 @@ function buildBars(
       const dry = d - step;
       const whole = Math.floor(stepKey(dry) / stepKey(step));
       const rest = dry - whole * step;
+      // A rest within the stamps' rounding is no dry bar: the wet bar keeps it, so the bars still span the stamps.
+      const restIsBar = rest > ROUNDING_SHARE * step;
+      const wet = restIsBar ? step : step + rest;
       if (wetFirst) {
-        filledDurations.push(step);
+        filledDurations.push(wet);
         filledRows.push(row);
       }
-      if (stepKey(rest) > 0) {
+      if (restIsBar) {
         filledDurations.push(rest);
         filledRows.push(-1);
       }
@@ -426,7 +441,7 @@ function buildBars(
         filledRows.push(-1);
       }
       if (!wetFirst) {
-        filledDurations.push(step);
+        filledDurations.push(wet);
         filledRows.push(row);
       }
     }
