@@ -115,6 +115,18 @@ export function toScenarioStorm(storm: Storm): ScenarioStorm {
   return knownClean(copy);
 }
 
+/** Whether a storm has the same bars (durations and depths, bar for bar) and start as the scenario's. */
+export function sameStorm(a: Storm, b: Storm): boolean {
+  if (a === b) return true;
+  const n = a.depthsMm.length;
+  if (b.depthsMm.length !== n || a.durationsH.length !== n || b.durationsH.length !== n) return false;
+  if (a.startIso !== b.startIso) return false;
+  for (let k = 0; k < n; k++) {
+    if (a.depthsMm[k] !== b.depthsMm[k] || a.durationsH[k] !== b.durationsH[k]) return false;
+  }
+  return true;
+}
+
 export function withStorm(s: Scenario, storm: Storm): Scenario {
   const next = { ...s, storm: toScenarioStorm(storm) };
   checkRecordNearStorm(next);
