@@ -62,8 +62,9 @@ const isFlowName = (name: string): boolean => FLOW_NAME.test(name);
 
 /** The discharge unit a column name states: "Q (L/s)", "Flow [cfs]", "Discharge m3/s". */
 export function flowUnitFromName(name: string): DischargeUnit | undefined {
-  const n = name.toLowerCase();
-  if (/l\/s|\blps\b|litre|liter|\bl\s*s-1/.test(n)) return 'L/s';
+  // Underscores and points separate words in exported names ("discharge_l_s", "q.lps"): read them as spaces.
+  const n = name.toLowerCase().replace(/[_.]+/g, ' ');
+  if (/l\/s|\blps\b|\bl\s+s\b|litre|liter|\bl\s*s-1/.test(n)) return 'L/s';
   if (/cfs|ft3|ft³|ft\^3|cusec|cubic\s+f(?:ee|oo)t/.test(n)) return 'ft3/s';
   if (/m3|m³|m\^3|cumec|\bcms\b|cubic\s+met/.test(n)) return 'm3/s';
   return undefined;

@@ -131,9 +131,11 @@ const isRainName = (name: string): boolean => RAIN_NAME.test(name);
 
 /** Kind, unit and step that a column name states, e.g. "Intensity (in/h)", "Cumulative rain [mm]", "10-min rain". */
 export function rainHintsFromName(name: string): { kind?: RainValueKind; unit?: RainUnit; stepMinutes?: number } {
-  const n = name.toLowerCase();
+  // Underscores and points separate words in exported names ("depth_in", "rain_mm_h"): read them as spaces.
+  const n = name.toLowerCase().replace(/[_.]+/g, ' ');
   const hints: { kind?: RainValueKind; unit?: RainUnit; stepMinutes?: number } = {};
-  if (/intens|rate|\/\s*h(?:r|our)?\b|per\s+h(?:ou)?r|mm\/h|in\/h|iph|mmph/.test(n)) hints.kind = 'intensity';
+  if (/intens|rate|\/\s*h(?:r|our)?\b|per\s+h(?:(?:ou)?r)?\b|\b(?:mm|in)\s+h(?:r|our)?\b|mm\/h|in\/h|iph|mmph/.test(n))
+    hints.kind = 'intensity';
   else if (/cumul|\bcum\b|accum|mass\b|running/.test(n)) hints.kind = 'cumulative';
   else if (/depth|increment|per\s+(?:bar|interval|step)/.test(n)) hints.kind = 'depth';
   if (/\bmm\b|millim/.test(n)) hints.unit = 'mm';
