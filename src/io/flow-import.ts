@@ -17,6 +17,7 @@ import {
 import { readPlainColumns } from './plain-columns';
 import type { TextRow } from './table-text';
 import { formatTimeOfDay, isoAt } from './time-values';
+import { spreadsheetDaysNote } from './spreadsheet-days';
 
 /**
  * A streamflow record from pasted text: a time and a discharge per line (or
@@ -61,8 +62,9 @@ const isFlowName = (name: string): boolean => FLOW_NAME.test(name);
 
 /** The discharge unit a column name states: "Q (L/s)", "Flow [cfs]", "Discharge m3/s". */
 export function flowUnitFromName(name: string): DischargeUnit | undefined {
-  const n = name.toLowerCase();
-  if (/l\/s|\blps\b|litre|liter|\bl\s*s-1/.test(n)) return 'L/s';
+  // Underscores and points separate words in exported names ("discharge_l_s", "q.lps"): read them as spaces.
+  const n = name.toLowerCase().replace(/[_.]+/g, ' ');
+  if (/l\/s|\blps\b|\bl\s+s\b|litre|liter|\bl\s*s-1/.test(n)) return 'L/s';
   if (/cfs|ft3|ft³|ft\^3|cusec|cubic\s+f(?:ee|oo)t/.test(n)) return 'ft3/s';
   if (/m3|m³|m\^3|cumec|\bcms\b|cubic\s+met/.test(n)) return 'm3/s';
   return undefined;
@@ -130,12 +132,15 @@ interface FlowLines {
   readonly blankLinesSkipped: number;
   /** The text's line number of data row k. */
   readonly lineOf: (k: number) => number | undefined;
+  /** The first data row as split, for what its time cell says. */
+  readonly firstRow: TextRow | undefined;
 }
 
 const seriesLines = (series: Series): FlowLines => ({
   times: series.times,
   blankLinesSkipped: series.table.blankLinesSkipped,
   lineOf: (k) => series.table.rows[k]?.line,
+  firstRow: series.table.rows[0],
 });
 
 function successSummary(
@@ -169,6 +174,18 @@ function successSummary(
   const notes: string[] = [];
   if (lines.times === null)
     notes.push(`no times, so samples are ${formatDuration(s.stepMinutesIfNoTime / 60, format)} apart as set`);
+  const first = lines.firstRow;
+  if ((s.timeKind === 'elapsed-min' || s.timeKind === 'elapsed-h') && s.timeColumn !== null && first && n > 1) {
+    const days = spreadsheetDaysNote({
+      kind: s.timeKind,
+      firstCell: first.cells[s.timeColumn - 1] ?? '',
+      firstLine: first.line,
+      stepH: (timesH[1] as number) - (timesH[0] as number),
+      decimal: s.decimal,
+      grouping: s.grouping,
+    });
+    if (days !== null) notes.push(days);
+  }
   if (s.skipLines > 0) notes.push(`${plural(s.skipLines, 'line', undefined, format)} skipped at the top`);
   const blank = lines.blankLinesSkipped;
   if (blank > 0) notes.push(`${plural(blank, 'blank line', undefined, format)} inside the data skipped`);
@@ -300,7 +317,7 @@ export function readPlainFlow(
   const first = read.firstLine;
   const summary = successSummary(
     record,
-    { times: read.times, blankLinesSkipped: 0, lineOf: (k) => first + k },
+    { times: read.times, blankLinesSkipped: 0, lineOf: (k) => first + k, firstRow: read.headRows[0] },
     settings,
     format,
   );

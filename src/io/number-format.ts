@@ -169,6 +169,10 @@ function refusal(text: string, format: NumberFormat): string {
     if (text.includes(other) && format.group !== other) {
       return `${q} has a ${WORDS[other]}, but ${name} writes decimals with a ${WORDS[format.decimal]}; write ${example(format)}, or choose another number format.`;
     }
+    if (format.group !== ' ' && /[\s\u00a0\u202f\u2009]/.test(text)) {
+      const groupWord = WORDS[format.group as '.' | ','];
+      return `${q} has a space inside: ${name} groups digits with a ${groupWord} (${writeNumber(1234567, format, { significant: 7 })}) or not at all (1234567); type one number, without spaces.`;
+    }
     if (format.group === ' ' ? /[\s\u00a0\u202f\u2009]/.test(text) : text.includes(format.group)) {
       const groupWord = format.group === ' ' ? 'space' : WORDS[format.group as '.' | ','];
       return `${q}: in ${name} a ${groupWord} stands only between groups of three digits (${writeNumber(1234567, format, { significant: 7 })}) and decimals start with a ${WORDS[format.decimal]} (${example(format)}).`;

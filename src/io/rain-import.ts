@@ -18,6 +18,7 @@ import {
 import { plainArray, readPlainColumns, type ColumnTimes } from './plain-columns';
 import type { TextRow } from './table-text';
 import { formatTimeOfDay, isoAt, parseClock, type TimeLine } from './time-values';
+import { spreadsheetDaysNote } from './spreadsheet-days';
 
 /**
  * Rainfall from pasted text: one column of values, or a time and a value.
@@ -130,9 +131,11 @@ const isRainName = (name: string): boolean => RAIN_NAME.test(name);
 
 /** Kind, unit and step that a column name states, e.g. "Intensity (in/h)", "Cumulative rain [mm]", "10-min rain". */
 export function rainHintsFromName(name: string): { kind?: RainValueKind; unit?: RainUnit; stepMinutes?: number } {
-  const n = name.toLowerCase();
+  // Underscores and points separate words in exported names ("depth_in", "rain_mm_h"): read them as spaces.
+  const n = name.toLowerCase().replace(/[_.]+/g, ' ');
   const hints: { kind?: RainValueKind; unit?: RainUnit; stepMinutes?: number } = {};
-  if (/intens|rate|\/\s*h(?:r|our)?\b|per\s+h(?:ou)?r|mm\/h|in\/h|iph|mmph/.test(n)) hints.kind = 'intensity';
+  if (/intens|rate|\/\s*h(?:r|our)?\b|per\s+h(?:(?:ou)?r)?\b|\b(?:mm|in)\s+h(?:r|our)?\b|mm\/h|in\/h|iph|mmph/.test(n))
+    hints.kind = 'intensity';
   else if (/cumul|\bcum\b|accum|mass\b|running/.test(n)) hints.kind = 'cumulative';
   else if (/depth|increment|per\s+(?:bar|interval|step)/.test(n)) hints.kind = 'depth';
   if (/\bmm\b|millim/.test(n)) hints.unit = 'mm';
@@ -264,6 +267,18 @@ export const GAP_LINES_LISTED = 5;
 const stepKey = (h: number): number => Math.round(h * 3_600_000);
 
 /**
+ * A step longer than the record's by less than this share of a step is the
+ * rounding of the stamps, not a gap: elapsed hours written to 4 decimals
+ * step by 0.0833 or 0.0834 h at 5 min, and a spreadsheet's day numbers to 6
+ * decimals by 0.086 s either way. No reading can be missed in a twentieth of
+ * a step (our rule, no source).
+ */
+const ROUNDING_SHARE = 0.05;
+
+/** Whether a step of lengthH is a gap in a record of stepH: longer by more than the stamps' rounding. */
+const isGap = (lengthH: number, stepH: number): boolean => lengthH - stepH > ROUNDING_SHARE * stepH;
+
+/**
  * The record's step (the most frequent step between successive stamps; the
  * shortest of equally frequent ones) and the steps longer than it; null
  * when fewer than half the steps are the most frequent one (a record of
@@ -295,7 +310,7 @@ export function findGaps(hours: ArrayLike<number>, lineOf: (row: number) => numb
   const endLines: number[] = [];
   for (let k = 1; k < n; k++) {
     const lengthH = (hours[k] as number) - (hours[k - 1] as number);
-    if (stepKey(lengthH) <= stepKeyMs) continue;
+    if (!isGap(lengthH, stepH)) continue;
     count++;
     if (endLines.length < GAP_LINES_LISTED) endLines.push(lineOf(k));
     if (longest === null || lengthH > longest.lengthH) {
@@ -399,7 +414,7 @@ function buildBars(
       const row = rowOfBar[b] as number;
       // The first bar of end stamps (and the last of start stamps) has no stamp of its own on the far side: it takes the step.
       const edge = hours !== null && !fromFirst && (wetFirst ? b === last : b === 0);
-      if (stepKey(d) <= stepKey(step)) {
+      if (!isGap(d, step)) {
         filledDurations.push(d);
         filledRows.push(row);
         continue;
@@ -413,11 +428,14 @@ function buildBars(
       const dry = d - step;
       const whole = Math.floor(stepKey(dry) / stepKey(step));
       const rest = dry - whole * step;
+      // A rest within the stamps' rounding is no dry bar: the wet bar keeps it, so the bars still span the stamps.
+      const restIsBar = rest > ROUNDING_SHARE * step;
+      const wet = restIsBar ? step : step + rest;
       if (wetFirst) {
-        filledDurations.push(step);
+        filledDurations.push(wet);
         filledRows.push(row);
       }
-      if (stepKey(rest) > 0) {
+      if (restIsBar) {
         filledDurations.push(rest);
         filledRows.push(-1);
       }
@@ -426,7 +444,7 @@ function buildBars(
         filledRows.push(-1);
       }
       if (!wetFirst) {
-        filledDurations.push(step);
+        filledDurations.push(wet);
         filledRows.push(row);
       }
     }
@@ -515,6 +533,24 @@ function successSummary(
   const notes: string[] = [];
   if (series.times !== null) {
     if (s.valueKind !== 'cumulative') notes.push(`time stamps mark the ${s.timeMarks} of each bar`);
+    const first = series.rowAt(0);
+    const hours = series.times.hours;
+    if (
+      (s.timeKind === 'elapsed-min' || s.timeKind === 'elapsed-h') &&
+      s.timeColumn !== null &&
+      first &&
+      hours.length > 1
+    ) {
+      const days = spreadsheetDaysNote({
+        kind: s.timeKind,
+        firstCell: first.cells[s.timeColumn - 1] ?? '',
+        firstLine: first.line,
+        stepH: (hours[1] as number) - (hours[0] as number),
+        decimal: s.decimal,
+        grouping: s.grouping,
+      });
+      if (days !== null) notes.push(days);
+    }
   } else {
     const along = s.valuesAlong === 'line' ? 'values read along each line; ' : '';
     notes.push(`${along}no times, so bars are ${formatDuration(s.stepMinutesIfNoTime / 60, format)} apart as set`);

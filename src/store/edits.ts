@@ -115,6 +115,25 @@ export function toScenarioStorm(storm: Storm): ScenarioStorm {
   return knownClean(copy);
 }
 
+/**
+ * Values equal to rounding: a resample to the storm's own step or a total set to the storm's own total
+ * gives the bars back within a few units in the last place (0.39999999999999997 for 0.4).
+ */
+const same = (x: number, y: number): boolean => Math.abs(x - y) <= 1e-12 * Math.max(1, Math.abs(x), Math.abs(y));
+
+/** Whether a storm has the same bars (durations and depths, bar for bar, to rounding) and start as the scenario's. */
+export function sameStorm(a: Storm, b: Storm): boolean {
+  if (a === b) return true;
+  const n = a.depthsMm.length;
+  if (b.depthsMm.length !== n || a.durationsH.length !== n || b.durationsH.length !== n) return false;
+  if (a.startIso !== b.startIso) return false;
+  for (let k = 0; k < n; k++) {
+    if (!same(a.depthsMm[k] as number, b.depthsMm[k] as number)) return false;
+    if (!same(a.durationsH[k] as number, b.durationsH[k] as number)) return false;
+  }
+  return true;
+}
+
 export function withStorm(s: Scenario, storm: Storm): Scenario {
   const next = { ...s, storm: toScenarioStorm(storm) };
   checkRecordNearStorm(next);

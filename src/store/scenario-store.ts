@@ -30,6 +30,7 @@ import {
   withObserved,
   withParam,
   withStartIso,
+  sameStorm,
   withStorm,
   withUnits,
   type Bar,
@@ -222,7 +223,8 @@ export function createWorkbenchStore(initial: Scenario, options: CreateStoreOpti
         if (get().areaUnits[system] !== unit) set({ areaUnits: { ...get().areaUnits, [system]: unit } });
       },
 
-      setStorm: (storm, label) => edit(label, (s) => withStorm(s, storm)),
+      // A tool that leaves every bar as it was (scale by 1, resample to the storm's own step) is no undo step.
+      setStorm: (storm, label) => edit(label, (s) => (sameStorm(s.storm, storm) ? s : withStorm(s, storm))),
       setImportedStorm: (storm, label) =>
         edit(label, (s) => {
           const next = withStorm(s, storm);

@@ -124,6 +124,19 @@ describe('flowUnitFromName', () => {
     expect(flowUnitFromName('cumecs')).toBe('m3/s');
     expect(flowUnitFromName('Flow')).toBeUndefined();
   });
+
+  it('reads the units in names written with underscores or points, as exports write them', () => {
+    // The defect: "discharge_l_s" and "q_lps" were taken for m³/s (an underscore is no word boundary), so a
+    // record in L/s came in a thousand times too large: a 4.5 m³/s peak read as 4,500 m³/s.
+    expect(flowUnitFromName('discharge_l_s')).toBe('L/s');
+    expect(flowUnitFromName('q_lps')).toBe('L/s');
+    expect(flowUnitFromName('Flow.L.s')).toBe('L/s');
+    expect(flowUnitFromName('flow_cms')).toBe('m3/s');
+    expect(flowUnitFromName('discharge_m3s')).toBe('m3/s');
+    expect(flowUnitFromName('q_cfs')).toBe('ft3/s');
+    expect(flowUnitFromName('flow_class')).toBeUndefined();
+    expect(guessFlowImport('time,discharge_l_s\n10:00,300\n10:15,4500\n10:30,900').settings.unit).toBe('L/s');
+  });
 });
 
 describe('applyFlowImport reports every bad input by line and column', () => {

@@ -51,6 +51,31 @@ describe('a gap in a timed record', () => {
     expect(summary).toMatch(/between lines 2 and 3/);
   });
 
+  test('stamps rounded in their last digit are no gaps: elapsed hours to 4 decimals at a 5-min step', () => {
+    // The defect: 5 min written as hours to 4 decimals (0.0833, 0.1667, …) steps by 0.0834 or 0.0833 h. The
+    // 0.0834 h steps, 0.36 s longer than the record's 0.0833 h, were taken for gaps and given dry bars of 0.36 s,
+    // and the paste was refused as "not valid: Bar 2: duration must be at least 1 second", at line 0, column 0.
+    // Read as written: end stamps, the first bar takes the first step. Durations 0.0834, 0.0834, 0.0833, 0.0833,
+    // 0.0834, 0.0833 h (sum 0.5001 h = 0.0834 + 0.5 − 0.0833); depths as typed, total 10 mm.
+    const { storm, summary } = read('hours\train\n0.0833\t1\n0.1667\t2\n0.25\t3\n0.3333\t1\n0.4167\t1\n0.5\t2');
+    close(storm.durationsH, [0.0834, 0.0834, 0.0833, 0.0833, 0.0834, 0.0833]);
+    close(storm.depthsMm, [1, 2, 3, 1, 1, 2]);
+    expect(summary).not.toMatch(/gap/);
+  });
+
+  test('a missed reading between rounded stamps is one dry step, its rounding kept by the wet bar', () => {
+    // 10-min steps written as hours to 4 decimals, the reading at 0.5 missing: steps 0.1666, 0.3334, 0.1666,
+    // 0.1667 h. The record's step is the most frequent: 0.1666 h. The last step, 0.0001 h (0.36 s, 0.06 % of the
+    // step) longer, is rounding, no gap. The 0.3334 h gap: 0.1668 h dry = one dry step of 0.1666 h and 0.0002 h
+    // (0.72 s) over, too short for a bar: the wet bar keeps it, 0.1666 + 0.0002 = 0.1668 h. Bars (end stamps; the
+    // first takes its step, 0.1666): 0.1666, 0.1666, dry 0.1666, wet 0.1668, 0.1666, 0.1667; sum 0.9999 h =
+    // 0.1666 + (1 − 0.1667), the stamps' span and the first bar.
+    const { storm, summary } = read('hours\train\n0.1667\t1\n0.3333\t2\n0.6667\t3\n0.8333\t1\n1\t2');
+    close(storm.durationsH, [0.1666, 0.1666, 0.1666, 0.1668, 0.1666, 0.1667]);
+    close(storm.depthsMm, [1, 2, 0, 3, 1, 2]);
+    expect(summary).toMatch(/1 gap longer than the record’s/);
+  });
+
   test('stamps that mark the start of their bar keep the rain at the start of the gap', () => {
     // Steps 15, 45, 15 min. 10:15 opens a 45-min bar: 0.3 mm in 10:15–10:30, then 30 min dry (2 bars); 10:00 to 11:30.
     const { storm } = read('10:00\t0.5\n10:15\t0.3\n11:00\t0.4\n11:15\t0.1', { timeMarks: 'start' });

@@ -77,6 +77,20 @@ describe('reading typed numbers under a number format', () => {
     expect(value('   ', COMMA_POINT)).toBe('Enter a number.');
   });
 
+  it('refuses a space inside a number under a format that does not group with spaces, naming the space', () => {
+    // The defect: "1 000" under 1,234.5 (and "0 1 2 1 0", ordinates pasted in one line) was told
+    // "it has more than one point, or a mark out of place": there is no point in it.
+    expect(value('1 000', COMMA_POINT)).toBe(
+      '“1 000” has a space inside: the number format 1,234.5 groups digits with a comma (1,234,567) or not at all (1234567); type one number, without spaces.',
+    );
+    expect(value('0 1 2 1 0', POINT_COMMA)).toBe(
+      '“0 1 2 1 0” has a space inside: the number format 1.234,5 groups digits with a point (1.234.567) or not at all (1234567); type one number, without spaces.',
+    );
+    expect(value('1\u00a0000', COMMA_POINT)).toMatch(/has a space inside/);
+    // Under a format that groups with spaces, a space out of place keeps the grouping message.
+    expect(value('1 00', SPACE_POINT)).toMatch(/^“1 00”: in the number format 1 234\.5 a space stands only between/);
+  });
+
   it('quotes long typed text cut short, never three hundred digits back', () => {
     const long = `1${'0'.repeat(400)}`;
     const r = readNumber(long, COMMA_POINT);

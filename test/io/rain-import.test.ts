@@ -315,6 +315,19 @@ describe('rainHintsFromName', () => {
     expect(rainHintsFromName('10-min rain')).toEqual({ stepMinutes: 10 });
     expect(rainHintsFromName('hourly rain, inches')).toEqual({ unit: 'in', stepMinutes: 60 });
   });
+
+  it('reads them in names written with underscores or points, as exports write them', () => {
+    // The defect: an underscore is no word boundary, so "depth_in" was read in mm (25.4 times too small) and
+    // "intensity_in_hr" as mm/h; "rain_mm_h" was taken for depths.
+    expect(rainHintsFromName('depth_in')).toEqual({ kind: 'depth', unit: 'in' });
+    expect(rainHintsFromName('intensity_in_hr')).toEqual({ kind: 'intensity', unit: 'in' });
+    expect(rainHintsFromName('rain_in_per_hr')).toEqual({ kind: 'intensity', unit: 'in' });
+    expect(rainHintsFromName('rain_mm_h')).toEqual({ kind: 'intensity', unit: 'mm' });
+    expect(rainHintsFromName('i_mm_per_h')).toEqual({ kind: 'intensity', unit: 'mm' });
+    expect(rainHintsFromName('cum_rain_mm')).toEqual({ kind: 'cumulative', unit: 'mm' });
+    expect(rainHintsFromName('Rain.in')).toEqual({ unit: 'in' });
+    expect(rainHintsFromName('rain_mm')).toEqual({ unit: 'mm' });
+  });
 });
 
 describe('applyRainImport reports every bad input by line and column', () => {

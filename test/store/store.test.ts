@@ -60,6 +60,30 @@ describe('workbench store', () => {
     expect(s().storm).toBe(FOUR_BARS.storm);
   });
 
+  it('a storm tool that leaves every bar as it was is no undo step', () => {
+    // The defect: "Scale bars" by 1, or "Resample" to the storm's own step, recorded a step that changed nothing,
+    // so the next Ctrl+Z seemed to do nothing at all.
+    const { store, a, s } = make();
+    const { durationsH, depthsMm, startIso } = FOUR_BARS.storm;
+    a.setStorm(
+      startIso === undefined
+        ? { durationsH: [...durationsH], depthsMm: [...depthsMm] }
+        : { durationsH: [...durationsH], depthsMm: [...depthsMm], startIso },
+      'Scale storm by 1',
+    );
+    expect(s()).toBe(FOUR_BARS);
+    expect(store.getState().history.past).toHaveLength(0);
+    // Resampled to its own step, 0.4 mm may come back as 0.39999999999999997: the same bars, kept as they were.
+    a.setStorm(
+      { durationsH: durationsH.map((h) => (h * 6) / 6), depthsMm: depthsMm.map((d) => d * (1 + 2e-16)) },
+      'Resample',
+    );
+    expect(s()).toBe(FOUR_BARS);
+    // Another start time, or one depth changed, is a change.
+    a.setStorm({ durationsH: [...durationsH], depthsMm: depthsMm.map((d, k) => (k === 0 ? d + 1 : d)) }, 'Edit');
+    expect(store.getState().history.past).toHaveLength(1);
+  });
+
   it('refuses bad input with an InputError and keeps the document as it was', () => {
     const { store, a, s } = make();
     expect(() => a.setBarDepth(1, Number.NaN)).toThrow(InputError);

@@ -64,6 +64,32 @@ class FieldProblem extends Error {
 
 const MINUTES = { toSI: (min: number) => min / 60, fromSI: (h: number) => h * 60, unit: 'min' } as const;
 
+/** "A whole number of steps" to rounding, as the core judges it (core/design/steps.ts). */
+const WHOLE_REL_TOL = 1e-9;
+
+/**
+ * The step against the duration, in the form's own minutes and as typed:
+ * the core checks the same in hours (its unit), which a form in minutes
+ * should not make the user convert ("2.083 h", "0.1167 h").
+ */
+function checkSteps(form: DesignForm, durationMin: number, stepMin: number): void {
+  const duration = `${form.durationMin.trim()} min`;
+  const step = `${form.stepMin.trim()} min`;
+  if (stepMin > durationMin * (1 + WHOLE_REL_TOL)) {
+    throw new FieldProblem(
+      'stepMin',
+      `${FIELD_LABELS.stepMin}: The time step (${step}) is longer than the storm (${duration}).`,
+    );
+  }
+  const n = Math.round(durationMin / stepMin);
+  if (Math.abs(n * stepMin - durationMin) > WHOLE_REL_TOL * durationMin) {
+    throw new FieldProblem(
+      'stepMin',
+      `${FIELD_LABELS.stepMin}: The storm duration (${duration}) is not a whole number of time steps of ${step}; choose a step that divides it.`,
+    );
+  }
+}
+
 const MM_PER_IN = 25.4; // exact (NIST SP 811, 2008)
 const DEPTH = {
   si: { quantity: 'depth', unit: 'mm' },
@@ -190,8 +216,11 @@ const CORE_FIELDS: Readonly<Record<string, FormField>> = {
 export function buildDesignStorm(form: DesignForm): Built {
   const system: UnitSystem = form.depthUnit === 'in' ? 'us' : 'si';
   try {
-    const durationH = num(form, 'durationMin') / 60;
-    const stepH = num(form, 'stepMin') / 60;
+    const durationMin = num(form, 'durationMin');
+    const stepMin = num(form, 'stepMin');
+    checkSteps(form, durationMin, stepMin);
+    const durationH = durationMin / 60;
+    const stepH = stepMin / 60;
     let storm: Storm;
     let description: string;
     if (form.shape === 'uniform') {

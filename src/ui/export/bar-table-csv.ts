@@ -16,7 +16,7 @@ import { massCurveOf } from '../../store/mass-curve';
 import type { Scenario } from '../../scenario/types';
 import { formatClockText, wallClockMs } from '../chart/clock';
 import { formatValue } from '../format';
-import { csvFile, csvNote, csvRow, type CsvCell } from './csv';
+import { csvFile, csvNote, csvRow, noteNumber, type CsvCell } from './csv';
 import { AREA_CHOICES, displayUnit, paramToDisplay, paramUnitText, toDisplay, unitText } from '../units';
 
 /**
@@ -47,18 +47,6 @@ export interface BarTableInput {
   readonly volumeM3: number | null;
   /** The unit the area field shows (the store's `areaUnit`); the system's display unit when left out. */
   readonly areaUnit?: AreaUnit;
-}
-
-/**
- * Numbers in notes: four significant figures like the screen, but never a
- * thousands comma, which a spreadsheet would read as a cell boundary.
- */
-const sig4 = new Intl.NumberFormat('en-US', { maximumSignificantDigits: 4, useGrouping: false });
-const whole = new Intl.NumberFormat('en-US', { maximumFractionDigits: 0, useGrouping: false });
-function noteNumber(x: number): string {
-  if (!Number.isFinite(x)) return '—';
-  if (Object.is(x, -0)) return '0';
-  return Math.abs(x) >= 1000 ? whole.format(x) : sig4.format(x);
 }
 
 /**

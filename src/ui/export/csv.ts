@@ -63,3 +63,16 @@ export function csvNote(text: string): string {
 export function csvFile(lines: readonly string[]): string {
   return `\ufeff${lines.join('\r\n')}\r\n`;
 }
+
+/**
+ * Numbers in notes: four significant figures like the screen, whole numbers
+ * from 1000 like the screen's results, but never a thousands comma, which a
+ * spreadsheet would read as a cell boundary.
+ */
+const sig4 = new Intl.NumberFormat('en-US', { maximumSignificantDigits: 4, useGrouping: false });
+const whole = new Intl.NumberFormat('en-US', { maximumFractionDigits: 0, useGrouping: false });
+export function noteNumber(x: number): string {
+  if (!Number.isFinite(x)) return '—';
+  if (Object.is(x, -0)) return '0';
+  return Math.abs(x) >= 1000 ? whole.format(x) : sig4.format(x);
+}

@@ -10,10 +10,8 @@ import { CAUTION_TEXT } from '../../scenario';
 import type { Scenario } from '../../scenario/types';
 import { formatClockText, wallClockMs } from '../chart/clock';
 import { dischargeToDisplay, dischargeUnitText } from '../observed/discharge';
-import { csvFile, csvNote, csvRow, type CsvCell } from './csv';
-
-const sig4 = new Intl.NumberFormat('en-US', { maximumSignificantDigits: 4, useGrouping: false });
-const note = (x: number): string => (Number.isFinite(x) ? sig4.format(Object.is(x, -0) ? 0 : x) : '—');
+import { displayUnit, toDisplay, unitText } from '../units';
+import { csvFile, csvNote, csvRow, noteNumber as note, type CsvCell } from './csv';
 
 /** "Lag = 0.75 h; peak rate factor = 484": a transform's parameters for notes and the report. */
 export function transformParametersText(transform: Transform, format: (x: number) => string = note): string {
@@ -52,7 +50,8 @@ export function hydrographCsv({ scenario, transform, hydrograph, comparison }: H
     csvNote(`Unit hydrograph: ${TRANSFORMS[transform.kind].label}; ${transformParametersText(transform)}`),
     csvNote(
       `Peak discharge ${note(dischargeToDisplay(hydrograph.peakM3s, units))} ${q} at ${note(hydrograph.timeOfPeakH)} h ` +
-        `after the storm start; direct runoff volume ${note(hydrograph.volumeM3)} m³`,
+        `after the storm start; direct runoff volume ${note(toDisplay('volume', hydrograph.volumeM3, units))} ` +
+        unitText(displayUnit('volume', units)),
     ),
   ];
   if (comparison) {

@@ -147,7 +147,10 @@ export function NumberField({
   const shown = (held: Held): string => {
     if (held === null) return '';
     if (held === 'empty') return placeholder ?? 'empty';
-    return `${formatValue(toDisplay(held))}${valueUnit ? ` ${valueUnit}` : ''}`;
+    const value = formatValue(toDisplay(held));
+    // A unit led by "±" ("± %") puts its sign before the number: "± 10 %".
+    if (valueUnit.startsWith('± ')) return `± ${value} ${valueUnit.slice(2)}`;
+    return `${value}${valueUnit ? ` ${valueUnit}` : ''}`;
   };
 
   /** Puts the session's starting value back in the store; returns whether the store holds it again. */

@@ -52,9 +52,15 @@ describe('the design storm view', () => {
     expect(c).toHaveAttribute('aria-invalid', 'true');
     expect(c).toHaveValue('1.5');
     await retype(user, 'c', '0.75');
+    // The defect: the fields are in minutes, the message was in hours ("The storm duration (2.083 h) is not a
+    // whole number of time steps of 0.1167 h"): it now speaks the fields' minutes, as typed.
     await retype(user, 'Time step (min)', '7');
     expect(screen.getByRole('alert')).toHaveTextContent(
-      /^Time step: The storm duration \(2 h\) is not a whole number of time steps/,
+      'Time step: The storm duration (120 min) is not a whole number of time steps of 7 min; choose a step that divides it.',
+    );
+    await retype(user, 'Time step (min)', '200');
+    expect(screen.getByRole('alert')).toHaveTextContent(
+      'Time step: The time step (200 min) is longer than the storm (120 min).',
     );
     await retype(user, 'Time step (min)', '');
     expect(screen.getByRole('alert')).toHaveTextContent('Time step: Enter a number.');

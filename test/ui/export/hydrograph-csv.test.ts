@@ -37,6 +37,24 @@ describe('the hydrograph CSV', () => {
     );
   });
 
+  it('writes the volume as the screen does: whole from 1000, in the screen’s volume unit', () => {
+    // The defect: 7.157 mm of excess over 3.2 km² = 22,902 m³ on screen was written "22900 m³" (four significant
+    // figures, which the screen keeps only below 1000). 10 mm over 2.3456 km² = 0.010 m × 2.3456e6 m² = 23,456 m³,
+    // written 23456 (no thousands comma in a CSV note), not 23460.
+    const big = runoffHydrograph({ durationsH: [1], excessMm: [10] }, TRANSFORM, 2.3456e6);
+    const si = hydrographCsv({ scenario: SCENARIO, transform: TRANSFORM, hydrograph: big, comparison: null });
+    expect(si).toMatch(/direct runoff volume 23456 m³"/);
+    // In US units, acre-ft as on screen: 23,456 m³ / 1233.48183754752 m³ per acre-ft (43,560 ft² × 0.3048³ m³/ft³,
+    // NIST SP 811) = 19.016… acre-ft, written 19.02.
+    const us = hydrographCsv({
+      scenario: { ...SCENARIO, units: 'us' },
+      transform: TRANSFORM,
+      hydrograph: big,
+      comparison: null,
+    });
+    expect(us).toMatch(/direct runoff volume 19\.02 acre-ft"/);
+  });
+
   it('has a heading with units and one row per sample, the triangle worked by hand', () => {
     const head = lines.findIndex((l) => l.startsWith('"Time'));
     expect(lines[head]).toBe('"Time (h from storm start)","Computed direct runoff (m³/s)"');
