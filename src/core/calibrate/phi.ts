@@ -165,8 +165,8 @@ const MISSED = -1;
  * φ for a storm not yet validated, in one read of the bars: the checks of
  * validateStorm's loop (isCleanBarBelowSums on each bar, summedBarsClean on
  * the sums) ride in the bracket pass, which sums the depths anyway. Returns
- * the storm's depth with φ, or null when a bar is not clean: the caller then
- * validates, and the validation names the bar. The lists must match one to
+ * the storm's depth with φ, or null when a bar is not clean (or the storm is
+ * short): the caller then validates, and the validation names the bar. The lists must match one to
  * one (validateStormLists); a target above the returned rain gives φ = 0, and
  * the caller refuses it. Calibration's own pass (calibrate.ts): validating
  * first read all 10⁶ bars of a long storm once more (1.1 ms of 9).
@@ -176,22 +176,8 @@ export function exactPhiChecked(
   depthsMm: ArrayLike<number>,
   targetMm: number,
 ): { readonly phi: number; readonly rainMm: number } | null {
-  const n = depthsMm.length;
-  if (n < SAMPLE_FROM) {
-    // Short storms: the check is a small share of the work; validate as the
-    // long route's pass would, then select over every bar.
-    let span = 0;
-    let rain = 0;
-    for (let k = 0; k < n; k++) {
-      const p = depthsMm[k] as number;
-      const d = durationsH[k] as number;
-      if (!cleanBar(d, p)) return null;
-      span += d;
-      rain += p;
-    }
-    if (!cleanSums(span, rain)) return null;
-    return { phi: exactPhiBySelection(durationsH, depthsMm, targetMm), rainMm: rain };
-  }
+  // Short storms: validating first costs little; the caller's ordinary road does it.
+  if (depthsMm.length < SAMPLE_FROM) return null;
   const bracket = sampledBracket(durationsH, depthsMm, targetMm);
   const inBracket = phiInBracket(durationsH, depthsMm, targetMm, bracket.lo, bracket.hi);
   if (inBracket === UNCLEAN) return null;
