@@ -9,6 +9,8 @@ import { STORAGE_KEY, type StorageLike } from './store';
 import { SKIP_SAVED_KEY } from './store/crash-keys';
 import { readLargeMarker } from './store/large-marker';
 import type { LargeRead } from './store/large-store';
+
+type OpenScenarioModule = typeof import('./store/open-scenario');
 import { startWorkbench } from './store/start';
 import { App } from './ui/App';
 import { ErrorBoundary } from './ui/layout/ErrorBoundary';
@@ -57,7 +59,7 @@ function takeSkipSaved(): boolean {
   }
 }
 /** Starts the workbench and draws the page; `large` is the large store's record when the saved slot named one. */
-function start(large?: LargeRead): void {
+function start(large?: LargeRead, opening?: OpenScenarioModule): void {
   // The saved scenario, and a share link in the address shown over it unsaved until the user chooses (src/store/link-session.ts).
   const { store, link } = startWorkbench({
     storage,
@@ -102,13 +104,17 @@ function start(large?: LargeRead): void {
 
   const root = document.getElementById('root');
   if (!root) throw new Error('index.html has no #root element');
-  createRoot(root).render(
-    <StrictMode>
-      <ErrorBoundary recovery={recovery} download={downloadSaved}>
-        <App store={store} services={services} updates={updates} />
-      </ErrorBoundary>
-    </StrictMode>,
-  );
+  const draw = (): void =>
+    createRoot(root).render(
+      <StrictMode>
+        <ErrorBoundary recovery={recovery} download={downloadSaved}>
+          <App store={store} services={services} updates={updates} />
+        </ErrorBoundary>
+      </StrictMode>,
+    );
+  // A restored long storm: its check and the results' arrays made ready in tasks of their own before the first draw.
+  if (opening) void opening.prepareLongStorm(store, store.getState().scenario.storm).then(draw, draw);
+  else draw();
 }
 
 // A share link in the address needs the link reader's decompressor, fetched only then (src/scenario/link.ts); a
@@ -116,17 +122,24 @@ function start(large?: LargeRead): void {
 const waits: Promise<unknown>[] = [];
 if (isScenarioLink(window.location.hash)) waits.push(loadLinkReader().catch(() => {}));
 let large: LargeRead | undefined;
+let opening: OpenScenarioModule | undefined;
 const marker = readLargeMarker(readSlot());
-if (marker)
+if (marker) {
+  // The large store is in use: records nothing names are deleted later, at a quiet moment (src/store/large-sweep.ts).
+  void import('./store/large-store').then(
+    (m) => m.sweepSoon(storage),
+    () => undefined,
+  );
   waits.push(
-    import('./store/large-store')
-      // The large store is in use: records nothing names are deleted later, at a quiet moment (src/store/large-sweep.ts).
-      .then((m) => (m.sweepSoon(storage), m.readLarge(marker)))
+    // Read and checked off the page (src/store/open-scenario.ts): 10⁶ bars held the page 0.9 s on it.
+    import('./store/open-scenario')
+      .then((m) => ((opening = m), m.readLargeInSteps(marker)))
       .then(
         (read) => (large = read),
         (error: unknown) =>
           (large = { ok: false, message: `The large store’s code could not be loaded (${String(error)}).` }),
       ),
   );
-if (waits.length > 0) void Promise.all(waits).then(() => start(large));
+}
+if (waits.length > 0) void Promise.all(waits).then(() => start(large, large?.ok ? opening : undefined));
 else start();
