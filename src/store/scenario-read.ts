@@ -61,8 +61,17 @@ async function read(request: ScenarioReadRequest): Promise<ScenarioReadAnswer> {
 export async function answerRead(
   request: ScenarioReadRequest,
 ): Promise<{ readonly answer: ScenarioReadAnswer; readonly transfer: ArrayBuffer[] }> {
-  const answer = await read(request);
-  if (!answer.ok) return { answer, transfer: [] };
-  const transfer: ArrayBuffer[] = [];
-  return { answer: { ...answer, packed: packShared(answer.packed, transfer) }, transfer };
+  try {
+    const answer = await read(request);
+    if (!answer.ok) return { answer, transfer: [] };
+    const transfer: ArrayBuffer[] = [];
+    return { answer: { ...answer, packed: packShared(answer.packed, transfer) }, transfer };
+  } catch (error) {
+    // A safety net only (the readers never throw): the page must never wait for an answer that is not coming.
+    const why = error instanceof Error ? error.message : String(error);
+    return {
+      answer: { job: request.job, ok: false, problems: [problem(`It could not be read (unexpected error: ${why}).`)] },
+      transfer: [],
+    };
+  }
 }

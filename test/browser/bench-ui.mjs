@@ -6,6 +6,9 @@
 // fares there; then opens a 10⁶-bar record in the long-record view and reports
 // the overview's draw (one mark per pixel column) and a new split as the dry
 // spell changes. Figures are printed, never asserted: machines differ.
+// BENCH_UI_ONLY picks one measure alone: import1e6, drag1e6, or the roads by
+// which a 10⁶-bar scenario arrives other than an import, each's longest
+// main-thread task (open1e6, undo1e6, list1e6, restore1e6; roads1e6 for all).
 //
 // The storms are synthetic (a seeded random generator), made for this
 // benchmark; they describe no real place or gauge.

@@ -148,3 +148,24 @@ describe('placing an opened scenario', () => {
     expect(store.getState().history.past).toHaveLength(1);
   });
 });
+
+describe('the reader’s answer', () => {
+  it('is a problem saying why for a file that cannot be read (a rejected or a throwing read)', async () => {
+    const broken = { size: 2 << 20, text: () => Promise.reject(new Error('disk gone')) } as unknown as Blob;
+    const thrown = {
+      size: 2 << 20,
+      text: () => {
+        throw new TypeError('no text here');
+      },
+    } as unknown as Blob;
+    const a = await answerRead({ job: 1, kind: 'file', file: broken });
+    expect(a.answer).toEqual({
+      job: 1,
+      ok: false,
+      problems: [{ path: '', message: 'It could not be read (disk gone).' }],
+    });
+    const b = await answerRead({ job: 2, kind: 'file', file: thrown });
+    expect(b.answer.ok).toBe(false);
+    expect(!b.answer.ok && b.answer.problems[0]?.message).toContain('no text here');
+  });
+});
