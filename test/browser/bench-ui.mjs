@@ -8,7 +8,8 @@
 // spell changes. Figures are printed, never asserted: machines differ.
 // BENCH_UI_ONLY picks one measure alone: import1e6, drag1e6, or the roads by
 // which a 10⁶-bar scenario arrives other than an import, each's longest
-// main-thread task (open1e6, undo1e6, list1e6, restore1e6; roads1e6 for all).
+// main-thread task (open1e6, undo1e6, list1e6, restore1e6; roads1e6 for all),
+// and the largest share link the reader accepts (link-largest).
 //
 // The storms are synthetic (a seeded random generator), made for this
 // benchmark; they describe no real place or gauge.
@@ -16,6 +17,7 @@ import { mkdtemp, rm, writeFile } from 'node:fs/promises';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { launchBrowser, serveDist } from './harness.mjs';
+import { loadSourceModules } from './support.mjs';
 
 const TARGET_P95_MS = 16;
 
@@ -570,6 +572,62 @@ async function scenarioRoads(browser, baseUrl, file, name, roads) {
   return out;
 }
 
+/**
+ * The largest share link the reader accepts: a storm of 1 h dry bars, as many
+ * as fit in the link's 2 MB of JSON (they compress to a few kB), made by the
+ * app's own link writer; then the app opened on it, and its long tasks from
+ * navigation to the shared scenario on screen.
+ */
+async function largestLink(browser, baseUrl, runs) {
+  const {
+    link,
+    schema,
+    format,
+    close: closeSource,
+  } = await loadSourceModules({
+    link: '/src/scenario/link-make.ts',
+    schema: '/src/scenario/schema.ts',
+    format: '/src/scenario/link-format.ts',
+  });
+  let fragment;
+  let bars;
+  try {
+    const base = schema.parseScenario({ ...syntheticScenario(1, 1, 1), name: 'Largest link (invented)' });
+    if (!base.ok) throw new Error('the link benchmark’s scenario does not read');
+    const doc = (n) => ({
+      ...base.scenario,
+      storm: { durationsH: new Array(n).fill(1), depthsMm: new Array(n).fill(0) },
+    });
+    let [lo, hi] = [1, 4_000_000];
+    while (hi - lo > 1) {
+      const mid = Math.floor((lo + hi) / 2);
+      if (JSON.stringify(doc(mid)).length <= format.MAX_LINK_JSON_BYTES) lo = mid;
+      else hi = mid;
+    }
+    bars = lo;
+    fragment = link.encodeScenarioLink(doc(bars));
+  } finally {
+    await closeSource();
+  }
+  const out = [];
+  for (let i = 0; i < runs; i++) {
+    const context = await browser.newContext({ viewport: { width: 1400, height: 900 } });
+    await context.addInitScript(() => {
+      window.__lt = [];
+      new PerformanceObserver((list) => {
+        for (const e of list.getEntries()) window.__lt.push({ at: e.startTime, ms: e.duration });
+      }).observe({ type: 'longtask' });
+    });
+    const page = await context.newPage();
+    page.on('pageerror', (e) => console.error(`page error: ${e.message}`));
+    await page.goto(`${baseUrl}#${fragment.replace(/^#/, '')}`);
+    await settled(page, 'Largest link (invented)');
+    out.push(await tasksSince(page, 0));
+    await context.close();
+  }
+  return { bars, chars: fragment.length, runs: out };
+}
+
 // BENCH_UI_DIST=dir serves another build (a before-and-after comparison in one session).
 const server = await serveDist(process.env.BENCH_UI_DIST);
 const { browser, close } = await launchBrowser();
@@ -581,7 +639,16 @@ try {
   // BENCH_UI_ONLY=open1e6, undo1e6, list1e6 or restore1e6 (or several, comma-separated; roads1e6 for all four):
   // a 10⁶-bar scenario arriving by a road other than an import (5 runs), the longest main-thread task of each.
   const roads = only === 'roads1e6' ? ROADS : only.split(',').filter((r) => ROADS.includes(r));
-  if (roads.length > 0) {
+  if (only === 'link-largest') {
+    // BENCH_UI_ONLY=link-largest: the largest share link the reader accepts, opened (5 runs).
+    const r = await largestLink(browser, server.baseUrl, Number(process.env.BENCH_UI_RUNS ?? 5));
+    const longest = r.runs.map((tasks) => tasks.reduce((m, [, d]) => Math.max(m, d), 0));
+    console.log(
+      `The largest share link the reader accepts (${r.chars} characters, ${r.bars.toLocaleString('en')} dry 1 h bars), navigation → drawn: ` +
+        `longest task ${ms(summarise(longest).p50)} (runs: ${longest.join(', ')} ms)   (target < 100 ms: ${summarise(longest).p50 < 100 ? 'met' : 'NOT met'})`,
+    );
+    for (const tasks of r.runs) console.log(`  long tasks [start, ms]: ${JSON.stringify(tasks)}`);
+  } else if (roads.length > 0) {
     const files = await mkdtemp(join(tmpdir(), 'raincut-bench-'));
     const scenarioFile = join(files, 'synthetic-1e6.json');
     const scenario = syntheticScenario(1_000_000, 1 / 12, 7);
