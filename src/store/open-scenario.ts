@@ -102,6 +102,19 @@ export async function readScenarioFileOffPage(file: Blob): Promise<ScenarioResul
   return { ok: true, scenario: (await unpackInSlices(answer.packed)) as Scenario };
 }
 
+/**
+ * A share link's fragment read and checked off the page (scenario/link-read.ts
+ * `readScenarioLink`, in the worker): the largest link the reader accepts
+ * holds half a million bars in 3 kB, and held the page 519 ms (bench:ui
+ * link-largest). Null when there is no reader: the link session reads it.
+ */
+export async function readLinkOffPage(fragment: string): Promise<ScenarioResult | null> {
+  const answer = await offPage({ kind: 'link', fragment });
+  if (answer === 'none' || answer === 'lost') return null;
+  if (!answer.ok) return { ok: false, problems: answer.problems };
+  return { ok: true, scenario: (await unpackInSlices(answer.packed)) as Scenario };
+}
+
 /** The large store's record a marker names, read through the schema off the page (large-read.ts `readLarge`). Never throws. */
 export async function readLargeInSteps(marker: LargeMarker): Promise<LargeRead> {
   const answer = await offPage({ kind: 'record', marker });

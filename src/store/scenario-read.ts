@@ -1,4 +1,5 @@
 import { scenarioFromFileText } from '../scenario/file';
+import { readScenarioLink } from '../scenario/link-read';
 import { problem } from '../scenario/problems';
 import { copyNumbers, PACK_FROM, readLarge } from './large-read';
 import type { ScenarioReadAnswer, ScenarioReadRequest } from './scenario-read-messages';
@@ -38,6 +39,10 @@ function packShared(value: unknown, buffers: ArrayBuffer[], seen = new Map<objec
 
 async function read(request: ScenarioReadRequest): Promise<ScenarioReadAnswer> {
   const { job } = request;
+  if (request.kind === 'link') {
+    const link = readScenarioLink(request.fragment);
+    return link.ok ? { job, ok: true, packed: link.scenario } : { job, ok: false, problems: link.problems };
+  }
   if (request.kind === 'record') {
     const large = await readLarge(request.marker);
     if (!large.ok) return { job, ok: false, problems: [problem(large.message)] };

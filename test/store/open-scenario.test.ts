@@ -3,12 +3,14 @@ import { createStore, set } from 'idb-keyval';
 import { afterEach, describe, expect, it, vi } from 'vitest';
 import { computeLosses } from '../../src/core';
 import { scenarioToFileText } from '../../src/scenario/file';
+import { encodeScenarioLink } from '../../src/scenario/link-make';
 import type { Scenario } from '../../src/scenario/types';
 import { createWorkbenchStore } from '../../src/store';
+import { startWorkbench } from '../../src/store/start';
 import { LARGE_DB, LARGE_OBJECTS, pack } from '../../src/store/large-store';
 import { answerRead } from '../../src/store/scenario-read';
 import type { ScenarioReadAnswer, ScenarioReadRequest } from '../../src/store/scenario-read-messages';
-import { FOUR_BARS } from '../helpers/scenario-fixtures';
+import { FOUR_BARS, memoryStorage } from '../helpers/scenario-fixtures';
 
 // Opening a whole scenario without holding the page (issue 11's rule, here for the scenario file and the
 // large store's records): read and checked in the scenario reader (a worker; here its work run in-process),
@@ -167,5 +169,34 @@ describe('the reader’s answer', () => {
     const b = await answerRead({ job: 2, kind: 'file', file: thrown });
     expect(b.answer.ok).toBe(false);
     expect(!b.answer.ok && b.answer.problems[0]?.message).toContain('no text here');
+  });
+});
+
+describe('a share link at start-up read off the page', () => {
+  it('comes back through the link reader and the schema, or with the reader’s problems', async () => {
+    const { readLinkOffPage } = await freshOpening();
+    const shared = barsOf(LONG, 'Shared (invented)');
+    const read = await readLinkOffPage(`#${encodeScenarioLink(shared)}`);
+    expect(InProcessReader.last?.sent.map((r) => r.kind)).toEqual(['link']);
+    expect(read).toEqual({ ok: true, scenario: shared });
+    const cut = await readLinkOffPage(`#${encodeScenarioLink(shared).slice(0, -40)}`);
+    expect(cut?.ok).toBe(false);
+    expect(cut?.ok === false && cut.problems.length).toBeGreaterThan(0);
+    expect(await (await freshOpening(null)).readLinkOffPage('#anything')).toBeNull();
+  });
+
+  it('is what the workbench shows, not read again on the page', () => {
+    const inAddress = barsOf(10, 'In the address (invented)');
+    const readOff = barsOf(12, 'Read off the page (invented)');
+    const { store, link } = startWorkbench({
+      storage: memoryStorage(),
+      fragment: `#${encodeScenarioLink(inAddress)}`,
+      fallback: FOUR_BARS,
+      nowIso: '2026-03-01T10:00:00.000Z',
+      clearFragment: () => {},
+      linkRead: { ok: true, scenario: readOff },
+    });
+    expect(store.getState().scenario).toEqual(readOff);
+    expect(link.getState().kind).toBe('shared');
   });
 });
