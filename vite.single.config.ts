@@ -21,6 +21,8 @@ function withoutServiceWorker(options: readonly PluginOption[]): Plugin[] {
 const pageReader = fileURLToPath(new URL('./src/ui/import-kit/start-worker.page.ts', import.meta.url));
 // Nor the large store's writer: its records are put from the page.
 const pageWriter = fileURLToPath(new URL('./src/store/start-large-writer.page.ts', import.meta.url));
+// Nor the scenario reader: scenario files and the large store's records are read on the page.
+const pageScenarioReader = fileURLToPath(new URL('./src/store/start-scenario-reader.page.ts', import.meta.url));
 
 export default defineConfig({
   ...served,
@@ -29,6 +31,7 @@ export default defineConfig({
     alias: [
       { find: /^\.\/start-worker$/, replacement: pageReader },
       { find: /^\.\/start-large-writer$/, replacement: pageWriter },
+      { find: /^\.\/start-scenario-reader$/, replacement: pageScenarioReader },
     ],
   },
   plugins: [...withoutServiceWorker(served.plugins ?? []), ...singleFileBuild()],

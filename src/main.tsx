@@ -9,6 +9,9 @@ import { STORAGE_KEY, type StorageLike } from './store';
 import { SKIP_SAVED_KEY } from './store/crash-keys';
 import { readLargeMarker } from './store/large-marker';
 import type { LargeRead } from './store/large-store';
+import type { ScenarioResult } from './scenario/problems';
+
+type OpenScenarioModule = typeof import('./store/open-scenario');
 import { startWorkbench } from './store/start';
 import { App } from './ui/App';
 import { ErrorBoundary } from './ui/layout/ErrorBoundary';
@@ -57,7 +60,7 @@ function takeSkipSaved(): boolean {
   }
 }
 /** Starts the workbench and draws the page; `large` is the large store's record when the saved slot named one. */
-function start(large?: LargeRead): void {
+function start(large?: LargeRead, opening?: OpenScenarioModule, linkRead?: ScenarioResult): void {
   // The saved scenario, and a share link in the address shown over it unsaved until the user chooses (src/store/link-session.ts).
   const { store, link } = startWorkbench({
     storage,
@@ -68,6 +71,7 @@ function start(large?: LargeRead): void {
       window.history.replaceState(window.history.state, '', window.location.pathname + window.location.search),
     skipSaved: takeSkipSaved(),
     ...(large ? { large } : {}),
+    ...(linkRead ? { linkRead } : {}),
   });
   // Save a change made just before the page closes or reloads.
   window.addEventListener('pagehide', () => link.flush());
@@ -102,31 +106,56 @@ function start(large?: LargeRead): void {
 
   const root = document.getElementById('root');
   if (!root) throw new Error('index.html has no #root element');
-  createRoot(root).render(
-    <StrictMode>
-      <ErrorBoundary recovery={recovery} download={downloadSaved}>
-        <App store={store} services={services} updates={updates} />
-      </ErrorBoundary>
-    </StrictMode>,
-  );
+  const draw = (): void =>
+    createRoot(root).render(
+      <StrictMode>
+        <ErrorBoundary recovery={recovery} download={downloadSaved}>
+          <App store={store} services={services} updates={updates} />
+        </ErrorBoundary>
+      </StrictMode>,
+    );
+  // A restored (or linked) long storm: its check and the results' arrays made ready in tasks of their own before the first draw.
+  if (opening) void opening.prepareLongStorm(store, store.getState().scenario.storm).then(draw, draw);
+  else draw();
 }
 
 // A share link in the address needs the link reader's decompressor, fetched only then (src/scenario/link.ts); a
 // scenario kept in the large store (IndexedDB) is read first, only when the saved slot holds its marker.
 const waits: Promise<unknown>[] = [];
-if (isScenarioLink(window.location.hash)) waits.push(loadLinkReader().catch(() => {}));
 let large: LargeRead | undefined;
-const marker = readLargeMarker(readSlot());
-if (marker)
+let opening: OpenScenarioModule | undefined;
+let linkRead: ScenarioResult | undefined;
+if (isScenarioLink(window.location.hash)) {
+  const fragment = window.location.hash;
+  waits.push(loadLinkReader().catch(() => {}));
+  // Read off the page (src/store/open-scenario.ts): the largest link the reader accepts held the page 0.5 s on it.
   waits.push(
-    import('./store/large-store')
-      // The large store is in use: records nothing names are deleted later, at a quiet moment (src/store/large-sweep.ts).
-      .then((m) => (m.sweepSoon(storage), m.readLarge(marker)))
+    import('./store/open-scenario')
+      .then((m) => ((opening = m), m.readLinkOffPage(fragment)))
+      .then(
+        (read) => (linkRead = read ?? undefined),
+        () => undefined,
+      ),
+  );
+}
+const marker = readLargeMarker(readSlot());
+if (marker) {
+  // The large store is in use: records nothing names are deleted later, at a quiet moment (src/store/large-sweep.ts).
+  void import('./store/large-store').then(
+    (m) => m.sweepSoon(storage),
+    () => undefined,
+  );
+  waits.push(
+    // Read and checked off the page (src/store/open-scenario.ts): 10⁶ bars held the page 0.9 s on it.
+    import('./store/open-scenario')
+      .then((m) => ((opening = m), m.readLargeInSteps(marker)))
       .then(
         (read) => (large = read),
         (error: unknown) =>
           (large = { ok: false, message: `The large store’s code could not be loaded (${String(error)}).` }),
       ),
   );
-if (waits.length > 0) void Promise.all(waits).then(() => start(large));
+}
+if (waits.length > 0)
+  void Promise.all(waits).then(() => start(large, large?.ok || linkRead?.ok ? opening : undefined, linkRead));
 else start();

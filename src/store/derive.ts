@@ -104,6 +104,8 @@ export interface Derived extends HydrographDerived {
   results(s: Scenario): Results;
   /** Readies the results' arrays for a long storm about to enter the store, in small tasks (loss-ring.ts). */
   prepareStorm(storm: Scenario['storm']): Promise<void>;
+  /** True when the storm's results take no new arrays (short, or prepared or in use): see loss-ring.ts `ready`. */
+  stormReady(storm: Scenario['storm']): boolean;
   /**
    * The loss of the part the effective method's table entry computes alone
    * (`lossPart`, the chart's shade), per bar, mm; null when it has none or the
@@ -301,6 +303,7 @@ export function createDerived(): Derived {
     },
     results: resultsOf,
     prepareStorm: (storm) => buffersFor.prepare(storm),
+    stormReady: (storm) => buffersFor.ready(storm),
     lossPartMm: lossPartOf,
     runoffVolumeM3: (s) => {
       const r = resultsOf(s);

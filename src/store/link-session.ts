@@ -1,5 +1,6 @@
 import { createStore, type StoreApi } from 'zustand/vanilla';
 import { decodeScenarioLink, type Problem } from '../scenario';
+import type { ScenarioResult } from '../scenario/problems';
 import type { Scenario } from '../scenario/types';
 import { createHistory } from './history';
 import { persistStore, STORAGE_KEY, type Persistence, type StorageLike } from './persistence';
@@ -71,6 +72,8 @@ export interface LinkSessionOptions {
   readonly canSave: boolean;
   /** The fragment of the address at start-up ('' for none): a link in it is opened at once. */
   readonly fragment: string;
+  /** That fragment already read (off the page: store/open-scenario.ts `readLinkOffPage`); read here when absent. */
+  readonly fragmentRead?: ScenarioResult;
   /** Removes the fragment from the address without reloading (history.replaceState). */
   readonly clearFragment: () => void;
   /** Quiet time before a change is saved, ms. */
@@ -114,10 +117,10 @@ export function createLinkSession(options: LinkSessionOptions): LinkSession {
     store.setState({ history: createHistory(scenario), scenario, undoLabel: null, redoLabel: null });
   };
 
-  const open = (fragment: string): void => {
+  const open = (fragment: string, read?: ScenarioResult): void => {
     const text = fragment.replace(/^#/, '').trim();
     if (text === '') return;
-    const decoded = decodeScenarioLink(text);
+    const decoded = read ?? decodeScenarioLink(text);
     const current = state.getState();
     if (!decoded.ok) {
       if (current.kind === 'shared') {
@@ -260,7 +263,7 @@ export function createLinkSession(options: LinkSessionOptions): LinkSession {
     );
   };
 
-  open(options.fragment);
+  open(options.fragment, options.fragmentRead);
   // Saving runs unless a shared scenario is waiting for the user's choice.
   if (state.getState().kind !== 'shared') startSaving();
 

@@ -34,6 +34,8 @@ export interface LossRing {
    * measured); settles once that pair is ready (or taken).
    */
   prepare(storm: Storm): Promise<void>;
+  /** True when the storm's first result takes no new arrays: a short storm, or the ring's own (taken or prepared). */
+  ready(storm: Storm): boolean;
 }
 
 export function lossRing(later: Later = afterNow): LossRing {
@@ -76,5 +78,6 @@ export function lossRing(later: Later = afterNow): LossRing {
       [owner, ring, turn] = [storm, [], 0];
       warm(storm, n, 0, ready);
     });
-  return Object.assign(take, { prepare });
+  const ready = (storm: Storm): boolean => storm.depthsMm.length < RING_FROM_BARS || storm === owner;
+  return Object.assign(take, { prepare, ready });
 }

@@ -36,8 +36,8 @@ export async function takeTheirs(host: OtherTabChoiceHost): Promise<void> {
   const marker = readLargeMarker(theirs);
   let read: ReadResult;
   if (marker) {
-    const { readLarge } = await import('./large-store');
-    read = await readLarge(marker);
+    const { readLargeInSteps } = await import('./open-scenario');
+    read = await readLargeInSteps(marker);
   } else read = readScenarioJson(theirs);
   if (!read.ok) {
     store.getState().actions.setNotice({
@@ -46,6 +46,8 @@ export async function takeTheirs(host: OtherTabChoiceHost): Promise<void> {
     });
     return;
   }
+  // A long storm's check and arrays made ready in steps before the edit (./open-scenario.ts).
+  if (marker) await (await import('./open-scenario')).prepareLongStorm(store, read.scenario.storm);
   slot.acknowledge();
   host.taken(read.scenario);
   store.getState().actions.replaceScenario(read.scenario, 'Open the other tab’s version');

@@ -1,3 +1,4 @@
+import type { ScenarioResult } from '../scenario/problems';
 import type { Scenario } from '../scenario/types';
 import { readAreaUnits, writeAreaUnits } from './area-units';
 import { createLinkSession, type LinkSession } from './link-session';
@@ -20,6 +21,8 @@ export interface StartOptions {
   readonly skipSaved?: boolean;
   /** The large store's record, read first when the saved slot held its marker (src/store/large-marker.ts). */
   readonly large?: LargeRead;
+  /** The fragment's share link, read first off the page (src/store/open-scenario.ts); read on the page when absent. */
+  readonly linkRead?: ScenarioResult;
 }
 
 export interface Started {
@@ -51,6 +54,7 @@ export function startWorkbench(options: StartOptions): Started {
     storage: options.storage,
     canSave: loaded.canSave,
     fragment: options.fragment,
+    ...(options.linkRead ? { fragmentRead: options.linkRead } : {}),
     clearFragment: options.clearFragment,
     ...(options.persistDelayMs === undefined ? {} : { persistDelayMs: options.persistDelayMs }),
   });

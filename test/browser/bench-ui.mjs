@@ -6,6 +6,10 @@
 // fares there; then opens a 10⁶-bar record in the long-record view and reports
 // the overview's draw (one mark per pixel column) and a new split as the dry
 // spell changes. Figures are printed, never asserted: machines differ.
+// BENCH_UI_ONLY picks one measure alone: import1e6, drag1e6, or the roads by
+// which a 10⁶-bar scenario arrives other than an import, each's longest
+// main-thread task (open1e6, undo1e6, list1e6, restore1e6; roads1e6 for all),
+// and the largest share link the reader accepts (link-largest).
 //
 // The storms are synthetic (a seeded random generator), made for this
 // benchmark; they describe no real place or gauge.
@@ -13,6 +17,7 @@ import { mkdtemp, rm, writeFile } from 'node:fs/promises';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { launchBrowser, serveDist } from './harness.mjs';
+import { loadSourceModules } from './support.mjs';
 
 const TARGET_P95_MS = 16;
 
@@ -464,14 +469,214 @@ async function longRecord(browser, baseUrl, file, rounds) {
   return { dialogMs, useMs, tasks, marks, redraw: summarise(redraw), split: summarise(split), events };
 }
 
+/** The long tasks since `from` (performance.now() on the page), [start ms from `from`, duration ms]. */
+async function tasksSince(page, from) {
+  return page.evaluate(
+    (f) => window.__lt.filter((t) => t.at + t.ms > f).map((t) => [Math.round(t.at - f), Math.round(t.ms)]),
+    from,
+  );
+}
+
+/** Waits until the scenario name field reads `name`, the rain layer is drawn, and two frames and a task have passed. */
+async function settled(page, name) {
+  await page.waitForFunction((n) => document.querySelector('#scenario-name')?.value === n, name, {
+    timeout: 300_000,
+    polling: 50,
+  });
+  await page.locator('[data-layer="rain"]').waitFor({ state: 'attached' });
+  // The chart draws a long storm in steps (src/ui/chart/staged-frame.ts): let them land.
+  await page.waitForTimeout(1500);
+}
+
+/**
+ * The roads by which a 10⁶-bar scenario arrives other than an import (this
+ * task's `BENCH_UI_ONLY` names): a scenario file opened (`open1e6`); Undo and
+ * Redo across it (`undo1e6`); the saved list's large entry opened
+ * (`list1e6`); the autosaved large scenario restored at start-up
+ * (`restore1e6`). Each road's figure is its longest main-thread task, from
+ * the user's act to the scenario drawn (input waits at most that long).
+ */
+async function scenarioRoads(browser, baseUrl, file, name, roads) {
+  const context = await browser.newContext({ viewport: { width: 1400, height: 900 } });
+  // Installed before the page's own scripts, so a reload's start-up is watched too.
+  await context.addInitScript(() => {
+    window.__lt = [];
+    new PerformanceObserver((list) => {
+      for (const e of list.getEntries()) window.__lt.push({ at: e.startTime, ms: e.duration });
+    }).observe({ type: 'longtask' });
+  });
+  const page = await context.newPage();
+  page.on('pageerror', (e) => console.error(`page error: ${e.message}`));
+  await page.goto(baseUrl);
+  await page.locator('[data-layer="loss"]').waitFor({ state: 'attached' });
+  const before = await page.getByLabel('Scenario name').inputValue();
+  const input = await page.getByLabel('Scenario file to open').elementHandle();
+  const out = {};
+  const now = () => page.evaluate(() => performance.now());
+  let t = await now();
+  await input.setInputFiles(file);
+  await settled(page, name);
+  out.open = await tasksSince(page, t);
+  // The autosave (large store) is done before the next act, so its work is no part of that act's figure.
+  const saved = () =>
+    page.waitForFunction(
+      () => localStorage.getItem('raincut.scenario')?.startsWith('{"$format":"raincut-large-store"'),
+      null,
+      {
+        timeout: 300_000,
+      },
+    );
+  await saved();
+  await page.waitForTimeout(500);
+  if (roads.includes('undo1e6')) {
+    out.undo = [];
+    out.redo = [];
+    for (let k = 0; k < 2; k++) {
+      t = await now();
+      await page.getByRole('group', { name: 'History' }).getByRole('button', { name: 'Undo' }).click();
+      await settled(page, before);
+      out.undo.push(await tasksSince(page, t));
+      t = await now();
+      await page.getByRole('group', { name: 'History' }).getByRole('button', { name: 'Redo' }).click();
+      await settled(page, name);
+      out.redo.push(await tasksSince(page, t));
+    }
+    await saved();
+  }
+  if (roads.includes('list1e6')) {
+    await page.getByRole('button', { name: 'Saved scenarios' }).click();
+    const panel = page.getByRole('region', { name: 'Saved scenarios' });
+    await panel.getByRole('button', { name: 'Save current scenario to list' }).click();
+    await panel.getByRole('status').getByText('Saved “', { exact: false }).waitFor({ timeout: 300_000 });
+    // Back to the scenario before it (the list keeps the large one), then open the list's entry.
+    await page.getByRole('group', { name: 'History' }).getByRole('button', { name: 'Undo' }).click();
+    await settled(page, before);
+    await page.waitForTimeout(1500);
+    t = await now();
+    await panel.getByRole('button', { name: `Open ${name}` }).click();
+    await settled(page, name);
+    out.list = await tasksSince(page, t);
+    await page.waitForFunction(
+      () => localStorage.getItem('raincut.scenario')?.startsWith('{"$format":"raincut-large-store"'),
+      null,
+      { timeout: 300_000 },
+    );
+    await page.waitForTimeout(1500);
+  }
+  if (roads.includes('restore1e6')) {
+    await page.reload();
+    await settled(page, name);
+    out.restore = await tasksSince(page, 0);
+  }
+  await context.close();
+  return out;
+}
+
+/**
+ * The largest share link the reader accepts: a storm of 1 h dry bars, as many
+ * as fit in the link's 2 MB of JSON (they compress to a few kB), made by the
+ * app's own link writer; then the app opened on it, and its long tasks from
+ * navigation to the shared scenario on screen.
+ */
+async function largestLink(browser, baseUrl, runs) {
+  const {
+    link,
+    schema,
+    format,
+    close: closeSource,
+  } = await loadSourceModules({
+    link: '/src/scenario/link-make.ts',
+    schema: '/src/scenario/schema.ts',
+    format: '/src/scenario/link-format.ts',
+  });
+  let fragment;
+  let bars;
+  try {
+    const base = schema.parseScenario({ ...syntheticScenario(1, 1, 1), name: 'Largest link (invented)' });
+    if (!base.ok) throw new Error('the link benchmark’s scenario does not read');
+    const doc = (n) => ({
+      ...base.scenario,
+      storm: { durationsH: new Array(n).fill(1), depthsMm: new Array(n).fill(0) },
+    });
+    let [lo, hi] = [1, 4_000_000];
+    while (hi - lo > 1) {
+      const mid = Math.floor((lo + hi) / 2);
+      if (JSON.stringify(doc(mid)).length <= format.MAX_LINK_JSON_BYTES) lo = mid;
+      else hi = mid;
+    }
+    bars = lo;
+    fragment = link.encodeScenarioLink(doc(bars));
+  } finally {
+    await closeSource();
+  }
+  const out = [];
+  for (let i = 0; i < runs; i++) {
+    const context = await browser.newContext({ viewport: { width: 1400, height: 900 } });
+    await context.addInitScript(() => {
+      window.__lt = [];
+      new PerformanceObserver((list) => {
+        for (const e of list.getEntries()) window.__lt.push({ at: e.startTime, ms: e.duration });
+      }).observe({ type: 'longtask' });
+    });
+    const page = await context.newPage();
+    page.on('pageerror', (e) => console.error(`page error: ${e.message}`));
+    await page.goto(`${baseUrl}#${fragment.replace(/^#/, '')}`);
+    await settled(page, 'Largest link (invented)');
+    out.push(await tasksSince(page, 0));
+    await context.close();
+  }
+  return { bars, chars: fragment.length, runs: out };
+}
+
 // BENCH_UI_DIST=dir serves another build (a before-and-after comparison in one session).
 const server = await serveDist(process.env.BENCH_UI_DIST);
 const { browser, close } = await launchBrowser();
 try {
   console.log(`chromium ${browser.version()}, viewport 1400×900\n`);
 
-  // BENCH_UI_ONLY=import1e6 runs issue 11's workbench import alone (5 runs): file → bars, and the page's long tasks.
-  if (process.env.BENCH_UI_ONLY === 'import1e6') {
+  const ROADS = ['open1e6', 'undo1e6', 'list1e6', 'restore1e6'];
+  const only = process.env.BENCH_UI_ONLY ?? '';
+  // BENCH_UI_ONLY=open1e6, undo1e6, list1e6 or restore1e6 (or several, comma-separated; roads1e6 for all four):
+  // a 10⁶-bar scenario arriving by a road other than an import (5 runs), the longest main-thread task of each.
+  const roads = only === 'roads1e6' ? ROADS : only.split(',').filter((r) => ROADS.includes(r));
+  if (only === 'link-largest') {
+    // BENCH_UI_ONLY=link-largest: the largest share link the reader accepts, opened (5 runs).
+    const r = await largestLink(browser, server.baseUrl, Number(process.env.BENCH_UI_RUNS ?? 5));
+    const longest = r.runs.map((tasks) => tasks.reduce((m, [, d]) => Math.max(m, d), 0));
+    console.log(
+      `The largest share link the reader accepts (${r.chars} characters, ${r.bars.toLocaleString('en')} dry 1 h bars), navigation → drawn: ` +
+        `longest task ${ms(summarise(longest).p50)} (runs: ${longest.join(', ')} ms)   (target < 100 ms: ${summarise(longest).p50 < 100 ? 'met' : 'NOT met'})`,
+    );
+    for (const tasks of r.runs) console.log(`  long tasks [start, ms]: ${JSON.stringify(tasks)}`);
+  } else if (roads.length > 0) {
+    const files = await mkdtemp(join(tmpdir(), 'raincut-bench-'));
+    const scenarioFile = join(files, 'synthetic-1e6.json');
+    const scenario = syntheticScenario(1_000_000, 1 / 12, 7);
+    await writeFile(scenarioFile, JSON.stringify({ $format: 'raincut-scenario', ...scenario }));
+    const runs = [];
+    for (let i = 0; i < Number(process.env.BENCH_UI_RUNS ?? 5); i++)
+      runs.push(await scenarioRoads(browser, server.baseUrl, scenarioFile, scenario.name, roads));
+    await rm(files, { recursive: true, force: true });
+    const longest = (tasks) => tasks.reduce((m, [, d]) => Math.max(m, d), 0);
+    const line = (label, per) => {
+      const xs = runs.map(per);
+      console.log(
+        `  ${label}: longest task ${ms(summarise(xs).p50)} (runs: ${xs.join(', ')} ms)   (target < 100 ms: ${summarise(xs).p50 < 100 ? 'met' : 'NOT met'})`,
+      );
+    };
+    console.log(`A 10⁶-bar scenario (synthetic, ${runs.length} runs, medians):`);
+    if (roads.includes('open1e6')) line('opened from a scenario file, choice → drawn', (r) => longest(r.open));
+    if (roads.includes('undo1e6')) {
+      line('Undo back from it, click → drawn', (r) => Math.max(...r.undo.map(longest)));
+      line('Redo to it, click → drawn', (r) => Math.max(...r.redo.map(longest)));
+    }
+    if (roads.includes('list1e6'))
+      line('opened from the saved list (large store), click → drawn', (r) => longest(r.list));
+    if (roads.includes('restore1e6'))
+      line('restored at start-up from the large store, navigation → drawn', (r) => longest(r.restore));
+    for (const r of runs) console.log(`  long tasks [start, ms]: ${JSON.stringify(r)}`);
+    // BENCH_UI_ONLY=import1e6 runs issue 11's workbench import alone (5 runs): file → bars, and the page's long tasks.
+  } else if (process.env.BENCH_UI_ONLY === 'import1e6') {
     const files = await mkdtemp(join(tmpdir(), 'raincut-bench-'));
     const timedFile = join(files, 'gauge-5min-1e6.csv');
     await writeFile(timedFile, timedGaugeText(1_000_000, 5));

@@ -4,7 +4,7 @@ import type { DeletedEntry, LibraryListing, LibraryResult, Problem, SavedEntry }
 import { scenarioFileName } from '../../scenario/file';
 import { createScenarioLibrary, entryName } from '../../scenario/library';
 import { problem } from '../../scenario/problems';
-import { useActions, useWorkbenchStore } from '../../store';
+import { useWorkbenchStore } from '../../store';
 import { entryFileText, largeWhere, LIST_LARGE_TEXT, openEntry, saveToList } from '../../store/large-library';
 import { listSetAside, type SetAsideCopy } from '../../store/set-aside';
 import { ListProblems } from './ListProblems';
@@ -84,7 +84,6 @@ export function LibraryPanel({ id }: { id: string }) {
   // The saved list lives in this panel's code, loaded when the panel first opens (not with the first screen).
   const library = useMemo(() => (storage ? createScenarioLibrary(storage, { now }) : null), [storage, now]);
   const store = useWorkbenchStore();
-  const actions = useActions();
   const [listing, setListing] = useState<LibraryListing>(() => library?.list() ?? EMPTY);
   const readAside = useCallback((): SetAsideCopy[] => (storage ? listSetAside(storage).copies : []), [storage]);
   const [aside, setAside] = useState<SetAsideCopy[]>(readAside);
@@ -158,14 +157,33 @@ export function LibraryPanel({ id }: { id: string }) {
       setStatus({ kind: 'done', text: `Opening ${quoted(name)} from this browser’s larger database…` });
     }
     void openEntry(entry).then((read) => {
-      setBusy(false);
       if (!read.ok) {
+        setBusy(false);
         setStatus({ kind: 'problem', text: 'That was not opened.', problems: [problem(read.message)] });
         return;
       }
-      actions.replaceScenario(read.scenario, `Open ${quoted(name)} from the saved list`);
-      setCurrentId(entry.id);
-      setStatus({ kind: 'done', text: `Opened ${quoted(name)}. Undo brings back the scenario you had before.` });
+      const label = `Open ${quoted(name)} from the saved list`;
+      const opened = (): void => {
+        setBusy(false);
+        setCurrentId(entry.id);
+        setStatus({ kind: 'done', text: `Opened ${quoted(name)}. Undo brings back the scenario you had before.` });
+      };
+      if (!('large' in entry)) {
+        store.getState().actions.replaceScenario(read.scenario, label);
+        opened();
+        return;
+      }
+      // A large entry's long storm: its check and arrays made ready in steps before the one edit (issue 11).
+      void import('../../store/open-scenario')
+        .then((m) => m.placeScenario(store, read.scenario, label))
+        .then(opened, (error: unknown) => {
+          setBusy(false);
+          setStatus({
+            kind: 'problem',
+            text: 'That was not opened.',
+            problems: [problem(`Its code could not be loaded (${String(error)}).`)],
+          });
+        });
     });
   };
 

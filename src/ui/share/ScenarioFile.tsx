@@ -1,5 +1,5 @@
 import type { ReactNode } from 'react';
-import { useActions, useWorkbenchStore } from '../../store';
+import { useWorkbenchStore } from '../../store';
 // Straight from the modules, not the import kit's index, so the import dialogs' code stays out of the first screen.
 import { OpenFileButton } from '../import-kit/OpenFileButton';
 import { readAsText } from '../import-kit/read-file';
@@ -11,6 +11,8 @@ const megabytes = (bytes: number): string => `${formatValue(bytes / (1024 * 1024
 
 // The file writer and reader load on the first click: they are not part of the first screen.
 const fileCode = () => import('../../scenario/file');
+// A long file is read off the page, and a long storm made ready in steps before the edit (issue 11).
+const openCode = () => import('../../store/open-scenario');
 
 /**
  * "Save as file" writes the scenario as a readable .json file (with the
@@ -20,7 +22,6 @@ const fileCode = () => import('../../scenario/file');
  */
 export function ScenarioFile() {
   const store = useWorkbenchStore();
-  const actions = useActions();
   const { saveFile } = useServices();
   const show = useBarMessage();
 
@@ -49,19 +50,31 @@ export function ScenarioFile() {
       );
       return;
     }
-    let text: string;
-    try {
-      text = await readAsText(file);
-    } catch (error) {
-      refuse(<p>It could not be read ({error instanceof Error ? error.message : String(error)}).</p>);
-      return;
+    const opening = await openCode();
+    // A long file takes a second or more to read and check: said, so the wait is not taken for nothing happening.
+    if (file.size >= opening.READ_OFF_PAGE_FROM_BYTES) {
+      show({
+        tone: 'done',
+        title: `Opening ${name} (${megabytes(file.size)})…`,
+        body: <p>The scenario on screen stays as it is until the file has been read and checked.</p>,
+      });
     }
-    const read = scenarioFromFileText(text);
+    let read = await opening.readScenarioFileOffPage(file);
+    if (read === null) {
+      let text: string;
+      try {
+        text = await readAsText(file);
+      } catch (error) {
+        refuse(<p>It could not be read ({error instanceof Error ? error.message : String(error)}).</p>);
+        return;
+      }
+      read = scenarioFromFileText(text);
+    }
     if (!read.ok) {
       refuse(<ProblemList problems={read.problems} label={`Problems in ${name}`} />);
       return;
     }
-    actions.replaceScenario(read.scenario, `Open ${name}`);
+    await opening.placeScenario(store, read.scenario, `Open ${name}`);
     show({
       tone: 'done',
       title: `Opened “${read.scenario.name}” from ${name}.`,
