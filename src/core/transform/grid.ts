@@ -12,6 +12,27 @@ function snap(positionSteps: number): number {
   return Math.abs(positionSteps - nearest) <= SNAP_STEPS ? nearest : positionSteps;
 }
 
+/**
+ * The bars' end times, h, summed with Neumaier's compensation (Neumaier 1974,
+ * the improved Kahan summation): each edge is the sum of the durations before
+ * it to within an ulp or so, whatever their number and order. Plain running
+ * sums drift (some 1e-7 steps over 10⁶ bars), and where an edge lies near
+ * SNAP_STEPS from a step boundary, the drift decided on which side it fell:
+ * the same bars after a dry lead of whole steps then gave a hydrograph one
+ * sample longer, and a different tail (found by the time-shift property).
+ */
+export function totalHours(durationsH: ArrayLike<number>): number {
+  let sum = 0;
+  let compensation = 0;
+  for (let k = 0; k < durationsH.length; k++) {
+    const d = durationsH[k] as number;
+    const t = sum + d;
+    compensation += Math.abs(sum) >= Math.abs(d) ? sum - t + d : d - t + sum;
+    sum = t;
+  }
+  return sum + compensation;
+}
+
 /** Number of output steps that cover a storm of `totalH` hours. */
 export function stepsCovering(totalH: number, stepH: number): number {
   return Math.ceil(snap(totalH / stepH));
@@ -36,11 +57,16 @@ export function excessOnSteps(
 ): Float64Array {
   const cells = out.subarray(0, steps);
   cells.fill(0);
+  // The bar's end, h, compensated as in totalHours (the last edge is that total).
   let edgeH = 0;
+  let compensation = 0;
   let a = 0; // bar start, in steps
   for (let k = 0; k < durationsH.length; k++) {
-    edgeH += durationsH[k] as number;
-    const b = snap(edgeH / stepH);
+    const d = durationsH[k] as number;
+    const t = edgeH + d;
+    compensation += Math.abs(edgeH) >= Math.abs(d) ? edgeH - t + d : d - t + edgeH;
+    edgeH = t;
+    const b = snap((edgeH + compensation) / stepH);
     const e = excessMm[k] as number;
     if (e !== 0) spread(cells, a, b, e);
     a = b;
