@@ -14,6 +14,7 @@ import {
 import { validateStormDepthMm } from '../../../src/core/storm';
 import { exactPhiByBuckets, exactPhiBySelection, exactPhiInBracket } from '../../../src/core/calibrate/phi';
 import { stormArb } from '../../helpers/arbitraries';
+import { seeded } from '../../helpers/fuzz';
 import { expectClose } from '../../helpers/tolerance';
 
 /** The answer the slow way: bisect R(φ) − target on [0, i_max] to the last bit. */
@@ -197,11 +198,7 @@ describe('calibrate checks the bars in the exact φ pass itself', () => {
     }
   };
   const gaugeLike = (n: number, seed: number): { durationsH: number[]; depthsMm: number[] } => {
-    let s = seed >>> 0 || 1;
-    const rand = (): number => {
-      s = (Math.imul(s, 1664525) + 1013904223) >>> 0;
-      return s / 4294967296;
-    };
+    const rand = seeded(seed);
     const durationsH: number[] = [];
     const depthsMm: number[] = [];
     for (let k = 0; k < n; k++) {
