@@ -17,7 +17,7 @@ import {
 import { readPlainColumns } from './plain-columns';
 import type { TextRow } from './table-text';
 import { formatTimeOfDay, isoAt } from './time-values';
-import { spreadsheetDaysNote } from './spreadsheet-days';
+import { spreadsheetDaysFor } from './spreadsheet-days';
 
 /**
  * A streamflow record from pasted text: a time and a discharge per line (or
@@ -175,17 +175,8 @@ function successSummary(
   if (lines.times === null)
     notes.push(`no times, so samples are ${formatDuration(s.stepMinutesIfNoTime / 60, format)} apart as set`);
   const first = lines.firstRow;
-  if ((s.timeKind === 'elapsed-min' || s.timeKind === 'elapsed-h') && s.timeColumn !== null && first && n > 1) {
-    const days = spreadsheetDaysNote({
-      kind: s.timeKind,
-      firstCell: first.cells[s.timeColumn - 1] ?? '',
-      firstLine: first.line,
-      stepH: (timesH[1] as number) - (timesH[0] as number),
-      decimal: s.decimal,
-      grouping: s.grouping,
-    });
-    if (days !== null) notes.push(days);
-  }
+  const days = spreadsheetDaysFor(s, first, timesH);
+  if (days !== null) notes.push(days);
   if (s.skipLines > 0) notes.push(`${plural(s.skipLines, 'line', undefined, format)} skipped at the top`);
   const blank = lines.blankLinesSkipped;
   if (blank > 0) notes.push(`${plural(blank, 'blank line', undefined, format)} inside the data skipped`);

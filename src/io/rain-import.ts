@@ -18,7 +18,7 @@ import {
 import { plainArray, readPlainColumns, type ColumnTimes } from './plain-columns';
 import type { TextRow } from './table-text';
 import { formatTimeOfDay, isoAt, parseClock, type TimeLine } from './time-values';
-import { spreadsheetDaysNote } from './spreadsheet-days';
+import { spreadsheetDaysFor } from './spreadsheet-days';
 
 /**
  * Rainfall from pasted text: one column of values, or a time and a value.
@@ -535,22 +535,8 @@ function successSummary(
     if (s.valueKind !== 'cumulative') notes.push(`time stamps mark the ${s.timeMarks} of each bar`);
     const first = series.rowAt(0);
     const hours = series.times.hours;
-    if (
-      (s.timeKind === 'elapsed-min' || s.timeKind === 'elapsed-h') &&
-      s.timeColumn !== null &&
-      first &&
-      hours.length > 1
-    ) {
-      const days = spreadsheetDaysNote({
-        kind: s.timeKind,
-        firstCell: first.cells[s.timeColumn - 1] ?? '',
-        firstLine: first.line,
-        stepH: (hours[1] as number) - (hours[0] as number),
-        decimal: s.decimal,
-        grouping: s.grouping,
-      });
-      if (days !== null) notes.push(days);
-    }
+    const days = spreadsheetDaysFor(s, first, hours);
+    if (days !== null) notes.push(days);
   } else {
     const along = s.valuesAlong === 'line' ? 'values read along each line; ' : '';
     notes.push(`${along}no times, so bars are ${formatDuration(s.stepMinutesIfNoTime / 60, format)} apart as set`);

@@ -38,3 +38,34 @@ export function spreadsheetDaysNote(t: ElapsedTimes): string | null {
   const unit = t.kind === 'elapsed-min' ? 'minutes' : 'hours';
   return `the times are plain numbers (“${t.firstCell.trim()}” on line ${t.firstLine}), read as elapsed ${unit}; if they are a spreadsheet’s dates (that one is ${date} in the 1900 date system), format that column as dates in the spreadsheet and copy again`;
 }
+
+/** What an importer's settings say of its times, as spreadsheetDaysFor reads them. */
+export interface TimeSettings {
+  readonly timeKind: string;
+  readonly timeColumn: number | null;
+  readonly decimal: DecimalMark;
+  readonly grouping?: Grouping | undefined;
+}
+
+/**
+ * spreadsheetDaysNote for an import (rainfall or streamflow): its settings,
+ * its first row as read (cells and line) and its times in hours; null when
+ * the times are not elapsed numbers in a column, or there is only one.
+ */
+export function spreadsheetDaysFor(
+  s: TimeSettings,
+  first: { readonly cells: readonly string[]; readonly line: number } | null | undefined,
+  timesH: ArrayLike<number>,
+): string | null {
+  const kind = s.timeKind;
+  if ((kind !== 'elapsed-min' && kind !== 'elapsed-h') || s.timeColumn === null || !first || timesH.length < 2)
+    return null;
+  return spreadsheetDaysNote({
+    kind,
+    firstCell: first.cells[s.timeColumn - 1] ?? '',
+    firstLine: first.line,
+    stepH: (timesH[1] as number) - (timesH[0] as number),
+    decimal: s.decimal,
+    grouping: s.grouping,
+  });
+}
