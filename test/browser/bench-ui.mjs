@@ -489,6 +489,22 @@ async function settled(page, name) {
 }
 
 /**
+ * A fresh context whose pages record their long tasks in window.__lt from
+ * their first script on (installed before the page's own scripts, so a
+ * reload's or a navigation's start-up is watched too).
+ */
+async function watchedContext(browser) {
+  const context = await browser.newContext({ viewport: { width: 1400, height: 900 } });
+  await context.addInitScript(() => {
+    window.__lt = [];
+    new PerformanceObserver((list) => {
+      for (const e of list.getEntries()) window.__lt.push({ at: e.startTime, ms: e.duration });
+    }).observe({ type: 'longtask' });
+  });
+  return context;
+}
+
+/**
  * The roads by which a 10⁶-bar scenario arrives other than an import (this
  * task's `BENCH_UI_ONLY` names): a scenario file opened (`open1e6`); Undo and
  * Redo across it (`undo1e6`); the saved list's large entry opened
@@ -497,14 +513,7 @@ async function settled(page, name) {
  * the user's act to the scenario drawn (input waits at most that long).
  */
 async function scenarioRoads(browser, baseUrl, file, name, roads) {
-  const context = await browser.newContext({ viewport: { width: 1400, height: 900 } });
-  // Installed before the page's own scripts, so a reload's start-up is watched too.
-  await context.addInitScript(() => {
-    window.__lt = [];
-    new PerformanceObserver((list) => {
-      for (const e of list.getEntries()) window.__lt.push({ at: e.startTime, ms: e.duration });
-    }).observe({ type: 'longtask' });
-  });
+  const context = await watchedContext(browser);
   const page = await context.newPage();
   page.on('pageerror', (e) => console.error(`page error: ${e.message}`));
   await page.goto(baseUrl);
@@ -611,13 +620,7 @@ async function largestLink(browser, baseUrl, runs) {
   }
   const out = [];
   for (let i = 0; i < runs; i++) {
-    const context = await browser.newContext({ viewport: { width: 1400, height: 900 } });
-    await context.addInitScript(() => {
-      window.__lt = [];
-      new PerformanceObserver((list) => {
-        for (const e of list.getEntries()) window.__lt.push({ at: e.startTime, ms: e.duration });
-      }).observe({ type: 'longtask' });
-    });
+    const context = await watchedContext(browser);
     const page = await context.newPage();
     page.on('pageerror', (e) => console.error(`page error: ${e.message}`));
     await page.goto(`${baseUrl}#${fragment.replace(/^#/, '')}`);
