@@ -39,6 +39,30 @@ const WARM_ROUNDS = 3;
 const PASS_TARGET = 1.5;
 const PHI_TARGET = 0.5;
 
+/** Two fresh Float64Arrays holding the durations and the depths, in blocks as the loss passes run. */
+function copyFloor(storm: Storm): [Float64Array, Float64Array] {
+  const n = storm.depthsMm.length;
+  const first = new Float64Array(n);
+  const second = new Float64Array(n);
+  for (let start = 0; start < n; start += 4096)
+    copyBlock(storm.durationsH, storm.depthsMm, first, second, start, Math.min(n, start + 4096));
+  return [first, second];
+}
+
+function copyBlock(
+  a: ArrayLike<number>,
+  b: ArrayLike<number>,
+  first: Float64Array,
+  second: Float64Array,
+  start: number,
+  end: number,
+): void {
+  for (let k = start; k < end; k++) {
+    first[k] = a[k] as number;
+    second[k] = b[k] as number;
+  }
+}
+
 interface Case {
   readonly name: string;
   /** The peer operation of the block: its repetition opens each round. */
@@ -79,6 +103,16 @@ test('the public path against the numpy peer, interleaved', async () => {
       block: 'pass',
       target: PASS_TARGET,
       run: () => computeLosses(typed, method),
+    },
+    // The least any JavaScript public path does on these bars: two fresh
+    // result arrays, each bar read from both lists and written once (no check,
+    // no arithmetic, no sums). The headline's distance from this row is what
+    // the loss pass itself costs; this row's ratio is the floor on this
+    // machine, whatever the pass does.
+    {
+      name: '  floor: two fresh arrays, bars copied',
+      block: 'pass',
+      run: () => copyFloor(plain),
     },
     {
       name: 'calibrate φ (exact), plain arrays',
