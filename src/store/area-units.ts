@@ -1,5 +1,5 @@
 import { SYSTEM_AREA_UNITS, type AreaUnit, type UnitSystem } from '../core';
-import type { StorageLike } from './persistence';
+import type { StorageLike } from '../scenario/stored-slot';
 
 /**
  * The unit the catchment area is typed and shown in, per unit system: a

@@ -1,4 +1,4 @@
-import type { CrashReport } from './crash';
+import type { CrashReport } from './crash-report';
 import { OLDER_TEXT, SAVED_TEXT } from './crash-text';
 import type { LargeMarker } from './large-marker';
 import { readLargeText } from './large-store';
