@@ -123,23 +123,26 @@ function start(large?: LargeRead, opening?: OpenScenarioModule, linkRead?: Scena
   else draw();
 }
 
-// A share link in the address needs the link reader's decompressor, fetched only then (src/scenario/link.ts); a
-// scenario kept in the large store (IndexedDB) is read first, only when the saved slot holds its marker.
+// A share link in the address is read first, by the reader off the page or else by the page's own, fetched only
+// then (src/scenario/link.ts); a scenario kept in the large store (IndexedDB) is read first, only when the saved
+// slot holds its marker.
 const waits: Promise<unknown>[] = [];
 let large: LargeRead | undefined;
 let opening: OpenScenarioModule | undefined;
 let linkRead: ScenarioResult | undefined;
 if (isScenarioLink(window.location.hash)) {
   const fragment = window.location.hash;
-  waits.push(loadLinkReader().catch(() => {}));
   // Read off the page (src/store/open-scenario.ts): the largest link the reader accepts held the page 0.5 s on it.
+  // The page's own reader is fetched only where there is none off the page: loading its decompressor was a task of
+  // 50–120 ms of its own at start-up (measured on a loaded machine, bench:ui link-largest).
   waits.push(
     import('./store/open-scenario')
       .then((m) => ((opening = m), m.readLinkOffPage(fragment)))
       .then(
         (read) => (linkRead = read ?? undefined),
         () => undefined,
-      ),
+      )
+      .then(() => (linkRead ? undefined : loadLinkReader().catch(() => {}))),
   );
 }
 const marker = readLargeMarker(readSlot());

@@ -167,6 +167,8 @@ export const tests = [
         await close();
       }
       const page = await newPage();
+      const fetched = [];
+      page.on('request', (request) => fetched.push(new URL(request.url()).pathname));
       await page.goto(`${baseUrl}#${fragment.replace(/^#/, '')}`);
       await page.getByRole('region', { name: 'Shared scenario: “Long link (invented)”' }).waitFor({ timeout: 60_000 });
       // Until the chart's frame is ready it says so; never bars of another storm, nor a blank chart.
@@ -198,6 +200,12 @@ export const tests = [
         'the name did not travel',
       );
       check((await stored(page)) === null, 'the shared scenario was saved before it was kept');
+      // Read by the worker: the page's own reader (its decompressor) is not fetched, nor evaluated on the page.
+      check(
+        fetched.some((path) => /scenario-read\.worker/.test(path)),
+        `the link was not read off the page: ${fetched.join(', ')}`,
+      );
+      check(!fetched.some((path) => /\/link-read-/.test(path)), `the page fetched its own link reader: ${fetched}`);
     },
   },
   {
