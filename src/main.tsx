@@ -1,5 +1,5 @@
 /// <reference types="vite-plugin-pwa/vanillajs" />
-import { StrictMode } from 'react';
+import { StrictMode, startTransition } from 'react';
 import { registerSW } from 'virtual:pwa-register';
 import { createUpdateChannel } from './offline/updates';
 import { createRoot } from 'react-dom/client';
@@ -40,8 +40,11 @@ function tabStorage(): Storage | null {
 }
 
 const storage = browserStorage();
-// The reader's number format (a browser preference, never part of the scenario).
-startNumberFormat({ storage, language: navigator.language });
+/**
+ * The reader's number format (a browser preference, never part of the scenario), before the first draw. Its
+ * first formatter loads the browser's locale data: 20–60 ms, in a task of its own when the page waits for a read.
+ */
+const startFormat = (): void => startNumberFormat({ storage, language: navigator.language });
 const tab = tabStorage();
 /** The saved slot's text as it is at load, or null. */
 function readSlot(): string | null {
@@ -106,36 +109,43 @@ function start(large?: LargeRead, opening?: OpenScenarioModule, linkRead?: Scena
 
   const root = document.getElementById('root');
   if (!root) throw new Error('index.html has no #root element');
-  const draw = (): void =>
-    createRoot(root).render(
-      <StrictMode>
-        <ErrorBoundary recovery={recovery} download={downloadSaved}>
-          <App store={store} services={services} updates={updates} />
-        </ErrorBoundary>
-      </StrictMode>,
-    );
-  // A restored (or linked) long storm: its check and the results' arrays made ready in tasks of their own before the first draw.
-  if (opening) void opening.prepareLongStorm(store, store.getState().scenario.storm).then(draw, draw);
+  const app = (
+    <StrictMode>
+      <ErrorBoundary recovery={recovery} download={downloadSaved}>
+        <App store={store} services={services} updates={updates} />
+      </ErrorBoundary>
+    </StrictMode>
+  );
+  const draw = (): void => createRoot(root).render(app);
+  // A restored (or linked) long storm: its check and the results' arrays made ready in tasks of their own before the
+  // first draw; then the first render as a transition, which React works in slices of a few ms, yielding between
+  // them, where an urgent one is made in one task (the largest share link's first render held the page about
+  // 130 ms of its 230 ms task, measured). The page shows nothing until the whole screen is committed at once.
+  const drawInSlices = (): void => startTransition(draw);
+  if (opening) void opening.prepareLongStorm(store, store.getState().scenario.storm).then(drawInSlices, drawInSlices);
   else draw();
 }
 
-// A share link in the address needs the link reader's decompressor, fetched only then (src/scenario/link.ts); a
-// scenario kept in the large store (IndexedDB) is read first, only when the saved slot holds its marker.
+// A share link in the address is read first, by the reader off the page or else by the page's own, fetched only
+// then (src/scenario/link.ts); a scenario kept in the large store (IndexedDB) is read first, only when the saved
+// slot holds its marker.
 const waits: Promise<unknown>[] = [];
 let large: LargeRead | undefined;
 let opening: OpenScenarioModule | undefined;
 let linkRead: ScenarioResult | undefined;
 if (isScenarioLink(window.location.hash)) {
   const fragment = window.location.hash;
-  waits.push(loadLinkReader().catch(() => {}));
   // Read off the page (src/store/open-scenario.ts): the largest link the reader accepts held the page 0.5 s on it.
+  // The page's own reader is fetched only where there is none off the page: loading its decompressor was a task of
+  // 50–120 ms of its own at start-up (measured on a loaded machine, bench:ui link-largest).
   waits.push(
     import('./store/open-scenario')
       .then((m) => ((opening = m), m.readLinkOffPage(fragment)))
       .then(
         (read) => (linkRead = read ?? undefined),
         () => undefined,
-      ),
+      )
+      .then(() => (linkRead ? undefined : loadLinkReader().catch(() => {}))),
   );
 }
 const marker = readLargeMarker(readSlot());
@@ -156,6 +166,10 @@ if (marker) {
       ),
   );
 }
-if (waits.length > 0)
+if (waits.length > 0) {
+  waits.push(new Promise((later) => setTimeout(later, 0)).then(startFormat));
   void Promise.all(waits).then(() => start(large, large?.ok || linkRead?.ok ? opening : undefined, linkRead));
-else start();
+} else {
+  startFormat();
+  start();
+}

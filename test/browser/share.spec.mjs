@@ -140,6 +140,78 @@ export const tests = [
     },
   },
   {
+    name: 'a link of 300,000 bars opens on the chart with its hand-worked results in my number format, saying it is drawing until then',
+    async run({ baseUrl, newPage }) {
+      // 300,000 bars of 1 h, every 100th with 10 mm and the rest dry, under a constant loss rate of 6 mm/h
+      // (invented). Long enough for the first draw in slices and the staged chart frame (200,000 bars on).
+      const { scenario, close } = await loadModules();
+      let fragment;
+      try {
+        const n = 300_000;
+        const parsed = scenario.parseScenario({
+          ...scenario.DEMO_SCENARIO,
+          name: 'Long link (invented)',
+          storm: {
+            durationsH: new Array(n).fill(1),
+            depthsMm: Array.from({ length: n }, (_, k) => (k % 100 === 0 ? 10 : 0)),
+          },
+          catchment: { name: 'Invented catchment', areaM2: 1e6 },
+          units: 'si',
+          method: { kind: 'constant', rateMmH: 6 },
+          observed: null,
+          streamflow: null,
+        });
+        check(parsed.ok, `the long link's scenario does not read: ${JSON.stringify(parsed.problems)}`);
+        fragment = scenario.encodeScenarioLink(parsed.scenario);
+      } finally {
+        await close();
+      }
+      const page = await newPage();
+      // The reader's own number format, chosen earlier in this browser: the link opens in it.
+      await page.addInitScript(() => localStorage.setItem('raincut.numberFormat', '1.234,5'));
+      const fetched = [];
+      page.on('request', (request) => fetched.push(new URL(request.url()).pathname));
+      await page.goto(`${baseUrl}#${fragment.replace(/^#/, '')}`);
+      await page.getByRole('region', { name: 'Shared scenario: “Long link (invented)”' }).waitFor({ timeout: 60_000 });
+      // Until the chart's frame is ready it says so; never bars of another storm, nor a blank chart.
+      const chart = page.getByRole('figure', { name: 'Hyetograph' });
+      await page.waitForFunction(
+        () =>
+          document.querySelector('[data-layer="rain"]') !== null ||
+          document.querySelector('.chart__empty[role="status"]')?.textContent === 'Drawing 300.000 bars…',
+      );
+      await chart.locator('[data-layer="rain"]').waitFor({ state: 'attached', timeout: 60_000 });
+      // By hand: 3,000 wet bars of 10 mm = 30,000 mm of rain; each loses 6 mm/h × 1 h = 6 mm (18,000 mm) and
+      // runs off 4 mm (12,000 mm); 12 m over 10⁶ m² = 1.2·10⁷ m³; 12,000 / 30,000 = 40 %; peak 4 mm in 1 h;
+      // written with point groups, as the reader chose.
+      const got = await results(page);
+      const want = {
+        'Rainfall depth': '30.000 mm',
+        'Loss depth': '18.000 mm',
+        'Excess depth': '12.000 mm',
+        'Runoff fraction': '40 %',
+        'Peak excess intensity': '4 mm/h',
+      };
+      for (const [label, text] of Object.entries(want))
+        check(got[label] === text, `${label}: the long link shows "${got[label]}", by hand "${text}"`);
+      check(
+        got['Runoff volume'] === '12.000.000 m³',
+        `Runoff volume: the long link shows "${got['Runoff volume']}", by hand "12.000.000 m³"`,
+      );
+      check(
+        (await page.getByLabel('Scenario name').inputValue()) === 'Long link (invented)',
+        'the name did not travel',
+      );
+      check((await stored(page)) === null, 'the shared scenario was saved before it was kept');
+      // Read by the worker: the page's own reader (its decompressor) is not fetched, nor evaluated on the page.
+      check(
+        fetched.some((path) => /scenario-read\.worker/.test(path)),
+        `the link was not read off the page: ${fetched.join(', ')}`,
+      );
+      check(!fetched.some((path) => /\/link-read-/.test(path)), `the page fetched its own link reader: ${fetched}`);
+    },
+  },
+  {
     name: 'a damaged link, pasted or loaded, says what is wrong and leaves the saved scenario as it was',
     async run({ baseUrl, newPage }) {
       const { scenario, close } = await loadModules();

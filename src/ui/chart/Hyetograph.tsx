@@ -6,7 +6,7 @@ import { displayUnit, toDisplay, unitText } from '../units';
 import { Axes } from './Axes';
 import { CAPACITY_CURVES } from './capacity';
 import { useChartHeight } from './chart-height';
-import { useChartFrame } from './staged-frame';
+import { STAGED_FROM_BARS, useChartFrame } from './staged-frame';
 import { lossPartOf, rateLine } from './method-layers';
 import { lazyPart } from '../layout/LazyPart';
 import { LossLayer } from './LossLayer';
@@ -27,8 +27,11 @@ const MassCurve = lazyPart<MassCurveProps>('mass curve', () => import('./MassCur
  * rate methods the loss-rate line to drag.
  */
 export function Hyetograph() {
-  const [boxRef, width] = useElementWidth<HTMLDivElement>(880);
   const storm = useScenario((s) => s.storm);
+  // A long storm's chart is drawn in steps after its first render: its width is read from the page's own
+  // layout rather than asked for at mount, which would lay out the whole page inside the mounting task.
+  const staged = storm.depthsMm.length >= STAGED_FROM_BARS;
+  const [boxRef, width, widthKnown] = useElementWidth<HTMLDivElement>(880, { firstFromLayout: staged });
   const units = useScenario((s) => s.units);
   const results = useDerived((d, s) => d.results(s));
   const matched = useDerived((d, s) => d.isMatched(s));
@@ -40,7 +43,7 @@ export function Hyetograph() {
   const span = useTimeSpanH();
   const height = useChartHeight();
   // Null while a long storm's frame is worked out in steps (staged-frame.ts): the chart says it is drawing.
-  const frame = useChartFrame(storm, width, height, units, span);
+  const frame = useChartFrame(storm, widthKnown || !staged ? width : null, height, units, span);
   const part = useDerived((d, s) => d.lossPartMm(s));
   const capacity = CAPACITY_CURVES[method.kind];
   const capacityDrawing = useMemo(

@@ -12,27 +12,33 @@ export { wallClockMs } from '../../core';
 /** What a moment the calendar cannot write is shown as. */
 export const NO_CLOCK_TEXT = '—';
 
-const dateFormat = new Intl.DateTimeFormat('en-GB', {
-  timeZone: 'UTC',
-  day: 'numeric',
-  month: 'short',
-  year: 'numeric',
-});
-const timeFormat = new Intl.DateTimeFormat('en-GB', {
-  timeZone: 'UTC',
-  hour: '2-digit',
-  minute: '2-digit',
-  hourCycle: 'h23',
-});
+// Made at first use rather than at load, where they added the calendar's locale data to the task evaluating the
+// app's script (core/time-limits.ts says why).
+let dateFormatMade: Intl.DateTimeFormat | undefined;
+const dateFormat = (): Intl.DateTimeFormat =>
+  (dateFormatMade ??= new Intl.DateTimeFormat('en-GB', {
+    timeZone: 'UTC',
+    day: 'numeric',
+    month: 'short',
+    year: 'numeric',
+  }));
+let timeFormatMade: Intl.DateTimeFormat | undefined;
+const timeFormat = (): Intl.DateTimeFormat =>
+  (timeFormatMade ??= new Intl.DateTimeFormat('en-GB', {
+    timeZone: 'UTC',
+    hour: '2-digit',
+    minute: '2-digit',
+    hourCycle: 'h23',
+  }));
 
 /** "14 Jul 2026" for a wall-clock time. */
 export function formatWallDate(ms: number): string {
-  return wallClockParts(ms) === null ? NO_CLOCK_TEXT : dateFormat.format(ms);
+  return wallClockParts(ms) === null ? NO_CLOCK_TEXT : dateFormat().format(ms);
 }
 
 /** "15:00" for a wall-clock time. */
 export function formatWallTime(ms: number): string {
-  return wallClockParts(ms) === null ? NO_CLOCK_TEXT : timeFormat.format(ms);
+  return wallClockParts(ms) === null ? NO_CLOCK_TEXT : timeFormat().format(ms);
 }
 
 const pad = (n: number, width = 2): string => String(n).padStart(width, '0');

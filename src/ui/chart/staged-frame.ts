@@ -6,30 +6,31 @@ import type { TimeSpanH } from './time-span';
 /** Storms from this many bars get their frame in steps (frame-steps.ts): about 20 ms of one task below it. */
 export const STAGED_FROM_BARS = 200_000;
 
-type Inputs = readonly [Storm, number, number, UnitSystem, TimeSpanH | undefined];
+type Inputs = readonly [Storm, number | null, number, UnitSystem, TimeSpanH | undefined];
 const same = (a: Inputs, b: Inputs): boolean => a.every((v, i) => v === b[i]);
 
 /**
  * The chart's frame for these inputs. A long storm's frame is worked out in
  * steps after the render that first shows the storm (its code loaded then),
  * and null until it is ready: the chart says it is drawing, and the page
- * answers input meanwhile. The frame is the one chartFrame gives.
+ * answers input meanwhile. The frame is the one chartFrame gives. A width
+ * of null (the chart's box not laid out yet) gives no frame and starts none.
  */
 export function useChartFrame(
   storm: Storm,
-  width: number,
+  width: number | null,
   height: number,
   system: UnitSystem,
   span: TimeSpanH | undefined,
 ): ChartFrame | null {
   const staged = storm.depthsMm.length >= STAGED_FROM_BARS;
   const now = useMemo(
-    () => (staged ? null : chartFrame(storm, width, height, system, span)),
+    () => (staged || width === null ? null : chartFrame(storm, width, height, system, span)),
     [staged, storm, width, height, system, span],
   );
   const [ready, setReady] = useState<{ readonly inputs: Inputs; readonly frame: ChartFrame } | null>(null);
   useEffect(() => {
-    if (!staged) return;
+    if (!staged || width === null) return;
     const inputs: Inputs = [storm, width, height, system, span];
     let live = true;
     void import('./frame-steps')
