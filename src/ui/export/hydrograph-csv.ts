@@ -65,8 +65,9 @@ export function hydrographCsv({
     ...methodAndCatchmentNotes(scenario, method, areaUnit),
     csvNote(`Unit hydrograph: ${TRANSFORMS[transform.kind].label}; ${transformParametersText(transform)}`),
     csvNote(
-      `Peak discharge ${note(dischargeToDisplay(hydrograph.peakM3s, units))} ${q} at ${note(hydrograph.timeOfPeakH)} h ` +
-        `after the storm start; direct runoff volume ${note(toDisplay('volume', hydrograph.volumeM3, units))} ` +
+      `Peak discharge ${note(dischargeToDisplay(hydrograph.peakM3s, units))} ${q} ` +
+        (hydrograph.peakM3s > 0 ? `at ${note(hydrograph.timeOfPeakH)} h after the storm start` : '(no direct runoff)') +
+        `; direct runoff volume ${note(toDisplay('volume', hydrograph.volumeM3, units))} ` +
         unitText(displayUnit('volume', units)),
     ),
   ];

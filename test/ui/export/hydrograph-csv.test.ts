@@ -51,6 +51,19 @@ describe('the hydrograph CSV', () => {
     expect(lines).toContain('#,"Catchment: Test catchment; 1 km²"');
   });
 
+  it('gives no time of peak to a hydrograph with no flow', () => {
+    // No excess at all: every sample 0 m³/s, so there is no peak to put at 0 h.
+    const dry = runoffHydrograph({ durationsH: [1], excessMm: [0] }, TRANSFORM, 1e6);
+    const csv = hydrographCsv({
+      scenario: SCENARIO,
+      method: SCENARIO.method,
+      transform: TRANSFORM,
+      hydrograph: dry,
+      comparison: null,
+    });
+    expect(csv).toContain('#,"Peak discharge 0 m³/s (no direct runoff); direct runoff volume 0 m³"');
+  });
+
   it('writes the volume as the screen does: whole from 1000, in the screen’s volume unit', () => {
     // The defect: 7.157 mm of excess over 3.2 km² = 22,902 m³ on screen was written "22900 m³" (four significant
     // figures, which the screen keeps only below 1000). 10 mm over 2.3456 km² = 0.010 m × 2.3456e6 m² = 23,456 m³,
