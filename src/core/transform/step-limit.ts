@@ -49,7 +49,7 @@ export class StepTooShort extends InputError {
     return new InputError(
       'durationsH',
       `The output step is the storm’s shortest bar, bar ${index + 1} (${stepWords(this.stepH)}): ${this.words.ofBar}. ` +
-        `Resample the storm to bars of at least ${stepWords(this.minStepH, true)}.`,
+        `Lengthen that bar, or resample the storm to bars of at least ${stepWords(this.minStepH, true)}.`,
       index,
     );
   }

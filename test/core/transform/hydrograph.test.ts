@@ -296,7 +296,7 @@ describe('input checks', () => {
       const error = expectInputError(
         () => runoffHydrograph(year, tri, AREA),
         'durationsH',
-        /^The output step is the storm’s shortest bar, bar 366 \(1 s\): the storm’s 8760 h would take 31536001 steps of it, more than the 10000000 a hydrograph holds\. Resample the storm to bars of at least 3\.16 s\.$/,
+        /^The output step is the storm’s shortest bar, bar 366 \(1 s\): the storm’s 8760 h would take 31536001 steps of it, more than the 10000000 a hydrograph holds\. Lengthen that bar, or resample the storm to bars of at least 3\.16 s\.$/,
       );
       expect(error.index).toBe(365);
     });
@@ -317,7 +317,7 @@ describe('input checks', () => {
       const error = expectInputError(
         () => runoffHydrograph(minute, { kind: 'triangular', lagH: 1000 }, AREA),
         'durationsH',
-        /^The output step is the storm’s shortest bar, bar 1 \(1 s\): the unit hydrograph lasts 2667 h, 9600003 steps of it, more than the 8388608 kept\. Resample the storm to bars of at least 1\.15 s\.$/,
+        /^The output step is the storm’s shortest bar, bar 1 \(1 s\): the unit hydrograph lasts 2667 h, 9600003 steps of it, more than the 8388608 kept\. Lengthen that bar, or resample the storm to bars of at least 1\.15 s\.$/,
       );
       expect(error.index).toBe(0);
       // At the step suggested it is computed: 2666.667 h / (1.15 s = 3.19444e-4 h) = 8,347,828 steps.
@@ -374,7 +374,7 @@ describe('input checks', () => {
     expectInputError(
       () => runoffHydrograph({ durationsH: [0.001], excessMm: [1] }, { kind: 'nash', n: 3, kH: 900 }, AREA),
       'durationsH',
-      /bar 1 \(3\.6 s\).*Resample the storm to bars of at least/,
+      /bar 1 \(3\.6 s\).*resample the storm to bars of at least/,
     );
   });
 });
