@@ -12,7 +12,7 @@ export function hoursMinutes(hours: number, signed = false): string {
 }
 
 /** What a hydrograph with no flow shows for its time to peak: it has no peak (the core puts it at 0 h). */
-export const NO_PEAK_TEXT = 'none: no direct runoff';
+const NO_PEAK_TEXT = 'none: no direct runoff';
 
 /**
  * When a computed hydrograph peaks, as "2:20 after the storm start"; one with
