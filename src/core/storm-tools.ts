@@ -130,6 +130,26 @@ export function scaleStormByFactor(storm: Storm, factor: number): Storm {
   return { durationsH: Float64Array.from(storm.durationsH), depthsMm, ...keepStart(storm) };
 }
 
+/** 2^-1022, the smallest double held to its full 53 bits; below it a depth loses digits, and at 0 all of them. */
+const SMALLEST_FULL_DEPTH_MM = 2.2250738585072014e-308;
+
+/**
+ * The index of the first bar that had rain in `before` and has none, or
+ * less than a double holds in full, in `after` (the same bars rescaled), or
+ * −1. Such a bar's share of the pattern is gone for good: no later scaling
+ * brings it back, so a tool that rescales a storm refuses to.
+ */
+export function firstRainLost(before: Storm, after: Storm): number {
+  const n = Math.min(before.depthsMm.length, after.depthsMm.length);
+  for (let k = 0; k < n; k++) {
+    const was = before.depthsMm[k] as number;
+    const now = after.depthsMm[k] as number;
+    // A bar already below full precision is lost only by shrinking further.
+    if (was > 0 && now < SMALLEST_FULL_DEPTH_MM && now < was) return k;
+  }
+  return -1;
+}
+
 /** `count` dry bars of `stepH` hours each: a storm to draw on. */
 export function emptyStorm(stepH: number, count: number, startIso?: string): Storm {
   checkStep(stepH);

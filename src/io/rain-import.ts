@@ -540,6 +540,8 @@ function successSummary(
   } else {
     const along = s.valuesAlong === 'line' ? 'values read along each line; ' : '';
     notes.push(`${along}no times, so bars are ${formatDuration(s.stepMinutesIfNoTime / 60, format)} apart as set`);
+    const unread = unreadDurations(series.header, s);
+    if (unread !== null) notes.push(unread);
   }
   if (s.valueKind === 'cumulative') {
     const first = series.rowAt(0);
@@ -641,6 +643,8 @@ interface RainColumns {
   readonly rowAt: (k: number) => TextRow | undefined;
   /** Line of data row k. */
   readonly lineOf: (k: number) => number;
+  /** The column names, when the text has a header. */
+  readonly header?: readonly string[] | null | undefined;
 }
 
 function seriesColumns(series: Series): RainColumns {
@@ -652,7 +656,26 @@ function seriesColumns(series: Series): RainColumns {
     blankLinesSkipped: series.table.blankLinesSkipped,
     rowAt: (k) => rows[k],
     lineOf: (k) => (rows[k] as TextRow).line,
+    header: series.table.header?.cells ?? null,
   };
+}
+
+// A column that names bar lengths rather than clock times ("duration_min", "Interval (h)", "dt").
+const DURATION_NAME = /durat|interval|\bdt\b|length|\bstep\b/i;
+
+/**
+ * The note for a column named for durations that is not read: the bars take
+ * the step set, whatever that column says (1440 min bars read as 10-min ones
+ * would be 144 times as intense), or null.
+ */
+function unreadDurations(header: readonly string[] | null | undefined, s: RainImportSettings): string | null {
+  if (!header) return null;
+  for (let c = 0; c < header.length; c++) {
+    const name = (header[c] as string).trim();
+    if (c + 1 === s.valueColumn || !DURATION_NAME.test(name)) continue;
+    return `column ${c + 1}, “${name}”, is not read: bars are as long as the time step set, not as that column says`;
+  }
+  return null;
 }
 
 /** From clean columns to the storm and its summary; null when a problem was added. */

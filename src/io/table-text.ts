@@ -280,6 +280,24 @@ function countOutsideQuotes(line: string): { tab: number; semicolon: number; com
   return { tab, semicolon, comma };
 }
 
+/**
+ * Whether the first line is a CSV header, names joined by bare commas
+ * ("duration_min,depth_mm", "\"Time\",\"Rain\""), with as many commas as
+ * every data line below it: then the commas part columns, and "1440,20" is
+ * two numbers, not 1440.2. A name written with a comma and a space
+ * ("Rain, mm") is one name, and says nothing.
+ */
+function commaHeaderLikeLines(lines: readonly string[]): boolean {
+  const head = (lines[0] ?? '').trim();
+  if (/^[+-]?\d/.test(head)) return false;
+  const names = head.split(',');
+  if (names.length < 2 || names.some((n) => !/[A-Za-z]/.test(n) || /^\s/.test(n))) return false;
+  const commas = countOutsideQuotes(head).comma;
+  if (commas !== names.length - 1) return false;
+  const data = lines.slice(1).filter((l) => /^[+-]?\d/.test(l.trim()));
+  return data.length > 0 && data.every((l) => countOutsideQuotes(l).comma === commas);
+}
+
 const SINGLE_DECIMAL_COMMA = /^[+-]?\d+,(\d+)$/;
 /** A number with commas between groups of three digits: "1,200", "12,345.6", "1,234,567". */
 const COMMA_GROUPED = /^[+-]?[1-9]\d{0,2}(?:,\d{3})+(?:\.\d+)?$/;
@@ -379,7 +397,7 @@ export function detectSeparator(text: string): Separator {
   const half = lines.length / 2;
   if (tab >= half) return 'tab';
   if (semicolon >= half) return 'semicolon';
-  if (comma >= half && !commasInsideNumbers(lines)) return 'comma';
+  if (comma >= half && (commaHeaderLikeLines(lines) || !commasInsideNumbers(lines))) return 'comma';
   if (spaced >= half) return spaceOrFixed(lines);
   return 'none';
 }

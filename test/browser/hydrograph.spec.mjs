@@ -1,6 +1,7 @@
 // The runoff hydrograph (issue 13) in Debian's chromium, against the built
 // app: pick a unit hydrograph on the demo, check the peak worked by hand, and
 // see the computed hydrograph follow the loss line.
+import { readFile } from 'node:fs/promises';
 import { addAxe, check, checkShown } from './support.mjs';
 
 const result = async (page, id) => ((await page.locator(`[data-result="${id}"]`).textContent()) ?? '').trim();
@@ -12,6 +13,47 @@ async function typeInto(page, name, value) {
 }
 
 export const tests = [
+  {
+    name: 'the hydrograph CSV, opened as a colleague would, names the loss method and the area, and its peak matches the screen; with no excess there is no time to peak',
+    async run({ baseUrl, newPage }) {
+      const page = await newPage();
+      await page.goto(baseUrl);
+      await page.getByRole('combobox', { name: 'Unit hydrograph' }).selectOption('triangular');
+      await page.locator('[data-result="peak-discharge"]').waitFor();
+      const csvText = async () => {
+        const [file] = await Promise.all([
+          page.waitForEvent('download'),
+          page.getByRole('button', { name: 'Export Hydrograph CSV' }).click(),
+        ]);
+        return readFile(await file.path(), 'utf8');
+      };
+      const text = await csvText();
+      // The demo (src/scenario/demo.ts, invented): φ = 8 mm/h on 3.2 km² = 320 ha shown in ha.
+      check(
+        text.includes('#,"Loss method: Constant loss rate (φ-index); Loss rate φ = 8 mm/h"'),
+        'no loss method note',
+      );
+      check(text.includes('#,"Catchment: Fenmoor Brook above the mill weir (invented); 320 ha"'), 'no catchment note');
+      check(text.includes('#,"Caution: '), 'no caution');
+      // The screen and the CSV agree on the peak (11.02 m³/s at 2:20 = 2.333 h; the peak itself is worked by
+      // hand in the next test, at φ = 36 mm/h).
+      checkShown(await result(page, 'peak-discharge'), 11.02, 'm³/s', 'Peak discharge');
+      check(
+        /#,"Peak discharge 11\.02 m³\/s at 2\.333 h after the storm start/.test(text),
+        'the CSV peak differs from the screen',
+      );
+      // φ = 50 mm/h is above every bar's intensity (the demo's highest, 6.4 mm in 10 min, is 38.4 mm/h): no excess.
+      await typeInto(page, 'Loss rate φ (mm/h)', '50');
+      await page.waitForFunction(
+        () => document.querySelector('[data-result="time-to-peak"]')?.textContent === 'none: no direct runoff',
+      );
+      check((await result(page, 'peak-discharge')) === '0 m³/s', 'a dry run should peak at 0 m³/s');
+      check(
+        (await csvText()).includes('#,"Peak discharge 0 m³/s (no direct runoff); direct runoff volume 0 m³"'),
+        'the dry CSV gives a peak time',
+      );
+    },
+  },
   {
     name: 'a triangular unit hydrograph on the demo gives the peak worked by hand, and follows the loss line',
     async run({ baseUrl, newPage }) {

@@ -4,6 +4,7 @@ import { InputError, barEdgesH, totalDepthMm, totalDurationH, type Storm } from 
 import {
   MAX_TOOL_BARS,
   emptyStorm,
+  firstRainLost,
   resampleStorm,
   scaleStormByFactor,
   withBarStartH,
@@ -188,6 +189,35 @@ describe('scaling a storm by a factor', () => {
     const error = thrown(() => scaleStormByFactor({ durationsH: [1, 1], depthsMm: [0, 1e300] }, 1e10));
     expect(error.field).toBe('factor');
     expect(error.message).toContain('Bar 2');
+  });
+});
+
+describe('the first bar whose rain a scaling would lose', () => {
+  const wet = { durationsH: [1, 1, 1], depthsMm: [2, 0, 6] };
+
+  it('is none when every bar with rain keeps a depth held to full precision', () => {
+    // 6 mm × 1e-300 = 6e-300 mm, far above the smallest full-precision double, 2^-1022 ≈ 2.2251e-308.
+    expect(firstRainLost(wet, scaleStormByFactor(wet, 1e-300))).toBe(-1);
+    expect(firstRainLost(wet, scaleStormByFactor(wet, 3))).toBe(-1);
+  });
+
+  it('is the first wet bar that scaling by zero dries, and the dry bar before it does not count', () => {
+    expect(firstRainLost(wet, scaleStormByFactor(wet, 0))).toBe(0);
+    const dryFirst = { durationsH: [1, 1], depthsMm: [0, 4] };
+    expect(firstRainLost(dryFirst, scaleStormByFactor(dryFirst, 0))).toBe(1);
+  });
+
+  it('is a wet bar left below the smallest full-precision depth, where its share of the pattern rounds away', () => {
+    // 2 mm × 1e-308 = 2e-308 mm < 2^-1022 ≈ 2.2251e-308 (subnormal: digits lost); 6 mm × 1e-308 = 6e-308 is not.
+    expect(firstRainLost(wet, scaleStormByFactor(wet, 1e-308))).toBe(0);
+    const bigLast = { durationsH: [1, 1], depthsMm: [100, 1] };
+    // 100 × 1e-309 = 1e-307 is normal; 1 × 1e-309 = 1e-309 is not: bar 2 (index 1).
+    expect(firstRainLost(bigLast, scaleStormByFactor(bigLast, 1e-309))).toBe(1);
+  });
+
+  it('is none for a storm with no rain to lose', () => {
+    const dry = { durationsH: [1, 1], depthsMm: [0, 0] };
+    expect(firstRainLost(dry, scaleStormByFactor(dry, 0))).toBe(-1);
   });
 });
 

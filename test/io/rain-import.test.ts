@@ -92,6 +92,22 @@ describe('guessRainImport on realistic pastes', () => {
     );
   });
 
+  it('says when a column named for durations is not read, so daily bars are not taken silently for the step set', () => {
+    // Invented: three bars with their durations in a column. Times are read, durations are not: the
+    // bars take the step set (10 min here), and the summary must say the column was left.
+    const text = 'duration_min,depth_mm\n1440,20\n1440,30\n60,1\n';
+    const preview = guessRainImport(text);
+    // The header's comma splits the columns: 20 mm in the first bar, not 1440.2 mm (a decimal comma).
+    expect(preview.settings).toMatchObject({ separator: 'comma', timeColumn: null, valueColumn: 2 });
+    // 20 + 30 + 1 = 51 mm.
+    expect(preview.summary).toMatch(/^3 bars of 1 h, depths in mm, total 51 mm; /);
+    expect(preview.summary).toMatch(
+      /; column 1, “duration_min”, is not read: bars are as long as the time step set, not as that column says\.$/,
+    );
+    // A column of times is read as times, and no such note is given.
+    expect(guessRainImport('time,depth_mm\n10:00,1\n10:10,2\n').summary).not.toMatch(/is not read/);
+  });
+
   it('reads a single column of values at the step the user sets', () => {
     const text = INVENTED_DEPTHS.join('\n');
     const settings = guessRainSettings(text);

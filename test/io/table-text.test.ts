@@ -111,6 +111,17 @@ describe('detectSeparator', () => {
     expect(detectSeparator('Rain (mm)\n2,05\n3,10\n4,25')).toBe('none');
   });
 
+  it('takes a CSV header of names joined by commas, as many as each line has, for commas between columns', () => {
+    // Invented: whole-number durations and two-digit depths. "1440,20" alone could be 1440.20, but the header
+    // names two columns with the one comma every line has: 20 mm in 1440 min, not 1440.2 mm.
+    expect(detectSeparator('duration_min,depth_mm\n1440,20\n1440,30\n60,1')).toBe('comma');
+    expect(detectSeparator('"Duration (min)","Depth (mm)"\n1440,20\n1440,30\n60,1')).toBe('comma');
+    // A name with a comma and a space in it is one name ("Rain, mm"), and a header with another count of
+    // commas than the lines says nothing: these stay single columns of decimal-comma numbers.
+    expect(detectSeparator('Rain, mm\n12,75\n3,5\n8,25')).toBe('none');
+    expect(detectSeparator('a,b,c\n12,75\n3,5\n8,25')).toBe('none');
+  });
+
   it('says none for a single column of plain numbers, and for empty text', () => {
     expect(detectSeparator('0.4\n0.8\n1.2')).toBe('none');
     expect(detectSeparator('')).toBe('none');

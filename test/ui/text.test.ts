@@ -56,4 +56,13 @@ describe('formatting', () => {
     expect(formatDuration(18 * (10 / 60))).toBe('3 h');
     expect(formatDuration(1.5)).toBe('1 h 30 min');
   });
+  it('durations under a minute read in seconds, as a 1-s logger’s bars are', () => {
+    // 1 s = 1/3600 h; in minutes it is 0.01667, which read as "0.017 min" (1.02 s).
+    expect(formatDuration(1 / 3600)).toBe('1 s');
+    expect(formatDuration(30 / 3600)).toBe('30 s');
+    expect(formatDuration(0.5 / 3600)).toBe('0.5 s');
+    // 59.5 s stays in seconds; a whole minute is a minute.
+    expect(formatDuration(59.5 / 3600)).toBe('59.5 s');
+    expect(formatDuration(1 / 60)).toBe('1 min');
+  });
 });

@@ -2,6 +2,7 @@ import { InputError } from '../errors';
 import { convolve } from './convolve';
 import { excessOnSteps, stepsCovering, totalHours } from './grid';
 import { unitResponse } from './response';
+import { StepTooShort, samplesTooMany, stormTooLong } from './step-limit';
 import type { Excess, RunoffHydrograph, Transform } from './types';
 import { validateAreaM2, validateExcess, validateTransform } from './validate';
 
@@ -19,8 +20,14 @@ export interface RunoffHydrographOptions {
   readonly stepH?: number;
 }
 
-/** The output step: the one asked for, else the shortest bar. */
-function outputStepH(durationsH: ArrayLike<number>, options: RunoffHydrographOptions): number {
+/**
+ * The output step: the one asked for, else the shortest bar (and which bar
+ * that is, so a step too short for the hydrograph is refused as that bar's).
+ */
+function outputStep(
+  durationsH: ArrayLike<number>,
+  options: RunoffHydrographOptions,
+): { readonly stepH: number; readonly bar: number | null } {
   const asked = options.stepH;
   if (asked !== undefined) {
     if (typeof asked !== 'number' || !Number.isFinite(asked) || !(asked > 0)) {
@@ -29,11 +36,18 @@ function outputStepH(durationsH: ArrayLike<number>, options: RunoffHydrographOpt
         `The output step must be a finite number of hours above zero (got ${String(asked)}).`,
       );
     }
-    return asked;
+    return { stepH: asked, bar: null };
   }
   let shortest = Infinity;
-  for (let k = 0; k < durationsH.length; k++) shortest = Math.min(shortest, durationsH[k] as number);
-  return shortest;
+  let bar = 0;
+  for (let k = 0; k < durationsH.length; k++) {
+    const d = durationsH[k] as number;
+    if (d < shortest) {
+      shortest = d;
+      bar = k;
+    }
+  }
+  return { stepH: shortest, bar };
 }
 
 /**
@@ -65,28 +79,24 @@ export function runoffHydrograph(
   validateTransform(transform);
   validateAreaM2(areaM2);
   const { durationsH, excessMm } = excess;
-  const stepH = outputStepH(durationsH, options ?? {});
+  const { stepH, bar } = outputStep(durationsH, options ?? {});
+  // A step the caller left to the bars is refused as the shortest bar's: the bars are what they can change.
+  const refuse = (error: StepTooShort): InputError => (bar === null ? error : error.forShortestBar(bar));
   if (durationsH.length === 0) {
     return { timesH: new Float64Array(1), dischargeM3s: new Float64Array(1), peakM3s: 0, timeOfPeakH: 0, volumeM3: 0 };
   }
   const totalH = totalHours(durationsH);
   const steps = stepsCovering(totalH, stepH);
-  if (steps > MAX_HYDROGRAPH_SAMPLES) {
-    throw new InputError(
-      'options.stepH',
-      `The storm lasts ${totalH.toPrecision(4)} h, ${steps} output steps of ${stepH} h; ` +
-        `choose an output step of at least ${(totalH / MAX_HYDROGRAPH_SAMPLES).toPrecision(2)} h.`,
-    );
+  if (steps > MAX_HYDROGRAPH_SAMPLES) throw refuse(stormTooLong(totalH, stepH, steps, MAX_HYDROGRAPH_SAMPLES));
+  let response: Float64Array;
+  try {
+    response = unitResponse(transform, stepH);
+  } catch (error) {
+    throw error instanceof StepTooShort ? refuse(error) : error;
   }
-  const response = unitResponse(transform, stepH);
   // One more sample than the convolution: the zero that closes the recession.
   const count = steps + response.length;
-  if (count > MAX_HYDROGRAPH_SAMPLES) {
-    throw new InputError(
-      'options.stepH',
-      `The hydrograph would need ${count} samples of ${stepH} h; choose a longer output step.`,
-    );
-  }
+  if (count > MAX_HYDROGRAPH_SAMPLES) throw refuse(samplesTooMany(stepH, count, MAX_HYDROGRAPH_SAMPLES));
   if (gridScratch.length < steps) gridScratch = new Float64Array(steps);
   const gridded = excessOnSteps(durationsH, excessMm, stepH, steps, gridScratch);
   // The convolution adds straight into the returned discharge column, then it is scaled in place.

@@ -1,5 +1,5 @@
-import { InputError } from '../errors';
 import { gammaQ, logGamma } from './gamma';
+import { responseTooLong } from './step-limit';
 
 /**
  * Share of a unit response's volume left off at its end. Dropping it and
@@ -37,13 +37,6 @@ const MAX_RESPONSE_STEPS = 2 ** 23;
  * the output step when the response would be unreasonably long for it.
  */
 export function responseArray(count: number, stepH: number, lastingH: number): Float64Array {
-  if (count > MAX_RESPONSE_STEPS) {
-    const shortest = lastingH / MAX_RESPONSE_STEPS;
-    throw new InputError(
-      'options.stepH',
-      `The unit hydrograph lasts ${lastingH.toPrecision(4)} h, ${count} output steps of ${stepH} h; ` +
-        `choose an output step of at least ${shortest.toPrecision(2)} h.`,
-    );
-  }
+  if (count > MAX_RESPONSE_STEPS) throw responseTooLong(lastingH, stepH, count, MAX_RESPONSE_STEPS);
   return new Float64Array(count);
 }

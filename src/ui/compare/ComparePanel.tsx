@@ -11,7 +11,7 @@ import { displayUnit, paramToDisplay, paramUnitText, toDisplay, unitText, type Q
 import { fittedCellText } from '../results/fit-words';
 import { dischargeText, dischargeToDisplay, dischargeUnitText } from '../observed/discharge';
 import { StaticHydrograph, staticHydrographFrame, visibleEndH } from '../observed/StaticHydrograph';
-import { hoursMinutes } from '../results/hours-minutes';
+import { hoursMinutes, peakWhenText } from '../results/hours-minutes';
 import { commonFrames } from './common-frame';
 import { difference, type Difference } from './difference';
 import { MAX_PINS } from '../../store/pin-board';
@@ -56,7 +56,9 @@ function hydrographRows(units: UnitSystem): Row[] {
       label: 'Time to peak',
       cell: (t) =>
         t.hydrograph
-          ? { text: `${hoursMinutes(t.hydrograph.timeOfPeakH)} h:mm`, value: t.hydrograph.timeOfPeakH }
+          ? t.hydrograph.peakM3s > 0
+            ? { text: `${hoursMinutes(t.hydrograph.timeOfPeakH)} h:mm`, value: t.hydrograph.timeOfPeakH }
+            : { text: '— (no direct runoff)', value: null }
           : { text: '—', value: null },
       unit: 'h',
     },
@@ -181,7 +183,7 @@ function PinnedHydrograph({
       frame={hFrame}
       series={h}
       className="compare__chart"
-      label={`Hydrograph of ${pin.scenario.name}: peak ${dischargeText(h.peakM3s, units)} ${hoursMinutes(h.timeOfPeakH)} after the storm start`}
+      label={`Hydrograph of ${pin.scenario.name}: peak ${dischargeText(h.peakM3s, units)} ${peakWhenText(h)}`}
     />
   );
 }

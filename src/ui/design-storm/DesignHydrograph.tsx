@@ -3,7 +3,7 @@ import type { RunoffHydrograph, Storm, UnitSystem } from '../../core';
 import { useElementWidth } from '../chart/useElementWidth';
 import { dischargeText } from '../observed/discharge';
 import { StaticHydrograph, staticHydrographFrame, visibleEndH } from '../observed/StaticHydrograph';
-import { hoursMinutes } from '../results/hours-minutes';
+import { peakWhenText } from '../results/hours-minutes';
 
 const HEIGHT = 200;
 
@@ -29,7 +29,7 @@ export function DesignHydrograph({
         <StaticHydrograph
           frame={frame}
           series={hydrograph}
-          label={`Design direct runoff hydrograph: peak ${dischargeText(hydrograph.peakM3s, units)} ${hoursMinutes(hydrograph.timeOfPeakH)} after the storm start.`}
+          label={`Design direct runoff hydrograph: peak ${dischargeText(hydrograph.peakM3s, units)} ${peakWhenText(hydrograph)}.`}
         />
       </div>
     </figure>

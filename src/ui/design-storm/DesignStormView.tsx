@@ -1,7 +1,7 @@
 import { useEffect, useMemo, useState } from 'react';
 import { methodNumber, methodSpec, runoffVolumeM3, type LossMethod } from '../../core';
 import { dischargeText } from '../observed/discharge';
-import { hoursMinutes } from '../results/hours-minutes';
+import { peakAtText } from '../results/hours-minutes';
 import { useActions, useDerived, useScenario, useWorkbenchStore, withDesignStormOnWorkbench } from '../../store';
 import { toScenarioStorm } from '../../store/edits';
 import { usePins, useServices } from '../services/services';
@@ -303,9 +303,7 @@ export function DesignStormView() {
                   <div>
                     <dt>Design peak discharge</dt>
                     <dd data-result="design-peak">
-                      {peak.ok
-                        ? `${dischargeText(peak.peakM3s, units)} at ${hoursMinutes(peak.timeOfPeakH)} after the storm start`
-                        : `— (${peak.message})`}
+                      {peak.ok ? peakAtText(peak, dischargeText(peak.peakM3s, units)) : `— (${peak.message})`}
                     </dd>
                   </div>
                 ) : null}

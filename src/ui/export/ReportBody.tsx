@@ -14,7 +14,7 @@ import { areaText, methodParametersText } from './bar-table-csv';
 import { ReportBars } from './ReportBars';
 import { transformParametersText } from './hydrograph-csv';
 import { dischargeText } from '../observed/discharge';
-import { hoursMinutes } from '../results/hours-minutes';
+import { peakAtText } from '../results/hours-minutes';
 import { StaticChart } from './StaticChart';
 import './export.css';
 
@@ -89,8 +89,7 @@ export function ReportBody() {
               ? 'None'
               : `${TRANSFORMS[transform.kind].label}: ${transformParametersText(transform, formatValue)}; ` +
                 (computed?.ok
-                  ? `peak discharge ${dischargeText(computed.hydrograph.peakM3s, units)} at ` +
-                    `${hoursMinutes(computed.hydrograph.timeOfPeakH)} after the storm start`
+                  ? `peak discharge ${peakAtText(computed.hydrograph, dischargeText(computed.hydrograph.peakM3s, units))}`
                   : `no hydrograph (${computed?.message ?? 'not worked out'})`)}
           </dd>
           <dt>Observed runoff</dt>

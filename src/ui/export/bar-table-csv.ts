@@ -113,15 +113,14 @@ export function areaText(
   return `${format(convertArea(areaM2, 'm2', unit))} ${UNIT_LABELS[unit] ?? unit}`;
 }
 
-export function barTableCsv({ scenario, method, result, volumeM3, areaUnit }: BarTableInput): string {
-  const { storm, units } = scenario;
-  const depthUnit = unitText(displayUnit('depth', units));
-  const show = (mm: number): string => `${noteNumber(toDisplay('depth', mm, units))} ${depthUnit}`;
-  const startMs = storm.startIso === undefined ? null : wallClockMs(storm.startIso);
-
-  const lines: string[] = [
-    csvNote(`Raincut bar table: ${scenario.name}`),
-    csvNote(`Caution: ${CAUTION_TEXT}`),
+/** The note lines naming the loss method and the catchment with its area: what a file's numbers rest on. */
+export function methodAndCatchmentNotes(
+  scenario: Scenario,
+  method: LossMethod,
+  areaUnit: AreaUnit | undefined,
+): string[] {
+  const { units } = scenario;
+  const lines = [
     csvNote(`Loss method: ${methodSpec(method.kind).label}; ${methodParametersText(method, units, noteNumber)}`),
   ];
   if (scenario.catchment.name !== '' || scenario.catchment.areaM2 > 0) {
@@ -131,6 +130,20 @@ export function barTableCsv({ scenario, method, result, volumeM3, areaUnit }: Ba
         : 'area not given';
     lines.push(csvNote(`Catchment: ${scenario.catchment.name === '' ? 'unnamed' : scenario.catchment.name}; ${area}`));
   }
+  return lines;
+}
+
+export function barTableCsv({ scenario, method, result, volumeM3, areaUnit }: BarTableInput): string {
+  const { storm, units } = scenario;
+  const depthUnit = unitText(displayUnit('depth', units));
+  const show = (mm: number): string => `${noteNumber(toDisplay('depth', mm, units))} ${depthUnit}`;
+  const startMs = storm.startIso === undefined ? null : wallClockMs(storm.startIso);
+
+  const lines: string[] = [
+    csvNote(`Raincut bar table: ${scenario.name}`),
+    csvNote(`Caution: ${CAUTION_TEXT}`),
+    ...methodAndCatchmentNotes(scenario, method, areaUnit),
+  ];
   if (storm.startIso !== undefined) lines.push(csvNote(`Storm start: ${storm.startIso}`));
   const volume =
     volumeM3 === null

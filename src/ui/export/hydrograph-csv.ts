@@ -2,7 +2,9 @@ import {
   TRANSFORMS,
   hasOrdinates,
   transformValue,
+  type AreaUnit,
   type HydrographComparison,
+  type LossMethod,
   type RunoffHydrograph,
   type Transform,
 } from '../../core';
@@ -11,6 +13,7 @@ import type { Scenario } from '../../scenario/types';
 import { formatClockText, wallClockMs } from '../chart/clock';
 import { dischargeToDisplay, dischargeUnitText } from '../observed/discharge';
 import { displayUnit, toDisplay, unitText } from '../units';
+import { methodAndCatchmentNotes } from './bar-table-csv';
 import { csvFile, csvNote, csvRow, noteNumber as note, type CsvCell } from './csv';
 
 /** "Lag = 0.75 h; peak rate factor = 484": a transform's parameters for notes and the report. */
@@ -27,10 +30,14 @@ export function transformParametersText(transform: Transform, format: (x: number
 
 export interface HydrographCsvInput {
   readonly scenario: Scenario;
+  /** The loss method in effect, whose excess was routed. */
+  readonly method: LossMethod;
   readonly transform: Transform;
   readonly hydrograph: RunoffHydrograph;
   /** Against the observed direct runoff, when there is a separated record. */
   readonly comparison: HydrographComparison | null;
+  /** The unit the area is shown in on screen. */
+  readonly areaUnit?: AreaUnit | undefined;
 }
 
 /**
@@ -40,17 +47,27 @@ export interface HydrographCsvInput {
  * and, against a record, the errors), a header row with the unit of every
  * column, then one row per sample, unrounded, discharge in the screen's unit.
  */
-export function hydrographCsv({ scenario, transform, hydrograph, comparison }: HydrographCsvInput): string {
+export function hydrographCsv({
+  scenario,
+  method,
+  transform,
+  hydrograph,
+  comparison,
+  areaUnit,
+}: HydrographCsvInput): string {
   const { units } = scenario;
   const q = dischargeUnitText(units);
   const startMs = scenario.storm.startIso === undefined ? null : wallClockMs(scenario.storm.startIso);
   const lines: string[] = [
     csvNote(`Raincut runoff hydrograph: ${scenario.name}`),
     csvNote(`Caution: ${CAUTION_TEXT}`),
+    // The discharge rests on the excess (the loss method) and the area: a file read alone must name both.
+    ...methodAndCatchmentNotes(scenario, method, areaUnit),
     csvNote(`Unit hydrograph: ${TRANSFORMS[transform.kind].label}; ${transformParametersText(transform)}`),
     csvNote(
-      `Peak discharge ${note(dischargeToDisplay(hydrograph.peakM3s, units))} ${q} at ${note(hydrograph.timeOfPeakH)} h ` +
-        `after the storm start; direct runoff volume ${note(toDisplay('volume', hydrograph.volumeM3, units))} ` +
+      `Peak discharge ${note(dischargeToDisplay(hydrograph.peakM3s, units))} ${q} ` +
+        (hydrograph.peakM3s > 0 ? `at ${note(hydrograph.timeOfPeakH)} h after the storm start` : '(no direct runoff)') +
+        `; direct runoff volume ${note(toDisplay('volume', hydrograph.volumeM3, units))} ` +
         unitText(displayUnit('volume', units)),
     ),
   ];

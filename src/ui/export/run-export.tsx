@@ -76,8 +76,18 @@ export async function runExport(kind: ExportKind, { store, saveFile, show }: Exp
       });
       return;
     }
+    if (!results.ok) {
+      show({
+        tone: 'problem',
+        title: 'No hydrograph was exported: the losses cannot be worked out.',
+        body: <p>{results.message}</p>,
+      });
+      return;
+    }
     const text = hydrographCsv({
       scenario,
+      method: results.method,
+      areaUnit: store.getState().areaUnits[scenario.units],
       transform: computed.transform,
       hydrograph: computed.hydrograph,
       comparison: store.derived.comparison(scenario),

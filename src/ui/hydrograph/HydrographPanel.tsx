@@ -18,7 +18,7 @@ import {
 } from '../../store/hydrograph-edits';
 import { formatValue } from '../format';
 import { dischargeText } from '../observed/discharge';
-import { hoursMinutes } from '../results/hours-minutes';
+import { hoursMinutes, peakTimeText } from '../results/hours-minutes';
 import { TransformFields } from './TransformFields';
 import './hydrograph.css';
 
@@ -66,7 +66,7 @@ function HydrographResults() {
   const h = computed.hydrograph;
   const rows: Row[] = [
     { id: 'peak-discharge', label: 'Peak discharge', value: dischargeText(h.peakM3s, units) },
-    { id: 'time-to-peak', label: 'Time to peak', value: `${hoursMinutes(h.timeOfPeakH)} after the storm start` },
+    { id: 'time-to-peak', label: 'Time to peak', value: peakTimeText(h) },
   ];
   if (comparison) {
     rows.push(

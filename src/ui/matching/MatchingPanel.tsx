@@ -138,8 +138,8 @@ export function MatchingPanel() {
           note={problem}
           hint={
             target?.ok
-              ? `${formatValue(toDisplay('depth', target.mm, units))} ${depthUnit} over the catchment area (set under Results).`
-              : 'Spread over the catchment area (set under Results).'
+              ? `${formatValue(toDisplay('depth', target.mm, units))} ${depthUnit} over the catchment area (set under Catchment and notes).`
+              : 'Spread over the catchment area (set under Catchment and notes).'
           }
           after={
             <select

@@ -2,7 +2,7 @@ import { useMemo } from 'react';
 import type { RunoffHydrograph, UnitSystem } from '../../core';
 import { useScenario, type ComputedHydrograph, type TimeSeries } from '../../store';
 import { useDeferredDerived } from '../../store/deferred';
-import { hoursMinutes } from '../results/hours-minutes';
+import { peakWhenText } from '../results/hours-minutes';
 import { dischargeText } from './discharge';
 import type { HydrographFrame } from './hydrograph-frame';
 import { seriesPath } from './hydrograph-paths';
@@ -17,7 +17,7 @@ export function computedPeakM3s(computed: ComputedHydrograph | null, total: Time
 /** The computed hydrograph in words, for a screen reader. */
 export function computedSummary(h: RunoffHydrograph, units: UnitSystem, withTotal: boolean): string {
   return (
-    `Computed direct runoff: peak ${dischargeText(h.peakM3s, units)} ${hoursMinutes(h.timeOfPeakH)} after the storm start` +
+    `Computed direct runoff: peak ${dischargeText(h.peakM3s, units)} ${peakWhenText(h)}` +
     (withTotal ? '; computed total flow is the computed direct runoff over the separated baseflow.' : '.')
   );
 }

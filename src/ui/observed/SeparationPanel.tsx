@@ -96,7 +96,7 @@ function EndPointRule({ endPoint, automatic }: { endPoint: EndPointFacts; automa
   const days = areaM2 > 0 ? rule.daysAfterPeak(areaM2) : null;
   const words =
     days === null
-      ? 'Needs the catchment area (under Results).'
+      ? 'Needs the catchment area (under Catchment and notes).'
       : `${rule.symbol} = ${formatValue(days)} days (${formatValue(days * 24)} h) for A = ${formatValue(convertArea(areaM2, 'm2', rule.areaUnit))} ${UNIT_LABELS[rule.areaUnit]}` +
         (areaUnit === rule.areaUnit
           ? '.'

@@ -7,8 +7,11 @@ import { formatCount, formatValue } from '../format';
 import { displayUnit, toDisplay, unitText } from '../units';
 import { editingEventText, useActiveEvent } from './active-event';
 
-/** "10 min", "1 h", "1 h 30 min" for a bar duration in hours. */
+/** "30 s", "10 min", "1 h", "1 h 30 min" for a bar duration in hours. */
 export function formatDuration(hours: number): string {
+  // Under a minute in seconds: a 1-s bar in minutes to a thousandth read "0.017 min".
+  const seconds = Math.round(hours * 3600 * 1000) / 1000;
+  if (seconds < 60) return `${formatValue(seconds)} s`;
   // Round to a thousandth of a minute first, so 18 bars of 10 min read "3 h", not "2 h 60 min".
   const minutes = Math.round(hours * 60 * 1000) / 1000;
   if (minutes < 60) return `${formatValue(minutes)} min`;

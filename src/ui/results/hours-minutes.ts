@@ -10,3 +10,27 @@ export function hoursMinutes(hours: number, signed = false): string {
   if (!signed || minutes === 0) return text;
   return `${hours < 0 ? '−' : '+'}${text}`;
 }
+
+/** What a hydrograph with no flow shows for its time to peak: it has no peak (the core puts it at 0 h). */
+const NO_PEAK_TEXT = 'none: no direct runoff';
+
+/**
+ * When a computed hydrograph peaks, as "2:20 after the storm start"; one with
+ * no flow at all has no peak, and said "0:00 after the storm start" as if
+ * the runoff peaked at once.
+ */
+export function peakTimeText(h: { readonly peakM3s: number; readonly timeOfPeakH: number }): string {
+  return h.peakM3s > 0 ? `${hoursMinutes(h.timeOfPeakH)} after the storm start` : NO_PEAK_TEXT;
+}
+
+/** "11.02 m³/s at 2:20 after the storm start", or "0 m³/s (no direct runoff)": a peak given with its discharge text. */
+export function peakAtText(h: { readonly peakM3s: number; readonly timeOfPeakH: number }, discharge: string): string {
+  return h.peakM3s > 0
+    ? `${discharge} at ${hoursMinutes(h.timeOfPeakH)} after the storm start`
+    : `${discharge} (no direct runoff)`;
+}
+
+/** For a chart's name after its peak discharge: "3:00 after the storm start", or "(no direct runoff)". */
+export function peakWhenText(h: { readonly peakM3s: number; readonly timeOfPeakH: number }): string {
+  return h.peakM3s > 0 ? `${hoursMinutes(h.timeOfPeakH)} after the storm start` : '(no direct runoff)';
+}

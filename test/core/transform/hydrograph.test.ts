@@ -283,6 +283,49 @@ describe('input checks', () => {
     expectInputError(() => runoffHydrograph(excess, tri, AREA, { stepH: -1 }), 'options.stepH', /output step/);
   });
 
+  describe('a step too short for the storm or the unit hydrograph', () => {
+    // A year of daily bars, then one bar of a second (invented): the shortest bar sets the step.
+    const year = {
+      durationsH: [...new Array<number>(365).fill(24), 1 / 3600],
+      excessMm: [...new Array<number>(365).fill(1), 1],
+    };
+
+    it('defaulted to the shortest bar, names that bar and the bars that would do', () => {
+      // 365 × 24 h + 1 s = 8760 h 1 s = 31,536,001 s: as many 1-s steps, over the 10,000,000 kept.
+      // A step of 31,536,001 s / 10⁷ = 3.1536001 s would do: 3.16 s, rounded up to 3 digits.
+      const error = expectInputError(
+        () => runoffHydrograph(year, tri, AREA),
+        'durationsH',
+        /^The output step is the storm’s shortest bar, bar 366 \(1 s\): the storm’s 8760 h would take 31536001 steps of it, more than the 10000000 a hydrograph holds\. Lengthen that bar, or resample the storm to bars of at least 3\.16 s\.$/,
+      );
+      expect(error.index).toBe(365);
+    });
+
+    it('asked for, names the output step and the step that would do', () => {
+      expectInputError(
+        () => runoffHydrograph(year, tri, AREA, { stepH: 1 / 3600 }),
+        'options.stepH',
+        /^The storm lasts 8760 h: 31536001 output steps of 1 s, more than the 10000000 a hydrograph holds; an output step of at least 3\.16 s would do\.$/,
+      );
+    });
+
+    it('with a unit hydrograph too long for the shortest bar, says so in the same terms', () => {
+      // One minute of 1-s bars under a lag of 1000 h: Tp = D/2 + lag = 1/7200 + 1000 h and the base
+      // 8/3 Tp = 2666.66704 h, ceil(2666.66704 × 3600) + 1 = 9,600,003 steps, over the 2²³ = 8,388,608 kept.
+      // 2666.66704 h / 2²³ = 3.17891e-4 h = 1.14441 s: 1.15 s rounded up.
+      const minute = { durationsH: new Array<number>(60).fill(1 / 3600), excessMm: new Array<number>(60).fill(0.1) };
+      const error = expectInputError(
+        () => runoffHydrograph(minute, { kind: 'triangular', lagH: 1000 }, AREA),
+        'durationsH',
+        /^The output step is the storm’s shortest bar, bar 1 \(1 s\): the unit hydrograph lasts 2667 h, 9600003 steps of it, more than the 8388608 kept\. Lengthen that bar, or resample the storm to bars of at least 1\.15 s\.$/,
+      );
+      expect(error.index).toBe(0);
+      // At the step suggested it is computed: 2666.667 h / (1.15 s = 3.19444e-4 h) = 8,347,828 steps.
+      const bars = { durationsH: [1.15 / 3600], excessMm: [6] };
+      expect(runoffHydrograph(bars, { kind: 'triangular', lagH: 1000 }, AREA).peakM3s).toBeGreaterThan(0);
+    });
+  });
+
   it('names the parameter of a bad transform', () => {
     expectInputError(() => runoffHydrograph(excess, { kind: 'triangular', lagH: 0 }, AREA), 'lagH', /Lag/);
     expectInputError(() => runoffHydrograph(excess, { kind: 'nash', n: -1, kH: 1 }, AREA), 'n', /reservoirs/);
@@ -327,10 +370,11 @@ describe('input checks', () => {
       'options.stepH',
       /at least/,
     );
+    // With no step asked for, the step is the one bar's, and the refusal names it.
     expectInputError(
       () => runoffHydrograph({ durationsH: [0.001], excessMm: [1] }, { kind: 'nash', n: 3, kH: 900 }, AREA),
-      'options.stepH',
-      /at least/,
+      'durationsH',
+      /bar 1 \(3\.6 s\).*resample the storm to bars of at least/,
     );
   });
 });

@@ -98,6 +98,13 @@ describe('the runoff hydrograph panel', () => {
     expect(document.querySelector('[data-result="peak-error"]')).toBeNull();
   });
 
+  it('with no excess there is no peak to time: it says so instead of a peak at the storm start', async () => {
+    // φ = 20 mm/h takes all 12 mm of the 1-h bar (20 × 1 = 20 ≥ 12): no excess, no direct runoff.
+    await open({ ...ONE_BAR, method: { kind: 'constant', rateMmH: 20 } });
+    expect(result('peak-discharge')).toBe('0 m³/s');
+    expect(result('time-to-peak')).toBe('none: no direct runoff');
+  });
+
   it('against the record: peak, timing and volume errors and the efficiency, worked by hand', async () => {
     await open(WITH_RECORD);
     // Peak: (0.69444 − 1)/1 = −30.56 %. Timing: 3 h − 4 h = −1:00, early.

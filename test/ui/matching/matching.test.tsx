@@ -93,6 +93,9 @@ describe('matching an observed runoff', () => {
     await user.type(observed, '4.5');
     expect(scenario().observed?.value).toBe(convertVolume(4.5, 'ML', 'm3'));
     expect(observed).toHaveAccessibleDescription(/Enter the catchment area/);
+    // The hint sends the user to the panel that holds the area, by the heading it shows.
+    expect(observed).toHaveAccessibleDescription(/Spread over the catchment area \(set under Catchment and notes\)/);
+    expect(screen.getByRole('heading', { name: 'Catchment and notes' })).toBeInTheDocument();
     const area = screen.getByRole('textbox', { name: 'Catchment area' });
     await user.selectOptions(screen.getByRole('combobox', { name: 'Area unit' }), 'km2');
     await user.type(area, '1');

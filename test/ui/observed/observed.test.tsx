@@ -372,6 +372,11 @@ describe('use as observed runoff', () => {
     expect(screen.getByRole('button', { name: 'Use as observed runoff' })).toBeDisabled();
     expect(screen.getByText('Needs a direct-runoff depth: the separation and the catchment area.')).toBeInTheDocument();
     expect(screen.getByLabelText('Direct runoff depth')).toHaveTextContent('— (needs the catchment area)');
+    // The end-point rule needs the area too, and names the panel that holds it by its heading.
+    expect(screen.getByRole('button', { name: 'End at N = A^0.2 days after the peak' })).toHaveAccessibleDescription(
+      expect.stringContaining('Needs the catchment area (under Catchment and notes).'),
+    );
+    expect(screen.getByRole('heading', { name: 'Catchment and notes' })).toBeInTheDocument();
   });
 
   it('"Remove record" keeps the last depth in Matching, and Undo brings the record back', async () => {

@@ -45,6 +45,56 @@ describe('storm tools', () => {
     expect(scenario().storm).toBe(FOUR_BARS.storm);
   });
 
+  it('a factor of 0 is refused, saying why and what to do instead, and the storm keeps its shape to scale later', async () => {
+    const { user, scenario, store } = renderWorkbench();
+    const tools = await openTools(user);
+    const field = within(tools).getByRole('textbox', { name: 'Scale factor' });
+    await fill(user, field, '0');
+    await user.click(within(tools).getByRole('button', { name: 'Scale bars' }));
+    expect(field).toHaveAttribute('aria-invalid', 'true');
+    expect(field).toHaveAccessibleDescription(
+      'A factor of 0 would leave every bar dry, and no later scaling could bring the storm’s pattern back: nothing is changed. To remove the rain, use Clear storm; to go back a step, Undo.',
+    );
+    expect(field).toHaveValue('0');
+    expect(scenario().storm).toBe(FOUR_BARS.storm);
+    expect(store.getState().undoLabel).toBeNull();
+    // The shape is still there to scale: 50 mm over a total of 2 + 6 + 10 + 2 = 20 mm is × 2.5,
+    // so the bars become 5, 15, 25 and 5 mm.
+    await fill(user, within(tools).getByRole('textbox', { name: 'Total depth (mm)' }), '50');
+    await user.click(within(tools).getByRole('button', { name: 'Set total depth' }));
+    expect(scenario().storm.depthsMm).toEqual([5, 15, 25, 5]);
+  });
+
+  it('a total depth of 0 is refused the same way, in the units on screen', async () => {
+    const { user, scenario, store } = renderWorkbench({ ...FOUR_BARS, units: 'us' });
+    const tools = await openTools(user);
+    const field = within(tools).getByRole('textbox', { name: 'Total depth (in)' });
+    await fill(user, field, '0');
+    await user.keyboard('{Enter}');
+    expect(field).toHaveAttribute('aria-invalid', 'true');
+    // The field's hint (the storm's total now, 20 mm / 25.4 = 0.7874 in) comes first.
+    expect(field).toHaveAccessibleDescription(
+      'Now 0.7874 in A total of 0 in would leave every bar dry, and no later scaling could bring the storm’s pattern back: nothing is changed. To remove the rain, use Clear storm; to go back a step, Undo.',
+    );
+    expect(field).toHaveValue('0');
+    expect(scenario().storm).toBe(FOUR_BARS.storm);
+    expect(store.getState().undoLabel).toBeNull();
+  });
+
+  it('a factor so small that a bar’s rain would lose its digits is refused, naming the bar', async () => {
+    const { user, scenario } = renderWorkbench();
+    const tools = await openTools(user);
+    const field = within(tools).getByRole('textbox', { name: 'Scale factor' });
+    // Bar 1: 2 mm × 1e-308 = 2e-308 mm, under 2^-1022 ≈ 2.2251e-308, the smallest depth a double holds in full.
+    await fill(user, field, '1e-308');
+    await user.click(within(tools).getByRole('button', { name: 'Scale bars' }));
+    expect(field).toHaveAttribute('aria-invalid', 'true');
+    expect(field).toHaveAccessibleDescription(
+      'A factor of 1e-308 would leave bar 1 with too little rain to hold its share of the storm’s pattern, and no later scaling could bring it back: nothing is changed. Use a larger factor; to go back a step, Undo.',
+    );
+    expect(scenario().storm).toBe(FOUR_BARS.storm);
+  });
+
   it('set the total depth, keeping the storm’s shape (in the units on screen)', async () => {
     const { user, scenario, store } = renderWorkbench({ ...FOUR_BARS, units: 'us' });
     const tools = await openTools(user);

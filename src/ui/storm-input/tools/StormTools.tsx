@@ -1,6 +1,6 @@
 import { useEffect, useRef, useState, type FormEvent } from 'react';
-import { attempt as attemptInput, scaleStormToDepth, totalDepthMm, type Storm } from '../../../core';
-import { resampleStorm, scaleStormByFactor } from '../../../core/storm-tools';
+import { InputError, attempt as attemptInput, scaleStormToDepth, totalDepthMm, type Storm } from '../../../core';
+import { firstRainLost, resampleStorm, scaleStormByFactor } from '../../../core/storm-tools';
 import { useActions, useScenario } from '../../../store';
 import { formatDuration } from '../../rainfall/RainfallToolbar';
 import { formatCount, formatForField, formatValue } from '../../format';
@@ -64,6 +64,20 @@ export function StormTools() {
     return false;
   };
 
+  /**
+   * Why a rescaling that would dry a bar with rain is refused, or null: that
+   * bar's share of the pattern could not be scaled back (a later "set total
+   * to 50 mm" would find nothing there), so the user is sent to the tools
+   * that remove rain or go back instead. `what` names the value typed.
+   */
+  const patternLost = (next: Storm, what: string, instead: string): string | null => {
+    const k = firstRainLost(storm, next);
+    if (k < 0) return null;
+    return totalDepthMm(next) === 0
+      ? `${what} would leave every bar dry, and no later scaling could bring the storm’s pattern back: nothing is changed. To remove the rain, use Clear storm; to go back a step, Undo.`
+      : `${what} would leave bar ${formatCount(k + 1)} with too little rain to hold its share of the storm’s pattern, and no later scaling could bring it back: nothing is changed. ${instead}; to go back a step, Undo.`;
+  };
+
   const onScale = (e: FormEvent): void => {
     e.preventDefault();
     const parsed = parseNumber(factor);
@@ -73,6 +87,8 @@ export function StormTools() {
     const next = scaleStormByFactor(storm, parsed.value);
     const tooDeep = stormDepthRefusal(next, units);
     if (tooDeep) return fail('factor', tooDeep);
+    const lost = patternLost(next, `A factor of ${formatValue(parsed.value)}`, 'Use a larger factor');
+    if (lost) return fail('factor', lost);
     attempt('factor', () => {
       actions.setStorm(next, `Scale storm by ${formatValue(parsed.value)}`);
       return `Every bar multiplied by ${formatValue(parsed.value)}: the storm now holds ${totalText(next)}.`;
@@ -91,6 +107,8 @@ export function StormTools() {
     if (!needBars('total')) return;
     attempt('total', () => {
       const next = scaleStormToDepth(storm, fromDisplay('depth', parsed.value, units));
+      const lost = patternLost(next, `A total of ${formatValue(parsed.value)} ${depthUnit}`, 'Use a larger total');
+      if (lost) throw new InputError('depthMm', lost);
       actions.setStorm(next, `Set total depth to ${formatValue(parsed.value)} ${depthUnit}`);
       return `Bars scaled in proportion: the storm now holds ${totalText(next)}.`;
     });
