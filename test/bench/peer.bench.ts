@@ -87,6 +87,9 @@ test('the public path against the numpy peer, interleaved', async () => {
   const targetMm = 0.4 * rainMm;
   lines.push(describeDepths(depthsMm));
   lines.push(`allocator: GLIBC_TUNABLES=${process.env.GLIBC_TUNABLES ?? '(unset)'} (see test/bench/vitest.config.ts)`);
+  lines.push(
+    `held on one processor: ${process.env.RAINCUT_BENCH_PINNED ?? '(not asked)'} (see test/bench/vitest.config.ts)`,
+  );
 
   // Reused result arrays for the unchecked pass: its figure leaves out allocation.
   const buffers = { lossMm: new Float64Array(BARS), excessMm: new Float64Array(BARS) };
