@@ -16,11 +16,12 @@ import { defineConfig } from 'vitest/config';
 // yourself to choose otherwise.
 process.env.GLIBC_TUNABLES ??= 'glibc.malloc.trim_threshold=1073741824:glibc.malloc.mmap_threshold=33554432';
 
-// Which processor runs the bench. Left free, the scheduler moved the bench
-// process between this machine's two processors, and a process that moved
-// (it varied from process to process) ran all its JavaScript 1.3–1.6× slower:
-// the exact φ match read 6.0 ms in one process and 9.2–10.3 in the next,
-// bimodal over eight runs, and never slow in six runs held on either one.
+// Which processor runs the bench. Left to the scheduler, about half the
+// bench processes on this 2-processor machine ran all their JavaScript
+// 1.3–1.6× slower than the rest: the exact φ match read 6.0 ms in one process
+// and 9.2–10.3 in the next, bimodal over eight runs, and never slow in six
+// runs held on either processor. (Our reading is that the slow ones moved
+// between processors and lost their caches; that was not measured.)
 // So the bench holds itself and the processes it starts (the forked runner
 // and the numpy peer) on one processor, the first it may use, where Linux's
 // taskset can say so. RAINCUT_BENCH_CPUS names others ("1", "0,1"), or
