@@ -1,5 +1,4 @@
 import { spawnSync } from 'node:child_process';
-import { readFileSync } from 'node:fs';
 import { defineConfig } from 'vitest/config';
 
 // How freed memory comes back, for the bench processes (read by glibc, the C
@@ -16,40 +15,31 @@ import { defineConfig } from 'vitest/config';
 // yourself to choose otherwise.
 process.env.GLIBC_TUNABLES ??= 'glibc.malloc.trim_threshold=1073741824:glibc.malloc.mmap_threshold=33554432';
 
-// Which processor runs the bench. Left to the scheduler, about half the
-// bench processes on this 2-processor machine ran all their JavaScript
-// 1.3–1.6× slower than the rest: the exact φ match read 6.0 ms in one process
-// and 9.2–10.3 in the next, bimodal over eight runs, and never slow in six
-// runs held on either processor. (Our reading is that the slow ones moved
-// between processors and lost their caches; that was not measured.)
-// So the bench holds itself and the processes it starts (the forked runner
-// and the numpy peer) on one processor, the first it may use, where Linux's
-// taskset can say so. RAINCUT_BENCH_CPUS names others ("1", "0,1"), or
-// "free" to leave the scheduler to it; peer.bench.ts prints which.
+// Which processors run the bench. Left to the scheduler (the default), about
+// half the bench processes on this 2-processor machine ran all their
+// JavaScript 1.3–1.6× slower than the rest: the exact φ match read 6.0 ms in
+// one process and 9.2–10.3 in the next, bimodal over eight runs, and never
+// slow in six runs held on either processor. Held on one processor, though,
+// V8's helper threads (garbage collection, compilation) share it with the
+// code timed: the passes with recovery, which collect the most, read 25–35 %
+// slower (Green–Ampt 87 ms against 69, Horton by compression 64 against 47).
+// A page in a browser is never held so, so the default leaves the scheduler
+// to it, and RAINCUT_BENCH_CPUS holds the bench, its runner and the numpy
+// peer on the processors it names ("0", "1", "0,1") where Linux's taskset
+// can, for a steadier ratio to the peer. peer.bench.ts prints which.
+// (Our reading is that the slow free processes moved between processors and
+// lost their caches; that was not measured.)
 pinProcessors(process.env.RAINCUT_BENCH_CPUS);
 
 function pinProcessors(asked: string | undefined): void {
-  if (asked === 'free' || process.platform !== 'linux') {
-    process.env.RAINCUT_BENCH_PINNED = 'no (left to the scheduler)';
+  if (!asked || asked === 'free' || process.platform !== 'linux') {
+    process.env.RAINCUT_BENCH_PINNED = 'no, left to the scheduler (RAINCUT_BENCH_CPUS=0 holds it on processor 0)';
     return;
   }
-  const cpus = asked ?? String(firstAllowedProcessor() ?? 0);
   // -a: every thread of this process; what it starts from now on inherits the set.
-  const run = spawnSync('taskset', ['-a', '-p', '-c', cpus, String(process.pid)], { encoding: 'utf8' });
+  const run = spawnSync('taskset', ['-a', '-p', '-c', asked, String(process.pid)], { encoding: 'utf8' });
   process.env.RAINCUT_BENCH_PINNED =
-    run.status === 0 ? `processor ${cpus}` : `no (taskset: ${run.error?.message ?? run.stderr.trim()})`;
-}
-
-/** The lowest processor this process may run on, from /proc (Linux), or null. */
-function firstAllowedProcessor(): number | null {
-  let status: string;
-  try {
-    status = readFileSync('/proc/self/status', 'utf8');
-  } catch {
-    return null;
-  }
-  const list = /^Cpus_allowed_list:\s*(\d+)/m.exec(status);
-  return list ? Number(list[1]) : null;
+    run.status === 0 ? `processors ${asked}` : `no (taskset: ${run.error?.message ?? run.stderr.trim()})`;
 }
 
 // `npm run bench`: runs the benchmark files one after another in one process
