@@ -33,6 +33,23 @@ describe('storm tools', () => {
     );
   });
 
+  it('the total depth field follows the storm after a scaling and its undo, but keeps what the user typed', async () => {
+    const { user } = renderWorkbench();
+    const tools = await openTools(user);
+    const total = within(tools).getByRole('textbox', { name: 'Total depth (mm)' });
+    // FOUR_BARS holds 2 + 6 + 10 + 2 = 20 mm; ×1.5 gives 30 mm.
+    expect(total).toHaveValue('20');
+    await fill(user, within(tools).getByRole('textbox', { name: 'Scale factor' }), '1.5');
+    await user.click(within(tools).getByRole('button', { name: 'Scale bars' }));
+    expect(total).toHaveValue('30');
+    await user.click(screen.getByRole('button', { name: /^Undo/ }));
+    expect(total).toHaveValue('20');
+    // Typed text is the user's: a later change to the storm leaves it as typed.
+    await fill(user, total, '45');
+    await user.click(within(tools).getByRole('button', { name: 'Scale bars' }));
+    expect(total).toHaveValue('45');
+  });
+
   it('a factor that is not a number is refused beside its field and the storm is kept', async () => {
     const { user, scenario } = renderWorkbench();
     const tools = await openTools(user);

@@ -44,6 +44,19 @@ export function StormTools() {
     setMessages((m) => ({ ...m, total: undefined }));
   }, [units, storm]);
 
+  // The total depth field follows the storm while it shows the storm's total: after "Scale bars" (or an edit
+  // elsewhere, or Undo) it shows the new total, not the old one, which "Set total" would quietly restore. Text the
+  // user typed that differs from the total shown is theirs and stays.
+  const shownStorm = useRef(storm);
+  useEffect(() => {
+    const before = shownStorm.current;
+    if (before === storm) return;
+    shownStorm.current = storm;
+    const wasShown = formatForField(toDisplay('depth', totalDepthMm(before), units));
+    const now = formatForField(toDisplay('depth', totalDepthMm(storm), units));
+    setTotal((text) => (text === wasShown ? now : text));
+  }, [storm, units]);
+
   const fail = (key: keyof Messages, message: string): void => {
     setMessages((m) => ({ ...m, [key]: message }));
     setStatus('');
