@@ -10,3 +10,8 @@ export function labelInSentence(label: string): string {
     ? label.charAt(0).toLowerCase() + label.slice(1)
     : label;
 }
+
+/** What a scenario is called in a title, a file's first line or a caption: its name, or "Unnamed scenario" when blank. */
+export function scenarioTitle(name: string): string {
+  return name.trim() === '' ? 'Unnamed scenario' : name;
+}

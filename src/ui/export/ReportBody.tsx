@@ -17,6 +17,7 @@ import { dischargeText } from '../observed/discharge';
 import { peakAtText } from '../results/hours-minutes';
 import { StaticChart } from './StaticChart';
 import './export.css';
+import { scenarioTitle } from '../../scenario/label-text';
 
 const REPORT_CHART = { width: 720, height: 280 } as const;
 
@@ -56,7 +57,7 @@ export function ReportBody() {
     <>
       <header className="report__head">
         <p className="report__kind">Raincut scenario report</p>
-        <h2 className="report__title">{scenario.name}</h2>
+        <h2 className="report__title">{scenarioTitle(scenario.name)}</h2>
         <p className="report__date">
           Printed {printed.toLocaleString(undefined, { dateStyle: 'medium', timeStyle: 'short' })}
         </p>
@@ -114,7 +115,7 @@ export function ReportBody() {
           storm={storm}
           lossMm={results.ok ? results.result.lossMm : null}
           lineMmH={typeof lineValue === 'number' ? lineValue : null}
-          label={`Hyetograph of ${scenario.name}: rainfall excess over loss for each bar`}
+          label={`Hyetograph of ${scenarioTitle(scenario.name)}: rainfall excess over loss for each bar`}
         />
         <figcaption>
           Hyetograph: rainfall excess (dark) above loss (light) in each bar

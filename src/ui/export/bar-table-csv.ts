@@ -18,6 +18,7 @@ import { formatClockText, wallClockMs } from '../chart/clock';
 import { formatValue } from '../format';
 import { csvFile, csvNote, csvRow, noteNumber, type CsvCell } from './csv';
 import { AREA_CHOICES, displayUnit, paramToDisplay, paramUnitText, toDisplay, unitText } from '../units';
+import { scenarioTitle } from '../../scenario/label-text';
 
 /**
  * The bar table as CSV, written through the one CSV writer (./csv.ts: every
@@ -140,7 +141,7 @@ export function barTableCsv({ scenario, method, result, volumeM3, areaUnit }: Ba
   const startMs = storm.startIso === undefined ? null : wallClockMs(storm.startIso);
 
   const lines: string[] = [
-    csvNote(`Raincut bar table: ${scenario.name}`),
+    csvNote(`Raincut bar table: ${scenarioTitle(scenario.name)}`),
     csvNote(`Caution: ${CAUTION_TEXT}`),
     ...methodAndCatchmentNotes(scenario, method, areaUnit),
   ];

@@ -4,10 +4,11 @@ import { CAPACITY_CURVES } from '../chart/capacity';
 import { lossPartOf, rateLine } from '../chart/method-layers';
 import { methodParametersText } from './bar-table-csv';
 import type { LegendEntry } from './chart-svg';
+import { scenarioTitle } from '../../scenario/label-text';
 
 /** The line under an exported chart: scenario, method and parameters. */
 export function chartHeading(scenario: Scenario, method: Scenario['method']): string {
-  return `${scenario.name} — ${methodSpec(method.kind).label}; ${methodParametersText(method, scenario.units)}`;
+  return `${scenarioTitle(scenario.name)} — ${methodSpec(method.kind).label}; ${methodParametersText(method, scenario.units)}`;
 }
 
 /** The chart's legend for a file: the layers the hyetograph draws (data-layer marks them), in the method's words. */

@@ -15,6 +15,7 @@ import { dischargeToDisplay, dischargeUnitText } from '../observed/discharge';
 import { displayUnit, toDisplay, unitText } from '../units';
 import { methodAndCatchmentNotes } from './bar-table-csv';
 import { csvFile, csvNote, csvRow, noteNumber as note, type CsvCell } from './csv';
+import { scenarioTitle } from '../../scenario/label-text';
 
 /** "Lag = 0.75 h; peak rate factor = 484": a transform's parameters for notes and the report. */
 export function transformParametersText(transform: Transform, format: (x: number) => string = note): string {
@@ -59,7 +60,7 @@ export function hydrographCsv({
   const q = dischargeUnitText(units);
   const startMs = scenario.storm.startIso === undefined ? null : wallClockMs(scenario.storm.startIso);
   const lines: string[] = [
-    csvNote(`Raincut runoff hydrograph: ${scenario.name}`),
+    csvNote(`Raincut runoff hydrograph: ${scenarioTitle(scenario.name)}`),
     csvNote(`Caution: ${CAUTION_TEXT}`),
     // The discharge rests on the excess (the loss method) and the area: a file read alone must name both.
     ...methodAndCatchmentNotes(scenario, method, areaUnit),

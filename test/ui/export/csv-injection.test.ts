@@ -109,7 +109,9 @@ describe('the bar table CSV against injection', { timeout: 30_000 }, () => {
         for (const row of rows) for (const cell of row) expect(cell).not.toMatch(FORMULA_START);
         // Line breaks in names become spaces in a note (a note stays on its line).
         const oneLine = (s: string) => s.replace(/[\r\n]+/g, ' ');
-        expect(notes[0]).toBe(`Raincut bar table: ${oneLine(scenarioName)}`);
+        // A name of white space only is titled "Unnamed scenario".
+        const title = /^\s*$/.test(scenarioName) ? 'Unnamed scenario' : oneLine(scenarioName);
+        expect(notes[0]).toBe(`Raincut bar table: ${title}`);
         if (catchmentName !== '') expect(notes).toContain(`Catchment: ${oneLine(catchmentName)}; area not given`);
         expect(bars.map((r) => Number(r['Rainfall depth (mm)']))).toEqual(FOUR_BARS.storm.depthsMm);
         expect(bars.map((r) => Number(r['Duration (min)']) / 60)).toEqual(FOUR_BARS.storm.durationsH);

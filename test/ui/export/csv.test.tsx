@@ -171,6 +171,13 @@ describe('bar table CSV', () => {
     expect(parse(text).data.map((r) => Number(r['Rainfall depth (mm)']))).toEqual(odd.storm.depthsMm);
   });
 
+  it('a scenario with a blank name is titled "Unnamed scenario", not left at a colon', () => {
+    const blank: Scenario = { ...FOUR_BARS, name: '  ' };
+    const result = computeLosses(blank.storm, blank.method);
+    const text = barTableCsv({ scenario: blank, method: blank.method, result, volumeM3: null });
+    expect(text.split('\r\n')[0]).toBe('\ufeff#,"Raincut bar table: Unnamed scenario"');
+  });
+
   it('note lines carry no thousands commas, so a spreadsheet keeps each number in one cell', () => {
     const big: Scenario = { ...FOUR_BARS, catchment: { name: 'Wide plain (invented)', areaM2: 2.5e9 } };
     const result = computeLosses(big.storm, big.method);
