@@ -11,7 +11,7 @@ import { displayUnit, paramToDisplay, paramUnitText, toDisplay, unitText, type Q
 import { fittedCellText } from '../results/fit-words';
 import { dischargeText, dischargeToDisplay, dischargeUnitText } from '../observed/discharge';
 import { StaticHydrograph, staticHydrographFrame, visibleEndH } from '../observed/StaticHydrograph';
-import { hoursMinutes, peakWhenText } from '../results/hours-minutes';
+import { hoursMinutes, NO_RUNOFF_TEXT, peakWhenText } from '../results/hours-minutes';
 import { commonFrames } from './common-frame';
 import { difference, type Difference } from './difference';
 import { MAX_PINS } from '../../store/pin-board';
@@ -58,7 +58,7 @@ function hydrographRows(units: UnitSystem): Row[] {
         t.hydrograph
           ? t.hydrograph.peakM3s > 0
             ? { text: `${hoursMinutes(t.hydrograph.timeOfPeakH)} h:mm`, value: t.hydrograph.timeOfPeakH }
-            : { text: '— (no direct runoff)', value: null }
+            : { text: `— (${NO_RUNOFF_TEXT})`, value: null }
           : { text: '—', value: null },
       unit: 'h',
     },

@@ -16,6 +16,7 @@ import { displayUnit, toDisplay, unitText } from '../units';
 import { methodAndCatchmentNotes } from './bar-table-csv';
 import { csvFile, csvNote, csvRow, noteNumber as note, type CsvCell } from './csv';
 import { scenarioTitle } from '../../scenario/label-text';
+import { NO_RUNOFF_TEXT } from '../results/hours-minutes';
 
 /** "Lag = 0.75 h; peak rate factor = 484": a transform's parameters for notes and the report. */
 export function transformParametersText(transform: Transform, format: (x: number) => string = note): string {
@@ -67,7 +68,9 @@ export function hydrographCsv({
     csvNote(`Unit hydrograph: ${TRANSFORMS[transform.kind].label}; ${transformParametersText(transform)}`),
     csvNote(
       `Peak discharge ${note(dischargeToDisplay(hydrograph.peakM3s, units))} ${q} ` +
-        (hydrograph.peakM3s > 0 ? `at ${note(hydrograph.timeOfPeakH)} h after the storm start` : '(no direct runoff)') +
+        (hydrograph.peakM3s > 0
+          ? `at ${note(hydrograph.timeOfPeakH)} h after the storm start`
+          : `(${NO_RUNOFF_TEXT})`) +
         `; direct runoff volume ${note(toDisplay('volume', hydrograph.volumeM3, units))} ` +
         unitText(displayUnit('volume', units)),
     ),

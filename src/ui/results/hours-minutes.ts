@@ -11,8 +11,11 @@ export function hoursMinutes(hours: number, signed = false): string {
   return `${hours < 0 ? '−' : '+'}${text}`;
 }
 
+/** What is said of a hydrograph with no flow, wherever its peak would be written (screen, comparison, report, CSV). */
+export const NO_RUNOFF_TEXT = 'no direct runoff';
+
 /** What a hydrograph with no flow shows for its time to peak: it has no peak (the core puts it at 0 h). */
-const NO_PEAK_TEXT = 'none: no direct runoff';
+const NO_PEAK_TEXT = `none: ${NO_RUNOFF_TEXT}`;
 
 /**
  * When a computed hydrograph peaks, as "2:20 after the storm start"; one with
@@ -27,10 +30,10 @@ export function peakTimeText(h: { readonly peakM3s: number; readonly timeOfPeakH
 export function peakAtText(h: { readonly peakM3s: number; readonly timeOfPeakH: number }, discharge: string): string {
   return h.peakM3s > 0
     ? `${discharge} at ${hoursMinutes(h.timeOfPeakH)} after the storm start`
-    : `${discharge} (no direct runoff)`;
+    : `${discharge} (${NO_RUNOFF_TEXT})`;
 }
 
 /** For a chart's name after its peak discharge: "3:00 after the storm start", or "(no direct runoff)". */
 export function peakWhenText(h: { readonly peakM3s: number; readonly timeOfPeakH: number }): string {
-  return h.peakM3s > 0 ? `${hoursMinutes(h.timeOfPeakH)} after the storm start` : '(no direct runoff)';
+  return h.peakM3s > 0 ? `${hoursMinutes(h.timeOfPeakH)} after the storm start` : `(${NO_RUNOFF_TEXT})`;
 }
